@@ -1,0 +1,257 @@
+//! Band integrals of the Planck function: the fraction of blackbody emission, band radiance
+//! and band photon radiance between two wavelengths or frequencies, and the temperature from a
+//! band radiance.
+//!
+//! Method: with t = hc/(λkT) the band integral is ∫ t³/(eᵗ−1) dt (photon: t²) between the two
+//! band edges. Above t = 2 the tail integral ∫ₓ^∞ is summed from its convergent series
+//! Σₙ e^(−nx)(x³/n + 3x²/n² + 6x/n³ + 6/n⁴) (Chang & Rhee 1984, Int. Commun. Heat Mass
+//! Transfer 11, 451; Widger & Woodall 1976, Bull. Am. Meteorol. Soc. 57, 1217); below it the
+//! head integral ∫₀ˣ from its power series in Bernoulli numbers,
+//! Σₖ Bₖ x^(k+3)/(k!(k+3)) (from t/(eᵗ−1) = Σ Bₖ tᵏ/k!, convergent for x < 2π). Each piece is
+//! used where it has no cancellation, so the fraction is good to about 1e-16 absolute and the
+//! band radiance to about 1e-15 relative away from very narrow bands.
+
+use super::kernel::{K3, K4, PI4_OVER_15, TWO_ZETA3, invert_increasing, x_frequency, x_wavelength};
+use crate::check::{non_negative, positive};
+use crate::{Error, Real, Result};
+
+const SWITCH: f64 = 2.0;
+
+/// Coefficients B₂ⱼ/((2j)!(2j+3)), j = 1…19 (exact rationals rounded; mpmath).
+const HEAD3: [f64; 19] = [
+    0.016_666_666_666_666_666,
+    -0.000_198_412_698_412_698_4,
+    3.674_309_229_864_785_5e-6,
+    -7.515_632_515_632_516e-8,
+    1.605_904_383_682_161_5e-9,
+    -3.522_793_425_791_662e-11,
+    7.872_080_312_167_458e-13,
+    -1.784_042_261_222_412e-14,
+    4.088_600_979_179_926e-16,
+    -9.455_950_863_295_921e-18,
+    2.203_601_131_344_092e-19,
+    -5.168_320_254_004_638_5e-21,
+    1.218_864_496_423_954_2e-22,
+    -2.888_231_428_076_628e-24,
+    6.872_583_188_902_07e-26,
+    -1.641_368_762_534_915e-27,
+    3.932_898_582_742_878_4e-29,
+    -9.451_269_078_629_001e-31,
+    2.277_252_257_828_059_7e-32,
+];
+/// Coefficients B₂ⱼ/((2j)!(2j+2)), j = 1…19.
+const HEAD2: [f64; 19] = [
+    0.020_833_333_333_333_332,
+    -0.000_231_481_481_481_481_5,
+    4.133_597_883_597_884e-6,
+    -8.267_195_767_195_767e-8,
+    1.739_729_748_989_008_3e-9,
+    -3.774_421_527_633_924e-11,
+    8.364_085_331_677_924e-13,
+    -1.883_155_720_179_212_6e-14,
+    4.293_031_028_138_922e-16,
+    -9.885_766_811_627_554e-18,
+    2.295_417_845_150_095_6e-19,
+    -5.367_101_802_235_586e-21,
+    1.262_395_371_296_238_4e-22,
+    -2.984_505_809_012_515_6e-24,
+    7.087_351_413_555_259e-26,
+    -1.689_644_314_374_177e-27,
+    4.042_145_765_596_847e-29,
+    -9.699_986_685_961_343e-31,
+    2.334_183_564_273_761_2e-32,
+];
+
+fn horner<T: Real>(c: &[f64; 19], y: T) -> T {
+    let mut s = T::zero();
+    for &a in c.iter().rev() {
+        s = s * y + T::c(a);
+    }
+    s * y
+}
+
+/// ∫₀ˣ t^p/(eᵗ−1) dt for p = 3 or 2 and 0 ≤ x ≤ 2.
+fn head<T: Real>(p: u32, x: T) -> T {
+    let y = x * x;
+    if p == 3 {
+        y * x * (T::c(1.0 / 3.0) - x * T::c(0.125) + horner(&HEAD3, y))
+    } else {
+        y * (T::c(0.5) - x * T::c(1.0 / 6.0) + horner(&HEAD2, y))
+    }
+}
+
+/// ∫ₓ^∞ t^p/(eᵗ−1) dt for p = 3 or 2 and x ≥ 2 (x = xh + xl to double length).
+fn tail<T: Real>(p: u32, xh: T, xl: T) -> T {
+    if !xh.is_finite() {
+        return T::zero();
+    }
+    let q = (-xh).exp() * (T::one() - xl);
+    if q == T::zero() {
+        return T::zero();
+    }
+    let x = xh;
+    let mut qn = T::one();
+    let mut sum = T::zero();
+    let mut n = T::zero();
+    for _ in 0..80 {
+        n = n + T::one();
+        qn = qn * q;
+        let r = T::one() / n;
+        let term = if p == 3 {
+            qn * r * (x * x * x + r * (T::c(3.0) * x * x + r * (T::c(6.0) * x + r * T::c(6.0))))
+        } else {
+            qn * r * (x * x + r * (T::c(2.0) * x + r * T::c(2.0)))
+        };
+        sum = sum + term;
+        if term <= T::epsilon() * T::c(0.25) * sum {
+            break;
+        }
+    }
+    sum
+}
+
+/// ∫ t^p/(eᵗ−1) dt over [a, b] with 0 ≤ a < b ≤ ∞, each end given to double length.
+pub(crate) fn planck_band_integral<T: Real>(p: u32, a: (T, T), b: (T, T)) -> T {
+    let s = T::c(SWITCH);
+    let total = if p == 3 { T::c(PI4_OVER_15) } else { T::c(TWO_ZETA3) };
+    if a.0 >= s {
+        tail(p, a.0, a.1) - tail(p, b.0, b.1)
+    } else if b.0 <= s {
+        head(p, b.0 + b.1) - head(p, a.0 + a.1)
+    } else {
+        (total - head(p, a.0 + a.1)) - tail(p, b.0, b.1)
+    }
+}
+
+/// t^p/(eᵗ−1)·t, the integrand times t, for the derivative of a band integral (0 at 0 and ∞).
+fn edge_term<T: Real>(p: u32, x: T) -> T {
+    if x == T::zero() || !x.is_finite() {
+        return T::zero();
+    }
+    let xp = if p == 3 { x * x * x } else { x * x };
+    super::kernel::planck_quotient(xp * x, x, T::zero())
+}
+
+/// Checks a wavelength or frequency band: lower finite ≥ 0, upper > lower (+∞ allowed).
+fn check_band<T: Real>(lower: T, upper: T) -> Result<(T, T)> {
+    let lower = non_negative(lower, 0)?;
+    if upper.is_nan() || upper == T::neg_infinity() {
+        return Err(Error::NonFinite(1));
+    }
+    if upper <= lower {
+        return Err(Error::EmptyInterval(0));
+    }
+    Ok((lower, upper))
+}
+
+/// The t-interval (small end, large end) of a wavelength band at temperature t.
+fn x_edges_wavelength<T: Real>(lower: T, upper: T, t: T) -> ((T, T), (T, T)) {
+    let inf = (T::infinity(), T::zero());
+    let zero = (T::zero(), T::zero());
+    let a = if upper.is_infinite() { zero } else { x_wavelength(upper, t) };
+    let b = if lower == T::zero() { inf } else { x_wavelength(lower, t) };
+    (a, b)
+}
+
+/// Fraction of the total blackbody radiance emitted between two wavelengths,
+/// F = ∫_{λ₁}^{λ₂} B_λ dλ / (σT⁴/π).
+///
+/// * `lower_m`: λ₁ in m, finite and ≥ 0 (0 means from the start of the spectrum).
+/// * `upper_m`: λ₂ in m, > λ₁; +∞ allowed (to the end of the spectrum).
+/// * `temperature_k`: K, finite and > 0.
+///
+/// Returns a number in [0, 1]. Errors: `NonFinite(i)`, `Negative(0)` for λ₁ < 0,
+/// `EmptyInterval(0)` for λ₂ ≤ λ₁, `NonPositive(2)` for T ≤ 0.
+///
+/// Accuracy: within 1e-15 absolute (`f64`) against mpmath quadrature; see the module docs.
+pub fn band_fraction_wavelength<T: Real>(lower_m: T, upper_m: T, temperature_k: T) -> Result<T> {
+    let (lo, up) = check_band(lower_m, upper_m)?;
+    let t = positive(temperature_k, 2)?;
+    let (a, b) = x_edges_wavelength(lo, up, t);
+    Ok(planck_band_integral(3, a, b) / T::c(PI4_OVER_15))
+}
+
+/// Band radiance between two wavelengths, L = ∫_{λ₁}^{λ₂} B_λ(λ, T) dλ.
+///
+/// * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
+/// * `temperature_k`: K, > 0.
+///
+/// Returns W m⁻² sr⁻¹. Errors as [`band_fraction_wavelength`].
+/// Accuracy: within max(1e-14·L, 1e-15·σT⁴/π) (`f64`) against mpmath quadrature.
+pub fn band_radiance_wavelength<T: Real>(lower_m: T, upper_m: T, temperature_k: T) -> Result<T> {
+    let (lo, up) = check_band(lower_m, upper_m)?;
+    let t = positive(temperature_k, 2)?;
+    Ok(band_radiance_wavelength_unchecked(lo, up, t))
+}
+
+fn band_radiance_wavelength_unchecked<T: Real>(lo: T, up: T, t: T) -> T {
+    let (a, b) = x_edges_wavelength(lo, up, t);
+    let t2 = t * t;
+    (T::c(K4) * (t2 * t2)) * planck_band_integral(3, a, b)
+}
+
+/// Band photon radiance between two wavelengths, ∫_{λ₁}^{λ₂} N_λ(λ, T) dλ.
+///
+/// * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
+/// * `temperature_k`: K, > 0.
+///
+/// Returns photons s⁻¹ m⁻² sr⁻¹. Errors as [`band_fraction_wavelength`].
+/// Accuracy: within max(1e-14·N, 1e-15·N_total) (`f64`) against mpmath quadrature.
+pub fn band_photon_radiance_wavelength<T: Real>(lower_m: T, upper_m: T, temperature_k: T) -> Result<T> {
+    let (lo, up) = check_band(lower_m, upper_m)?;
+    let t = positive(temperature_k, 2)?;
+    let (a, b) = x_edges_wavelength(lo, up, t);
+    Ok((T::c(K3) * (t * t * t)) * planck_band_integral(2, a, b))
+}
+
+/// Band radiance between two frequencies, L = ∫_{ν₁}^{ν₂} B_ν(ν, T) dν.
+///
+/// * `lower_hz`: ν₁ in Hz, finite and ≥ 0; `upper_hz`: ν₂ > ν₁, +∞ allowed.
+/// * `temperature_k`: K, > 0.
+///
+/// Returns W m⁻² sr⁻¹. Errors as [`band_fraction_wavelength`].
+/// Accuracy: within max(1e-14·L, 1e-15·σT⁴/π) (`f64`) against mpmath quadrature.
+pub fn band_radiance_frequency<T: Real>(lower_hz: T, upper_hz: T, temperature_k: T) -> Result<T> {
+    let (lo, up) = check_band(lower_hz, upper_hz)?;
+    let t = positive(temperature_k, 2)?;
+    let a = if lo == T::zero() { (T::zero(), T::zero()) } else { x_frequency(lo, t) };
+    let b = if up.is_infinite() { (T::infinity(), T::zero()) } else { x_frequency(up, t) };
+    let t2 = t * t;
+    Ok((T::c(K4) * (t2 * t2)) * planck_band_integral(3, a, b))
+}
+
+/// Temperature of the blackbody whose band radiance between two wavelengths equals the given
+/// value: the inverse in T of [`band_radiance_wavelength`].
+///
+/// * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
+/// * `radiance`: band radiance in W m⁻² sr⁻¹, finite and > 0.
+///
+/// Returns K. Errors as [`band_fraction_wavelength`], `NonPositive(2)` for radiance ≤ 0,
+/// `OutOfDomain(2)` when no temperature between about 1e-120 and 1e120 K reproduces it,
+/// `NoConvergence` (not seen in testing).
+///
+/// Method: safeguarded Newton on ln L(T) with the exact derivative
+/// dL/dT = (4L + K T⁴ (x_a f(x_a) − x_b f(x_b)))/T, f(t) = t³/(eᵗ−1), started from the
+/// brightness temperature of the mean spectral radiance at the band centre.
+/// Accuracy: round trip within 1e-14 relative (`f64`) against mpmath root finding.
+pub fn temperature_from_band_radiance_wavelength<T: Real>(lower_m: T, upper_m: T, radiance: T) -> Result<T> {
+    let (lo, up) = check_band(lower_m, upper_m)?;
+    let l = positive(radiance, 2)?;
+    let guess = if lo > T::zero() && up.is_finite() {
+        let centre = T::c(0.5) * (lo + up);
+        super::inverse::brightness_temperature_wavelength_unchecked(centre, l / (up - lo))
+    } else {
+        // total radiance σT⁴/π
+        (l * T::c(core::f64::consts::PI / crate::constants::STEFAN_BOLTZMANN)).sqrt().sqrt()
+    };
+    let f = |t: T| {
+        let (a, b) = x_edges_wavelength(lo, up, t);
+        let t2 = t * t;
+        let k4t4 = T::c(K4) * (t2 * t2);
+        let v = k4t4 * planck_band_integral(3, a, b);
+        let edge = edge_term(3, a.0) - edge_term(3, b.0);
+        let dv = (T::c(4.0) * v + k4t4 * edge) / t;
+        (v, dv)
+    };
+    invert_increasing(f, l, guess, 2)
+}

@@ -1,0 +1,102 @@
+//! Hemispherical exitance (Stefan-Boltzmann law and its photon analogue) and the peaks of the
+//! Planck function in every form, with their inverses.
+//!
+//! The peak positions follow from the roots of x = n(1 − e^−x): n = 5 for B_λ, 3 for B_ν and
+//! B_ṽ, 4 for N_λ (also the peak of λB_λ), 2 for N_ν (Wien 1893; the roots as in any
+//! radiometry text). The roots and the resulting displacement constants are computed with
+//! mpmath at 40 digits and rounded once (`tests/reference/blackbody_vectors.py` re-derives
+//! them; the core's root finder reproduces the roots in a unit test).
+
+use crate::check::positive;
+use crate::constants as k;
+use crate::math::dd;
+use crate::{Real, Result};
+
+/// Radiant exitance of a blackbody, M = σT⁴ (Stefan 1879, Boltzmann 1884).
+///
+/// * `temperature_k`: K, finite and > 0.
+///
+/// Returns W m⁻². Errors: `NonFinite(0)`, `NonPositive(0)`.
+/// Accuracy: ≤ 2 ulp (`f64`) against mpmath (T⁴ is formed to double length).
+pub fn radiant_exitance<T: Real>(temperature_k: T) -> Result<T> {
+    let t = positive(temperature_k, 0)?;
+    let (h2, l2) = dd::two_prod(t, t);
+    let (h4, l4) = dd::mul_dd_dd(h2, l2, h2, l2);
+    Ok(T::c(k::STEFAN_BOLTZMANN) * h4 + T::c(k::STEFAN_BOLTZMANN) * l4)
+}
+
+/// Photon exitance of a blackbody, M_p = 4πζ(3)k³T³/(h³c²).
+///
+/// * `temperature_k`: K, finite and > 0.
+///
+/// Returns photons s⁻¹ m⁻². Errors: `NonFinite(0)`, `NonPositive(0)`.
+/// Accuracy: ≤ 2 ulp (`f64`) against mpmath.
+pub fn photon_exitance<T: Real>(temperature_k: T) -> Result<T> {
+    let t = positive(temperature_k, 0)?;
+    let (h2, l2) = dd::two_prod(t, t);
+    let (h3, l3) = dd::mul_dd_d(h2, l2, t);
+    Ok(T::c(k::PHOTON_STEFAN_BOLTZMANN) * h3 + T::c(k::PHOTON_STEFAN_BOLTZMANN) * l3)
+}
+
+/// Wavelength of the maximum of B_λ, λ_max = b/T with b = c₂/x₅ (Wien's displacement law).
+///
+/// * `temperature_k`: K, > 0. Returns m. Errors: `NonFinite(0)`, `NonPositive(0)`.
+///
+/// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
+pub fn peak_wavelength<T: Real>(temperature_k: T) -> Result<T> {
+    Ok(T::c(k::WIEN_WAVELENGTH) / positive(temperature_k, 0)?)
+}
+
+/// Frequency of the maximum of B_ν, ν_max = x₃kT/h.
+///
+/// * `temperature_k`: K, > 0. Returns Hz. Errors: `NonFinite(0)`, `NonPositive(0)`.
+///
+/// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
+pub fn peak_frequency<T: Real>(temperature_k: T) -> Result<T> {
+    Ok(T::c(k::WIEN_FREQUENCY) * positive(temperature_k, 0)?)
+}
+
+/// Wavenumber of the maximum of B_ṽ, ṽ_max = x₃T/c₂ (same x as the frequency form).
+///
+/// * `temperature_k`: K, > 0. Returns m⁻¹. Errors: `NonFinite(0)`, `NonPositive(0)`.
+///
+/// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
+pub fn peak_wavenumber<T: Real>(temperature_k: T) -> Result<T> {
+    Ok(T::c(k::WIEN_WAVENUMBER) * positive(temperature_k, 0)?)
+}
+
+/// Wavelength of the maximum of the photon radiance N_λ (and of λB_λ), c₂/(x₄T).
+///
+/// * `temperature_k`: K, > 0. Returns m. Errors: `NonFinite(0)`, `NonPositive(0)`.
+///
+/// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
+pub fn photon_peak_wavelength<T: Real>(temperature_k: T) -> Result<T> {
+    Ok(T::c(k::WIEN_PHOTON_WAVELENGTH) / positive(temperature_k, 0)?)
+}
+
+/// Frequency of the maximum of the photon radiance N_ν, x₂kT/h.
+///
+/// * `temperature_k`: K, > 0. Returns Hz. Errors: `NonFinite(0)`, `NonPositive(0)`.
+///
+/// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
+pub fn photon_peak_frequency<T: Real>(temperature_k: T) -> Result<T> {
+    Ok(T::c(k::WIEN_PHOTON_FREQUENCY) * positive(temperature_k, 0)?)
+}
+
+/// Temperature whose B_λ peaks at the given wavelength, T = b/λ_max.
+///
+/// * `wavelength_m`: m, > 0. Returns K. Errors: `NonFinite(0)`, `NonPositive(0)`.
+///
+/// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
+pub fn temperature_from_peak_wavelength<T: Real>(wavelength_m: T) -> Result<T> {
+    Ok(T::c(k::WIEN_WAVELENGTH) / positive(wavelength_m, 0)?)
+}
+
+/// Temperature whose B_ν peaks at the given frequency, T = hν_max/(x₃k).
+///
+/// * `frequency_hz`: Hz, > 0. Returns K. Errors: `NonFinite(0)`, `NonPositive(0)`.
+///
+/// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
+pub fn temperature_from_peak_frequency<T: Real>(frequency_hz: T) -> Result<T> {
+    Ok(T::c(k::WIEN_FREQUENCY_INVERSE) * positive(frequency_hz, 0)?)
+}

@@ -1,0 +1,175 @@
+//! Shared numerical pieces of the Planck function (no validation here).
+
+use crate::Real;
+use crate::constants as k;
+use crate::math::dd;
+
+/// 2^-55: exact scaling that keeps ν³-type products inside the `f32` range.
+pub(crate) const SCALE_55: f64 = 2.775_557_561_562_891_4e-17;
+/// (2h/c²)·2^110, so that (ν·2^-55)²·(ν·this) = (2h/c²)ν³ with exact scalings.
+pub(crate) const TWO_H_OVER_C2_SCALED: f64 = 1.914_009_734_699_457_5e-17;
+/// 2/c², s² m⁻².
+pub(crate) const TWO_OVER_C2: f64 = 2.225_300_112_107_237e-17;
+/// 2c, m s⁻¹.
+pub(crate) const TWO_C: f64 = 599_584_916.0;
+/// 2k⁴/(h³c²), W m⁻² sr⁻¹ K⁻⁴: radiance per T⁴ per unit of ∫ t³/(eᵗ−1) dt.
+pub(crate) const K4: f64 = 2.779_416_505_426_625_4e-9;
+/// 2k³/(h³c²), photons s⁻¹ m⁻² sr⁻¹ K⁻³ per unit of ∫ t²/(eᵗ−1) dt.
+pub(crate) const K3: f64 = 201_312_318_005_997.56;
+/// π⁴/15 = ∫₀^∞ t³/(eᵗ−1) dt.
+pub(crate) const PI4_OVER_15: f64 = 6.493_939_402_266_829;
+/// 2ζ(3) = ∫₀^∞ t²/(eᵗ−1) dt.
+pub(crate) const TWO_ZETA3: f64 = 2.404_113_806_319_188_5;
+
+const LN2_HI: f64 = core::f64::consts::LN_2;
+const LN2_LO: f64 = 2.319_046_813_846_299_6e-17;
+
+/// x = c₂/(λT) as a double-length pair.
+#[inline(always)]
+pub(crate) fn x_wavelength<T: Real>(wavelength: T, temperature: T) -> (T, T) {
+    let (ch, cl) = T::c2(k::SECOND_RADIATION, k::SECOND_RADIATION_LO);
+    let (ph, pl) = dd::two_prod(wavelength, temperature);
+    dd::div_dd_dd(ch, cl, ph, pl)
+}
+
+/// x = (h/k)·ν/T as a double-length pair.
+#[inline(always)]
+pub(crate) fn x_frequency<T: Real>(frequency: T, temperature: T) -> (T, T) {
+    let (hh, hl) = T::c2(k::PLANCK_OVER_BOLTZMANN, k::PLANCK_OVER_BOLTZMANN_LO);
+    let (qh, ql) = dd::div_d_d(frequency, temperature);
+    dd::mul_dd_dd(hh, hl, qh, ql)
+}
+
+/// x = c₂·ṽ/T as a double-length pair.
+#[inline(always)]
+pub(crate) fn x_wavenumber<T: Real>(wavenumber: T, temperature: T) -> (T, T) {
+    let (ch, cl) = T::c2(k::SECOND_RADIATION, k::SECOND_RADIATION_LO);
+    let (qh, ql) = dd::div_d_d(wavenumber, temperature);
+    dd::mul_dd_dd(ch, cl, qh, ql)
+}
+
+/// e^−(xh+xl)·p computed without overflow or premature underflow, for xh ≥ 0.
+///
+/// Splits x = (x − m ln 2) + m ln 2 with the reduced exponent kept to double length, so the
+/// only inexact step is one `exp` of an exactly known argument; the 2^−m scaling is exact
+/// until the result itself becomes subnormal.
+#[inline]
+pub(crate) fn scaled_exp_neg<T: Real>(p: T, xh: T, xl: T) -> T {
+    if xh > T::LN_MAX + T::LN_MIN_SUBNORMAL_NEG + T::one() {
+        // p ≤ largest float = e^LN_MAX, so p·e^−x is below the smallest subnormal.
+        return T::zero();
+    }
+    let half_range = T::c(0.5) * T::LN_MAX;
+    if xh <= half_range {
+        return p * (-xh).exp() * (T::one() - xl);
+    }
+    let (lh, ll) = T::c2(LN2_HI, LN2_LO);
+    // m chosen so that x − m ln2 ≈ half_range: e^−reduced is a normal number.
+    let m = ((xh - half_range) / lh).floor();
+    let (ph, pl) = dd::two_prod(m, lh);
+    let (sh, sl) = dd::two_sum(xh, -ph);
+    let rl = ((sl - pl) - m * ll) + xl;
+    let mut r = p * (-sh).exp() * (T::one() - rl);
+    // multiply by 2^−m in exact power-of-two chunks
+    let chunk = T::c(8.673_617_379_884_035e-19); // 2^-60
+    let mut left = m;
+    let sixty = T::c(60.0);
+    while left >= sixty {
+        r = r * chunk;
+        left = left - sixty;
+        if r == T::zero() {
+            return r;
+        }
+    }
+    // 2^-left for 0 ≤ left < 60, built from the exact f64 power
+    let left_f64 = left.to_f64_exact();
+    r * T::c(libm::exp2(-left_f64))
+}
+
+/// p / (e^x − 1) for x = xh + xl ≥ 0 given to double length: the Planck occupation factor
+/// times a prefactor, accurate from x ≈ 1e-10 (Rayleigh-Jeans) to the far Wien tail.
+#[inline]
+pub(crate) fn planck_quotient<T: Real>(p: T, xh: T, xl: T) -> T {
+    if xh < T::LN_MAX - T::one() {
+        let em = xh.exp_m1();
+        // expm1(xh + xl) ≈ expm1(xh) + e^xh·xl (xl ≤ ulp(xh)/2)
+        let d = em + (em + T::one()) * xl;
+        p / d
+    } else {
+        // e^x − 1 = e^x (1 − e^−x), and e^−x < 1e-300 here: the correction is below an ulp.
+        scaled_exp_neg(p, xh, xl)
+    }
+}
+
+/// −expm1(−x) = 1 − e^−x, for the Planck derivative x eˣ/(eˣ − 1) = x / (1 − e^−x).
+#[inline(always)]
+pub(crate) fn one_minus_exp_neg<T: Real>(x: T) -> T {
+    -((-x).exp_m1())
+}
+
+/// λ⁵ by products (three roundings).
+#[inline(always)]
+pub(crate) fn pow5<T: Real>(x: T) -> T {
+    let x2 = x * x;
+    x2 * x2 * x
+}
+
+/// (2h/c²)·ν³ with exact power-of-two scalings, so that the `f32` evaluation does not
+/// overflow although 2h/c² itself is below the `f32` range.
+#[inline(always)]
+pub(crate) fn two_h_nu3_over_c2<T: Real>(nu: T) -> T {
+    let s = T::c(SCALE_55);
+    let a = nu * s;
+    (a * a) * (nu * T::c(TWO_H_OVER_C2_SCALED))
+}
+
+/// Solves value(T) = target for T > 0 where value is increasing in T and `f` returns
+/// (value, d value/dT). Works on ln value, so Newton's step is well scaled over the many
+/// decades a radiance spans; the bracket is grown by factors of 2 from `guess` and the root is
+/// polished by the shared safeguarded Newton iteration to about one ulp.
+pub(crate) fn invert_increasing<T: Real, F: FnMut(T) -> (T, T)>(
+    mut f: F,
+    target: T,
+    guess: T,
+    domain_arg: u8,
+) -> crate::Result<T> {
+    use crate::Error;
+    let ln_target = target.ln();
+    let mut g = |t: T| {
+        let (v, dv) = f(t);
+        (v.ln() - ln_target, dv / v)
+    };
+    let guess = if guess.is_finite() && guess > T::zero() { guess } else { T::one() };
+    let two = T::c(2.0);
+    let half = T::c(0.5);
+    let (mut lo, mut hi) = (guess, guess);
+    let g0 = g(guess).0;
+    if g0.is_nan() {
+        return Err(Error::NoConvergence);
+    }
+    if g0 == T::zero() {
+        return Ok(guess);
+    }
+    if g0 > T::zero() {
+        let mut n = 0;
+        while g(lo).0 > T::zero() {
+            hi = lo;
+            lo = lo * half;
+            n += 1;
+            if n > 400 || lo == T::zero() {
+                return Err(Error::OutOfDomain(domain_arg));
+            }
+        }
+    } else {
+        let mut n = 0;
+        while g(hi).0 < T::zero() {
+            lo = hi;
+            hi = hi * two;
+            n += 1;
+            if n > 400 || !hi.is_finite() {
+                return Err(Error::OutOfDomain(domain_arg));
+            }
+        }
+    }
+    crate::math::roots::bracketed_newton(g, lo, hi, T::epsilon() * lo, 200)
+}

@@ -1,0 +1,62 @@
+//! The one error type of the core.
+
+/// What was wrong with a call. Small and `Copy`; the `u8` payload is the zero-based position
+/// of the offending argument in the function's parameter list, so every face can name it
+/// (C maps the kind to a status code, Python names the argument, value and array index).
+#[derive(Debug, Clone, Copy, PartialEq, Eq, thiserror::Error)]
+#[non_exhaustive]
+pub enum Error {
+    /// An argument is NaN or infinite.
+    #[error("argument {0} is not finite")]
+    NonFinite(u8),
+    /// An argument that must be strictly positive (temperature, wavelength, frequency,
+    /// radiance, reading span) is zero or negative.
+    #[error("argument {0} must be positive")]
+    NonPositive(u8),
+    /// An argument that must not be negative (redshift, spectral response) is negative.
+    #[error("argument {0} must not be negative")]
+    Negative(u8),
+    /// An interval whose lower bound (argument given) is not below its upper bound.
+    #[error("interval starting at argument {0} is empty: lower bound must be below upper bound")]
+    EmptyInterval(u8),
+    /// An array argument has fewer elements than the function needs.
+    #[error("array argument {0} is too short")]
+    ArrayTooShort(u8),
+    /// Two array arguments that must have the same length do not.
+    #[error("array argument {0} has a different length from the first array")]
+    LengthMismatch(u8),
+    /// An array argument that must be strictly increasing is not.
+    #[error("array argument {0} is not strictly increasing")]
+    NotIncreasing(u8),
+    /// A calibration whose two loads (or two readings) coincide, so no gain can be formed.
+    #[error("degenerate calibration: the two loads or the two readings coincide (argument {0})")]
+    DegenerateCalibration(u8),
+    /// A value outside the documented domain of the function (for example a radiance ratio
+    /// no blackbody can produce).
+    #[error("argument {0} is outside the domain of the function")]
+    OutOfDomain(u8),
+    /// An iteration did not converge within its budget.
+    #[error("no convergence")]
+    NoConvergence,
+}
+
+impl Error {
+    /// Zero-based position of the argument the error refers to, when it names one.
+    pub const fn argument(self) -> Option<u8> {
+        match self {
+            Error::NonFinite(a)
+            | Error::NonPositive(a)
+            | Error::Negative(a)
+            | Error::EmptyInterval(a)
+            | Error::ArrayTooShort(a)
+            | Error::LengthMismatch(a)
+            | Error::NotIncreasing(a)
+            | Error::DegenerateCalibration(a)
+            | Error::OutOfDomain(a) => Some(a),
+            Error::NoConvergence => None,
+        }
+    }
+}
+
+/// The result type of the core.
+pub type Result<T> = core::result::Result<T, Error>;
