@@ -6,19 +6,31 @@ use crate::{Error, Real, Result};
 /// The value when finite, else `NonFinite(arg)`.
 #[inline(always)]
 pub(crate) fn finite<T: Real>(x: T, arg: u8) -> Result<T> {
-    if x.is_finite() { Ok(x) } else { Err(Error::NonFinite(arg)) }
+    if x.is_finite() {
+        Ok(x)
+    } else {
+        Err(Error::NonFinite(arg))
+    }
 }
 
 /// The value when finite and strictly positive (−0 and +0 are refused).
 #[inline(always)]
 pub(crate) fn positive<T: Real>(x: T, arg: u8) -> Result<T> {
     let x = finite(x, arg)?;
-    if x > T::zero() { Ok(x) } else { Err(Error::NonPositive(arg)) }
+    if x > T::zero() {
+        Ok(x)
+    } else {
+        Err(Error::NonPositive(arg))
+    }
 }
 
 /// The value when finite and not negative (+0 and −0 accepted).
 #[inline(always)]
 pub(crate) fn non_negative<T: Real>(x: T, arg: u8) -> Result<T> {
     let x = finite(x, arg)?;
-    if x >= T::zero() { Ok(x) } else { Err(Error::Negative(arg)) }
+    if x >= T::zero() {
+        Ok(x)
+    } else {
+        Err(Error::Negative(arg))
+    }
 }

@@ -22,6 +22,16 @@
 #![no_std]
 #![forbid(unsafe_code)]
 #![deny(missing_docs)]
+// No panic can reach a caller: no unwrap, expect, panic or fallible indexing in the core.
+#![cfg_attr(
+    not(test),
+    deny(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::panic,
+        clippy::indexing_slicing
+    )
+)]
 // `!(x > 0)` is used on purpose: it is true for NaN, which must be refused too.
 #![allow(clippy::neg_cmp_op_on_partial_ord)]
 

@@ -79,7 +79,11 @@ pub fn two_load_calibration<T: Real>(
     if !gain.is_finite() || !offset.is_finite() {
         return Err(Error::DegenerateCalibration(1));
     }
-    Ok(TwoLoadCalibration { frequency_hz: nu, gain, offset })
+    Ok(TwoLoadCalibration {
+        frequency_hz: nu,
+        gain,
+        offset,
+    })
 }
 
 fn check_calibration<T: Real>(cal: &TwoLoadCalibration<T>) -> Result<()> {
@@ -103,7 +107,10 @@ fn check_calibration<T: Real>(cal: &TwoLoadCalibration<T>) -> Result<()> {
 /// for a calibration value that [`two_load_calibration`] cannot have produced.
 /// Accuracy: within 1e-13 relative (`f64`) against the exact line (mpmath) for readings
 /// between and near the loads.
-pub fn calibrated_brightness_temperature<T: Real>(calibration: &TwoLoadCalibration<T>, reading: T) -> Result<T> {
+pub fn calibrated_brightness_temperature<T: Real>(
+    calibration: &TwoLoadCalibration<T>,
+    reading: T,
+) -> Result<T> {
     check_calibration(calibration)?;
     let r = finite(reading, 1)?;
     Ok((r - calibration.offset) / calibration.gain)
@@ -119,7 +126,10 @@ pub fn calibrated_brightness_temperature<T: Real>(calibration: &TwoLoadCalibrati
 /// the reading corresponds to J ≤ 0 (no blackbody temperature gives it).
 /// Accuracy: within 1e-13 relative (`f64`) against mpmath for readings between and near the
 /// loads.
-pub fn calibrated_temperature<T: Real>(calibration: &TwoLoadCalibration<T>, reading: T) -> Result<T> {
+pub fn calibrated_temperature<T: Real>(
+    calibration: &TwoLoadCalibration<T>,
+    reading: T,
+) -> Result<T> {
     let j = calibrated_brightness_temperature(calibration, reading)?;
     if !(j > T::zero()) {
         return Err(Error::OutOfDomain(1));

@@ -7,7 +7,7 @@
 //! without the emissivity, calibration and procedure that the applicable standards, local codes
 //! and licensed practice require.
 
-use super::kernel::{two_h_nu3_over_c2, x_wavelength};
+use super::kernel::{ln1p_quotient, two_h_nu3_over_c2, x_wavelength};
 use crate::check::positive;
 use crate::constants as k;
 use crate::math::{dd, roots};
@@ -28,7 +28,10 @@ const SCALE_60: f64 = 8.673_617_379_884_035e-19;
 /// Accuracy: round trip with [`spectral_radiance_wavelength`](super::spectral_radiance_wavelength)
 /// within 1e-14 relative (`f64`) against mpmath.
 /// Reference: Planck's law solved for T (closed form).
-pub fn brightness_temperature_wavelength<T: Real>(wavelength_m: T, spectral_radiance: T) -> Result<T> {
+pub fn brightness_temperature_wavelength<T: Real>(
+    wavelength_m: T,
+    spectral_radiance: T,
+) -> Result<T> {
     let l = positive(wavelength_m, 0)?;
     let b = positive(spectral_radiance, 1)?;
     Ok(brightness_temperature_wavelength_unchecked(l, b))
@@ -36,10 +39,11 @@ pub fn brightness_temperature_wavelength<T: Real>(wavelength_m: T, spectral_radi
 
 #[inline(always)]
 pub(crate) fn brightness_temperature_wavelength_unchecked<T: Real>(l: T, b: T) -> T {
-    let y = T::c(k::FIRST_RADIATION_RADIANCE) / (super::kernel::pow5(l) * b);
+    let a = T::c(k::FIRST_RADIATION_RADIANCE) / super::kernel::pow5(l);
+    let ln_a = || T::c(k::FIRST_RADIATION_RADIANCE).ln() - T::c(5.0) * l.ln();
     let (ch, cl) = T::c2(k::SECOND_RADIATION, k::SECOND_RADIATION_LO);
     let (qh, ql) = dd::div_dd_dd(ch, cl, l, T::zero());
-    (qh + ql) / y.ln_1p()
+    (qh + ql) / ln1p_quotient(a, ln_a, b)
 }
 
 /// Brightness temperature at a frequency: T = (hν/k) / ln(1 + 2hν³/(c² L)).
@@ -49,13 +53,20 @@ pub(crate) fn brightness_temperature_wavelength_unchecked<T: Real>(l: T, b: T) -
 ///
 /// Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
 /// Accuracy: round trip within 1e-14 relative (`f64`) against mpmath.
-pub fn brightness_temperature_frequency<T: Real>(frequency_hz: T, spectral_radiance: T) -> Result<T> {
+pub fn brightness_temperature_frequency<T: Real>(
+    frequency_hz: T,
+    spectral_radiance: T,
+) -> Result<T> {
     let nu = positive(frequency_hz, 0)?;
     let b = positive(spectral_radiance, 1)?;
-    let y = two_h_nu3_over_c2(nu) / b;
+    let a = two_h_nu3_over_c2(nu);
+    let ln_a = || {
+        let s = nu * T::c(super::kernel::SCALE_55);
+        T::c(2.0) * s.ln() + (nu * T::c(super::kernel::TWO_H_OVER_C2_SCALED)).ln()
+    };
     let (hh, hl) = T::c2(k::PLANCK_OVER_BOLTZMANN, k::PLANCK_OVER_BOLTZMANN_LO);
     let (th, tl) = dd::mul_dd_d(hh, hl, nu);
-    Ok((th + tl) / y.ln_1p())
+    Ok((th + tl) / ln1p_quotient(a, ln_a, b))
 }
 
 /// Rayleigh-Jeans temperature: T_RJ = c² L / (2kν²), the temperature the long-wavelength limit
@@ -81,7 +92,11 @@ pub fn rayleigh_jeans_temperature<T: Real>(frequency_hz: T, spectral_radiance: T
 
 /// ln(eˣ − 1) without overflow.
 fn ln_expm1<T: Real>(x: T) -> T {
-    if x > T::c(20.0) { x + (-(-x).exp()).ln_1p() } else { x.exp_m1().ln() }
+    if x > T::c(20.0) {
+        x + (-(-x).exp()).ln_1p()
+    } else {
+        x.exp_m1().ln()
+    }
 }
 
 /// Two-colour (ratio) temperature: the T at which ε₁B_λ(λ₁,T) / (ε₂B_λ(λ₂,T)) equals the
@@ -119,7 +134,9 @@ pub fn ratio_temperature<T: Real>(
     let four_ln = T::c(4.0) * (l2 / l1).ln();
     // limits: u → 0 gives 4 ln(λ2/λ1); u → ∞ gives −∞ (λ1 < λ2) or +∞ (λ1 > λ2)
     let increasing_in_u_is_down = l1 < l2; // ln ρ decreases with u when λ1 < λ2
-    if (increasing_in_u_is_down && target >= four_ln) || (!increasing_in_u_is_down && target <= four_ln) {
+    if (increasing_in_u_is_down && target >= four_ln)
+        || (!increasing_in_u_is_down && target <= four_ln)
+    {
         return Err(Error::OutOfDomain(2));
     }
     let c2 = T::c(k::SECOND_RADIATION);
@@ -128,7 +145,8 @@ pub fn ratio_temperature<T: Real>(
         let (x1, _) = x_wavelength(l1, t);
         let (x2, _) = x_wavelength(l2, t);
         let v = five_ln + ln_expm1(x2) - ln_expm1(x1) - target;
-        let d = (c2 / l2) / super::kernel::one_minus_exp_neg(x2) - (c2 / l1) / super::kernel::one_minus_exp_neg(x1);
+        let d = (c2 / l2) / super::kernel::one_minus_exp_neg(x2)
+            - (c2 / l1) / super::kernel::one_minus_exp_neg(x1);
         (v, d)
     };
     // Wien-approximation start: ln ρ ≈ 5 ln(λ2/λ1) − c2 u (1/λ1 − 1/λ2)
@@ -168,6 +186,6 @@ pub fn ratio_temperature<T: Real>(
             }
         }
     }
-    let u = roots::bracketed_newton(g, lo, hi, T::epsilon() * lo * T::c(0.5), 200)?;
+    let u = roots::bracketed_newton(g, lo, hi, T::c(2.0) * T::epsilon() * lo, 200)?;
     Ok(T::one() / u)
 }

@@ -139,7 +139,11 @@ pub(crate) fn invert_increasing<T: Real, F: FnMut(T) -> (T, T)>(
         let (v, dv) = f(t);
         (v.ln() - ln_target, dv / v)
     };
-    let guess = if guess.is_finite() && guess > T::zero() { guess } else { T::one() };
+    let guess = if guess.is_finite() && guess > T::zero() {
+        guess
+    } else {
+        T::one()
+    };
     let two = T::c(2.0);
     let half = T::c(0.5);
     let (mut lo, mut hi) = (guess, guess);
@@ -171,5 +175,25 @@ pub(crate) fn invert_increasing<T: Real, F: FnMut(T) -> (T, T)>(
             }
         }
     }
-    crate::math::roots::bracketed_newton(g, lo, hi, T::epsilon() * lo, 200)
+    crate::math::roots::bracketed_newton(g, lo, hi, T::c(2.0) * T::epsilon() * lo, 200)
+}
+
+/// ln(1 + a/b) for a, b > 0 without overflow or underflow of the quotient: the argument of the
+/// logarithm in every closed-form brightness temperature. `ln_a` is used when `a` itself is
+/// not a normal number (it is then ln of the exact a).
+#[inline]
+pub(crate) fn ln1p_quotient<T: Real>(a: T, ln_a: impl Fn() -> T, b: T) -> T {
+    let a_ok = a.is_finite() && a >= T::min_positive_value();
+    if a_ok && b >= T::min_positive_value() {
+        let q = a / b;
+        if q.is_finite() && q >= T::min_positive_value() && q < T::c(1e30) {
+            return q.ln_1p();
+        }
+    }
+    // ln(1 + a/b) = ln a − ln b + ln(1 + b/a) for a/b large (the only case left for b > 0 and a
+    // a normal number; a tiny quotient would need b far above any radiance)
+    let la = if a_ok { a.ln() } else { ln_a() };
+    let lb = b.ln();
+    let d = la - lb;
+    d + (-d).exp().ln_1p()
 }

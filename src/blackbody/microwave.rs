@@ -47,7 +47,10 @@ fn checked_x<T: Real>(frequency_hz: T, cmb_temperature_k: T) -> Result<(T, T)> {
 ///
 /// Returns a number in (0, 1). Errors: `NonFinite(i)`, `NonPositive(i)`.
 /// Accuracy: ≤ 8 ulp (`f64`) against mpmath.
-pub fn thermodynamic_to_rayleigh_jeans_factor<T: Real>(frequency_hz: T, cmb_temperature_k: T) -> Result<T> {
+pub fn thermodynamic_to_rayleigh_jeans_factor<T: Real>(
+    frequency_hz: T,
+    cmb_temperature_k: T,
+) -> Result<T> {
     let (xh, xl) = checked_x(frequency_hz, cmb_temperature_k)?;
     Ok(rj_factor(xh, xl))
 }

@@ -125,7 +125,10 @@ pub fn photon_radiance_wavenumber<T: Real>(wavenumber_per_m: T, temperature_k: T
 ///
 /// Returns W m⁻² sr⁻¹ m⁻¹ K⁻¹, ≥ 0. Errors as [`spectral_radiance_wavelength`].
 /// Accuracy: ≤ 8 ulp (`f64`, normal results) against mpmath (three roundings more than B_λ).
-pub fn radiance_temperature_derivative_wavelength<T: Real>(wavelength_m: T, temperature_k: T) -> Result<T> {
+pub fn radiance_temperature_derivative_wavelength<T: Real>(
+    wavelength_m: T,
+    temperature_k: T,
+) -> Result<T> {
     let l = positive(wavelength_m, 0)?;
     let t = positive(temperature_k, 1)?;
     Ok(radiance_temperature_derivative_wavelength_unchecked(l, t))
@@ -134,9 +137,9 @@ pub fn radiance_temperature_derivative_wavelength<T: Real>(wavelength_m: T, temp
 #[inline(always)]
 pub(crate) fn radiance_temperature_derivative_wavelength_unchecked<T: Real>(l: T, t: T) -> T {
     let (xh, xl) = x_wavelength(l, t);
-    let p = T::c(k::FIRST_RADIATION_RADIANCE) / pow5(l);
-    let b = planck_quotient(p, xh, xl);
-    b * ((xh + xl) / one_minus_exp_neg(xh)) / t
+    // fold x/(T(1 − e^−x)) into the prefactor so no intermediate underflows before the result
+    let p = T::c(k::FIRST_RADIATION_RADIANCE) / pow5(l) * ((xh + xl) / one_minus_exp_neg(xh)) / t;
+    planck_quotient(p, xh, xl)
 }
 
 /// Temperature derivative of B_ν: ∂B_ν/∂T = B_ν · (x/T) / (1 − e^−x), x = hν/(kT).
@@ -145,10 +148,13 @@ pub(crate) fn radiance_temperature_derivative_wavelength_unchecked<T: Real>(l: T
 ///
 /// Returns W m⁻² sr⁻¹ Hz⁻¹ K⁻¹, ≥ 0. Errors as [`spectral_radiance_wavelength`].
 /// Accuracy: ≤ 8 ulp (`f64`, normal results) against mpmath.
-pub fn radiance_temperature_derivative_frequency<T: Real>(frequency_hz: T, temperature_k: T) -> Result<T> {
+pub fn radiance_temperature_derivative_frequency<T: Real>(
+    frequency_hz: T,
+    temperature_k: T,
+) -> Result<T> {
     let nu = positive(frequency_hz, 0)?;
     let t = positive(temperature_k, 1)?;
     let (xh, xl) = x_frequency(nu, t);
-    let b = planck_quotient(two_h_nu3_over_c2(nu), xh, xl);
-    Ok(b * ((xh + xl) / one_minus_exp_neg(xh)) / t)
+    let p = two_h_nu3_over_c2(nu) * ((xh + xl) / one_minus_exp_neg(xh)) / t;
+    Ok(planck_quotient(p, xh, xl))
 }

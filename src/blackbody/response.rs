@@ -11,7 +11,9 @@
 //! people or plant can be harmed.
 
 use super::kernel::invert_increasing;
-use super::planck::{radiance_temperature_derivative_wavelength_unchecked, spectral_radiance_wavelength_unchecked};
+use super::planck::{
+    radiance_temperature_derivative_wavelength_unchecked, spectral_radiance_wavelength_unchecked,
+};
 use crate::check::positive;
 use crate::math::quadrature::integrate;
 use crate::{Error, Real, Result};
@@ -54,8 +56,17 @@ fn weighted<T: Real, G: Fn(T) -> T>(wavelengths_m: &[T], response: &[T], g: G) -
             if ra == T::zero() && rb == T::zero() {
                 continue;
             }
-            let slope = (rb - ra) / (b - a);
-            let part = integrate(|l: T| (ra + slope * (l - a)) * g(l), a, b, tol, T::zero())?;
+            // integrate in the local variable u = λ − a, so the quadrature nodes keep their
+            // relative precision on narrow segments far from λ = 0 (matters in f32)
+            let h = b - a;
+            let slope = (rb - ra) / h;
+            let part = integrate(
+                |u: T| (ra + slope * u) * g(a + u),
+                T::zero(),
+                h,
+                tol,
+                T::zero(),
+            )?;
             total = total + part;
         }
     }
@@ -74,10 +85,16 @@ fn weighted<T: Real, G: Fn(T) -> T>(wavelengths_m: &[T], response: &[T], g: G) -
 ///
 /// Accuracy: within 1e-13 relative (`f64`) against mpmath quadrature of the same
 /// piecewise-linear integrand (quadrature tolerance 2 ε per segment).
-pub fn response_weighted_radiance<T: Real>(wavelengths_m: &[T], response: &[T], temperature_k: T) -> Result<T> {
+pub fn response_weighted_radiance<T: Real>(
+    wavelengths_m: &[T],
+    response: &[T],
+    temperature_k: T,
+) -> Result<T> {
     check_table(wavelengths_m, response)?;
     let t = positive(temperature_k, 2)?;
-    weighted(wavelengths_m, response, |l| spectral_radiance_wavelength_unchecked(l, t))
+    weighted(wavelengths_m, response, |l| {
+        spectral_radiance_wavelength_unchecked(l, t)
+    })
 }
 
 /// Temperature of the blackbody whose response-weighted radiance equals the given value: the
@@ -119,8 +136,12 @@ pub fn temperature_from_response_weighted_radiance<T: Real>(
     let guess = super::inverse::brightness_temperature_wavelength_unchecked(centre, target / area);
     let mut failure = None;
     let f = |t: T| {
-        let v = weighted(wavelengths_m, response, |l| spectral_radiance_wavelength_unchecked(l, t));
-        let d = weighted(wavelengths_m, response, |l| radiance_temperature_derivative_wavelength_unchecked(l, t));
+        let v = weighted(wavelengths_m, response, |l| {
+            spectral_radiance_wavelength_unchecked(l, t)
+        });
+        let d = weighted(wavelengths_m, response, |l| {
+            radiance_temperature_derivative_wavelength_unchecked(l, t)
+        });
         match (v, d) {
             (Ok(v), Ok(d)) => (v, d),
             (Err(e), _) | (_, Err(e)) => {

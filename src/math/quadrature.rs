@@ -69,7 +69,13 @@ pub fn gauss_kronrod_15<T: Real, F: FnMut(T) -> T>(f: &mut F, a: T, b: T) -> (T,
 /// Finite limits only (substitute to map infinite ones). `Error::NoConvergence` when the
 /// tolerance cannot be met within [`CAPACITY`] subintervals or an integrand value is not
 /// finite.
-pub fn integrate<T: Real, F: FnMut(T) -> T>(mut f: F, a: T, b: T, rel_tol: T, abs_tol: T) -> Result<T> {
+pub fn integrate<T: Real, F: FnMut(T) -> T>(
+    mut f: F,
+    a: T,
+    b: T,
+    rel_tol: T,
+    abs_tol: T,
+) -> Result<T> {
     if a == b {
         return Ok(T::zero());
     }
@@ -122,7 +128,9 @@ pub fn integrate<T: Real, F: FnMut(T) -> T>(mut f: F, a: T, b: T, rel_tol: T, ab
         }
         let (v1, e1) = gauss_kronrod_15(&mut f, l, m);
         let (v2, e2) = gauss_kronrod_15(&mut f, m, h);
-        if let (Some(hw), Some(vw), Some(ew)) = (hi.get_mut(worst), val.get_mut(worst), err.get_mut(worst)) {
+        if let (Some(hw), Some(vw), Some(ew)) =
+            (hi.get_mut(worst), val.get_mut(worst), err.get_mut(worst))
+        {
             *hw = m;
             *vw = v1;
             *ew = e1;
@@ -158,7 +166,8 @@ mod tests {
     fn adaptive_integral_of_a_peaked_function() {
         // ∫_0^1 1/(1e-4 + x^2) dx = atan(1/0.01)/0.01 (closed form).
         let want = libm::atan(100.0) / 0.01;
-        let got = integrate(|x: f64| 1.0 / (1e-4 + x * x), 0.0, 1.0, 1e-14, 0.0).unwrap_or(f64::NAN);
+        let got =
+            integrate(|x: f64| 1.0 / (1e-4 + x * x), 0.0, 1.0, 1e-14, 0.0).unwrap_or(f64::NAN);
         assert!(((got - want) / want).abs() < 1e-13, "{got} {want}");
     }
 }

@@ -7,8 +7,8 @@ use crate::{Error, Real, Result};
 
 /// Finds x in [lo, hi] with f(x) = 0, where `f` returns (f(x), f'(x)).
 ///
-/// Requires f(lo) and f(hi) of opposite signs (or one of them zero). Stops when the step is
-/// below `x_tol` (absolute) or f is exactly zero; returns `Error::NoConvergence` after
+/// Requires f(lo) and f(hi) of opposite signs (or one of them zero). Stops when the step or
+/// the bracket is below `x_tol` (absolute) or f is exactly zero; returns `Error::NoConvergence` after
 /// `max_iter` iterations, or when the bracket is invalid.
 pub fn bracketed_newton<T: Real, F>(mut f: F, lo: T, hi: T, x_tol: T, max_iter: u32) -> Result<T>
 where
@@ -65,6 +65,11 @@ where
         } else {
             b = x;
         }
+        // the bracket itself is below the tolerance: rounding noise in f can keep Newton
+        // steps just above x_tol forever, but the root is pinned
+        if (b - a).abs() <= x_tol {
+            return Ok(x);
+        }
     }
     Err(Error::NoConvergence)
 }
@@ -78,12 +83,18 @@ mod tests {
         // x = 5(1 − e^−x): reference root 4.965114231744276303698759 (mpmath, 30 digits).
         let g = |x: f64| (x - 5.0 * (-libm::expm1(-x)), 1.0 - 5.0 * libm::exp(-x));
         let x = bracketed_newton(g, 3.0, 6.0, 1e-15, 100).unwrap_or(f64::NAN);
-        assert!((x - 4.965_114_231_744_276).abs() <= 1.0 * f64::EPSILON * 5.0, "{x}");
+        assert!(
+            (x - 4.965_114_231_744_276).abs() <= 1.0 * f64::EPSILON * 5.0,
+            "{x}"
+        );
     }
 
     #[test]
     fn refuses_a_bracket_without_sign_change() {
         let g = |x: f64| (x * x + 1.0, 2.0 * x);
-        assert_eq!(bracketed_newton(g, -1.0, 1.0, 1e-12, 50), Err(Error::NoConvergence));
+        assert_eq!(
+            bracketed_newton(g, -1.0, 1.0, 1e-12, 50),
+            Err(Error::NoConvergence)
+        );
     }
 }

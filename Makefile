@@ -1,0 +1,88 @@
+# relicore: the two commands are `make demo` and `make test` (see README.md).
+# Both install what they need on a fresh machine (gfortran from Debian, a pinned Python venv)
+# and are quick when it is already there.
+
+SHELL := /bin/bash
+.SHELLFLAGS := -euo pipefail -c
+VENV := .venv
+PY := $(VENV)/bin/python
+export PYO3_PYTHON := $(abspath $(PY))
+PREFIX ?= /usr/local
+
+.PHONY: all deps test demo bench install fmt-check clippy rust-test nostd c-test fortran-test python-build python-test bench-build coverage clean
+
+all: test
+
+# ---------------------------------------------------------------- dependencies
+deps: $(VENV)/.stamp .gfortran.stamp
+
+$(VENV)/.stamp: requirements-dev.txt
+	python3 -m venv $(VENV)
+	$(VENV)/bin/pip install --quiet --disable-pip-version-check -r requirements-dev.txt
+	touch $@
+
+.gfortran.stamp:
+	@if ! command -v gfortran >/dev/null 2>&1; then \
+	  echo "installing gfortran from Debian's packages"; \
+	  SUDO=""; if [ "$$(id -u)" != 0 ]; then SUDO=sudo; fi; \
+	  $$SUDO apt-get update -qq && $$SUDO env DEBIAN_FRONTEND=noninteractive apt-get install -y -qq gfortran >/dev/null; \
+	fi
+	gfortran --version | head -1
+	touch $@
+
+# ---------------------------------------------------------------- tests
+test: deps fmt-check clippy rust-test nostd c-test fortran-test python-test bench-build coverage
+	@echo "make test: all steps passed"
+
+fmt-check:
+	cargo fmt --all --check
+
+clippy: deps
+	cargo clippy --workspace --all-targets -- -D warnings
+
+rust-test:
+	cargo test --workspace --exclude relicore-python
+
+nostd:
+	cd tests/nostd-check && cargo build --release --quiet
+	@echo "no_std check: the core links into a #![no_std] staticlib with its own panic handler"
+
+c-test:
+	bash tests/c/run.sh
+
+fortran-test: deps c-test
+	bash tests/fortran/run.sh
+
+python-build: deps
+	bash bindings/python/build.sh
+
+python-test: python-build c-test fortran-test
+	RELICORE_REQUIRE_CROSS=1 $(PY) -m pytest tests/python -q
+
+bench-build:
+	cargo bench --workspace --exclude relicore-python --no-run --quiet
+
+coverage: deps
+	$(PY) tests/coverage_guard.py
+
+# ---------------------------------------------------------------- demo and benches
+demo: deps python-build
+	bash examples/run_demo.sh
+
+bench: deps python-build
+	cargo bench -p relicore
+	bash benches/compare/run.sh
+
+# ---------------------------------------------------------------- install
+install:
+	cargo build -p relicore-capi --profile release-c
+	install -d $(PREFIX)/include $(PREFIX)/lib $(PREFIX)/lib/pkgconfig $(PREFIX)/include/relicore
+	install -m 644 include/relicore.h $(PREFIX)/include/relicore.h
+	install -m 644 target/release-c/librelicore.a $(PREFIX)/lib/librelicore.a
+	install -m 755 target/release-c/librelicore.so $(PREFIX)/lib/librelicore.so
+	sed -e 's|@PREFIX@|$(PREFIX)|g' bindings/c/relicore.pc.in > $(PREFIX)/lib/pkgconfig/relicore.pc
+	install -m 644 bindings/fortran/relicore.f90 $(PREFIX)/include/relicore/relicore.f90
+
+clean:
+	cargo clean
+	rm -rf build .gfortran.stamp
