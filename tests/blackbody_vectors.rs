@@ -138,6 +138,7 @@ struct Tally {
     worst: std::collections::BTreeMap<String, f64>,
 }
 
+#[allow(clippy::too_many_arguments)]
 impl Tally {
     fn check(
         &mut self,
@@ -165,7 +166,7 @@ impl Tally {
                         ulp(want, 24, f32::MIN_POSITIVE as f64),
                     ),
                     "rel" => (tol * want.abs(), want.abs().max(f64::MIN_POSITIVE)),
-                    "abs" => (tol, 1.0),
+                    "abs" => (tol, tol.max(f64::MIN_POSITIVE)),
                     _ => panic!("unknown tolerance kind {kind}"),
                 };
                 let ok = v.is_finite() && d <= bound || (v == want);
