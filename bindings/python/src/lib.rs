@@ -1,1 +1,76 @@
+//! `relicore._native`: the compiled part of the Python package.
+//!
+//! It converts, checks and loops; the physics is the core's. The Python modules in
+//! `bindings/python/python/relicore/` broadcast the inputs, allocate the outputs and call the
+//! element loops here, which run with the GIL released.
+//!
+//! * [`kernels`]: the table of core functions and the generic element loop.
+//! * [`calibration`]: the `TwoLoadCalibration` class.
+//! * [`errors`]: the one mapping from a core error to `relicore.RelicoreError`.
+//! * the constants of `relicore::constants`, as the dicts `CONSTANTS` and `ROOTS`, and the
+//!   core's `VERSION`.
 
+// No panic may unwind into the interpreter: no unwrap, expect, panic or fallible indexing.
+#![cfg_attr(
+    not(test),
+    deny(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::panic,
+        clippy::indexing_slicing
+    )
+)]
+// `!(x > 0.0)` is used on purpose: it is true for NaN too.
+#![allow(clippy::neg_cmp_op_on_partial_ord)]
+
+use pyo3::prelude::*;
+use pyo3::types::PyDict;
+
+mod calibration;
+mod errors;
+mod kernels;
+
+macro_rules! constants {
+    ($dict:expr, $module:path : [$($name:ident),+ $(,)?]) => {{
+        use $module as m;
+        $( $dict.set_item(stringify!($name), m::$name)?; )+
+    }};
+}
+
+fn constants_dict(py: Python<'_>) -> PyResult<Bound<'_, PyDict>> {
+    let d = PyDict::new(py);
+    constants!(d, relicore::constants: [
+        SPEED_OF_LIGHT, PLANCK, BOLTZMANN, ELEMENTARY_CHARGE, AVOGADRO, REDUCED_PLANCK,
+        ELECTRON_MASS, PROTON_MASS, THOMSON_CROSS_SECTION, GRAVITATIONAL_CONSTANT,
+        FINE_STRUCTURE, RYDBERG_ENERGY, FIRST_RADIATION, FIRST_RADIATION_RADIANCE,
+        SECOND_RADIATION, SECOND_RADIATION_LO, PLANCK_OVER_BOLTZMANN, PLANCK_OVER_BOLTZMANN_LO,
+        STEFAN_BOLTZMANN, RADIATION_DENSITY, PHOTON_STEFAN_BOLTZMANN, WIEN_WAVELENGTH,
+        WIEN_FREQUENCY, WIEN_WAVENUMBER, WIEN_PHOTON_WAVELENGTH, WIEN_PHOTON_FREQUENCY,
+        WIEN_FREQUENCY_INVERSE, ASTRONOMICAL_UNIT, PARSEC, MEGAPARSEC, JULIAN_YEAR,
+    ]);
+    Ok(d)
+}
+
+fn roots_dict(py: Python<'_>) -> PyResult<Bound<'_, PyDict>> {
+    let d = PyDict::new(py);
+    constants!(d, relicore::constants::roots: [
+        WAVELENGTH_PEAK, FREQUENCY_PEAK, PHOTON_WAVELENGTH_PEAK, PHOTON_FREQUENCY_PEAK,
+        THERMAL_SZ_NULL,
+    ]);
+    Ok(d)
+}
+
+#[pymodule]
+fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
+    let py = m.py();
+    m.add("RelicoreError", py.get_type::<errors::RelicoreError>())?;
+    m.add_class::<calibration::PyTwoLoadCalibration>()?;
+    m.add_class::<kernels::Kernel>()?;
+    m.add_function(wrap_pyfunction!(kernels::kernel, m)?)?;
+    m.add_function(wrap_pyfunction!(kernels::kernel_signatures, m)?)?;
+    m.add_function(wrap_pyfunction!(calibration::two_load_calibration, m)?)?;
+    m.add("CONSTANTS", constants_dict(py)?)?;
+    m.add("ROOTS", roots_dict(py)?)?;
+    m.add("VERSION", relicore::VERSION)?;
+    Ok(())
+}

@@ -1,0 +1,34 @@
+"""relicore: blackbody radiometry from one validated Rust core, shared by Rust, C, Fortran and Python.
+
+Modules
+-------
+relicore.blackbody
+    Planck's law in every form, exitances, peaks, band integrals, inversions to temperature,
+    response-weighted radiance, two-load radiometer calibration and the microwave-sky
+    conversions at the CMB temperature. Functions take scalars, lists or numpy arrays
+    (broadcast together) and return a float for scalar inputs, else an ndarray.
+relicore.constants
+    The physical and astronomical constants of the core, each in SI units.
+
+Errors
+------
+Invalid input raises :class:`RelicoreError`, a subclass of ``ValueError`` whose message names
+the function, the argument, its value and, for arrays, the first offending index.
+
+Cautions
+--------
+Radiation thermometry can hurt someone when it is trusted beyond its emissivity and
+calibration (fever screening, furnace and molten-metal work, fire safety). These functions give
+blackbody physics to their stated accuracy; they are not a certified measurement chain. Follow
+the applicable standards, local codes and licensed practice.
+"""
+
+from relicore._native import VERSION as _VERSION
+from relicore._native import RelicoreError
+
+from relicore import blackbody, constants
+
+__version__: str = _VERSION
+"""Version of the Rust core this package was built from."""
+
+__all__ = ["RelicoreError", "blackbody", "constants", "__version__"]

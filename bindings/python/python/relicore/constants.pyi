@@ -1,0 +1,77 @@
+"""Physical and astronomical constants of the relicore core, each in SI units."""
+
+from typing import Final
+
+SPEED_OF_LIGHT: Final[float]
+PLANCK: Final[float]
+BOLTZMANN: Final[float]
+ELEMENTARY_CHARGE: Final[float]
+AVOGADRO: Final[float]
+REDUCED_PLANCK: Final[float]
+ELECTRON_MASS: Final[float]
+PROTON_MASS: Final[float]
+THOMSON_CROSS_SECTION: Final[float]
+GRAVITATIONAL_CONSTANT: Final[float]
+FINE_STRUCTURE: Final[float]
+RYDBERG_ENERGY: Final[float]
+FIRST_RADIATION: Final[float]
+FIRST_RADIATION_RADIANCE: Final[float]
+SECOND_RADIATION: Final[float]
+SECOND_RADIATION_LO: Final[float]
+PLANCK_OVER_BOLTZMANN: Final[float]
+PLANCK_OVER_BOLTZMANN_LO: Final[float]
+STEFAN_BOLTZMANN: Final[float]
+RADIATION_DENSITY: Final[float]
+PHOTON_STEFAN_BOLTZMANN: Final[float]
+WIEN_WAVELENGTH: Final[float]
+WIEN_FREQUENCY: Final[float]
+WIEN_WAVENUMBER: Final[float]
+WIEN_PHOTON_WAVELENGTH: Final[float]
+WIEN_PHOTON_FREQUENCY: Final[float]
+WIEN_FREQUENCY_INVERSE: Final[float]
+ASTRONOMICAL_UNIT: Final[float]
+PARSEC: Final[float]
+MEGAPARSEC: Final[float]
+JULIAN_YEAR: Final[float]
+
+class roots:
+    WAVELENGTH_PEAK: Final[float]
+    FREQUENCY_PEAK: Final[float]
+    PHOTON_WAVELENGTH_PEAK: Final[float]
+    PHOTON_FREQUENCY_PEAK: Final[float]
+    THERMAL_SZ_NULL: Final[float]
+
+__all__ = [
+    "SPEED_OF_LIGHT",
+    "PLANCK",
+    "BOLTZMANN",
+    "ELEMENTARY_CHARGE",
+    "AVOGADRO",
+    "REDUCED_PLANCK",
+    "ELECTRON_MASS",
+    "PROTON_MASS",
+    "THOMSON_CROSS_SECTION",
+    "GRAVITATIONAL_CONSTANT",
+    "FINE_STRUCTURE",
+    "RYDBERG_ENERGY",
+    "FIRST_RADIATION",
+    "FIRST_RADIATION_RADIANCE",
+    "SECOND_RADIATION",
+    "SECOND_RADIATION_LO",
+    "PLANCK_OVER_BOLTZMANN",
+    "PLANCK_OVER_BOLTZMANN_LO",
+    "STEFAN_BOLTZMANN",
+    "RADIATION_DENSITY",
+    "PHOTON_STEFAN_BOLTZMANN",
+    "WIEN_WAVELENGTH",
+    "WIEN_FREQUENCY",
+    "WIEN_WAVENUMBER",
+    "WIEN_PHOTON_WAVELENGTH",
+    "WIEN_PHOTON_FREQUENCY",
+    "WIEN_FREQUENCY_INVERSE",
+    "ASTRONOMICAL_UNIT",
+    "PARSEC",
+    "MEGAPARSEC",
+    "JULIAN_YEAR",
+    "roots",
+]
