@@ -1,0 +1,75 @@
+/*
+ * Firmware-style use of relicore: single-precision scalar functions, the two-load calibration
+ * (float and double), the float response functions and the float array forms, with every
+ * buffer on the stack. tests/c/run.sh links it against librelicore.a with -Wl,--gc-sections
+ * and checks that the executable needs no malloc, calloc, realloc or free.
+ * Uses no stdio; the exit status is the number of calls that did not succeed as expected.
+ */
+
+#include <math.h>
+#include <stddef.h>
+#include <stdint.h>
+
+#include "relicore.h"
+
+static int bad(int32_t status, float value)
+{
+    return status != RELICORE_OK || !isfinite(value);
+}
+
+int main(void)
+{
+    int failures = 0;
+    float v = 0.0f;
+
+    failures += bad(relicore_spectral_radiance_wavelength_f32(10e-6f, 300.0f, &v), v);
+    failures += bad(relicore_spectral_radiance_frequency_f32(30e12f, 300.0f, &v), v);
+    failures += bad(relicore_spectral_radiance_wavenumber_f32(1e5f, 300.0f, &v), v);
+    float radiance = v;
+    failures += bad(relicore_brightness_temperature_wavelength_f32(10e-6f, 9.0f, &v), v);
+    failures += bad(relicore_brightness_temperature_frequency_f32(30e12f, 1e-11f, &v), v);
+    failures += bad(relicore_band_radiance_wavelength_f32(8e-6f, 14e-6f, 300.0f, &v), v);
+    (void)radiance;
+
+    /* two-load calibration of a 90 GHz channel, then a scene reading */
+    struct relicore_two_load_calibration_f32 cal32;
+    failures += relicore_two_load_calibration_f32(90e9f, 2.0f, 300.0f, 1.0f, 77.0f, &cal32)
+                != RELICORE_OK;
+    failures += bad(relicore_calibrated_temperature_f32(&cal32, 1.5f, &v), v);
+    failures += bad(relicore_calibrated_brightness_temperature_f32(&cal32, 1.5f, &v), v);
+    struct relicore_two_load_calibration cal;
+    double t = 0.0;
+    failures += relicore_two_load_calibration(90e9, 2.0, 300.0, 1.0, 77.0, &cal) != RELICORE_OK;
+    failures += bad(relicore_calibrated_temperature(&cal, 1.5, &t), (float)t);
+    failures += bad(relicore_calibrated_brightness_temperature(&cal, 1.5, &t), (float)t);
+
+    /* an infrared thermometer: 8-14 um response table */
+    const float wl[5] = { 8e-6f, 9.5e-6f, 11e-6f, 12.5e-6f, 14e-6f };
+    const float rs[5] = { 0.1f, 0.9f, 1.0f, 0.9f, 0.1f };
+    float lr = 0.0f;
+    failures += bad(relicore_response_weighted_radiance_f32(wl, 5, rs, 5, 310.0f, &lr), lr);
+    failures += bad(relicore_temperature_from_response_weighted_radiance_f32(wl, 5, rs, 5, lr, &v),
+                    v);
+
+    /* array forms */
+    float x[8], out[8];
+    for (int i = 0; i < 8; i++) {
+        x[i] = 2e-6f * (float)(i + 1);
+    }
+    failures += relicore_spectral_radiance_wavelength_array_f32(x, 8, 300.0f, out) != RELICORE_OK;
+    for (int i = 0; i < 8; i++) {
+        x[i] = 1e12f * (float)(i + 1);
+    }
+    failures += relicore_spectral_radiance_frequency_array_f32(x, 8, 300.0f, out) != RELICORE_OK;
+    for (int i = 0; i < 8; i++) {
+        x[i] = 1e4f * (float)(i + 1);
+    }
+    failures += relicore_spectral_radiance_wavenumber_array_f32(x, 8, 300.0f, out) != RELICORE_OK;
+    for (int i = 0; i < 8; i++) {
+        failures += !isfinite(out[i]);
+    }
+    /* a failing call still allocates nothing */
+    failures += relicore_spectral_radiance_wavelength_f32(-1.0f, 300.0f, &v)
+                != RELICORE_ERROR_NON_POSITIVE;
+    return failures;
+}
