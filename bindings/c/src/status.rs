@@ -238,5 +238,12 @@ mod tests {
         // SAFETY: relicore_version returns a pointer to a static C string.
         let s = unsafe { CStr::from_ptr(relicore_version()) };
         assert_eq!(s, VERSION);
+        // the pkg-config template carries the same version
+        let pc = std::fs::read_to_string(concat!(env!("CARGO_MANIFEST_DIR"), "/relicore.pc.in"))
+            .unwrap_or_default();
+        assert!(
+            pc.lines().any(|l| l == format!("Version: {core}")),
+            "bindings/c/relicore.pc.in must say `Version: {core}`"
+        );
     }
 }
