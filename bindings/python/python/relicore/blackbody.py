@@ -451,5 +451,6 @@ __all__ = [
     "thermal_sz_null_frequency",
     "thermal_sz_spectral_shape",
     "thermal_sz_temperature_shape",
+    "thermodynamic_to_rayleigh_jeans_factor",
     "two_load_calibration",
 ]

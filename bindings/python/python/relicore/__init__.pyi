@@ -1,0 +1,17 @@
+"""Type stubs for the relicore package (hand-kept; tests/python/test_stubs.py checks them)."""
+
+from typing import Final
+
+from relicore import blackbody as blackbody
+from relicore import constants as constants
+
+class RelicoreError(ValueError):
+    """Invalid input to a relicore function (a ValueError)."""
+
+    function: str | None
+    argument: str | None
+    index: tuple[int, ...] | None
+    status: int | None
+
+__version__: Final[str]
+__all__: Final[list[str]]
