@@ -1,15 +1,18 @@
-"""The same number in every language: the C and Fortran test programs, run in `--dump FILE`
-mode on tests/data/blackbody.txt, print one line `name bits` per value vector of the file (in
-file order; `bits` is the 16 hex digits of the IEEE-754 double). The Python face must give the
-identical bits for every one of them.
+"""The same number in every language: the C and Fortran test programs, run as
+`PROGRAM --dump SCALAR_FILE RESPONSE_FILE` on tests/data/blackbody.txt and
+blackbody_response.txt, print one line `name bits` per value vector (status lines excluded), in
+file order, scalar file first; `bits` is the 16 hex digits of the IEEE-754 double. The Python
+face must give the identical bits for every one of them.
 
 The C program also prints the `_f32` vectors (8 hex digits), which Python does not have; they
 are skipped. A missing program is a failure when RELICORE_REQUIRE_CROSS=1 (make test sets it)
 and a skip otherwise.
 
-Programs (paths relative to the repository root unless absolute):
-  RELICORE_C_DUMP_BIN  default build/c/test_blackbody        (built by tests/c/run.sh)
-  RELICORE_F_DUMP_BIN  default build/fortran/test_blackbody  (built by tests/fortran/run.sh)
+Programs (paths relative to the repository root unless absolute): the environment variable
+when set, else the first default that exists.
+  RELICORE_C_DUMP_BIN  build/c/test_blackbody, build/c-tests/test_blackbody  (tests/c/run.sh)
+  RELICORE_F_DUMP_BIN  build/fortran/test_blackbody, build/fortran-tests/test_blackbody
+                       (tests/fortran/run.sh)
 """
 
 from __future__ import annotations
@@ -21,25 +24,26 @@ import subprocess
 
 import pytest
 
-from refdata import ROOT, SCALAR_FILE, bits, compute, read_scalar_file
+from refdata import RESPONSE_FILE, ROOT, SCALAR_FILE, bits, compute, read_response_file, read_scalar_file
 
 PROGRAMS = [
-    ("C", "RELICORE_C_DUMP_BIN", "build/c/test_blackbody"),
-    ("Fortran", "RELICORE_F_DUMP_BIN", "build/fortran/test_blackbody"),
+    ("C", "RELICORE_C_DUMP_BIN", ("build/c/test_blackbody", "build/c-tests/test_blackbody")),
+    ("Fortran", "RELICORE_F_DUMP_BIN", ("build/fortran/test_blackbody", "build/fortran-tests/test_blackbody")),
 ]
 
 
-def program(env: str, default: str) -> pathlib.Path:
-    p = pathlib.Path(os.environ.get(env, default))
-    return p if p.is_absolute() else ROOT / p
+def program(env: str, defaults: tuple[str, ...]) -> pathlib.Path:
+    if os.environ.get(env):
+        candidates = [pathlib.Path(os.environ[env])]
+    else:
+        candidates = [pathlib.Path(d) for d in defaults]
+    paths = [p if p.is_absolute() else ROOT / p for p in candidates]
+    return next((p for p in paths if p.exists()), paths[0])
 
 
 def python_dump() -> list[tuple[str, str]]:
-    return [
-        (v.name, bits(compute(v)))
-        for v in read_scalar_file(SCALAR_FILE)
-        if not v.is_status and not v.is_f32
-    ]
+    vectors = read_scalar_file(SCALAR_FILE) + read_response_file(RESPONSE_FILE)
+    return [(v.name, bits(compute(v))) for v in vectors if not v.is_status and not v.is_f32]
 
 
 def parse_dump(text: str) -> list[tuple[str, str]]:
@@ -63,16 +67,16 @@ def as_float(hexbits: str) -> float:
     return struct.unpack(">d", bytes.fromhex(hexbits))[0]
 
 
-@pytest.mark.parametrize("language, env, default", PROGRAMS, ids=[p[0] for p in PROGRAMS])
-def test_identical_bits(language, env, default):
-    exe = program(env, default)
+@pytest.mark.parametrize("language, env, defaults", PROGRAMS, ids=[p[0] for p in PROGRAMS])
+def test_identical_bits(language, env, defaults):
+    exe = program(env, defaults)
     if not exe.exists():
         message = f"{language} dump program {exe} not found (set {env} or build it)"
         if os.environ.get("RELICORE_REQUIRE_CROSS") == "1":
             pytest.fail(message)
         pytest.skip(message)
     run = subprocess.run(
-        [str(exe), "--dump", str(SCALAR_FILE)], capture_output=True, text=True, timeout=600, cwd=ROOT
+        [str(exe), "--dump", str(SCALAR_FILE), str(RESPONSE_FILE)], capture_output=True, text=True, timeout=600, cwd=ROOT
     )
     assert run.returncode == 0, f"{exe} --dump failed ({run.returncode}):\n{run.stderr[-2000:]}"
     theirs = parse_dump(run.stdout)
