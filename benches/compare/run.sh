@@ -1,0 +1,22 @@
+#!/usr/bin/env bash
+# Side-by-side speed and accuracy of relicore against what a user would otherwise write
+# (a plain C loop with exp, a numpy expression), in one run on the same inputs.
+# Run from the repository root after the Python package is built into .venv (`make bench`
+# does both). A benchmark, not a test: nothing asserts on speed.
+set -euo pipefail
+
+cd "$(dirname "$0")/../.."
+PY=${PY:-.venv/bin/python}
+CC=${CC:-cc}
+OUT=build/bench
+mkdir -p "$OUT"
+
+echo "== benches/compare: building the C static library (release-c profile)"
+cargo build --quiet -p relicore-capi --profile release-c
+
+echo "== benches/compare: compiling the C driver (-O3)"
+"$CC" -std=c11 -O3 -Wall -Wextra -Wpedantic -Werror -Iinclude \
+  benches/compare/planck_c.c target/release-c/librelicore.a -lm -o "$OUT/planck_c"
+
+echo "== benches/compare: timing and accuracy"
+"$PY" benches/compare/compare.py --c-driver "$OUT/planck_c" --work-dir "$OUT" "$@"
