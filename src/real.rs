@@ -54,11 +54,15 @@ pub trait Real:
     fn sinh(self) -> Self;
     /// Hyperbolic tangent.
     fn tanh(self) -> Self;
+    /// Largest integer not above x. (`FloatCore::floor` is implemented with `%`, which
+    /// compiles to a call of the platform `fmod`; that call drags the unwinding runtime, and
+    /// with it `malloc`, into a static C link. This one is `libm`'s.)
+    fn floor_libm(self) -> Self;
 }
 
 macro_rules! impl_real {
     ($t:ty, $digits:expr, $split:expr, $lnmax:expr, $lnmin:expr,
-     $exp:path, $expm1:path, $log:path, $log1p:path, $sqrt:path, $cbrt:path, $sinh:path, $tanh:path) => {
+     $exp:path, $expm1:path, $log:path, $log1p:path, $sqrt:path, $cbrt:path, $sinh:path, $tanh:path, $floor:path) => {
         impl Real for $t {
             const MANTISSA_DIGITS: u32 = $digits;
             const SPLITTER: Self = $split;
@@ -110,6 +114,10 @@ macro_rules! impl_real {
             fn tanh(self) -> Self {
                 $tanh(self)
             }
+            #[inline(always)]
+            fn floor_libm(self) -> Self {
+                $floor(self)
+            }
         }
     };
 }
@@ -127,7 +135,8 @@ impl_real!(
     libm::sqrt,
     libm::cbrt,
     libm::sinh,
-    libm::tanh
+    libm::tanh,
+    libm::floor
 );
 impl_real!(
     f32,
@@ -142,5 +151,6 @@ impl_real!(
     libm::sqrtf,
     libm::cbrtf,
     libm::sinhf,
-    libm::tanhf
+    libm::tanhf,
+    libm::floorf
 );

@@ -65,7 +65,7 @@ pub(crate) fn scaled_exp_neg<T: Real>(p: T, xh: T, xl: T) -> T {
     }
     let (lh, ll) = T::c2(LN2_HI, LN2_LO);
     // m chosen so that x − m ln2 ≈ half_range: e^−reduced is a normal number.
-    let m = ((xh - half_range) / lh).floor();
+    let m = ((xh - half_range) / lh).floor_libm();
     let (ph, pl) = dd::two_prod(m, lh);
     let (sh, sl) = dd::two_sum(xh, -ph);
     let rl = ((sl - pl) - m * ll) + xl;
