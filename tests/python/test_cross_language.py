@@ -1,8 +1,10 @@
-"""The same number in every language: the C and Fortran test programs, run as
-`PROGRAM --dump SCALAR_FILE RESPONSE_FILE` on tests/data/blackbody.txt and
-blackbody_response.txt, print one line `name bits` per value vector (status lines excluded), in
-file order, scalar file first; `bits` is the 16 hex digits of the IEEE-754 double. The Python
-face must give the identical bits for every one of them.
+"""The same number in every language: the C and Fortran test programs in `--dump` mode print
+one line `name bits` per value vector (status lines excluded) of tests/data/blackbody.txt and
+then of blackbody_response.txt, in file order; `bits` is the 16 hex digits of the IEEE-754
+double. The Python face must give the identical bits for every one of them.
+
+The C program takes both files in one run (`--dump SCALAR_FILE RESPONSE_FILE`); the Fortran
+program one file per run (`--dump FILE`).
 
 The C program also prints the `_f32` vectors (8 hex digits), which Python does not have; they
 are skipped. A missing program is a failure when RELICORE_REQUIRE_CROSS=1 (make test sets it)
@@ -26,9 +28,11 @@ import pytest
 
 from refdata import RESPONSE_FILE, ROOT, SCALAR_FILE, bits, compute, read_response_file, read_scalar_file
 
+BOTH = [[str(SCALAR_FILE), str(RESPONSE_FILE)]]
+EACH = [[str(SCALAR_FILE)], [str(RESPONSE_FILE)]]
 PROGRAMS = [
-    ("C", "RELICORE_C_DUMP_BIN", ("build/c/test_blackbody", "build/c-tests/test_blackbody")),
-    ("Fortran", "RELICORE_F_DUMP_BIN", ("build/fortran/test_blackbody", "build/fortran-tests/test_blackbody")),
+    ("C", "RELICORE_C_DUMP_BIN", ("build/c/test_blackbody", "build/c-tests/test_blackbody"), BOTH),
+    ("Fortran", "RELICORE_F_DUMP_BIN", ("build/fortran/test_blackbody", "build/fortran-tests/test_blackbody"), EACH),
 ]
 
 
@@ -67,19 +71,20 @@ def as_float(hexbits: str) -> float:
     return struct.unpack(">d", bytes.fromhex(hexbits))[0]
 
 
-@pytest.mark.parametrize("language, env, defaults", PROGRAMS, ids=[p[0] for p in PROGRAMS])
-def test_identical_bits(language, env, defaults):
+@pytest.mark.parametrize("language, env, defaults, runs", PROGRAMS, ids=[p[0] for p in PROGRAMS])
+def test_identical_bits(language, env, defaults, runs):
     exe = program(env, defaults)
     if not exe.exists():
         message = f"{language} dump program {exe} not found (set {env} or build it)"
         if os.environ.get("RELICORE_REQUIRE_CROSS") == "1":
             pytest.fail(message)
         pytest.skip(message)
-    run = subprocess.run(
-        [str(exe), "--dump", str(SCALAR_FILE), str(RESPONSE_FILE)], capture_output=True, text=True, timeout=600, cwd=ROOT
-    )
-    assert run.returncode == 0, f"{exe} --dump failed ({run.returncode}):\n{run.stderr[-2000:]}"
-    theirs = parse_dump(run.stdout)
+    theirs = []
+    for files in runs:
+        command = [str(exe), "--dump", *files]
+        run = subprocess.run(command, capture_output=True, text=True, timeout=600, cwd=ROOT)
+        assert run.returncode == 0, f"{' '.join(command)} failed ({run.returncode}):\n{run.stderr[-2000:]}"
+        theirs += parse_dump(run.stdout)
     ours = python_dump()
     assert [n for n, _ in theirs] == [n for n, _ in ours], (
         f"{language} dumped {len(theirs)} f64 values, Python has {len(ours)} value vectors; "
