@@ -57,6 +57,7 @@ python-build: deps
 	bash bindings/python/build.sh
 
 python-test: python-build c-test fortran-test
+	cargo test -p relicore-python --quiet
 	RELICORE_REQUIRE_CROSS=1 $(PY) -m pytest tests/python -q
 
 bench-build:

@@ -108,7 +108,7 @@ fn ln_expm1<T: Real>(x: T) -> T {
 ///
 /// Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`; `OutOfDomain(2)` when the ratio is one
 /// no blackbody can produce (for λ₁ < λ₂, B₁/B₂ lies in (0, (λ₂/λ₁)⁴), the upper limit being
-/// the Rayleigh-Jeans limit T → ∞) or λ₁ = λ₂; `NoConvergence` (not seen in testing).
+/// the Rayleigh-Jeans limit T → ∞); `OutOfDomain(1)` when λ₁ = λ₂; `NoConvergence` (not seen in testing).
 ///
 /// Method: safeguarded Newton in u = 1/T on ln(B₁/B₂), which is nearly linear in u, started
 /// from the Wien-approximation solution.
@@ -126,7 +126,8 @@ pub fn ratio_temperature<T: Real>(
     let r = positive(radiance_ratio, 2)?;
     let e = positive(emissivity_ratio, 3)?;
     if l1 == l2 {
-        return Err(Error::OutOfDomain(2));
+        // two equal wavelengths carry no temperature information
+        return Err(Error::OutOfDomain(1));
     }
     // target ln(B1/B2) = ln(R/ε)
     let target = r.ln() - e.ln();
