@@ -1,0 +1,2619 @@
+! relicore: the Fortran face of relicore (blackbody radiometry), a thin binding of the C ABI
+! declared in include/relicore.h. Physics lives only in the Rust core; this module binds the
+! C functions, converts, checks sizes and turns status codes into NaN, a stat argument or a
+! stop. Build with any Fortran 2018 compiler (gfortran -std=f2018) and link librelicore.a
+! (and -lm):
+!     gfortran -std=f2018 -c relicore.f90
+!     gfortran prog.f90 relicore.o /path/to/librelicore.a -lm
+!
+! Conventions (DESIGN 3, 5)
+! * Units are SI (m, Hz, m-1, K, W, sr) unless the name says otherwise; kinds are those of
+!   iso_c_binding: real(c_double), real(c_float) for the _f32 twins, integer(c_int32_t) status.
+! * Every C function relicore_<name> has Fortran wrappers with the same words:
+!     relicore_<name>(...)                  an elemental function: the result, NaN on failure;
+!     call relicore_<name>_s(..., out, stat) the status form, an elemental subroutine: out is
+!                                           the result (NaN on failure), stat the status code
+!                                           (RELICORE_OK or a negative RELICORE_ERROR_*);
+!                                           when stat is absent a failure stops the program
+!                                           (error stop) with the routine name and message;
+!     call relicore_<name>_array(x, ..., out, stat)   the C array forms (one C call for a
+!                                           whole array; failing elements NaN, stat = the first
+!                                           failing element's code);
+!     relicore_<name>_f32 / _f32_s / _array_f32       the single-precision twins.
+!   Arguments keep the names (and so the keywords) of the C prototypes, in the same order.
+! * The wrappers are "impure elemental": they call C functions that write through pointers,
+!   which no Fortran interface may declare pure; elemental use on conformable arrays works
+!   as usual (the status form then needs array out and stat of the same shape).
+! * The two-load calibration is the bind(C) type relicore_two_load_calibration (and _f32),
+!   built by the generic function of the same name from five numbers:
+!       cal = relicore_two_load_calibration(frequency_hz, reading_hot, temperature_hot_k,
+!                                           reading_cold, temperature_cold_k)
+!   (its structure constructor with the three fields frequency_hz, gain, offset also works).
+! * relicore_status_message(code) and relicore_version() return allocatable strings.
+! * Nothing here allocates on the C side, keeps state or is thread-unsafe.
+!
+! Caution: radiation thermometry misleads when trusted beyond its emissivity and calibration
+! (fever screening, furnace and molten-metal work, fire safety). Follow the applicable
+! standards, local codes and licensed practice.
+!
+! Coverage: every function of include/relicore.h and the Fortran procedures that bind it
+! (tests/fortran/check_interfaces.py fails when a header function has no interface here or
+! an interface's arguments differ from the prototype; "function" is relicore_<name>, "_s"
+! its status form relicore_<name>_s, "subroutine" the array form of the same name):
+!   C function                                                    Fortran procedures
+!   relicore_status_message                                       function
+!   relicore_version                                              function
+!   relicore_spectral_radiance_wavelength                         function, _s
+!   relicore_spectral_radiance_frequency                          function, _s
+!   relicore_spectral_radiance_wavenumber                         function, _s
+!   relicore_photon_radiance_wavelength                           function, _s
+!   relicore_photon_radiance_frequency                            function, _s
+!   relicore_photon_radiance_wavenumber                           function, _s
+!   relicore_radiance_temperature_derivative_wavelength           function, _s
+!   relicore_radiance_temperature_derivative_frequency            function, _s
+!   relicore_radiant_exitance                                     function, _s
+!   relicore_photon_exitance                                      function, _s
+!   relicore_peak_wavelength                                      function, _s
+!   relicore_peak_frequency                                       function, _s
+!   relicore_peak_wavenumber                                      function, _s
+!   relicore_photon_peak_wavelength                               function, _s
+!   relicore_photon_peak_frequency                                function, _s
+!   relicore_temperature_from_peak_wavelength                     function, _s
+!   relicore_temperature_from_peak_frequency                      function, _s
+!   relicore_band_fraction_wavelength                             function, _s
+!   relicore_band_radiance_wavelength                             function, _s
+!   relicore_band_photon_radiance_wavelength                      function, _s
+!   relicore_band_radiance_frequency                              function, _s
+!   relicore_temperature_from_band_radiance_wavelength            function, _s
+!   relicore_brightness_temperature_wavelength                    function, _s
+!   relicore_brightness_temperature_frequency                     function, _s
+!   relicore_rayleigh_jeans_temperature                           function, _s
+!   relicore_ratio_temperature                                    function, _s
+!   relicore_thermodynamic_to_rayleigh_jeans_factor               function, _s
+!   relicore_kcmb_to_mjy_per_sr                                   function, _s
+!   relicore_thermal_sz_spectral_shape                            function, _s
+!   relicore_thermal_sz_temperature_shape                         function, _s
+!   relicore_thermal_sz_null_frequency                            function, _s
+!   relicore_spectral_radiance_wavelength_array                   subroutine
+!   relicore_spectral_radiance_frequency_array                    subroutine
+!   relicore_spectral_radiance_wavenumber_array                   subroutine
+!   relicore_photon_radiance_wavelength_array                     subroutine
+!   relicore_photon_radiance_frequency_array                      subroutine
+!   relicore_photon_radiance_wavenumber_array                     subroutine
+!   relicore_radiance_temperature_derivative_wavelength_array     subroutine
+!   relicore_radiance_temperature_derivative_frequency_array      subroutine
+!   relicore_brightness_temperature_wavelength_array              subroutine
+!   relicore_brightness_temperature_frequency_array               subroutine
+!   relicore_spectral_radiance_wavelength_array_f32               subroutine
+!   relicore_spectral_radiance_frequency_array_f32                subroutine
+!   relicore_spectral_radiance_wavenumber_array_f32               subroutine
+!   relicore_spectral_radiance_wavelength_f32                     function, _s
+!   relicore_spectral_radiance_frequency_f32                      function, _s
+!   relicore_spectral_radiance_wavenumber_f32                     function, _s
+!   relicore_band_radiance_wavelength_f32                         function, _s
+!   relicore_brightness_temperature_wavelength_f32                function, _s
+!   relicore_brightness_temperature_frequency_f32                 function, _s
+!   relicore_two_load_calibration                                 generic function (= type), _s
+!   relicore_calibrated_temperature                               function, _s
+!   relicore_calibrated_brightness_temperature                    function, _s
+!   relicore_two_load_calibration_f32                             generic function (= type), _s
+!   relicore_calibrated_temperature_f32                           function, _s
+!   relicore_calibrated_brightness_temperature_f32                function, _s
+!   relicore_response_weighted_radiance                           function, _s
+!   relicore_temperature_from_response_weighted_radiance          function, _s
+!   relicore_response_weighted_radiance_f32                       function, _s
+!   relicore_temperature_from_response_weighted_radiance_f32      function, _s
+module relicore
+  use, intrinsic :: iso_c_binding, only: c_double, c_float, c_int32_t, c_size_t, c_char, &
+      c_ptr, c_null_char, c_associated, c_f_pointer
+  use, intrinsic :: ieee_arithmetic, only: ieee_value, ieee_quiet_nan
+  implicit none
+  private
+
+  ! ---------------------------------------------------------------- status codes and constants
+  ! The #defines of include/relicore.h (tests/fortran/check_interfaces.py compares values).
+  integer(c_int32_t), parameter, public :: RELICORE_OK = 0_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_ERROR_NULL_POINTER = -1_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_ERROR_NON_FINITE = -2_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_ERROR_NON_POSITIVE = -3_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_ERROR_NEGATIVE = -4_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_ERROR_EMPTY_INTERVAL = -5_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_ERROR_ARRAY_TOO_SHORT = -6_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_ERROR_LENGTH_MISMATCH = -7_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_ERROR_NOT_INCREASING = -8_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_ERROR_DEGENERATE_CALIBRATION = -9_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_ERROR_OUT_OF_DOMAIN = -10_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_ERROR_NO_CONVERGENCE = -11_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_ERROR_INVALID_STRUCT = -12_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_ERROR_PANIC = -13_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_VERSION_MAJOR = 0_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_VERSION_MINOR = 1_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_VERSION_PATCH = 0_c_int32_t
+  real(c_double), parameter, public :: RELICORE_SPEED_OF_LIGHT = 299792458.0e0_c_double
+  real(c_double), parameter, public :: RELICORE_PLANCK = 6.62607015e-34_c_double
+  real(c_double), parameter, public :: RELICORE_BOLTZMANN = 1.380649e-23_c_double
+  real(c_double), parameter, public :: RELICORE_ELEMENTARY_CHARGE = 1.602176634e-19_c_double
+  real(c_double), parameter, public :: RELICORE_AVOGADRO = 6.02214076e23_c_double
+  real(c_double), parameter, public :: RELICORE_REDUCED_PLANCK = 1.0545718176461565e-34_c_double
+  real(c_double), parameter, public :: RELICORE_ELECTRON_MASS = 9.1093837139e-31_c_double
+  real(c_double), parameter, public :: RELICORE_PROTON_MASS = 1.67262192595e-27_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_THOMSON_CROSS_SECTION = 6.6524587051e-29_c_double
+  real(c_double), parameter, public :: RELICORE_GRAVITATIONAL_CONSTANT = 6.67430e-11_c_double
+  real(c_double), parameter, public :: RELICORE_FINE_STRUCTURE = 7.2973525643e-3_c_double
+  real(c_double), parameter, public :: RELICORE_RYDBERG_ENERGY = 2.1798723611030e-18_c_double
+  real(c_double), parameter, public :: RELICORE_FIRST_RADIATION = 3.741771852192758e-16_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_FIRST_RADIATION_RADIANCE = 1.1910429723971884e-16_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_SECOND_RADIATION = 1.4387768775039339e-2_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_SECOND_RADIATION_LO = -6.735986446804958e-19_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_PLANCK_OVER_BOLTZMANN = 4.799243073366221e-11_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_PLANCK_OVER_BOLTZMANN_LO = 2.4295941674596896e-27_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_STEFAN_BOLTZMANN = 5.6703744191844294e-8_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_RADIATION_DENSITY = 7.565733250280005e-16_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_PHOTON_STEFAN_BOLTZMANN = 1.5204608593931362e15_c_double
+  real(c_double), parameter, public :: RELICORE_WIEN_WAVELENGTH = 2.8977719551851727e-3_c_double
+  real(c_double), parameter, public :: RELICORE_WIEN_FREQUENCY = 5.878925757646825e10_c_double
+  real(c_double), parameter, public :: RELICORE_WIEN_WAVENUMBER = 1.9609985510865738e2_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_WIEN_PHOTON_WAVELENGTH = 3.669702865050074e-3_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_WIEN_PHOTON_FREQUENCY = 3.320574173214905e10_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_WIEN_FREQUENCY_INVERSE = 1.7009910334371582e-11_c_double
+  real(c_double), parameter, public :: RELICORE_ASTRONOMICAL_UNIT = 149597870700.0e0_c_double
+  real(c_double), parameter, public :: RELICORE_PARSEC = 3.085677581491367e16_c_double
+  real(c_double), parameter, public :: RELICORE_MEGAPARSEC = 3.085677581491367e22_c_double
+  real(c_double), parameter, public :: RELICORE_JULIAN_YEAR = 31557600.0e0_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_ROOT_WAVELENGTH_PEAK = 4.965114231744276e0_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_ROOT_FREQUENCY_PEAK = 2.8214393721220787e0_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_ROOT_PHOTON_WAVELENGTH_PEAK = 3.9206903948728864e0_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_ROOT_PHOTON_FREQUENCY_PEAK = 1.59362426004004e0_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_ROOT_THERMAL_SZ_NULL = 3.830016096309075e0_c_double
+
+  ! ---------------------------------------------------------------- public procedures
+  public :: relicore_spectral_radiance_wavelength, relicore_spectral_radiance_wavelength_s, &
+      relicore_spectral_radiance_frequency, relicore_spectral_radiance_frequency_s, &
+      relicore_spectral_radiance_wavenumber, relicore_spectral_radiance_wavenumber_s, &
+      relicore_photon_radiance_wavelength, relicore_photon_radiance_wavelength_s, &
+      relicore_photon_radiance_frequency, relicore_photon_radiance_frequency_s, &
+      relicore_photon_radiance_wavenumber, relicore_photon_radiance_wavenumber_s, &
+      relicore_radiance_temperature_derivative_wavelength, &
+      relicore_radiance_temperature_derivative_wavelength_s, &
+      relicore_radiance_temperature_derivative_frequency, &
+      relicore_radiance_temperature_derivative_frequency_s, relicore_radiant_exitance, &
+      relicore_radiant_exitance_s, relicore_photon_exitance, relicore_photon_exitance_s, &
+      relicore_peak_wavelength, relicore_peak_wavelength_s, relicore_peak_frequency, &
+      relicore_peak_frequency_s, relicore_peak_wavenumber, relicore_peak_wavenumber_s, &
+      relicore_photon_peak_wavelength, relicore_photon_peak_wavelength_s, &
+      relicore_photon_peak_frequency, relicore_photon_peak_frequency_s, &
+      relicore_temperature_from_peak_wavelength, relicore_temperature_from_peak_wavelength_s, &
+      relicore_temperature_from_peak_frequency, relicore_temperature_from_peak_frequency_s, &
+      relicore_band_fraction_wavelength, relicore_band_fraction_wavelength_s, &
+      relicore_band_radiance_wavelength, relicore_band_radiance_wavelength_s, &
+      relicore_band_photon_radiance_wavelength, relicore_band_photon_radiance_wavelength_s, &
+      relicore_band_radiance_frequency, relicore_band_radiance_frequency_s, &
+      relicore_temperature_from_band_radiance_wavelength, &
+      relicore_temperature_from_band_radiance_wavelength_s, &
+      relicore_brightness_temperature_wavelength, &
+      relicore_brightness_temperature_wavelength_s, &
+      relicore_brightness_temperature_frequency, relicore_brightness_temperature_frequency_s, &
+      relicore_rayleigh_jeans_temperature, relicore_rayleigh_jeans_temperature_s, &
+      relicore_ratio_temperature, relicore_ratio_temperature_s, &
+      relicore_thermodynamic_to_rayleigh_jeans_factor, &
+      relicore_thermodynamic_to_rayleigh_jeans_factor_s, relicore_kcmb_to_mjy_per_sr, &
+      relicore_kcmb_to_mjy_per_sr_s, relicore_thermal_sz_spectral_shape, &
+      relicore_thermal_sz_spectral_shape_s, relicore_thermal_sz_temperature_shape, &
+      relicore_thermal_sz_temperature_shape_s, relicore_thermal_sz_null_frequency, &
+      relicore_thermal_sz_null_frequency_s, relicore_spectral_radiance_wavelength_f32, &
+      relicore_spectral_radiance_wavelength_f32_s, relicore_spectral_radiance_frequency_f32, &
+      relicore_spectral_radiance_frequency_f32_s, relicore_spectral_radiance_wavenumber_f32, &
+      relicore_spectral_radiance_wavenumber_f32_s, &
+      relicore_brightness_temperature_wavelength_f32, &
+      relicore_brightness_temperature_wavelength_f32_s, &
+      relicore_brightness_temperature_frequency_f32, &
+      relicore_brightness_temperature_frequency_f32_s, relicore_band_radiance_wavelength_f32, &
+      relicore_band_radiance_wavelength_f32_s, relicore_spectral_radiance_wavelength_array, &
+      relicore_spectral_radiance_frequency_array, &
+      relicore_spectral_radiance_wavenumber_array, relicore_photon_radiance_wavelength_array, &
+      relicore_photon_radiance_frequency_array, relicore_photon_radiance_wavenumber_array, &
+      relicore_radiance_temperature_derivative_wavelength_array, &
+      relicore_radiance_temperature_derivative_frequency_array, &
+      relicore_brightness_temperature_wavelength_array, &
+      relicore_brightness_temperature_frequency_array, &
+      relicore_spectral_radiance_wavelength_array_f32, &
+      relicore_spectral_radiance_frequency_array_f32, &
+      relicore_spectral_radiance_wavenumber_array_f32, relicore_response_weighted_radiance, &
+      relicore_response_weighted_radiance_s, relicore_response_weighted_radiance_f32, &
+      relicore_response_weighted_radiance_f32_s, &
+      relicore_temperature_from_response_weighted_radiance, &
+      relicore_temperature_from_response_weighted_radiance_s, &
+      relicore_temperature_from_response_weighted_radiance_f32, &
+      relicore_temperature_from_response_weighted_radiance_f32_s, &
+      relicore_two_load_calibration, relicore_two_load_calibration_s, &
+      relicore_calibrated_temperature, relicore_calibrated_temperature_s, &
+      relicore_calibrated_brightness_temperature, &
+      relicore_calibrated_brightness_temperature_s, relicore_two_load_calibration_f32, &
+      relicore_two_load_calibration_f32_s, relicore_calibrated_temperature_f32, &
+      relicore_calibrated_temperature_f32_s, relicore_calibrated_brightness_temperature_f32, &
+      relicore_calibrated_brightness_temperature_f32_s, relicore_status_message, &
+      relicore_version
+
+  ! ---------------------------------------------------------------- types
+  ! struct relicore_two_load_calibration { double frequency_hz; double gain; double offset; };
+  ! The gain and offset of a two-load calibration at one frequency: reading = gain * J +
+  ! offset, J the Rayleigh-Jeans brightness temperature in K. A plain value the caller owns.
+  type, bind(C), public :: relicore_two_load_calibration
+    real(c_double) :: frequency_hz  ! channel frequency in Hz
+    real(c_double) :: gain          ! reading units per K of brightness temperature J
+    real(c_double) :: offset        ! reading units (the reading for J = 0)
+  end type relicore_two_load_calibration
+
+  ! struct relicore_two_load_calibration_f32 { float frequency_hz; float gain; float offset; };
+  type, bind(C), public :: relicore_two_load_calibration_f32
+    real(c_float) :: frequency_hz  ! channel frequency in Hz
+    real(c_float) :: gain          ! reading units per K of brightness temperature J
+    real(c_float) :: offset        ! reading units (the reading for J = 0)
+  end type relicore_two_load_calibration_f32
+
+  ! The calibration from two loads, under the name of its type (see the conventions above).
+  interface relicore_two_load_calibration
+    module procedure make_two_load_calibration
+  end interface relicore_two_load_calibration
+
+  interface relicore_two_load_calibration_f32
+    module procedure make_two_load_calibration_f32
+  end interface relicore_two_load_calibration_f32
+
+  ! Longest C string read by c_string (the library's strings are a few dozen characters).
+  integer, parameter :: max_c_string = 4096
+
+  ! ---------------------------------------------------------------- raw C interfaces (private)
+  ! One per function of include/relicore.h, its C prototype above it; checked mechanically
+  ! against the header by tests/fortran/check_interfaces.py.
+  interface
+    ! const char *relicore_status_message(int32_t status);
+    function c_status_message(status) bind(C, name='relicore_status_message') result(message)
+      import :: c_int32_t, c_ptr
+      integer(c_int32_t), value :: status
+      type(c_ptr) :: message
+    end function c_status_message
+    ! const char *relicore_version(void);
+    function c_version() bind(C, name='relicore_version') result(version)
+      import :: c_ptr
+      type(c_ptr) :: version
+    end function c_version
+
+    ! int32_t relicore_spectral_radiance_wavelength(double wavelength_m, double temperature_k,
+    !     double *out);
+    function c_spectral_radiance_wavelength(wavelength_m, temperature_k, out) &
+        bind(C, name='relicore_spectral_radiance_wavelength') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: wavelength_m, temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_spectral_radiance_wavelength
+    ! int32_t relicore_spectral_radiance_frequency(double frequency_hz, double temperature_k,
+    !     double *out);
+    function c_spectral_radiance_frequency(frequency_hz, temperature_k, out) &
+        bind(C, name='relicore_spectral_radiance_frequency') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: frequency_hz, temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_spectral_radiance_frequency
+    ! int32_t relicore_spectral_radiance_wavenumber(double wavenumber_per_m,
+    !     double temperature_k, double *out);
+    function c_spectral_radiance_wavenumber(wavenumber_per_m, temperature_k, out) &
+        bind(C, name='relicore_spectral_radiance_wavenumber') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: wavenumber_per_m, temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_spectral_radiance_wavenumber
+    ! int32_t relicore_photon_radiance_wavelength(double wavelength_m, double temperature_k,
+    !     double *out);
+    function c_photon_radiance_wavelength(wavelength_m, temperature_k, out) &
+        bind(C, name='relicore_photon_radiance_wavelength') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: wavelength_m, temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_photon_radiance_wavelength
+    ! int32_t relicore_photon_radiance_frequency(double frequency_hz, double temperature_k,
+    !     double *out);
+    function c_photon_radiance_frequency(frequency_hz, temperature_k, out) &
+        bind(C, name='relicore_photon_radiance_frequency') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: frequency_hz, temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_photon_radiance_frequency
+    ! int32_t relicore_photon_radiance_wavenumber(double wavenumber_per_m,
+    !     double temperature_k, double *out);
+    function c_photon_radiance_wavenumber(wavenumber_per_m, temperature_k, out) &
+        bind(C, name='relicore_photon_radiance_wavenumber') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: wavenumber_per_m, temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_photon_radiance_wavenumber
+    ! int32_t relicore_radiance_temperature_derivative_wavelength(double wavelength_m,
+    !     double temperature_k, double *out);
+    function c_radiance_temperature_derivative_wavelength(wavelength_m, temperature_k, out) &
+        bind(C, name='relicore_radiance_temperature_derivative_wavelength') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: wavelength_m, temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_radiance_temperature_derivative_wavelength
+    ! int32_t relicore_radiance_temperature_derivative_frequency(double frequency_hz,
+    !     double temperature_k, double *out);
+    function c_radiance_temperature_derivative_frequency(frequency_hz, temperature_k, out) &
+        bind(C, name='relicore_radiance_temperature_derivative_frequency') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: frequency_hz, temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_radiance_temperature_derivative_frequency
+    ! int32_t relicore_radiant_exitance(double temperature_k, double *out);
+    function c_radiant_exitance(temperature_k, out) &
+        bind(C, name='relicore_radiant_exitance') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_radiant_exitance
+    ! int32_t relicore_photon_exitance(double temperature_k, double *out);
+    function c_photon_exitance(temperature_k, out) &
+        bind(C, name='relicore_photon_exitance') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_photon_exitance
+    ! int32_t relicore_peak_wavelength(double temperature_k, double *out);
+    function c_peak_wavelength(temperature_k, out) &
+        bind(C, name='relicore_peak_wavelength') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_peak_wavelength
+    ! int32_t relicore_peak_frequency(double temperature_k, double *out);
+    function c_peak_frequency(temperature_k, out) &
+        bind(C, name='relicore_peak_frequency') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_peak_frequency
+    ! int32_t relicore_peak_wavenumber(double temperature_k, double *out);
+    function c_peak_wavenumber(temperature_k, out) &
+        bind(C, name='relicore_peak_wavenumber') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_peak_wavenumber
+    ! int32_t relicore_photon_peak_wavelength(double temperature_k, double *out);
+    function c_photon_peak_wavelength(temperature_k, out) &
+        bind(C, name='relicore_photon_peak_wavelength') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_photon_peak_wavelength
+    ! int32_t relicore_photon_peak_frequency(double temperature_k, double *out);
+    function c_photon_peak_frequency(temperature_k, out) &
+        bind(C, name='relicore_photon_peak_frequency') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_photon_peak_frequency
+    ! int32_t relicore_temperature_from_peak_wavelength(double wavelength_m, double *out);
+    function c_temperature_from_peak_wavelength(wavelength_m, out) &
+        bind(C, name='relicore_temperature_from_peak_wavelength') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: wavelength_m
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_temperature_from_peak_wavelength
+    ! int32_t relicore_temperature_from_peak_frequency(double frequency_hz, double *out);
+    function c_temperature_from_peak_frequency(frequency_hz, out) &
+        bind(C, name='relicore_temperature_from_peak_frequency') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: frequency_hz
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_temperature_from_peak_frequency
+    ! int32_t relicore_band_fraction_wavelength(double lower_m, double upper_m,
+    !     double temperature_k, double *out);
+    function c_band_fraction_wavelength(lower_m, upper_m, temperature_k, out) &
+        bind(C, name='relicore_band_fraction_wavelength') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: lower_m, upper_m, temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_band_fraction_wavelength
+    ! int32_t relicore_band_radiance_wavelength(double lower_m, double upper_m,
+    !     double temperature_k, double *out);
+    function c_band_radiance_wavelength(lower_m, upper_m, temperature_k, out) &
+        bind(C, name='relicore_band_radiance_wavelength') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: lower_m, upper_m, temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_band_radiance_wavelength
+    ! int32_t relicore_band_photon_radiance_wavelength(double lower_m, double upper_m,
+    !     double temperature_k, double *out);
+    function c_band_photon_radiance_wavelength(lower_m, upper_m, temperature_k, out) &
+        bind(C, name='relicore_band_photon_radiance_wavelength') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: lower_m, upper_m, temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_band_photon_radiance_wavelength
+    ! int32_t relicore_band_radiance_frequency(double lower_hz, double upper_hz,
+    !     double temperature_k, double *out);
+    function c_band_radiance_frequency(lower_hz, upper_hz, temperature_k, out) &
+        bind(C, name='relicore_band_radiance_frequency') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: lower_hz, upper_hz, temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_band_radiance_frequency
+    ! int32_t relicore_temperature_from_band_radiance_wavelength(double lower_m,
+    !     double upper_m, double radiance, double *out);
+    function c_temperature_from_band_radiance_wavelength(lower_m, upper_m, radiance, out) &
+        bind(C, name='relicore_temperature_from_band_radiance_wavelength') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: lower_m, upper_m, radiance
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_temperature_from_band_radiance_wavelength
+    ! int32_t relicore_brightness_temperature_wavelength(double wavelength_m,
+    !     double spectral_radiance, double *out);
+    function c_brightness_temperature_wavelength(wavelength_m, spectral_radiance, out) &
+        bind(C, name='relicore_brightness_temperature_wavelength') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: wavelength_m, spectral_radiance
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_brightness_temperature_wavelength
+    ! int32_t relicore_brightness_temperature_frequency(double frequency_hz,
+    !     double spectral_radiance, double *out);
+    function c_brightness_temperature_frequency(frequency_hz, spectral_radiance, out) &
+        bind(C, name='relicore_brightness_temperature_frequency') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: frequency_hz, spectral_radiance
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_brightness_temperature_frequency
+    ! int32_t relicore_rayleigh_jeans_temperature(double frequency_hz,
+    !     double spectral_radiance, double *out);
+    function c_rayleigh_jeans_temperature(frequency_hz, spectral_radiance, out) &
+        bind(C, name='relicore_rayleigh_jeans_temperature') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: frequency_hz, spectral_radiance
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_rayleigh_jeans_temperature
+    ! int32_t relicore_ratio_temperature(double wavelength_1_m, double wavelength_2_m,
+    !     double radiance_ratio, double emissivity_ratio, double *out);
+    function c_ratio_temperature(wavelength_1_m, wavelength_2_m, radiance_ratio, &
+        emissivity_ratio, out) &
+        bind(C, name='relicore_ratio_temperature') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: wavelength_1_m, wavelength_2_m, radiance_ratio, emissivity_ratio
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_ratio_temperature
+    ! int32_t relicore_thermodynamic_to_rayleigh_jeans_factor(double frequency_hz,
+    !     double cmb_temperature_k, double *out);
+    function c_thermodynamic_to_rayleigh_jeans_factor(frequency_hz, cmb_temperature_k, out) &
+        bind(C, name='relicore_thermodynamic_to_rayleigh_jeans_factor') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: frequency_hz, cmb_temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_thermodynamic_to_rayleigh_jeans_factor
+    ! int32_t relicore_kcmb_to_mjy_per_sr(double frequency_hz, double cmb_temperature_k,
+    !     double *out);
+    function c_kcmb_to_mjy_per_sr(frequency_hz, cmb_temperature_k, out) &
+        bind(C, name='relicore_kcmb_to_mjy_per_sr') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: frequency_hz, cmb_temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_kcmb_to_mjy_per_sr
+    ! int32_t relicore_thermal_sz_spectral_shape(double frequency_hz,
+    !     double cmb_temperature_k, double *out);
+    function c_thermal_sz_spectral_shape(frequency_hz, cmb_temperature_k, out) &
+        bind(C, name='relicore_thermal_sz_spectral_shape') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: frequency_hz, cmb_temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_thermal_sz_spectral_shape
+    ! int32_t relicore_thermal_sz_temperature_shape(double frequency_hz,
+    !     double cmb_temperature_k, double *out);
+    function c_thermal_sz_temperature_shape(frequency_hz, cmb_temperature_k, out) &
+        bind(C, name='relicore_thermal_sz_temperature_shape') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: frequency_hz, cmb_temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_thermal_sz_temperature_shape
+    ! int32_t relicore_thermal_sz_null_frequency(double cmb_temperature_k, double *out);
+    function c_thermal_sz_null_frequency(cmb_temperature_k, out) &
+        bind(C, name='relicore_thermal_sz_null_frequency') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: cmb_temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_thermal_sz_null_frequency
+    ! int32_t relicore_spectral_radiance_wavelength_array(const double *wavelengths_m,
+    !     size_t n, double temperature_k, double *out);
+    function c_spectral_radiance_wavelength_array(wavelengths_m, n, temperature_k, out) &
+        bind(C, name='relicore_spectral_radiance_wavelength_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: wavelengths_m(*)
+      integer(c_size_t), value :: n
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_spectral_radiance_wavelength_array
+    ! int32_t relicore_spectral_radiance_frequency_array(const double *frequencies_hz,
+    !     size_t n, double temperature_k, double *out);
+    function c_spectral_radiance_frequency_array(frequencies_hz, n, temperature_k, out) &
+        bind(C, name='relicore_spectral_radiance_frequency_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: frequencies_hz(*)
+      integer(c_size_t), value :: n
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_spectral_radiance_frequency_array
+    ! int32_t relicore_spectral_radiance_wavenumber_array(const double *wavenumbers_per_m,
+    !     size_t n, double temperature_k, double *out);
+    function c_spectral_radiance_wavenumber_array(wavenumbers_per_m, n, temperature_k, out) &
+        bind(C, name='relicore_spectral_radiance_wavenumber_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: wavenumbers_per_m(*)
+      integer(c_size_t), value :: n
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_spectral_radiance_wavenumber_array
+    ! int32_t relicore_photon_radiance_wavelength_array(const double *wavelengths_m, size_t n,
+    !     double temperature_k, double *out);
+    function c_photon_radiance_wavelength_array(wavelengths_m, n, temperature_k, out) &
+        bind(C, name='relicore_photon_radiance_wavelength_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: wavelengths_m(*)
+      integer(c_size_t), value :: n
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_photon_radiance_wavelength_array
+    ! int32_t relicore_photon_radiance_frequency_array(const double *frequencies_hz, size_t n,
+    !     double temperature_k, double *out);
+    function c_photon_radiance_frequency_array(frequencies_hz, n, temperature_k, out) &
+        bind(C, name='relicore_photon_radiance_frequency_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: frequencies_hz(*)
+      integer(c_size_t), value :: n
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_photon_radiance_frequency_array
+    ! int32_t relicore_photon_radiance_wavenumber_array(const double *wavenumbers_per_m,
+    !     size_t n, double temperature_k, double *out);
+    function c_photon_radiance_wavenumber_array(wavenumbers_per_m, n, temperature_k, out) &
+        bind(C, name='relicore_photon_radiance_wavenumber_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: wavenumbers_per_m(*)
+      integer(c_size_t), value :: n
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_photon_radiance_wavenumber_array
+    ! int32_t relicore_radiance_temperature_derivative_wavelength_array(
+    !     const double *wavelengths_m, size_t n, double temperature_k, double *out);
+    function c_radiance_temperature_derivative_wavelength_array(wavelengths_m, n, &
+        temperature_k, out) &
+        bind(C, name='relicore_radiance_temperature_derivative_wavelength_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: wavelengths_m(*)
+      integer(c_size_t), value :: n
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_radiance_temperature_derivative_wavelength_array
+    ! int32_t relicore_radiance_temperature_derivative_frequency_array(
+    !     const double *frequencies_hz, size_t n, double temperature_k, double *out);
+    function c_radiance_temperature_derivative_frequency_array(frequencies_hz, n, &
+        temperature_k, out) &
+        bind(C, name='relicore_radiance_temperature_derivative_frequency_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: frequencies_hz(*)
+      integer(c_size_t), value :: n
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_radiance_temperature_derivative_frequency_array
+    ! int32_t relicore_brightness_temperature_wavelength_array(double wavelength_m,
+    !     const double *spectral_radiance, size_t n, double *out);
+    function c_brightness_temperature_wavelength_array(wavelength_m, spectral_radiance, n, &
+        out) &
+        bind(C, name='relicore_brightness_temperature_wavelength_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), value :: wavelength_m
+      real(c_double), intent(in) :: spectral_radiance(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_brightness_temperature_wavelength_array
+    ! int32_t relicore_brightness_temperature_frequency_array(double frequency_hz,
+    !     const double *spectral_radiance, size_t n, double *out);
+    function c_brightness_temperature_frequency_array(frequency_hz, spectral_radiance, n, out) &
+        bind(C, name='relicore_brightness_temperature_frequency_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), value :: frequency_hz
+      real(c_double), intent(in) :: spectral_radiance(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_brightness_temperature_frequency_array
+    ! int32_t relicore_spectral_radiance_wavelength_array_f32(const float *wavelengths_m,
+    !     size_t n, float temperature_k, float *out);
+    function c_spectral_radiance_wavelength_array_f32(wavelengths_m, n, temperature_k, out) &
+        bind(C, name='relicore_spectral_radiance_wavelength_array_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t
+      real(c_float), intent(in) :: wavelengths_m(*)
+      integer(c_size_t), value :: n
+      real(c_float), value :: temperature_k
+      real(c_float), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_spectral_radiance_wavelength_array_f32
+    ! int32_t relicore_spectral_radiance_frequency_array_f32(const float *frequencies_hz,
+    !     size_t n, float temperature_k, float *out);
+    function c_spectral_radiance_frequency_array_f32(frequencies_hz, n, temperature_k, out) &
+        bind(C, name='relicore_spectral_radiance_frequency_array_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t
+      real(c_float), intent(in) :: frequencies_hz(*)
+      integer(c_size_t), value :: n
+      real(c_float), value :: temperature_k
+      real(c_float), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_spectral_radiance_frequency_array_f32
+    ! int32_t relicore_spectral_radiance_wavenumber_array_f32(const float *wavenumbers_per_m,
+    !     size_t n, float temperature_k, float *out);
+    function c_spectral_radiance_wavenumber_array_f32(wavenumbers_per_m, n, temperature_k, &
+        out) &
+        bind(C, name='relicore_spectral_radiance_wavenumber_array_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t
+      real(c_float), intent(in) :: wavenumbers_per_m(*)
+      integer(c_size_t), value :: n
+      real(c_float), value :: temperature_k
+      real(c_float), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_spectral_radiance_wavenumber_array_f32
+    ! int32_t relicore_spectral_radiance_wavelength_f32(float wavelength_m,
+    !     float temperature_k, float *out);
+    function c_spectral_radiance_wavelength_f32(wavelength_m, temperature_k, out) &
+        bind(C, name='relicore_spectral_radiance_wavelength_f32') result(status)
+      import :: c_float, c_int32_t
+      real(c_float), value :: wavelength_m, temperature_k
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_spectral_radiance_wavelength_f32
+    ! int32_t relicore_spectral_radiance_frequency_f32(float frequency_hz,
+    !     float temperature_k, float *out);
+    function c_spectral_radiance_frequency_f32(frequency_hz, temperature_k, out) &
+        bind(C, name='relicore_spectral_radiance_frequency_f32') result(status)
+      import :: c_float, c_int32_t
+      real(c_float), value :: frequency_hz, temperature_k
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_spectral_radiance_frequency_f32
+    ! int32_t relicore_spectral_radiance_wavenumber_f32(float wavenumber_per_m,
+    !     float temperature_k, float *out);
+    function c_spectral_radiance_wavenumber_f32(wavenumber_per_m, temperature_k, out) &
+        bind(C, name='relicore_spectral_radiance_wavenumber_f32') result(status)
+      import :: c_float, c_int32_t
+      real(c_float), value :: wavenumber_per_m, temperature_k
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_spectral_radiance_wavenumber_f32
+    ! int32_t relicore_brightness_temperature_wavelength_f32(float wavelength_m,
+    !     float spectral_radiance, float *out);
+    function c_brightness_temperature_wavelength_f32(wavelength_m, spectral_radiance, out) &
+        bind(C, name='relicore_brightness_temperature_wavelength_f32') result(status)
+      import :: c_float, c_int32_t
+      real(c_float), value :: wavelength_m, spectral_radiance
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_brightness_temperature_wavelength_f32
+    ! int32_t relicore_brightness_temperature_frequency_f32(float frequency_hz,
+    !     float spectral_radiance, float *out);
+    function c_brightness_temperature_frequency_f32(frequency_hz, spectral_radiance, out) &
+        bind(C, name='relicore_brightness_temperature_frequency_f32') result(status)
+      import :: c_float, c_int32_t
+      real(c_float), value :: frequency_hz, spectral_radiance
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_brightness_temperature_frequency_f32
+    ! int32_t relicore_band_radiance_wavelength_f32(float lower_m, float upper_m,
+    !     float temperature_k, float *out);
+    function c_band_radiance_wavelength_f32(lower_m, upper_m, temperature_k, out) &
+        bind(C, name='relicore_band_radiance_wavelength_f32') result(status)
+      import :: c_float, c_int32_t
+      real(c_float), value :: lower_m, upper_m, temperature_k
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_band_radiance_wavelength_f32
+    ! int32_t relicore_two_load_calibration(double frequency_hz, double reading_hot,
+    !     double temperature_hot_k, double reading_cold, double temperature_cold_k,
+    !     struct relicore_two_load_calibration *out);
+    function c_two_load_calibration(frequency_hz, reading_hot, temperature_hot_k, &
+        reading_cold, temperature_cold_k, out) &
+        bind(C, name='relicore_two_load_calibration') result(status)
+      import :: c_double, c_int32_t, relicore_two_load_calibration
+      real(c_double), value :: frequency_hz, reading_hot, temperature_hot_k, reading_cold, &
+          temperature_cold_k
+      type(relicore_two_load_calibration), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_two_load_calibration
+    ! int32_t relicore_calibrated_temperature(
+    !     const struct relicore_two_load_calibration *calibration, double reading,
+    !     double *out);
+    function c_calibrated_temperature(calibration, reading, out) &
+        bind(C, name='relicore_calibrated_temperature') result(status)
+      import :: c_double, c_int32_t, relicore_two_load_calibration
+      type(relicore_two_load_calibration), intent(in) :: calibration
+      real(c_double), value :: reading
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_calibrated_temperature
+    ! int32_t relicore_calibrated_brightness_temperature(
+    !     const struct relicore_two_load_calibration *calibration, double reading,
+    !     double *out);
+    function c_calibrated_brightness_temperature(calibration, reading, out) &
+        bind(C, name='relicore_calibrated_brightness_temperature') result(status)
+      import :: c_double, c_int32_t, relicore_two_load_calibration
+      type(relicore_two_load_calibration), intent(in) :: calibration
+      real(c_double), value :: reading
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_calibrated_brightness_temperature
+    ! int32_t relicore_two_load_calibration_f32(float frequency_hz, float reading_hot,
+    !     float temperature_hot_k, float reading_cold, float temperature_cold_k,
+    !     struct relicore_two_load_calibration_f32 *out);
+    function c_two_load_calibration_f32(frequency_hz, reading_hot, temperature_hot_k, &
+        reading_cold, temperature_cold_k, out) &
+        bind(C, name='relicore_two_load_calibration_f32') result(status)
+      import :: c_float, c_int32_t, relicore_two_load_calibration_f32
+      real(c_float), value :: frequency_hz, reading_hot, temperature_hot_k, reading_cold, &
+          temperature_cold_k
+      type(relicore_two_load_calibration_f32), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_two_load_calibration_f32
+    ! int32_t relicore_calibrated_temperature_f32(
+    !     const struct relicore_two_load_calibration_f32 *calibration, float reading,
+    !     float *out);
+    function c_calibrated_temperature_f32(calibration, reading, out) &
+        bind(C, name='relicore_calibrated_temperature_f32') result(status)
+      import :: c_float, c_int32_t, relicore_two_load_calibration_f32
+      type(relicore_two_load_calibration_f32), intent(in) :: calibration
+      real(c_float), value :: reading
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_calibrated_temperature_f32
+    ! int32_t relicore_calibrated_brightness_temperature_f32(
+    !     const struct relicore_two_load_calibration_f32 *calibration, float reading,
+    !     float *out);
+    function c_calibrated_brightness_temperature_f32(calibration, reading, out) &
+        bind(C, name='relicore_calibrated_brightness_temperature_f32') result(status)
+      import :: c_float, c_int32_t, relicore_two_load_calibration_f32
+      type(relicore_two_load_calibration_f32), intent(in) :: calibration
+      real(c_float), value :: reading
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_calibrated_brightness_temperature_f32
+    ! int32_t relicore_response_weighted_radiance(const double *wavelengths_m,
+    !     size_t n_wavelengths, const double *response, size_t n_response,
+    !     double temperature_k, double *out);
+    function c_response_weighted_radiance(wavelengths_m, n_wavelengths, response, &
+        n_response, temperature_k, out) &
+        bind(C, name='relicore_response_weighted_radiance') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: wavelengths_m(*)
+      integer(c_size_t), value :: n_wavelengths
+      real(c_double), intent(in) :: response(*)
+      integer(c_size_t), value :: n_response
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_response_weighted_radiance
+    ! int32_t relicore_temperature_from_response_weighted_radiance(
+    !     const double *wavelengths_m, size_t n_wavelengths, const double *response,
+    !     size_t n_response, double radiance, double *out);
+    function c_temperature_from_response_weighted_radiance(wavelengths_m, n_wavelengths, &
+        response, n_response, radiance, out) &
+        bind(C, name='relicore_temperature_from_response_weighted_radiance') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: wavelengths_m(*)
+      integer(c_size_t), value :: n_wavelengths
+      real(c_double), intent(in) :: response(*)
+      integer(c_size_t), value :: n_response
+      real(c_double), value :: radiance
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_temperature_from_response_weighted_radiance
+    ! int32_t relicore_response_weighted_radiance_f32(const float *wavelengths_m,
+    !     size_t n_wavelengths, const float *response, size_t n_response, float temperature_k,
+    !     float *out);
+    function c_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, response, &
+        n_response, temperature_k, out) &
+        bind(C, name='relicore_response_weighted_radiance_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t
+      real(c_float), intent(in) :: wavelengths_m(*)
+      integer(c_size_t), value :: n_wavelengths
+      real(c_float), intent(in) :: response(*)
+      integer(c_size_t), value :: n_response
+      real(c_float), value :: temperature_k
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_response_weighted_radiance_f32
+    ! int32_t relicore_temperature_from_response_weighted_radiance_f32(
+    !     const float *wavelengths_m, size_t n_wavelengths, const float *response,
+    !     size_t n_response, float radiance, float *out);
+    function c_temperature_from_response_weighted_radiance_f32(wavelengths_m, &
+        n_wavelengths, response, n_response, radiance, out) &
+        bind(C, name='relicore_temperature_from_response_weighted_radiance_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t
+      real(c_float), intent(in) :: wavelengths_m(*)
+      integer(c_size_t), value :: n_wavelengths
+      real(c_float), intent(in) :: response(*)
+      integer(c_size_t), value :: n_response
+      real(c_float), value :: radiance
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_temperature_from_response_weighted_radiance_f32
+  end interface
+
+contains
+
+  ! ================================================================ status, version, helpers
+
+  ! The English message of a status code (static text of the C library); "unknown status" for
+  ! a number that is not a relicore status code.
+  function relicore_status_message(status) result(message)
+    integer(c_int32_t), intent(in) :: status
+    character(len=:), allocatable :: message
+    message = c_string(c_status_message(status))
+  end function relicore_status_message
+
+  ! The version of the C library, "major.minor.patch".
+  function relicore_version() result(version)
+    character(len=:), allocatable :: version
+    version = c_string(c_version())
+  end function relicore_version
+
+  ! A Fortran copy of a NUL-terminated C string ('' for a NULL pointer).
+  function c_string(pointer) result(string)
+    type(c_ptr), intent(in) :: pointer
+    character(len=:), allocatable :: string
+    character(kind=c_char), pointer :: chars(:)
+    integer :: i, length
+    if (.not. c_associated(pointer)) then
+      string = ''
+      return
+    end if
+    call c_f_pointer(pointer, chars, [max_c_string])
+    length = max_c_string
+    do i = 1, max_c_string
+      if (chars(i) == c_null_char) then
+        length = i - 1
+        exit
+      end if
+    end do
+    allocate (character(len=length) :: string)
+    do i = 1, length
+      string(i:i) = chars(i)
+    end do
+  end function c_string
+
+  ! Hands a status code to the caller's stat, or stops on failure when stat is absent.
+  subroutine report(code, routine, stat)
+    integer(c_int32_t), intent(in) :: code
+    character(len=*), intent(in) :: routine
+    integer(c_int32_t), intent(out), optional :: stat
+    character(len=12) :: number
+    if (present(stat)) then
+      stat = code
+    else if (code /= RELICORE_OK) then
+      write (number, '(i0)') code
+      error stop routine // ': ' // relicore_status_message(code) // ' (status ' // &
+          trim(number) // ')'
+    end if
+  end subroutine report
+
+  ! A quiet NaN of each kind, the value of every output on failure.
+  elemental function nan64() result(x)
+    real(c_double) :: x
+    x = ieee_value(0.0_c_double, ieee_quiet_nan)
+  end function nan64
+
+  elemental function nan32() result(x)
+    real(c_float) :: x
+    x = ieee_value(0.0_c_float, ieee_quiet_nan)
+  end function nan32
+
+  ! ================================================================ scalar functions (double)
+
+  ! Planck spectral radiance per unit wavelength.
+  !   wavelength_m: wavelength in m, > 0
+  !   temperature_k: temperature in K, > 0
+  ! Result: B_lambda in W m-2 sr-1 m-1; NaN on failure.
+  impure elemental function relicore_spectral_radiance_wavelength(wavelength_m, &
+      temperature_k) result(res)
+    real(c_double), intent(in) :: wavelength_m, temperature_k
+    real(c_double) :: res
+    if (c_spectral_radiance_wavelength(wavelength_m, temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_spectral_radiance_wavelength
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_spectral_radiance_wavelength_s(wavelength_m, &
+      temperature_k, out, stat)
+    real(c_double), intent(in) :: wavelength_m, temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_spectral_radiance_wavelength(wavelength_m, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_spectral_radiance_wavelength', stat)
+  end subroutine relicore_spectral_radiance_wavelength_s
+
+  ! Planck spectral radiance per unit frequency.
+  !   frequency_hz: frequency in Hz, > 0
+  !   temperature_k: temperature in K, > 0
+  ! Result: B_nu in W m-2 sr-1 Hz-1; NaN on failure.
+  impure elemental function relicore_spectral_radiance_frequency(frequency_hz, &
+      temperature_k) result(res)
+    real(c_double), intent(in) :: frequency_hz, temperature_k
+    real(c_double) :: res
+    if (c_spectral_radiance_frequency(frequency_hz, temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_spectral_radiance_frequency
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_spectral_radiance_frequency_s(frequency_hz, &
+      temperature_k, out, stat)
+    real(c_double), intent(in) :: frequency_hz, temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_spectral_radiance_frequency(frequency_hz, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_spectral_radiance_frequency', stat)
+  end subroutine relicore_spectral_radiance_frequency_s
+
+  ! Planck spectral radiance per unit wavenumber (m-1).
+  !   wavenumber_per_m: wavenumber in m-1, > 0
+  !   temperature_k: temperature in K, > 0
+  ! Result: B_wavenumber in W m-2 sr-1 m; NaN on failure.
+  impure elemental function relicore_spectral_radiance_wavenumber(wavenumber_per_m, &
+      temperature_k) result(res)
+    real(c_double), intent(in) :: wavenumber_per_m, temperature_k
+    real(c_double) :: res
+    if (c_spectral_radiance_wavenumber(wavenumber_per_m, temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_spectral_radiance_wavenumber
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_spectral_radiance_wavenumber_s(wavenumber_per_m, &
+      temperature_k, out, stat)
+    real(c_double), intent(in) :: wavenumber_per_m, temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_spectral_radiance_wavenumber(wavenumber_per_m, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_spectral_radiance_wavenumber', stat)
+  end subroutine relicore_spectral_radiance_wavenumber_s
+
+  ! Planck photon spectral radiance per unit wavelength.
+  !   wavelength_m: wavelength in m, > 0
+  !   temperature_k: temperature in K, > 0
+  ! Result: N_lambda in photons s-1 m-2 sr-1 m-1; NaN on failure.
+  impure elemental function relicore_photon_radiance_wavelength(wavelength_m, &
+      temperature_k) result(res)
+    real(c_double), intent(in) :: wavelength_m, temperature_k
+    real(c_double) :: res
+    if (c_photon_radiance_wavelength(wavelength_m, temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_photon_radiance_wavelength
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_photon_radiance_wavelength_s(wavelength_m, &
+      temperature_k, out, stat)
+    real(c_double), intent(in) :: wavelength_m, temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_photon_radiance_wavelength(wavelength_m, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_photon_radiance_wavelength', stat)
+  end subroutine relicore_photon_radiance_wavelength_s
+
+  ! Planck photon spectral radiance per unit frequency.
+  !   frequency_hz: frequency in Hz, > 0
+  !   temperature_k: temperature in K, > 0
+  ! Result: N_nu in photons s-1 m-2 sr-1 Hz-1; NaN on failure.
+  impure elemental function relicore_photon_radiance_frequency(frequency_hz, &
+      temperature_k) result(res)
+    real(c_double), intent(in) :: frequency_hz, temperature_k
+    real(c_double) :: res
+    if (c_photon_radiance_frequency(frequency_hz, temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_photon_radiance_frequency
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_photon_radiance_frequency_s(frequency_hz, &
+      temperature_k, out, stat)
+    real(c_double), intent(in) :: frequency_hz, temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_photon_radiance_frequency(frequency_hz, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_photon_radiance_frequency', stat)
+  end subroutine relicore_photon_radiance_frequency_s
+
+  ! Planck photon spectral radiance per unit wavenumber.
+  !   wavenumber_per_m: wavenumber in m-1, > 0
+  !   temperature_k: temperature in K, > 0
+  ! Result: photons s-1 m-2 sr-1 m; NaN on failure.
+  impure elemental function relicore_photon_radiance_wavenumber(wavenumber_per_m, &
+      temperature_k) result(res)
+    real(c_double), intent(in) :: wavenumber_per_m, temperature_k
+    real(c_double) :: res
+    if (c_photon_radiance_wavenumber(wavenumber_per_m, temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_photon_radiance_wavenumber
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_photon_radiance_wavenumber_s(wavenumber_per_m, &
+      temperature_k, out, stat)
+    real(c_double), intent(in) :: wavenumber_per_m, temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_photon_radiance_wavenumber(wavenumber_per_m, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_photon_radiance_wavenumber', stat)
+  end subroutine relicore_photon_radiance_wavenumber_s
+
+  ! Temperature derivative of the spectral radiance per unit wavelength.
+  !   wavelength_m: wavelength in m, > 0
+  !   temperature_k: temperature in K, > 0
+  ! Result: dB_lambda/dT in W m-2 sr-1 m-1 K-1; NaN on failure.
+  impure elemental function relicore_radiance_temperature_derivative_wavelength(wavelength_m, &
+      temperature_k) result(res)
+    real(c_double), intent(in) :: wavelength_m, temperature_k
+    real(c_double) :: res
+    if (c_radiance_temperature_derivative_wavelength(wavelength_m, temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_radiance_temperature_derivative_wavelength
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_radiance_temperature_derivative_wavelength_s( &
+      wavelength_m, temperature_k, out, stat)
+    real(c_double), intent(in) :: wavelength_m, temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_radiance_temperature_derivative_wavelength(wavelength_m, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_radiance_temperature_derivative_wavelength', stat)
+  end subroutine relicore_radiance_temperature_derivative_wavelength_s
+
+  ! Temperature derivative of the spectral radiance per unit frequency.
+  !   frequency_hz: frequency in Hz, > 0
+  !   temperature_k: temperature in K, > 0
+  ! Result: dB_nu/dT in W m-2 sr-1 Hz-1 K-1; NaN on failure.
+  impure elemental function relicore_radiance_temperature_derivative_frequency(frequency_hz, &
+      temperature_k) result(res)
+    real(c_double), intent(in) :: frequency_hz, temperature_k
+    real(c_double) :: res
+    if (c_radiance_temperature_derivative_frequency(frequency_hz, temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_radiance_temperature_derivative_frequency
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_radiance_temperature_derivative_frequency_s( &
+      frequency_hz, temperature_k, out, stat)
+    real(c_double), intent(in) :: frequency_hz, temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_radiance_temperature_derivative_frequency(frequency_hz, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_radiance_temperature_derivative_frequency', stat)
+  end subroutine relicore_radiance_temperature_derivative_frequency_s
+
+  ! Radiant exitance of a blackbody (Stefan-Boltzmann law).
+  !   temperature_k: temperature in K, > 0
+  ! Result: W m-2; NaN on failure.
+  impure elemental function relicore_radiant_exitance(temperature_k) result(res)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double) :: res
+    if (c_radiant_exitance(temperature_k, res) /= RELICORE_OK) res = nan64()
+  end function relicore_radiant_exitance
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_radiant_exitance_s(temperature_k, out, stat)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_radiant_exitance(temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_radiant_exitance', stat)
+  end subroutine relicore_radiant_exitance_s
+
+  ! Photon exitance of a blackbody.
+  !   temperature_k: temperature in K, > 0
+  ! Result: photons s-1 m-2; NaN on failure.
+  impure elemental function relicore_photon_exitance(temperature_k) result(res)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double) :: res
+    if (c_photon_exitance(temperature_k, res) /= RELICORE_OK) res = nan64()
+  end function relicore_photon_exitance
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_photon_exitance_s(temperature_k, out, stat)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_photon_exitance(temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_photon_exitance', stat)
+  end subroutine relicore_photon_exitance_s
+
+  ! Wavelength of the peak of B_lambda (Wien displacement law).
+  !   temperature_k: temperature in K, > 0
+  ! Result: m; NaN on failure.
+  impure elemental function relicore_peak_wavelength(temperature_k) result(res)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double) :: res
+    if (c_peak_wavelength(temperature_k, res) /= RELICORE_OK) res = nan64()
+  end function relicore_peak_wavelength
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_peak_wavelength_s(temperature_k, out, stat)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_peak_wavelength(temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_peak_wavelength', stat)
+  end subroutine relicore_peak_wavelength_s
+
+  ! Frequency of the peak of B_nu.
+  !   temperature_k: temperature in K, > 0
+  ! Result: Hz; NaN on failure.
+  impure elemental function relicore_peak_frequency(temperature_k) result(res)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double) :: res
+    if (c_peak_frequency(temperature_k, res) /= RELICORE_OK) res = nan64()
+  end function relicore_peak_frequency
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_peak_frequency_s(temperature_k, out, stat)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_peak_frequency(temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_peak_frequency', stat)
+  end subroutine relicore_peak_frequency_s
+
+  ! Wavenumber of the peak of the per-wavenumber radiance.
+  !   temperature_k: temperature in K, > 0
+  ! Result: m-1; NaN on failure.
+  impure elemental function relicore_peak_wavenumber(temperature_k) result(res)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double) :: res
+    if (c_peak_wavenumber(temperature_k, res) /= RELICORE_OK) res = nan64()
+  end function relicore_peak_wavenumber
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_peak_wavenumber_s(temperature_k, out, stat)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_peak_wavenumber(temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_peak_wavenumber', stat)
+  end subroutine relicore_peak_wavenumber_s
+
+  ! Wavelength of the peak of N_lambda (also the peak of lambda B_lambda).
+  !   temperature_k: temperature in K, > 0
+  ! Result: m; NaN on failure.
+  impure elemental function relicore_photon_peak_wavelength(temperature_k) result(res)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double) :: res
+    if (c_photon_peak_wavelength(temperature_k, res) /= RELICORE_OK) res = nan64()
+  end function relicore_photon_peak_wavelength
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_photon_peak_wavelength_s(temperature_k, out, stat)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_photon_peak_wavelength(temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_photon_peak_wavelength', stat)
+  end subroutine relicore_photon_peak_wavelength_s
+
+  ! Frequency of the peak of N_nu.
+  !   temperature_k: temperature in K, > 0
+  ! Result: Hz; NaN on failure.
+  impure elemental function relicore_photon_peak_frequency(temperature_k) result(res)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double) :: res
+    if (c_photon_peak_frequency(temperature_k, res) /= RELICORE_OK) res = nan64()
+  end function relicore_photon_peak_frequency
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_photon_peak_frequency_s(temperature_k, out, stat)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_photon_peak_frequency(temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_photon_peak_frequency', stat)
+  end subroutine relicore_photon_peak_frequency_s
+
+  ! Temperature whose B_lambda peaks at the given wavelength.
+  !   wavelength_m: wavelength of the B_lambda peak in m, > 0
+  ! Result: K; NaN on failure.
+  impure elemental function relicore_temperature_from_peak_wavelength(wavelength_m) result(res)
+    real(c_double), intent(in) :: wavelength_m
+    real(c_double) :: res
+    if (c_temperature_from_peak_wavelength(wavelength_m, res) /= RELICORE_OK) res = nan64()
+  end function relicore_temperature_from_peak_wavelength
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_temperature_from_peak_wavelength_s(wavelength_m, out, &
+      stat)
+    real(c_double), intent(in) :: wavelength_m
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_temperature_from_peak_wavelength(wavelength_m, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_temperature_from_peak_wavelength', stat)
+  end subroutine relicore_temperature_from_peak_wavelength_s
+
+  ! Temperature whose B_nu peaks at the given frequency.
+  !   frequency_hz: frequency of the B_nu peak in Hz, > 0
+  ! Result: K; NaN on failure.
+  impure elemental function relicore_temperature_from_peak_frequency(frequency_hz) result(res)
+    real(c_double), intent(in) :: frequency_hz
+    real(c_double) :: res
+    if (c_temperature_from_peak_frequency(frequency_hz, res) /= RELICORE_OK) res = nan64()
+  end function relicore_temperature_from_peak_frequency
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_temperature_from_peak_frequency_s(frequency_hz, out, &
+      stat)
+    real(c_double), intent(in) :: frequency_hz
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_temperature_from_peak_frequency(frequency_hz, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_temperature_from_peak_frequency', stat)
+  end subroutine relicore_temperature_from_peak_frequency_s
+
+  ! Fraction of the total radiance emitted between two wavelengths.
+  !   lower_m: lower band edge in m, >= 0
+  !   upper_m: upper band edge in m, > lower_m, may be +Inf
+  !   temperature_k: temperature in K, > 0
+  ! Result: fraction in [0, 1]; NaN on failure.
+  impure elemental function relicore_band_fraction_wavelength(lower_m, upper_m, &
+      temperature_k) result(res)
+    real(c_double), intent(in) :: lower_m, upper_m, temperature_k
+    real(c_double) :: res
+    if (c_band_fraction_wavelength(lower_m, upper_m, temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_band_fraction_wavelength
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_band_fraction_wavelength_s(lower_m, upper_m, &
+      temperature_k, out, stat)
+    real(c_double), intent(in) :: lower_m, upper_m, temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_band_fraction_wavelength(lower_m, upper_m, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_band_fraction_wavelength', stat)
+  end subroutine relicore_band_fraction_wavelength_s
+
+  ! Radiance emitted between two wavelengths.
+  !   lower_m: lower band edge in m, >= 0
+  !   upper_m: upper band edge in m, > lower_m, may be +Inf
+  !   temperature_k: temperature in K, > 0
+  ! Result: W m-2 sr-1; NaN on failure.
+  impure elemental function relicore_band_radiance_wavelength(lower_m, upper_m, &
+      temperature_k) result(res)
+    real(c_double), intent(in) :: lower_m, upper_m, temperature_k
+    real(c_double) :: res
+    if (c_band_radiance_wavelength(lower_m, upper_m, temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_band_radiance_wavelength
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_band_radiance_wavelength_s(lower_m, upper_m, &
+      temperature_k, out, stat)
+    real(c_double), intent(in) :: lower_m, upper_m, temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_band_radiance_wavelength(lower_m, upper_m, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_band_radiance_wavelength', stat)
+  end subroutine relicore_band_radiance_wavelength_s
+
+  ! Photon radiance emitted between two wavelengths.
+  !   lower_m: lower band edge in m, >= 0
+  !   upper_m: upper band edge in m, > lower_m, may be +Inf
+  !   temperature_k: temperature in K, > 0
+  ! Result: photons s-1 m-2 sr-1; NaN on failure.
+  impure elemental function relicore_band_photon_radiance_wavelength(lower_m, upper_m, &
+      temperature_k) result(res)
+    real(c_double), intent(in) :: lower_m, upper_m, temperature_k
+    real(c_double) :: res
+    if (c_band_photon_radiance_wavelength(lower_m, upper_m, temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_band_photon_radiance_wavelength
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_band_photon_radiance_wavelength_s(lower_m, upper_m, &
+      temperature_k, out, stat)
+    real(c_double), intent(in) :: lower_m, upper_m, temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_band_photon_radiance_wavelength(lower_m, upper_m, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_band_photon_radiance_wavelength', stat)
+  end subroutine relicore_band_photon_radiance_wavelength_s
+
+  ! Radiance emitted between two frequencies.
+  !   lower_hz: lower band edge in Hz, >= 0
+  !   upper_hz: upper band edge in Hz, > lower_hz, may be +Inf
+  !   temperature_k: temperature in K, > 0
+  ! Result: W m-2 sr-1; NaN on failure.
+  impure elemental function relicore_band_radiance_frequency(lower_hz, upper_hz, &
+      temperature_k) result(res)
+    real(c_double), intent(in) :: lower_hz, upper_hz, temperature_k
+    real(c_double) :: res
+    if (c_band_radiance_frequency(lower_hz, upper_hz, temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_band_radiance_frequency
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_band_radiance_frequency_s(lower_hz, upper_hz, &
+      temperature_k, out, stat)
+    real(c_double), intent(in) :: lower_hz, upper_hz, temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_band_radiance_frequency(lower_hz, upper_hz, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_band_radiance_frequency', stat)
+  end subroutine relicore_band_radiance_frequency_s
+
+  ! Temperature whose band radiance between two wavelengths is the given one.
+  !   lower_m: lower band edge in m, >= 0
+  !   upper_m: upper band edge in m, > lower_m, may be +Inf
+  !   radiance: band radiance in W m-2 sr-1, > 0
+  ! Result: K; NaN on failure.
+  impure elemental function relicore_temperature_from_band_radiance_wavelength(lower_m, &
+      upper_m, radiance) result(res)
+    real(c_double), intent(in) :: lower_m, upper_m, radiance
+    real(c_double) :: res
+    if (c_temperature_from_band_radiance_wavelength(lower_m, upper_m, radiance, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_temperature_from_band_radiance_wavelength
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_temperature_from_band_radiance_wavelength_s(lower_m, &
+      upper_m, radiance, out, stat)
+    real(c_double), intent(in) :: lower_m, upper_m, radiance
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_temperature_from_band_radiance_wavelength(lower_m, upper_m, radiance, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_temperature_from_band_radiance_wavelength', stat)
+  end subroutine relicore_temperature_from_band_radiance_wavelength_s
+
+  ! Brightness temperature from a spectral radiance per unit wavelength.
+  !   wavelength_m: wavelength in m, > 0
+  !   spectral_radiance: B_lambda in W m-2 sr-1 m-1, > 0
+  ! Result: K; NaN on failure.
+  impure elemental function relicore_brightness_temperature_wavelength(wavelength_m, &
+      spectral_radiance) result(res)
+    real(c_double), intent(in) :: wavelength_m, spectral_radiance
+    real(c_double) :: res
+    if (c_brightness_temperature_wavelength(wavelength_m, spectral_radiance, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_brightness_temperature_wavelength
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_brightness_temperature_wavelength_s(wavelength_m, &
+      spectral_radiance, out, stat)
+    real(c_double), intent(in) :: wavelength_m, spectral_radiance
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_brightness_temperature_wavelength(wavelength_m, spectral_radiance, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_brightness_temperature_wavelength', stat)
+  end subroutine relicore_brightness_temperature_wavelength_s
+
+  ! Brightness temperature from a spectral radiance per unit frequency.
+  !   frequency_hz: frequency in Hz, > 0
+  !   spectral_radiance: B_nu in W m-2 sr-1 Hz-1, > 0
+  ! Result: K; NaN on failure.
+  impure elemental function relicore_brightness_temperature_frequency(frequency_hz, &
+      spectral_radiance) result(res)
+    real(c_double), intent(in) :: frequency_hz, spectral_radiance
+    real(c_double) :: res
+    if (c_brightness_temperature_frequency(frequency_hz, spectral_radiance, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_brightness_temperature_frequency
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_brightness_temperature_frequency_s(frequency_hz, &
+      spectral_radiance, out, stat)
+    real(c_double), intent(in) :: frequency_hz, spectral_radiance
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_brightness_temperature_frequency(frequency_hz, spectral_radiance, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_brightness_temperature_frequency', stat)
+  end subroutine relicore_brightness_temperature_frequency_s
+
+  ! Rayleigh-Jeans temperature c**2 B_nu / (2 k nu**2).
+  !   frequency_hz: frequency in Hz, > 0
+  !   spectral_radiance: B_nu in W m-2 sr-1 Hz-1, > 0
+  ! Result: K; NaN on failure.
+  impure elemental function relicore_rayleigh_jeans_temperature(frequency_hz, &
+      spectral_radiance) result(res)
+    real(c_double), intent(in) :: frequency_hz, spectral_radiance
+    real(c_double) :: res
+    if (c_rayleigh_jeans_temperature(frequency_hz, spectral_radiance, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_rayleigh_jeans_temperature
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_rayleigh_jeans_temperature_s(frequency_hz, &
+      spectral_radiance, out, stat)
+    real(c_double), intent(in) :: frequency_hz, spectral_radiance
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_rayleigh_jeans_temperature(frequency_hz, spectral_radiance, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_rayleigh_jeans_temperature', stat)
+  end subroutine relicore_rayleigh_jeans_temperature_s
+
+  ! Two-colour (ratio) temperature.
+  !   wavelength_1_m: first wavelength in m, > 0
+  !   wavelength_2_m: second wavelength in m, > 0
+  !   radiance_ratio: L(lambda_1)/L(lambda_2), > 0
+  !   emissivity_ratio: emissivity(lambda_1)/emissivity(lambda_2), > 0
+  ! Result: K; NaN on failure.
+  impure elemental function relicore_ratio_temperature(wavelength_1_m, wavelength_2_m, &
+      radiance_ratio, emissivity_ratio) result(res)
+    real(c_double), intent(in) :: wavelength_1_m, wavelength_2_m, radiance_ratio, &
+        emissivity_ratio
+    real(c_double) :: res
+    if (c_ratio_temperature(wavelength_1_m, wavelength_2_m, radiance_ratio, emissivity_ratio, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_ratio_temperature
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_ratio_temperature_s(wavelength_1_m, wavelength_2_m, &
+      radiance_ratio, emissivity_ratio, out, stat)
+    real(c_double), intent(in) :: wavelength_1_m, wavelength_2_m, radiance_ratio, &
+        emissivity_ratio
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_ratio_temperature(wavelength_1_m, wavelength_2_m, radiance_ratio, &
+        emissivity_ratio, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_ratio_temperature', stat)
+  end subroutine relicore_ratio_temperature_s
+
+  ! Thermodynamic to Rayleigh-Jeans temperature conversion factor x**2 e**x/(e**x - 1)**2.
+  !   frequency_hz: frequency in Hz, > 0
+  !   cmb_temperature_k: CMB temperature T0 in K, > 0
+  ! Result: dT_RJ/dT_CMB, in (0, 1); NaN on failure.
+  impure elemental function relicore_thermodynamic_to_rayleigh_jeans_factor(frequency_hz, &
+      cmb_temperature_k) result(res)
+    real(c_double), intent(in) :: frequency_hz, cmb_temperature_k
+    real(c_double) :: res
+    if (c_thermodynamic_to_rayleigh_jeans_factor(frequency_hz, cmb_temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_thermodynamic_to_rayleigh_jeans_factor
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_thermodynamic_to_rayleigh_jeans_factor_s(frequency_hz, &
+      cmb_temperature_k, out, stat)
+    real(c_double), intent(in) :: frequency_hz, cmb_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_thermodynamic_to_rayleigh_jeans_factor(frequency_hz, cmb_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_thermodynamic_to_rayleigh_jeans_factor', stat)
+  end subroutine relicore_thermodynamic_to_rayleigh_jeans_factor_s
+
+  ! dB_nu/dT at the CMB temperature in MJy sr-1 K-1.
+  !   frequency_hz: frequency in Hz, > 0
+  !   cmb_temperature_k: CMB temperature T0 in K, > 0
+  ! Result: MJy sr-1 per K_CMB; NaN on failure.
+  impure elemental function relicore_kcmb_to_mjy_per_sr(frequency_hz, &
+      cmb_temperature_k) result(res)
+    real(c_double), intent(in) :: frequency_hz, cmb_temperature_k
+    real(c_double) :: res
+    if (c_kcmb_to_mjy_per_sr(frequency_hz, cmb_temperature_k, res) /= RELICORE_OK) res = nan64()
+  end function relicore_kcmb_to_mjy_per_sr
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_kcmb_to_mjy_per_sr_s(frequency_hz, cmb_temperature_k, &
+      out, stat)
+    real(c_double), intent(in) :: frequency_hz, cmb_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_kcmb_to_mjy_per_sr(frequency_hz, cmb_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_kcmb_to_mjy_per_sr', stat)
+  end subroutine relicore_kcmb_to_mjy_per_sr_s
+
+  ! Thermal Sunyaev-Zeldovich intensity shape g(x) = x**4 e**x/(e**x - 1)**2 (x coth(x/2) - 4).
+  !   frequency_hz: frequency in Hz, > 0
+  !   cmb_temperature_k: CMB temperature T0 in K, > 0
+  ! Result: g(x), dimensionless; NaN on failure.
+  impure elemental function relicore_thermal_sz_spectral_shape(frequency_hz, &
+      cmb_temperature_k) result(res)
+    real(c_double), intent(in) :: frequency_hz, cmb_temperature_k
+    real(c_double) :: res
+    if (c_thermal_sz_spectral_shape(frequency_hz, cmb_temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_thermal_sz_spectral_shape
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_thermal_sz_spectral_shape_s(frequency_hz, &
+      cmb_temperature_k, out, stat)
+    real(c_double), intent(in) :: frequency_hz, cmb_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_thermal_sz_spectral_shape(frequency_hz, cmb_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_thermal_sz_spectral_shape', stat)
+  end subroutine relicore_thermal_sz_spectral_shape_s
+
+  ! Thermal Sunyaev-Zeldovich temperature shape f(x) = x coth(x/2) - 4.
+  !   frequency_hz: frequency in Hz, > 0
+  !   cmb_temperature_k: CMB temperature T0 in K, > 0
+  ! Result: f(x), dimensionless; NaN on failure.
+  impure elemental function relicore_thermal_sz_temperature_shape(frequency_hz, &
+      cmb_temperature_k) result(res)
+    real(c_double), intent(in) :: frequency_hz, cmb_temperature_k
+    real(c_double) :: res
+    if (c_thermal_sz_temperature_shape(frequency_hz, cmb_temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_thermal_sz_temperature_shape
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_thermal_sz_temperature_shape_s(frequency_hz, &
+      cmb_temperature_k, out, stat)
+    real(c_double), intent(in) :: frequency_hz, cmb_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_thermal_sz_temperature_shape(frequency_hz, cmb_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_thermal_sz_temperature_shape', stat)
+  end subroutine relicore_thermal_sz_temperature_shape_s
+
+  ! Frequency of the null of the thermal Sunyaev-Zeldovich effect.
+  !   cmb_temperature_k: CMB temperature T0 in K, > 0
+  ! Result: Hz; NaN on failure.
+  impure elemental function relicore_thermal_sz_null_frequency(cmb_temperature_k) result(res)
+    real(c_double), intent(in) :: cmb_temperature_k
+    real(c_double) :: res
+    if (c_thermal_sz_null_frequency(cmb_temperature_k, res) /= RELICORE_OK) res = nan64()
+  end function relicore_thermal_sz_null_frequency
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_thermal_sz_null_frequency_s(cmb_temperature_k, out, stat)
+    real(c_double), intent(in) :: cmb_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_thermal_sz_null_frequency(cmb_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_thermal_sz_null_frequency', stat)
+  end subroutine relicore_thermal_sz_null_frequency_s
+
+  ! ================================================================ single-precision twins
+
+  ! Planck spectral radiance per unit wavelength. Single-precision twin (real(c_float)).
+  !   wavelength_m: wavelength in m, > 0
+  !   temperature_k: temperature in K, > 0
+  ! Result: B_lambda in W m-2 sr-1 m-1; NaN on failure.
+  impure elemental function relicore_spectral_radiance_wavelength_f32(wavelength_m, &
+      temperature_k) result(res)
+    real(c_float), intent(in) :: wavelength_m, temperature_k
+    real(c_float) :: res
+    if (c_spectral_radiance_wavelength_f32(wavelength_m, temperature_k, &
+        res) /= RELICORE_OK) res = nan32()
+  end function relicore_spectral_radiance_wavelength_f32
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_spectral_radiance_wavelength_f32_s(wavelength_m, &
+      temperature_k, out, stat)
+    real(c_float), intent(in) :: wavelength_m, temperature_k
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_spectral_radiance_wavelength_f32(wavelength_m, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_spectral_radiance_wavelength_f32', stat)
+  end subroutine relicore_spectral_radiance_wavelength_f32_s
+
+  ! Planck spectral radiance per unit frequency. Single-precision twin (real(c_float)).
+  !   frequency_hz: frequency in Hz, > 0
+  !   temperature_k: temperature in K, > 0
+  ! Result: B_nu in W m-2 sr-1 Hz-1; NaN on failure.
+  impure elemental function relicore_spectral_radiance_frequency_f32(frequency_hz, &
+      temperature_k) result(res)
+    real(c_float), intent(in) :: frequency_hz, temperature_k
+    real(c_float) :: res
+    if (c_spectral_radiance_frequency_f32(frequency_hz, temperature_k, &
+        res) /= RELICORE_OK) res = nan32()
+  end function relicore_spectral_radiance_frequency_f32
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_spectral_radiance_frequency_f32_s(frequency_hz, &
+      temperature_k, out, stat)
+    real(c_float), intent(in) :: frequency_hz, temperature_k
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_spectral_radiance_frequency_f32(frequency_hz, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_spectral_radiance_frequency_f32', stat)
+  end subroutine relicore_spectral_radiance_frequency_f32_s
+
+  ! Planck spectral radiance per unit wavenumber (m-1). Single-precision twin (real(c_float)).
+  !   wavenumber_per_m: wavenumber in m-1, > 0
+  !   temperature_k: temperature in K, > 0
+  ! Result: B_wavenumber in W m-2 sr-1 m; NaN on failure.
+  impure elemental function relicore_spectral_radiance_wavenumber_f32(wavenumber_per_m, &
+      temperature_k) result(res)
+    real(c_float), intent(in) :: wavenumber_per_m, temperature_k
+    real(c_float) :: res
+    if (c_spectral_radiance_wavenumber_f32(wavenumber_per_m, temperature_k, &
+        res) /= RELICORE_OK) res = nan32()
+  end function relicore_spectral_radiance_wavenumber_f32
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_spectral_radiance_wavenumber_f32_s(wavenumber_per_m, &
+      temperature_k, out, stat)
+    real(c_float), intent(in) :: wavenumber_per_m, temperature_k
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_spectral_radiance_wavenumber_f32(wavenumber_per_m, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_spectral_radiance_wavenumber_f32', stat)
+  end subroutine relicore_spectral_radiance_wavenumber_f32_s
+
+  ! Brightness temperature from a spectral radiance per unit wavelength. Single-precision twin
+  ! (real(c_float)).
+  !   wavelength_m: wavelength in m, > 0
+  !   spectral_radiance: B_lambda in W m-2 sr-1 m-1, > 0
+  ! Result: K; NaN on failure.
+  impure elemental function relicore_brightness_temperature_wavelength_f32(wavelength_m, &
+      spectral_radiance) result(res)
+    real(c_float), intent(in) :: wavelength_m, spectral_radiance
+    real(c_float) :: res
+    if (c_brightness_temperature_wavelength_f32(wavelength_m, spectral_radiance, &
+        res) /= RELICORE_OK) res = nan32()
+  end function relicore_brightness_temperature_wavelength_f32
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_brightness_temperature_wavelength_f32_s(wavelength_m, &
+      spectral_radiance, out, stat)
+    real(c_float), intent(in) :: wavelength_m, spectral_radiance
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_brightness_temperature_wavelength_f32(wavelength_m, spectral_radiance, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_brightness_temperature_wavelength_f32', stat)
+  end subroutine relicore_brightness_temperature_wavelength_f32_s
+
+  ! Brightness temperature from a spectral radiance per unit frequency. Single-precision twin
+  ! (real(c_float)).
+  !   frequency_hz: frequency in Hz, > 0
+  !   spectral_radiance: B_nu in W m-2 sr-1 Hz-1, > 0
+  ! Result: K; NaN on failure.
+  impure elemental function relicore_brightness_temperature_frequency_f32(frequency_hz, &
+      spectral_radiance) result(res)
+    real(c_float), intent(in) :: frequency_hz, spectral_radiance
+    real(c_float) :: res
+    if (c_brightness_temperature_frequency_f32(frequency_hz, spectral_radiance, &
+        res) /= RELICORE_OK) res = nan32()
+  end function relicore_brightness_temperature_frequency_f32
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_brightness_temperature_frequency_f32_s(frequency_hz, &
+      spectral_radiance, out, stat)
+    real(c_float), intent(in) :: frequency_hz, spectral_radiance
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_brightness_temperature_frequency_f32(frequency_hz, spectral_radiance, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_brightness_temperature_frequency_f32', stat)
+  end subroutine relicore_brightness_temperature_frequency_f32_s
+
+  ! Radiance emitted between two wavelengths. Single-precision twin (real(c_float)).
+  !   lower_m: lower band edge in m, >= 0
+  !   upper_m: upper band edge in m, > lower_m, may be +Inf
+  !   temperature_k: temperature in K, > 0
+  ! Result: W m-2 sr-1; NaN on failure.
+  impure elemental function relicore_band_radiance_wavelength_f32(lower_m, upper_m, &
+      temperature_k) result(res)
+    real(c_float), intent(in) :: lower_m, upper_m, temperature_k
+    real(c_float) :: res
+    if (c_band_radiance_wavelength_f32(lower_m, upper_m, temperature_k, &
+        res) /= RELICORE_OK) res = nan32()
+  end function relicore_band_radiance_wavelength_f32
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_band_radiance_wavelength_f32_s(lower_m, upper_m, &
+      temperature_k, out, stat)
+    real(c_float), intent(in) :: lower_m, upper_m, temperature_k
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_band_radiance_wavelength_f32(lower_m, upper_m, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_band_radiance_wavelength_f32', stat)
+  end subroutine relicore_band_radiance_wavelength_f32_s
+
+  ! ================================================================ array forms
+
+  ! Array form of relicore_spectral_radiance_wavelength, one C call for the whole array: out(i)
+  ! at wavelengths_m(i) and one temperature. wavelengths_m: wavelength in m, > 0; temperature_k:
+  ! temperature in K, > 0; out: same size as wavelengths_m (B_lambda in W m-2 sr-1 m-1). Failing
+  ! elements are NaN, the others computed; stat is the first failing element's code
+  ! (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ); without stat a failure stops with
+  ! its message.
+  subroutine relicore_spectral_radiance_wavelength_array(wavelengths_m, temperature_k, out, &
+      stat)
+    real(c_double), intent(in) :: wavelengths_m(:)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    if (size(out) /= size(wavelengths_m)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(wavelengths_m) == 0) then
+      code = RELICORE_OK
+    else
+      code = c_spectral_radiance_wavelength_array(wavelengths_m, &
+          size(wavelengths_m, kind=c_size_t), temperature_k, out)
+    end if
+    call report(code, 'relicore_spectral_radiance_wavelength_array', stat)
+  end subroutine relicore_spectral_radiance_wavelength_array
+
+  ! Array form of relicore_spectral_radiance_frequency, one C call for the whole array: out(i)
+  ! at frequencies_hz(i) and one temperature. frequencies_hz: frequency in Hz, > 0;
+  ! temperature_k: temperature in K, > 0; out: same size as frequencies_hz (B_nu in W m-2 sr-1
+  ! Hz-1). Failing elements are NaN, the others computed; stat is the first failing element's
+  ! code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ); without stat a failure stops
+  ! with its message.
+  subroutine relicore_spectral_radiance_frequency_array(frequencies_hz, temperature_k, out, &
+      stat)
+    real(c_double), intent(in) :: frequencies_hz(:)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    if (size(out) /= size(frequencies_hz)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(frequencies_hz) == 0) then
+      code = RELICORE_OK
+    else
+      code = c_spectral_radiance_frequency_array(frequencies_hz, &
+          size(frequencies_hz, kind=c_size_t), temperature_k, out)
+    end if
+    call report(code, 'relicore_spectral_radiance_frequency_array', stat)
+  end subroutine relicore_spectral_radiance_frequency_array
+
+  ! Array form of relicore_spectral_radiance_wavenumber, one C call for the whole array: out(i)
+  ! at wavenumbers_per_m(i) and one temperature. wavenumbers_per_m: wavenumber in m-1, > 0;
+  ! temperature_k: temperature in K, > 0; out: same size as wavenumbers_per_m (B_wavenumber in W
+  ! m-2 sr-1 m). Failing elements are NaN, the others computed; stat is the first failing
+  ! element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ); without stat a
+  ! failure stops with its message.
+  subroutine relicore_spectral_radiance_wavenumber_array(wavenumbers_per_m, temperature_k, &
+      out, stat)
+    real(c_double), intent(in) :: wavenumbers_per_m(:)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    if (size(out) /= size(wavenumbers_per_m)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(wavenumbers_per_m) == 0) then
+      code = RELICORE_OK
+    else
+      code = c_spectral_radiance_wavenumber_array(wavenumbers_per_m, &
+          size(wavenumbers_per_m, kind=c_size_t), temperature_k, out)
+    end if
+    call report(code, 'relicore_spectral_radiance_wavenumber_array', stat)
+  end subroutine relicore_spectral_radiance_wavenumber_array
+
+  ! Array form of relicore_photon_radiance_wavelength, one C call for the whole array: out(i) at
+  ! wavelengths_m(i) and one temperature. wavelengths_m: wavelength in m, > 0; temperature_k:
+  ! temperature in K, > 0; out: same size as wavelengths_m (N_lambda in photons s-1 m-2 sr-1
+  ! m-1). Failing elements are NaN, the others computed; stat is the first failing element's
+  ! code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ); without stat a failure stops
+  ! with its message.
+  subroutine relicore_photon_radiance_wavelength_array(wavelengths_m, temperature_k, out, stat)
+    real(c_double), intent(in) :: wavelengths_m(:)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    if (size(out) /= size(wavelengths_m)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(wavelengths_m) == 0) then
+      code = RELICORE_OK
+    else
+      code = c_photon_radiance_wavelength_array(wavelengths_m, &
+          size(wavelengths_m, kind=c_size_t), temperature_k, out)
+    end if
+    call report(code, 'relicore_photon_radiance_wavelength_array', stat)
+  end subroutine relicore_photon_radiance_wavelength_array
+
+  ! Array form of relicore_photon_radiance_frequency, one C call for the whole array: out(i) at
+  ! frequencies_hz(i) and one temperature. frequencies_hz: frequency in Hz, > 0; temperature_k:
+  ! temperature in K, > 0; out: same size as frequencies_hz (N_nu in photons s-1 m-2 sr-1 Hz-1).
+  ! Failing elements are NaN, the others computed; stat is the first failing element's code
+  ! (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ); without stat a failure stops with
+  ! its message.
+  subroutine relicore_photon_radiance_frequency_array(frequencies_hz, temperature_k, out, stat)
+    real(c_double), intent(in) :: frequencies_hz(:)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    if (size(out) /= size(frequencies_hz)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(frequencies_hz) == 0) then
+      code = RELICORE_OK
+    else
+      code = c_photon_radiance_frequency_array(frequencies_hz, &
+          size(frequencies_hz, kind=c_size_t), temperature_k, out)
+    end if
+    call report(code, 'relicore_photon_radiance_frequency_array', stat)
+  end subroutine relicore_photon_radiance_frequency_array
+
+  ! Array form of relicore_photon_radiance_wavenumber, one C call for the whole array: out(i) at
+  ! wavenumbers_per_m(i) and one temperature. wavenumbers_per_m: wavenumber in m-1, > 0;
+  ! temperature_k: temperature in K, > 0; out: same size as wavenumbers_per_m (photons s-1 m-2
+  ! sr-1 m). Failing elements are NaN, the others computed; stat is the first failing element's
+  ! code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ); without stat a failure stops
+  ! with its message.
+  subroutine relicore_photon_radiance_wavenumber_array(wavenumbers_per_m, temperature_k, &
+      out, stat)
+    real(c_double), intent(in) :: wavenumbers_per_m(:)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    if (size(out) /= size(wavenumbers_per_m)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(wavenumbers_per_m) == 0) then
+      code = RELICORE_OK
+    else
+      code = c_photon_radiance_wavenumber_array(wavenumbers_per_m, &
+          size(wavenumbers_per_m, kind=c_size_t), temperature_k, out)
+    end if
+    call report(code, 'relicore_photon_radiance_wavenumber_array', stat)
+  end subroutine relicore_photon_radiance_wavenumber_array
+
+  ! Array form of relicore_radiance_temperature_derivative_wavelength, one C call for the whole
+  ! array: out(i) at wavelengths_m(i) and one temperature. wavelengths_m: wavelength in m, > 0;
+  ! temperature_k: temperature in K, > 0; out: same size as wavelengths_m (dB_lambda/dT in W m-2
+  ! sr-1 m-1 K-1). Failing elements are NaN, the others computed; stat is the first failing
+  ! element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ); without stat a
+  ! failure stops with its message.
+  subroutine relicore_radiance_temperature_derivative_wavelength_array(wavelengths_m, &
+      temperature_k, out, stat)
+    real(c_double), intent(in) :: wavelengths_m(:)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    if (size(out) /= size(wavelengths_m)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(wavelengths_m) == 0) then
+      code = RELICORE_OK
+    else
+      code = c_radiance_temperature_derivative_wavelength_array(wavelengths_m, &
+          size(wavelengths_m, kind=c_size_t), temperature_k, out)
+    end if
+    call report(code, 'relicore_radiance_temperature_derivative_wavelength_array', stat)
+  end subroutine relicore_radiance_temperature_derivative_wavelength_array
+
+  ! Array form of relicore_radiance_temperature_derivative_frequency, one C call for the whole
+  ! array: out(i) at frequencies_hz(i) and one temperature. frequencies_hz: frequency in Hz, >
+  ! 0; temperature_k: temperature in K, > 0; out: same size as frequencies_hz (dB_nu/dT in W m-2
+  ! sr-1 Hz-1 K-1). Failing elements are NaN, the others computed; stat is the first failing
+  ! element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ); without stat a
+  ! failure stops with its message.
+  subroutine relicore_radiance_temperature_derivative_frequency_array(frequencies_hz, &
+      temperature_k, out, stat)
+    real(c_double), intent(in) :: frequencies_hz(:)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    if (size(out) /= size(frequencies_hz)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(frequencies_hz) == 0) then
+      code = RELICORE_OK
+    else
+      code = c_radiance_temperature_derivative_frequency_array(frequencies_hz, &
+          size(frequencies_hz, kind=c_size_t), temperature_k, out)
+    end if
+    call report(code, 'relicore_radiance_temperature_derivative_frequency_array', stat)
+  end subroutine relicore_radiance_temperature_derivative_frequency_array
+
+  ! Array form of relicore_brightness_temperature_wavelength, one C call for the whole array:
+  ! out(i) for spectral_radiance(i) at one wavelength. wavelength_m: wavelength in m, > 0;
+  ! spectral_radiance: B_lambda in W m-2 sr-1 m-1, > 0; out: same size as spectral_radiance (K).
+  ! Failing elements are NaN, the others computed; stat is the first failing element's code
+  ! (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ); without stat a failure stops with
+  ! its message.
+  subroutine relicore_brightness_temperature_wavelength_array(wavelength_m, &
+      spectral_radiance, out, stat)
+    real(c_double), intent(in) :: wavelength_m
+    real(c_double), intent(in) :: spectral_radiance(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    if (size(out) /= size(spectral_radiance)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(spectral_radiance) == 0) then
+      code = RELICORE_OK
+    else
+      code = c_brightness_temperature_wavelength_array(wavelength_m, spectral_radiance, &
+          size(spectral_radiance, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_brightness_temperature_wavelength_array', stat)
+  end subroutine relicore_brightness_temperature_wavelength_array
+
+  ! Array form of relicore_brightness_temperature_frequency, one C call for the whole array:
+  ! out(i) for spectral_radiance(i) at one frequency. frequency_hz: frequency in Hz, > 0;
+  ! spectral_radiance: B_nu in W m-2 sr-1 Hz-1, > 0; out: same size as spectral_radiance (K).
+  ! Failing elements are NaN, the others computed; stat is the first failing element's code
+  ! (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ); without stat a failure stops with
+  ! its message.
+  subroutine relicore_brightness_temperature_frequency_array(frequency_hz, &
+      spectral_radiance, out, stat)
+    real(c_double), intent(in) :: frequency_hz
+    real(c_double), intent(in) :: spectral_radiance(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    if (size(out) /= size(spectral_radiance)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(spectral_radiance) == 0) then
+      code = RELICORE_OK
+    else
+      code = c_brightness_temperature_frequency_array(frequency_hz, spectral_radiance, &
+          size(spectral_radiance, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_brightness_temperature_frequency_array', stat)
+  end subroutine relicore_brightness_temperature_frequency_array
+
+  ! Array form of relicore_spectral_radiance_wavelength_f32, one C call for the whole array:
+  ! out(i) at wavelengths_m(i) and one temperature. wavelengths_m: wavelength in m, > 0;
+  ! temperature_k: temperature in K, > 0; out: same size as wavelengths_m (B_lambda in W m-2
+  ! sr-1 m-1). Failing elements are NaN, the others computed; stat is the first failing
+  ! element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ); without stat a
+  ! failure stops with its message.
+  subroutine relicore_spectral_radiance_wavelength_array_f32(wavelengths_m, temperature_k, &
+      out, stat)
+    real(c_float), intent(in) :: wavelengths_m(:)
+    real(c_float), intent(in) :: temperature_k
+    real(c_float), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    if (size(out) /= size(wavelengths_m)) then
+      out = nan32()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(wavelengths_m) == 0) then
+      code = RELICORE_OK
+    else
+      code = c_spectral_radiance_wavelength_array_f32(wavelengths_m, &
+          size(wavelengths_m, kind=c_size_t), temperature_k, out)
+    end if
+    call report(code, 'relicore_spectral_radiance_wavelength_array_f32', stat)
+  end subroutine relicore_spectral_radiance_wavelength_array_f32
+
+  ! Array form of relicore_spectral_radiance_frequency_f32, one C call for the whole array:
+  ! out(i) at frequencies_hz(i) and one temperature. frequencies_hz: frequency in Hz, > 0;
+  ! temperature_k: temperature in K, > 0; out: same size as frequencies_hz (B_nu in W m-2 sr-1
+  ! Hz-1). Failing elements are NaN, the others computed; stat is the first failing element's
+  ! code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ); without stat a failure stops
+  ! with its message.
+  subroutine relicore_spectral_radiance_frequency_array_f32(frequencies_hz, temperature_k, &
+      out, stat)
+    real(c_float), intent(in) :: frequencies_hz(:)
+    real(c_float), intent(in) :: temperature_k
+    real(c_float), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    if (size(out) /= size(frequencies_hz)) then
+      out = nan32()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(frequencies_hz) == 0) then
+      code = RELICORE_OK
+    else
+      code = c_spectral_radiance_frequency_array_f32(frequencies_hz, &
+          size(frequencies_hz, kind=c_size_t), temperature_k, out)
+    end if
+    call report(code, 'relicore_spectral_radiance_frequency_array_f32', stat)
+  end subroutine relicore_spectral_radiance_frequency_array_f32
+
+  ! Array form of relicore_spectral_radiance_wavenumber_f32, one C call for the whole array:
+  ! out(i) at wavenumbers_per_m(i) and one temperature. wavenumbers_per_m: wavenumber in m-1, >
+  ! 0; temperature_k: temperature in K, > 0; out: same size as wavenumbers_per_m (B_wavenumber
+  ! in W m-2 sr-1 m). Failing elements are NaN, the others computed; stat is the first failing
+  ! element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ); without stat a
+  ! failure stops with its message.
+  subroutine relicore_spectral_radiance_wavenumber_array_f32(wavenumbers_per_m, &
+      temperature_k, out, stat)
+    real(c_float), intent(in) :: wavenumbers_per_m(:)
+    real(c_float), intent(in) :: temperature_k
+    real(c_float), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    if (size(out) /= size(wavenumbers_per_m)) then
+      out = nan32()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(wavenumbers_per_m) == 0) then
+      code = RELICORE_OK
+    else
+      code = c_spectral_radiance_wavenumber_array_f32(wavenumbers_per_m, &
+          size(wavenumbers_per_m, kind=c_size_t), temperature_k, out)
+    end if
+    call report(code, 'relicore_spectral_radiance_wavenumber_array_f32', stat)
+  end subroutine relicore_spectral_radiance_wavenumber_array_f32
+
+  ! ================================================================ response-weighted radiance
+
+  ! Response-weighted radiance: the integral of response(lambda) B_lambda(lambda, T) over the
+  ! table.
+  !   wavelengths_m: strictly increasing wavelengths in m (> 0), at least 2
+  !   response: relative spectral response at those wavelengths (>= 0), same size;
+  !             linear between the points and zero outside
+  !   temperature_k: temperature in K, > 0
+  ! Result: W m-2 sr-1 (times the unit of the response); NaN on failure.
+  function relicore_response_weighted_radiance(wavelengths_m, response, &
+      temperature_k) result(res)
+    real(c_double), intent(in) :: wavelengths_m(:), response(:)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double) :: res
+    if (table_response_weighted_radiance(wavelengths_m, response, temperature_k, &
+        res) /= RELICORE_OK) &
+        res = nan64()
+  end function relicore_response_weighted_radiance
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  subroutine relicore_response_weighted_radiance_s(wavelengths_m, response, temperature_k, &
+      out, stat)
+    real(c_double), intent(in) :: wavelengths_m(:), response(:)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = table_response_weighted_radiance(wavelengths_m, response, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_response_weighted_radiance', stat)
+  end subroutine relicore_response_weighted_radiance_s
+
+  ! Calls relicore_response_weighted_radiance; a zero-size table is passed as a valid buffer of
+  ! length 0, so the C library judges the sizes (RELICORE_ERROR_ARRAY_TOO_SHORT), never a NULL
+  ! pointer.
+  function table_response_weighted_radiance(wavelengths_m, response, temperature_k, &
+      out) result(code)
+    real(c_double), intent(in) :: wavelengths_m(:), response(:)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1)
+    integer(c_size_t) :: n_wavelengths, n_response
+    empty = 0
+    n_wavelengths = size(wavelengths_m, kind=c_size_t)
+    n_response = size(response, kind=c_size_t)
+    if (n_wavelengths > 0 .and. n_response > 0) then
+      code = c_response_weighted_radiance(wavelengths_m, n_wavelengths, response, n_response, &
+          temperature_k, out)
+    else if (n_wavelengths > 0) then
+      code = c_response_weighted_radiance(wavelengths_m, n_wavelengths, empty, n_response, &
+          temperature_k, out)
+    else if (n_response > 0) then
+      code = c_response_weighted_radiance(empty, n_wavelengths, response, n_response, &
+          temperature_k, out)
+    else
+      code = c_response_weighted_radiance(empty, n_wavelengths, empty, n_response, &
+          temperature_k, out)
+    end if
+  end function table_response_weighted_radiance
+
+  ! Temperature whose response-weighted radiance is the given one (inverse of
+  ! relicore_response_weighted_radiance).
+  !   wavelengths_m: strictly increasing wavelengths in m (> 0), at least 2
+  !   response: relative spectral response at those wavelengths (>= 0), same size;
+  !             linear between the points and zero outside
+  !   radiance: response-weighted radiance in W m-2 sr-1, > 0
+  ! Result: K; NaN on failure.
+  function relicore_temperature_from_response_weighted_radiance(wavelengths_m, response, &
+      radiance) result(res)
+    real(c_double), intent(in) :: wavelengths_m(:), response(:)
+    real(c_double), intent(in) :: radiance
+    real(c_double) :: res
+    if (table_temperature_from_response_weighted_radiance(wavelengths_m, response, &
+        radiance, res) /= RELICORE_OK) &
+        res = nan64()
+  end function relicore_temperature_from_response_weighted_radiance
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  subroutine relicore_temperature_from_response_weighted_radiance_s(wavelengths_m, &
+      response, radiance, out, stat)
+    real(c_double), intent(in) :: wavelengths_m(:), response(:)
+    real(c_double), intent(in) :: radiance
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = table_temperature_from_response_weighted_radiance(wavelengths_m, response, &
+        radiance, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_temperature_from_response_weighted_radiance', stat)
+  end subroutine relicore_temperature_from_response_weighted_radiance_s
+
+  ! Calls relicore_temperature_from_response_weighted_radiance; a zero-size table is passed as a
+  ! valid buffer of length 0, so the C library judges the sizes
+  ! (RELICORE_ERROR_ARRAY_TOO_SHORT), never a NULL pointer.
+  function table_temperature_from_response_weighted_radiance(wavelengths_m, response, &
+      radiance, out) result(code)
+    real(c_double), intent(in) :: wavelengths_m(:), response(:)
+    real(c_double), intent(in) :: radiance
+    real(c_double), intent(out) :: out
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1)
+    integer(c_size_t) :: n_wavelengths, n_response
+    empty = 0
+    n_wavelengths = size(wavelengths_m, kind=c_size_t)
+    n_response = size(response, kind=c_size_t)
+    if (n_wavelengths > 0 .and. n_response > 0) then
+      code = c_temperature_from_response_weighted_radiance(wavelengths_m, n_wavelengths, &
+          response, n_response, radiance, out)
+    else if (n_wavelengths > 0) then
+      code = c_temperature_from_response_weighted_radiance(wavelengths_m, n_wavelengths, &
+          empty, n_response, radiance, out)
+    else if (n_response > 0) then
+      code = c_temperature_from_response_weighted_radiance(empty, n_wavelengths, response, &
+          n_response, radiance, out)
+    else
+      code = c_temperature_from_response_weighted_radiance(empty, n_wavelengths, empty, &
+          n_response, radiance, out)
+    end if
+  end function table_temperature_from_response_weighted_radiance
+
+  ! Response-weighted radiance: the integral of response(lambda) B_lambda(lambda, T) over the
+  ! table. Single-precision twin (real(c_float)).
+  !   wavelengths_m: strictly increasing wavelengths in m (> 0), at least 2
+  !   response: relative spectral response at those wavelengths (>= 0), same size;
+  !             linear between the points and zero outside
+  !   temperature_k: temperature in K, > 0
+  ! Result: W m-2 sr-1 (times the unit of the response); NaN on failure.
+  function relicore_response_weighted_radiance_f32(wavelengths_m, response, &
+      temperature_k) result(res)
+    real(c_float), intent(in) :: wavelengths_m(:), response(:)
+    real(c_float), intent(in) :: temperature_k
+    real(c_float) :: res
+    if (table_response_weighted_radiance_f32(wavelengths_m, response, temperature_k, &
+        res) /= RELICORE_OK) &
+        res = nan32()
+  end function relicore_response_weighted_radiance_f32
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  subroutine relicore_response_weighted_radiance_f32_s(wavelengths_m, response, &
+      temperature_k, out, stat)
+    real(c_float), intent(in) :: wavelengths_m(:), response(:)
+    real(c_float), intent(in) :: temperature_k
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = table_response_weighted_radiance_f32(wavelengths_m, response, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_response_weighted_radiance_f32', stat)
+  end subroutine relicore_response_weighted_radiance_f32_s
+
+  ! Calls relicore_response_weighted_radiance_f32; a zero-size table is passed as a valid buffer
+  ! of length 0, so the C library judges the sizes (RELICORE_ERROR_ARRAY_TOO_SHORT), never a
+  ! NULL pointer.
+  function table_response_weighted_radiance_f32(wavelengths_m, response, temperature_k, &
+      out) result(code)
+    real(c_float), intent(in) :: wavelengths_m(:), response(:)
+    real(c_float), intent(in) :: temperature_k
+    real(c_float), intent(out) :: out
+    integer(c_int32_t) :: code
+    real(c_float) :: empty(1)
+    integer(c_size_t) :: n_wavelengths, n_response
+    empty = 0
+    n_wavelengths = size(wavelengths_m, kind=c_size_t)
+    n_response = size(response, kind=c_size_t)
+    if (n_wavelengths > 0 .and. n_response > 0) then
+      code = c_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, response, &
+          n_response, temperature_k, out)
+    else if (n_wavelengths > 0) then
+      code = c_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, empty, &
+          n_response, temperature_k, out)
+    else if (n_response > 0) then
+      code = c_response_weighted_radiance_f32(empty, n_wavelengths, response, n_response, &
+          temperature_k, out)
+    else
+      code = c_response_weighted_radiance_f32(empty, n_wavelengths, empty, n_response, &
+          temperature_k, out)
+    end if
+  end function table_response_weighted_radiance_f32
+
+  ! Temperature whose response-weighted radiance is the given one (inverse of
+  ! relicore_response_weighted_radiance). Single-precision twin (real(c_float)).
+  !   wavelengths_m: strictly increasing wavelengths in m (> 0), at least 2
+  !   response: relative spectral response at those wavelengths (>= 0), same size;
+  !             linear between the points and zero outside
+  !   radiance: response-weighted radiance in W m-2 sr-1, > 0
+  ! Result: K; NaN on failure.
+  function relicore_temperature_from_response_weighted_radiance_f32(wavelengths_m, &
+      response, radiance) result(res)
+    real(c_float), intent(in) :: wavelengths_m(:), response(:)
+    real(c_float), intent(in) :: radiance
+    real(c_float) :: res
+    if (table_temperature_from_response_weighted_radiance_f32(wavelengths_m, response, &
+        radiance, res) /= RELICORE_OK) &
+        res = nan32()
+  end function relicore_temperature_from_response_weighted_radiance_f32
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  subroutine relicore_temperature_from_response_weighted_radiance_f32_s(wavelengths_m, &
+      response, radiance, out, stat)
+    real(c_float), intent(in) :: wavelengths_m(:), response(:)
+    real(c_float), intent(in) :: radiance
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = table_temperature_from_response_weighted_radiance_f32(wavelengths_m, response, &
+        radiance, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_temperature_from_response_weighted_radiance_f32', stat)
+  end subroutine relicore_temperature_from_response_weighted_radiance_f32_s
+
+  ! Calls relicore_temperature_from_response_weighted_radiance_f32; a zero-size table is passed
+  ! as a valid buffer of length 0, so the C library judges the sizes
+  ! (RELICORE_ERROR_ARRAY_TOO_SHORT), never a NULL pointer.
+  function table_temperature_from_response_weighted_radiance_f32(wavelengths_m, response, &
+      radiance, out) result(code)
+    real(c_float), intent(in) :: wavelengths_m(:), response(:)
+    real(c_float), intent(in) :: radiance
+    real(c_float), intent(out) :: out
+    integer(c_int32_t) :: code
+    real(c_float) :: empty(1)
+    integer(c_size_t) :: n_wavelengths, n_response
+    empty = 0
+    n_wavelengths = size(wavelengths_m, kind=c_size_t)
+    n_response = size(response, kind=c_size_t)
+    if (n_wavelengths > 0 .and. n_response > 0) then
+      code = c_temperature_from_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, &
+          response, n_response, radiance, out)
+    else if (n_wavelengths > 0) then
+      code = c_temperature_from_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, &
+          empty, n_response, radiance, out)
+    else if (n_response > 0) then
+      code = c_temperature_from_response_weighted_radiance_f32(empty, n_wavelengths, &
+          response, n_response, radiance, out)
+    else
+      code = c_temperature_from_response_weighted_radiance_f32(empty, n_wavelengths, empty, &
+          n_response, radiance, out)
+    end if
+  end function table_temperature_from_response_weighted_radiance_f32
+
+  ! ================================================================ two-load calibration
+
+  ! Two-load calibration of a radiometer channel: fits
+  ! reading = gain * J + offset, J the Rayleigh-Jeans brightness temperature of each load.
+  !   frequency_hz: channel frequency in Hz, > 0
+  !   reading_hot: raw reading on the hot load (counts, volts: any linear unit)
+  !   temperature_hot_k: physical temperature of the hot load in K, > temperature_cold_k
+  !   reading_cold: raw reading on the cold load, /= reading_hot
+  !   temperature_cold_k: physical temperature of the cold load in K, > 0
+  ! Result: type(relicore_two_load_calibration); every field NaN on failure. Referenced through
+  ! the generic name relicore_two_load_calibration, which also names the type (whose structure
+  ! constructor takes the three fields).
+  impure elemental function make_two_load_calibration(frequency_hz, reading_hot, &
+      temperature_hot_k, reading_cold, temperature_cold_k) result(res)
+    real(c_double), intent(in) :: frequency_hz, reading_hot, temperature_hot_k, &
+        reading_cold, temperature_cold_k
+    type(relicore_two_load_calibration) :: res
+    if (c_two_load_calibration(frequency_hz, reading_hot, temperature_hot_k, reading_cold, &
+        temperature_cold_k, res) /= RELICORE_OK) &
+        res = relicore_two_load_calibration(nan64(), nan64(), nan64())
+  end function make_two_load_calibration
+
+  ! Status form: calibration = the fit (every field NaN on failure), stat = RELICORE_OK or
+  ! RELICORE_ERROR_*; without stat a failure stops with its message.
+  impure elemental subroutine relicore_two_load_calibration_s(frequency_hz, reading_hot, &
+      temperature_hot_k, reading_cold, temperature_cold_k, calibration, stat)
+    real(c_double), intent(in) :: frequency_hz, reading_hot, temperature_hot_k, &
+        reading_cold, temperature_cold_k
+    type(relicore_two_load_calibration), intent(out) :: calibration
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_two_load_calibration(frequency_hz, reading_hot, temperature_hot_k, reading_cold, &
+        temperature_cold_k, calibration)
+    if (code /= RELICORE_OK) calibration = relicore_two_load_calibration(nan64(), nan64(), &
+        nan64())
+    call report(code, 'relicore_two_load_calibration', stat)
+  end subroutine relicore_two_load_calibration_s
+
+  ! Physical temperature of a blackbody scene from a raw reading.
+  !   calibration: from relicore_two_load_calibration
+  !   reading: raw reading, finite
+  ! Result: K, > 0; NaN on failure.
+  impure elemental function relicore_calibrated_temperature(calibration, reading) result(res)
+    type(relicore_two_load_calibration), intent(in) :: calibration
+    real(c_double), intent(in) :: reading
+    real(c_double) :: res
+    if (c_calibrated_temperature(calibration, reading, res) /= RELICORE_OK) res = nan64()
+  end function relicore_calibrated_temperature
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_calibrated_temperature_s(calibration, reading, out, stat)
+    type(relicore_two_load_calibration), intent(in) :: calibration
+    real(c_double), intent(in) :: reading
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_calibrated_temperature(calibration, reading, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_calibrated_temperature', stat)
+  end subroutine relicore_calibrated_temperature_s
+
+  ! Rayleigh-Jeans brightness temperature J = (reading - offset)/gain of the scene.
+  !   calibration: from relicore_two_load_calibration
+  !   reading: raw reading, finite
+  ! Result: K (may be <= 0 below the zero-radiance level); NaN on failure.
+  impure elemental function relicore_calibrated_brightness_temperature(calibration, &
+      reading) result(res)
+    type(relicore_two_load_calibration), intent(in) :: calibration
+    real(c_double), intent(in) :: reading
+    real(c_double) :: res
+    if (c_calibrated_brightness_temperature(calibration, reading, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_calibrated_brightness_temperature
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_calibrated_brightness_temperature_s(calibration, &
+      reading, out, stat)
+    type(relicore_two_load_calibration), intent(in) :: calibration
+    real(c_double), intent(in) :: reading
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_calibrated_brightness_temperature(calibration, reading, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_calibrated_brightness_temperature', stat)
+  end subroutine relicore_calibrated_brightness_temperature_s
+
+  ! Two-load calibration of a radiometer channel (single precision): fits
+  ! reading = gain * J + offset, J the Rayleigh-Jeans brightness temperature of each load.
+  !   frequency_hz: channel frequency in Hz, > 0
+  !   reading_hot: raw reading on the hot load (counts, volts: any linear unit)
+  !   temperature_hot_k: physical temperature of the hot load in K, > temperature_cold_k
+  !   reading_cold: raw reading on the cold load, /= reading_hot
+  !   temperature_cold_k: physical temperature of the cold load in K, > 0
+  ! Result: type(relicore_two_load_calibration_f32); every field NaN on failure. Referenced
+  ! through the generic name relicore_two_load_calibration_f32, which also names the type (whose
+  ! structure constructor takes the three fields).
+  impure elemental function make_two_load_calibration_f32(frequency_hz, reading_hot, &
+      temperature_hot_k, reading_cold, temperature_cold_k) result(res)
+    real(c_float), intent(in) :: frequency_hz, reading_hot, temperature_hot_k, &
+        reading_cold, temperature_cold_k
+    type(relicore_two_load_calibration_f32) :: res
+    if (c_two_load_calibration_f32(frequency_hz, reading_hot, temperature_hot_k, &
+        reading_cold, temperature_cold_k, res) /= RELICORE_OK) &
+        res = relicore_two_load_calibration_f32(nan32(), nan32(), nan32())
+  end function make_two_load_calibration_f32
+
+  ! Status form: calibration = the fit (every field NaN on failure), stat = RELICORE_OK or
+  ! RELICORE_ERROR_*; without stat a failure stops with its message.
+  impure elemental subroutine relicore_two_load_calibration_f32_s(frequency_hz, reading_hot, &
+      temperature_hot_k, reading_cold, temperature_cold_k, calibration, stat)
+    real(c_float), intent(in) :: frequency_hz, reading_hot, temperature_hot_k, &
+        reading_cold, temperature_cold_k
+    type(relicore_two_load_calibration_f32), intent(out) :: calibration
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_two_load_calibration_f32(frequency_hz, reading_hot, temperature_hot_k, &
+        reading_cold, temperature_cold_k, calibration)
+    if (code /= RELICORE_OK) calibration = relicore_two_load_calibration_f32(nan32(), &
+        nan32(), nan32())
+    call report(code, 'relicore_two_load_calibration_f32', stat)
+  end subroutine relicore_two_load_calibration_f32_s
+
+  ! Physical temperature of a blackbody scene from a raw reading. Single-precision twin.
+  !   calibration: from relicore_two_load_calibration_f32
+  !   reading: raw reading, finite
+  ! Result: K, > 0; NaN on failure.
+  impure elemental function relicore_calibrated_temperature_f32(calibration, &
+      reading) result(res)
+    type(relicore_two_load_calibration_f32), intent(in) :: calibration
+    real(c_float), intent(in) :: reading
+    real(c_float) :: res
+    if (c_calibrated_temperature_f32(calibration, reading, res) /= RELICORE_OK) res = nan32()
+  end function relicore_calibrated_temperature_f32
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_calibrated_temperature_f32_s(calibration, reading, &
+      out, stat)
+    type(relicore_two_load_calibration_f32), intent(in) :: calibration
+    real(c_float), intent(in) :: reading
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_calibrated_temperature_f32(calibration, reading, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_calibrated_temperature_f32', stat)
+  end subroutine relicore_calibrated_temperature_f32_s
+
+  ! Rayleigh-Jeans brightness temperature J = (reading - offset)/gain of the scene. Single-
+  ! precision twin.
+  !   calibration: from relicore_two_load_calibration_f32
+  !   reading: raw reading, finite
+  ! Result: K (may be <= 0 below the zero-radiance level); NaN on failure.
+  impure elemental function relicore_calibrated_brightness_temperature_f32(calibration, &
+      reading) result(res)
+    type(relicore_two_load_calibration_f32), intent(in) :: calibration
+    real(c_float), intent(in) :: reading
+    real(c_float) :: res
+    if (c_calibrated_brightness_temperature_f32(calibration, reading, &
+        res) /= RELICORE_OK) res = nan32()
+  end function relicore_calibrated_brightness_temperature_f32
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_calibrated_brightness_temperature_f32_s(calibration, &
+      reading, out, stat)
+    type(relicore_two_load_calibration_f32), intent(in) :: calibration
+    real(c_float), intent(in) :: reading
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_calibrated_brightness_temperature_f32(calibration, reading, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_calibrated_brightness_temperature_f32', stat)
+  end subroutine relicore_calibrated_brightness_temperature_f32_s
+
+end module relicore

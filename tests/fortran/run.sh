@@ -1,0 +1,112 @@
+#!/usr/bin/env bash
+# Fortran face of relicore: builds the module and the vector test against the static C library,
+# runs the test on both data files, the error-stop check, the dump mode, the interface check
+# against include/relicore.h (and its self-test), and the test under valgrind.
+# Run from the repository root:  bash tests/fortran/run.sh
+# Leaves build/fortran/test_blackbody (its --dump mode is used by the Python tests).
+set -euo pipefail
+
+FC=${FC:-gfortran}
+OUT=build/fortran
+LIB=target/release-c/librelicore.a
+BIN=$OUT/test_blackbody
+DATA=(tests/data/blackbody.txt tests/data/blackbody_response.txt)
+
+if [[ ! -f bindings/fortran/relicore.f90 ]]; then
+  echo "run.sh: run from the repository root" >&2
+  exit 2
+fi
+
+script_passed=0
+script_failed=0
+pass() { script_passed=$((script_passed + 1)); echo "ok   $*"; }
+fail() { script_failed=$((script_failed + 1)); echo "FAIL $*"; }
+
+# ------------------------------------------------------------------ build
+cargo build -p relicore-capi --profile release-c --quiet
+mkdir -p "$OUT"
+# the module must stay clean under the strictest flags; the test under -Wall (DESIGN 9.10:
+# -Wextra objects to the exact real comparisons a bit-for-bit test makes)
+"$FC" -std=f2018 -Wall -Wextra -Werror -pedantic -J "$OUT" \
+  -c bindings/fortran/relicore.f90 -o "$OUT/relicore.o"
+"$FC" -std=f2018 -Wall -Werror -J "$OUT" \
+  -c tests/fortran/test_blackbody.f90 -o "$OUT/test_blackbody.o"
+# the archive by path (DESIGN 9.6); on this glibc -lm is the only system library it needs
+"$FC" "$OUT/test_blackbody.o" "$OUT/relicore.o" "$LIB" -lm -o "$BIN"
+
+# ------------------------------------------------------------------ vectors and tests in code
+log=$OUT/test_blackbody.log
+if "$BIN" "${DATA[@]}" >"$log" 2>&1; then
+  status=0
+else
+  status=$?
+fi
+grep '^FAIL' "$log" || true
+summary=$(tail -n 1 "$log")
+echo "test_blackbody: $summary"
+if [[ $status -ne 0 || ! $summary =~ ^([0-9]+)\ passed,\ 0\ failed$ ]]; then
+  echo "run.sh: test_blackbody failed (exit status $status)" >&2
+  tail -n 20 "$log" >&2
+  exit 1
+fi
+binary_passed=${BASH_REMATCH[1]}
+if [[ $binary_passed -gt 0 ]]; then pass "test_blackbody on ${DATA[*]}"; else fail "test_blackbody ran nothing"; fi
+
+# ------------------------------------------------------------------ error stop without stat
+expect_out=$OUT/stop_check.out
+expect_err=$OUT/stop_check.err
+if "$BIN" --stop-check >"$expect_out" 2>"$expect_err"; then
+  fail "--stop-check: a failing call without stat did not stop the program"
+  cat "$expect_out"
+else
+  expected=$(sed -n 's/^EXPECT //p' "$expect_out")
+  if [[ -n $expected ]] && grep -qF -- "$expected" "$expect_err"; then
+    pass "a failing status form without stat stops with: $expected"
+  else
+    fail "--stop-check: stop message '$(cat "$expect_err")' lacks '$expected'"
+  fi
+fi
+
+# ------------------------------------------------------------------ dump mode
+dump=$OUT/dump.txt
+"$BIN" --dump tests/data/blackbody.txt >"$dump"
+want_lines=$(awk '!/^#/ && NF > 0 && $(NF - 2) != "status"' tests/data/blackbody.txt | wc -l)
+bad_lines=$(awk '{ want = ($1 ~ /_f32$/) ? 8 : 16
+  if (NF != 2 || length($2) != want || $2 !~ /^[0-9A-F]+$/) bad++ } END { print bad + 0 }' "$dump")
+names_match=$(diff <(awk '{print $1}' "$dump") \
+  <(awk '!/^#/ && NF > 0 && $(NF - 2) != "status" {print $1}' tests/data/blackbody.txt) >/dev/null && echo yes || echo no)
+if [[ $(wc -l <"$dump") -eq $want_lines && $bad_lines -eq 0 && $names_match == yes ]]; then
+  pass "--dump: $want_lines lines 'name bits' in file order"
+else
+  fail "--dump: $(wc -l <"$dump") lines for $want_lines vectors, $bad_lines malformed, names in order: $names_match"
+fi
+
+# ------------------------------------------------------------------ interfaces against the header
+if python3 tests/fortran/check_interfaces.py; then
+  pass "interfaces match include/relicore.h"
+else
+  fail "interfaces differ from include/relicore.h"
+fi
+if python3 tests/fortran/check_interfaces.py --self-test; then
+  pass "the interface check detects every seeded mismatch"
+else
+  fail "the interface check missed a seeded mismatch"
+fi
+
+# ------------------------------------------------------------------ valgrind
+if command -v valgrind >/dev/null 2>&1; then
+  vlog=$OUT/valgrind.log
+  if valgrind --quiet --error-exitcode=1 --leak-check=full --log-file="$vlog" \
+    "$BIN" "${DATA[@]}" >"$OUT/valgrind.out" 2>&1; then
+    pass "valgrind: no memory errors or leaks ($(tail -n 1 "$OUT/valgrind.out"))"
+  else
+    fail "valgrind reported errors (see $vlog)"
+    head -n 40 "$vlog"
+  fi
+else
+  fail "valgrind is not installed"
+fi
+
+echo "fortran: test_blackbody $binary_passed passed; run.sh checks $script_passed passed, $script_failed failed"
+echo "$((binary_passed + script_passed)) passed, $script_failed failed"
+[[ $script_failed -eq 0 ]]
