@@ -54,6 +54,12 @@ pub trait Real:
     fn sinh(self) -> Self;
     /// Hyperbolic tangent.
     fn tanh(self) -> Self;
+    /// Hyperbolic cosine.
+    fn cosh(self) -> Self;
+    /// Sine.
+    fn sin(self) -> Self;
+    /// Cosine.
+    fn cos(self) -> Self;
     /// Largest integer not above x. (`FloatCore::floor` is implemented with `%`, which
     /// compiles to a call of the platform `fmod`; that call drags the unwinding runtime, and
     /// with it `malloc`, into a static C link. This one is `libm`'s.)
@@ -62,7 +68,7 @@ pub trait Real:
 
 macro_rules! impl_real {
     ($t:ty, $digits:expr, $split:expr, $lnmax:expr, $lnmin:expr,
-     $exp:path, $expm1:path, $log:path, $log1p:path, $sqrt:path, $cbrt:path, $sinh:path, $tanh:path, $floor:path) => {
+     $exp:path, $expm1:path, $log:path, $log1p:path, $sqrt:path, $cbrt:path, $sinh:path, $tanh:path, $floor:path, $cosh:path, $sin:path, $cos:path) => {
         impl Real for $t {
             const MANTISSA_DIGITS: u32 = $digits;
             const SPLITTER: Self = $split;
@@ -118,6 +124,18 @@ macro_rules! impl_real {
             fn floor_libm(self) -> Self {
                 $floor(self)
             }
+            #[inline(always)]
+            fn cosh(self) -> Self {
+                $cosh(self)
+            }
+            #[inline(always)]
+            fn sin(self) -> Self {
+                $sin(self)
+            }
+            #[inline(always)]
+            fn cos(self) -> Self {
+                $cos(self)
+            }
         }
     };
 }
@@ -136,7 +154,10 @@ impl_real!(
     libm::cbrt,
     libm::sinh,
     libm::tanh,
-    libm::floor
+    libm::floor,
+    libm::cosh,
+    libm::sin,
+    libm::cos
 );
 impl_real!(
     f32,
@@ -152,5 +173,8 @@ impl_real!(
     libm::cbrtf,
     libm::sinhf,
     libm::tanhf,
-    libm::floorf
+    libm::floorf,
+    libm::coshf,
+    libm::sinf,
+    libm::cosf
 );

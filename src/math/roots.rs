@@ -10,9 +10,26 @@ use crate::{Error, Real, Result};
 /// Requires f(lo) and f(hi) of opposite signs (or one of them zero). Stops when the step or
 /// the bracket is below `x_tol` (absolute) or f is exactly zero; returns `Error::NoConvergence` after
 /// `max_iter` iterations, or when the bracket is invalid.
-pub fn bracketed_newton<T: Real, F>(mut f: F, lo: T, hi: T, x_tol: T, max_iter: u32) -> Result<T>
+pub fn bracketed_newton<T: Real, F>(f: F, lo: T, hi: T, x_tol: T, max_iter: u32) -> Result<T>
 where
     F: FnMut(T) -> (T, T),
+{
+    newton_core(f, lo, hi, |_| x_tol, max_iter)
+}
+
+/// As [`bracketed_newton`], with a relative tolerance: stops when the step or the bracket is
+/// below `rel_tol·|x|` (for roots that may lie anywhere from tiny to large values).
+pub fn bracketed_newton_relative<T: Real, F>(f: F, lo: T, hi: T, rel_tol: T, max_iter: u32) -> Result<T>
+where
+    F: FnMut(T) -> (T, T),
+{
+    newton_core(f, lo, hi, |x: T| rel_tol * x.abs(), max_iter)
+}
+
+fn newton_core<T: Real, F, G>(mut f: F, lo: T, hi: T, tol: G, max_iter: u32) -> Result<T>
+where
+    F: FnMut(T) -> (T, T),
+    G: Fn(T) -> T,
 {
     let (flo, _) = f(lo);
     let (fhi, _) = f(hi);
@@ -51,7 +68,7 @@ where
             dx = half * (b - a);
             x = a + dx;
         }
-        if dx.abs() <= x_tol {
+        if dx.abs() <= tol(x) {
             return Ok(x);
         }
         let r = f(x);
@@ -67,7 +84,7 @@ where
         }
         // the bracket itself is below the tolerance: rounding noise in f can keep Newton
         // steps just above x_tol forever, but the root is pinned
-        if (b - a).abs() <= x_tol {
+        if (b - a).abs() <= tol(x) {
             return Ok(x);
         }
     }
