@@ -38,6 +38,16 @@ pub enum Error {
     /// An iteration did not converge within its budget.
     #[error("no convergence")]
     NoConvergence,
+    /// A parameter of a parameter set (a universe) is invalid; the payload is the parameter's
+    /// position in the documented parameter list (for `UniverseParameters`: 0 h0_km_s_mpc,
+    /// 1 omega_matter, 2 omega_baryon, 3 omega_curvature, 4 cmb_temperature_k, 5 n_eff,
+    /// 6 neutrino_masses_ev, 7 w0, 8 wa, 9 helium_mass_fraction).
+    #[error("parameter {0} is invalid")]
+    InvalidParameter(u8),
+    /// The model has no big bang: E(z)² ≤ 0 somewhere on the way back (a bounce or a
+    /// loitering universe), so ages and distances to high redshift do not exist.
+    #[error("the model has no big bang: E(z)^2 <= 0 on the way back")]
+    NoBigBang,
 }
 
 impl Error {
@@ -52,8 +62,9 @@ impl Error {
             | Error::LengthMismatch(a)
             | Error::NotIncreasing(a)
             | Error::DegenerateCalibration(a)
-            | Error::OutOfDomain(a) => Some(a),
-            Error::NoConvergence => None,
+            | Error::OutOfDomain(a)
+            | Error::InvalidParameter(a) => Some(a),
+            Error::NoConvergence | Error::NoBigBang => None,
         }
     }
 }

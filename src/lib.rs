@@ -10,7 +10,7 @@
 //! * Every function returns [`Result`]; bad input is an [`Error`] naming the argument, never a
 //!   panic or a silent number.
 //!
-//! Topics available now: [`blackbody`]. Constants: [`constants`]. Numerical kernels shared by
+//! Topics available now: [`blackbody`], [`cosmology`]. Constants: [`constants`]. Numerical kernels shared by
 //! every topic: [`math`].
 //!
 //! # Cautions
@@ -41,6 +41,7 @@ extern crate std;
 pub mod blackbody;
 mod check;
 pub mod constants;
+pub mod cosmology;
 mod error;
 pub mod math;
 mod real;

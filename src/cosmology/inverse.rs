@@ -1,0 +1,127 @@
+//! Inversions: the redshift at a given age, lookback time, comoving or luminosity distance.
+//!
+//! Each solves in u = ln(1+z) with the shared safeguarded Newton iteration
+//! ([`crate::math::roots`]), bracketed by [0, ln(1 + 1e12)], with the exact derivative
+//! (dχ/du = D_H/(q(1+z)), dt/du = t_H/E, …) and a relative tolerance of a few ulp in u.
+
+use super::Universe;
+use crate::check::{non_negative, positive};
+use crate::math::roots::bracketed_newton_relative;
+use crate::{Error, Real, Result};
+
+/// Upper end of the search, z = 1e12.
+const U_MAX: f64 = 27.631_021_115_928_547;
+
+impl<T: Real> Universe<T> {
+    fn solve_u<F: FnMut(T) -> (T, T)>(&self, f: F) -> Result<T> {
+        let u =
+            bracketed_newton_relative(f, T::zero(), T::c(U_MAX), T::epsilon() * T::c(2.0), 300)?;
+        Ok(u.exp_m1())
+    }
+
+    fn check_reachable<F: FnMut(T) -> (T, T)>(mut f: F) -> Result<()> {
+        let (lo, _) = f(T::zero());
+        let (hi, _) = f(T::c(U_MAX));
+        if lo.is_nan() || hi.is_nan() || (lo > T::zero()) == (hi > T::zero()) && lo != T::zero() {
+            return Err(Error::OutOfDomain(0));
+        }
+        Ok(())
+    }
+
+    /// Redshift at which the line-of-sight comoving distance equals `distance_mpc`.
+    ///
+    /// * `distance_mpc`: Mpc, finite and ≥ 0.
+    ///
+    /// Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` beyond the distance reachable
+    /// by z = 1e12 (the particle horizon). Accuracy: round trip within 1e-12 relative (`f64`).
+    pub fn redshift_at_comoving_distance_mpc(&self, distance_mpc: T) -> Result<T> {
+        let d = non_negative(distance_mpc, 0)? / self.hubble_distance_mpc;
+        if d == T::zero() {
+            return Ok(T::zero());
+        }
+        let f = |u: T| {
+            let z = u.exp_m1();
+            let chi = self.comoving_unit(z).unwrap_or(T::nan());
+            let a = T::one() / (T::one() + z);
+            // dχ/du = (1+z)/E = a/q
+            (chi - d, a / self.q_squared(a).sqrt())
+        };
+        Self::check_reachable(f)?;
+        self.solve_u(f)
+    }
+
+    /// Redshift at which the luminosity distance equals `distance_mpc`.
+    ///
+    /// * `distance_mpc`: Mpc, finite and ≥ 0.
+    ///
+    /// Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` when no redshift up to 1e12
+    /// gives it. Accuracy: round trip within 1e-12 relative (`f64`). (In a closed model D_L
+    /// need not be monotone; the root in the bracket found is returned.)
+    pub fn redshift_at_luminosity_distance_mpc(&self, distance_mpc: T) -> Result<T> {
+        let d = non_negative(distance_mpc, 0)? / self.hubble_distance_mpc;
+        if d == T::zero() {
+            return Ok(T::zero());
+        }
+        let f = |u: T| {
+            let z = u.exp_m1();
+            let opz = T::one() + z;
+            let chi = self.comoving_unit(z).unwrap_or(T::nan());
+            let dm = self.transverse_unit(chi);
+            let a = T::one() / opz;
+            // dχ/dz = 1/E = a²/q; dD_L/du = (1+z)(D_M + (1+z) D_M'(χ) dχ/dz)
+            let dchi_dz = a * a / self.q_squared(a).sqrt();
+            let slope = opz * (dm + opz * self.transverse_slope(chi) * dchi_dz);
+            (opz * dm - d, slope)
+        };
+        Self::check_reachable(f)?;
+        self.solve_u(f)
+    }
+
+    /// Redshift at which the lookback time equals `lookback_gyr`.
+    ///
+    /// * `lookback_gyr`: Gyr, finite and ≥ 0, below the age today.
+    ///
+    /// Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` at or beyond the age today.
+    /// Accuracy: round trip within 1e-12 relative (`f64`).
+    pub fn redshift_at_lookback_time_gyr(&self, lookback_gyr: T) -> Result<T> {
+        let t = non_negative(lookback_gyr, 0)? / self.hubble_time_gyr;
+        if t == T::zero() {
+            return Ok(T::zero());
+        }
+        let f = |u: T| {
+            let z = u.exp_m1();
+            let v = self
+                .lookback_time_gyr(z)
+                .map(|x| x / self.hubble_time_gyr)
+                .unwrap_or(T::nan());
+            let a = T::one() / (T::one() + z);
+            // dt/du = (1+z) dt/dz = 1/E = a²/q
+            (v - t, a * a / self.q_squared(a).sqrt())
+        };
+        Self::check_reachable(f)?;
+        self.solve_u(f)
+    }
+
+    /// Redshift at which the age of the universe equals `age_gyr`.
+    ///
+    /// * `age_gyr`: Gyr, finite and > 0, at most the age today.
+    ///
+    /// Errors: `NonFinite(0)`, `NonPositive(0)`, `OutOfDomain(0)` above the age today or
+    /// below the age at z = 1e12. Accuracy: round trip within 1e-12 relative (`f64`).
+    pub fn redshift_at_age_gyr(&self, age_gyr: T) -> Result<T> {
+        let t = positive(age_gyr, 0)? / self.hubble_time_gyr;
+        let ln_t = t.ln();
+        let f = |u: T| {
+            let z = u.exp_m1();
+            let v = self
+                .age_gyr(z)
+                .map(|x| x / self.hubble_time_gyr)
+                .unwrap_or(T::nan());
+            let a = T::one() / (T::one() + z);
+            // d ln t/du = −(1/E)/t
+            (v.ln() - ln_t, -(a * a / self.q_squared(a).sqrt()) / v)
+        };
+        Self::check_reachable(f)?;
+        self.solve_u(f)
+    }
+}
