@@ -35,7 +35,11 @@ pub(crate) const S_MIN: f64 = 0.007_812_5;
 #[derive(Debug, Clone, PartialEq)]
 pub(crate) struct DistanceTable<T> {
     coeffs: [[T; NCOEF]; PIECES],
-    valid: bool,
+    /// 1 when the error control passed. A byte rather than a `bool`: every field of a
+    /// universe is plain old data, so any bit pattern is a valid value (the C face keeps the
+    /// value in caller-owned storage and must not be able to create undefined behaviour from a
+    /// corrupted struct; a validity tag there refuses structs it did not initialise).
+    valid: u8,
 }
 
 /// Piece (octave j, sub-piece k) containing s ∈ [S_MIN, 1], and the local variable t ∈ [−1, 1].
@@ -131,14 +135,14 @@ impl<T: Real> DistanceTable<T> {
                 ok = false;
             }
         }
-        table.valid = ok;
+        table.valid = u8::from(ok);
         Ok(table)
     }
 
     /// g(s) from the table, or `None` outside it (or when the table failed its error control).
     #[inline]
     pub(crate) fn eval(&self, s: T) -> Option<T> {
-        if !self.valid {
+        if self.valid != 1 {
             return None;
         }
         let (p, t) = locate(s)?;
@@ -156,7 +160,7 @@ impl<T: Real> DistanceTable<T> {
     /// Whether the table passed its error control.
     #[cfg(test)]
     pub(crate) fn is_valid(&self) -> bool {
-        self.valid
+        self.valid == 1
     }
 }
 

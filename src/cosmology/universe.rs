@@ -80,6 +80,7 @@ pub struct Universe<T> {
     pub(crate) omega_de: T,
     /// Per massive species: the coefficient A (Ω of one massless species) and y = m c²/(k T_ν0).
     pub(crate) massive: [(T, T); 3],
+    /// Number of massive species (0..=3); any value is safe, it only bounds `take`.
     pub(crate) n_massive: usize,
     /// Dark-energy exponents: ρ_de ∝ a^(−3(1+w0+wa)) e^(−3 wa (1 − a)).
     pub(crate) de_power: T,
