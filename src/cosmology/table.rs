@@ -77,7 +77,7 @@ impl<T: Real> DistanceTable<T> {
     pub(crate) fn empty() -> Self {
         DistanceTable {
             coeffs: [[T::zero(); NCOEF]; PIECES],
-            valid: false,
+            valid: 0,
         }
     }
 
