@@ -31,6 +31,9 @@ pub(crate) const NCOEF: usize = 14;
 /// Smallest s in the table, 2^−7 (z = 16383).
 pub(crate) const S_MIN: f64 = 0.007_812_5;
 
+/// 2^(j+1): the exact scaling that maps octave j = 0…6 onto [1, 2).
+const OCTAVE_SCALE: [f64; OCTAVES] = [2.0, 4.0, 8.0, 16.0, 32.0, 64.0, 128.0];
+
 /// Chebyshev coefficients of g(s) per piece; `valid` is false when the error control failed.
 #[derive(Debug, Clone, PartialEq)]
 pub(crate) struct DistanceTable<T> {
@@ -57,7 +60,7 @@ fn locate<T: Real>(s: T) -> Option<(usize, T)> {
     let j = (-octave_exp - 1) as usize;
     let k = ((m >> (d - 5)) & 15) as usize;
     // t = 32 (s / 2^E) − 32 − 2k − 1, exact
-    let scale = T::c(libm::ldexp(1.0, -octave_exp));
+    let scale = T::c(*OCTAVE_SCALE.get(j)?);
     let t = T::c(32.0) * (s * scale) - T::c((33 + 2 * k) as f64);
     Some((j * SUB + k, t))
 }
