@@ -56,15 +56,7 @@ impl<T: Real> Universe<T> {
     /// [`dimensionless_hubble`](Self::dimensionless_hubble).
     pub fn omega_dark_energy_at(&self, z: T) -> Result<T> {
         let (a, q2) = self.at(z)?;
-        let q2_without = {
-            let mut r =
-                self.omega_radiation + a * (self.omega_cb + a * self.params.omega_curvature);
-            for &(c, ym) in self.massive.iter().take(self.n_massive) {
-                r = r + c * super::neutrino::density_ratio(ym * a);
-            }
-            r
-        };
-        Ok((q2 - q2_without) / q2)
+        Ok(self.dark_energy_term(a) / q2)
     }
 
     /// Curvature density parameter at z, Ω_k(1+z)²/E². Errors as

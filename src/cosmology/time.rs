@@ -35,11 +35,27 @@ impl<T: Real> Universe<T> {
     /// Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-12 relative (`f64`) for z up
     /// to 1e4 against mpmath.
     pub fn lookback_time_gyr(&self, z: T) -> Result<T> {
-        let s = self.s_of(z)?;
-        if s == T::one() {
+        let z = check_redshift(z, 0)?;
+        if z == T::zero() {
             return Ok(T::zero());
         }
-        Ok(self.hubble_time_gyr * self.time_integral(s, T::one())?)
+        // integrate over v = 1 − s' ∈ [0, 1 − s], with 1 − s formed from z without
+        // cancellation, so a small redshift keeps full relative accuracy
+        let r = (T::one() + z).sqrt();
+        let width = z / (r * (T::one() + r));
+        let v = integrate(
+            |v: T| {
+                let x = T::one() - v;
+                let x2 = x * x;
+                T::c(2.0) * x2 * x / self.q_of_s(x)
+            },
+            T::zero(),
+            width,
+            T::epsilon() * T::c(4.0),
+            T::zero(),
+        )
+        .map_err(|_| Error::OutOfDomain(0))?;
+        Ok(self.hubble_time_gyr * v)
     }
 
     /// Age of the universe at redshift z, (1/H0) ∫_z^∞ dz'/((1+z')E(z')), Gyr.

@@ -223,11 +223,17 @@ impl<T: Real> Universe<T> {
         for &(c, ym) in self.massive.iter().take(self.n_massive) {
             q2 = q2 + c * density_ratio(ym * a);
         }
-        if self.omega_de != T::zero() {
-            let a2 = a * a;
-            q2 = q2 + self.omega_de * a2 * a2 * self.dark_energy_factor(a);
+        q2 + self.dark_energy_term(a)
+    }
+
+    /// Ω_de a⁴ f_de(a): the dark-energy part of q².
+    #[inline]
+    pub(crate) fn dark_energy_term(&self, a: T) -> T {
+        if self.omega_de == T::zero() {
+            return T::zero();
         }
-        q2
+        let a2 = a * a;
+        self.omega_de * a2 * a2 * self.dark_energy_factor(a)
     }
 
     /// ρ_de(a)/ρ_de(1) = a^(−3(1+w0+wa)) e^(−3 wa (1 − a)).
