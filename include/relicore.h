@@ -11,7 +11,12 @@
  *    failing elements to NaN, compute the others and return the first failing element's code;
  *  - every pointer is checked for NULL; no function allocates, keeps global state or panics
  *    across the boundary; all are thread-safe.
- * Units are SI (m, Hz, m^-1, K, W, sr) unless the name says otherwise.
+ * Units are SI (m, Hz, m^-1, K, W, sr) unless the name says otherwise (cosmology: _mpc,
+ * _gyr, _km_s_mpc, _kg_m3, _gpc3, _mpc3_sr, _kpc_per_arcsec).
+ * Cosmology: fill a struct relicore_universe_parameters (relicore_universe_parameters_default),
+ * build a struct relicore_universe from it once (relicore_universe_init: caller-owned, fixed
+ * size, no cleanup, copyable with memcpy), then pass a const pointer to it to every cosmology
+ * function, from any number of threads.
  *
  * Caution: radiation thermometry misleads when trusted beyond its emissivity and calibration
  * (fever screening, furnace and molten-metal work, fire safety). Follow the applicable
@@ -96,6 +101,18 @@
  * A Rust panic was caught at the boundary (a bug in relicore: please report it).
  */
 #define RELICORE_ERROR_PANIC -13
+
+/**
+ * A parameter of a parameter set (a universe) is invalid; `relicore_universe_check_parameters`
+ * names which one.
+ */
+#define RELICORE_ERROR_INVALID_PARAMETER -14
+
+/**
+ * The model has no big bang: E(z)² ≤ 0 somewhere on the way back (a bounce or a loitering
+ * universe), so ages and distances to high redshift do not exist.
+ */
+#define RELICORE_ERROR_NO_BIG_BANG -15
 
 /**
  * Major version of the library (equal to the core crate's version, checked by a test).
@@ -293,6 +310,13 @@
 #define RELICORE_ROOT_THERMAL_SZ_NULL 3.830016096309075
 
 /**
+ * Number of 8-byte words of storage in `struct relicore_universe` (15360 bytes; the core
+ * universe, a fixed-size distance table included, takes about 12.8 KB of them, the rest is
+ * room to grow without changing the size of the struct).
+ */
+#define RELICORE_UNIVERSE_STORAGE_WORDS 1920
+
+/**
  * The gain and offset of a two-load calibration at one frequency, filled in by
  * `relicore_two_load_calibration`; a plain value the caller owns (no allocation, no
  * cleanup). `reading = gain · J + offset`, J the Rayleigh-Jeans brightness temperature in K.
@@ -329,6 +353,87 @@ struct relicore_two_load_calibration_f32 {
      * Offset in reading units (the reading for J = 0).
      */
     float offset;
+};
+
+/**
+ * The parameters of a universe, as `relicore_universe_init` takes them. Fill it with
+ * `relicore_universe_parameters_default` (common-practice defaults for everything but H0 and
+ * Ω_m), change what differs, then call `relicore_universe_init`. A plain value.
+ *
+ * Positions used by `relicore_universe_check_parameters` (and by the core's
+ * `Error::InvalidParameter`): 0 `h0_km_s_mpc`, 1 `omega_matter`, 2 `omega_baryon`,
+ * 3 `omega_curvature`, 4 `cmb_temperature_k`, 5 `n_eff`, 6 `neutrino_masses_ev`, 7 `w0`,
+ * 8 `wa`, 9 `helium_mass_fraction`.
+ */
+struct relicore_universe_parameters {
+    /**
+     * Hubble constant H0 in km s⁻¹ Mpc⁻¹, > 0.
+     */
+    double h0_km_s_mpc;
+    /**
+     * Density parameter today of everything non-relativistic (cold dark matter, baryons and
+     * massive neutrinos, as published parameter tables quote it), ≥ 0.
+     */
+    double omega_matter;
+    /**
+     * Baryon density parameter today, 0 ≤ Ω_b ≤ Ω_m (default 0: the background does not need
+     * it).
+     */
+    double omega_baryon;
+    /**
+     * Curvature density parameter Ω_k today (default 0, flat; > 0 open, < 0 closed). Dark
+     * energy is what remains: Ω_de = 1 − Ω_m − Ω_r − Ω_k.
+     */
+    double omega_curvature;
+    /**
+     * CMB temperature today in K, ≥ 0 (default 2.7255; 0 switches photons and neutrinos off).
+     */
+    double cmb_temperature_k;
+    /**
+     * Effective number of neutrino species, ≥ 0 (default 3.044), shared equally by three
+     * species.
+     */
+    double n_eff;
+    /**
+     * The three neutrino masses in eV, each ≥ 0 (default all 0; a mass > 0 needs T0 > 0).
+     */
+    double neutrino_masses_ev[3];
+    /**
+     * Dark-energy equation of state today, w0 (default −1).
+     */
+    double w0;
+    /**
+     * Slope of the dark-energy equation of state, w(a) = w0 + wa (1 − a) (default 0).
+     */
+    double wa;
+    /**
+     * Primordial helium mass fraction Y_p, 0 ≤ Y_p < 1 (default 0.245).
+     */
+    double helium_mass_fraction;
+};
+
+/**
+ * A validated universe with its derived constants and its precomputed distance table, built
+ * by `relicore_universe_init`; every cosmology function takes a `const struct
+ * relicore_universe *`. Caller-owned and fixed-size (`sizeof(struct relicore_universe)` =
+ * 8 + 8 × `RELICORE_UNIVERSE_STORAGE_WORDS` = 15368 bytes, aligned like `uint64_t`): put it
+ * on the stack, in static storage or inside your own structs; there is nothing to free.
+ *
+ * It is a plain value: it may be copied with memcpy or plain assignment and the copy works
+ * the same; it may be read by any number of threads at once. Its fields are private to the
+ * library: do not read or write them. A struct that `relicore_universe_init` did not fill (or
+ * whose init failed) is refused with `RELICORE_ERROR_INVALID_STRUCT`.
+ */
+struct relicore_universe {
+    /**
+     * Validity tag written last by a successful `relicore_universe_init` (0 after a failed
+     * one). Private to the library.
+     */
+    uint64_t tag;
+    /**
+     * The universe itself. Private to the library.
+     */
+    uint64_t storage[RELICORE_UNIVERSE_STORAGE_WORDS];
 };
 
 #ifdef __cplusplus
@@ -1829,6 +1934,1513 @@ int32_t relicore_temperature_from_response_weighted_radiance_f32(const float *wa
                                                                  size_t n_response,
                                                                  float radiance,
                                                                  float *out);
+
+/**
+ * Fills `*out` with the common-practice defaults and the given H0 and Ω_m: Ω_b = 0, Ω_k = 0
+ * (flat), T0 = 2.7255 K (Fixsen 2009, ApJ 707, 916, rounded), N_eff = 3.044 (standard-model
+ * value with the QED and non-instantaneous decoupling corrections), massless neutrinos,
+ * w0 = −1, wa = 0 (a cosmological constant), Y_p = 0.245.
+ *
+ * * `h0_km_s_mpc`: Hubble constant H0 in km s⁻¹ Mpc⁻¹ (copied as given).
+ * * `omega_matter`: matter density parameter today, massive neutrinos included (copied as
+ *   given).
+ * * `out`: the parameter struct.
+ *
+ * Nothing is validated here (`relicore_universe_init` and `relicore_universe_check_parameters`
+ * do that). Returns `RELICORE_OK`, or `RELICORE_ERROR_NULL_POINTER` when `out` is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `struct relicore_universe_parameters`.
+ */
+int32_t relicore_universe_parameters_default(double h0_km_s_mpc,
+                                             double omega_matter,
+                                             struct relicore_universe_parameters *out);
+
+/**
+ * Validates a parameter set and builds the universe into `*out`: the derived constants
+ * (radiation from T0 and N_eff, massive neutrinos by the exact Fermi-Dirac energy integral,
+ * dark energy as the remainder) and the per-universe distance table (a piecewise Chebyshev
+ * table of the line-of-sight comoving distance with an a-posteriori error check). Build once,
+ * then call any number of cosmology functions on it, from any number of threads.
+ *
+ * * `params`: the parameters (see `struct relicore_universe_parameters`).
+ * * `out`: the universe (caller-owned storage, see `struct relicore_universe`).
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` cleared (tag and storage zeroed, so
+ * every function refuses it with `RELICORE_ERROR_INVALID_STRUCT`):
+ * `RELICORE_ERROR_NULL_POINTER` when `params` or `out` is NULL;
+ * `RELICORE_ERROR_INVALID_PARAMETER` for a non-finite parameter, H0 ≤ 0, Ω_m < 0, Ω_b < 0 or
+ * Ω_b > Ω_m, T0 < 0, N_eff < 0, a negative neutrino mass, a positive mass with T0 = 0,
+ * massive neutrinos denser today than Ω_m, Y_p outside [0, 1) (which parameter:
+ * `relicore_universe_check_parameters`); `RELICORE_ERROR_NO_BIG_BANG` when E(z)² ≤ 0
+ * somewhere between today and a → 0 (checked on 4097 points of a logarithmic grid in a from
+ * 1e-30 to 1 and on every node of the distance table); `RELICORE_ERROR_NO_CONVERGENCE` if a
+ * quadrature of the table fails (not seen in testing).
+ *
+ * Cost: a few thousand quadratures (of the order of a millisecond); allocates nothing.
+ *
+ * Reference: the Friedmann equation with radiation, massive neutrinos (Lesgourgues & Pastor
+ * 2006, Phys. Rep. 429, 307, eq. 13), curvature and w0–wa dark energy (Chevallier & Polarski
+ * 2001, Int. J. Mod. Phys. D 10, 213; Linder 2003, PRL 90, 091301).
+ *
+ * # Safety
+ * `params` is NULL or points to a readable `struct relicore_universe_parameters`; `out` is
+ * NULL or points to a writable `struct relicore_universe`.
+ */
+int32_t relicore_universe_init(const struct relicore_universe_parameters *params,
+                               struct relicore_universe *out);
+
+/**
+ * Checks a parameter set as `relicore_universe_init` does and says which parameter is wrong.
+ *
+ * * `params`: the parameters.
+ * * `which_parameter`: the position of the invalid parameter when the result is
+ *   `RELICORE_ERROR_INVALID_PARAMETER` (0 `h0_km_s_mpc`, 1 `omega_matter`, 2 `omega_baryon`,
+ *   3 `omega_curvature`, 4 `cmb_temperature_k`, 5 `n_eff`, 6 `neutrino_masses_ev`, 7 `w0`,
+ *   8 `wa`, 9 `helium_mass_fraction`), otherwise −1.
+ *
+ * Returns the status `relicore_universe_init` would return for these parameters:
+ * `RELICORE_OK`, `RELICORE_ERROR_INVALID_PARAMETER`, `RELICORE_ERROR_NO_BIG_BANG`,
+ * `RELICORE_ERROR_NO_CONVERGENCE`; `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL
+ * (`*which_parameter` = −1 when it is not NULL). It builds the universe and discards it, so
+ * it costs as much as `relicore_universe_init`.
+ *
+ * # Safety
+ * `params` is NULL or points to a readable `struct relicore_universe_parameters`;
+ * `which_parameter` is NULL or points to a writable `int32_t`.
+ */
+int32_t relicore_universe_check_parameters(const struct relicore_universe_parameters *params,
+                                           int32_t *which_parameter);
+
+/**
+ * The parameters a universe was built from (as given to `relicore_universe_init`).
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `out`: the parameters.
+ *
+ * Returns `RELICORE_OK`, or an error code with every field of `*out` set to NaN:
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or
+ * points to a writable `struct relicore_universe_parameters` outside `*universe`.
+ */
+int32_t relicore_universe_get_parameters(const struct relicore_universe *universe,
+                                         struct relicore_universe_parameters *out);
+
+/**
+ * Hubble distance D_H = c/H0 of a universe, Mpc.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `out`: D_H in Mpc, > 0.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN:
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * Accuracy: within 4 ulp against mpmath (c exact, SI 2019).
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or
+ * points to a writable `double`.
+ */
+int32_t relicore_hubble_distance_mpc(const struct relicore_universe *universe, double *out);
+
+/**
+ * Hubble time t_H = 1/H0 of a universe, Gyr (of Julian years: 13.97 Gyr for H0 = 70
+ * km s⁻¹ Mpc⁻¹).
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `out`: t_H in Gyr, > 0.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN:
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * Accuracy: within 8 ulp against mpmath (Mpc from the IAU 2012 au, Julian year).
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or
+ * points to a writable `double`.
+ */
+int32_t relicore_hubble_time_gyr(const struct relicore_universe *universe, double *out);
+
+/**
+ * Radiation density parameter today, Ω_r: photons (a_rad T0⁴/c²/ρ_c) plus the massless
+ * neutrino species; massive species are counted in Ω_m.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `out`: Ω_r, ≥ 0 (0 when T0 = 0).
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN:
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * Accuracy: within 1e-14 relative against mpmath (exact SI constants, CODATA 2022 G).
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or
+ * points to a writable `double`.
+ */
+int32_t relicore_omega_radiation(const struct relicore_universe *universe, double *out);
+
+/**
+ * Dark-energy density parameter today, Ω_de = 1 − Ω_m − Ω_r − Ω_k.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `out`: Ω_de (may be ≤ 0).
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN:
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * Accuracy: within 4 ulp(1) × (1 + |Ω_m| + Ω_r + |Ω_k|) absolute (the subtraction cancels),
+ * or 1e-14 relative if larger, against mpmath.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or
+ * points to a writable `double`.
+ */
+int32_t relicore_omega_dark_energy(const struct relicore_universe *universe, double *out);
+
+/**
+ * Redshift of matter-radiation equality, Ω_cb/Ω_r,all − 1, with Ω_cb = cold dark matter plus
+ * baryons and Ω_r,all = photons plus all N_eff neutrino species counted as massless (the
+ * convention of published parameter tables).
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `out`: z_eq (dimensionless).
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN:
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`;
+ * `RELICORE_ERROR_OUT_OF_DOMAIN` for a universe without radiation (T0 = 0).
+ *
+ * Accuracy: within 1e-14 relative against mpmath (1e-12 with massive neutrinos, whose
+ * density today is a Fermi-Dirac integral).
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or
+ * points to a writable `double`.
+ */
+int32_t relicore_matter_radiation_equality_redshift(const struct relicore_universe *universe,
+                                                    double *out);
+
+/**
+ * Dimensionless Hubble rate E(z) = H(z)/H0, from the Friedmann equation E² = Ω_cb(1+z)³ +
+ * Ω_r(1+z)⁴ + Σ ρ_ν,i(z)/ρ_c + Ω_k(1+z)² + Ω_de f_de(z), with massive neutrinos by the exact
+ * Fermi-Dirac energy integral and f_de(z) of the w0–wa dark energy.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: E, dimensionless (≥ 1 for ordinary models).
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0.
+ *
+ * Accuracy: within 1e-14 relative against mpmath (1e-12 for universes with massive neutrinos,
+ * whose density is a Fermi-Dirac integral), `tests/data/cosmology.txt`.
+ *
+ * Reference: Friedmann equation; w0–wa dark energy of Chevallier & Polarski 2001, Int. J. Mod.
+ * Phys. D 10, 213 and Linder 2003, PRL 90, 091301; neutrino energy density as in Lesgourgues &
+ * Pastor 2006, Phys. Rep. 429, 307, eq. 13.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_dimensionless_hubble(const struct relicore_universe *universe,
+                                      double z,
+                                      double *out);
+
+/**
+ * Hubble parameter H(z) = H0 E(z).
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: H in km s⁻¹ Mpc⁻¹.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0.
+ *
+ * Accuracy: within 1e-14 relative against mpmath (1e-12 for universes with massive neutrinos,
+ * whose density is a Fermi-Dirac integral), `tests/data/cosmology.txt`.
+ *
+ * Reference: the Friedmann equation, as `relicore_dimensionless_hubble`.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_hubble_parameter_km_s_mpc(const struct relicore_universe *universe,
+                                           double z,
+                                           double *out);
+
+/**
+ * Matter density parameter at z: cold dark matter, baryons and massive neutrinos (the bookkeeping
+ * of `omega_matter`) over the critical density at z.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: Ω_m(z), dimensionless (in [0, 1] for flat models).
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0.
+ *
+ * Accuracy: within 1e-14 relative against mpmath (1e-12 for universes with massive neutrinos,
+ * whose density is a Fermi-Dirac integral), `tests/data/cosmology.txt`.
+ *
+ * Reference: the Friedmann equation, as `relicore_dimensionless_hubble`.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_omega_matter_at(const struct relicore_universe *universe, double z, double *out);
+
+/**
+ * Radiation density parameter at z: photons and massless neutrino species over the critical
+ * density at z.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: Ω_r(z), dimensionless.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0.
+ *
+ * Accuracy: within 1e-14 relative against mpmath (1e-12 for universes with massive neutrinos,
+ * whose density is a Fermi-Dirac integral), `tests/data/cosmology.txt`.
+ *
+ * Reference: the Friedmann equation, as `relicore_dimensionless_hubble`.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_omega_radiation_at(const struct relicore_universe *universe,
+                                    double z,
+                                    double *out);
+
+/**
+ * Dark-energy density parameter at z, Ω_de f_de(z)/E².
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: Ω_de(z), dimensionless.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0.
+ *
+ * Accuracy: within 1e-14 relative against mpmath (1e-12 for universes with massive neutrinos,
+ * whose density is a Fermi-Dirac integral), `tests/data/cosmology.txt`.
+ *
+ * Reference: the Friedmann equation, as `relicore_dimensionless_hubble`.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_omega_dark_energy_at(const struct relicore_universe *universe,
+                                      double z,
+                                      double *out);
+
+/**
+ * Curvature density parameter at z, Ω_k(1+z)²/E².
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: Ω_k(z), dimensionless.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0.
+ *
+ * Accuracy: within 1e-14 relative against mpmath (1e-12 for universes with massive neutrinos,
+ * whose density is a Fermi-Dirac integral), `tests/data/cosmology.txt`.
+ *
+ * Reference: the Friedmann equation, as `relicore_dimensionless_hubble`.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_omega_curvature_at(const struct relicore_universe *universe,
+                                    double z,
+                                    double *out);
+
+/**
+ * Critical density at z, ρ_c(z) = 3H(z)²/(8πG), with G of CODATA 2022.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: ρ_c in kg m⁻³, > 0.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0.
+ *
+ * Accuracy: within 1e-14 relative against mpmath (1e-12 for universes with massive neutrinos,
+ * whose density is a Fermi-Dirac integral), `tests/data/cosmology.txt`.
+ *
+ * Reference: the Friedmann equation, as `relicore_dimensionless_hubble`.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_critical_density_kg_m3(const struct relicore_universe *universe,
+                                        double z,
+                                        double *out);
+
+/**
+ * CMB (radiation) temperature at z, T0(1+z).
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: T in K, ≥ 0.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0.
+ *
+ * Accuracy: exact to one rounding (within 2 ulp against mpmath).
+ *
+ * Reference: adiabatic expansion of a blackbody, T ∝ 1/a.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_cmb_temperature_at_k(const struct relicore_universe *universe,
+                                      double z,
+                                      double *out);
+
+/**
+ * Line-of-sight comoving distance D_C = (c/H0) ∫₀^z dz'/E(z').
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: D_C in Mpc, ≥ 0.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_NO_CONVERGENCE` if the
+ * quadrature beyond the table fails (not seen in testing).
+ *
+ * Accuracy: within 1e-12 relative against mpmath for z from 0 to 1e4 in every model of
+ * `tests/data/cosmology.txt` (with and without radiation, open, flat, closed, w0–wa, massive
+ * neutrinos). Method: the per-universe Chebyshev table for z ≤ 16383, adaptive Gauss-Kronrod
+ * quadrature in s = √a beyond.
+ *
+ * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 15.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_comoving_distance_mpc(const struct relicore_universe *universe,
+                                       double z,
+                                       double *out);
+
+/**
+ * Transverse comoving distance D_M: D_C in a flat universe, (D_H/√Ω_k) sinh(√Ω_k D_C/D_H) in an
+ * open one, the sin form in a closed one.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: D_M in Mpc (≥ 0 except past the antipode of a closed universe).
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_NO_CONVERGENCE` if the
+ * quadrature beyond the table fails (not seen in testing).
+ *
+ * Accuracy: within 1e-12 relative against mpmath for z from 0 to 1e4; method as
+ * `relicore_comoving_distance_mpc`.
+ *
+ * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 16.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_transverse_comoving_distance_mpc(const struct relicore_universe *universe,
+                                                  double z,
+                                                  double *out);
+
+/**
+ * Angular-diameter distance D_A = D_M/(1+z).
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: D_A in Mpc.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_NO_CONVERGENCE` if the
+ * quadrature beyond the table fails (not seen in testing).
+ *
+ * Accuracy: within 1e-12 relative against mpmath for z from 0 to 1e4; method as
+ * `relicore_comoving_distance_mpc`.
+ *
+ * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 18.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_angular_diameter_distance_mpc(const struct relicore_universe *universe,
+                                               double z,
+                                               double *out);
+
+/**
+ * Luminosity distance D_L = (1+z) D_M.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: D_L in Mpc.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_NO_CONVERGENCE` if the
+ * quadrature beyond the table fails (not seen in testing).
+ *
+ * Accuracy: within 1e-12 relative against mpmath for z from 0 to 1e4; method as
+ * `relicore_comoving_distance_mpc`.
+ *
+ * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 21.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_luminosity_distance_mpc(const struct relicore_universe *universe,
+                                         double z,
+                                         double *out);
+
+/**
+ * Distance modulus 5 log10(D_L / 10 pc).
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: the distance modulus in magnitudes.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_NO_CONVERGENCE` if the
+ * quadrature beyond the table fails (not seen in testing); `RELICORE_ERROR_NON_POSITIVE` at z = 0
+ * (D_L = 0).
+ *
+ * Accuracy: within 1e-12 relative against mpmath.
+ *
+ * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 25.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_distance_modulus(const struct relicore_universe *universe, double z, double *out);
+
+/**
+ * Comoving volume inside redshift z over the whole sky, computed as V = 2πχ³ Σₙ 4ⁿ⁺¹ wⁿ/(2n+3)!, w
+ * = Ω_k (χ/D_H)², exact for open, flat and closed models without the cancellation of the closed
+ * forms at small w (which are used for |w| > 10).
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: V_C in Gpc³, ≥ 0.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_NO_CONVERGENCE` if the
+ * quadrature beyond the table fails (not seen in testing).
+ *
+ * Accuracy: within 3e-12 relative against mpmath.
+ *
+ * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 29 (and its closed-model analogue).
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_comoving_volume_gpc3(const struct relicore_universe *universe,
+                                      double z,
+                                      double *out);
+
+/**
+ * Differential comoving volume dV_C/dz/dΩ = D_H D_M²/E(z).
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: dV_C/dz/dΩ in Mpc³ sr⁻¹, ≥ 0.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_NO_CONVERGENCE` if the
+ * quadrature beyond the table fails (not seen in testing).
+ *
+ * Accuracy: within 3e-12 relative against mpmath.
+ *
+ * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 28.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_differential_comoving_volume_mpc3_sr(const struct relicore_universe *universe,
+                                                      double z,
+                                                      double *out);
+
+/**
+ * Proper transverse size subtended by one arcsecond at z, D_A · π/648000.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: kpc per arcsec.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_NO_CONVERGENCE` if the
+ * quadrature beyond the table fails (not seen in testing).
+ *
+ * Accuracy: within 1e-12 relative against mpmath for z from 0 to 1e4; method as
+ * `relicore_comoving_distance_mpc`.
+ *
+ * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 18 (small-angle form).
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_transverse_scale_kpc_per_arcsec(const struct relicore_universe *universe,
+                                                 double z,
+                                                 double *out);
+
+/**
+ * Lookback time t(0) − t(z) = (1/H0) ∫₀^z dz'/((1+z')E(z')).
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: the lookback time in Gyr (Julian years), ≥ 0.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_OUT_OF_DOMAIN` if the
+ * quadrature fails (not seen in testing).
+ *
+ * Accuracy: within 1e-12 relative against mpmath for z up to 1e4. Method: adaptive Gauss-Kronrod
+ * quadrature in s = √a.
+ *
+ * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 30.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_lookback_time_gyr(const struct relicore_universe *universe, double z, double *out);
+
+/**
+ * Age of the universe at redshift z, (1/H0) ∫_z^∞ dz'/((1+z')E(z')) (z = 0: the age today).
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: the age in Gyr (Julian years), > 0.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_OUT_OF_DOMAIN` when the
+ * integral diverges (a model whose past is infinite, e.g. pure de Sitter).
+ *
+ * Accuracy: within 1e-12 relative against mpmath for z up to 1e8; the Einstein-de Sitter and flat
+ * ΛCDM closed forms are among the reference vectors. Method: adaptive Gauss-Kronrod quadrature in
+ * s = √a, smooth down to a → 0.
+ *
+ * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 30 integrated to z = ∞.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_age_gyr(const struct relicore_universe *universe, double z, double *out);
+
+/**
+ * Conformal time at z times c, c·η(z) = (c/H0) ∫_z^∞ dz'/E(z'): the comoving particle horizon.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z`: redshift z, finite and ≥ 0.
+ * * `out`: c·η in Mpc, > 0.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_OUT_OF_DOMAIN` where the
+ * integral diverges (a model with neither radiation nor matter, e.g. the empty Milne model).
+ *
+ * Accuracy: within 1e-12 relative against mpmath for z up to 1e8. Method: adaptive Gauss-Kronrod
+ * quadrature in s = √a.
+ *
+ * Reference: the conformal time of the Friedmann-Lemaître-Robertson-Walker metric, dη = dt/a.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_conformal_time_mpc(const struct relicore_universe *universe,
+                                    double z,
+                                    double *out);
+
+/**
+ * Angular-diameter distance of an object at z2 seen from z1 ≤ z2, D_M(χ2 − χ1)/(1 + z2), χ the
+ * line-of-sight comoving distance and D_M() the curvature function of
+ * `relicore_transverse_comoving_distance_mpc` applied to the difference.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `z1`: redshift of the observer, finite and ≥ 0.
+ * * `z2`: redshift of the source, finite and ≥ z1.
+ * * `out`: D_A(z1, z2) in Mpc.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite redshift; `RELICORE_ERROR_NEGATIVE` for a redshift < 0; `RELICORE_ERROR_EMPTY_INTERVAL`
+ * when z2 < z1; `RELICORE_ERROR_NO_CONVERGENCE` if the quadrature beyond the table fails (not seen
+ * in testing).
+ *
+ * Accuracy: within 1e-12 relative against mpmath, or 1e-15 κ when the interval is so short that χ2
+ * − χ1 cancels (κ ≈ z/(z2 − z1), the condition number).
+ *
+ * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 19, and its sin form for closed models.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_angular_diameter_distance_between_mpc(const struct relicore_universe *universe,
+                                                       double z1,
+                                                       double z2,
+                                                       double *out);
+
+/**
+ * Redshift at which the age of the universe equals `age_gyr` (inverse of `relicore_age_gyr`).
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `age_gyr`: age of the universe in Gyr, finite and > 0, at most the age today.
+ * * `out`: the redshift z, ≥ 0.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite age; `RELICORE_ERROR_NON_POSITIVE` for an age ≤ 0; `RELICORE_ERROR_OUT_OF_DOMAIN` above
+ * the age today or below the age at z = 1e12; `RELICORE_ERROR_NO_CONVERGENCE` if the iteration
+ * fails (not seen in testing).
+ *
+ * Accuracy: round trip within 1e-12 relative; against mpmath within max(1e-12, 1e-13 κ) relative,
+ * κ = |d ln z/d ln target| (the condition number of the inversion). Method: safeguarded Newton
+ * iteration in u = ln(1+z), bracketed by [0, ln(1 + 1e12)], with the exact derivative.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_redshift_at_age_gyr(const struct relicore_universe *universe,
+                                     double age_gyr,
+                                     double *out);
+
+/**
+ * Redshift at which the lookback time equals `lookback_gyr` (inverse of
+ * `relicore_lookback_time_gyr`).
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `lookback_gyr`: lookback time in Gyr, finite and ≥ 0, below the age today.
+ * * `out`: the redshift z, ≥ 0.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite time; `RELICORE_ERROR_NEGATIVE` for a time < 0; `RELICORE_ERROR_OUT_OF_DOMAIN` at or
+ * beyond the age today; `RELICORE_ERROR_NO_CONVERGENCE` if the iteration fails (not seen in
+ * testing).
+ *
+ * Accuracy: round trip within 1e-12 relative; against mpmath within max(1e-12, 1e-13 κ) relative,
+ * κ = |d ln z/d ln target| (the condition number of the inversion). Method: safeguarded Newton
+ * iteration in u = ln(1+z), bracketed by [0, ln(1 + 1e12)], with the exact derivative.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_redshift_at_lookback_time_gyr(const struct relicore_universe *universe,
+                                               double lookback_gyr,
+                                               double *out);
+
+/**
+ * Redshift at which the line-of-sight comoving distance equals `distance_mpc` (inverse of
+ * `relicore_comoving_distance_mpc`).
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `distance_mpc`: line-of-sight comoving distance in Mpc, finite and ≥ 0.
+ * * `out`: the redshift z, ≥ 0.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite distance; `RELICORE_ERROR_NEGATIVE` for a distance < 0; `RELICORE_ERROR_OUT_OF_DOMAIN`
+ * beyond the distance reached at z = 1e12 (the particle horizon); `RELICORE_ERROR_NO_CONVERGENCE`
+ * if the iteration fails (not seen in testing).
+ *
+ * Accuracy: round trip within 1e-12 relative; against mpmath within max(1e-12, 1e-13 κ) relative,
+ * κ = |d ln z/d ln target| (the condition number of the inversion). Method: safeguarded Newton
+ * iteration in u = ln(1+z), bracketed by [0, ln(1 + 1e12)], with the exact derivative.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_redshift_at_comoving_distance_mpc(const struct relicore_universe *universe,
+                                                   double distance_mpc,
+                                                   double *out);
+
+/**
+ * Redshift at which the luminosity distance equals `distance_mpc` (inverse of
+ * `relicore_luminosity_distance_mpc`). In a closed universe D_L need not grow monotonically; the
+ * root found in the bracket is returned.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `distance_mpc`: luminosity distance in Mpc, finite and ≥ 0.
+ * * `out`: the redshift z, ≥ 0.
+ *
+ * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
+ * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
+ * infinite distance; `RELICORE_ERROR_NEGATIVE` for a distance < 0; `RELICORE_ERROR_OUT_OF_DOMAIN`
+ * when no redshift up to 1e12 gives it; `RELICORE_ERROR_NO_CONVERGENCE` if the iteration fails
+ * (not seen in testing).
+ *
+ * Accuracy: round trip within 1e-12 relative; against mpmath within max(1e-12, 1e-13 κ) relative,
+ * κ = |d ln z/d ln target| (the condition number of the inversion). Method: safeguarded Newton
+ * iteration in u = ln(1+z), bracketed by [0, ln(1 + 1e12)], with the exact derivative.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
+ * to a writable `double` outside `*universe`.
+ */
+int32_t relicore_redshift_at_luminosity_distance_mpc(const struct relicore_universe *universe,
+                                                     double distance_mpc,
+                                                     double *out);
+
+/**
+ * Array form of `relicore_dimensionless_hubble`: out[i] = dimensionless_hubble(universe,
+ * redshifts[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, E, dimensionless (≥ 1 for ordinary models).
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_dimensionless_hubble_array(const struct relicore_universe *universe,
+                                            const double *redshifts,
+                                            size_t n,
+                                            double *out);
+
+/**
+ * Array form of `relicore_hubble_parameter_km_s_mpc`: out[i] = hubble_parameter_km_s_mpc(universe,
+ * redshifts[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, H in km s⁻¹ Mpc⁻¹.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_hubble_parameter_km_s_mpc_array(const struct relicore_universe *universe,
+                                                 const double *redshifts,
+                                                 size_t n,
+                                                 double *out);
+
+/**
+ * Array form of `relicore_omega_matter_at`: out[i] = omega_matter_at(universe, redshifts[i]) for i
+ * < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, Ω_m(z), dimensionless (in [0, 1] for flat models).
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_omega_matter_at_array(const struct relicore_universe *universe,
+                                       const double *redshifts,
+                                       size_t n,
+                                       double *out);
+
+/**
+ * Array form of `relicore_omega_radiation_at`: out[i] = omega_radiation_at(universe, redshifts[i])
+ * for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, Ω_r(z), dimensionless.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_omega_radiation_at_array(const struct relicore_universe *universe,
+                                          const double *redshifts,
+                                          size_t n,
+                                          double *out);
+
+/**
+ * Array form of `relicore_omega_dark_energy_at`: out[i] = omega_dark_energy_at(universe,
+ * redshifts[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, Ω_de(z), dimensionless.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_omega_dark_energy_at_array(const struct relicore_universe *universe,
+                                            const double *redshifts,
+                                            size_t n,
+                                            double *out);
+
+/**
+ * Array form of `relicore_omega_curvature_at`: out[i] = omega_curvature_at(universe, redshifts[i])
+ * for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, Ω_k(z), dimensionless.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_omega_curvature_at_array(const struct relicore_universe *universe,
+                                          const double *redshifts,
+                                          size_t n,
+                                          double *out);
+
+/**
+ * Array form of `relicore_critical_density_kg_m3`: out[i] = critical_density_kg_m3(universe,
+ * redshifts[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, ρ_c in kg m⁻³, > 0.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_critical_density_kg_m3_array(const struct relicore_universe *universe,
+                                              const double *redshifts,
+                                              size_t n,
+                                              double *out);
+
+/**
+ * Array form of `relicore_cmb_temperature_at_k`: out[i] = cmb_temperature_at_k(universe,
+ * redshifts[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, T in K, ≥ 0.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_cmb_temperature_at_k_array(const struct relicore_universe *universe,
+                                            const double *redshifts,
+                                            size_t n,
+                                            double *out);
+
+/**
+ * Array form of `relicore_comoving_distance_mpc`: out[i] = comoving_distance_mpc(universe,
+ * redshifts[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, D_C in Mpc, ≥ 0.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_comoving_distance_mpc_array(const struct relicore_universe *universe,
+                                             const double *redshifts,
+                                             size_t n,
+                                             double *out);
+
+/**
+ * Array form of `relicore_transverse_comoving_distance_mpc`: out[i] =
+ * transverse_comoving_distance_mpc(universe, redshifts[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, D_M in Mpc (≥ 0 except past the antipode of a closed universe).
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_transverse_comoving_distance_mpc_array(const struct relicore_universe *universe,
+                                                        const double *redshifts,
+                                                        size_t n,
+                                                        double *out);
+
+/**
+ * Array form of `relicore_angular_diameter_distance_mpc`: out[i] =
+ * angular_diameter_distance_mpc(universe, redshifts[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, D_A in Mpc.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_angular_diameter_distance_mpc_array(const struct relicore_universe *universe,
+                                                     const double *redshifts,
+                                                     size_t n,
+                                                     double *out);
+
+/**
+ * Array form of `relicore_luminosity_distance_mpc`: out[i] = luminosity_distance_mpc(universe,
+ * redshifts[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, D_L in Mpc.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_luminosity_distance_mpc_array(const struct relicore_universe *universe,
+                                               const double *redshifts,
+                                               size_t n,
+                                               double *out);
+
+/**
+ * Array form of `relicore_distance_modulus`: out[i] = distance_modulus(universe, redshifts[i]) for
+ * i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, the distance modulus in magnitudes.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_distance_modulus_array(const struct relicore_universe *universe,
+                                        const double *redshifts,
+                                        size_t n,
+                                        double *out);
+
+/**
+ * Array form of `relicore_comoving_volume_gpc3`: out[i] = comoving_volume_gpc3(universe,
+ * redshifts[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, V_C in Gpc³, ≥ 0.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_comoving_volume_gpc3_array(const struct relicore_universe *universe,
+                                            const double *redshifts,
+                                            size_t n,
+                                            double *out);
+
+/**
+ * Array form of `relicore_differential_comoving_volume_mpc3_sr`: out[i] =
+ * differential_comoving_volume_mpc3_sr(universe, redshifts[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, dV_C/dz/dΩ in Mpc³ sr⁻¹, ≥ 0.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_differential_comoving_volume_mpc3_sr_array(const struct relicore_universe *universe,
+                                                            const double *redshifts,
+                                                            size_t n,
+                                                            double *out);
+
+/**
+ * Array form of `relicore_transverse_scale_kpc_per_arcsec`: out[i] =
+ * transverse_scale_kpc_per_arcsec(universe, redshifts[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, kpc per arcsec.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_transverse_scale_kpc_per_arcsec_array(const struct relicore_universe *universe,
+                                                       const double *redshifts,
+                                                       size_t n,
+                                                       double *out);
+
+/**
+ * Array form of `relicore_lookback_time_gyr`: out[i] = lookback_time_gyr(universe, redshifts[i])
+ * for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, the lookback time in Gyr (Julian years), ≥ 0.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_lookback_time_gyr_array(const struct relicore_universe *universe,
+                                         const double *redshifts,
+                                         size_t n,
+                                         double *out);
+
+/**
+ * Array form of `relicore_age_gyr`: out[i] = age_gyr(universe, redshifts[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, the age in Gyr (Julian years), > 0.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_age_gyr_array(const struct relicore_universe *universe,
+                               const double *redshifts,
+                               size_t n,
+                               double *out);
+
+/**
+ * Array form of `relicore_conformal_time_mpc`: out[i] = conformal_time_mpc(universe, redshifts[i])
+ * for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, c·η in Mpc, > 0.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_conformal_time_mpc_array(const struct relicore_universe *universe,
+                                          const double *redshifts,
+                                          size_t n,
+                                          double *out);
+
+/**
+ * Array form of `relicore_redshift_at_age_gyr`: out[i] = redshift_at_age_gyr(universe,
+ * ages_gyr[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `ages_gyr`: n ages of the universe in Gyr, each finite and > 0, at most the age today.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, redshifts z, ≥ 0.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `ages_gyr` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `ages_gyr` is NULL or
+ * points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `ages_gyr` (computed in place); other overlaps give
+ * unspecified values.
+ */
+int32_t relicore_redshift_at_age_gyr_array(const struct relicore_universe *universe,
+                                           const double *ages_gyr,
+                                           size_t n,
+                                           double *out);
+
+/**
+ * Array form of `relicore_redshift_at_lookback_time_gyr`: out[i] =
+ * redshift_at_lookback_time_gyr(universe, lookback_times_gyr[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `lookback_times_gyr`: n lookback times in Gyr, each finite and ≥ 0, below the age today.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, redshifts z, ≥ 0.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `lookback_times_gyr` or `out` is NULL (even for n
+ * = 0) and `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `lookback_times_gyr` is
+ * NULL or points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `lookback_times_gyr` (computed in place); other
+ * overlaps give unspecified values.
+ */
+int32_t relicore_redshift_at_lookback_time_gyr_array(const struct relicore_universe *universe,
+                                                     const double *lookback_times_gyr,
+                                                     size_t n,
+                                                     double *out);
+
+/**
+ * Array form of `relicore_redshift_at_comoving_distance_mpc`: out[i] =
+ * redshift_at_comoving_distance_mpc(universe, distances_mpc[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `distances_mpc`: n line-of-sight comoving distances in Mpc, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, redshifts z, ≥ 0.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `distances_mpc` or `out` is NULL (even for n = 0)
+ * and `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `distances_mpc` is NULL
+ * or points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `distances_mpc` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_redshift_at_comoving_distance_mpc_array(const struct relicore_universe *universe,
+                                                         const double *distances_mpc,
+                                                         size_t n,
+                                                         double *out);
+
+/**
+ * Array form of `relicore_redshift_at_luminosity_distance_mpc`: out[i] =
+ * redshift_at_luminosity_distance_mpc(universe, distances_mpc[i]) for i < n.
+ *
+ * * `universe`: from `relicore_universe_init`.
+ * * `distances_mpc`: n luminosity distances in Mpc, each finite and ≥ 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, redshifts z, ≥ 0.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when `universe`, `distances_mpc` or `out` is NULL (even for n = 0)
+ * and `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `universe` is NULL or points to a readable `struct relicore_universe`; `distances_mpc` is NULL
+ * or points to n readable `double`; `out` is NULL or points to n writable `double` outside
+ * `*universe`. `out` may be the same buffer as `distances_mpc` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_redshift_at_luminosity_distance_mpc_array(const struct relicore_universe *universe,
+                                                           const double *distances_mpc,
+                                                           size_t n,
+                                                           double *out);
 
 #ifdef __cplusplus
 }  // extern "C"

@@ -1,6 +1,7 @@
 /*
  * Firmware-style use of relicore: single-precision scalar functions, the two-load calibration
- * (float and double), the float response functions and the float array forms, with every
+ * (float and double), the float response functions and the float array forms, and a universe
+ * (built in static storage) with scalar, array, constant and inverse calls, with every other
  * buffer on the stack. tests/c/run.sh links it against librelicore.a with -Wl,--gc-sections
  * and checks that the executable needs no malloc, calloc, realloc or free.
  * Uses no stdio; the exit status is the number of calls that did not succeed as expected.
@@ -68,6 +69,28 @@ int main(void)
     for (int i = 0; i < 8; i++) {
         failures += !isfinite(out[i]);
     }
+    /* a universe: caller-owned storage, built once, then distances, times and an inverse */
+    static struct relicore_universe universe;
+    struct relicore_universe_parameters params;
+    failures += relicore_universe_parameters_default(67.0, 0.32, &params) != RELICORE_OK;
+    params.neutrino_masses_ev[0] = 0.06;
+    failures += relicore_universe_init(&params, &universe) != RELICORE_OK;
+    double d = 0.0, z[8], dz[8];
+    failures += bad(relicore_luminosity_distance_mpc(&universe, 1.0, &d), (float)d);
+    failures += bad(relicore_age_gyr(&universe, 0.0, &d), (float)d);
+    failures += bad(relicore_redshift_at_age_gyr(&universe, 0.5 * d, &d), (float)d);
+    failures += bad(relicore_hubble_time_gyr(&universe, &d), (float)d);
+    for (int i = 0; i < 8; i++) {
+        z[i] = 0.5 * (double)i;
+    }
+    failures += relicore_comoving_distance_mpc_array(&universe, z, 8, dz) != RELICORE_OK;
+    failures += !isfinite(dz[7]);
+    int32_t which = 0;
+    params.h0_km_s_mpc = -1.0;
+    failures += relicore_universe_check_parameters(&params, &which)
+                != RELICORE_ERROR_INVALID_PARAMETER;
+    failures += which != 0;
+
     /* a failing call still allocates nothing */
     failures += relicore_spectral_radiance_wavelength_f32(-1.0f, 300.0f, &v)
                 != RELICORE_ERROR_NON_POSITIVE;

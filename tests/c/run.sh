@@ -1,12 +1,13 @@
 #!/usr/bin/env bash
-# C tests of relicore: builds the release-c library, then
-#   1. the C test against librelicore.a (by path, -lm, --gc-sections) on the reference vectors;
+# C tests of relicore: builds the release-c library, then, for each C test program
+# (test_blackbody on the blackbody vector files, test_cosmology on tests/data/cosmology.txt):
+#   1. the test against librelicore.a (by path, -lm, --gc-sections) on the reference vectors;
 #   2. the same test built with AddressSanitizer + UndefinedBehaviorSanitizer (leak checking on;
 #      falls back to valgrind if the sanitizer runtime is missing);
 #   3. the plain test under valgrind (memcheck, full leak check);
 #   4. a firmware-style program (tests/c/nomalloc.c) linked statically with --gc-sections:
 #      its undefined symbols must include no allocation function;
-#   5. the C test linked against librelicore.so (with an rpath), and its --dump output compared
+#   5. the test linked against librelicore.so (with an rpath), and its --dump output compared
 #      bit for bit with the static build's.
 # Run from anywhere; works in the repository root. Ends with "N passed, M failed" (steps).
 set -euo pipefail
@@ -16,6 +17,7 @@ ROOT=$(pwd)
 BUILD="$ROOT/build/c-tests"
 LIBDIR="$ROOT/target/release-c"
 DATA=("$ROOT/tests/data/blackbody.txt" "$ROOT/tests/data/blackbody_response.txt")
+COSMOLOGY_DATA=("$ROOT/tests/data/cosmology.txt")
 CC=${CC:-gcc}
 CFLAGS=(-std=c11 -Wall -Wextra -Wpedantic -Werror -I "$ROOT/include")
 mkdir -p "$BUILD"
@@ -35,34 +37,48 @@ step() { # step NAME COMMAND...: runs a step, counts it, never stops the script
     fi
 }
 
-for f in "${DATA[@]}"; do
+for f in "${DATA[@]}" "${COSMOLOGY_DATA[@]}"; do
     [[ -f "$f" ]] || { echo "missing reference data $f" >&2; exit 1; }
 done
 
 echo "=== cargo build -p relicore-capi --profile release-c"
 cargo build -p relicore-capi --profile release-c
 
-build_static() {
-    "$CC" "${CFLAGS[@]}" -O2 tests/c/test_blackbody.c "$LIBDIR/librelicore.a" -lm \
-        -Wl,--gc-sections -o "$BUILD/test_blackbody"
+# data_of TEST: the arguments of a test program (its data files)
+data_of() {
+    case $1 in
+    test_blackbody) echo "${DATA[@]}" ;;
+    test_cosmology) echo "${COSMOLOGY_DATA[@]}" ;;
+    esac
 }
-run_static() { "$BUILD/test_blackbody" "${DATA[@]}"; }
+TESTS=(test_blackbody test_cosmology)
+
+build_static() { # build_static TEST
+    "$CC" "${CFLAGS[@]}" -O2 "tests/c/$1.c" "$LIBDIR/librelicore.a" -lm \
+        -Wl,--gc-sections -o "$BUILD/$1"
+}
+run_static() { # run_static TEST
+    # shellcheck disable=SC2046
+    "$BUILD/$1" $(data_of "$1")
+}
 
 sanitizer_available() {
     printf 'int main(void) { return 0; }\n' >"$BUILD/probe.c"
     "$CC" -fsanitize=address,undefined "$BUILD/probe.c" -o "$BUILD/probe" 2>/dev/null \
         && "$BUILD/probe"
 }
-run_sanitized() {
+run_sanitized() { # run_sanitized TEST
     "$CC" "${CFLAGS[@]}" -O1 -g -fsanitize=address,undefined -fno-omit-frame-pointer \
-        -fno-sanitize-recover=undefined tests/c/test_blackbody.c "$LIBDIR/librelicore.a" -lm \
-        -o "$BUILD/test_blackbody_asan" || return 1
+        -fno-sanitize-recover=undefined "tests/c/$1.c" "$LIBDIR/librelicore.a" -lm \
+        -o "$BUILD/$1_asan" || return 1
+    # shellcheck disable=SC2046
     ASAN_OPTIONS=detect_leaks=1:abort_on_error=0 \
         UBSAN_OPTIONS=halt_on_error=1:print_stacktrace=1 \
-        "$BUILD/test_blackbody_asan" "${DATA[@]}"
+        "$BUILD/$1_asan" $(data_of "$1")
 }
-run_valgrind() {
-    valgrind --quiet --error-exitcode=1 --leak-check=full "$BUILD/test_blackbody" "${DATA[@]}"
+run_valgrind() { # run_valgrind TEST
+    # shellcheck disable=SC2046
+    valgrind --quiet --error-exitcode=1 --leak-check=full "$BUILD/$1" $(data_of "$1")
 }
 
 check_nomalloc() {
@@ -81,30 +97,46 @@ check_nomalloc() {
     echo "no allocation function is needed"
 }
 
-check_shared() {
-    "$CC" "${CFLAGS[@]}" -O2 tests/c/test_blackbody.c -L "$LIBDIR" -lrelicore \
-        -Wl,-rpath,"$LIBDIR" -lm -o "$BUILD/test_blackbody_shared" || return 1
-    ldd "$BUILD/test_blackbody_shared" | grep -q "$LIBDIR/librelicore.so" \
-        || { echo "test_blackbody_shared does not load $LIBDIR/librelicore.so"; return 1; }
-    "$BUILD/test_blackbody_shared" "${DATA[@]}" || return 1
-    "$BUILD/test_blackbody" --dump "${DATA[@]}" >"$BUILD/dump_static.txt" || return 1
-    "$BUILD/test_blackbody_shared" --dump "${DATA[@]}" >"$BUILD/dump_shared.txt" || return 1
-    [[ -s "$BUILD/dump_static.txt" ]] || { echo "empty dump"; return 1; }
-    cmp "$BUILD/dump_static.txt" "$BUILD/dump_shared.txt" \
-        && echo "static and shared builds agree bit for bit on $(wc -l <"$BUILD/dump_static.txt") results"
+check_shared() { # check_shared TEST
+    local t=$1
+    "$CC" "${CFLAGS[@]}" -O2 "tests/c/$t.c" -L "$LIBDIR" -lrelicore \
+        -Wl,-rpath,"$LIBDIR" -lm -o "$BUILD/${t}_shared" || return 1
+    ldd "$BUILD/${t}_shared" | grep -q "$LIBDIR/librelicore.so" \
+        || { echo "${t}_shared does not load $LIBDIR/librelicore.so"; return 1; }
+    # shellcheck disable=SC2046
+    "$BUILD/${t}_shared" $(data_of "$t") || return 1
+    # shellcheck disable=SC2046
+    "$BUILD/$t" --dump $(data_of "$t") >"$BUILD/${t}_dump_static.txt" || return 1
+    # shellcheck disable=SC2046
+    "$BUILD/${t}_shared" --dump $(data_of "$t") >"$BUILD/${t}_dump_shared.txt" || return 1
+    [[ -s "$BUILD/${t}_dump_static.txt" ]] || { echo "empty dump"; return 1; }
+    cmp "$BUILD/${t}_dump_static.txt" "$BUILD/${t}_dump_shared.txt" \
+        && echo "static and shared builds agree bit for bit on $(wc -l <"$BUILD/${t}_dump_static.txt") results"
 }
 
-step "compile the C test against librelicore.a" build_static
-step "C test (static, reference vectors and interface checks)" run_static
+for t in "${TESTS[@]}"; do
+    step "compile $t against librelicore.a" build_static "$t"
+done
+for t in "${TESTS[@]}"; do
+    step "$t (static, reference vectors and interface checks)" run_static "$t"
+done
 if sanitizer_available; then
-    step "C test under AddressSanitizer + UndefinedBehaviorSanitizer" run_sanitized
+    for t in "${TESTS[@]}"; do
+        step "$t under AddressSanitizer + UndefinedBehaviorSanitizer" run_sanitized "$t"
+    done
 else
     echo "sanitizer runtime missing: running the sanitizer step under valgrind instead"
-    step "C test under valgrind (in place of the sanitizers)" run_valgrind
+    for t in "${TESTS[@]}"; do
+        step "$t under valgrind (in place of the sanitizers)" run_valgrind "$t"
+    done
 fi
-step "C test under valgrind memcheck" run_valgrind
+for t in "${TESTS[@]}"; do
+    step "$t under valgrind memcheck" run_valgrind "$t"
+done
 step "firmware-style program needs no malloc/calloc/realloc/free" check_nomalloc
-step "C test against librelicore.so, same bits as the static build" check_shared
+for t in "${TESTS[@]}"; do
+    step "$t against librelicore.so, same bits as the static build" check_shared "$t"
+done
 
 echo "C test steps:"
 echo "$passed passed, $failed failed"

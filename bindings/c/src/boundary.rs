@@ -13,6 +13,9 @@ pub(crate) enum Failure {
     /// Some elements of an array call failed: the body has set them to NaN and computed the
     /// others, which stay as they are; the code is that of the first failing element.
     Elements(i32),
+    /// The call failed and the body has written every output itself (an output that is not a
+    /// floating-point number, such as the index of a bad parameter, has no NaN to take).
+    Reported(i32),
 }
 
 impl From<Error> for Failure {
@@ -29,7 +32,7 @@ impl From<Error> for Failure {
 pub(crate) fn boundary(body: impl FnOnce() -> Result<(), Failure>, fill_nan: impl FnOnce()) -> i32 {
     let code = match catch_unwind(AssertUnwindSafe(body)) {
         Ok(Ok(())) => return RELICORE_OK,
-        Ok(Err(Failure::Elements(code))) => return code,
+        Ok(Err(Failure::Elements(code) | Failure::Reported(code))) => return code,
         Ok(Err(Failure::Call(code))) => code,
         Err(_) => RELICORE_ERROR_PANIC,
     };
@@ -130,28 +133,46 @@ pub(crate) unsafe fn elementwise<T: NotANumber>(
         || {
             non_null(x)?;
             non_null(out)?;
-            let mut first: Option<i32> = None;
-            for i in 0..n {
-                // SAFETY: i < n and x is valid for n reads (caller's contract).
-                let xi = unsafe { x.add(i).read() };
-                let v = match f(xi) {
-                    Ok(v) => v,
-                    Err(e) => {
-                        first.get_or_insert(status_of(e));
-                        T::NAN
-                    }
-                };
-                // SAFETY: i < n and out is valid for n writes (caller's contract).
-                unsafe { out.add(i).write(v) };
-            }
-            match first {
-                None => Ok(()),
-                Some(code) => Err(Failure::Elements(code)),
-            }
+            // SAFETY: both non-NULL and valid for n elements (caller's contract).
+            unsafe { each(x, n, out, f) }
         },
         // SAFETY: out is NULL or valid for n writes (caller's contract).
         || unsafe { put_nan_n(out, n) },
     )
+}
+
+/// The loop of every array form (to be run inside [`boundary`]): `out[i] = f(x[i])` for i in
+/// 0..n, each element read before its output is written; a failing element is set to NaN and
+/// the first failure's code is returned as `Failure::Elements`.
+///
+/// # Safety
+/// `x` is valid for `n` reads and `out` for `n` writes (both non-NULL and aligned); `out` may
+/// be `x` itself.
+#[inline(always)]
+pub(crate) unsafe fn each<T: NotANumber>(
+    x: *const T,
+    n: usize,
+    out: *mut T,
+    f: impl Fn(T) -> relicore::Result<T>,
+) -> Result<(), Failure> {
+    let mut first: Option<i32> = None;
+    for i in 0..n {
+        // SAFETY: i < n and x is valid for n reads (caller's contract).
+        let xi = unsafe { x.add(i).read() };
+        let v = match f(xi) {
+            Ok(v) => v,
+            Err(e) => {
+                first.get_or_insert(status_of(e));
+                T::NAN
+            }
+        };
+        // SAFETY: i < n and out is valid for n writes (caller's contract).
+        unsafe { out.add(i).write(v) };
+    }
+    match first {
+        None => Ok(()),
+        Some(code) => Err(Failure::Elements(code)),
+    }
 }
 
 /// A caller's (pointer, length) buffer as a slice; NULL is `RELICORE_ERROR_NULL_POINTER`

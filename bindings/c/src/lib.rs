@@ -19,7 +19,9 @@
 //! Module map: `status` (codes, messages, version), `constants` (physical constants),
 //! `boundary` (plumbing), `blackbody` (scalar `double`), `array` (array forms), `single`
 //! (`float` twins), `calibration` (two-load calibration), `response` (response-weighted
-//! radiance).
+//! radiance), `universe` (the universe struct, its init function, parameters and constants),
+//! `cosmology` (the redshift functions of a universe, their inverses), `cosmology_array`
+//! (their array forms).
 
 #![deny(missing_docs)]
 #![cfg_attr(
@@ -49,6 +51,12 @@ pub mod single;
 pub mod calibration;
 
 pub mod response;
+
+pub mod universe;
+
+pub mod cosmology;
+
+pub mod cosmology_array;
 
 #[cfg(test)]
 mod header;

@@ -36,6 +36,12 @@ pub const RELICORE_ERROR_NO_CONVERGENCE: i32 = -11;
 pub const RELICORE_ERROR_INVALID_STRUCT: i32 = -12;
 /// A Rust panic was caught at the boundary (a bug in relicore: please report it).
 pub const RELICORE_ERROR_PANIC: i32 = -13;
+/// A parameter of a parameter set (a universe) is invalid; `relicore_universe_check_parameters`
+/// names which one.
+pub const RELICORE_ERROR_INVALID_PARAMETER: i32 = -14;
+/// The model has no big bang: E(z)² ≤ 0 somewhere on the way back (a bounce or a loitering
+/// universe), so ages and distances to high redshift do not exist.
+pub const RELICORE_ERROR_NO_BIG_BANG: i32 = -15;
 
 /// Major version of the library (equal to the core crate's version, checked by a test).
 pub const RELICORE_VERSION_MAJOR: u32 = 0;
@@ -61,6 +67,8 @@ pub(crate) fn status_of(e: Error) -> i32 {
         Error::DegenerateCalibration(_) => RELICORE_ERROR_DEGENERATE_CALIBRATION,
         Error::OutOfDomain(_) => RELICORE_ERROR_OUT_OF_DOMAIN,
         Error::NoConvergence => RELICORE_ERROR_NO_CONVERGENCE,
+        Error::InvalidParameter(_) => RELICORE_ERROR_INVALID_PARAMETER,
+        Error::NoBigBang => RELICORE_ERROR_NO_BIG_BANG,
         // `Error` is `#[non_exhaustive]`: a variant added to the core later must get its own
         // code here; until then it is reported as outside the domain of the function.
         _ => RELICORE_ERROR_OUT_OF_DOMAIN,
@@ -101,6 +109,10 @@ pub(crate) fn message(status: i32) -> &'static CStr {
             c"a struct argument holds values its init function cannot have produced"
         }
         RELICORE_ERROR_PANIC => c"internal error: a Rust panic was caught (please report it)",
+        RELICORE_ERROR_INVALID_PARAMETER => c"a parameter of the parameter set is invalid",
+        RELICORE_ERROR_NO_BIG_BANG => {
+            c"the model has no big bang: E(z)^2 <= 0 somewhere on the way back"
+        }
         _ => c"unknown status",
     }
 }
@@ -129,7 +141,7 @@ pub extern "C" fn relicore_version() -> *const c_char {
 mod tests {
     use super::*;
 
-    const ALL: [i32; 14] = [
+    const ALL: [i32; 16] = [
         RELICORE_OK,
         RELICORE_ERROR_NULL_POINTER,
         RELICORE_ERROR_NON_FINITE,
@@ -144,11 +156,13 @@ mod tests {
         RELICORE_ERROR_NO_CONVERGENCE,
         RELICORE_ERROR_INVALID_STRUCT,
         RELICORE_ERROR_PANIC,
+        RELICORE_ERROR_INVALID_PARAMETER,
+        RELICORE_ERROR_NO_BIG_BANG,
     ];
 
     #[test]
     fn codes_are_zero_then_consecutive_negatives() {
-        // FORMAT.md: 0 OK, then -1 ... -13 in this order
+        // FORMAT.md: 0 OK, then -1 ... -15 in this order
         for (i, &c) in ALL.iter().enumerate() {
             assert_eq!(c, -(i as i32), "status constant at position {i}");
         }
@@ -158,7 +172,7 @@ mod tests {
     fn every_status_has_a_distinct_message() {
         let unknown = message(1);
         assert_eq!(unknown, c"unknown status");
-        assert_eq!(message(-14), unknown);
+        assert_eq!(message(-16), unknown);
         assert_eq!(message(i32::MIN), unknown);
         assert_eq!(message(i32::MAX), unknown);
         for (i, &a) in ALL.iter().enumerate() {
@@ -192,6 +206,8 @@ mod tests {
             ),
             (Error::OutOfDomain(2), RELICORE_ERROR_OUT_OF_DOMAIN),
             (Error::NoConvergence, RELICORE_ERROR_NO_CONVERGENCE),
+            (Error::InvalidParameter(3), RELICORE_ERROR_INVALID_PARAMETER),
+            (Error::NoBigBang, RELICORE_ERROR_NO_BIG_BANG),
         ];
         for (e, c) in cases {
             assert_eq!(status_of(e), c, "{e:?}");
