@@ -1,4 +1,5 @@
-! relicore: the Fortran face of relicore (blackbody radiometry), a thin binding of the C ABI
+! relicore: the Fortran face of relicore (blackbody radiometry and the cosmological background), a
+! thin binding of the C ABI
 ! declared in include/relicore.h. Physics lives only in the Rust core; this module binds the
 ! C functions, converts, checks sizes and turns status codes into NaN, a stat argument or a
 ! stop. Build with any Fortran 2018 compiler (gfortran -std=f2018) and link librelicore.a
@@ -29,6 +30,14 @@
 !       cal = relicore_two_load_calibration(frequency_hz, reading_hot, temperature_hot_k,
 !                                           reading_cold, temperature_cold_k)
 !   (its structure constructor with the three fields frequency_hz, gain, offset also works).
+! * Cosmology: fill a type(relicore_universe_parameters) with
+!   relicore_universe_parameters_default(h0_km_s_mpc, omega_matter), change what differs, build a
+!   type(relicore_universe) once with call relicore_universe_init(params, universe, stat), then
+!   pass the universe first to every cosmology procedure:
+!       d = relicore_luminosity_distance_mpc(universe, z)       ! elemental in z (and universe)
+!       call relicore_age_gyr_array(universe, redshifts, ages, stat)
+!   Constants of a universe (relicore_hubble_distance_mpc(universe), ...) are functions of it.
+!   Units: Mpc, Gyr, km s-1 Mpc-1, kg m-3, Gpc3, as the names say.
 ! * relicore_status_message(code) and relicore_version() return allocatable strings.
 ! * Nothing here allocates on the C side, keeps state or is thread-unsafe.
 !
@@ -103,9 +112,65 @@
 !   relicore_temperature_from_response_weighted_radiance          function, _s
 !   relicore_response_weighted_radiance_f32                       function, _s
 !   relicore_temperature_from_response_weighted_radiance_f32      function, _s
+!   relicore_universe_parameters_default                          function
+!   relicore_universe_init                                        subroutine (optional stat)
+!   relicore_universe_check_parameters                            subroutine (optional stat)
+!   relicore_universe_get_parameters                              function, _s
+!   relicore_hubble_distance_mpc                                  function, _s
+!   relicore_dimensionless_hubble                                 function, _s
+!   relicore_hubble_parameter_km_s_mpc                            function, _s
+!   relicore_omega_matter_at                                      function, _s
+!   relicore_omega_radiation_at                                   function, _s
+!   relicore_omega_dark_energy_at                                 function, _s
+!   relicore_omega_curvature_at                                   function, _s
+!   relicore_critical_density_kg_m3                               function, _s
+!   relicore_cmb_temperature_at_k                                 function, _s
+!   relicore_comoving_distance_mpc                                function, _s
+!   relicore_transverse_comoving_distance_mpc                     function, _s
+!   relicore_angular_diameter_distance_mpc                        function, _s
+!   relicore_luminosity_distance_mpc                              function, _s
+!   relicore_distance_modulus                                     function, _s
+!   relicore_comoving_volume_gpc3                                 function, _s
+!   relicore_differential_comoving_volume_mpc3_sr                 function, _s
+!   relicore_transverse_scale_kpc_per_arcsec                      function, _s
+!   relicore_lookback_time_gyr                                    function, _s
+!   relicore_age_gyr                                              function, _s
+!   relicore_conformal_time_mpc                                   function, _s
+!   relicore_angular_diameter_distance_between_mpc                function, _s
+!   relicore_redshift_at_age_gyr                                  function, _s
+!   relicore_redshift_at_lookback_time_gyr                        function, _s
+!   relicore_redshift_at_comoving_distance_mpc                    function, _s
+!   relicore_redshift_at_luminosity_distance_mpc                  function, _s
+!   relicore_dimensionless_hubble_array                           subroutine
+!   relicore_hubble_parameter_km_s_mpc_array                      subroutine
+!   relicore_omega_matter_at_array                                subroutine
+!   relicore_omega_radiation_at_array                             subroutine
+!   relicore_omega_dark_energy_at_array                           subroutine
+!   relicore_omega_curvature_at_array                             subroutine
+!   relicore_critical_density_kg_m3_array                         subroutine
+!   relicore_cmb_temperature_at_k_array                           subroutine
+!   relicore_comoving_distance_mpc_array                          subroutine
+!   relicore_transverse_comoving_distance_mpc_array               subroutine
+!   relicore_angular_diameter_distance_mpc_array                  subroutine
+!   relicore_luminosity_distance_mpc_array                        subroutine
+!   relicore_distance_modulus_array                               subroutine
+!   relicore_comoving_volume_gpc3_array                           subroutine
+!   relicore_differential_comoving_volume_mpc3_sr_array           subroutine
+!   relicore_transverse_scale_kpc_per_arcsec_array                subroutine
+!   relicore_lookback_time_gyr_array                              subroutine
+!   relicore_age_gyr_array                                        subroutine
+!   relicore_conformal_time_mpc_array                             subroutine
+!   relicore_redshift_at_age_gyr_array                            subroutine
+!   relicore_redshift_at_lookback_time_gyr_array                  subroutine
+!   relicore_redshift_at_comoving_distance_mpc_array              subroutine
+!   relicore_redshift_at_luminosity_distance_mpc_array            subroutine
+!   relicore_hubble_time_gyr                                      function, _s
+!   relicore_omega_radiation                                      function, _s
+!   relicore_omega_dark_energy                                    function, _s
+!   relicore_matter_radiation_equality_redshift                   function, _s
 module relicore
-  use, intrinsic :: iso_c_binding, only: c_double, c_float, c_int32_t, c_size_t, c_char, &
-      c_ptr, c_null_char, c_associated, c_f_pointer
+  use, intrinsic :: iso_c_binding, only: c_double, c_float, c_int32_t, c_int64_t, c_size_t, &
+      c_char, c_ptr, c_null_char, c_associated, c_f_pointer
   use, intrinsic :: ieee_arithmetic, only: ieee_value, ieee_quiet_nan
   implicit none
   private
@@ -126,6 +191,10 @@ module relicore
   integer(c_int32_t), parameter, public :: RELICORE_ERROR_NO_CONVERGENCE = -11_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_ERROR_INVALID_STRUCT = -12_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_ERROR_PANIC = -13_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_ERROR_INVALID_PARAMETER = -14_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_ERROR_NO_BIG_BANG = -15_c_int32_t
+  ! Words of storage in type(relicore_universe) (struct relicore_universe).
+  integer(c_int32_t), parameter, public :: RELICORE_UNIVERSE_STORAGE_WORDS = 1920_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_MAJOR = 0_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_MINOR = 1_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_PATCH = 0_c_int32_t
@@ -250,6 +319,49 @@ module relicore
       relicore_calibrated_temperature_f32_s, relicore_calibrated_brightness_temperature_f32, &
       relicore_calibrated_brightness_temperature_f32_s, relicore_status_message, &
       relicore_version
+  public :: relicore_universe_parameters_default, relicore_universe_init, &
+      relicore_universe_check_parameters, relicore_universe_get_parameters, &
+      relicore_universe_get_parameters_s, relicore_dimensionless_hubble, &
+      relicore_dimensionless_hubble_s, relicore_hubble_parameter_km_s_mpc, &
+      relicore_hubble_parameter_km_s_mpc_s, relicore_omega_matter_at, relicore_omega_matter_at_s, &
+      relicore_omega_radiation_at, relicore_omega_radiation_at_s, relicore_omega_dark_energy_at, &
+      relicore_omega_dark_energy_at_s, relicore_omega_curvature_at, &
+      relicore_omega_curvature_at_s, relicore_critical_density_kg_m3, &
+      relicore_critical_density_kg_m3_s, relicore_cmb_temperature_at_k, &
+      relicore_cmb_temperature_at_k_s, relicore_comoving_distance_mpc, &
+      relicore_comoving_distance_mpc_s, relicore_transverse_comoving_distance_mpc, &
+      relicore_transverse_comoving_distance_mpc_s, relicore_angular_diameter_distance_mpc, &
+      relicore_angular_diameter_distance_mpc_s, relicore_luminosity_distance_mpc, &
+      relicore_luminosity_distance_mpc_s, relicore_distance_modulus, relicore_distance_modulus_s, &
+      relicore_comoving_volume_gpc3, relicore_comoving_volume_gpc3_s, &
+      relicore_differential_comoving_volume_mpc3_sr, &
+      relicore_differential_comoving_volume_mpc3_sr_s, relicore_transverse_scale_kpc_per_arcsec, &
+      relicore_transverse_scale_kpc_per_arcsec_s, relicore_lookback_time_gyr, &
+      relicore_lookback_time_gyr_s, relicore_age_gyr, relicore_age_gyr_s, &
+      relicore_conformal_time_mpc, relicore_conformal_time_mpc_s, &
+      relicore_angular_diameter_distance_between_mpc, &
+      relicore_angular_diameter_distance_between_mpc_s, relicore_redshift_at_age_gyr, &
+      relicore_redshift_at_age_gyr_s, relicore_redshift_at_lookback_time_gyr, &
+      relicore_redshift_at_lookback_time_gyr_s, relicore_redshift_at_comoving_distance_mpc, &
+      relicore_redshift_at_comoving_distance_mpc_s, relicore_redshift_at_luminosity_distance_mpc, &
+      relicore_redshift_at_luminosity_distance_mpc_s, relicore_dimensionless_hubble_array, &
+      relicore_hubble_parameter_km_s_mpc_array, relicore_omega_matter_at_array, &
+      relicore_omega_radiation_at_array, relicore_omega_dark_energy_at_array, &
+      relicore_omega_curvature_at_array, relicore_critical_density_kg_m3_array, &
+      relicore_cmb_temperature_at_k_array, relicore_comoving_distance_mpc_array, &
+      relicore_transverse_comoving_distance_mpc_array, &
+      relicore_angular_diameter_distance_mpc_array, relicore_luminosity_distance_mpc_array, &
+      relicore_distance_modulus_array, relicore_comoving_volume_gpc3_array, &
+      relicore_differential_comoving_volume_mpc3_sr_array, &
+      relicore_transverse_scale_kpc_per_arcsec_array, relicore_lookback_time_gyr_array, &
+      relicore_age_gyr_array, relicore_conformal_time_mpc_array, &
+      relicore_redshift_at_age_gyr_array, relicore_redshift_at_lookback_time_gyr_array, &
+      relicore_redshift_at_comoving_distance_mpc_array, &
+      relicore_redshift_at_luminosity_distance_mpc_array, relicore_hubble_distance_mpc, &
+      relicore_hubble_distance_mpc_s, relicore_hubble_time_gyr, relicore_hubble_time_gyr_s, &
+      relicore_omega_radiation, relicore_omega_radiation_s, relicore_omega_dark_energy, &
+      relicore_omega_dark_energy_s, relicore_matter_radiation_equality_redshift, &
+      relicore_matter_radiation_equality_redshift_s
 
   ! ---------------------------------------------------------------- types
   ! struct relicore_two_load_calibration { double frequency_hz; double gain; double offset; };
@@ -267,6 +379,41 @@ module relicore
     real(c_float) :: gain          ! reading units per K of brightness temperature J
     real(c_float) :: offset        ! reading units (the reading for J = 0)
   end type relicore_two_load_calibration_f32
+
+  ! struct relicore_universe_parameters { double h0_km_s_mpc; double omega_matter;
+  !     double omega_baryon; double omega_curvature; double cmb_temperature_k; double n_eff;
+  !     double neutrino_masses_ev[3]; double w0; double wa; double helium_mass_fraction; };
+  ! The parameters of a universe. Fill it with relicore_universe_parameters_default (the
+  ! common-practice defaults for everything but H0 and Omega_m), change what differs, then
+  ! build the universe with relicore_universe_init. Positions named by
+  ! relicore_universe_check_parameters (0-based, as in C and Python): 0 h0_km_s_mpc,
+  ! 1 omega_matter, 2 omega_baryon, 3 omega_curvature, 4 cmb_temperature_k, 5 n_eff,
+  ! 6 neutrino_masses_ev, 7 w0, 8 wa, 9 helium_mass_fraction.
+  type, bind(C), public :: relicore_universe_parameters
+    real(c_double) :: h0_km_s_mpc            ! Hubble constant in km s-1 Mpc-1, > 0
+    real(c_double) :: omega_matter           ! all non-relativistic matter today (massive
+                                             ! neutrinos included), >= 0
+    real(c_double) :: omega_baryon           ! baryons today, 0 <= Omega_b <= Omega_m
+    real(c_double) :: omega_curvature        ! Omega_k today (0 flat, > 0 open, < 0 closed)
+    real(c_double) :: cmb_temperature_k      ! T0 in K, >= 0 (0: no photons, no neutrinos)
+    real(c_double) :: n_eff                  ! effective number of neutrino species, >= 0
+    real(c_double) :: neutrino_masses_ev(3)  ! the three neutrino masses in eV, >= 0
+    real(c_double) :: w0                     ! dark-energy equation of state today
+    real(c_double) :: wa                     ! its slope: w(a) = w0 + wa (1 - a)
+    real(c_double) :: helium_mass_fraction   ! primordial helium mass fraction, [0, 1)
+  end type relicore_universe_parameters
+
+  ! struct relicore_universe { uint64_t tag; uint64_t storage[RELICORE_UNIVERSE_STORAGE_WORDS]; };
+  ! A validated universe (derived constants and a precomputed distance table), built by
+  ! relicore_universe_init and passed to every cosmology procedure. A plain value of 15368
+  ! bytes owned by the caller: copy it by assignment, keep it in a module or a derived type,
+  ! read it from any number of threads; there is nothing to free. Its components are private
+  ! to the library: do not read or write them. The tag starts at 0, so a universe that was
+  ! never initialised (or whose init failed) is refused with RELICORE_ERROR_INVALID_STRUCT.
+  type, bind(C), public :: relicore_universe
+    integer(c_int64_t) :: tag = 0_c_int64_t                              ! private
+    integer(c_int64_t) :: storage(RELICORE_UNIVERSE_STORAGE_WORDS)       ! private
+  end type relicore_universe
 
   ! The calibration from two loads, under the name of its type (see the conventions above).
   interface relicore_two_load_calibration
@@ -895,6 +1042,579 @@ module relicore
       real(c_float), intent(out) :: out
       integer(c_int32_t) :: status
     end function c_temperature_from_response_weighted_radiance_f32
+
+    ! int32_t relicore_universe_parameters_default(double h0_km_s_mpc, double omega_matter,
+    !     struct relicore_universe_parameters *out);
+    function c_universe_parameters_default(h0_km_s_mpc, omega_matter, out) &
+        bind(C, name='relicore_universe_parameters_default') result(status)
+      import :: c_double, c_int32_t, relicore_universe_parameters
+      real(c_double), value :: h0_km_s_mpc, omega_matter
+      type(relicore_universe_parameters), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_universe_parameters_default
+    ! int32_t relicore_universe_init(const struct relicore_universe_parameters *params,
+    !     struct relicore_universe *out);
+    function c_universe_init(params, out) bind(C, name='relicore_universe_init') result(status)
+      import :: c_int32_t, relicore_universe_parameters, relicore_universe
+      type(relicore_universe_parameters), intent(in) :: params
+      type(relicore_universe), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_universe_init
+    ! int32_t relicore_universe_check_parameters(const struct relicore_universe_parameters *params,
+    !     int32_t *which_parameter);
+    function c_universe_check_parameters(params, which_parameter) &
+        bind(C, name='relicore_universe_check_parameters') result(status)
+      import :: c_int32_t, relicore_universe_parameters
+      type(relicore_universe_parameters), intent(in) :: params
+      integer(c_int32_t), intent(out) :: which_parameter
+      integer(c_int32_t) :: status
+    end function c_universe_check_parameters
+    ! int32_t relicore_universe_get_parameters(const struct relicore_universe *universe,
+    !     struct relicore_universe_parameters *out);
+    function c_universe_get_parameters(universe, out) &
+        bind(C, name='relicore_universe_get_parameters') result(status)
+      import :: c_int32_t, relicore_universe, relicore_universe_parameters
+      type(relicore_universe), intent(in) :: universe
+      type(relicore_universe_parameters), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_universe_get_parameters
+
+    ! int32_t relicore_dimensionless_hubble(const struct relicore_universe *universe, double z,
+    !     double *out);
+    function c_dimensionless_hubble(universe, z, out) &
+        bind(C, name='relicore_dimensionless_hubble') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_dimensionless_hubble
+    ! int32_t relicore_hubble_parameter_km_s_mpc(const struct relicore_universe *universe, double z,
+    !     double *out);
+    function c_hubble_parameter_km_s_mpc(universe, z, out) &
+        bind(C, name='relicore_hubble_parameter_km_s_mpc') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_hubble_parameter_km_s_mpc
+    ! int32_t relicore_omega_matter_at(const struct relicore_universe *universe, double z,
+    !     double *out);
+    function c_omega_matter_at(universe, z, out) &
+        bind(C, name='relicore_omega_matter_at') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_omega_matter_at
+    ! int32_t relicore_omega_radiation_at(const struct relicore_universe *universe, double z,
+    !     double *out);
+    function c_omega_radiation_at(universe, z, out) &
+        bind(C, name='relicore_omega_radiation_at') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_omega_radiation_at
+    ! int32_t relicore_omega_dark_energy_at(const struct relicore_universe *universe, double z,
+    !     double *out);
+    function c_omega_dark_energy_at(universe, z, out) &
+        bind(C, name='relicore_omega_dark_energy_at') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_omega_dark_energy_at
+    ! int32_t relicore_omega_curvature_at(const struct relicore_universe *universe, double z,
+    !     double *out);
+    function c_omega_curvature_at(universe, z, out) &
+        bind(C, name='relicore_omega_curvature_at') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_omega_curvature_at
+    ! int32_t relicore_critical_density_kg_m3(const struct relicore_universe *universe, double z,
+    !     double *out);
+    function c_critical_density_kg_m3(universe, z, out) &
+        bind(C, name='relicore_critical_density_kg_m3') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_critical_density_kg_m3
+    ! int32_t relicore_cmb_temperature_at_k(const struct relicore_universe *universe, double z,
+    !     double *out);
+    function c_cmb_temperature_at_k(universe, z, out) &
+        bind(C, name='relicore_cmb_temperature_at_k') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_cmb_temperature_at_k
+    ! int32_t relicore_comoving_distance_mpc(const struct relicore_universe *universe, double z,
+    !     double *out);
+    function c_comoving_distance_mpc(universe, z, out) &
+        bind(C, name='relicore_comoving_distance_mpc') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_comoving_distance_mpc
+    ! int32_t relicore_transverse_comoving_distance_mpc(const struct relicore_universe *universe,
+    !     double z, double *out);
+    function c_transverse_comoving_distance_mpc(universe, z, out) &
+        bind(C, name='relicore_transverse_comoving_distance_mpc') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_transverse_comoving_distance_mpc
+    ! int32_t relicore_angular_diameter_distance_mpc(const struct relicore_universe *universe,
+    !     double z, double *out);
+    function c_angular_diameter_distance_mpc(universe, z, out) &
+        bind(C, name='relicore_angular_diameter_distance_mpc') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_angular_diameter_distance_mpc
+    ! int32_t relicore_luminosity_distance_mpc(const struct relicore_universe *universe, double z,
+    !     double *out);
+    function c_luminosity_distance_mpc(universe, z, out) &
+        bind(C, name='relicore_luminosity_distance_mpc') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_luminosity_distance_mpc
+    ! int32_t relicore_distance_modulus(const struct relicore_universe *universe, double z,
+    !     double *out);
+    function c_distance_modulus(universe, z, out) &
+        bind(C, name='relicore_distance_modulus') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_distance_modulus
+    ! int32_t relicore_comoving_volume_gpc3(const struct relicore_universe *universe, double z,
+    !     double *out);
+    function c_comoving_volume_gpc3(universe, z, out) &
+        bind(C, name='relicore_comoving_volume_gpc3') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_comoving_volume_gpc3
+    ! int32_t relicore_differential_comoving_volume_mpc3_sr(
+    !     const struct relicore_universe *universe, double z, double *out);
+    function c_differential_comoving_volume_mpc3_sr(universe, z, out) &
+        bind(C, name='relicore_differential_comoving_volume_mpc3_sr') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_differential_comoving_volume_mpc3_sr
+    ! int32_t relicore_transverse_scale_kpc_per_arcsec(const struct relicore_universe *universe,
+    !     double z, double *out);
+    function c_transverse_scale_kpc_per_arcsec(universe, z, out) &
+        bind(C, name='relicore_transverse_scale_kpc_per_arcsec') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_transverse_scale_kpc_per_arcsec
+    ! int32_t relicore_lookback_time_gyr(const struct relicore_universe *universe, double z,
+    !     double *out);
+    function c_lookback_time_gyr(universe, z, out) &
+        bind(C, name='relicore_lookback_time_gyr') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_lookback_time_gyr
+    ! int32_t relicore_age_gyr(const struct relicore_universe *universe, double z, double *out);
+    function c_age_gyr(universe, z, out) &
+        bind(C, name='relicore_age_gyr') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_age_gyr
+    ! int32_t relicore_conformal_time_mpc(const struct relicore_universe *universe, double z,
+    !     double *out);
+    function c_conformal_time_mpc(universe, z, out) &
+        bind(C, name='relicore_conformal_time_mpc') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_conformal_time_mpc
+    ! int32_t relicore_angular_diameter_distance_between_mpc(
+    !     const struct relicore_universe *universe, double z1, double z2, double *out);
+    function c_angular_diameter_distance_between_mpc(universe, z1, z2, out) &
+        bind(C, name='relicore_angular_diameter_distance_between_mpc') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z1
+      real(c_double), value :: z2
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_angular_diameter_distance_between_mpc
+    ! int32_t relicore_redshift_at_age_gyr(const struct relicore_universe *universe, double age_gyr,
+    !     double *out);
+    function c_redshift_at_age_gyr(universe, age_gyr, out) &
+        bind(C, name='relicore_redshift_at_age_gyr') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: age_gyr
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_redshift_at_age_gyr
+    ! int32_t relicore_redshift_at_lookback_time_gyr(const struct relicore_universe *universe,
+    !     double lookback_gyr, double *out);
+    function c_redshift_at_lookback_time_gyr(universe, lookback_gyr, out) &
+        bind(C, name='relicore_redshift_at_lookback_time_gyr') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: lookback_gyr
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_redshift_at_lookback_time_gyr
+    ! int32_t relicore_redshift_at_comoving_distance_mpc(const struct relicore_universe *universe,
+    !     double distance_mpc, double *out);
+    function c_redshift_at_comoving_distance_mpc(universe, distance_mpc, out) &
+        bind(C, name='relicore_redshift_at_comoving_distance_mpc') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: distance_mpc
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_redshift_at_comoving_distance_mpc
+    ! int32_t relicore_redshift_at_luminosity_distance_mpc(const struct relicore_universe *universe,
+    !     double distance_mpc, double *out);
+    function c_redshift_at_luminosity_distance_mpc(universe, distance_mpc, out) &
+        bind(C, name='relicore_redshift_at_luminosity_distance_mpc') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: distance_mpc
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_redshift_at_luminosity_distance_mpc
+    ! int32_t relicore_dimensionless_hubble_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_dimensionless_hubble_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_dimensionless_hubble_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_dimensionless_hubble_array
+    ! int32_t relicore_hubble_parameter_km_s_mpc_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_hubble_parameter_km_s_mpc_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_hubble_parameter_km_s_mpc_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_hubble_parameter_km_s_mpc_array
+    ! int32_t relicore_omega_matter_at_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_omega_matter_at_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_omega_matter_at_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_omega_matter_at_array
+    ! int32_t relicore_omega_radiation_at_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_omega_radiation_at_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_omega_radiation_at_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_omega_radiation_at_array
+    ! int32_t relicore_omega_dark_energy_at_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_omega_dark_energy_at_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_omega_dark_energy_at_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_omega_dark_energy_at_array
+    ! int32_t relicore_omega_curvature_at_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_omega_curvature_at_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_omega_curvature_at_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_omega_curvature_at_array
+    ! int32_t relicore_critical_density_kg_m3_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_critical_density_kg_m3_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_critical_density_kg_m3_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_critical_density_kg_m3_array
+    ! int32_t relicore_cmb_temperature_at_k_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_cmb_temperature_at_k_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_cmb_temperature_at_k_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_cmb_temperature_at_k_array
+    ! int32_t relicore_comoving_distance_mpc_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_comoving_distance_mpc_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_comoving_distance_mpc_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_comoving_distance_mpc_array
+    ! int32_t relicore_transverse_comoving_distance_mpc_array(
+    !     const struct relicore_universe *universe, const double *redshifts, size_t n, double *out);
+    function c_transverse_comoving_distance_mpc_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_transverse_comoving_distance_mpc_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_transverse_comoving_distance_mpc_array
+    ! int32_t relicore_angular_diameter_distance_mpc_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_angular_diameter_distance_mpc_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_angular_diameter_distance_mpc_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_angular_diameter_distance_mpc_array
+    ! int32_t relicore_luminosity_distance_mpc_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_luminosity_distance_mpc_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_luminosity_distance_mpc_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_luminosity_distance_mpc_array
+    ! int32_t relicore_distance_modulus_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_distance_modulus_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_distance_modulus_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_distance_modulus_array
+    ! int32_t relicore_comoving_volume_gpc3_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_comoving_volume_gpc3_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_comoving_volume_gpc3_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_comoving_volume_gpc3_array
+    ! int32_t relicore_differential_comoving_volume_mpc3_sr_array(
+    !     const struct relicore_universe *universe, const double *redshifts, size_t n, double *out);
+    function c_differential_comoving_volume_mpc3_sr_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_differential_comoving_volume_mpc3_sr_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_differential_comoving_volume_mpc3_sr_array
+    ! int32_t relicore_transverse_scale_kpc_per_arcsec_array(
+    !     const struct relicore_universe *universe, const double *redshifts, size_t n, double *out);
+    function c_transverse_scale_kpc_per_arcsec_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_transverse_scale_kpc_per_arcsec_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_transverse_scale_kpc_per_arcsec_array
+    ! int32_t relicore_lookback_time_gyr_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_lookback_time_gyr_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_lookback_time_gyr_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_lookback_time_gyr_array
+    ! int32_t relicore_age_gyr_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_age_gyr_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_age_gyr_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_age_gyr_array
+    ! int32_t relicore_conformal_time_mpc_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_conformal_time_mpc_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_conformal_time_mpc_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_conformal_time_mpc_array
+    ! int32_t relicore_redshift_at_age_gyr_array(const struct relicore_universe *universe,
+    !     const double *ages_gyr, size_t n, double *out);
+    function c_redshift_at_age_gyr_array(universe, ages_gyr, n, out) &
+        bind(C, name='relicore_redshift_at_age_gyr_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: ages_gyr(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_redshift_at_age_gyr_array
+    ! int32_t relicore_redshift_at_lookback_time_gyr_array(const struct relicore_universe *universe,
+    !     const double *lookback_times_gyr, size_t n, double *out);
+    function c_redshift_at_lookback_time_gyr_array(universe, lookback_times_gyr, n, out) &
+        bind(C, name='relicore_redshift_at_lookback_time_gyr_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: lookback_times_gyr(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_redshift_at_lookback_time_gyr_array
+    ! int32_t relicore_redshift_at_comoving_distance_mpc_array(
+    !     const struct relicore_universe *universe, const double *distances_mpc, size_t n,
+    !     double *out);
+    function c_redshift_at_comoving_distance_mpc_array(universe, distances_mpc, n, out) &
+        bind(C, name='relicore_redshift_at_comoving_distance_mpc_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: distances_mpc(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_redshift_at_comoving_distance_mpc_array
+    ! int32_t relicore_redshift_at_luminosity_distance_mpc_array(
+    !     const struct relicore_universe *universe, const double *distances_mpc, size_t n,
+    !     double *out);
+    function c_redshift_at_luminosity_distance_mpc_array(universe, distances_mpc, n, out) &
+        bind(C, name='relicore_redshift_at_luminosity_distance_mpc_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: distances_mpc(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_redshift_at_luminosity_distance_mpc_array
+    ! int32_t relicore_hubble_distance_mpc(const struct relicore_universe *universe, double *out);
+    function c_hubble_distance_mpc(universe, out) &
+        bind(C, name='relicore_hubble_distance_mpc') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_hubble_distance_mpc
+    ! int32_t relicore_hubble_time_gyr(const struct relicore_universe *universe, double *out);
+    function c_hubble_time_gyr(universe, out) &
+        bind(C, name='relicore_hubble_time_gyr') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_hubble_time_gyr
+    ! int32_t relicore_omega_radiation(const struct relicore_universe *universe, double *out);
+    function c_omega_radiation(universe, out) &
+        bind(C, name='relicore_omega_radiation') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_omega_radiation
+    ! int32_t relicore_omega_dark_energy(const struct relicore_universe *universe, double *out);
+    function c_omega_dark_energy(universe, out) &
+        bind(C, name='relicore_omega_dark_energy') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_omega_dark_energy
+    ! int32_t relicore_matter_radiation_equality_redshift(const struct relicore_universe *universe,
+    !     double *out);
+    function c_matter_radiation_equality_redshift(universe, out) &
+        bind(C, name='relicore_matter_radiation_equality_redshift') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_matter_radiation_equality_redshift
   end interface
 
 contains
@@ -2615,5 +3335,1390 @@ contains
     if (code /= RELICORE_OK) out = nan32()
     call report(code, 'relicore_calibrated_brightness_temperature_f32', stat)
   end subroutine relicore_calibrated_brightness_temperature_f32_s
+
+
+  ! ================================================================ the universe
+
+  ! A parameter set with the common-practice defaults and the given H0 and Omega_m:
+  ! Omega_b = 0, Omega_k = 0 (flat), T0 = 2.7255 K, N_eff = 3.044, massless neutrinos,
+  ! w0 = -1, wa = 0 (a cosmological constant), Y_p = 0.245. Nothing is validated here
+  ! (relicore_universe_init and relicore_universe_check_parameters do that).
+  !   h0_km_s_mpc: Hubble constant in km s-1 Mpc-1
+  !   omega_matter: matter density parameter today, massive neutrinos included
+  ! Result: type(relicore_universe_parameters).
+  impure elemental function relicore_universe_parameters_default(h0_km_s_mpc, &
+      omega_matter) result(params)
+    real(c_double), intent(in) :: h0_km_s_mpc, omega_matter
+    type(relicore_universe_parameters) :: params
+    if (c_universe_parameters_default(h0_km_s_mpc, omega_matter, params) /= RELICORE_OK) &
+        params = nan_parameters()
+  end function relicore_universe_parameters_default
+
+  ! Validates the parameters and builds the universe into out (derived constants and the
+  ! distance table; of the order of a millisecond): build once, then pass it to every
+  ! cosmology procedure. stat = RELICORE_OK, RELICORE_ERROR_INVALID_PARAMETER (which one:
+  ! relicore_universe_check_parameters), RELICORE_ERROR_NO_BIG_BANG (E(z)^2 <= 0 somewhere on
+  ! the way back) or RELICORE_ERROR_NO_CONVERGENCE; on failure out is cleared and every
+  ! procedure refuses it (RELICORE_ERROR_INVALID_STRUCT). Without stat a failure stops with the
+  ! message and, for an invalid parameter, its name.
+  subroutine relicore_universe_init(params, out, stat)
+    type(relicore_universe_parameters), intent(in) :: params
+    type(relicore_universe), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    call report_parameters(c_universe_init(params, out), 'relicore_universe_init', params, stat)
+  end subroutine relicore_universe_init
+
+  ! Checks a parameter set as relicore_universe_init does (at the same cost: it builds the
+  ! universe and discards it). which_parameter = the 0-based position of the invalid parameter
+  ! when stat is RELICORE_ERROR_INVALID_PARAMETER (see type relicore_universe_parameters),
+  ! otherwise -1; stat = the status relicore_universe_init would return. Without stat a failure
+  ! stops with the message and the name of the parameter.
+  subroutine relicore_universe_check_parameters(params, which_parameter, stat)
+    type(relicore_universe_parameters), intent(in) :: params
+    integer(c_int32_t), intent(out) :: which_parameter
+    integer(c_int32_t), intent(out), optional :: stat
+    call report_parameters(c_universe_check_parameters(params, which_parameter), &
+        'relicore_universe_check_parameters', params, stat)
+  end subroutine relicore_universe_check_parameters
+
+  ! The parameters a universe was built from.
+  !   universe: from relicore_universe_init
+  ! Result: type(relicore_universe_parameters); every component NaN on failure.
+  impure elemental function relicore_universe_get_parameters(universe) result(params)
+    type(relicore_universe), intent(in) :: universe
+    type(relicore_universe_parameters) :: params
+    if (c_universe_get_parameters(universe, params) /= RELICORE_OK) params = nan_parameters()
+  end function relicore_universe_get_parameters
+
+  ! Status form: out = the parameters (every component NaN on failure), stat = RELICORE_OK or
+  ! RELICORE_ERROR_*; without stat a failure stops with its message.
+  impure elemental subroutine relicore_universe_get_parameters_s(universe, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    type(relicore_universe_parameters), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_universe_get_parameters(universe, out)
+    if (code /= RELICORE_OK) out = nan_parameters()
+    call report(code, 'relicore_universe_get_parameters', stat)
+  end subroutine relicore_universe_get_parameters_s
+
+  ! A parameter set whose every component is NaN (the value of a failed call).
+  elemental function nan_parameters() result(params)
+    type(relicore_universe_parameters) :: params
+    params = relicore_universe_parameters(nan64(), nan64(), nan64(), nan64(), nan64(), &
+        nan64(), [nan64(), nan64(), nan64()], nan64(), nan64(), nan64())
+  end function nan_parameters
+
+  ! As report, for a call on a parameter set: the stop message names an invalid parameter.
+  subroutine report_parameters(code, routine, params, stat)
+    integer(c_int32_t), intent(in) :: code
+    character(len=*), intent(in) :: routine
+    type(relicore_universe_parameters), intent(in) :: params
+    integer(c_int32_t), intent(out), optional :: stat
+    character(len=*), parameter :: names(0:9) = [character(len=20) :: 'h0_km_s_mpc', &
+        'omega_matter', 'omega_baryon', 'omega_curvature', 'cmb_temperature_k', 'n_eff', &
+        'neutrino_masses_ev', 'w0', 'wa', 'helium_mass_fraction']
+    integer(c_int32_t) :: which
+    character(len=12) :: number
+    if (present(stat) .or. code /= RELICORE_ERROR_INVALID_PARAMETER) then
+      call report(code, routine, stat)
+      return
+    end if
+    if (c_universe_check_parameters(params, which) /= code) which = -1
+    write (number, '(i0)') code
+    if (which >= lbound(names, 1) .and. which <= ubound(names, 1)) then
+      error stop routine // ': ' // relicore_status_message(code) // ' (status ' // &
+          trim(number) // '): ' // trim(names(which))
+    end if
+    call report(code, routine, stat)
+  end subroutine report_parameters
+
+  ! ================================================================ cosmology
+
+  ! Dimensionless Hubble rate E(z) = H(z)/H0 (Friedmann equation with radiation, massive neutrinos,
+  ! curvature and w0-wa dark energy).
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: E, dimensionless (>= 1 for ordinary models); NaN on failure.
+  impure elemental function relicore_dimensionless_hubble(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_dimensionless_hubble(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_dimensionless_hubble
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_dimensionless_hubble_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_dimensionless_hubble(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_dimensionless_hubble', stat)
+  end subroutine relicore_dimensionless_hubble_s
+
+  ! Hubble parameter H(z) = H0 E(z).
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: H in km s-1 Mpc-1; NaN on failure.
+  impure elemental function relicore_hubble_parameter_km_s_mpc(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_hubble_parameter_km_s_mpc(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_hubble_parameter_km_s_mpc
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_hubble_parameter_km_s_mpc_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_hubble_parameter_km_s_mpc(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_hubble_parameter_km_s_mpc', stat)
+  end subroutine relicore_hubble_parameter_km_s_mpc_s
+
+  ! Matter density parameter at z: cold dark matter, baryons and massive neutrinos (the bookkeeping
+  ! of omega_matter) over the critical density at z.
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: Omega_m(z), dimensionless (in [0, 1] for flat models); NaN on failure.
+  impure elemental function relicore_omega_matter_at(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_omega_matter_at(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_omega_matter_at
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_omega_matter_at_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_omega_matter_at(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_omega_matter_at', stat)
+  end subroutine relicore_omega_matter_at_s
+
+  ! Radiation density parameter at z: photons and massless neutrino species over the critical
+  ! density at z.
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: Omega_r(z), dimensionless; NaN on failure.
+  impure elemental function relicore_omega_radiation_at(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_omega_radiation_at(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_omega_radiation_at
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_omega_radiation_at_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_omega_radiation_at(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_omega_radiation_at', stat)
+  end subroutine relicore_omega_radiation_at_s
+
+  ! Dark-energy density parameter at z, Omega_de f_de(z)/E^2.
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: Omega_de(z), dimensionless; NaN on failure.
+  impure elemental function relicore_omega_dark_energy_at(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_omega_dark_energy_at(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_omega_dark_energy_at
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_omega_dark_energy_at_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_omega_dark_energy_at(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_omega_dark_energy_at', stat)
+  end subroutine relicore_omega_dark_energy_at_s
+
+  ! Curvature density parameter at z, Omega_k(1+z)^2/E^2.
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: Omega_k(z), dimensionless; NaN on failure.
+  impure elemental function relicore_omega_curvature_at(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_omega_curvature_at(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_omega_curvature_at
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_omega_curvature_at_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_omega_curvature_at(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_omega_curvature_at', stat)
+  end subroutine relicore_omega_curvature_at_s
+
+  ! Critical density at z, rho_c(z) = 3H(z)^2/(8piG), with G of CODATA 2022.
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: rho_c in kg m-^3, > 0; NaN on failure.
+  impure elemental function relicore_critical_density_kg_m3(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_critical_density_kg_m3(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_critical_density_kg_m3
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_critical_density_kg_m3_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_critical_density_kg_m3(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_critical_density_kg_m3', stat)
+  end subroutine relicore_critical_density_kg_m3_s
+
+  ! CMB (radiation) temperature at z, T0(1+z).
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: T in K, >= 0; NaN on failure.
+  impure elemental function relicore_cmb_temperature_at_k(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_cmb_temperature_at_k(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_cmb_temperature_at_k
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_cmb_temperature_at_k_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_cmb_temperature_at_k(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_cmb_temperature_at_k', stat)
+  end subroutine relicore_cmb_temperature_at_k_s
+
+  ! Line-of-sight comoving distance D_C = (c/H0) int_0^z dz'/E(z').
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: D_C in Mpc, >= 0; NaN on failure.
+  impure elemental function relicore_comoving_distance_mpc(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_comoving_distance_mpc(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_comoving_distance_mpc
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_comoving_distance_mpc_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_comoving_distance_mpc(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_comoving_distance_mpc', stat)
+  end subroutine relicore_comoving_distance_mpc_s
+
+  ! Transverse comoving distance D_M: D_C in a flat universe, (D_H/sqrtOmega_k) sinh(sqrtOmega_k
+  ! D_C/D_H) in an open one, the sin form in a closed one.
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: D_M in Mpc (>= 0 except past the antipode of a closed universe); NaN on failure.
+  impure elemental function relicore_transverse_comoving_distance_mpc(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_transverse_comoving_distance_mpc(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_transverse_comoving_distance_mpc
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_transverse_comoving_distance_mpc_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_transverse_comoving_distance_mpc(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_transverse_comoving_distance_mpc', stat)
+  end subroutine relicore_transverse_comoving_distance_mpc_s
+
+  ! Angular-diameter distance D_A = D_M/(1+z).
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: D_A in Mpc; NaN on failure.
+  impure elemental function relicore_angular_diameter_distance_mpc(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_angular_diameter_distance_mpc(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_angular_diameter_distance_mpc
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_angular_diameter_distance_mpc_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_angular_diameter_distance_mpc(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_angular_diameter_distance_mpc', stat)
+  end subroutine relicore_angular_diameter_distance_mpc_s
+
+  ! Luminosity distance D_L = (1+z) D_M.
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: D_L in Mpc; NaN on failure.
+  impure elemental function relicore_luminosity_distance_mpc(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_luminosity_distance_mpc(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_luminosity_distance_mpc
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_luminosity_distance_mpc_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_luminosity_distance_mpc(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_luminosity_distance_mpc', stat)
+  end subroutine relicore_luminosity_distance_mpc_s
+
+  ! Distance modulus 5 log10(D_L / 10 pc).
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: the distance modulus in magnitudes; NaN on failure.
+  impure elemental function relicore_distance_modulus(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_distance_modulus(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_distance_modulus
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_distance_modulus_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_distance_modulus(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_distance_modulus', stat)
+  end subroutine relicore_distance_modulus_s
+
+  ! Comoving volume inside redshift z over the whole sky (open, flat and closed models).
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: V_C in Gpc^3, >= 0; NaN on failure.
+  impure elemental function relicore_comoving_volume_gpc3(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_comoving_volume_gpc3(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_comoving_volume_gpc3
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_comoving_volume_gpc3_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_comoving_volume_gpc3(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_comoving_volume_gpc3', stat)
+  end subroutine relicore_comoving_volume_gpc3_s
+
+  ! Differential comoving volume dV_C/dz/dOmega = D_H D_M^2/E(z).
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: dV_C/dz/dOmega in Mpc^3 sr-1, >= 0; NaN on failure.
+  impure elemental function relicore_differential_comoving_volume_mpc3_sr(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_differential_comoving_volume_mpc3_sr(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_differential_comoving_volume_mpc3_sr
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_differential_comoving_volume_mpc3_sr_s(universe, z, out, &
+      stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_differential_comoving_volume_mpc3_sr(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_differential_comoving_volume_mpc3_sr', stat)
+  end subroutine relicore_differential_comoving_volume_mpc3_sr_s
+
+  ! Proper transverse size subtended by one arcsecond at z, D_A * pi/648000.
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: kpc per arcsec; NaN on failure.
+  impure elemental function relicore_transverse_scale_kpc_per_arcsec(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_transverse_scale_kpc_per_arcsec(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_transverse_scale_kpc_per_arcsec
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_transverse_scale_kpc_per_arcsec_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_transverse_scale_kpc_per_arcsec(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_transverse_scale_kpc_per_arcsec', stat)
+  end subroutine relicore_transverse_scale_kpc_per_arcsec_s
+
+  ! Lookback time t(0) - t(z) = (1/H0) int_0^z dz'/((1+z')E(z')).
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: the lookback time in Gyr (Julian years), >= 0; NaN on failure.
+  impure elemental function relicore_lookback_time_gyr(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_lookback_time_gyr(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_lookback_time_gyr
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_lookback_time_gyr_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_lookback_time_gyr(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_lookback_time_gyr', stat)
+  end subroutine relicore_lookback_time_gyr_s
+
+  ! Age of the universe at redshift z, (1/H0) int_z^inf dz'/((1+z')E(z')) (z = 0: the age today).
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: the age in Gyr (Julian years), > 0; NaN on failure.
+  impure elemental function relicore_age_gyr(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_age_gyr(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_age_gyr
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_age_gyr_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_age_gyr(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_age_gyr', stat)
+  end subroutine relicore_age_gyr_s
+
+  ! Conformal time at z times c, c*eta(z) = (c/H0) int_z^inf dz'/E(z'): the comoving particle
+  ! horizon.
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: c*eta in Mpc, > 0; NaN on failure.
+  impure elemental function relicore_conformal_time_mpc(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_conformal_time_mpc(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_conformal_time_mpc
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_conformal_time_mpc_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_conformal_time_mpc(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_conformal_time_mpc', stat)
+  end subroutine relicore_conformal_time_mpc_s
+
+  ! Angular-diameter distance of an object at z2 seen from z1 <= z2, D_M(chi2 - chi1)/(1 + z2).
+  !   universe: from relicore_universe_init
+  !   z1: redshift of the observer, >= 0
+  !   z2: redshift of the source, >= z1
+  ! Result: D_A(z1, z2) in Mpc; NaN on failure.
+  impure elemental function relicore_angular_diameter_distance_between_mpc(universe, z1, &
+      z2) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z1, z2
+    real(c_double) :: res
+    if (c_angular_diameter_distance_between_mpc(universe, z1, z2, res) /= RELICORE_OK) &
+        res = nan64()
+  end function relicore_angular_diameter_distance_between_mpc
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_angular_diameter_distance_between_mpc_s(universe, z1, z2, &
+      out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z1, z2
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_angular_diameter_distance_between_mpc(universe, z1, z2, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_angular_diameter_distance_between_mpc', stat)
+  end subroutine relicore_angular_diameter_distance_between_mpc_s
+
+  ! Redshift at which the age of the universe equals age_gyr (inverse of relicore_age_gyr).
+  !   universe: from relicore_universe_init
+  !   age_gyr: age in Gyr, > 0, at most the age today
+  ! Result: the redshift z, >= 0; NaN on failure.
+  impure elemental function relicore_redshift_at_age_gyr(universe, age_gyr) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: age_gyr
+    real(c_double) :: res
+    if (c_redshift_at_age_gyr(universe, age_gyr, res) /= RELICORE_OK) res = nan64()
+  end function relicore_redshift_at_age_gyr
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_redshift_at_age_gyr_s(universe, age_gyr, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: age_gyr
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_redshift_at_age_gyr(universe, age_gyr, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_redshift_at_age_gyr', stat)
+  end subroutine relicore_redshift_at_age_gyr_s
+
+  ! Redshift at which the lookback time equals lookback_gyr (inverse of relicore_lookback_time_gyr).
+  !   universe: from relicore_universe_init
+  !   lookback_gyr: lookback time in Gyr, >= 0, below the age today
+  ! Result: the redshift z, >= 0; NaN on failure.
+  impure elemental function relicore_redshift_at_lookback_time_gyr(universe, &
+      lookback_gyr) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: lookback_gyr
+    real(c_double) :: res
+    if (c_redshift_at_lookback_time_gyr(universe, lookback_gyr, res) /= RELICORE_OK) res = nan64()
+  end function relicore_redshift_at_lookback_time_gyr
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_redshift_at_lookback_time_gyr_s(universe, lookback_gyr, &
+      out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: lookback_gyr
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_redshift_at_lookback_time_gyr(universe, lookback_gyr, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_redshift_at_lookback_time_gyr', stat)
+  end subroutine relicore_redshift_at_lookback_time_gyr_s
+
+  ! Redshift at which the line-of-sight comoving distance equals distance_mpc (inverse of
+  ! relicore_comoving_distance_mpc).
+  !   universe: from relicore_universe_init
+  !   distance_mpc: comoving distance in Mpc, >= 0
+  ! Result: the redshift z, >= 0; NaN on failure.
+  impure elemental function relicore_redshift_at_comoving_distance_mpc(universe, &
+      distance_mpc) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: distance_mpc
+    real(c_double) :: res
+    if (c_redshift_at_comoving_distance_mpc(universe, distance_mpc, res) /= RELICORE_OK) &
+        res = nan64()
+  end function relicore_redshift_at_comoving_distance_mpc
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_redshift_at_comoving_distance_mpc_s(universe, distance_mpc, &
+      out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: distance_mpc
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_redshift_at_comoving_distance_mpc(universe, distance_mpc, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_redshift_at_comoving_distance_mpc', stat)
+  end subroutine relicore_redshift_at_comoving_distance_mpc_s
+
+  ! Redshift at which the luminosity distance equals distance_mpc (inverse of
+  ! relicore_luminosity_distance_mpc). In a closed universe D_L need not grow monotonically; the
+  ! root found in the bracket is returned.
+  !   universe: from relicore_universe_init
+  !   distance_mpc: luminosity distance in Mpc, >= 0
+  ! Result: the redshift z, >= 0; NaN on failure.
+  impure elemental function relicore_redshift_at_luminosity_distance_mpc(universe, &
+      distance_mpc) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: distance_mpc
+    real(c_double) :: res
+    if (c_redshift_at_luminosity_distance_mpc(universe, distance_mpc, res) /= RELICORE_OK) &
+        res = nan64()
+  end function relicore_redshift_at_luminosity_distance_mpc
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_redshift_at_luminosity_distance_mpc_s(universe, &
+      distance_mpc, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: distance_mpc
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_redshift_at_luminosity_distance_mpc(universe, distance_mpc, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_redshift_at_luminosity_distance_mpc', stat)
+  end subroutine relicore_redshift_at_luminosity_distance_mpc_s
+
+  ! Array form of relicore_dimensionless_hubble, one C call for the whole array: out(i) =
+  ! relicore_dimensionless_hubble(universe, redshifts(i)). redshifts: redshifts, >= 0; out: same
+  ! size as redshifts (E = H(z)/H0, dimensionless). Failing elements are NaN, the others computed;
+  ! stat is the first failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ,
+  ! every element NaN); an empty array still has its universe checked; without stat a failure stops
+  ! with its message.
+  subroutine relicore_dimensionless_hubble_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_dimensionless_hubble_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_dimensionless_hubble_array(universe, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_dimensionless_hubble_array', stat)
+  end subroutine relicore_dimensionless_hubble_array
+
+  ! Array form of relicore_hubble_parameter_km_s_mpc, one C call for the whole array: out(i) =
+  ! relicore_hubble_parameter_km_s_mpc(universe, redshifts(i)). redshifts: redshifts, >= 0; out:
+  ! same size as redshifts (H(z) in km s-1 Mpc-1). Failing elements are NaN, the others computed;
+  ! stat is the first failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ,
+  ! every element NaN); an empty array still has its universe checked; without stat a failure stops
+  ! with its message.
+  subroutine relicore_hubble_parameter_km_s_mpc_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_hubble_parameter_km_s_mpc_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_hubble_parameter_km_s_mpc_array(universe, redshifts, &
+          size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_hubble_parameter_km_s_mpc_array', stat)
+  end subroutine relicore_hubble_parameter_km_s_mpc_array
+
+  ! Array form of relicore_omega_matter_at, one C call for the whole array: out(i) =
+  ! relicore_omega_matter_at(universe, redshifts(i)). redshifts: redshifts, >= 0; out: same size as
+  ! redshifts (Omega_m(z)). Failing elements are NaN, the others computed; stat is the first failing
+  ! element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every element NaN); an
+  ! empty array still has its universe checked; without stat a failure stops with its message.
+  subroutine relicore_omega_matter_at_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_omega_matter_at_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_omega_matter_at_array(universe, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_omega_matter_at_array', stat)
+  end subroutine relicore_omega_matter_at_array
+
+  ! Array form of relicore_omega_radiation_at, one C call for the whole array: out(i) =
+  ! relicore_omega_radiation_at(universe, redshifts(i)). redshifts: redshifts, >= 0; out: same size
+  ! as redshifts (Omega_r(z)). Failing elements are NaN, the others computed; stat is the first
+  ! failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every element
+  ! NaN); an empty array still has its universe checked; without stat a failure stops with its
+  ! message.
+  subroutine relicore_omega_radiation_at_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_omega_radiation_at_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_omega_radiation_at_array(universe, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_omega_radiation_at_array', stat)
+  end subroutine relicore_omega_radiation_at_array
+
+  ! Array form of relicore_omega_dark_energy_at, one C call for the whole array: out(i) =
+  ! relicore_omega_dark_energy_at(universe, redshifts(i)). redshifts: redshifts, >= 0; out: same
+  ! size as redshifts (Omega_de(z)). Failing elements are NaN, the others computed; stat is the
+  ! first failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every
+  ! element NaN); an empty array still has its universe checked; without stat a failure stops with
+  ! its message.
+  subroutine relicore_omega_dark_energy_at_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_omega_dark_energy_at_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_omega_dark_energy_at_array(universe, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_omega_dark_energy_at_array', stat)
+  end subroutine relicore_omega_dark_energy_at_array
+
+  ! Array form of relicore_omega_curvature_at, one C call for the whole array: out(i) =
+  ! relicore_omega_curvature_at(universe, redshifts(i)). redshifts: redshifts, >= 0; out: same size
+  ! as redshifts (Omega_k(z)). Failing elements are NaN, the others computed; stat is the first
+  ! failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every element
+  ! NaN); an empty array still has its universe checked; without stat a failure stops with its
+  ! message.
+  subroutine relicore_omega_curvature_at_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_omega_curvature_at_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_omega_curvature_at_array(universe, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_omega_curvature_at_array', stat)
+  end subroutine relicore_omega_curvature_at_array
+
+  ! Array form of relicore_critical_density_kg_m3, one C call for the whole array: out(i) =
+  ! relicore_critical_density_kg_m3(universe, redshifts(i)). redshifts: redshifts, >= 0; out: same
+  ! size as redshifts (rho_crit(z) in kg m-3). Failing elements are NaN, the others computed; stat
+  ! is the first failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every
+  ! element NaN); an empty array still has its universe checked; without stat a failure stops with
+  ! its message.
+  subroutine relicore_critical_density_kg_m3_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_critical_density_kg_m3_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_critical_density_kg_m3_array(universe, redshifts, &
+          size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_critical_density_kg_m3_array', stat)
+  end subroutine relicore_critical_density_kg_m3_array
+
+  ! Array form of relicore_cmb_temperature_at_k, one C call for the whole array: out(i) =
+  ! relicore_cmb_temperature_at_k(universe, redshifts(i)). redshifts: redshifts, >= 0; out: same
+  ! size as redshifts (T0 (1+z) in K). Failing elements are NaN, the others computed; stat is the
+  ! first failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every
+  ! element NaN); an empty array still has its universe checked; without stat a failure stops with
+  ! its message.
+  subroutine relicore_cmb_temperature_at_k_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_cmb_temperature_at_k_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_cmb_temperature_at_k_array(universe, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_cmb_temperature_at_k_array', stat)
+  end subroutine relicore_cmb_temperature_at_k_array
+
+  ! Array form of relicore_comoving_distance_mpc, one C call for the whole array: out(i) =
+  ! relicore_comoving_distance_mpc(universe, redshifts(i)). redshifts: redshifts, >= 0; out: same
+  ! size as redshifts (D_C in Mpc). Failing elements are NaN, the others computed; stat is the first
+  ! failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every element
+  ! NaN); an empty array still has its universe checked; without stat a failure stops with its
+  ! message.
+  subroutine relicore_comoving_distance_mpc_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_comoving_distance_mpc_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_comoving_distance_mpc_array(universe, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_comoving_distance_mpc_array', stat)
+  end subroutine relicore_comoving_distance_mpc_array
+
+  ! Array form of relicore_transverse_comoving_distance_mpc, one C call for the whole array: out(i)
+  ! = relicore_transverse_comoving_distance_mpc(universe, redshifts(i)). redshifts: redshifts, >= 0;
+  ! out: same size as redshifts (D_M in Mpc). Failing elements are NaN, the others computed; stat is
+  ! the first failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every
+  ! element NaN); an empty array still has its universe checked; without stat a failure stops with
+  ! its message.
+  subroutine relicore_transverse_comoving_distance_mpc_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_transverse_comoving_distance_mpc_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_transverse_comoving_distance_mpc_array(universe, redshifts, &
+          size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_transverse_comoving_distance_mpc_array', stat)
+  end subroutine relicore_transverse_comoving_distance_mpc_array
+
+  ! Array form of relicore_angular_diameter_distance_mpc, one C call for the whole array: out(i) =
+  ! relicore_angular_diameter_distance_mpc(universe, redshifts(i)). redshifts: redshifts, >= 0; out:
+  ! same size as redshifts (D_A in Mpc). Failing elements are NaN, the others computed; stat is the
+  ! first failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every
+  ! element NaN); an empty array still has its universe checked; without stat a failure stops with
+  ! its message.
+  subroutine relicore_angular_diameter_distance_mpc_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_angular_diameter_distance_mpc_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_angular_diameter_distance_mpc_array(universe, redshifts, &
+          size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_angular_diameter_distance_mpc_array', stat)
+  end subroutine relicore_angular_diameter_distance_mpc_array
+
+  ! Array form of relicore_luminosity_distance_mpc, one C call for the whole array: out(i) =
+  ! relicore_luminosity_distance_mpc(universe, redshifts(i)). redshifts: redshifts, >= 0; out: same
+  ! size as redshifts (D_L in Mpc). Failing elements are NaN, the others computed; stat is the first
+  ! failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every element
+  ! NaN); an empty array still has its universe checked; without stat a failure stops with its
+  ! message.
+  subroutine relicore_luminosity_distance_mpc_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_luminosity_distance_mpc_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_luminosity_distance_mpc_array(universe, redshifts, &
+          size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_luminosity_distance_mpc_array', stat)
+  end subroutine relicore_luminosity_distance_mpc_array
+
+  ! Array form of relicore_distance_modulus, one C call for the whole array: out(i) =
+  ! relicore_distance_modulus(universe, redshifts(i)). redshifts: redshifts, >= 0; out: same size as
+  ! redshifts (distance modulus in mag). Failing elements are NaN, the others computed; stat is the
+  ! first failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every
+  ! element NaN); an empty array still has its universe checked; without stat a failure stops with
+  ! its message.
+  subroutine relicore_distance_modulus_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_distance_modulus_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_distance_modulus_array(universe, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_distance_modulus_array', stat)
+  end subroutine relicore_distance_modulus_array
+
+  ! Array form of relicore_comoving_volume_gpc3, one C call for the whole array: out(i) =
+  ! relicore_comoving_volume_gpc3(universe, redshifts(i)). redshifts: redshifts, >= 0; out: same
+  ! size as redshifts (V_C in Gpc3). Failing elements are NaN, the others computed; stat is the
+  ! first failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every
+  ! element NaN); an empty array still has its universe checked; without stat a failure stops with
+  ! its message.
+  subroutine relicore_comoving_volume_gpc3_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_comoving_volume_gpc3_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_comoving_volume_gpc3_array(universe, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_comoving_volume_gpc3_array', stat)
+  end subroutine relicore_comoving_volume_gpc3_array
+
+  ! Array form of relicore_differential_comoving_volume_mpc3_sr, one C call for the whole array:
+  ! out(i) = relicore_differential_comoving_volume_mpc3_sr(universe, redshifts(i)). redshifts:
+  ! redshifts, >= 0; out: same size as redshifts (dV_C/dz/dOmega in Mpc3 sr-1). Failing elements are
+  ! NaN, the others computed; stat is the first failing element's code
+  ! (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every element NaN); an empty array still
+  ! has its universe checked; without stat a failure stops with its message.
+  subroutine relicore_differential_comoving_volume_mpc3_sr_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_differential_comoving_volume_mpc3_sr_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_differential_comoving_volume_mpc3_sr_array(universe, redshifts, &
+          size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_differential_comoving_volume_mpc3_sr_array', stat)
+  end subroutine relicore_differential_comoving_volume_mpc3_sr_array
+
+  ! Array form of relicore_transverse_scale_kpc_per_arcsec, one C call for the whole array: out(i) =
+  ! relicore_transverse_scale_kpc_per_arcsec(universe, redshifts(i)). redshifts: redshifts, >= 0;
+  ! out: same size as redshifts (kpc per arcsec). Failing elements are NaN, the others computed;
+  ! stat is the first failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ,
+  ! every element NaN); an empty array still has its universe checked; without stat a failure stops
+  ! with its message.
+  subroutine relicore_transverse_scale_kpc_per_arcsec_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_transverse_scale_kpc_per_arcsec_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_transverse_scale_kpc_per_arcsec_array(universe, redshifts, &
+          size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_transverse_scale_kpc_per_arcsec_array', stat)
+  end subroutine relicore_transverse_scale_kpc_per_arcsec_array
+
+  ! Array form of relicore_lookback_time_gyr, one C call for the whole array: out(i) =
+  ! relicore_lookback_time_gyr(universe, redshifts(i)). redshifts: redshifts, >= 0; out: same size
+  ! as redshifts (lookback time in Gyr). Failing elements are NaN, the others computed; stat is the
+  ! first failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every
+  ! element NaN); an empty array still has its universe checked; without stat a failure stops with
+  ! its message.
+  subroutine relicore_lookback_time_gyr_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_lookback_time_gyr_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_lookback_time_gyr_array(universe, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_lookback_time_gyr_array', stat)
+  end subroutine relicore_lookback_time_gyr_array
+
+  ! Array form of relicore_age_gyr, one C call for the whole array: out(i) =
+  ! relicore_age_gyr(universe, redshifts(i)). redshifts: redshifts, >= 0; out: same size as
+  ! redshifts (age in Gyr). Failing elements are NaN, the others computed; stat is the first failing
+  ! element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every element NaN); an
+  ! empty array still has its universe checked; without stat a failure stops with its message.
+  subroutine relicore_age_gyr_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_age_gyr_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_age_gyr_array(universe, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_age_gyr_array', stat)
+  end subroutine relicore_age_gyr_array
+
+  ! Array form of relicore_conformal_time_mpc, one C call for the whole array: out(i) =
+  ! relicore_conformal_time_mpc(universe, redshifts(i)). redshifts: redshifts, >= 0; out: same size
+  ! as redshifts (c eta in Mpc). Failing elements are NaN, the others computed; stat is the first
+  ! failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every element
+  ! NaN); an empty array still has its universe checked; without stat a failure stops with its
+  ! message.
+  subroutine relicore_conformal_time_mpc_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_conformal_time_mpc_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_conformal_time_mpc_array(universe, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_conformal_time_mpc_array', stat)
+  end subroutine relicore_conformal_time_mpc_array
+
+  ! Array form of relicore_redshift_at_age_gyr, one C call for the whole array: out(i) =
+  ! relicore_redshift_at_age_gyr(universe, ages_gyr(i)). ages_gyr: ages in Gyr, > 0, at most the age
+  ! today; out: same size as ages_gyr (redshifts z). Failing elements are NaN, the others computed;
+  ! stat is the first failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ,
+  ! every element NaN); an empty array still has its universe checked; without stat a failure stops
+  ! with its message.
+  subroutine relicore_redshift_at_age_gyr_array(universe, ages_gyr, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: ages_gyr(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(ages_gyr)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(ages_gyr) == 0) then
+      empty = 0
+      code = c_redshift_at_age_gyr_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_redshift_at_age_gyr_array(universe, ages_gyr, size(ages_gyr, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_redshift_at_age_gyr_array', stat)
+  end subroutine relicore_redshift_at_age_gyr_array
+
+  ! Array form of relicore_redshift_at_lookback_time_gyr, one C call for the whole array: out(i) =
+  ! relicore_redshift_at_lookback_time_gyr(universe, lookback_times_gyr(i)). lookback_times_gyr:
+  ! lookback times in Gyr, >= 0, below the age today; out: same size as lookback_times_gyr
+  ! (redshifts z). Failing elements are NaN, the others computed; stat is the first failing
+  ! element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every element NaN); an
+  ! empty array still has its universe checked; without stat a failure stops with its message.
+  subroutine relicore_redshift_at_lookback_time_gyr_array(universe, lookback_times_gyr, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: lookback_times_gyr(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(lookback_times_gyr)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(lookback_times_gyr) == 0) then
+      empty = 0
+      code = c_redshift_at_lookback_time_gyr_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_redshift_at_lookback_time_gyr_array(universe, lookback_times_gyr, &
+          size(lookback_times_gyr, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_redshift_at_lookback_time_gyr_array', stat)
+  end subroutine relicore_redshift_at_lookback_time_gyr_array
+
+  ! Array form of relicore_redshift_at_comoving_distance_mpc, one C call for the whole array: out(i)
+  ! = relicore_redshift_at_comoving_distance_mpc(universe, distances_mpc(i)). distances_mpc:
+  ! comoving distances in Mpc, >= 0; out: same size as distances_mpc (redshifts z). Failing elements
+  ! are NaN, the others computed; stat is the first failing element's code
+  ! (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every element NaN); an empty array still
+  ! has its universe checked; without stat a failure stops with its message.
+  subroutine relicore_redshift_at_comoving_distance_mpc_array(universe, distances_mpc, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: distances_mpc(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(distances_mpc)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(distances_mpc) == 0) then
+      empty = 0
+      code = c_redshift_at_comoving_distance_mpc_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_redshift_at_comoving_distance_mpc_array(universe, distances_mpc, &
+          size(distances_mpc, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_redshift_at_comoving_distance_mpc_array', stat)
+  end subroutine relicore_redshift_at_comoving_distance_mpc_array
+
+  ! Array form of relicore_redshift_at_luminosity_distance_mpc, one C call for the whole array:
+  ! out(i) = relicore_redshift_at_luminosity_distance_mpc(universe, distances_mpc(i)).
+  ! distances_mpc: luminosity distances in Mpc, >= 0; out: same size as distances_mpc (redshifts z).
+  ! Failing elements are NaN, the others computed; stat is the first failing element's code
+  ! (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every element NaN); an empty array still
+  ! has its universe checked; without stat a failure stops with its message.
+  subroutine relicore_redshift_at_luminosity_distance_mpc_array(universe, distances_mpc, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: distances_mpc(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(distances_mpc)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(distances_mpc) == 0) then
+      empty = 0
+      code = c_redshift_at_luminosity_distance_mpc_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_redshift_at_luminosity_distance_mpc_array(universe, distances_mpc, &
+          size(distances_mpc, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_redshift_at_luminosity_distance_mpc_array', stat)
+  end subroutine relicore_redshift_at_luminosity_distance_mpc_array
+
+  ! Hubble distance c/H0 of the universe.
+  !   universe: from relicore_universe_init
+  ! Result: D_H in Mpc; NaN on failure.
+  impure elemental function relicore_hubble_distance_mpc(universe) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double) :: res
+    if (c_hubble_distance_mpc(universe, res) /= RELICORE_OK) res = nan64()
+  end function relicore_hubble_distance_mpc
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_hubble_distance_mpc_s(universe, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_hubble_distance_mpc(universe, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_hubble_distance_mpc', stat)
+  end subroutine relicore_hubble_distance_mpc_s
+
+  ! Hubble time 1/H0 of the universe (Julian years).
+  !   universe: from relicore_universe_init
+  ! Result: t_H in Gyr; NaN on failure.
+  impure elemental function relicore_hubble_time_gyr(universe) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double) :: res
+    if (c_hubble_time_gyr(universe, res) /= RELICORE_OK) res = nan64()
+  end function relicore_hubble_time_gyr
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_hubble_time_gyr_s(universe, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_hubble_time_gyr(universe, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_hubble_time_gyr', stat)
+  end subroutine relicore_hubble_time_gyr_s
+
+  ! Radiation density parameter today: photons plus massless neutrino species.
+  !   universe: from relicore_universe_init
+  ! Result: Omega_r; NaN on failure.
+  impure elemental function relicore_omega_radiation(universe) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double) :: res
+    if (c_omega_radiation(universe, res) /= RELICORE_OK) res = nan64()
+  end function relicore_omega_radiation
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_omega_radiation_s(universe, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_omega_radiation(universe, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_omega_radiation', stat)
+  end subroutine relicore_omega_radiation_s
+
+  ! Dark-energy density parameter today, 1 - Omega_m - Omega_r - Omega_k.
+  !   universe: from relicore_universe_init
+  ! Result: Omega_de; NaN on failure.
+  impure elemental function relicore_omega_dark_energy(universe) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double) :: res
+    if (c_omega_dark_energy(universe, res) /= RELICORE_OK) res = nan64()
+  end function relicore_omega_dark_energy
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_omega_dark_energy_s(universe, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_omega_dark_energy(universe, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_omega_dark_energy', stat)
+  end subroutine relicore_omega_dark_energy_s
+
+  ! Redshift of matter-radiation equality, Omega_cb/Omega_r,all - 1 (all N_eff neutrino species
+  ! counted as massless); fails (RELICORE_ERROR_OUT_OF_DOMAIN) without radiation.
+  !   universe: from relicore_universe_init
+  ! Result: z_eq; NaN on failure.
+  impure elemental function relicore_matter_radiation_equality_redshift(universe) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double) :: res
+    if (c_matter_radiation_equality_redshift(universe, res) /= RELICORE_OK) res = nan64()
+  end function relicore_matter_radiation_equality_redshift
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_matter_radiation_equality_redshift_s(universe, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_matter_radiation_equality_redshift(universe, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_matter_radiation_equality_redshift', stat)
+  end subroutine relicore_matter_radiation_equality_redshift_s
 
 end module relicore

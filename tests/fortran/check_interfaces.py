@@ -13,7 +13,9 @@ and fails, naming each problem, when
   (int32_t -> integer(c_int32_t) function, const char * -> type(c_ptr) function, void ->
   subroutine);
 * a struct of the header has no bind(C) derived type with the same components (names, kinds,
-  order);
+  order, and the size of an array component: `double x[3]` is `real(c_double) :: x(3)`,
+  `uint64_t s[N]` with `#define N 1920` is `integer(c_int64_t) :: s(N)` with the Fortran
+  parameter N = 1920; a component may have a default initialisation);
 * a #define of the header has no Fortran parameter of the same name and value;
 * a header function has no public Fortran procedure of the same name.
 
@@ -39,6 +41,7 @@ C_SCALARS = {
     "float": ("real", "c_float"),
     "size_t": ("integer", "c_size_t"),
     "int32_t": ("integer", "c_int32_t"),
+    "uint64_t": ("integer", "c_int64_t"),  # Fortran has no unsigned kinds: same bits
 }
 
 
@@ -74,7 +77,11 @@ def parse_header(text):
             decl = " ".join(decl.split())
             if decl:
                 ctype, fname = decl.rsplit(" ", 1)
-                fields.append((fname, ctype))
+                m = re.fullmatch(r"(\w+)\s*\[\s*(\w+)\s*\]", fname)
+                if m:
+                    fields.append((m.group(1), ctype, m.group(2)))
+                else:
+                    fields.append((fname, ctype, None))
         structs[name] = fields
     functions = {}
     body = re.sub(r"struct\s+\w+\s*\{[^}]*\}\s*;", " ", text)
@@ -132,17 +139,43 @@ def fortran_statements(text):
 TYPESPEC = r"(real|integer|type|character)\s*\(\s*(?:kind\s*=\s*)?(\w+)\s*\)"
 
 
+def split_top_level(text):
+    """Splits at the commas that are not inside parentheses or brackets."""
+    parts, depth, current = [], 0, ""
+    for ch in text:
+        if ch in "([":
+            depth += 1
+        elif ch in ")]":
+            depth -= 1
+        if ch == "," and depth == 0:
+            parts.append(current)
+            current = ""
+        else:
+            current += ch
+    parts.append(current)
+    return [p.strip() for p in parts if p.strip()]
+
+
 def parse_declaration(stmt):
-    """'real(c_double), intent(in) :: a(*), b' -> (base, kind, attrs, [(name, is_array)])."""
+    """'real(c_double), intent(in) :: a(*), b = 0' -> (base, kind, attrs, [(name, is_array, dims)]),
+    dims the text between the parentheses of an array entity (None for a scalar); a default
+    initialisation (`= value`) is ignored."""
     m = re.fullmatch(TYPESPEC + r"\s*((?:,\s*[^:]+?)*)\s*::\s*(.+)", stmt)
     if not m:
         return None
     attrs = [a.strip() for a in m.group(3).split(",") if a.strip()]
+    dim_attr = None
+    for a in attrs:
+        md = re.fullmatch(r"dimension\s*\((.*)\)", a)
+        if md:
+            dim_attr = md.group(1).strip()
     entities = []
-    for ent in re.findall(r"(\w+)\s*(\([^)]*\))?", m.group(4)):
-        entities.append((ent[0], bool(ent[1])))
-    array_attr = any(a.startswith("dimension") for a in attrs)
-    entities = [(n, arr or array_attr) for n, arr in entities]
+    for ent in split_top_level(m.group(4)):
+        me = re.match(r"(\w+)\s*(?:\(([^)]*)\))?", ent)
+        if not me:
+            continue
+        dims = me.group(2).strip() if me.group(2) is not None else dim_attr
+        entities.append((me.group(1), dims is not None, dims))
     return m.group(1), m.group(2), attrs, entities
 
 
@@ -172,7 +205,7 @@ def parse_module(text):
                 d = parse_declaration(statements[j])
                 if d:
                     base, kind, attrs, ents = d
-                    for name, is_array in ents:
+                    for name, is_array, _ in ents:
                         decls[name] = {"base": base, "kind": kind, "attrs": attrs, "array": is_array}
                 j += 1
             if kind_of == "function":
@@ -200,7 +233,7 @@ def parse_module(text):
                 d = parse_declaration(statements[j])
                 if d:
                     base, kind, _, ents = d
-                    comps += [(n, base, kind) for n, _ in ents]
+                    comps += [(n, base, kind, dims) for n, _, dims in ents]
                 j += 1
             types[tname] = comps
             if "public" in m.group(1):
@@ -315,20 +348,35 @@ def compare(header_text, module_text):
         if cname not in functions:
             problems.append(f"{cname}: bound by {itf['fortran_name']} but not declared in the header")
 
-    # structs and bind(C) types
+    # structs and bind(C) types; array sizes are compared as numbers (a name is resolved through
+    # the header's #defines, or the module's parameters)
+    def size_of(dim, table):
+        if dim is None:
+            return None
+        dim = dim.strip().lower()
+        if re.fullmatch(r"\d+(_\w+)?", dim):
+            return int(re.sub(r"_\w+$", "", dim))
+        value = table.get(dim)
+        if value is None:
+            return f"unresolved {dim}"
+        return size_of(value, {})
+
+    header_sizes = {k.lower(): v for k, v in defines.items()}
+    module_sizes = {k: v[2] for k, v in parameters.items()}
     for sname, fields in structs.items():
         if sname not in types:
             problems.append(f"struct {sname}: no bind(C) derived type {sname} in the module")
             continue
         want = []
-        for fname, ctype in fields:
+        for fname, ctype, dim in fields:
             if ctype not in C_SCALARS:
                 problems.append(f"struct {sname}: unsupported field type {ctype!r}")
                 continue
-            want.append((fname, *C_SCALARS[ctype]))
-        if types[sname] != want:
-            problems.append(f"struct {sname}: components {types[sname]} differ from the "
-                            f"header's {want}")
+            want.append((fname, *C_SCALARS[ctype], size_of(dim, header_sizes)))
+        got = [(n, b, k, size_of(d, module_sizes)) for n, b, k, d in types[sname]]
+        if got != want:
+            problems.append(f"struct {sname}: components {got} differ from the header's {want} "
+                            "(name, type, kind, array size)")
         if sname not in public:
             problems.append(f"struct {sname}: the type is not public")
     for tname in types:
@@ -425,6 +473,33 @@ def self_test(header_text, module_text):
          lambda h, f: (h, sub_once(r"(type, bind\(C\), public :: relicore_two_load_calibration_f32\n"
                                    r".*?real\()c_float(\) :: gain)", r"\1c_double\2", f, re.S)),
          "struct relicore_two_load_calibration_f32: components"),
+        ("array component size",
+         lambda h, f: (h, sub_once(r"real\(c_double\) :: neutrino_masses_ev\(3\)",
+                                   "real(c_double) :: neutrino_masses_ev(2)", f)),
+         "struct relicore_universe_parameters: components"),
+        ("array component made scalar",
+         lambda h, f: (h, sub_once(r"integer\(c_int64_t\) :: storage\(RELICORE_UNIVERSE_STORAGE_WORDS\)",
+                                   "integer(c_int64_t) :: storage", f)),
+         "struct relicore_universe: components"),
+        ("storage size constant",
+         lambda h, f: (h, sub_once(r"RELICORE_UNIVERSE_STORAGE_WORDS = 1920_c_int32_t",
+                                   "RELICORE_UNIVERSE_STORAGE_WORDS = 1919_c_int32_t", f)),
+         "RELICORE_UNIVERSE_STORAGE_WORDS: header value 1920"),
+        ("tag kind",
+         lambda h, f: (h, sub_once(r"integer\(c_int64_t\) :: tag = 0_c_int64_t",
+                                   "integer(c_int32_t) :: tag = 0_c_int32_t", f)),
+         "struct relicore_universe: components"),
+        ("struct argument declared a double",
+         lambda h, f: (h, sub_once(r"(bind\(C, name='relicore_age_gyr'\) result\(status\)\n"
+                                   r".*?\n      )type\(relicore_universe\), intent\(in\) :: universe",
+                                   r"\1real(c_double), intent(in) :: universe", f, re.S)),
+         "relicore_age_gyr (Fortran c_age_gyr): argument 1"),
+        ("index output declared an array",
+         lambda h, f: (h, sub_once(r"integer\(c_int32_t\), intent\(out\) :: which_parameter\n"
+                                   r"      integer\(c_int32_t\) :: status",
+                                   "integer(c_int32_t), intent(out) :: which_parameter(*)\n"
+                                   "      integer(c_int32_t) :: status", f)),
+         "relicore_universe_check_parameters (Fortran c_universe_check_parameters): argument 2"),
         ("constant value",
          lambda h, f: (h, sub_once(r"RELICORE_ERROR_PANIC = -13_c_int32_t",
                                    "RELICORE_ERROR_PANIC = -14_c_int32_t", f)),

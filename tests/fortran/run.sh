@@ -1,9 +1,12 @@
 #!/usr/bin/env bash
-# Fortran face of relicore: builds the module and the vector test against the static C library,
-# runs the test on both data files, the error-stop check, the dump mode, the interface check
-# against include/relicore.h (and its self-test), and the test under valgrind.
+# Fortran face of relicore: builds the module and the vector tests against the static C library,
+# runs test_blackbody on both blackbody data files and test_cosmology on the cosmology file,
+# the error-stop checks, the dump modes (the cosmology dump is compared bit for bit with the C
+# harness's when tests/c/run.sh has built it), the interface check against include/relicore.h
+# (and its self-test), and both tests under valgrind.
 # Run from the repository root:  bash tests/fortran/run.sh
-# Leaves build/fortran/test_blackbody (its --dump mode is used by the Python tests).
+# Leaves build/fortran/test_blackbody and build/fortran/test_cosmology (their --dump modes are
+# used by the Python tests).
 set -euo pipefail
 
 FC=${FC:-gfortran}
@@ -11,6 +14,8 @@ OUT=build/fortran
 LIB=target/release-c/librelicore.a
 BIN=$OUT/test_blackbody
 DATA=(tests/data/blackbody.txt tests/data/blackbody_response.txt)
+COSMOLOGY_BIN=$OUT/test_cosmology
+COSMOLOGY_DATA=tests/data/cosmology.txt
 
 if [[ ! -f bindings/fortran/relicore.f90 ]]; then
   echo "run.sh: run from the repository root" >&2
@@ -31,8 +36,11 @@ mkdir -p "$OUT"
   -c bindings/fortran/relicore.f90 -o "$OUT/relicore.o"
 "$FC" -std=f2018 -Wall -Werror -J "$OUT" \
   -c tests/fortran/test_blackbody.f90 -o "$OUT/test_blackbody.o"
+"$FC" -std=f2018 -Wall -Werror -J "$OUT" \
+  -c tests/fortran/test_cosmology.f90 -o "$OUT/test_cosmology.o"
 # the archive by path (DESIGN 9.6); on this glibc -lm is the only system library it needs
 "$FC" "$OUT/test_blackbody.o" "$OUT/relicore.o" "$LIB" -lm -o "$BIN"
+"$FC" "$OUT/test_cosmology.o" "$OUT/relicore.o" "$LIB" -lm -o "$COSMOLOGY_BIN"
 
 # ------------------------------------------------------------------ vectors and tests in code
 log=$OUT/test_blackbody.log
@@ -52,6 +60,23 @@ fi
 binary_passed=${BASH_REMATCH[1]}
 if [[ $binary_passed -gt 0 ]]; then pass "test_blackbody on ${DATA[*]}"; else fail "test_blackbody ran nothing"; fi
 
+clog=$OUT/test_cosmology.log
+if "$COSMOLOGY_BIN" "$COSMOLOGY_DATA" >"$clog" 2>&1; then
+  cstatus=0
+else
+  cstatus=$?
+fi
+grep '^FAIL' "$clog" || true
+csummary=$(grep -E '^[0-9]+ passed, [0-9]+ failed$' "$clog" | tail -n 1 || true)
+echo "test_cosmology: ${csummary:-no summary (exit status $cstatus)}"
+cosmology_passed=0
+if [[ $cstatus -eq 0 && $csummary =~ ^([0-9]+)\ passed,\ 0\ failed$ && ${BASH_REMATCH[1]} -gt 0 ]]; then
+  cosmology_passed=${BASH_REMATCH[1]}
+  pass "test_cosmology on $COSMOLOGY_DATA"
+else
+  fail "test_cosmology on $COSMOLOGY_DATA (exit status $cstatus; see $clog)"
+fi
+
 # ------------------------------------------------------------------ error stop without stat
 expect_out=$OUT/stop_check.out
 expect_err=$OUT/stop_check.err
@@ -67,6 +92,19 @@ else
   fi
 fi
 
+# ------------------------------------------------------------------ error stop of a failed init
+if "$COSMOLOGY_BIN" --stop-check >"$expect_out.cosmology" 2>"$expect_err.cosmology"; then
+  fail "--stop-check (cosmology): a failing init without stat did not stop the program"
+  cat "$expect_out.cosmology"
+else
+  expected=$(sed -n 's/^EXPECT //p' "$expect_out.cosmology")
+  if [[ -n $expected ]] && grep -qF -- "$expected" "$expect_err.cosmology"; then
+    pass "a failing relicore_universe_init without stat stops with: $expected"
+  else
+    fail "--stop-check (cosmology): stop message '$(cat "$expect_err.cosmology")' lacks '$expected'"
+  fi
+fi
+
 # ------------------------------------------------------------------ dump mode
 dump=$OUT/dump.txt
 "$BIN" --dump tests/data/blackbody.txt >"$dump"
@@ -79,6 +117,33 @@ if [[ $(wc -l <"$dump") -eq $want_lines && $bad_lines -eq 0 && $names_match == y
   pass "--dump: $want_lines lines 'name bits' in file order"
 else
   fail "--dump: $(wc -l <"$dump") lines for $want_lines vectors, $bad_lines malformed, names in order: $names_match"
+fi
+
+cdump=$OUT/dump_cosmology.txt
+if "$COSMOLOGY_BIN" --dump "$COSMOLOGY_DATA" >"$cdump"; then
+  want_lines=$(awk '!/^#/ && NF > 0 && $1 != "universe" && $(NF - 2) != "status"' "$COSMOLOGY_DATA" | wc -l)
+  bad_lines=$(awk '{ if (NF != 3 || length($3) != 16 || $3 !~ /^[0-9A-F]+$/) bad++ } END { print bad + 0 }' "$cdump")
+  names_match=$(diff <(awk '{print $1, $2}' "$cdump") \
+    <(awk '!/^#/ && NF > 0 && $1 != "universe" && $(NF - 2) != "status" {print $2, $1}' "$COSMOLOGY_DATA") \
+    >/dev/null && echo yes || echo no)
+  if [[ $(wc -l <"$cdump") -eq $want_lines && $bad_lines -eq 0 && $names_match == yes ]]; then
+    pass "--dump (cosmology): $want_lines lines 'universe function bits' in file order"
+  else
+    fail "--dump (cosmology): $(wc -l <"$cdump") lines for $want_lines vectors, $bad_lines malformed, names in order: $names_match"
+  fi
+  # the same bits as the C harness (tests/c/run.sh builds it; skipped when it is absent)
+  cbin=build/c-tests/test_cosmology
+  if [[ -x $cbin ]]; then
+    if "$cbin" --dump "$COSMOLOGY_DATA" | awk '{print $1, $2, toupper($3)}' | cmp -s - "$cdump"; then
+      pass "--dump (cosmology): Fortran and C agree bit for bit on $want_lines results"
+    else
+      fail "--dump (cosmology): Fortran and C results differ (compare $cdump with $cbin --dump)"
+    fi
+  else
+    echo "skip: $cbin not built (run tests/c/run.sh first) - no Fortran/C bit comparison"
+  fi
+else
+  fail "--dump (cosmology) failed"
 fi
 
 # ------------------------------------------------------------------ interfaces against the header
@@ -103,10 +168,20 @@ if command -v valgrind >/dev/null 2>&1; then
     fail "valgrind reported errors (see $vlog)"
     head -n 40 "$vlog"
   fi
+  # the cosmology test: memory errors and leaks only (its vector failures are counted above)
+  cvlog=$OUT/valgrind_cosmology.log
+  valgrind --quiet --leak-check=full --errors-for-leak-kinds=definite,indirect \
+    --log-file="$cvlog" "$COSMOLOGY_BIN" "$COSMOLOGY_DATA" >"$OUT/valgrind_cosmology.out" 2>&1 || true
+  if [[ ! -s $cvlog ]] && grep -qE '^[0-9]+ passed, [0-9]+ failed$' "$OUT/valgrind_cosmology.out"; then
+    pass "valgrind (cosmology): no memory errors or leaks ($(grep -E '^[0-9]+ passed' "$OUT/valgrind_cosmology.out" | tail -n 1))"
+  else
+    fail "valgrind (cosmology) reported errors (see $cvlog)"
+    head -n 40 "$cvlog"
+  fi
 else
   fail "valgrind is not installed"
 fi
 
-echo "fortran: test_blackbody $binary_passed passed; run.sh checks $script_passed passed, $script_failed failed"
-echo "$((binary_passed + script_passed)) passed, $script_failed failed"
+echo "fortran: test_blackbody $binary_passed passed; test_cosmology $cosmology_passed passed; run.sh checks $script_passed passed, $script_failed failed"
+echo "$((binary_passed + cosmology_passed + script_passed)) passed, $script_failed failed"
 [[ $script_failed -eq 0 ]]

@@ -1,0 +1,1071 @@
+! Reference-vector test of the cosmology procedures of the Fortran module relicore
+! (bindings/fortran/relicore.f90).
+!
+!   test_cosmology FILE           builds every universe of FILE (tests/data/cosmology.txt; format
+!                                 in tests/data/FORMAT.md: lines "universe NAME h0_km_s_mpc
+!                                 omega_matter omega_baryon omega_curvature cmb_temperature_k
+!                                 n_eff m1_ev m2_ev m3_ev w0 wa helium_mass_fraction", then
+!                                 "function UNIVERSE nargs args... expected kind tolerance
+!                                 source"), checks every vector, then the tests written here;
+!                                 ends with "N passed, 0 failed", or stops with status 1
+!   test_cosmology --dump FILE    for every non-status vector of FILE, in file order, print
+!                                 "universe function bits": the IEEE bit pattern of the result
+!                                 of the Fortran function form in 16 hex digits (as Z16.16
+!                                 prints it), for the bit-for-bit comparison with C and Python
+!   test_cosmology --stop-check   prints "EXPECT <message>", then calls relicore_universe_init
+!                                 without stat on an invalid parameter set, which must stop
+!                                 (error stop) with that message; tests/fortran/run.sh checks it
+!
+! Every vector is dispatched by name to the elemental function form and the status form (with
+! stat), which must agree bit for bit; the result is compared with the line's tolerance (ulp,
+! rel, abs; a status line must fail with its code and give NaN in both forms). Failures print
+! want/got with 17 significant digits. An unknown function or universe name is a failure, and
+! so is a function with no vector. Tests written here: elemental calls on arrays (of redshifts,
+! and of universes) equal the scalar calls bit for bit; the C array forms equal the elemental
+! forms bit for bit (failing elements, first failing code, reversed and strided arrays, size
+! mismatch, empty arrays); a universe that was never initialised, or whose init failed, is
+! refused by every procedure; copies of a universe; the parameter checks and their positions;
+! the defaults; status messages.
+program test_cosmology
+  use, intrinsic :: iso_c_binding, only: c_double, c_int32_t, c_int64_t
+  use, intrinsic :: ieee_arithmetic, only: ieee_is_nan, ieee_value, ieee_quiet_nan, &
+      ieee_positive_inf, ieee_negative_inf
+  use, intrinsic :: iso_fortran_env, only: error_unit, output_unit
+  use relicore
+  implicit none
+
+  integer, parameter :: dp = c_double
+  integer, parameter :: max_line = 4096, max_tokens = 24, nparams = 12
+
+  ! What one dispatch returned: the function form, the status form and its status.
+  type :: outcome
+    logical :: known = .false.
+    integer :: nargs = -1
+    real(dp) :: f64 = 0, s64 = 0
+    integer(c_int32_t) :: stat = -huge(0_c_int32_t)
+  end type outcome
+
+  type :: named_universe
+    character(len=64) :: name = ''
+    type(relicore_universe_parameters) :: params
+    type(relicore_universe) :: u
+  end type named_universe
+
+  ! A vector line, kept for the array tests.
+  type :: vector
+    character(len=48) :: name = ''
+    integer :: universe = 0
+    integer :: nargs = 0
+    real(dp) :: args(2) = 0
+    type(outcome) :: got
+  end type vector
+
+    character(len=48), parameter :: all_names(*) = [character(len=48) :: &
+        'dimensionless_hubble', 'hubble_parameter_km_s_mpc', 'omega_matter_at', &
+        'omega_radiation_at', 'omega_dark_energy_at', 'omega_curvature_at', &
+        'critical_density_kg_m3', 'cmb_temperature_at_k', 'comoving_distance_mpc', &
+        'transverse_comoving_distance_mpc', 'angular_diameter_distance_mpc', &
+        'luminosity_distance_mpc', 'distance_modulus', 'comoving_volume_gpc3', &
+        'differential_comoving_volume_mpc3_sr', 'transverse_scale_kpc_per_arcsec', &
+        'lookback_time_gyr', 'age_gyr', 'conformal_time_mpc', 'redshift_at_age_gyr', &
+        'redshift_at_lookback_time_gyr', 'redshift_at_comoving_distance_mpc', &
+        'redshift_at_luminosity_distance_mpc', 'angular_diameter_distance_between_mpc', &
+        'hubble_distance_mpc', 'hubble_time_gyr', 'omega_radiation', 'omega_dark_energy', &
+        'matter_radiation_equality_redshift']
+    character(len=48), parameter :: one_names(*) = [character(len=48) :: &
+        'dimensionless_hubble', 'hubble_parameter_km_s_mpc', 'omega_matter_at', &
+        'omega_radiation_at', 'omega_dark_energy_at', 'omega_curvature_at', &
+        'critical_density_kg_m3', 'cmb_temperature_at_k', 'comoving_distance_mpc', &
+        'transverse_comoving_distance_mpc', 'angular_diameter_distance_mpc', &
+        'luminosity_distance_mpc', 'distance_modulus', 'comoving_volume_gpc3', &
+        'differential_comoving_volume_mpc3_sr', 'transverse_scale_kpc_per_arcsec', &
+        'lookback_time_gyr', 'age_gyr', 'conformal_time_mpc', 'redshift_at_age_gyr', &
+        'redshift_at_lookback_time_gyr', 'redshift_at_comoving_distance_mpc', &
+        'redshift_at_luminosity_distance_mpc']
+  type(named_universe), allocatable :: universes(:)
+  type(vector), allocatable :: vectors(:)
+  integer :: nuniverses = 0, nvectors = 0
+  integer :: passed = 0, failed = 0
+  character(len=:), allocatable :: first, path
+
+  allocate (universes(4), vectors(1024))
+  if (command_argument_count() < 1) then
+    write (error_unit, '(a)') 'usage: test_cosmology FILE | --dump FILE | --stop-check'
+    error stop 2
+  end if
+  first = argument(1)
+  select case (first)
+  case ('--dump')
+    if (command_argument_count() /= 2) error stop 'usage: test_cosmology --dump FILE'
+    path = argument(2)
+    call walk(path, 'dump')
+  case ('--stop-check')
+    call stop_check()
+  case default
+    if (command_argument_count() /= 1) error stop 'usage: test_cosmology FILE'
+    path = first
+    call walk(path, 'test')
+    call check(nvectors > 0 .and. nuniverses > 0, path // ' holds no vectors or no universe')
+    call test_coverage()
+    call test_elemental_arrays()
+    call test_elemental_universes()
+    call test_array_forms()
+    call test_universe_values()
+    call test_parameters()
+    call test_messages()
+    write (output_unit, '(a, i0, a, i0, a)') 'universes: ', nuniverses, '; vectors: ', &
+        nvectors, ''
+    write (output_unit, '(i0, a, i0, a)') passed, ' passed, ', failed, ' failed'
+  end select
+  deallocate (universes, vectors, first)
+  if (allocated(path)) deallocate (path)
+  if (failed > 0) error stop 1
+
+contains
+
+  ! ================================================================ bookkeeping
+
+  function argument(k) result(value)
+    integer, intent(in) :: k
+    character(len=:), allocatable :: value
+    integer :: length
+    call get_command_argument(k, length=length)
+    allocate (character(len=length) :: value)
+    call get_command_argument(k, value)
+  end function argument
+
+  subroutine check(ok, message)
+    logical, intent(in) :: ok
+    character(len=*), intent(in) :: message
+    if (ok) then
+      passed = passed + 1
+    else
+      failed = failed + 1
+      write (output_unit, '(a)') 'FAIL ' // message
+    end if
+  end subroutine check
+
+  function g17(x) result(s)
+    real(dp), intent(in) :: x
+    character(len=:), allocatable :: s
+    character(len=40) :: buffer
+    write (buffer, '(es25.16e3)') x
+    s = trim(adjustl(buffer))
+  end function g17
+
+  function int_text(k) result(s)
+    integer, intent(in) :: k
+    character(len=:), allocatable :: s
+    character(len=24) :: buffer
+    write (buffer, '(i0)') k
+    s = trim(buffer)
+  end function int_text
+
+  function hex64(x) result(h)
+    real(dp), intent(in) :: x
+    character(len=16) :: h
+    character(len=16), parameter :: digits = '0123456789ABCDEF'
+    integer(c_int64_t) :: bits
+    integer :: k, nibble
+    bits = transfer(x, bits)
+    do k = 1, 16
+      nibble = int(ibits(bits, 4 * (16 - k), 4))
+      h(k:k) = digits(nibble + 1:nibble + 1)
+    end do
+  end function hex64
+
+  ! Same bits, or both NaN (the payload of a NaN is not part of the interface).
+  elemental logical function same64(a, b)
+    real(dp), intent(in) :: a, b
+    same64 = transfer(a, 0_c_int64_t) == transfer(b, 0_c_int64_t) .or. &
+        (ieee_is_nan(a) .and. ieee_is_nan(b))
+  end function same64
+
+  ! Spacing of doubles at |w| (at least the spacing at DBL_MIN): 2^-52 times the largest power
+  ! of 2 not above max(|w|, DBL_MIN) (FORMAT.md).
+  real(dp) function ulp64(w)
+    real(dp), intent(in) :: w
+    ulp64 = scale(1.0_dp, exponent(max(abs(w), tiny(1.0_dp))) - 1 - 52)
+  end function ulp64
+
+  subroutine split(line, tokens, ntokens)
+    character(len=*), intent(in) :: line
+    character(len=64), intent(out) :: tokens(max_tokens)
+    integer, intent(out) :: ntokens
+    integer :: pos, next
+    ntokens = 0
+    pos = 1
+    do
+      do while (pos <= len_trim(line))
+        if (line(pos:pos) /= ' ') exit
+        pos = pos + 1
+      end do
+      if (pos > len_trim(line)) exit
+      next = index(line(pos:), ' ')
+      if (next == 0) next = len(line(pos:)) + 1
+      ntokens = ntokens + 1
+      if (ntokens > max_tokens) error stop 'test_cosmology: too many fields on a line'
+      if (next - 1 > len(tokens(1))) error stop 'test_cosmology: field too long'
+      tokens(ntokens) = line(pos:pos + next - 2)
+      pos = pos + next
+    end do
+  end subroutine split
+
+  real(dp) function number(token, where)
+    character(len=*), intent(in) :: token, where
+    integer :: ios
+    read (token, *, iostat=ios) number
+    if (ios /= 0) error stop 'test_cosmology: not a number: "' // trim(token) // '" at ' // where
+  end function number
+
+  integer(c_int32_t) function first_failure(stats)
+    integer(c_int32_t), intent(in) :: stats(:)
+    integer :: k
+    first_failure = RELICORE_OK
+    do k = 1, size(stats)
+      if (stats(k) /= RELICORE_OK) then
+        first_failure = stats(k)
+        return
+      end if
+    end do
+  end function first_failure
+
+  integer function find_universe(name)
+    character(len=*), intent(in) :: name
+    integer :: k
+    find_universe = 0
+    do k = 1, nuniverses
+      if (universes(k)%name == name) then
+        find_universe = k
+        return
+      end if
+    end do
+  end function find_universe
+
+  ! ================================================================ the data file
+
+  subroutine walk(file, mode)
+    character(len=*), intent(in) :: file, mode
+    character(len=max_line) :: line
+    character(len=64) :: tokens(max_tokens)
+    integer :: unit, ios, ntokens, lineno, nargs, k, which
+    character(len=:), allocatable :: where
+
+    open (newunit=unit, file=file, status='old', action='read', iostat=ios)
+    if (ios /= 0) error stop 'test_cosmology: cannot open ' // file
+    lineno = 0
+    do
+      read (unit, '(a)', iostat=ios) line
+      if (ios /= 0) exit
+      lineno = lineno + 1
+      if (len_trim(line) == len(line)) error stop 'test_cosmology: line too long in ' // file
+      if (len_trim(line) == 0) cycle
+      if (adjustl(line(1:1)) == '#') cycle
+      call split(line, tokens, ntokens)
+      where = file // ':' // int_text(lineno)
+      if (tokens(1) == 'universe') then
+        if (ntokens /= 2 + nparams) error stop 'test_cosmology: malformed universe at ' // where
+        if (find_universe(tokens(2)) /= 0) &
+            error stop 'test_cosmology: universe defined twice at ' // where
+        call add_universe(where, mode, tokens(2), [(number(tokens(2 + k), where), k = 1, nparams)])
+        cycle
+      end if
+      ! function UNIVERSE nargs args... expected kind tolerance source
+      if (ntokens < 3) error stop 'test_cosmology: malformed vector at ' // where
+      nargs = nint(number(tokens(3), where))
+      if (nargs < 0 .or. nargs > 2 .or. ntokens /= nargs + 7) &
+          error stop 'test_cosmology: malformed vector at ' // where
+      which = find_universe(tokens(2))
+      if (which == 0) then
+        if (mode == 'dump') error stop 'test_cosmology --dump: unknown universe at ' // where
+        call check(.false., where // ': unknown universe ' // trim(tokens(2)))
+        cycle
+      end if
+      call vector_line(where, mode, tokens(1), which, nargs, tokens(4:3 + nargs), &
+          tokens(4 + nargs), tokens(5 + nargs), tokens(6 + nargs))
+    end do
+    close (unit)
+  end subroutine walk
+
+  subroutine add_universe(where, mode, name, values)
+    character(len=*), intent(in) :: where, mode, name
+    real(dp), intent(in) :: values(nparams)
+    type(named_universe), allocatable :: grown(:)
+    integer(c_int32_t) :: stat, checked, which
+    type(relicore_universe_parameters) :: back
+
+    if (nuniverses == size(universes)) then
+      allocate (grown(2 * size(universes)))
+      grown(1:nuniverses) = universes(1:nuniverses)
+      call move_alloc(grown, universes)
+    end if
+    nuniverses = nuniverses + 1
+    associate (nu => universes(nuniverses))
+      nu%name = name
+      nu%params = relicore_universe_parameters(values(1), values(2), values(3), values(4), &
+          values(5), values(6), values(7:9), values(10), values(11), values(12))
+      call relicore_universe_init(nu%params, nu%u, stat)
+      if (mode == 'dump') return
+      call relicore_universe_check_parameters(nu%params, which, checked)
+      call check(stat == RELICORE_OK .and. checked == RELICORE_OK .and. which == -1, where // &
+          ': relicore_universe_init(' // trim(name) // ') status ' // int_text(int(stat)) // &
+          ', check ' // int_text(int(checked)) // ' parameter ' // int_text(int(which)))
+      back = relicore_universe_get_parameters(nu%u)
+      call check(same_parameters(back, nu%params), where // ': relicore_universe_get_parameters(' &
+          // trim(name) // ') differs from the parameters given')
+    end associate
+  end subroutine add_universe
+
+  logical function same_parameters(a, b)
+    type(relicore_universe_parameters), intent(in) :: a, b
+    same_parameters = same64(a%h0_km_s_mpc, b%h0_km_s_mpc) .and. &
+        same64(a%omega_matter, b%omega_matter) .and. same64(a%omega_baryon, b%omega_baryon) &
+        .and. same64(a%omega_curvature, b%omega_curvature) .and. &
+        same64(a%cmb_temperature_k, b%cmb_temperature_k) .and. same64(a%n_eff, b%n_eff) .and. &
+        all(same64(a%neutrino_masses_ev, b%neutrino_masses_ev)) .and. same64(a%w0, b%w0) .and. &
+        same64(a%wa, b%wa) .and. same64(a%helium_mass_fraction, b%helium_mass_fraction)
+  end function same_parameters
+
+  subroutine vector_line(where, mode, name, which, nargs, arg_tokens, expected, kind, tolerance)
+    character(len=*), intent(in) :: where, mode, name, expected, kind, tolerance
+    integer, intent(in) :: which, nargs
+    character(len=64), intent(in) :: arg_tokens(:)
+    real(dp) :: args(nargs)
+    type(outcome) :: got
+    type(vector), allocatable :: grown(:)
+    integer :: k
+    character(len=:), allocatable :: call_text
+
+    do k = 1, nargs
+      args(k) = number(arg_tokens(k), where)
+    end do
+    call evaluate_one(name, universes(which)%u, args, got)
+    if (mode == 'dump') then
+      if (.not. got%known .or. got%nargs /= nargs) &
+          error stop 'test_cosmology --dump: unknown name or wrong nargs at ' // where
+      if (kind /= 'status') write (output_unit, '(a, 1x, a, 1x, a)') &
+          trim(universes(which)%name), trim(name), hex64(got%f64)
+      return
+    end if
+
+    call_text = trim(name) // '(' // trim(universes(which)%name)
+    do k = 1, nargs
+      call_text = call_text // ', ' // g17(args(k))
+    end do
+    call_text = where // ' ' // call_text // ')'
+    call judge(call_text, name, got, nargs, expected, kind, tolerance)
+
+    if (got%known .and. got%nargs == nargs) then
+      if (nvectors == size(vectors)) then
+        allocate (grown(2 * size(vectors)))
+        grown(1:nvectors) = vectors(1:nvectors)
+        call move_alloc(grown, vectors)
+      end if
+      nvectors = nvectors + 1
+      vectors(nvectors)%name = name
+      vectors(nvectors)%universe = which
+      vectors(nvectors)%nargs = nargs
+      vectors(nvectors)%args(1:nargs) = args
+      vectors(nvectors)%got = got
+    end if
+  end subroutine vector_line
+
+  ! Checks one outcome against the line: both forms agree, then the tolerance or the status.
+  subroutine judge(call_text, name, got, nargs, expected, kind, tolerance)
+    character(len=*), intent(in) :: call_text, name, expected, kind, tolerance
+    type(outcome), intent(in) :: got
+    integer, intent(in) :: nargs
+    real(dp) :: want, allowed, tol
+    logical :: ok
+    integer(c_int32_t) :: code
+
+    if (.not. got%known) then
+      call check(.false., call_text // ': unknown function name')
+      return
+    end if
+    if (got%nargs /= nargs) then
+      call check(.false., call_text // ': ' // trim(name) // ' takes ' // int_text(got%nargs) // &
+          ' arguments')
+      return
+    end if
+    tol = number(tolerance, call_text)
+    if (kind == 'status') then
+      code = int(nint(tol), c_int32_t)
+      ok = got%stat == code .and. ieee_is_nan(got%f64) .and. ieee_is_nan(got%s64)
+      call check(ok, call_text // ': want status ' // int_text(int(code)) // &
+          ' and NaN, got status ' // int_text(int(got%stat)) // ', function ' // g17(got%f64) // &
+          ', status form ' // g17(got%s64))
+      return
+    end if
+    want = number(expected, call_text)
+    select case (kind)
+    case ('ulp')
+      allowed = tol * ulp64(want)
+    case ('rel')
+      allowed = tol * abs(want)
+    case ('abs')
+      allowed = tol
+    case default
+      call check(.false., call_text // ': unknown tolerance kind ' // trim(kind))
+      return
+    end select
+    ok = same64(got%f64, got%s64) .and. got%stat == RELICORE_OK .and. &
+        (got%f64 == want .or. abs(got%f64 - want) <= allowed)
+    call check(ok, call_text // ': want ' // g17(want) // ' got ' // g17(got%f64) // &
+        ' (status form ' // g17(got%s64) // ', status ' // int_text(int(got%stat)) // &
+        '), |got - want| = ' // g17(abs(got%f64 - want)) // ' > ' // trim(kind) // ' ' // &
+        trim(tolerance) // ' = ' // g17(allowed))
+  end subroutine judge
+
+  ! ================================================================ dispatch by name
+
+  ! Scalar calls: the elemental function and the status form (with stat) of the name.
+  subroutine evaluate_one(name, u, a, got)
+    character(len=*), intent(in) :: name
+    type(relicore_universe), intent(in) :: u
+    real(dp), intent(in) :: a(:)
+    type(outcome), intent(out) :: got
+    real(dp) :: f64, s64
+    integer(c_int32_t) :: stat
+    integer :: nargs
+
+    f64 = ieee_value(f64, ieee_quiet_nan)
+    s64 = f64
+    stat = -huge(stat)
+    got%known = .true.
+    select case (name)
+    case ('dimensionless_hubble')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_dimensionless_hubble(u, a(1))
+        call relicore_dimensionless_hubble_s(u, a(1), s64, stat)
+      end if
+    case ('hubble_parameter_km_s_mpc')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_hubble_parameter_km_s_mpc(u, a(1))
+        call relicore_hubble_parameter_km_s_mpc_s(u, a(1), s64, stat)
+      end if
+    case ('omega_matter_at')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_omega_matter_at(u, a(1))
+        call relicore_omega_matter_at_s(u, a(1), s64, stat)
+      end if
+    case ('omega_radiation_at')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_omega_radiation_at(u, a(1))
+        call relicore_omega_radiation_at_s(u, a(1), s64, stat)
+      end if
+    case ('omega_dark_energy_at')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_omega_dark_energy_at(u, a(1))
+        call relicore_omega_dark_energy_at_s(u, a(1), s64, stat)
+      end if
+    case ('omega_curvature_at')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_omega_curvature_at(u, a(1))
+        call relicore_omega_curvature_at_s(u, a(1), s64, stat)
+      end if
+    case ('critical_density_kg_m3')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_critical_density_kg_m3(u, a(1))
+        call relicore_critical_density_kg_m3_s(u, a(1), s64, stat)
+      end if
+    case ('cmb_temperature_at_k')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_cmb_temperature_at_k(u, a(1))
+        call relicore_cmb_temperature_at_k_s(u, a(1), s64, stat)
+      end if
+    case ('comoving_distance_mpc')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_comoving_distance_mpc(u, a(1))
+        call relicore_comoving_distance_mpc_s(u, a(1), s64, stat)
+      end if
+    case ('transverse_comoving_distance_mpc')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_transverse_comoving_distance_mpc(u, a(1))
+        call relicore_transverse_comoving_distance_mpc_s(u, a(1), s64, stat)
+      end if
+    case ('angular_diameter_distance_mpc')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_angular_diameter_distance_mpc(u, a(1))
+        call relicore_angular_diameter_distance_mpc_s(u, a(1), s64, stat)
+      end if
+    case ('luminosity_distance_mpc')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_luminosity_distance_mpc(u, a(1))
+        call relicore_luminosity_distance_mpc_s(u, a(1), s64, stat)
+      end if
+    case ('distance_modulus')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_distance_modulus(u, a(1))
+        call relicore_distance_modulus_s(u, a(1), s64, stat)
+      end if
+    case ('comoving_volume_gpc3')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_comoving_volume_gpc3(u, a(1))
+        call relicore_comoving_volume_gpc3_s(u, a(1), s64, stat)
+      end if
+    case ('differential_comoving_volume_mpc3_sr')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_differential_comoving_volume_mpc3_sr(u, a(1))
+        call relicore_differential_comoving_volume_mpc3_sr_s(u, a(1), s64, stat)
+      end if
+    case ('transverse_scale_kpc_per_arcsec')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_transverse_scale_kpc_per_arcsec(u, a(1))
+        call relicore_transverse_scale_kpc_per_arcsec_s(u, a(1), s64, stat)
+      end if
+    case ('lookback_time_gyr')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_lookback_time_gyr(u, a(1))
+        call relicore_lookback_time_gyr_s(u, a(1), s64, stat)
+      end if
+    case ('age_gyr')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_age_gyr(u, a(1))
+        call relicore_age_gyr_s(u, a(1), s64, stat)
+      end if
+    case ('conformal_time_mpc')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_conformal_time_mpc(u, a(1))
+        call relicore_conformal_time_mpc_s(u, a(1), s64, stat)
+      end if
+    case ('redshift_at_age_gyr')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_redshift_at_age_gyr(u, a(1))
+        call relicore_redshift_at_age_gyr_s(u, a(1), s64, stat)
+      end if
+    case ('redshift_at_lookback_time_gyr')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_redshift_at_lookback_time_gyr(u, a(1))
+        call relicore_redshift_at_lookback_time_gyr_s(u, a(1), s64, stat)
+      end if
+    case ('redshift_at_comoving_distance_mpc')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_redshift_at_comoving_distance_mpc(u, a(1))
+        call relicore_redshift_at_comoving_distance_mpc_s(u, a(1), s64, stat)
+      end if
+    case ('redshift_at_luminosity_distance_mpc')
+      nargs = 1
+      if (size(a) == 1) then
+        f64 = relicore_redshift_at_luminosity_distance_mpc(u, a(1))
+        call relicore_redshift_at_luminosity_distance_mpc_s(u, a(1), s64, stat)
+      end if
+    case ('angular_diameter_distance_between_mpc')
+      nargs = 2
+      if (size(a) == 2) then
+        f64 = relicore_angular_diameter_distance_between_mpc(u, a(1), a(2))
+        call relicore_angular_diameter_distance_between_mpc_s(u, a(1), a(2), s64, stat)
+      end if
+    case ('hubble_distance_mpc')
+      nargs = 0
+      if (size(a) == 0) then
+        f64 = relicore_hubble_distance_mpc(u)
+        call relicore_hubble_distance_mpc_s(u, s64, stat)
+      end if
+    case ('hubble_time_gyr')
+      nargs = 0
+      if (size(a) == 0) then
+        f64 = relicore_hubble_time_gyr(u)
+        call relicore_hubble_time_gyr_s(u, s64, stat)
+      end if
+    case ('omega_radiation')
+      nargs = 0
+      if (size(a) == 0) then
+        f64 = relicore_omega_radiation(u)
+        call relicore_omega_radiation_s(u, s64, stat)
+      end if
+    case ('omega_dark_energy')
+      nargs = 0
+      if (size(a) == 0) then
+        f64 = relicore_omega_dark_energy(u)
+        call relicore_omega_dark_energy_s(u, s64, stat)
+      end if
+    case ('matter_radiation_equality_redshift')
+      nargs = 0
+      if (size(a) == 0) then
+        f64 = relicore_matter_radiation_equality_redshift(u)
+        call relicore_matter_radiation_equality_redshift_s(u, s64, stat)
+      end if
+    case default
+      got%known = .false.
+      nargs = -1
+    end select
+    got%nargs = nargs
+    got%f64 = f64
+    got%s64 = s64
+    got%stat = stat
+  end subroutine evaluate_one
+
+  ! The elemental forms on arrays of arguments: a(k, j) is argument k of element j.
+  subroutine evaluate_many(name, u, a, f64, s64, stat)
+    character(len=*), intent(in) :: name
+    type(relicore_universe), intent(in) :: u
+    real(dp), intent(in) :: a(:, :)
+    real(dp), intent(out) :: f64(:), s64(:)
+    integer(c_int32_t), intent(out) :: stat(:)
+    select case (name)
+    case ('dimensionless_hubble')
+      f64 = relicore_dimensionless_hubble(u, a(1, :))
+      call relicore_dimensionless_hubble_s(u, a(1, :), s64, stat)
+    case ('hubble_parameter_km_s_mpc')
+      f64 = relicore_hubble_parameter_km_s_mpc(u, a(1, :))
+      call relicore_hubble_parameter_km_s_mpc_s(u, a(1, :), s64, stat)
+    case ('omega_matter_at')
+      f64 = relicore_omega_matter_at(u, a(1, :))
+      call relicore_omega_matter_at_s(u, a(1, :), s64, stat)
+    case ('omega_radiation_at')
+      f64 = relicore_omega_radiation_at(u, a(1, :))
+      call relicore_omega_radiation_at_s(u, a(1, :), s64, stat)
+    case ('omega_dark_energy_at')
+      f64 = relicore_omega_dark_energy_at(u, a(1, :))
+      call relicore_omega_dark_energy_at_s(u, a(1, :), s64, stat)
+    case ('omega_curvature_at')
+      f64 = relicore_omega_curvature_at(u, a(1, :))
+      call relicore_omega_curvature_at_s(u, a(1, :), s64, stat)
+    case ('critical_density_kg_m3')
+      f64 = relicore_critical_density_kg_m3(u, a(1, :))
+      call relicore_critical_density_kg_m3_s(u, a(1, :), s64, stat)
+    case ('cmb_temperature_at_k')
+      f64 = relicore_cmb_temperature_at_k(u, a(1, :))
+      call relicore_cmb_temperature_at_k_s(u, a(1, :), s64, stat)
+    case ('comoving_distance_mpc')
+      f64 = relicore_comoving_distance_mpc(u, a(1, :))
+      call relicore_comoving_distance_mpc_s(u, a(1, :), s64, stat)
+    case ('transverse_comoving_distance_mpc')
+      f64 = relicore_transverse_comoving_distance_mpc(u, a(1, :))
+      call relicore_transverse_comoving_distance_mpc_s(u, a(1, :), s64, stat)
+    case ('angular_diameter_distance_mpc')
+      f64 = relicore_angular_diameter_distance_mpc(u, a(1, :))
+      call relicore_angular_diameter_distance_mpc_s(u, a(1, :), s64, stat)
+    case ('luminosity_distance_mpc')
+      f64 = relicore_luminosity_distance_mpc(u, a(1, :))
+      call relicore_luminosity_distance_mpc_s(u, a(1, :), s64, stat)
+    case ('distance_modulus')
+      f64 = relicore_distance_modulus(u, a(1, :))
+      call relicore_distance_modulus_s(u, a(1, :), s64, stat)
+    case ('comoving_volume_gpc3')
+      f64 = relicore_comoving_volume_gpc3(u, a(1, :))
+      call relicore_comoving_volume_gpc3_s(u, a(1, :), s64, stat)
+    case ('differential_comoving_volume_mpc3_sr')
+      f64 = relicore_differential_comoving_volume_mpc3_sr(u, a(1, :))
+      call relicore_differential_comoving_volume_mpc3_sr_s(u, a(1, :), s64, stat)
+    case ('transverse_scale_kpc_per_arcsec')
+      f64 = relicore_transverse_scale_kpc_per_arcsec(u, a(1, :))
+      call relicore_transverse_scale_kpc_per_arcsec_s(u, a(1, :), s64, stat)
+    case ('lookback_time_gyr')
+      f64 = relicore_lookback_time_gyr(u, a(1, :))
+      call relicore_lookback_time_gyr_s(u, a(1, :), s64, stat)
+    case ('age_gyr')
+      f64 = relicore_age_gyr(u, a(1, :))
+      call relicore_age_gyr_s(u, a(1, :), s64, stat)
+    case ('conformal_time_mpc')
+      f64 = relicore_conformal_time_mpc(u, a(1, :))
+      call relicore_conformal_time_mpc_s(u, a(1, :), s64, stat)
+    case ('redshift_at_age_gyr')
+      f64 = relicore_redshift_at_age_gyr(u, a(1, :))
+      call relicore_redshift_at_age_gyr_s(u, a(1, :), s64, stat)
+    case ('redshift_at_lookback_time_gyr')
+      f64 = relicore_redshift_at_lookback_time_gyr(u, a(1, :))
+      call relicore_redshift_at_lookback_time_gyr_s(u, a(1, :), s64, stat)
+    case ('redshift_at_comoving_distance_mpc')
+      f64 = relicore_redshift_at_comoving_distance_mpc(u, a(1, :))
+      call relicore_redshift_at_comoving_distance_mpc_s(u, a(1, :), s64, stat)
+    case ('redshift_at_luminosity_distance_mpc')
+      f64 = relicore_redshift_at_luminosity_distance_mpc(u, a(1, :))
+      call relicore_redshift_at_luminosity_distance_mpc_s(u, a(1, :), s64, stat)
+    case ('angular_diameter_distance_between_mpc')
+      f64 = relicore_angular_diameter_distance_between_mpc(u, a(1, :), a(2, :))
+      call relicore_angular_diameter_distance_between_mpc_s(u, a(1, :), a(2, :), s64, stat)
+    case default
+      error stop 'test_cosmology: no elemental dispatch for ' // name
+    end select
+  end subroutine evaluate_many
+
+  ! The C array form of a one-argument name.
+  subroutine array_form(name, u, x, out, stat)
+    character(len=*), intent(in) :: name
+    type(relicore_universe), intent(in) :: u
+    real(dp), intent(in) :: x(:)
+    real(dp), intent(out) :: out(:)
+    integer(c_int32_t), intent(out) :: stat
+    select case (name)
+    case ('dimensionless_hubble')
+      call relicore_dimensionless_hubble_array(u, x, out, stat)
+    case ('hubble_parameter_km_s_mpc')
+      call relicore_hubble_parameter_km_s_mpc_array(u, x, out, stat)
+    case ('omega_matter_at')
+      call relicore_omega_matter_at_array(u, x, out, stat)
+    case ('omega_radiation_at')
+      call relicore_omega_radiation_at_array(u, x, out, stat)
+    case ('omega_dark_energy_at')
+      call relicore_omega_dark_energy_at_array(u, x, out, stat)
+    case ('omega_curvature_at')
+      call relicore_omega_curvature_at_array(u, x, out, stat)
+    case ('critical_density_kg_m3')
+      call relicore_critical_density_kg_m3_array(u, x, out, stat)
+    case ('cmb_temperature_at_k')
+      call relicore_cmb_temperature_at_k_array(u, x, out, stat)
+    case ('comoving_distance_mpc')
+      call relicore_comoving_distance_mpc_array(u, x, out, stat)
+    case ('transverse_comoving_distance_mpc')
+      call relicore_transverse_comoving_distance_mpc_array(u, x, out, stat)
+    case ('angular_diameter_distance_mpc')
+      call relicore_angular_diameter_distance_mpc_array(u, x, out, stat)
+    case ('luminosity_distance_mpc')
+      call relicore_luminosity_distance_mpc_array(u, x, out, stat)
+    case ('distance_modulus')
+      call relicore_distance_modulus_array(u, x, out, stat)
+    case ('comoving_volume_gpc3')
+      call relicore_comoving_volume_gpc3_array(u, x, out, stat)
+    case ('differential_comoving_volume_mpc3_sr')
+      call relicore_differential_comoving_volume_mpc3_sr_array(u, x, out, stat)
+    case ('transverse_scale_kpc_per_arcsec')
+      call relicore_transverse_scale_kpc_per_arcsec_array(u, x, out, stat)
+    case ('lookback_time_gyr')
+      call relicore_lookback_time_gyr_array(u, x, out, stat)
+    case ('age_gyr')
+      call relicore_age_gyr_array(u, x, out, stat)
+    case ('conformal_time_mpc')
+      call relicore_conformal_time_mpc_array(u, x, out, stat)
+    case ('redshift_at_age_gyr')
+      call relicore_redshift_at_age_gyr_array(u, x, out, stat)
+    case ('redshift_at_lookback_time_gyr')
+      call relicore_redshift_at_lookback_time_gyr_array(u, x, out, stat)
+    case ('redshift_at_comoving_distance_mpc')
+      call relicore_redshift_at_comoving_distance_mpc_array(u, x, out, stat)
+    case ('redshift_at_luminosity_distance_mpc')
+      call relicore_redshift_at_luminosity_distance_mpc_array(u, x, out, stat)
+    case default
+      error stop 'test_cosmology: no array form for ' // name
+    end select
+  end subroutine array_form
+
+  ! The constants of an array of universes, elementally.
+  subroutine evaluate_constants(name, us, f64, s64, stat)
+    character(len=*), intent(in) :: name
+    type(relicore_universe), intent(in) :: us(:)
+    real(dp), intent(out) :: f64(:), s64(:)
+    integer(c_int32_t), intent(out) :: stat(:)
+    select case (name)
+    case ('hubble_distance_mpc')
+      f64 = relicore_hubble_distance_mpc(us)
+      call relicore_hubble_distance_mpc_s(us, s64, stat)
+    case ('hubble_time_gyr')
+      f64 = relicore_hubble_time_gyr(us)
+      call relicore_hubble_time_gyr_s(us, s64, stat)
+    case ('omega_radiation')
+      f64 = relicore_omega_radiation(us)
+      call relicore_omega_radiation_s(us, s64, stat)
+    case ('omega_dark_energy')
+      f64 = relicore_omega_dark_energy(us)
+      call relicore_omega_dark_energy_s(us, s64, stat)
+    case ('matter_radiation_equality_redshift')
+      f64 = relicore_matter_radiation_equality_redshift(us)
+      call relicore_matter_radiation_equality_redshift_s(us, s64, stat)
+    case default
+      error stop 'test_cosmology: not a constant: ' // name
+    end select
+  end subroutine evaluate_constants
+
+  ! ================================================================ tests written here
+
+  ! Every procedure has at least one vector (so the data and this test cannot drift apart).
+  subroutine test_coverage()
+    integer :: k
+    do k = 1, size(all_names)
+      call check(count(vectors(1:nvectors)%name == all_names(k)) > 0, &
+          'no reference vector for relicore_' // trim(all_names(k)))
+    end do
+  end subroutine test_coverage
+
+  ! For each universe and name with arguments: the arguments of all its vectors as arrays
+  ! through the elemental forms give the scalar calls' results and statuses bit for bit.
+  subroutine test_elemental_arrays()
+    integer :: ui, k, j, n, m
+    integer, allocatable :: members(:)
+    real(dp), allocatable :: a(:, :), f64(:), s64(:)
+    integer(c_int32_t), allocatable :: stat(:)
+    logical :: ok
+
+    do ui = 1, nuniverses
+      do k = 1, size(all_names)
+        members = pack([(j, j = 1, nvectors)], vectors(1:nvectors)%name == all_names(k) .and. &
+            vectors(1:nvectors)%universe == ui)
+        n = size(members)
+        if (n == 0) cycle
+        m = vectors(members(1))%nargs
+        if (m == 0) cycle
+        allocate (a(m, n), f64(n), s64(n), stat(n))
+        do j = 1, n
+          a(:, j) = vectors(members(j))%args(1:m)
+        end do
+        call evaluate_many(trim(all_names(k)), universes(ui)%u, a, f64, s64, stat)
+        ok = .true.
+        do j = 1, n
+          associate (one => vectors(members(j))%got)
+            ok = ok .and. same64(one%f64, f64(j)) .and. same64(one%s64, s64(j)) .and. &
+                one%stat == stat(j)
+          end associate
+        end do
+        call check(ok, 'elemental ' // trim(all_names(k)) // ' on ' // int_text(n) // &
+            ' arguments of universe ' // trim(universes(ui)%name) // &
+            ' differs from the scalar calls')
+        deallocate (a, f64, s64, stat)
+      end do
+    end do
+  end subroutine test_elemental_arrays
+
+  ! The constants of all universes at once (elemental in the universe, on a copy of the
+  ! universes made by assignment) equal the scalar calls on the originals.
+  subroutine test_elemental_universes()
+    character(len=48), parameter :: constants(*) = [character(len=48) :: 'hubble_distance_mpc', &
+        'hubble_time_gyr', 'omega_radiation', 'omega_dark_energy', &
+        'matter_radiation_equality_redshift']
+    type(relicore_universe) :: us(nuniverses)
+    real(dp) :: f64(nuniverses), s64(nuniverses)
+    integer(c_int32_t) :: stat(nuniverses)
+    type(outcome) :: one
+    real(dp) :: none(0)
+    integer :: k, ui
+    logical :: ok
+
+    us(:) = universes(1:nuniverses)%u
+    do k = 1, size(constants)
+      call evaluate_constants(trim(constants(k)), us, f64, s64, stat)
+      ok = .true.
+      do ui = 1, nuniverses
+        call evaluate_one(trim(constants(k)), universes(ui)%u, none, one)
+        ok = ok .and. same64(one%f64, f64(ui)) .and. same64(one%s64, s64(ui)) .and. &
+            one%stat == stat(ui)
+      end do
+      call check(ok, 'elemental ' // trim(constants(k)) // ' over ' // int_text(nuniverses) // &
+          ' copied universes differs from the scalar calls')
+    end do
+  end subroutine test_elemental_universes
+
+  ! The C array forms, for every universe and one-argument name: x = the arguments of its
+  ! vectors. out equals the elemental function bit for bit (NaN where an element fails), stat
+  ! the first failing element's code; a reversed input with a strided output gives the same
+  ! values; a too-long out is RELICORE_ERROR_LENGTH_MISMATCH with every element NaN; an empty
+  ! array is RELICORE_OK.
+  subroutine test_array_forms()
+    integer :: ui, k, j, n
+    integer, allocatable :: members(:)
+    real(dp), allocatable :: x(:), out(:), args(:, :), ref(:), ref_s(:), strided(:), too_long(:)
+    integer(c_int32_t), allocatable :: stats(:)
+    integer(c_int32_t) :: stat, stat_reversed, stat_mismatch, stat_empty
+    real(dp) :: empty(0), empty_out(0)
+    logical :: ok
+
+    do ui = 1, nuniverses
+      do k = 1, size(one_names)
+        members = pack([(j, j = 1, nvectors)], vectors(1:nvectors)%name == one_names(k) .and. &
+            vectors(1:nvectors)%universe == ui)
+        n = size(members)
+        if (n == 0) cycle
+        x = [(vectors(members(j))%args(1), j = 1, n)]
+        allocate (out(n), args(1, n), ref(n), ref_s(n), stats(n), strided(2 * n), too_long(n + 1))
+        args(1, :) = x
+        strided = 0
+        call array_form(trim(one_names(k)), universes(ui)%u, x, out, stat)
+        call array_form(trim(one_names(k)), universes(ui)%u, x(n:1:-1), strided(2 * n:2:-2), &
+            stat_reversed)
+        call array_form(trim(one_names(k)), universes(ui)%u, x, too_long, stat_mismatch)
+        call array_form(trim(one_names(k)), universes(ui)%u, empty, empty_out, stat_empty)
+        call evaluate_many(trim(one_names(k)), universes(ui)%u, args, ref, ref_s, stats)
+        ok = stat == first_failure(stats) .and. stat_reversed == first_failure(stats(n:1:-1)) &
+            .and. stat_empty == RELICORE_OK .and. &
+            stat_mismatch == RELICORE_ERROR_LENGTH_MISMATCH .and. all(ieee_is_nan(too_long))
+        ok = ok .and. all(same64(out, ref)) .and. all(same64(ref_s, ref)) .and. &
+            all(same64(strided(2::2), out)) .and. all(strided(1::2) == 0)
+        call check(ok, 'array form ' // trim(one_names(k)) // '_array(' // &
+            trim(universes(ui)%name) // ', ' // int_text(n) // ' values): status ' // &
+            int_text(int(stat)) // ' (elemental: first failure ' // &
+            int_text(int(first_failure(stats))) // '), or values differ from the elemental form')
+        deallocate (out, args, ref, ref_s, stats, strided, too_long)
+      end do
+    end do
+  end subroutine test_array_forms
+
+  ! A universe that was never initialised, or whose init failed, is refused by every
+  ! procedure (the struct is checked before the arguments); copies work like the original.
+  subroutine test_universe_values()
+    type(relicore_universe) :: fresh, failed_init, copy
+    type(relicore_universe_parameters) :: params, back, failed_parameters
+    type(outcome) :: got, again
+    integer(c_int32_t) :: stat
+    real(dp) :: out(3), none(0), none_out(0)
+    integer :: k, nargs
+    logical :: ok
+
+    call check(storage_size(fresh) == 64 * (1 + RELICORE_UNIVERSE_STORAGE_WORDS), &
+        'type(relicore_universe) is not a tag and RELICORE_UNIVERSE_STORAGE_WORDS words')
+    params = relicore_universe_parameters_default(70.0_dp, 0.3_dp)
+    params%omega_curvature = ieee_value(1.0_dp, ieee_quiet_nan)
+    call relicore_universe_init(params, failed_init, stat)
+    call check(stat == RELICORE_ERROR_INVALID_PARAMETER, 'init with a NaN curvature: status ' // &
+        int_text(int(stat)))
+    do k = 1, size(all_names)
+      nargs = 1
+      if (all_names(k) == 'angular_diameter_distance_between_mpc') nargs = 2
+      call evaluate_one(trim(all_names(k)), fresh, [1.0_dp, 2.0_dp], got)
+      if (got%nargs == 0) call evaluate_one(trim(all_names(k)), fresh, none, got)
+      if (got%nargs == 1) call evaluate_one(trim(all_names(k)), fresh, [1.0_dp], got)
+      call evaluate_one(trim(all_names(k)), failed_init, &
+          [(ieee_value(1.0_dp, ieee_quiet_nan), nargs = 1, got%nargs)], again)
+      ok = got%stat == RELICORE_ERROR_INVALID_STRUCT .and. ieee_is_nan(got%f64) .and. &
+          ieee_is_nan(got%s64) .and. again%stat == RELICORE_ERROR_INVALID_STRUCT .and. &
+          ieee_is_nan(again%f64) .and. ieee_is_nan(again%s64)
+      call check(ok, trim(all_names(k)) // ' on a universe never initialised / after a failed ' &
+          // 'init: status ' // int_text(int(got%stat)) // ' / ' // int_text(int(again%stat)) // &
+          ', want ' // int_text(int(RELICORE_ERROR_INVALID_STRUCT)) // ' and NaN')
+    end do
+    do k = 1, size(one_names)
+      out = 1
+      call array_form(trim(one_names(k)), fresh, [1.0_dp, 2.0_dp, 3.0_dp], out, stat)
+      call check(stat == RELICORE_ERROR_INVALID_STRUCT .and. all(ieee_is_nan(out)), &
+          trim(one_names(k)) // '_array on a universe never initialised: status ' // &
+          int_text(int(stat)))
+      call array_form(trim(one_names(k)), failed_init, none, none_out, stat)
+      call check(stat == RELICORE_ERROR_INVALID_STRUCT, trim(one_names(k)) // &
+          '_array of no element on the universe of a failed init: status ' // int_text(int(stat)))
+    end do
+    failed_parameters = relicore_universe_get_parameters(failed_init)
+    call relicore_universe_get_parameters_s(fresh, back, stat)
+    call check(stat == RELICORE_ERROR_INVALID_STRUCT .and. ieee_is_nan(back%h0_km_s_mpc) .and. &
+        all(ieee_is_nan(back%neutrino_masses_ev)) .and. &
+        all(ieee_is_nan(failed_parameters%neutrino_masses_ev)), &
+        'relicore_universe_get_parameters on an invalid universe: status ' // int_text(int(stat)))
+
+    ! a copy (assignment) of a universe gives the same results as the original
+    if (nuniverses > 0) then
+      copy = universes(nuniverses)%u
+      ok = .true.
+      do k = 1, size(one_names)
+        call evaluate_one(trim(one_names(k)), universes(nuniverses)%u, [1.5_dp], got)
+        call evaluate_one(trim(one_names(k)), copy, [1.5_dp], again)
+        ok = ok .and. same64(got%f64, again%f64) .and. got%stat == again%stat
+      end do
+      call check(ok, 'a copy of a universe gives other results than the original')
+    end if
+  end subroutine test_universe_values
+
+  ! The parameter checks name each invalid parameter (0-based, as in C); the defaults.
+  subroutine test_parameters()
+    type(relicore_universe_parameters) :: base, p
+    type(relicore_universe) :: u
+    integer(c_int32_t) :: stat, which
+    real(dp) :: nan
+    integer :: k
+
+    nan = ieee_value(nan, ieee_quiet_nan)
+    base = relicore_universe_parameters_default(70.0_dp, 0.3_dp)
+    call check(base%h0_km_s_mpc == 70 .and. base%omega_matter == 0.3_dp .and. &
+        base%omega_baryon == 0 .and. base%omega_curvature == 0 .and. &
+        base%cmb_temperature_k == 2.7255_dp .and. base%n_eff == 3.044_dp .and. &
+        all(base%neutrino_masses_ev == 0) .and. base%w0 == -1 .and. base%wa == 0 .and. &
+        base%helium_mass_fraction == 0.245_dp, &
+        'relicore_universe_parameters_default differs from its documented defaults')
+    call relicore_universe_check_parameters(base, which, stat)
+    call check(stat == RELICORE_OK .and. which == -1, 'the defaults do not pass the check')
+    call relicore_universe_init(base, u)
+    call check(same64(relicore_hubble_time_gyr(u), relicore_hubble_time_gyr(u)) .and. &
+        .not. ieee_is_nan(relicore_age_gyr(u, 0.0_dp)), 'init without stat on valid parameters')
+    do k = 0, 9
+      p = base
+      select case (k)
+      case (0)
+        p%h0_km_s_mpc = -70
+      case (1)
+        p%omega_matter = nan
+      case (2)
+        p%omega_baryon = 0.4_dp
+      case (3)
+        p%omega_curvature = ieee_value(1.0_dp, ieee_positive_inf)
+      case (4)
+        p%cmb_temperature_k = -1
+      case (5)
+        p%n_eff = -3
+      case (6)
+        p%neutrino_masses_ev(3) = -0.1_dp
+      case (7)
+        p%w0 = nan
+      case (8)
+        p%wa = ieee_value(1.0_dp, ieee_negative_inf)
+      case default
+        p%helium_mass_fraction = 1
+      end select
+      call relicore_universe_check_parameters(p, which, stat)
+      call check(stat == RELICORE_ERROR_INVALID_PARAMETER .and. which == k, 'invalid parameter ' &
+          // int_text(k) // ': status ' // int_text(int(stat)) // ', parameter ' // &
+          int_text(int(which)))
+      call relicore_universe_init(p, u, stat)
+      call check(stat == RELICORE_ERROR_INVALID_PARAMETER .and. &
+          ieee_is_nan(relicore_hubble_distance_mpc(u)), 'init with invalid parameter ' // &
+          int_text(k) // ': status ' // int_text(int(stat)) // ' or the universe is not refused')
+    end do
+    ! a closed universe with a cosmological constant and nothing else bounces: no big bang
+    p = base
+    p%omega_matter = 0
+    p%cmb_temperature_k = 0
+    p%omega_curvature = -0.5_dp
+    call relicore_universe_check_parameters(p, which, stat)
+    call check(stat == RELICORE_ERROR_NO_BIG_BANG .and. which == -1, 'bouncing universe: status ' &
+        // int_text(int(stat)) // ', parameter ' // int_text(int(which)))
+    call relicore_universe_init(p, u, stat)
+    call check(stat == RELICORE_ERROR_NO_BIG_BANG, 'init of a bouncing universe: status ' // &
+        int_text(int(stat)))
+  end subroutine test_parameters
+
+  ! The two cosmology status codes: their own distinct messages; the next number is unknown.
+  subroutine test_messages()
+    character(len=:), allocatable :: unknown
+    unknown = relicore_status_message(1_c_int32_t)
+    call check(RELICORE_ERROR_INVALID_PARAMETER == -14 .and. RELICORE_ERROR_NO_BIG_BANG == -15, &
+        'cosmology status codes are not -14 and -15 (FORMAT.md)')
+    call check(relicore_status_message(RELICORE_ERROR_INVALID_PARAMETER) /= unknown .and. &
+        relicore_status_message(RELICORE_ERROR_NO_BIG_BANG) /= unknown .and. &
+        relicore_status_message(RELICORE_ERROR_NO_BIG_BANG) /= &
+        relicore_status_message(RELICORE_ERROR_INVALID_PARAMETER) .and. &
+        relicore_status_message(RELICORE_ERROR_NO_BIG_BANG - 1_c_int32_t) == unknown, &
+        'messages of the cosmology status codes')
+  end subroutine test_messages
+
+  ! A failing init without stat must stop with the routine name, the message and the name of
+  ! the invalid parameter.
+  subroutine stop_check()
+    type(relicore_universe_parameters) :: p
+    type(relicore_universe) :: u
+    write (output_unit, '(a)') 'EXPECT relicore_universe_init: ' // &
+        relicore_status_message(RELICORE_ERROR_INVALID_PARAMETER) // ' (status ' // &
+        int_text(int(RELICORE_ERROR_INVALID_PARAMETER)) // '): omega_baryon'
+    flush (output_unit)
+    p = relicore_universe_parameters_default(70.0_dp, 0.3_dp)
+    p%omega_baryon = 0.5_dp
+    call relicore_universe_init(p, u)
+    write (output_unit, '(a)') 'relicore_universe_init returned instead of stopping'
+  end subroutine stop_check
+
+end program test_cosmology
