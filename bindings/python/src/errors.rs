@@ -54,6 +54,8 @@ pub(crate) fn status_code(err: Error) -> Option<i32> {
         Error::DegenerateCalibration(_) => Some(-9),
         Error::OutOfDomain(_) => Some(-10),
         Error::NoConvergence => Some(-11),
+        Error::InvalidParameter(_) => Some(-14),
+        Error::NoBigBang => Some(-15),
         _ => None,
     }
 }
@@ -72,6 +74,8 @@ fn reason(err: Error) -> &'static str {
         }
         Error::OutOfDomain(_) => "outside the domain of the function",
         Error::NoConvergence => "no convergence",
+        Error::InvalidParameter(_) => "invalid parameter",
+        Error::NoBigBang => "the model has no big bang",
         _ => "invalid input",
     }
 }
@@ -170,6 +174,20 @@ pub(crate) fn core_error(
     site: Option<Site<'_>>,
     err: Error,
 ) -> PyErr {
+    core_error_because(py, function, names, args, site, err, None)
+}
+
+/// As [`core_error`], with the reason said in the function's own terms when `because` is given
+/// (for example "the age diverges in this universe" rather than "outside the domain").
+pub(crate) fn core_error_because(
+    py: Python<'_>,
+    function: &str,
+    names: &[&str],
+    args: &[Arg<'_>],
+    site: Option<Site<'_>>,
+    err: Error,
+    because: Option<&str>,
+) -> PyErr {
     let position = err.argument().map(usize::from);
     let name = position.and_then(|p| names.get(p)).copied();
     let arg = position.and_then(|p| args.get(p)).copied();
@@ -184,7 +202,7 @@ pub(crate) fn core_error(
         .as_deref()
         .map(|i| format!(" at index {}", format_index(i)))
         .unwrap_or_default();
-    let why = reason(err);
+    let why = because.unwrap_or(reason(err));
     let message = match (name, arg) {
         (Some(n), Some(Arg::Value(v))) => match err {
             Error::EmptyInterval(p) => {
@@ -273,7 +291,7 @@ pub(crate) fn shape_error(py: Python<'_>, function: &str, name: &str, what: &str
     )
 }
 
-fn build(
+pub(crate) fn build(
     py: Python<'_>,
     message: String,
     function: &str,

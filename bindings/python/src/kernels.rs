@@ -199,7 +199,7 @@ fn is_element_error(body: Body, err: Error) -> bool {
 /// Calls `f` once per element: input k is read at the element index when it has `n`
 /// elements and at 0 when it has one (a broadcast scalar). On failure the element gets NaN
 /// when `nan_on_error` and `keep_going(err)`; otherwise the loop stops and returns the index.
-fn run<const N: usize>(
+pub(crate) fn run<const N: usize>(
     inputs: [&[f64]; N],
     out: &mut [f64],
     nan_on_error: bool,
@@ -245,7 +245,7 @@ pub(crate) fn kernel_signatures() -> Vec<(&'static str, Vec<&'static str>)> {
     all
 }
 
-fn elements<'a>(
+pub(crate) fn elements<'a>(
     inputs: &'a [PyReadonlyArray1<'_, f64>],
     n: usize,
     name: &str,
@@ -268,7 +268,7 @@ fn elements<'a>(
         .collect()
 }
 
-fn check_shape(shape: &[usize], n: usize, name: &str) -> PyResult<()> {
+pub(crate) fn check_shape(shape: &[usize], n: usize, name: &str) -> PyResult<()> {
     if shape.iter().product::<usize>() == n {
         Ok(())
     } else {

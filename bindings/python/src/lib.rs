@@ -6,6 +6,7 @@
 //!
 //! * [`kernels`]: the table of core functions and the generic element loop.
 //! * [`calibration`]: the `TwoLoadCalibration` class.
+//! * [`cosmology`]: the native base of `relicore.Universe`, its method table and element loop.
 //! * [`errors`]: the one mapping from a core error to `relicore.RelicoreError`.
 //! * the constants of `relicore::constants`, as the dicts `CONSTANTS` and `ROOTS`, and the
 //!   core's `VERSION`.
@@ -27,6 +28,7 @@ use pyo3::prelude::*;
 use pyo3::types::PyDict;
 
 mod calibration;
+mod cosmology;
 mod errors;
 mod kernels;
 
@@ -69,6 +71,11 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_function(wrap_pyfunction!(kernels::kernel, m)?)?;
     m.add_function(wrap_pyfunction!(kernels::kernel_signatures, m)?)?;
     m.add_function(wrap_pyfunction!(calibration::two_load_calibration, m)?)?;
+    m.add_class::<cosmology::PyUniverse>()?;
+    m.add_class::<cosmology::UniverseMethod>()?;
+    m.add_function(wrap_pyfunction!(cosmology::universe_method, m)?)?;
+    m.add_function(wrap_pyfunction!(cosmology::universe_method_signatures, m)?)?;
+    m.add_function(wrap_pyfunction!(cosmology::universe_defaults, m)?)?;
     m.add("CONSTANTS", constants_dict(py)?)?;
     m.add("ROOTS", roots_dict(py)?)?;
     m.add("VERSION", relicore::VERSION)?;

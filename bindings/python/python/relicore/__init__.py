@@ -1,4 +1,5 @@
-"""relicore: blackbody radiometry from one validated Rust core, shared by Rust, C, Fortran and Python.
+"""relicore: blackbody radiometry and the cosmological background from one validated Rust core,
+shared by Rust, C, Fortran and Python.
 
 Modules
 -------
@@ -7,6 +8,11 @@ relicore.blackbody
     response-weighted radiance, two-load radiometer calibration and the microwave-sky
     conversions at the CMB temperature. Functions take scalars, lists or numpy arrays
     (broadcast together) and return a float for scalar inputs, else an ndarray.
+relicore.cosmology (its class is also ``relicore.Universe``)
+    :class:`Universe`: a validated parameter set (H0, densities, CMB temperature, neutrinos,
+    w0-wa dark energy) whose methods take redshifts (scalars or arrays) and give the expansion
+    rate, density parameters, distances, volumes, lookback time, age, conformal time and the
+    inversions to redshift. Pickles, so dask and multiprocessing workers can use it.
 relicore.constants
     The physical and astronomical constants of the core, each in SI units.
 
@@ -26,9 +32,10 @@ the applicable standards, local codes and licensed practice.
 from relicore._native import VERSION as _VERSION
 from relicore._native import RelicoreError
 
-from relicore import blackbody, constants
+from relicore import blackbody, constants, cosmology
+from relicore.cosmology import Universe
 
 __version__: str = _VERSION
 """Version of the Rust core this package was built from."""
 
-__all__ = ["RelicoreError", "blackbody", "constants", "__version__"]
+__all__ = ["RelicoreError", "Universe", "blackbody", "constants", "cosmology", "__version__"]

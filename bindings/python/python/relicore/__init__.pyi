@@ -4,6 +4,8 @@ from typing import Final
 
 from relicore import blackbody as blackbody
 from relicore import constants as constants
+from relicore import cosmology as cosmology
+from relicore.cosmology import Universe as Universe
 
 class RelicoreError(ValueError):
     """Invalid input to a relicore function (a ValueError)."""

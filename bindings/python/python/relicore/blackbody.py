@@ -40,20 +40,12 @@ from typing import Any
 import numpy as np
 
 from relicore import _native
+from relicore._elementwise import SCALAR_TYPES as _SCALAR_TYPES
+from relicore._elementwise import contiguous as _contiguous
+from relicore._elementwise import operand as _operand
 from relicore._native import TwoLoadCalibration
 
 _K = {name: _native.kernel(name) for name, _ in _native.kernel_signatures() if name != "two_load_calibration"}
-_SCALAR_TYPES = (float, int, np.floating, np.integer)
-
-
-def _operand(a: np.ndarray[Any, Any], shape: tuple[int, ...]) -> np.ndarray[Any, Any]:
-    """A contiguous 1-D float64 view or copy of one input: one element when it broadcasts as a
-    scalar, else prod(shape) elements in C order."""
-    if a.size == 1:
-        return a.reshape(1)
-    if a.shape != shape:
-        a = np.broadcast_to(a, shape)
-    return np.ascontiguousarray(a).reshape(-1)
 
 
 def _apply(kernel: Any, args: tuple[Any, ...], nan_on_error: bool) -> Any:
@@ -71,14 +63,13 @@ def _apply_one(call: Any, value: Any) -> Any:
     scalar = isinstance(value, _SCALAR_TYPES)
     a = np.asarray(value, dtype=np.float64)
     out = np.empty(a.shape, dtype=np.float64)
-    call(np.ascontiguousarray(a).reshape(-1), out.reshape(-1), a.shape)
+    call(_contiguous(a).reshape(-1), out.reshape(-1), a.shape)
     return float(out[()]) if scalar else out
 
 
 def _table(t: Any) -> np.ndarray[Any, Any]:
     """A response table as a float64 array, contiguous; its shape is checked by the core's face."""
-    a = np.asarray(t, dtype=np.float64)
-    return a if a.flags.c_contiguous else np.ascontiguousarray(a)
+    return _contiguous(np.asarray(t, dtype=np.float64))
 
 
 # --- Planck's law --------------------------------------------------------------------------
