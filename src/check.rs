@@ -24,6 +24,19 @@ pub(crate) fn positive<T: Real>(x: T, arg: u8) -> Result<T> {
     }
 }
 
+/// A computed result when it is finite, else `OutOfDomain(arg)`: an input combination whose
+/// result overflows the floating-point type, or cannot be formed in it (∞ − ∞, 0/0 of
+/// intermediates that under- or overflowed), is refused rather than returned as ∞ or NaN. Every
+/// public function passes its result through this, so `Ok` always holds a finite value.
+#[inline(always)]
+pub(crate) fn finite_result<T: Real>(x: T, arg: u8) -> Result<T> {
+    if x.is_finite() {
+        Ok(x)
+    } else {
+        Err(Error::OutOfDomain(arg))
+    }
+}
+
 /// The value when finite and not negative (+0 and −0 accepted).
 #[inline(always)]
 pub(crate) fn non_negative<T: Real>(x: T, arg: u8) -> Result<T> {

@@ -32,7 +32,9 @@ pub enum Error {
     #[error("degenerate calibration: the two loads or the two readings coincide (argument {0})")]
     DegenerateCalibration(u8),
     /// A value outside the documented domain of the function (for example a radiance ratio
-    /// no blackbody can produce).
+    /// no blackbody can produce). Also returned when finite arguments give a result that the
+    /// floating-point type cannot hold (it would overflow to ±∞, or an intermediate under- or
+    /// overflowed so that no number can be formed): every `Ok` holds a finite value.
     #[error("argument {0} is outside the domain of the function")]
     OutOfDomain(u8),
     /// An iteration did not converge within its budget.

@@ -14,7 +14,7 @@
 //! Gauss-Kronrod quadrature instead.
 
 use super::kernel::{K3, K4, PI4_OVER_15, TWO_ZETA3, invert_increasing, x_frequency, x_wavelength};
-use crate::check::{non_negative, positive};
+use crate::check::{finite_result, non_negative, positive};
 use crate::math::quadrature::integrate;
 use crate::{Error, Real, Result};
 
@@ -205,7 +205,7 @@ pub fn band_fraction_wavelength<T: Real>(lower_m: T, upper_m: T, temperature_k: 
     let (lo, up) = check_band(lower_m, upper_m)?;
     let t = positive(temperature_k, 2)?;
     let (a, b) = x_edges_wavelength(lo, up, t);
-    Ok(planck_band_integral(3, a, b) / T::c(PI4_OVER_15))
+    finite_result(planck_band_integral(3, a, b) / T::c(PI4_OVER_15), 2)
 }
 
 /// Band radiance between two wavelengths, L = ∫_{λ₁}^{λ₂} B_λ(λ, T) dλ.
@@ -218,7 +218,7 @@ pub fn band_fraction_wavelength<T: Real>(lower_m: T, upper_m: T, temperature_k: 
 pub fn band_radiance_wavelength<T: Real>(lower_m: T, upper_m: T, temperature_k: T) -> Result<T> {
     let (lo, up) = check_band(lower_m, upper_m)?;
     let t = positive(temperature_k, 2)?;
-    Ok(band_radiance_wavelength_unchecked(lo, up, t))
+    finite_result(band_radiance_wavelength_unchecked(lo, up, t), 2)
 }
 
 fn band_radiance_wavelength_unchecked<T: Real>(lo: T, up: T, t: T) -> T {
@@ -242,7 +242,7 @@ pub fn band_photon_radiance_wavelength<T: Real>(
     let (lo, up) = check_band(lower_m, upper_m)?;
     let t = positive(temperature_k, 2)?;
     let (a, b) = x_edges_wavelength(lo, up, t);
-    Ok((T::c(K3) * (t * t * t)) * planck_band_integral(2, a, b))
+    finite_result((T::c(K3) * (t * t * t)) * planck_band_integral(2, a, b), 2)
 }
 
 /// Band radiance between two frequencies, L = ∫_{ν₁}^{ν₂} B_ν(ν, T) dν.
@@ -266,7 +266,7 @@ pub fn band_radiance_frequency<T: Real>(lower_hz: T, upper_hz: T, temperature_k:
         x_frequency(up, t)
     };
     let t2 = t * t;
-    Ok((T::c(K4) * (t2 * t2)) * planck_band_integral(3, a, b))
+    finite_result((T::c(K4) * (t2 * t2)) * planck_band_integral(3, a, b), 2)
 }
 
 /// Temperature of the blackbody whose band radiance between two wavelengths equals the given
@@ -308,5 +308,5 @@ pub fn temperature_from_band_radiance_wavelength<T: Real>(
         let dv = (T::c(4.0) * v + k4t4 * edge) / t;
         (v, dv)
     };
-    invert_increasing(f, l, guess, 2)
+    finite_result(invert_increasing(f, l, guess, 2)?, 2)
 }

@@ -15,7 +15,7 @@
 //! standards and licensed practice where a reading protects people or plant.
 
 use super::kernel::{planck_quotient, x_frequency};
-use crate::check::{finite, positive};
+use crate::check::{finite, finite_result, positive};
 use crate::constants as k;
 use crate::{Error, Real, Result};
 
@@ -113,7 +113,7 @@ pub fn calibrated_brightness_temperature<T: Real>(
 ) -> Result<T> {
     check_calibration(calibration)?;
     let r = finite(reading, 1)?;
-    Ok((r - calibration.offset) / calibration.gain)
+    finite_result((r - calibration.offset) / calibration.gain, 1)
 }
 
 /// Physical temperature of a blackbody scene from a raw reading: J from
@@ -135,5 +135,5 @@ pub fn calibrated_temperature<T: Real>(
         return Err(Error::OutOfDomain(1));
     }
     let theta = T::c(k::PLANCK_OVER_BOLTZMANN) * calibration.frequency_hz;
-    Ok(theta / (theta / j).ln_1p())
+    finite_result(theta / (theta / j).ln_1p(), 1)
 }

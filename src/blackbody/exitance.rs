@@ -7,7 +7,7 @@
 //! mpmath at 40 digits and rounded once (`tests/reference/blackbody_vectors.py` re-derives
 //! them; the core's root finder reproduces the roots in a unit test).
 
-use crate::check::positive;
+use crate::check::{finite_result, positive};
 use crate::constants as k;
 use crate::math::dd;
 use crate::{Real, Result};
@@ -22,7 +22,10 @@ pub fn radiant_exitance<T: Real>(temperature_k: T) -> Result<T> {
     let t = positive(temperature_k, 0)?;
     let (h2, l2) = dd::two_prod(t, t);
     let (h4, l4) = dd::mul_dd_dd(h2, l2, h2, l2);
-    Ok(T::c(k::STEFAN_BOLTZMANN) * h4 + T::c(k::STEFAN_BOLTZMANN) * l4)
+    finite_result(
+        T::c(k::STEFAN_BOLTZMANN) * h4 + T::c(k::STEFAN_BOLTZMANN) * l4,
+        0,
+    )
 }
 
 /// Photon exitance of a blackbody, M_p = 4πζ(3)k³T³/(h³c²).
@@ -35,7 +38,10 @@ pub fn photon_exitance<T: Real>(temperature_k: T) -> Result<T> {
     let t = positive(temperature_k, 0)?;
     let (h2, l2) = dd::two_prod(t, t);
     let (h3, l3) = dd::mul_dd_d(h2, l2, t);
-    Ok(T::c(k::PHOTON_STEFAN_BOLTZMANN) * h3 + T::c(k::PHOTON_STEFAN_BOLTZMANN) * l3)
+    finite_result(
+        T::c(k::PHOTON_STEFAN_BOLTZMANN) * h3 + T::c(k::PHOTON_STEFAN_BOLTZMANN) * l3,
+        0,
+    )
 }
 
 /// Wavelength of the maximum of B_λ, λ_max = b/T with b = c₂/x₅ (Wien's displacement law).
@@ -44,7 +50,7 @@ pub fn photon_exitance<T: Real>(temperature_k: T) -> Result<T> {
 ///
 /// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
 pub fn peak_wavelength<T: Real>(temperature_k: T) -> Result<T> {
-    Ok(T::c(k::WIEN_WAVELENGTH) / positive(temperature_k, 0)?)
+    finite_result(T::c(k::WIEN_WAVELENGTH) / positive(temperature_k, 0)?, 0)
 }
 
 /// Frequency of the maximum of B_ν, ν_max = x₃kT/h.
@@ -53,7 +59,7 @@ pub fn peak_wavelength<T: Real>(temperature_k: T) -> Result<T> {
 ///
 /// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
 pub fn peak_frequency<T: Real>(temperature_k: T) -> Result<T> {
-    Ok(T::c(k::WIEN_FREQUENCY) * positive(temperature_k, 0)?)
+    finite_result(T::c(k::WIEN_FREQUENCY) * positive(temperature_k, 0)?, 0)
 }
 
 /// Wavenumber of the maximum of B_ṽ, ṽ_max = x₃T/c₂ (same x as the frequency form).
@@ -62,7 +68,7 @@ pub fn peak_frequency<T: Real>(temperature_k: T) -> Result<T> {
 ///
 /// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
 pub fn peak_wavenumber<T: Real>(temperature_k: T) -> Result<T> {
-    Ok(T::c(k::WIEN_WAVENUMBER) * positive(temperature_k, 0)?)
+    finite_result(T::c(k::WIEN_WAVENUMBER) * positive(temperature_k, 0)?, 0)
 }
 
 /// Wavelength of the maximum of the photon radiance N_λ (and of λB_λ), c₂/(x₄T).
@@ -71,7 +77,10 @@ pub fn peak_wavenumber<T: Real>(temperature_k: T) -> Result<T> {
 ///
 /// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
 pub fn photon_peak_wavelength<T: Real>(temperature_k: T) -> Result<T> {
-    Ok(T::c(k::WIEN_PHOTON_WAVELENGTH) / positive(temperature_k, 0)?)
+    finite_result(
+        T::c(k::WIEN_PHOTON_WAVELENGTH) / positive(temperature_k, 0)?,
+        0,
+    )
 }
 
 /// Frequency of the maximum of the photon radiance N_ν, x₂kT/h.
@@ -80,7 +89,10 @@ pub fn photon_peak_wavelength<T: Real>(temperature_k: T) -> Result<T> {
 ///
 /// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
 pub fn photon_peak_frequency<T: Real>(temperature_k: T) -> Result<T> {
-    Ok(T::c(k::WIEN_PHOTON_FREQUENCY) * positive(temperature_k, 0)?)
+    finite_result(
+        T::c(k::WIEN_PHOTON_FREQUENCY) * positive(temperature_k, 0)?,
+        0,
+    )
 }
 
 /// Temperature whose B_λ peaks at the given wavelength, T = b/λ_max.
@@ -89,7 +101,7 @@ pub fn photon_peak_frequency<T: Real>(temperature_k: T) -> Result<T> {
 ///
 /// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
 pub fn temperature_from_peak_wavelength<T: Real>(wavelength_m: T) -> Result<T> {
-    Ok(T::c(k::WIEN_WAVELENGTH) / positive(wavelength_m, 0)?)
+    finite_result(T::c(k::WIEN_WAVELENGTH) / positive(wavelength_m, 0)?, 0)
 }
 
 /// Temperature whose B_ν peaks at the given frequency, T = hν_max/(x₃k).
@@ -98,5 +110,8 @@ pub fn temperature_from_peak_wavelength<T: Real>(wavelength_m: T) -> Result<T> {
 ///
 /// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
 pub fn temperature_from_peak_frequency<T: Real>(frequency_hz: T) -> Result<T> {
-    Ok(T::c(k::WIEN_FREQUENCY_INVERSE) * positive(frequency_hz, 0)?)
+    finite_result(
+        T::c(k::WIEN_FREQUENCY_INVERSE) * positive(frequency_hz, 0)?,
+        0,
+    )
 }

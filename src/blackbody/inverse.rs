@@ -8,7 +8,7 @@
 //! and licensed practice require.
 
 use super::kernel::{ln1p_quotient, two_h_nu3_over_c2, x_wavelength};
-use crate::check::positive;
+use crate::check::{finite_result, positive};
 use crate::constants as k;
 use crate::math::{dd, roots};
 use crate::{Error, Real, Result};
@@ -34,7 +34,7 @@ pub fn brightness_temperature_wavelength<T: Real>(
 ) -> Result<T> {
     let l = positive(wavelength_m, 0)?;
     let b = positive(spectral_radiance, 1)?;
-    Ok(brightness_temperature_wavelength_unchecked(l, b))
+    finite_result(brightness_temperature_wavelength_unchecked(l, b), 1)
 }
 
 #[inline(always)]
@@ -66,7 +66,7 @@ pub fn brightness_temperature_frequency<T: Real>(
     };
     let (hh, hl) = T::c2(k::PLANCK_OVER_BOLTZMANN, k::PLANCK_OVER_BOLTZMANN_LO);
     let (th, tl) = dd::mul_dd_d(hh, hl, nu);
-    Ok((th + tl) / ln1p_quotient(a, ln_a, b))
+    finite_result((th + tl) / ln1p_quotient(a, ln_a, b), 1)
 }
 
 /// Rayleigh-Jeans temperature: T_RJ = c² L / (2kν²), the temperature the long-wavelength limit
@@ -87,7 +87,7 @@ pub fn rayleigh_jeans_temperature<T: Real>(frequency_hz: T, spectral_radiance: T
     let (nh, nl) = dd::two_prod(s, s);
     let (ah, al) = dd::mul_dd_d(ch, cl, b);
     let (qh, ql) = dd::div_dd_dd(ah, al, nh, nl);
-    Ok(qh + ql)
+    finite_result(qh + ql, 1)
 }
 
 /// ln(eˣ − 1) without overflow.
@@ -163,7 +163,7 @@ pub fn ratio_temperature<T: Real>(
         return Err(Error::NoConvergence);
     }
     if g0 == T::zero() {
-        return Ok(T::one() / u0);
+        return finite_result(T::one() / u0, 2);
     }
     let (mut lo, mut hi) = (u0, u0);
     let want_down = sign_at(g0) == increasing_in_u_is_down; // need larger u to reach the root
@@ -188,5 +188,5 @@ pub fn ratio_temperature<T: Real>(
         }
     }
     let u = roots::bracketed_newton(g, lo, hi, T::c(2.0) * T::epsilon() * lo, 200)?;
-    Ok(T::one() / u)
+    finite_result(T::one() / u, 2)
 }

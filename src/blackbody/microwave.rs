@@ -14,7 +14,7 @@
 //! Present CMB temperature for the callers: 2.72548 ± 0.00057 K (Fixsen 2009, ApJ 707, 916).
 
 use super::kernel::x_frequency;
-use crate::check::positive;
+use crate::check::{finite_result, positive};
 use crate::{Real, Result};
 
 /// 1e20 · 2k/c², MJy sr⁻¹ K⁻¹ Hz⁻² (derived from the exact k and c).
@@ -52,7 +52,7 @@ pub fn thermodynamic_to_rayleigh_jeans_factor<T: Real>(
     cmb_temperature_k: T,
 ) -> Result<T> {
     let (xh, xl) = checked_x(frequency_hz, cmb_temperature_k)?;
-    Ok(rj_factor(xh, xl))
+    finite_result(rj_factor(xh, xl), 0)
 }
 
 /// dB_ν/dT at the CMB temperature, in MJy sr⁻¹ per K_CMB: converts a CMB temperature
@@ -65,7 +65,10 @@ pub fn thermodynamic_to_rayleigh_jeans_factor<T: Real>(
 /// `NonPositive(i)`. Accuracy: ≤ 8 ulp (`f64`) against mpmath.
 pub fn kcmb_to_mjy_per_sr<T: Real>(frequency_hz: T, cmb_temperature_k: T) -> Result<T> {
     let (xh, xl) = checked_x(frequency_hz, cmb_temperature_k)?;
-    Ok(((T::c(KCMB_CONST) * frequency_hz) * frequency_hz) * rj_factor(xh, xl))
+    finite_result(
+        ((T::c(KCMB_CONST) * frequency_hz) * frequency_hz) * rj_factor(xh, xl),
+        0,
+    )
 }
 
 fn sz_f<T: Real>(x: T) -> T {
@@ -81,7 +84,7 @@ fn sz_f<T: Real>(x: T) -> T {
 /// `NonPositive(i)`. Accuracy: within 1e-15·(x + 4) absolute (`f64`) against mpmath.
 pub fn thermal_sz_temperature_shape<T: Real>(frequency_hz: T, cmb_temperature_k: T) -> Result<T> {
     let (xh, _) = checked_x(frequency_hz, cmb_temperature_k)?;
-    Ok(sz_f(xh))
+    finite_result(sz_f(xh), 0)
 }
 
 /// Thermal SZ intensity shape g(x) = x⁴eˣ/(eˣ − 1)² (x coth(x/2) − 4) (ΔI/I₀ = y g(x)).
@@ -92,7 +95,7 @@ pub fn thermal_sz_temperature_shape<T: Real>(frequency_hz: T, cmb_temperature_k:
 /// `NonPositive(i)`. Accuracy: within 1e-15·(x + 4)·x⁴eˣ/(eˣ − 1)² absolute (`f64`).
 pub fn thermal_sz_spectral_shape<T: Real>(frequency_hz: T, cmb_temperature_k: T) -> Result<T> {
     let (xh, xl) = checked_x(frequency_hz, cmb_temperature_k)?;
-    Ok(xh * xh * rj_factor(xh, xl) * sz_f(xh))
+    finite_result(xh * xh * rj_factor(xh, xl) * sz_f(xh), 0)
 }
 
 /// Frequency of the thermal SZ null, ν₀ = x₀kT₀/h with x₀ coth(x₀/2) = 4 (x₀ = 3.830016…).
@@ -103,5 +106,5 @@ pub fn thermal_sz_spectral_shape<T: Real>(frequency_hz: T, cmb_temperature_k: T)
 /// Accuracy: ≤ 2 ulp (`f64`) against mpmath (non-relativistic limit; relativistic corrections
 /// move the null upward with cluster temperature and are not included).
 pub fn thermal_sz_null_frequency<T: Real>(cmb_temperature_k: T) -> Result<T> {
-    Ok(T::c(SZ_NULL_PER_K) * positive(cmb_temperature_k, 0)?)
+    finite_result(T::c(SZ_NULL_PER_K) * positive(cmb_temperature_k, 0)?, 0)
 }

@@ -8,6 +8,14 @@
 //! Units are SI: wavelength in m, frequency in Hz, wavenumber in m⁻¹ (not cm⁻¹), temperature
 //! in K, spectral radiance in W m⁻² sr⁻¹ per unit of the spectral variable.
 //!
+//! Every `Ok` holds a finite number. Finite arguments so extreme that the result cannot be
+//! formed in the type (σT⁴ beyond the largest float, a temperature from a radiance below the
+//! smallest one, or an intermediate such as T⁴ overflowing first: in `f32` the exitance is
+//! refused from T ≈ 4.3e9 K, in `f64` from T ≈ 1e77 K) give `Err(OutOfDomain(i))`, i the
+//! spectral argument for the Planck forms and the microwave conversions, the temperature for
+//! exitances, peaks and bands, the radiance or reading for the inversions. Results that are
+//! merely below the smallest subnormal are 0, as documented.
+//!
 //! # Cautions
 //! Radiation thermometry infers a temperature from radiance under assumptions on emissivity,
 //! the optical path and calibration. Trusted beyond them it misleads, with real harm where

@@ -15,7 +15,7 @@ use super::kernel::{
     TWO_C, TWO_OVER_C2, one_minus_exp_neg, planck_quotient, pow5, two_h_nu3_over_c2, x_frequency,
     x_wavelength, x_wavenumber,
 };
-use crate::check::positive;
+use crate::check::{finite_result, positive};
 use crate::constants as k;
 use crate::{Real, Result};
 
@@ -32,7 +32,7 @@ use crate::{Real, Result};
 pub fn spectral_radiance_wavelength<T: Real>(wavelength_m: T, temperature_k: T) -> Result<T> {
     let l = positive(wavelength_m, 0)?;
     let t = positive(temperature_k, 1)?;
-    Ok(spectral_radiance_wavelength_unchecked(l, t))
+    finite_result(spectral_radiance_wavelength_unchecked(l, t), 0)
 }
 
 #[inline(always)]
@@ -52,7 +52,7 @@ pub(crate) fn spectral_radiance_wavelength_unchecked<T: Real>(l: T, t: T) -> T {
 pub fn spectral_radiance_frequency<T: Real>(frequency_hz: T, temperature_k: T) -> Result<T> {
     let nu = positive(frequency_hz, 0)?;
     let t = positive(temperature_k, 1)?;
-    Ok(spectral_radiance_frequency_unchecked(nu, t))
+    finite_result(spectral_radiance_frequency_unchecked(nu, t), 0)
 }
 
 #[inline(always)]
@@ -73,7 +73,7 @@ pub fn spectral_radiance_wavenumber<T: Real>(wavenumber_per_m: T, temperature_k:
     let t = positive(temperature_k, 1)?;
     let (xh, xl) = x_wavenumber(v, t);
     let p = ((T::c(k::FIRST_RADIATION_RADIANCE) * v) * v) * v;
-    Ok(planck_quotient(p, xh, xl))
+    finite_result(planck_quotient(p, xh, xl), 0)
 }
 
 /// Photon spectral radiance per unit wavelength, N_λ = B_λ/(hc/λ) = (2c/λ⁴) / (e^x − 1).
@@ -88,7 +88,7 @@ pub fn photon_radiance_wavelength<T: Real>(wavelength_m: T, temperature_k: T) ->
     let (xh, xl) = x_wavelength(l, t);
     let l2 = l * l;
     let p = T::c(TWO_C) / (l2 * l2);
-    Ok(planck_quotient(p, xh, xl))
+    finite_result(planck_quotient(p, xh, xl), 0)
 }
 
 /// Photon spectral radiance per unit frequency, N_ν = B_ν/(hν) = (2ν²/c²) / (e^(hν/kT) − 1).
@@ -102,7 +102,7 @@ pub fn photon_radiance_frequency<T: Real>(frequency_hz: T, temperature_k: T) -> 
     let t = positive(temperature_k, 1)?;
     let (xh, xl) = x_frequency(nu, t);
     let p = (T::c(TWO_OVER_C2) * nu) * nu;
-    Ok(planck_quotient(p, xh, xl))
+    finite_result(planck_quotient(p, xh, xl), 0)
 }
 
 /// Photon spectral radiance per unit wavenumber, N_ṽ = 2cṽ² / (e^(hcṽ/kT) − 1).
@@ -116,7 +116,7 @@ pub fn photon_radiance_wavenumber<T: Real>(wavenumber_per_m: T, temperature_k: T
     let t = positive(temperature_k, 1)?;
     let (xh, xl) = x_wavenumber(v, t);
     let p = (T::c(TWO_C) * v) * v;
-    Ok(planck_quotient(p, xh, xl))
+    finite_result(planck_quotient(p, xh, xl), 0)
 }
 
 /// Temperature derivative of B_λ: ∂B_λ/∂T = B_λ · (x/T) / (1 − e^−x), x = hc/(λkT).
@@ -131,7 +131,10 @@ pub fn radiance_temperature_derivative_wavelength<T: Real>(
 ) -> Result<T> {
     let l = positive(wavelength_m, 0)?;
     let t = positive(temperature_k, 1)?;
-    Ok(radiance_temperature_derivative_wavelength_unchecked(l, t))
+    finite_result(
+        radiance_temperature_derivative_wavelength_unchecked(l, t),
+        0,
+    )
 }
 
 #[inline(always)]
@@ -156,5 +159,5 @@ pub fn radiance_temperature_derivative_frequency<T: Real>(
     let t = positive(temperature_k, 1)?;
     let (xh, xl) = x_frequency(nu, t);
     let p = two_h_nu3_over_c2(nu) * ((xh + xl) / one_minus_exp_neg(xh)) / t;
-    Ok(planck_quotient(p, xh, xl))
+    finite_result(planck_quotient(p, xh, xl), 0)
 }

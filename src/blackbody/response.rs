@@ -14,7 +14,7 @@ use super::kernel::invert_increasing;
 use super::planck::{
     radiance_temperature_derivative_wavelength_unchecked, spectral_radiance_wavelength_unchecked,
 };
-use crate::check::positive;
+use crate::check::{finite_result, positive};
 use crate::math::quadrature::integrate;
 use crate::{Error, Real, Result};
 
@@ -92,9 +92,10 @@ pub fn response_weighted_radiance<T: Real>(
 ) -> Result<T> {
     check_table(wavelengths_m, response)?;
     let t = positive(temperature_k, 2)?;
-    weighted(wavelengths_m, response, |l| {
+    let v = weighted(wavelengths_m, response, |l| {
         spectral_radiance_wavelength_unchecked(l, t)
-    })
+    })?;
+    finite_result(v, 2)
 }
 
 /// Temperature of the blackbody whose response-weighted radiance equals the given value: the
@@ -152,7 +153,7 @@ pub fn temperature_from_response_weighted_radiance<T: Real>(
     };
     let res = invert_increasing(f, target, guess, 2);
     match (res, failure) {
-        (Ok(t), _) => Ok(t),
+        (Ok(t), _) => finite_result(t, 2),
         (Err(_), Some(e)) => Err(e),
         (Err(e), None) => Err(e),
     }

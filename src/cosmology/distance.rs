@@ -5,6 +5,7 @@
 use super::Universe;
 use super::table::S_MIN;
 use super::universe::check_redshift;
+use crate::check::finite_result;
 use crate::math::quadrature::integrate;
 use crate::{Error, Real, Result};
 
@@ -77,7 +78,7 @@ impl<T: Real> Universe<T> {
     /// quadrature in s = √a beyond.
     pub fn comoving_distance_mpc(&self, z: T) -> Result<T> {
         let z = check_redshift(z, 0)?;
-        Ok(self.hubble_distance_mpc * self.comoving_unit(z)?)
+        finite_result(self.hubble_distance_mpc * self.comoving_unit(z)?, 0)
     }
 
     /// Transverse comoving distance D_M, Mpc (Hogg 1999 eq. 16: equal to D_C when flat, the
@@ -85,13 +86,19 @@ impl<T: Real> Universe<T> {
     /// [`comoving_distance_mpc`](Self::comoving_distance_mpc).
     pub fn transverse_comoving_distance_mpc(&self, z: T) -> Result<T> {
         let z = check_redshift(z, 0)?;
-        Ok(self.hubble_distance_mpc * self.transverse_unit(self.comoving_unit(z)?))
+        finite_result(
+            self.hubble_distance_mpc * self.transverse_unit(self.comoving_unit(z)?),
+            0,
+        )
     }
 
     /// Angular-diameter distance D_A = D_M/(1+z), Mpc (Hogg 1999 eq. 18). Errors and accuracy
     /// as [`comoving_distance_mpc`](Self::comoving_distance_mpc).
     pub fn angular_diameter_distance_mpc(&self, z: T) -> Result<T> {
-        Ok(self.transverse_comoving_distance_mpc(z)? / (T::one() + z))
+        finite_result(
+            self.transverse_comoving_distance_mpc(z)? / (T::one() + z),
+            0,
+        )
     }
 
     /// Angular-diameter distance of an object at z2 seen from z1 ≤ z2, D_M(χ2 − χ1)/(1 + z2),
@@ -106,13 +113,19 @@ impl<T: Real> Universe<T> {
             return Err(Error::EmptyInterval(0));
         }
         let d = self.comoving_unit(z2)? - self.comoving_unit(z1)?;
-        Ok(self.hubble_distance_mpc * self.transverse_unit(d) / (T::one() + z2))
+        finite_result(
+            self.hubble_distance_mpc * self.transverse_unit(d) / (T::one() + z2),
+            1,
+        )
     }
 
     /// Luminosity distance D_L = (1+z) D_M, Mpc (Hogg 1999 eq. 21). Errors and accuracy as
     /// [`comoving_distance_mpc`](Self::comoving_distance_mpc).
     pub fn luminosity_distance_mpc(&self, z: T) -> Result<T> {
-        Ok(self.transverse_comoving_distance_mpc(z)? * (T::one() + z))
+        finite_result(
+            self.transverse_comoving_distance_mpc(z)? * (T::one() + z),
+            0,
+        )
     }
 
     /// Distance modulus 5 log10(D_L / 10 pc), magnitudes (Hogg 1999 eq. 25).
@@ -125,7 +138,10 @@ impl<T: Real> Universe<T> {
             return Err(Error::NonPositive(0));
         }
         let dl = self.luminosity_distance_mpc(z)?;
-        Ok(T::c(5.0 / core::f64::consts::LN_10) * dl.ln() + T::c(25.0))
+        finite_result(
+            T::c(5.0 / core::f64::consts::LN_10) * dl.ln() + T::c(25.0),
+            0,
+        )
     }
 
     /// Comoving volume inside redshift z over the whole sky, Gpc³ (Hogg 1999 eq. 29), written
@@ -167,7 +183,7 @@ impl<T: Real> Universe<T> {
             let scale = dh / r;
             two_pi * scale * scale * scale * (phi - phi.sin() * phi.cos())
         };
-        Ok(v * mpc3_to_gpc3)
+        finite_result(v * mpc3_to_gpc3, 0)
     }
 
     /// Differential comoving volume dV_C/dz/dΩ = D_H D_M²/E(z), Mpc³ sr⁻¹ (Hogg 1999 eq. 28).
@@ -175,12 +191,15 @@ impl<T: Real> Universe<T> {
     pub fn differential_comoving_volume_mpc3_sr(&self, z: T) -> Result<T> {
         let dm = self.transverse_comoving_distance_mpc(z)?;
         let e = self.dimensionless_hubble(z)?;
-        Ok(self.hubble_distance_mpc * dm * dm / e)
+        finite_result(self.hubble_distance_mpc * dm * dm / e, 0)
     }
 
     /// Proper transverse size per arcsecond at z, D_A·π/648000, kpc per arcsec. Errors and
     /// accuracy as [`comoving_distance_mpc`](Self::comoving_distance_mpc).
     pub fn transverse_scale_kpc_per_arcsec(&self, z: T) -> Result<T> {
-        Ok(self.angular_diameter_distance_mpc(z)? * T::c(1000.0 * RAD_PER_ARCSEC))
+        finite_result(
+            self.angular_diameter_distance_mpc(z)? * T::c(1000.0 * RAD_PER_ARCSEC),
+            0,
+        )
     }
 }

@@ -3,6 +3,7 @@
 
 use super::Universe;
 use super::universe::check_redshift;
+use crate::check::finite_result;
 use crate::{Error, Real, Result};
 
 impl<T: Real> Universe<T> {
@@ -24,13 +25,13 @@ impl<T: Real> Universe<T> {
     /// mpmath (`tests/data/cosmology.txt`).
     pub fn dimensionless_hubble(&self, z: T) -> Result<T> {
         let (a, q2) = self.at(z)?;
-        Ok(q2.sqrt() / (a * a))
+        finite_result(q2.sqrt() / (a * a), 0)
     }
 
     /// Hubble parameter H(z) = H0 E(z), km s⁻¹ Mpc⁻¹. Errors and accuracy as
     /// [`dimensionless_hubble`](Self::dimensionless_hubble).
     pub fn hubble_parameter_km_s_mpc(&self, z: T) -> Result<T> {
-        Ok(self.params.h0_km_s_mpc * self.dimensionless_hubble(z)?)
+        finite_result(self.params.h0_km_s_mpc * self.dimensionless_hubble(z)?, 0)
     }
 
     /// Matter density parameter at z (cold dark matter, baryons and massive neutrinos, the
@@ -42,42 +43,42 @@ impl<T: Real> Universe<T> {
         for &(c, ym) in self.massive.iter().take(self.n_massive) {
             m = m + c * super::neutrino::density_ratio(ym * a);
         }
-        Ok(m / q2)
+        finite_result(m / q2, 0)
     }
 
     /// Radiation density parameter at z (photons and massless neutrino species). Errors as
     /// [`dimensionless_hubble`](Self::dimensionless_hubble).
     pub fn omega_radiation_at(&self, z: T) -> Result<T> {
         let (_, q2) = self.at(z)?;
-        Ok(self.omega_radiation / q2)
+        finite_result(self.omega_radiation / q2, 0)
     }
 
     /// Dark-energy density parameter at z. Errors as
     /// [`dimensionless_hubble`](Self::dimensionless_hubble).
     pub fn omega_dark_energy_at(&self, z: T) -> Result<T> {
         let (a, q2) = self.at(z)?;
-        Ok(self.dark_energy_term(a) / q2)
+        finite_result(self.dark_energy_term(a) / q2, 0)
     }
 
     /// Curvature density parameter at z, Ω_k(1+z)²/E². Errors as
     /// [`dimensionless_hubble`](Self::dimensionless_hubble).
     pub fn omega_curvature_at(&self, z: T) -> Result<T> {
         let (a, q2) = self.at(z)?;
-        Ok(self.params.omega_curvature * a * a / q2)
+        finite_result(self.params.omega_curvature * a * a / q2, 0)
     }
 
     /// Critical density at z, ρ_c(z) = 3H(z)²/(8πG), kg m⁻³ (G from CODATA 2022). Errors as
     /// [`dimensionless_hubble`](Self::dimensionless_hubble).
     pub fn critical_density_kg_m3(&self, z: T) -> Result<T> {
         let e = self.dimensionless_hubble(z)?;
-        Ok(self.critical_density * e * e)
+        finite_result(self.critical_density * e * e, 0)
     }
 
     /// CMB temperature at z, T0(1+z), K. Errors: `NonFinite(0)`, `Negative(0)`. Exact to one
     /// rounding.
     pub fn cmb_temperature_at_k(&self, z: T) -> Result<T> {
         let z = check_redshift(z, 0)?;
-        Ok(self.params.cmb_temperature_k * (T::one() + z))
+        finite_result(self.params.cmb_temperature_k * (T::one() + z), 0)
     }
 
     /// Hubble distance c/H0, Mpc.
@@ -110,6 +111,9 @@ impl<T: Real> Universe<T> {
         if !(self.omega_radiation_all_massless > T::zero()) {
             return Err(Error::OutOfDomain(0));
         }
-        Ok(self.omega_cb / self.omega_radiation_all_massless - T::one())
+        finite_result(
+            self.omega_cb / self.omega_radiation_all_massless - T::one(),
+            0,
+        )
     }
 }

@@ -5,7 +5,7 @@
 //! (dχ/du = D_H/(q(1+z)), dt/du = t_H/E, …) and a relative tolerance of a few ulp in u.
 
 use super::Universe;
-use crate::check::{non_negative, positive};
+use crate::check::{finite_result, non_negative, positive};
 use crate::math::roots::bracketed_newton_relative;
 use crate::{Error, Real, Result};
 
@@ -16,7 +16,7 @@ impl<T: Real> Universe<T> {
     fn solve_u<F: FnMut(T) -> (T, T)>(&self, f: F) -> Result<T> {
         let u =
             bracketed_newton_relative(f, T::zero(), T::c(U_MAX), T::epsilon() * T::c(2.0), 300)?;
-        Ok(u.exp_m1())
+        finite_result(u.exp_m1(), 0)
     }
 
     fn check_reachable<F: FnMut(T) -> (T, T)>(mut f: F) -> Result<()> {

@@ -12,6 +12,9 @@
 //! * Flatness is the default: Ω_k = 0, and dark energy is what remains,
 //!   Ω_de = 1 − Ω_m − Ω_r − Ω_k, with w(a) = w0 + wa(1 − a).
 //! * Units: Mpc, Gyr (Julian years), km s⁻¹ Mpc⁻¹, kg m⁻³, Gpc³, K.
+//! * Every `Ok` holds a finite number: a redshift or target so large (or a parameter set so
+//!   extreme) that the result is not representable gives `Err(OutOfDomain(i))` instead, i the
+//!   argument (0, or 1 for the second redshift of a two-redshift method).
 //!
 //! Method: every integral is taken in s = √a, where the integrands stay smooth down to a → 0
 //! with or without radiation, by the shared adaptive Gauss-Kronrod quadrature; distances use a

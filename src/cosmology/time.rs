@@ -4,6 +4,7 @@
 
 use super::Universe;
 use super::universe::check_redshift;
+use crate::check::finite_result;
 use crate::math::quadrature::integrate;
 use crate::{Error, Real, Result};
 
@@ -55,7 +56,7 @@ impl<T: Real> Universe<T> {
             T::zero(),
         )
         .map_err(|_| Error::OutOfDomain(0))?;
-        Ok(self.hubble_time_gyr * v)
+        finite_result(self.hubble_time_gyr * v, 0)
     }
 
     /// Age of the universe at redshift z, (1/H0) ∫_z^∞ dz'/((1+z')E(z')), Gyr.
@@ -68,7 +69,7 @@ impl<T: Real> Universe<T> {
     /// are among the vectors.
     pub fn age_gyr(&self, z: T) -> Result<T> {
         let s = self.s_of(z)?;
-        Ok(self.hubble_time_gyr * self.time_integral(T::zero(), s)?)
+        finite_result(self.hubble_time_gyr * self.time_integral(T::zero(), s)?, 0)
     }
 
     /// Conformal time at z times c, c·η(z) = (c/H0) ∫_z^∞ dz'/E(z'), Mpc: the comoving horizon.
@@ -91,6 +92,6 @@ impl<T: Real> Universe<T> {
             T::zero(),
         )
         .map_err(|_| Error::OutOfDomain(0))?;
-        Ok(self.hubble_distance_mpc * v)
+        finite_result(self.hubble_distance_mpc * v, 0)
     }
 }

@@ -106,7 +106,9 @@ impl<T: Real> Universe<T> {
     /// Validates the parameters, computes the derived constants and builds the distance table.
     ///
     /// Errors: `InvalidParameter(i)` (positions in [`UniverseParameters`]) for a non-finite
-    /// value, H0 ≤ 0, Ω_m < 0, Ω_b < 0 or Ω_b > Ω_m, T0 < 0, N_eff < 0, a negative mass, a
+    /// value, H0 ≤ 0 (or so far from any physical value that c/H0, 1/H0 or the critical density
+    /// is not a positive finite number of the type), T0 or N_eff so large that the radiation
+    /// density overflows, Ω_m < 0, Ω_b < 0 or Ω_b > Ω_m, T0 < 0, N_eff < 0, a negative mass, a
     /// positive mass with T0 = 0 (no neutrino background), massive neutrinos denser today than
     /// Ω_m, Y_p outside [0, 1); `NoBigBang` when E(z)² ≤ 0 somewhere between today and a → 0
     /// (checked on the 4096 points of a logarithmic grid in a from 1e-30 to 1 and on every node
@@ -155,12 +157,28 @@ impl<T: Real> Universe<T> {
         let h0_si = h0 * T::c(1000.0 / k::MEGAPARSEC);
         let rho_crit =
             T::c(3.0 / (8.0 * core::f64::consts::PI * k::GRAVITATIONAL_CONSTANT)) * h0_si * h0_si;
+        let hubble_distance_mpc = T::c(k::SPEED_OF_LIGHT / 1000.0) / h0;
+        let hubble_time_gyr = T::c(k::MEGAPARSEC / 1000.0 / (k::JULIAN_YEAR * 1e9)) / h0;
+        // an H0 so small or large that c/H0, 1/H0 or 3H0²/8πG is not a positive finite number
+        // of the type (for f64: H0 below about 1e-147 or above 1e169 km/s/Mpc)
+        for derived in [rho_crit, hubble_distance_mpc, hubble_time_gyr] {
+            if !(derived > T::zero() && derived.is_finite()) {
+                return Err(Error::InvalidParameter(0));
+            }
+        }
         // photons: ρ_γ = a_rad T⁴/c² (mass density)
         let t2 = t0 * t0;
         let omega_photon = T::c(k::RADIATION_DENSITY / (k::SPEED_OF_LIGHT * k::SPEED_OF_LIGHT))
             * (t2 * t2)
             / rho_crit;
+        if !omega_photon.is_finite() {
+            // T0 so large that Ω_γ overflows
+            return Err(Error::InvalidParameter(4));
+        }
         let per_species = n_eff / T::c(3.0) * T::c(NEUTRINO_PER_PHOTON) * omega_photon;
+        if !per_species.is_finite() {
+            return Err(Error::InvalidParameter(5));
+        }
         let mut massive = [(T::zero(), T::zero()); 3];
         let mut n_massive = 0usize;
         let mut omega_radiation = omega_photon;
@@ -191,8 +209,8 @@ impl<T: Real> Universe<T> {
             massive,
             n_massive,
             de_power: T::c(-3.0) * (T::one() + w0 + wa),
-            hubble_distance_mpc: T::c(k::SPEED_OF_LIGHT / 1000.0) / h0,
-            hubble_time_gyr: T::c(k::MEGAPARSEC / 1000.0 / (k::JULIAN_YEAR * 1e9)) / h0,
+            hubble_distance_mpc,
+            hubble_time_gyr,
             critical_density: rho_crit,
             omega_radiation_all_massless: omega_photon
                 * (T::one() + n_eff * T::c(NEUTRINO_PER_PHOTON)),
