@@ -1,9 +1,13 @@
 #!/usr/bin/env bash
-# The relicore demo (`make demo`): one INVENTED scenario -- the fictional Glimmerfen Ridge
-# Observatory's balloon radiometer and a fictional handheld infrared thermometer -- computed
-# by the same core from Rust, C, Fortran and Python, reading the same invented input file
-# (examples/data/invented_radiometer.txt). Prints how far the four agree and writes plots to
-# examples/out/. Run from anywhere; `make demo` first builds the Python package into .venv.
+# The relicore demo (`make demo`): INVENTED scenarios computed by the same core from Rust, C,
+# Fortran and Python, each language reading the same invented input file:
+#   part 1: the fictional Glimmerfen Ridge Observatory's balloon radiometer and a fictional
+#           handheld infrared thermometer (examples/data/invented_radiometer.txt);
+#   part 2: the fictional Quillmere Deep Field Survey: a distance-redshift table of the demo
+#           universe in all four languages, and a catalogue of 100,000 invented galaxies turned
+#           into distances and ages in Python (examples/data/invented_catalogue.txt).
+# Prints how far the four agree and writes plots to examples/out/. Run from anywhere; `make
+# demo` first builds the Python package into .venv.
 set -euo pipefail
 
 cd "$(dirname "$0")/.."
@@ -11,24 +15,29 @@ PY=${PY:-.venv/bin/python}
 CC=${CC:-cc}
 FC=${FC:-gfortran}
 INPUT=examples/data/invented_radiometer.txt
+CATALOGUE=examples/data/invented_catalogue.txt
 BUILD=build/demo
 OUT=examples/out
 mkdir -p "$BUILD" "$OUT"
 
 echo "relicore demo -- every number below comes from INVENTED data for a FICTIONAL observatory"
-echo "(input: $INPUT)"
+echo "and a FICTIONAL galaxy survey (inputs: $INPUT, $CATALOGUE)"
 echo
 
 echo "== building: Rust example, C static library, C and Fortran programs"
-cargo build --quiet --release --example radiometer_demo
+cargo build --quiet --release --example radiometer_demo --example catalogue_table
 cargo build --quiet -p relicore-capi --profile release-c
 "$CC" -std=c11 -O2 -Wall -Wextra -Wpedantic -Werror -Iinclude examples/c/radiometer_demo.c \
   target/release-c/librelicore.a -lm -o "$BUILD/radiometer_demo_c"
 "$FC" -std=f2018 -O2 -c bindings/fortran/relicore.f90 -J"$BUILD" -o "$BUILD/relicore.o"
 "$FC" -std=f2018 -O2 -Wall -Wextra -Werror -I"$BUILD" examples/fortran/radiometer_demo.f90 \
   "$BUILD/relicore.o" target/release-c/librelicore.a -lm -o "$BUILD/radiometer_demo_f"
+"$CC" -std=c11 -O2 -Wall -Wextra -Wpedantic -Werror -Iinclude examples/c/catalogue_table.c \
+  target/release-c/librelicore.a -lm -o "$BUILD/catalogue_table_c"
+"$FC" -std=f2018 -O2 -Wall -Wextra -Werror -I"$BUILD" examples/fortran/catalogue_table.f90 \
+  "$BUILD/relicore.o" target/release-c/librelicore.a -lm -o "$BUILD/catalogue_table_f"
 
-echo "== running the four programs on the same invented inputs"
+echo "== part 1: running the four radiometer programs on the same invented inputs"
 target/release/examples/radiometer_demo "$INPUT" >"$OUT/rust.txt"
 "$BUILD/radiometer_demo_c" "$INPUT" >"$OUT/c.txt"
 "$BUILD/radiometer_demo_f" "$INPUT" >"$OUT/fortran.txt"
@@ -58,3 +67,35 @@ echo
 
 echo "== plots"
 "$PY" examples/python/plot_demo.py "$INPUT" "$OUT"
+echo
+
+echo "== part 2: the fictional Quillmere Deep Field Survey"
+echo "== running the four distance-redshift table programs on the same invented inputs"
+target/release/examples/catalogue_table "$CATALOGUE" >"$OUT/cosmology_rust.txt"
+"$BUILD/catalogue_table_c" "$CATALOGUE" >"$OUT/cosmology_c.txt"
+"$BUILD/catalogue_table_f" "$CATALOGUE" >"$OUT/cosmology_fortran.txt"
+"$PY" examples/python/catalogue_table.py "$CATALOGUE" >"$OUT/cosmology_python.txt"
+for lang in rust c fortran python; do
+  echo "   $lang: $(grep -c ' = ' "$OUT/cosmology_$lang.txt") quantities -> $OUT/cosmology_$lang.txt"
+done
+echo
+
+cat <<'EOF'
+== what the quantities are (the demo universe: flat, H0 = 70, Omega_m = 0.3, radiation, one
+   0.06 eV neutrino -- a round-number model for the demo, not a published fit)
+   universe_*            Hubble distance and time, Omega_radiation and Omega_dark_energy today,
+                         matter-radiation equality redshift, age today
+   redshift_N_*          at each table redshift: comoving, luminosity and angular-diameter
+                         distances (Mpc), distance modulus, kpc per arcsec, comoving volume
+                         (Gpc^3), lookback time and age (Gyr)
+   age_N_*               the redshift at which the universe had the given age
+
+EOF
+echo "== the four languages side by side"
+"$PY" examples/python/compare_outputs.py \
+  Rust="$OUT/cosmology_rust.txt" C="$OUT/cosmology_c.txt" Fortran="$OUT/cosmology_fortran.txt" \
+  Python="$OUT/cosmology_python.txt"
+echo
+
+echo "== the INVENTED catalogue of 100,000 galaxies (Python), and its plot"
+"$PY" examples/python/catalogue_demo.py "$CATALOGUE" "$OUT"

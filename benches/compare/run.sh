@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # Side-by-side speed and accuracy of relicore against what a user would otherwise write
-# (a plain C loop with exp, a numpy expression), in one run on the same inputs.
+# (a plain C loop with exp, a numpy expression; for distances a cumulative-trapezoid grid with
+# numpy.interp and a scipy quad loop), in one run on the same inputs.
 # Run from the repository root after the Python package is built into .venv (`make bench`
 # does both). A benchmark, not a test: nothing asserts on speed.
 set -euo pipefail
@@ -20,3 +21,7 @@ echo "== benches/compare: compiling the C driver (-O3)"
 
 echo "== benches/compare: timing and accuracy"
 "$PY" benches/compare/compare.py --c-driver "$OUT/planck_c" --work-dir "$OUT" "$@"
+
+echo
+echo "== benches/compare: luminosity distances of a catalogue (cosmology)"
+"$PY" benches/compare/cosmology_compare.py
