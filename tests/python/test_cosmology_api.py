@@ -275,6 +275,9 @@ BAD_PARAMETERS = [
     (dict(h0_km_s_mpc=-70.0), "h0_km_s_mpc", "-70.0"),
     (dict(h0_km_s_mpc=math.nan), "h0_km_s_mpc", "nan"),
     (dict(h0_km_s_mpc=math.inf), "h0_km_s_mpc", "inf"),
+    # finite, but c/H0, 1/H0 or the critical density is not a finite positive double
+    (dict(h0_km_s_mpc=5e-324), "h0_km_s_mpc", "5e-324"),
+    (dict(h0_km_s_mpc=1e300), "h0_km_s_mpc", "1e+300"),
     (dict(omega_matter=-0.1), "omega_matter", "-0.1"),
     (dict(omega_matter=math.nan), "omega_matter", "nan"),
     (dict(omega_baryon=-0.01), "omega_baryon", "-0.01"),
@@ -282,6 +285,7 @@ BAD_PARAMETERS = [
     (dict(omega_curvature=math.inf), "omega_curvature", "inf"),
     (dict(cmb_temperature_k=-2.7), "cmb_temperature_k", "-2.7"),
     (dict(cmb_temperature_k=math.nan), "cmb_temperature_k", "nan"),
+    (dict(cmb_temperature_k=1e300), "cmb_temperature_k", "1e+300"),  # the radiation density overflows
     (dict(n_eff=-1.0), "n_eff", "-1.0"),
     (dict(neutrino_masses_ev=(0.1, -0.05, 0.0)), "neutrino_masses_ev", "(0.1, -0.05, 0.0)"),
     (dict(neutrino_masses_ev=(math.nan, 0.0, 0.0)), "neutrino_masses_ev", "(nan, 0.0, 0.0)"),

@@ -65,7 +65,15 @@ fn parameter_rule(p: &UniverseParameters<f64>, i: u8) -> String {
     };
     let masses = p.neutrino_masses_ev;
     match i {
-        0 => finite(p.h0_km_s_mpc).unwrap_or_else(|| "must be positive".into()),
+        0 => finite(p.h0_km_s_mpc).unwrap_or_else(|| {
+            if p.h0_km_s_mpc > 0.0 {
+                "so far from any physical value that c/H0, 1/H0 or the critical density is not a \
+                 finite positive number"
+                    .into()
+            } else {
+                "must be positive".into()
+            }
+        }),
         1 => finite(p.omega_matter).unwrap_or_else(|| "must not be negative".into()),
         2 => finite(p.omega_baryon).unwrap_or_else(|| {
             if p.omega_baryon < 0.0 {
@@ -74,8 +82,20 @@ fn parameter_rule(p: &UniverseParameters<f64>, i: u8) -> String {
                 format!("must not exceed omega_matter = {}", py_repr(p.omega_matter))
             }
         }),
-        4 => finite(p.cmb_temperature_k).unwrap_or_else(|| "must not be negative".into()),
-        5 => finite(p.n_eff).unwrap_or_else(|| "must not be negative".into()),
+        4 => finite(p.cmb_temperature_k).unwrap_or_else(|| {
+            if p.cmb_temperature_k < 0.0 {
+                "must not be negative".into()
+            } else {
+                "so large that the radiation density overflows".into()
+            }
+        }),
+        5 => finite(p.n_eff).unwrap_or_else(|| {
+            if p.n_eff < 0.0 {
+                "must not be negative".into()
+            } else {
+                "so large that the neutrino density overflows".into()
+            }
+        }),
         6 => {
             if masses.iter().any(|m| !m.is_finite()) {
                 "each mass must be finite".into()
