@@ -172,6 +172,13 @@ def test_bound_methods_pickle(full):
     assert fn(2.0) == full.luminosity_distance_mpc(2.0)
 
 
+def test_dask_token_follows_the_parameters(full):
+    tokenize = pytest.importorskip("dask.base").tokenize
+    assert tokenize(full) == tokenize(Universe(**full.parameters))
+    assert tokenize(full) != tokenize(Universe(67.0, 0.32))
+    assert tokenize(full.age_gyr) != tokenize(full.lookback_time_gyr)
+
+
 def test_copy_returns_the_same_immutable_value(full):
     assert copy.copy(full) is full and copy.deepcopy(full) is full
     assert copy.deepcopy([full])[0] == full

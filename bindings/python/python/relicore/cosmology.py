@@ -139,6 +139,10 @@ class Universe(_native.UniverseBase):
     def __copy__(self) -> Universe:
         return self
 
+    def __dask_tokenize__(self) -> tuple[str, tuple[tuple[str, Any], ...]]:
+        """dask's name for this value: equal parameters, equal token (no pickling needed)."""
+        return ("relicore.Universe", tuple(self.parameters.items()))
+
     def __deepcopy__(self, memo: dict[int, Any]) -> Universe:
         return self
 
