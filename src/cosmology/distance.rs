@@ -19,9 +19,10 @@ impl<T: Real> Universe<T> {
             return Ok(T::zero());
         }
         let r = (T::one() + z).sqrt();
-        let s = T::one() / r;
-        // 1 − s without cancellation
-        let one_minus_s = z / (r * (T::one() + r));
+        // s = 1/r and 1 − s = z/(r(1 + r)) (without cancellation) from one division
+        let inv = T::one() / (r * (T::one() + r));
+        let s = (T::one() + r) * inv;
+        let one_minus_s = z * inv;
         if s >= T::c(S_MIN) {
             if let Some(g) = self.table.eval(s) {
                 return Ok(one_minus_s * g);
