@@ -7,9 +7,9 @@ use crate::{Error, Real, Result};
 
 /// Finds x in [lo, hi] with f(x) = 0, where `f` returns (f(x), f'(x)).
 ///
-/// Requires f(lo) and f(hi) of opposite signs (or one of them zero). Stops when the step or
-/// the bracket is below `x_tol` (absolute) or f is exactly zero; returns `Error::NoConvergence` after
-/// `max_iter` iterations, or when the bracket is invalid.
+/// Requires finite lo and hi with f(lo) and f(hi) of opposite signs (or one of them zero).
+/// Stops when the step or the bracket is below `x_tol` (absolute) or f is exactly zero;
+/// returns `Error::NoConvergence` after `max_iter` iterations, or when the bracket is invalid.
 pub fn bracketed_newton<T: Real, F>(f: F, lo: T, hi: T, x_tol: T, max_iter: u32) -> Result<T>
 where
     F: FnMut(T) -> (T, T),
@@ -19,7 +19,13 @@ where
 
 /// As [`bracketed_newton`], with a relative tolerance: stops when the step or the bracket is
 /// below `rel_tol·|x|` (for roots that may lie anywhere from tiny to large values).
-pub fn bracketed_newton_relative<T: Real, F>(f: F, lo: T, hi: T, rel_tol: T, max_iter: u32) -> Result<T>
+pub fn bracketed_newton_relative<T: Real, F>(
+    f: F,
+    lo: T,
+    hi: T,
+    rel_tol: T,
+    max_iter: u32,
+) -> Result<T>
 where
     F: FnMut(T) -> (T, T),
 {
@@ -31,6 +37,10 @@ where
     F: FnMut(T) -> (T, T),
     G: Fn(T) -> T,
 {
+    if !lo.is_finite() || !hi.is_finite() {
+        // an infinite or NaN end is no bracket (the midpoint would be ±∞ or NaN)
+        return Err(Error::NoConvergence);
+    }
     let (flo, _) = f(lo);
     let (fhi, _) = f(hi);
     if flo.is_nan() || fhi.is_nan() {
@@ -48,10 +58,15 @@ where
     // orient so that f(a) < 0 < f(b)
     let (mut a, mut b) = if flo < T::zero() { (lo, hi) } else { (hi, lo) };
     let half = T::c(0.5);
-    let mut x = half * (lo + hi);
+    // halves before sums, so that a bracket near ±MAX gives a finite midpoint and step (the
+    // same bits otherwise: halving is exact)
+    let mut x = half * lo + half * hi;
     let mut dx_old = (hi - lo).abs();
     let mut dx = dx_old;
     let (mut fx, mut dfx) = f(x);
+    if fx == T::zero() {
+        return Ok(x);
+    }
     for _ in 0..max_iter {
         if fx.is_nan() {
             return Err(Error::NoConvergence);
@@ -65,7 +80,7 @@ where
             dx = fx / dfx;
             x = x - dx;
         } else {
-            dx = half * (b - a);
+            dx = half * b - half * a;
             x = a + dx;
         }
         if dx.abs() <= tol(x) {
