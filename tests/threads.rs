@@ -1,0 +1,292 @@
+//! No hidden global state (issue 5): every public function of every topic is called from
+//! several threads at once — each thread walking the same inputs in a different order, the
+//! cosmology threads sharing the same `Universe` values by reference — and every result must
+//! equal, bit for bit (or as the same error), the result of a serial run before the threads
+//! start. A cache, a lazily built table or any other shared mutable state that a call could
+//! see half-written, or that made a result depend on what ran before, would show as a
+//! difference.
+
+use relicore::blackbody as bb;
+use relicore::cosmology::{Universe, UniverseParameters};
+use relicore::{Error, Result};
+
+/// A result as comparable bits: the value's bit pattern, or the error.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+enum Outcome {
+    Value(u64),
+    Failed(Error),
+}
+
+fn outcome(r: Result<f64>) -> Outcome {
+    match r {
+        Ok(v) => Outcome::Value(v.to_bits()),
+        Err(e) => Outcome::Failed(e),
+    }
+}
+
+fn outcome32(r: Result<f32>) -> Outcome {
+    match r {
+        Ok(v) => Outcome::Value(u64::from(v.to_bits())),
+        Err(e) => Outcome::Failed(e),
+    }
+}
+
+/// Arguments: ordinary values of every scale, and a few invalid ones (errors must not depend
+/// on other threads either).
+const ARGS: [f64; 12] = [
+    1e-7,
+    3e-6,
+    1e-4,
+    0.01,
+    0.5,
+    2.7255,
+    300.0,
+    5800.0,
+    1e9,
+    1e12,
+    -1.0,
+    f64::NAN,
+];
+const REDSHIFTS: [f64; 10] = [0.0, 1e-4, 0.1, 0.5, 1.0, 3.0, 10.0, 1100.0, -1.0, f64::NAN];
+
+/// Every blackbody call on the argument grid, as (label, outcome) in a fixed order.
+fn blackbody_calls() -> Vec<Box<dyn Fn() -> Outcome + Send + Sync>> {
+    let mut calls: Vec<Box<dyn Fn() -> Outcome + Send + Sync>> = Vec::new();
+    type F2 = fn(f64, f64) -> Result<f64>;
+    type F1 = fn(f64) -> Result<f64>;
+    let two: [F2; 18] = [
+        bb::spectral_radiance_wavelength,
+        bb::spectral_radiance_frequency,
+        bb::spectral_radiance_wavenumber,
+        bb::photon_radiance_wavelength,
+        bb::photon_radiance_frequency,
+        bb::photon_radiance_wavenumber,
+        bb::radiance_temperature_derivative_wavelength,
+        bb::radiance_temperature_derivative_frequency,
+        bb::brightness_temperature_wavelength,
+        bb::brightness_temperature_frequency,
+        bb::rayleigh_jeans_temperature,
+        bb::thermodynamic_to_rayleigh_jeans_factor,
+        bb::kcmb_to_mjy_per_sr,
+        bb::thermal_sz_spectral_shape,
+        bb::thermal_sz_temperature_shape,
+        |a, b| bb::band_fraction_wavelength(a, a * 3.0, b),
+        |a, b| bb::band_radiance_frequency(a, a * 3.0, b),
+        |a, b| bb::ratio_temperature(a, a * 1.5, 0.8, b.abs().min(1.0)),
+    ];
+    let one: [F1; 12] = [
+        bb::radiant_exitance,
+        bb::photon_exitance,
+        bb::peak_wavelength,
+        bb::peak_frequency,
+        bb::peak_wavenumber,
+        bb::photon_peak_wavelength,
+        bb::photon_peak_frequency,
+        bb::temperature_from_peak_wavelength,
+        bb::temperature_from_peak_frequency,
+        bb::thermal_sz_null_frequency,
+        |t| bb::band_radiance_wavelength(1e-6, 2e-5, t),
+        |t| bb::band_photon_radiance_wavelength(0.0, 1e-5, t),
+    ];
+    for f in two {
+        for a in ARGS {
+            for b in ARGS {
+                calls.push(Box::new(move || outcome(f(a, b))));
+            }
+        }
+    }
+    for f in one {
+        for a in ARGS {
+            calls.push(Box::new(move || outcome(f(a))));
+        }
+    }
+    for l in ARGS {
+        calls.push(Box::new(move || {
+            outcome(bb::temperature_from_band_radiance_wavelength(1e-6, 2e-5, l))
+        }));
+        let w = [8e-6, 1e-5, 1.2e-5, 1.4e-5];
+        let r = [0.1, 0.9, 1.0, 0.2];
+        calls.push(Box::new(move || {
+            outcome(bb::response_weighted_radiance(&w, &r, l))
+        }));
+        calls.push(Box::new(move || {
+            outcome(bb::temperature_from_response_weighted_radiance(&w, &r, l))
+        }));
+        calls.push(Box::new(move || {
+            let c = bb::two_load_calibration(30e9, 2.0, 300.0, 1.0, 77.0);
+            outcome(c.and_then(|c| bb::calibrated_temperature(&c, l)))
+        }));
+        calls.push(Box::new(move || {
+            let c = bb::two_load_calibration(30e9, 2.0, 300.0, 1.0, 77.0);
+            outcome(c.and_then(|c| bb::calibrated_brightness_temperature(&c, l)))
+        }));
+        // the f32 instantiations the C ABI exports (firmware twins)
+        let x = l as f32;
+        calls.push(Box::new(move || {
+            outcome32(bb::spectral_radiance_wavelength(x, 300.0f32))
+        }));
+        calls.push(Box::new(move || {
+            outcome32(bb::spectral_radiance_frequency(x * 1e14, 300.0f32))
+        }));
+        calls.push(Box::new(move || {
+            outcome32(bb::spectral_radiance_wavenumber(x * 1e8, 300.0f32))
+        }));
+        calls.push(Box::new(move || {
+            outcome32(bb::band_radiance_wavelength(1e-6f32, 2e-5, x * 1e3))
+        }));
+        calls.push(Box::new(move || {
+            outcome32(bb::brightness_temperature_wavelength(1e-5f32, x))
+        }));
+        calls.push(Box::new(move || {
+            outcome32(bb::brightness_temperature_frequency(1e11f32, x * 1e-15))
+        }));
+    }
+    calls
+}
+
+fn universes() -> Vec<Universe<f64>> {
+    let mut out = Vec::new();
+    for (om, ok, t0, m) in [
+        (0.3, 0.0, 2.7255, 0.0),
+        (0.315, 0.0, 2.7255, 0.06),
+        (0.3, 0.1, 2.7255, 0.0),
+        (1.0, 0.0, 0.0, 0.0),
+        (0.3, -0.05, 2.7255, 0.0),
+    ] {
+        let mut p = UniverseParameters::new(67.7, om);
+        p.omega_curvature = ok;
+        p.cmb_temperature_k = t0;
+        p.neutrino_masses_ev = [m, 0.0, 0.0];
+        p.w0 = -0.95;
+        p.wa = 0.1;
+        out.push(Universe::new(p).unwrap_or_else(|e| panic!("{e}")));
+    }
+    out
+}
+
+/// Every method of universe `i` at every redshift grid point, in a fixed order.
+fn cosmology_calls<'a>(
+    us: &'a [Universe<f64>],
+) -> Vec<Box<dyn Fn() -> Outcome + Send + Sync + 'a>> {
+    let mut calls: Vec<Box<dyn Fn() -> Outcome + Send + Sync + 'a>> = Vec::new();
+    type M = fn(&Universe<f64>, f64) -> Result<f64>;
+    let methods: [M; 24] = [
+        Universe::dimensionless_hubble,
+        Universe::hubble_parameter_km_s_mpc,
+        Universe::omega_matter_at,
+        Universe::omega_radiation_at,
+        Universe::omega_dark_energy_at,
+        Universe::omega_curvature_at,
+        Universe::critical_density_kg_m3,
+        Universe::cmb_temperature_at_k,
+        Universe::comoving_distance_mpc,
+        Universe::transverse_comoving_distance_mpc,
+        Universe::angular_diameter_distance_mpc,
+        Universe::luminosity_distance_mpc,
+        Universe::distance_modulus,
+        Universe::comoving_volume_gpc3,
+        Universe::differential_comoving_volume_mpc3_sr,
+        Universe::transverse_scale_kpc_per_arcsec,
+        Universe::lookback_time_gyr,
+        Universe::age_gyr,
+        Universe::conformal_time_mpc,
+        |u, z| u.angular_diameter_distance_between_mpc(z * 0.5, z),
+        |u, z| u.redshift_at_age_gyr(u.hubble_time_gyr() / (1.0 + z)),
+        |u, z| u.redshift_at_lookback_time_gyr(z),
+        |u, z| u.redshift_at_comoving_distance_mpc(z * 1000.0),
+        |u, z| u.redshift_at_luminosity_distance_mpc(z * 1000.0),
+    ];
+    for u in us {
+        for m in methods {
+            for z in REDSHIFTS {
+                calls.push(Box::new(move || outcome(m(u, z))));
+            }
+        }
+        calls.push(Box::new(move || {
+            outcome(u.matter_radiation_equality_redshift())
+        }));
+        calls.push(Box::new(move || outcome(Ok(u.hubble_distance_mpc()))));
+        calls.push(Box::new(move || outcome(Ok(u.hubble_time_gyr()))));
+        calls.push(Box::new(move || outcome(Ok(u.omega_radiation()))));
+        calls.push(Box::new(move || outcome(Ok(u.omega_dark_energy()))));
+    }
+    calls
+}
+
+const THREADS: usize = 6;
+
+/// Runs `calls` serially, then from THREADS threads at once, thread k starting at a different
+/// offset and walking backwards when k is odd, and compares every result with the serial one.
+fn compare_threads(what: &str, calls: &[Box<dyn Fn() -> Outcome + Send + Sync + '_>]) {
+    let serial: Vec<Outcome> = calls.iter().map(|c| c()).collect();
+    let n = calls.len();
+    let results: Vec<Vec<Outcome>> = std::thread::scope(|s| {
+        let handles: Vec<_> = (0..THREADS)
+            .map(|k| {
+                s.spawn(move || {
+                    let mut got = vec![Outcome::Value(0); n];
+                    for step in 0..n {
+                        let i = if k % 2 == 0 {
+                            (step + k * n / THREADS) % n
+                        } else {
+                            (n - 1 - step + k * n / THREADS) % n
+                        };
+                        got[i] = calls[i]();
+                    }
+                    got
+                })
+            })
+            .collect();
+        handles
+            .into_iter()
+            .map(|h| h.join().unwrap_or_else(|_| panic!("a thread panicked")))
+            .collect()
+    });
+    let mut differences = 0;
+    for (k, got) in results.iter().enumerate() {
+        for (i, (g, w)) in got.iter().zip(&serial).enumerate() {
+            if g != w {
+                differences += 1;
+                eprintln!("{what}: call {i} in thread {k}: {g:?}, serially {w:?}");
+            }
+        }
+    }
+    assert_eq!(
+        differences, 0,
+        "{what}: results differ between threads and the serial run"
+    );
+    eprintln!(
+        "{what}: {n} calls, serially and in {THREADS} concurrent threads ({} calls), all identical",
+        n * THREADS
+    );
+}
+
+#[test]
+fn blackbody_from_many_threads_equals_serial() {
+    compare_threads("blackbody", &blackbody_calls());
+}
+
+#[test]
+fn cosmology_from_many_threads_equals_serial() {
+    let us = universes();
+    compare_threads("cosmology", &cosmology_calls(&us));
+}
+
+/// Universes built concurrently are identical to one built alone (construction keeps no state
+/// either).
+#[test]
+fn universes_built_concurrently_are_identical() {
+    let serial = universes();
+    let built: Vec<Vec<Universe<f64>>> = std::thread::scope(|s| {
+        let hs: Vec<_> = (0..THREADS).map(|_| s.spawn(universes)).collect();
+        hs.into_iter()
+            .map(|h| h.join().unwrap_or_else(|_| panic!("a thread panicked")))
+            .collect()
+    });
+    for b in built {
+        assert!(
+            b == serial,
+            "a universe built in a thread differs from the serial one"
+        );
+    }
+}
