@@ -1,6 +1,7 @@
 //! Criterion benches of the blackbody core: spectral radiance (scalar and array, f32 and f64),
-//! band radiance, brightness temperature and the other inversions. Speed targets live here and
-//! in `benches/compare/`, never in timed tests.
+//! band radiance, brightness temperature and the other inversions, and the exponential kernel
+//! under the Planck function (`math::exp`, beside the `libm` functions it replaced). Speed
+//! targets live here and in `benches/compare/`, never in timed tests.
 
 use criterion::{Criterion, criterion_group, criterion_main};
 use relicore::blackbody as bb;
@@ -49,6 +50,69 @@ fn spectral(c: &mut Criterion) {
     g.bench_function("temperature_derivative_wavelength_f64", |b| {
         b.iter(|| {
             bb::radiance_temperature_derivative_wavelength(black_box(10e-6), black_box(300.0f64))
+        })
+    });
+    g.finish();
+}
+
+/// The exponential kernel on the Planck exponents of the array bench (x = 0.048 … 48), with
+/// the `libm` expm1/exp the Planck function called before, as a reference point.
+fn exp_kernel(c: &mut Criterion) {
+    use relicore::math::exp;
+    let mut g = c.benchmark_group("exp_kernel");
+    let xs: Vec<f64> = wavelengths64(1000)
+        .iter()
+        .map(|l| 1.438_776_877_503_933_9e-2 / (l * 1500.0))
+        .collect();
+    let xs32: Vec<f32> = xs.iter().map(|&x| x as f32).collect();
+    let mut out = vec![0.0f64; xs.len()];
+    let mut out32 = vec![0.0f32; xs.len()];
+    g.bench_function("exp_m1_dd_f64_array_1000", |b| {
+        b.iter(|| {
+            for (o, &x) in out.iter_mut().zip(black_box(&xs)) {
+                *o = exp::exp_m1_dd(x, 1e-17 * x);
+            }
+            black_box(&out);
+        })
+    });
+    g.bench_function("libm_expm1_f64_array_1000", |b| {
+        b.iter(|| {
+            for (o, &x) in out.iter_mut().zip(black_box(&xs)) {
+                *o = libm::expm1(x);
+            }
+            black_box(&out);
+        })
+    });
+    g.bench_function("exp_dd_f64_array_1000", |b| {
+        b.iter(|| {
+            for (o, &x) in out.iter_mut().zip(black_box(&xs)) {
+                *o = exp::exp_dd(x, 1e-17 * x);
+            }
+            black_box(&out);
+        })
+    });
+    g.bench_function("libm_exp_f64_array_1000", |b| {
+        b.iter(|| {
+            for (o, &x) in out.iter_mut().zip(black_box(&xs)) {
+                *o = libm::exp(x);
+            }
+            black_box(&out);
+        })
+    });
+    g.bench_function("exp_m1_dd_f32_array_1000", |b| {
+        b.iter(|| {
+            for (o, &x) in out32.iter_mut().zip(black_box(&xs32)) {
+                *o = exp::exp_m1_dd(x, 0.0);
+            }
+            black_box(&out32);
+        })
+    });
+    g.bench_function("libm_expm1f_f32_array_1000", |b| {
+        b.iter(|| {
+            for (o, &x) in out32.iter_mut().zip(black_box(&xs32)) {
+                *o = libm::expm1f(x);
+            }
+            black_box(&out32);
         })
     });
     g.finish();
@@ -202,5 +266,11 @@ fn every_other_function(c: &mut Criterion) {
     g.finish();
 }
 
-criterion_group!(benches, spectral, band_and_inverse, every_other_function);
+criterion_group!(
+    benches,
+    spectral,
+    exp_kernel,
+    band_and_inverse,
+    every_other_function
+);
 criterion_main!(benches);

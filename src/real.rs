@@ -64,11 +64,35 @@ pub trait Real:
     /// compiles to a call of the platform `fmod`; that call drags the unwinding runtime, and
     /// with it `malloc`, into a static C link. This one is `libm`'s.)
     fn floor_libm(self) -> Self;
+
+    /// 2^(j/256) for j = 0, …, 255 as double-length pairs `[hi, lo]` (about 106 bits in `f64`,
+    /// 48 in `f32`): the table of the exponential kernel [`crate::math::exp`].
+    const EXP2_TABLE: &'static [[Self; 2]; 256];
+    /// ln2/256 = L1 + L2 + L3, the split constant of the argument reduction of
+    /// [`crate::math::exp`]: k·L1 (and in `f32` also k·L2) is exact for every k the kernel uses.
+    const LN2_OVER_256: [Self; 3];
+    /// Smallest exponent m of a normal number 2^m (−1022 or −126).
+    const MIN_NORMAL_EXPONENT: i32;
+    /// Largest exponent m of a finite number 2^m (1023 or 127).
+    const MAX_EXPONENT: i32;
+    /// x rounded to the nearest integer (ties to even), as a float and as an `i32`, by adding
+    /// and subtracting 1.5·2^(p−1) (p = [`Real::MANTISSA_DIGITS`]); valid for |x| < 2^(p−2).
+    /// No library call, no branch.
+    fn round_to_i32(self) -> (Self, i32);
+    /// 2^m exactly, assembled from its bits, for m in
+    /// [`Real::MIN_NORMAL_EXPONENT`, `Real::MAX_EXPONENT`]; another m gives an unspecified
+    /// value (never a panic).
+    fn pow2i(m: i32) -> Self;
+    /// x with the low ⌈p/2⌉ bits of its significand cleared (26 significant bits are left in
+    /// `f64`, 12 in `f32`): the high part of the splitting x = hi + (x − hi), both parts exact,
+    /// by one bit mask (no multiplication, no overflow, valid for subnormal x too).
+    fn split_high(self) -> Self;
 }
 
 macro_rules! impl_real {
     ($t:ty, $digits:expr, $split:expr, $lnmax:expr, $lnmin:expr,
-     $exp:path, $expm1:path, $log:path, $log1p:path, $sqrt:path, $cbrt:path, $sinh:path, $tanh:path, $floor:path, $cosh:path, $sin:path, $cos:path) => {
+     $exp:path, $expm1:path, $log:path, $log1p:path, $sqrt:path, $cbrt:path, $sinh:path, $tanh:path, $floor:path, $cosh:path, $sin:path, $cos:path,
+     $table:expr, $ln2n:expr, $emin:expr, $emax:expr, $shift:expr, $bits:ty) => {
         impl Real for $t {
             const MANTISSA_DIGITS: u32 = $digits;
             const SPLITTER: Self = $split;
@@ -136,6 +160,27 @@ macro_rules! impl_real {
             fn cos(self) -> Self {
                 $cos(self)
             }
+            const EXP2_TABLE: &'static [[Self; 2]; 256] = &$table;
+            const LN2_OVER_256: [Self; 3] = $ln2n;
+            const MIN_NORMAL_EXPONENT: i32 = $emin;
+            const MAX_EXPONENT: i32 = $emax;
+            #[inline(always)]
+            fn round_to_i32(self) -> (Self, i32) {
+                let shift: $t = $shift;
+                let t = self + shift;
+                // t = shift + k with shift's exponent: the low bits of t are k (two's complement)
+                (t - shift, t.to_bits().wrapping_sub(shift.to_bits()) as i32)
+            }
+            #[inline(always)]
+            fn pow2i(m: i32) -> Self {
+                let biased = (m as $bits).wrapping_add($emax as $bits);
+                <$t>::from_bits(biased.wrapping_shl($digits - 1))
+            }
+            #[inline(always)]
+            fn split_high(self) -> Self {
+                let low: $bits = (1 << (($digits + 1) / 2)) - 1;
+                <$t>::from_bits(self.to_bits() & !low)
+            }
         }
     };
 }
@@ -157,7 +202,13 @@ impl_real!(
     libm::floor,
     libm::cosh,
     libm::sin,
-    libm::cos
+    libm::cos,
+    crate::math::exp::EXP2_TABLE_F64,
+    crate::math::exp::LN2_OVER_256_F64,
+    -1022,
+    1023,
+    6_755_399_441_055_744.0, // 1.5·2^52
+    u64
 );
 impl_real!(
     f32,
@@ -176,5 +227,11 @@ impl_real!(
     libm::floorf,
     libm::coshf,
     libm::sinf,
-    libm::cosf
+    libm::cosf,
+    crate::math::exp::EXP2_TABLE_F32,
+    crate::math::exp::LN2_OVER_256_F32,
+    -126,
+    127,
+    12_582_912.0, // 1.5·2^23
+    u32
 );

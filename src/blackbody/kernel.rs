@@ -2,7 +2,7 @@
 
 use crate::Real;
 use crate::constants as k;
-use crate::math::dd;
+use crate::math::{dd, exp};
 
 /// 2^-55: exact scaling that keeps ν³-type products inside the `f32` range.
 pub(crate) const SCALE_55: f64 = 2.775_557_561_562_891_4e-17;
@@ -24,36 +24,85 @@ pub(crate) const TWO_ZETA3: f64 = 2.404_113_806_319_188_5;
 const LN2_HI: f64 = core::f64::consts::LN_2;
 const LN2_LO: f64 = 2.319_046_813_846_299_6e-17;
 
-/// x = c₂/(λT) as a double-length pair.
+/// x = c₂/(λT) as an unnormalized double-length pair: xh is the rounded quotient c₂/fl(λT) and
+/// |xl| is up to about two ulp of xh (the form [`planck_quotient`] consumes directly).
+#[inline(always)]
+pub(crate) fn x_wavelength_pair<T: Real>(wavelength: T, temperature: T) -> (T, T) {
+    let (ch, cl) = T::c2(k::SECOND_RADIATION, k::SECOND_RADIATION_LO);
+    let (ph, pl) = dd::two_prod_masked(wavelength, temperature);
+    let q = ch / ph;
+    // residual c₂ − q·λT to double length (q·ph to 2^-103); the correction residual/(λT) needs
+    // only a few correct bits, and 1/(λT) = q/c₂ to an ulp: a product, not a second division
+    let (e1, e2) = dd::two_prod_masked(q, ph);
+    let r = ((ch - e1) - e2) + (cl - q * pl);
+    (q, r * (q * T::c(1.0 / k::SECOND_RADIATION)))
+}
+
+/// x = c₂/(λT) as a double-length pair, normalized (|xl| ≤ ulp(xh)/2).
 #[inline(always)]
 pub(crate) fn x_wavelength<T: Real>(wavelength: T, temperature: T) -> (T, T) {
-    let (ch, cl) = T::c2(k::SECOND_RADIATION, k::SECOND_RADIATION_LO);
-    let (ph, pl) = dd::two_prod(wavelength, temperature);
-    dd::div_dd_dd(ch, cl, ph, pl)
+    let (h, l) = x_wavelength_pair(wavelength, temperature);
+    dd::fast_two_sum(h, l)
 }
 
-/// x = (h/k)·ν/T as a double-length pair.
+/// c·(a/t) for a double-length constant c = ch + cl and a, t > 0, as an unnormalized
+/// double-length pair (|lo| up to about two ulp of hi). One division, by t alone (a loop over a
+/// at one t needs it once): a/t = q + ql with q = a·(1/t) and ql = (a − q·t)·(1/t), the
+/// residual a − q·t exact to 2^-103.
+#[inline(always)]
+fn constant_times_quotient<T: Real>(ch: T, cl: T, a: T, t: T) -> (T, T) {
+    let inv = T::one() / t;
+    if !(inv <= T::max_value()) {
+        // t below 1/MAX (a subnormal temperature): 1/t overflows, divide directly
+        return constant_times_quotient_by_division(ch, cl, a, t);
+    }
+    let q = a * inv;
+    let (e1, e2) = dd::two_prod_masked(q, t);
+    let ql = ((a - e1) - e2) * inv;
+    let (xh, e) = dd::two_prod_masked(q, ch);
+    (xh, e + (ch * ql + cl * q))
+}
+
+#[cold]
+#[inline(never)]
+fn constant_times_quotient_by_division<T: Real>(ch: T, cl: T, a: T, t: T) -> (T, T) {
+    let q = a / t;
+    if !q.is_finite() {
+        // a/t overflows: x = +∞ (the far Wien limit), with no NaN from the splitting
+        return (q * ch, T::zero());
+    }
+    let (qh, ql) = dd::div_d_d(a, t);
+    dd::mul_dd_dd(ch, cl, qh, ql)
+}
+
+/// x = (h/k)·ν/T as an unnormalized double-length pair (|xl| up to about two ulp of xh).
+#[inline(always)]
+pub(crate) fn x_frequency_pair<T: Real>(frequency: T, temperature: T) -> (T, T) {
+    let (hh, hl) = T::c2(k::PLANCK_OVER_BOLTZMANN, k::PLANCK_OVER_BOLTZMANN_LO);
+    constant_times_quotient(hh, hl, frequency, temperature)
+}
+
+/// x = (h/k)·ν/T as a double-length pair, normalized (|xl| ≤ ulp(xh)/2).
 #[inline(always)]
 pub(crate) fn x_frequency<T: Real>(frequency: T, temperature: T) -> (T, T) {
-    let (hh, hl) = T::c2(k::PLANCK_OVER_BOLTZMANN, k::PLANCK_OVER_BOLTZMANN_LO);
-    let (qh, ql) = dd::div_d_d(frequency, temperature);
-    dd::mul_dd_dd(hh, hl, qh, ql)
+    let (h, l) = x_frequency_pair(frequency, temperature);
+    dd::fast_two_sum(h, l)
 }
 
-/// x = c₂·ṽ/T as a double-length pair.
+/// x = c₂·ṽ/T as an unnormalized double-length pair (|xl| up to about two ulp of xh).
 #[inline(always)]
-pub(crate) fn x_wavenumber<T: Real>(wavenumber: T, temperature: T) -> (T, T) {
+pub(crate) fn x_wavenumber_pair<T: Real>(wavenumber: T, temperature: T) -> (T, T) {
     let (ch, cl) = T::c2(k::SECOND_RADIATION, k::SECOND_RADIATION_LO);
-    let (qh, ql) = dd::div_d_d(wavenumber, temperature);
-    dd::mul_dd_dd(ch, cl, qh, ql)
+    constant_times_quotient(ch, cl, wavenumber, temperature)
 }
 
 /// e^−(xh+xl)·p computed without overflow or premature underflow, for xh ≥ 0.
 ///
 /// Splits x = (x − m ln 2) + m ln 2 with the reduced exponent kept to double length, so the
-/// only inexact step is one `exp` of an exactly known argument; the 2^−m scaling is exact
-/// until the result itself becomes subnormal.
-#[inline]
+/// only inexact step is one [`exp::exp_dd`] of that double-length argument; the 2^−m scaling is
+/// exact until the result itself becomes subnormal.
+#[cold]
+#[inline(never)]
 pub(crate) fn scaled_exp_neg<T: Real>(p: T, xh: T, xl: T) -> T {
     if xh > T::LN_MAX + T::LN_MIN_SUBNORMAL_NEG + T::one() {
         // p ≤ largest float = e^LN_MAX, so p·e^−x is below the smallest subnormal.
@@ -61,7 +110,7 @@ pub(crate) fn scaled_exp_neg<T: Real>(p: T, xh: T, xl: T) -> T {
     }
     let half_range = T::c(0.5) * T::LN_MAX;
     if xh <= half_range {
-        return p * (-xh).exp() * (T::one() - xl);
+        return p * exp::exp_dd(-xh, -xl);
     }
     let (lh, ll) = T::c2(LN2_HI, LN2_LO);
     // m chosen so that x − m ln2 ≈ half_range: e^−reduced is a normal number.
@@ -69,7 +118,7 @@ pub(crate) fn scaled_exp_neg<T: Real>(p: T, xh: T, xl: T) -> T {
     let (ph, pl) = dd::two_prod(m, lh);
     let (sh, sl) = dd::two_sum(xh, -ph);
     let rl = ((sl - pl) - m * ll) + xl;
-    let mut r = p * (-sh).exp() * (T::one() - rl);
+    let mut r = p * exp::exp_dd(-sh, -rl);
     // multiply by 2^−m in exact power-of-two chunks
     let chunk = T::c(8.673_617_379_884_035e-19); // 2^-60
     let mut left = m;
@@ -88,23 +137,42 @@ pub(crate) fn scaled_exp_neg<T: Real>(p: T, xh: T, xl: T) -> T {
 
 /// p / (e^x − 1) for x = xh + xl ≥ 0 given to double length: the Planck occupation factor
 /// times a prefactor, accurate from x ≈ 1e-10 (Rayleigh-Jeans) to the far Wien tail.
-#[inline]
+#[inline(always)]
 pub(crate) fn planck_quotient<T: Real>(p: T, xh: T, xl: T) -> T {
     if xh < T::LN_MAX - T::one() {
-        let em = xh.exp_m1();
-        // expm1(xh + xl) ≈ expm1(xh) + e^xh·xl (xl ≤ ulp(xh)/2)
-        let d = em + (em + T::one()) * xl;
-        p / d
+        // e^x − 1 of the double-length x ≥ 0, rounded once (Tang's table-driven kernel)
+        p / exp::exp_m1_nonnegative_in_range(xh, xl)
     } else {
         // e^x − 1 = e^x (1 − e^−x), and e^−x < 1e-300 here: the correction is below an ulp.
         scaled_exp_neg(p, xh, xl)
     }
 }
 
+/// num / (den·(e^x − 1)) for x = xh + xl ≥ 0 and den > 0: [`planck_quotient`] of num/den with
+/// one division instead of two (divisions are the slowest operations of the Planck function).
+/// Same number of roundings; whenever den·(e^x − 1) is not a normal number (the far Wien tail,
+/// or extreme arguments) it is computed as `planck_quotient(num / den, xh, xl)`.
+#[inline(always)]
+pub(crate) fn planck_ratio<T: Real>(num: T, den: T, xh: T, xl: T) -> T {
+    if xh < T::LN_MAX - T::one() {
+        let d = den * exp::exp_m1_nonnegative_in_range(xh, xl);
+        if d >= T::min_positive_value() && d <= T::max_value() {
+            return num / d;
+        }
+    }
+    planck_ratio_outside(num, den, xh, xl)
+}
+
+#[cold]
+#[inline(never)]
+fn planck_ratio_outside<T: Real>(num: T, den: T, xh: T, xl: T) -> T {
+    planck_quotient(num / den, xh, xl)
+}
+
 /// −expm1(−x) = 1 − e^−x, for the Planck derivative x eˣ/(eˣ − 1) = x / (1 − e^−x).
 #[inline(always)]
 pub(crate) fn one_minus_exp_neg<T: Real>(x: T) -> T {
-    -((-x).exp_m1())
+    -exp::exp_m1(-x)
 }
 
 /// λ⁵ by products (three roundings).

@@ -12,8 +12,8 @@
 //! returned as the correctly scaled subnormal or 0, never as garbage.
 
 use super::kernel::{
-    TWO_C, TWO_OVER_C2, one_minus_exp_neg, planck_quotient, pow5, two_h_nu3_over_c2, x_frequency,
-    x_wavelength, x_wavenumber,
+    TWO_C, TWO_OVER_C2, one_minus_exp_neg, planck_quotient, planck_ratio, pow5, two_h_nu3_over_c2,
+    x_frequency, x_frequency_pair, x_wavelength, x_wavelength_pair, x_wavenumber_pair,
 };
 use crate::check::{finite_result, positive};
 use crate::constants as k;
@@ -37,9 +37,8 @@ pub fn spectral_radiance_wavelength<T: Real>(wavelength_m: T, temperature_k: T) 
 
 #[inline(always)]
 pub(crate) fn spectral_radiance_wavelength_unchecked<T: Real>(l: T, t: T) -> T {
-    let (xh, xl) = x_wavelength(l, t);
-    let p = T::c(k::FIRST_RADIATION_RADIANCE) / pow5(l);
-    planck_quotient(p, xh, xl)
+    let (xh, xl) = x_wavelength_pair(l, t);
+    planck_ratio(T::c(k::FIRST_RADIATION_RADIANCE), pow5(l), xh, xl)
 }
 
 /// Planck spectral radiance per unit frequency, B_ν = (2hν³/c²) / (e^(hν/kT) − 1).
@@ -57,7 +56,7 @@ pub fn spectral_radiance_frequency<T: Real>(frequency_hz: T, temperature_k: T) -
 
 #[inline(always)]
 pub(crate) fn spectral_radiance_frequency_unchecked<T: Real>(nu: T, t: T) -> T {
-    let (xh, xl) = x_frequency(nu, t);
+    let (xh, xl) = x_frequency_pair(nu, t);
     planck_quotient(two_h_nu3_over_c2(nu), xh, xl)
 }
 
@@ -71,7 +70,7 @@ pub(crate) fn spectral_radiance_frequency_unchecked<T: Real>(nu: T, t: T) -> T {
 pub fn spectral_radiance_wavenumber<T: Real>(wavenumber_per_m: T, temperature_k: T) -> Result<T> {
     let v = positive(wavenumber_per_m, 0)?;
     let t = positive(temperature_k, 1)?;
-    let (xh, xl) = x_wavenumber(v, t);
+    let (xh, xl) = x_wavenumber_pair(v, t);
     let p = ((T::c(k::FIRST_RADIATION_RADIANCE) * v) * v) * v;
     finite_result(planck_quotient(p, xh, xl), 0)
 }
@@ -85,10 +84,9 @@ pub fn spectral_radiance_wavenumber<T: Real>(wavenumber_per_m: T, temperature_k:
 pub fn photon_radiance_wavelength<T: Real>(wavelength_m: T, temperature_k: T) -> Result<T> {
     let l = positive(wavelength_m, 0)?;
     let t = positive(temperature_k, 1)?;
-    let (xh, xl) = x_wavelength(l, t);
+    let (xh, xl) = x_wavelength_pair(l, t);
     let l2 = l * l;
-    let p = T::c(TWO_C) / (l2 * l2);
-    finite_result(planck_quotient(p, xh, xl), 0)
+    finite_result(planck_ratio(T::c(TWO_C), l2 * l2, xh, xl), 0)
 }
 
 /// Photon spectral radiance per unit frequency, N_ν = B_ν/(hν) = (2ν²/c²) / (e^(hν/kT) − 1).
@@ -100,7 +98,7 @@ pub fn photon_radiance_wavelength<T: Real>(wavelength_m: T, temperature_k: T) ->
 pub fn photon_radiance_frequency<T: Real>(frequency_hz: T, temperature_k: T) -> Result<T> {
     let nu = positive(frequency_hz, 0)?;
     let t = positive(temperature_k, 1)?;
-    let (xh, xl) = x_frequency(nu, t);
+    let (xh, xl) = x_frequency_pair(nu, t);
     let p = (T::c(TWO_OVER_C2) * nu) * nu;
     finite_result(planck_quotient(p, xh, xl), 0)
 }
@@ -114,7 +112,7 @@ pub fn photon_radiance_frequency<T: Real>(frequency_hz: T, temperature_k: T) -> 
 pub fn photon_radiance_wavenumber<T: Real>(wavenumber_per_m: T, temperature_k: T) -> Result<T> {
     let v = positive(wavenumber_per_m, 0)?;
     let t = positive(temperature_k, 1)?;
-    let (xh, xl) = x_wavenumber(v, t);
+    let (xh, xl) = x_wavenumber_pair(v, t);
     let p = (T::c(TWO_C) * v) * v;
     finite_result(planck_quotient(p, xh, xl), 0)
 }
