@@ -8,7 +8,12 @@
 #   4. a firmware-style program (tests/c/nomalloc.c) linked statically with --gc-sections:
 #      its undefined symbols must include no allocation function;
 #   5. the test linked against librelicore.so (with an rpath), and its --dump output compared
-#      bit for bit with the static build's.
+#      bit for bit with the static build's;
+#   6. the hostile-input harness tests/c/hostile_abi.c (issue 5): every exported function at
+#      least 100000 times with random and edge-case arguments, NULL pointers, zero and
+#      mismatched lengths, forged and unproduced structs, under AddressSanitizer +
+#      UndefinedBehaviorSanitizer (HOSTILE_CALLS overrides the count), and 1000 times per
+#      function under valgrind memcheck.
 # Run from anywhere; works in the repository root. Ends with "N passed, M failed" (steps).
 set -euo pipefail
 
@@ -28,11 +33,12 @@ step() { # step NAME COMMAND...: runs a step, counts it, never stops the script
     local name=$1
     shift
     echo "=== $name"
+    local start=$SECONDS
     if "$@"; then
-        echo "--- ok: $name"
+        echo "--- ok: $name ($((SECONDS - start)) s)"
         passed=$((passed + 1))
     else
-        echo "--- FAILED: $name"
+        echo "--- FAILED: $name ($((SECONDS - start)) s)"
         failed=$((failed + 1))
     fi
 }
@@ -134,6 +140,42 @@ for t in "${TESTS[@]}"; do
     step "$t under valgrind memcheck" run_valgrind "$t"
 done
 step "firmware-style program needs no malloc/calloc/realloc/free" check_nomalloc
+
+HOSTILE_CALLS=${HOSTILE_CALLS:-100000}
+run_hostile_sanitized() {
+    "$CC" "${CFLAGS[@]}" -O1 -g -fsanitize=address,undefined -fno-omit-frame-pointer \
+        -fno-sanitize-recover=undefined tests/c/hostile_abi.c "$LIBDIR/librelicore.a" -lm \
+        -o "$BUILD/hostile_abi_asan" || return 1
+    ASAN_OPTIONS=detect_leaks=1:abort_on_error=0 \
+        UBSAN_OPTIONS=halt_on_error=1:print_stacktrace=1 \
+        "$BUILD/hostile_abi_asan" --calls "$HOSTILE_CALLS" >"$BUILD/hostile_abi_asan.log" 2>&1
+    local status=$?
+    grep -E '^(FAIL|statuses over all calls|hostile:)' "$BUILD/hostile_abi_asan.log" | head -n 60
+    [[ $status -eq 0 ]] || { tail -n 40 "$BUILD/hostile_abi_asan.log"; return 1; }
+    echo "per-function status counts: $BUILD/hostile_abi_asan.log"
+}
+run_hostile_plain() { # without a sanitizer runtime: the plain build, all calls
+    "$CC" "${CFLAGS[@]}" -O2 -g tests/c/hostile_abi.c "$LIBDIR/librelicore.a" -lm \
+        -Wl,--gc-sections -o "$BUILD/hostile_abi" || return 1
+    "$BUILD/hostile_abi" --calls "$HOSTILE_CALLS" >"$BUILD/hostile_abi.log" 2>&1 \
+        || { grep -E '^FAIL' "$BUILD/hostile_abi.log" | head -n 40; return 1; }
+    grep -E '^(statuses over all calls|hostile:)' "$BUILD/hostile_abi.log"
+}
+run_hostile_valgrind() { # memcheck reports reads of uninitialised memory: no such struct here
+    "$CC" "${CFLAGS[@]}" -O2 -g tests/c/hostile_abi.c "$LIBDIR/librelicore.a" -lm \
+        -Wl,--gc-sections -o "$BUILD/hostile_abi" || return 1
+    valgrind --quiet --error-exitcode=1 --leak-check=full "$BUILD/hostile_abi" --calls 1000 \
+        --no-uninit >"$BUILD/hostile_abi_valgrind.log" 2>&1 \
+        || { grep -vE '^relicore_' "$BUILD/hostile_abi_valgrind.log" | head -n 60; return 1; }
+    grep -E '^hostile:' "$BUILD/hostile_abi_valgrind.log"
+}
+if sanitizer_available; then
+    step "hostile inputs to every export under ASan + UBSan ($HOSTILE_CALLS calls each)" run_hostile_sanitized
+else
+    echo "sanitizer runtime missing: the hostile harness runs without it"
+    step "hostile inputs to every export ($HOSTILE_CALLS calls each, no sanitizer runtime)" run_hostile_plain
+fi
+step "hostile inputs to every export under valgrind memcheck (1000 calls each)" run_hostile_valgrind
 for t in "${TESTS[@]}"; do
     step "$t against librelicore.so, same bits as the static build" check_shared "$t"
 done

@@ -1,0 +1,1280 @@
+/*
+ * Hostile-input harness of the relicore C ABI (issue 5), built with AddressSanitizer and
+ * UndefinedBehaviorSanitizer by tests/c/run.sh.
+ *
+ *   hostile_abi [--calls N] [--seed S] [--no-uninit]
+ *
+ * Calls every function of include/relicore.h at least N times (default 100000) with random
+ * and edge-case arguments: NaN of both signs, +-inf, +-0, subnormals, the largest values, raw
+ * bit patterns, log-uniform magnitudes of every scale of either sign; NULL for every pointer;
+ * arrays of exact heap size (so any read or write past the end is a sanitizer report; a
+ * length-0 array is a 1-element buffer that must stay untouched), of length 0, transformed in place, and (response tables) of mismatched lengths; forged
+ * calibration structs; and universe structs that relicore_universe_init did not produce:
+ * uninitialised heap memory, zeroed, random bytes, cleared by a failed init, a valid universe
+ * with one bit of its validity tag flipped (all must be refused with
+ * RELICORE_ERROR_INVALID_STRUCT), and a valid universe with random storage words overwritten
+ * behind an intact tag (undetectable by the tag: that case must only stay free of crashes,
+ * sanitizer reports and undocumented codes).
+ *
+ * Asserts for every call: the status is 0 or a documented negative code (never PANIC, never
+ * an unknown number); a success writes a finite value; a failure writes NaN to every output
+ * (every field of a struct); NULL pointers give exactly RELICORE_ERROR_NULL_POINTER, an
+ * unproduced universe exactly RELICORE_ERROR_INVALID_STRUCT; an array form gives, element by
+ * element, the same bits and status as the scalar function and returns the first failing
+ * element's code; n = 0 writes nothing; a failed init clears the struct (tag and storage 0);
+ * relicore_universe_check_parameters agrees with init; get_parameters returns what init got.
+ *
+ * --no-uninit skips the uninitialised-memory struct (for memcheck, which reports any read of
+ * uninitialised memory, although reading the tag of such a struct is what the library must
+ * do to refuse it).
+ *
+ * Prints the number of calls and the status counts per function, then
+ * "hostile: N calls, M checks: P passed, F failed"; exit status 0 only if nothing failed.
+ */
+
+#include <float.h>
+#include <inttypes.h>
+#include <math.h>
+#include <stdarg.h>
+#include <stdint.h>
+#include <stdio.h>
+#include <stdlib.h>
+#include <string.h>
+
+#include "relicore.h"
+
+/* ------------------------------------------------------------------------------------------ */
+/* Bookkeeping                                                                                 */
+/* ------------------------------------------------------------------------------------------ */
+
+#define NCODES 16 /* statuses 0 .. -15 */
+
+struct stats {
+    const char *name;
+    long calls;
+    long status[NCODES];
+};
+
+#define MAX_EXPORTS 160
+static struct stats g_stats[MAX_EXPORTS];
+static int g_nstats = 0;
+static long g_checks = 0;
+static long g_failed = 0;
+static long g_calls = 0;
+
+static struct stats *stats_for(const char *name)
+{
+    for (int i = 0; i < g_nstats; i++) {
+        if (strcmp(g_stats[i].name, name) == 0) {
+            return &g_stats[i];
+        }
+    }
+    if (g_nstats == MAX_EXPORTS) {
+        fprintf(stderr, "too many exports\n");
+        exit(2);
+    }
+    g_stats[g_nstats].name = name;
+    return &g_stats[g_nstats++];
+}
+
+static void check(int ok, const char *fmt, ...)
+{
+    g_checks++;
+    if (ok) {
+        return;
+    }
+    g_failed++;
+    if (g_failed > 50) {
+        return;
+    }
+    va_list ap;
+    va_start(ap, fmt);
+    fputs("FAIL ", stdout);
+    vprintf(fmt, ap);
+    fputc('\n', stdout);
+    va_end(ap);
+}
+
+/* A documented status of the header: 0 or -1 .. -15, except PANIC (a bug by definition). */
+static int documented(int32_t st)
+{
+    return st <= 0 && st >= -15 && st != RELICORE_ERROR_PANIC;
+}
+
+/* Records one call of `name` with status `st` and checks that the status is documented. */
+static void record(const char *name, int32_t st)
+{
+    struct stats *s = stats_for(name);
+    s->calls++;
+    g_calls++;
+    if (st <= 0 && st > -NCODES) {
+        s->status[-st]++;
+    }
+    check(documented(st), "%s returned %" PRId32 " (%s), not a documented status", name, st,
+          relicore_status_message(st));
+}
+
+/* The contract of one double output: finite on success, NaN on failure. */
+static void check_out(const char *name, int32_t st, double out, const char *args)
+{
+    if (st == RELICORE_OK) {
+        check(isfinite(out), "%s(%s) = OK with %.17g: a success must be finite", name, args, out);
+    } else {
+        check(isnan(out), "%s(%s) = %" PRId32 " with %.17g: a failure must write NaN", name, args,
+              st, out);
+    }
+}
+
+static void check_outf(const char *name, int32_t st, float out, const char *args)
+{
+    check_out(name, st, (double)out, args);
+}
+
+/* ------------------------------------------------------------------------------------------ */
+/* Random and hostile values (xorshift64*, deterministic from the seed)                        */
+/* ------------------------------------------------------------------------------------------ */
+
+static uint64_t g_rng = 0x9e3779b97f4a7c15u;
+
+static uint64_t next_u64(void)
+{
+    g_rng ^= g_rng >> 12;
+    g_rng ^= g_rng << 25;
+    g_rng ^= g_rng >> 27;
+    return g_rng * 0x2545f4914f6cdd1du;
+}
+
+static double uniform(void) /* [0, 1) */
+{
+    return (double)(next_u64() >> 11) * 0x1.0p-53;
+}
+
+static unsigned below(unsigned n)
+{
+    return (unsigned)(next_u64() % n);
+}
+
+static const double SPECIAL[] = {
+    NAN, -NAN, INFINITY, -INFINITY, 0.0, -0.0, 4.9406564584124654e-324, -4.9406564584124654e-324,
+    2.2250738585072009e-308, DBL_MIN, -DBL_MIN, DBL_MAX, -DBL_MAX, 1e300, 1e-300, DBL_EPSILON,
+    1.0, -1.0, 0.5, 2.7255, 1e-6, 1e4,
+};
+#define NSPECIAL (sizeof SPECIAL / sizeof SPECIAL[0])
+
+/* Any double: a special value, raw bits, or log-uniform 1e-40 .. 1e40 of either sign. */
+static double any_double(void)
+{
+    switch (below(10)) {
+    case 0:
+    case 1:
+    case 2: return SPECIAL[below(NSPECIAL)];
+    case 3: {
+        uint64_t b = next_u64();
+        double d;
+        memcpy(&d, &b, sizeof d);
+        return d;
+    }
+    case 4: return -pow(10.0, -40.0 + 80.0 * uniform());
+    default: return pow(10.0, -40.0 + 80.0 * uniform());
+    }
+}
+
+/* A physical-scale positive value (so that successful paths are common too). */
+static double ordinary(double lo_exp, double hi_exp)
+{
+    return pow(10.0, lo_exp + (hi_exp - lo_exp) * uniform());
+}
+
+/* Arguments of a blackbody function: hostile most of the time, physical some of the time. */
+static double arg_double(double lo_exp, double hi_exp)
+{
+    return below(3) == 0 ? ordinary(lo_exp, hi_exp) : any_double();
+}
+
+static float any_float(void)
+{
+    switch (below(10)) {
+    case 0: {
+        uint32_t b = (uint32_t)next_u64();
+        float f;
+        memcpy(&f, &b, sizeof f);
+        return f;
+    }
+    case 1: return 1e-45f;
+    case 2: return FLT_MAX;
+    default: return (float)any_double();
+    }
+}
+
+static void describe(char *buf, size_t size, int n, const double *a)
+{
+    size_t used = 0;
+    buf[0] = '\0';
+    for (int i = 0; i < n && used + 32 < size; i++) {
+        used += (size_t)snprintf(buf + used, size - used, "%s%.17g", i ? ", " : "", a[i]);
+    }
+}
+
+static int same_bits(double a, double b)
+{
+    return memcmp(&a, &b, sizeof a) == 0;
+}
+
+static int same_bits_f(float a, float b)
+{
+    return memcmp(&a, &b, sizeof a) == 0;
+}
+
+static long g_iterations = 100000;
+static int g_uninit = 1;
+
+#define SENTINEL 12345.678
+
+/* ------------------------------------------------------------------------------------------ */
+/* Blackbody: scalar forms                                                                     */
+/* ------------------------------------------------------------------------------------------ */
+
+typedef int32_t (*s1_fn)(double, double *);
+typedef int32_t (*s2_fn)(double, double, double *);
+typedef int32_t (*s3_fn)(double, double, double, double *);
+typedef int32_t (*f2_fn)(float, float, float *);
+typedef int32_t (*a1_fn)(const double *, size_t, double, double *);
+typedef int32_t (*a2_fn)(double, const double *, size_t, double *);
+typedef int32_t (*fa1_fn)(const float *, size_t, float, float *);
+
+#define ENTRY(f) { #f, f }
+static const struct { const char *name; s1_fn f; } S1[] = {
+    ENTRY(relicore_radiant_exitance),
+    ENTRY(relicore_photon_exitance),
+    ENTRY(relicore_peak_wavelength),
+    ENTRY(relicore_peak_frequency),
+    ENTRY(relicore_peak_wavenumber),
+    ENTRY(relicore_photon_peak_wavelength),
+    ENTRY(relicore_photon_peak_frequency),
+    ENTRY(relicore_temperature_from_peak_wavelength),
+    ENTRY(relicore_temperature_from_peak_frequency),
+    ENTRY(relicore_thermal_sz_null_frequency),
+};
+static const struct { const char *name; s2_fn f; } S2[] = {
+    ENTRY(relicore_spectral_radiance_wavelength),
+    ENTRY(relicore_spectral_radiance_frequency),
+    ENTRY(relicore_spectral_radiance_wavenumber),
+    ENTRY(relicore_photon_radiance_wavelength),
+    ENTRY(relicore_photon_radiance_frequency),
+    ENTRY(relicore_photon_radiance_wavenumber),
+    ENTRY(relicore_radiance_temperature_derivative_wavelength),
+    ENTRY(relicore_radiance_temperature_derivative_frequency),
+    ENTRY(relicore_brightness_temperature_wavelength),
+    ENTRY(relicore_brightness_temperature_frequency),
+    ENTRY(relicore_rayleigh_jeans_temperature),
+    ENTRY(relicore_thermodynamic_to_rayleigh_jeans_factor),
+    ENTRY(relicore_kcmb_to_mjy_per_sr),
+    ENTRY(relicore_thermal_sz_spectral_shape),
+    ENTRY(relicore_thermal_sz_temperature_shape),
+};
+static const struct { const char *name; s3_fn f; } S3[] = {
+    ENTRY(relicore_band_fraction_wavelength),
+    ENTRY(relicore_band_radiance_wavelength),
+    ENTRY(relicore_band_photon_radiance_wavelength),
+    ENTRY(relicore_band_radiance_frequency),
+    ENTRY(relicore_temperature_from_band_radiance_wavelength),
+};
+static const struct { const char *name; f2_fn f; } F2[] = {
+    ENTRY(relicore_spectral_radiance_wavelength_f32),
+    ENTRY(relicore_spectral_radiance_frequency_f32),
+    ENTRY(relicore_spectral_radiance_wavenumber_f32),
+    ENTRY(relicore_brightness_temperature_wavelength_f32),
+    ENTRY(relicore_brightness_temperature_frequency_f32),
+};
+/* array forms and the scalar function each element must agree with */
+static const struct { const char *name; a1_fn f; s2_fn scalar; } A1[] = {
+    { "relicore_spectral_radiance_wavelength_array", relicore_spectral_radiance_wavelength_array,
+      relicore_spectral_radiance_wavelength },
+    { "relicore_spectral_radiance_frequency_array", relicore_spectral_radiance_frequency_array,
+      relicore_spectral_radiance_frequency },
+    { "relicore_spectral_radiance_wavenumber_array", relicore_spectral_radiance_wavenumber_array,
+      relicore_spectral_radiance_wavenumber },
+    { "relicore_photon_radiance_wavelength_array", relicore_photon_radiance_wavelength_array,
+      relicore_photon_radiance_wavelength },
+    { "relicore_photon_radiance_frequency_array", relicore_photon_radiance_frequency_array,
+      relicore_photon_radiance_frequency },
+    { "relicore_photon_radiance_wavenumber_array", relicore_photon_radiance_wavenumber_array,
+      relicore_photon_radiance_wavenumber },
+    { "relicore_radiance_temperature_derivative_wavelength_array",
+      relicore_radiance_temperature_derivative_wavelength_array,
+      relicore_radiance_temperature_derivative_wavelength },
+    { "relicore_radiance_temperature_derivative_frequency_array",
+      relicore_radiance_temperature_derivative_frequency_array,
+      relicore_radiance_temperature_derivative_frequency },
+};
+static const struct { const char *name; a2_fn f; s2_fn scalar; } A2[] = {
+    { "relicore_brightness_temperature_wavelength_array",
+      relicore_brightness_temperature_wavelength_array, relicore_brightness_temperature_wavelength },
+    { "relicore_brightness_temperature_frequency_array",
+      relicore_brightness_temperature_frequency_array, relicore_brightness_temperature_frequency },
+};
+static const struct { const char *name; fa1_fn f; f2_fn scalar; } FA1[] = {
+    { "relicore_spectral_radiance_wavelength_array_f32",
+      relicore_spectral_radiance_wavelength_array_f32, relicore_spectral_radiance_wavelength_f32 },
+    { "relicore_spectral_radiance_frequency_array_f32",
+      relicore_spectral_radiance_frequency_array_f32, relicore_spectral_radiance_frequency_f32 },
+    { "relicore_spectral_radiance_wavenumber_array_f32",
+      relicore_spectral_radiance_wavenumber_array_f32, relicore_spectral_radiance_wavenumber_f32 },
+};
+#define LEN(a) (sizeof(a) / sizeof((a)[0]))
+
+/* One scalar call through a possibly-NULL output: NULL gives exactly NULL_POINTER. */
+static int null_out(void)
+{
+    return below(16) == 0;
+}
+
+static void hostile_blackbody_scalars(void)
+{
+    char args[256];
+    for (long it = 0; it < g_iterations; it++) {
+        for (size_t k = 0; k < LEN(S1); k++) {
+            double a = arg_double(-2.0, 8.0);
+            double out = SENTINEL;
+            int nul = null_out();
+            int32_t st = S1[k].f(a, nul ? NULL : &out);
+            record(S1[k].name, st);
+            describe(args, sizeof args, 1, &a);
+            if (nul) {
+                check(st == RELICORE_ERROR_NULL_POINTER, "%s(%s, NULL) = %" PRId32, S1[k].name,
+                      args, st);
+            } else {
+                check_out(S1[k].name, st, out, args);
+                if (isnan(a)) {
+                    check(st != RELICORE_OK, "%s(NaN) = OK", S1[k].name);
+                }
+            }
+        }
+        for (size_t k = 0; k < LEN(S2); k++) {
+            double a[2] = { arg_double(-9.0, 15.0), arg_double(-2.0, 8.0) };
+            double out = SENTINEL;
+            int nul = null_out();
+            int32_t st = S2[k].f(a[0], a[1], nul ? NULL : &out);
+            record(S2[k].name, st);
+            describe(args, sizeof args, 2, a);
+            if (nul) {
+                check(st == RELICORE_ERROR_NULL_POINTER, "%s(%s, NULL) = %" PRId32, S2[k].name,
+                      args, st);
+            } else {
+                check_out(S2[k].name, st, out, args);
+                if (isnan(a[0]) || isnan(a[1])) {
+                    check(st != RELICORE_OK, "%s(%s) = %" PRId32, S2[k].name, args,
+                          st);
+                }
+            }
+        }
+        for (size_t k = 0; k < LEN(S3); k++) {
+            double a[3] = { arg_double(-8.0, 0.0), arg_double(-8.0, 0.0), arg_double(-2.0, 8.0) };
+            if (below(4) == 0) {
+                a[0] = 0.0;
+            }
+            if (below(4) == 0) {
+                a[1] = INFINITY;
+            }
+            double out = SENTINEL;
+            int nul = null_out();
+            int32_t st = S3[k].f(a[0], a[1], a[2], nul ? NULL : &out);
+            record(S3[k].name, st);
+            describe(args, sizeof args, 3, a);
+            if (nul) {
+                check(st == RELICORE_ERROR_NULL_POINTER, "%s(%s, NULL) = %" PRId32, S3[k].name,
+                      args, st);
+            } else {
+                check_out(S3[k].name, st, out, args);
+                if (isnan(a[0]) || isnan(a[1]) || isnan(a[2])) {
+                    check(st != RELICORE_OK, "%s(%s) = %" PRId32, S3[k].name, args,
+                          st);
+                }
+            }
+        }
+        {
+            double a[4] = { arg_double(-7.0, -3.0), arg_double(-7.0, -3.0), arg_double(-3.0, 3.0),
+                            arg_double(-1.0, 1.0) };
+            double out = SENTINEL;
+            int nul = null_out();
+            int32_t st = relicore_ratio_temperature(a[0], a[1], a[2], a[3], nul ? NULL : &out);
+            record("relicore_ratio_temperature", st);
+            describe(args, sizeof args, 4, a);
+            if (nul) {
+                check(st == RELICORE_ERROR_NULL_POINTER, "ratio_temperature(%s, NULL) = %" PRId32,
+                      args, st);
+            } else {
+                check_out("relicore_ratio_temperature", st, out, args);
+            }
+        }
+        for (size_t k = 0; k < LEN(F2); k++) {
+            float a = any_float(), b = any_float();
+            if (below(3) == 0) {
+                a = (float)ordinary(-7.0, 14.0);
+                b = (float)ordinary(0.0, 4.0);
+            }
+            float out = (float)SENTINEL;
+            int nul = null_out();
+            int32_t st = F2[k].f(a, b, nul ? NULL : &out);
+            record(F2[k].name, st);
+            double d[2] = { a, b };
+            describe(args, sizeof args, 2, d);
+            if (nul) {
+                check(st == RELICORE_ERROR_NULL_POINTER, "%s(%s, NULL) = %" PRId32, F2[k].name,
+                      args, st);
+            } else {
+                check_outf(F2[k].name, st, out, args);
+            }
+        }
+        {
+            float a = any_float(), b = any_float(), c = any_float();
+            float out = (float)SENTINEL;
+            int nul = null_out();
+            int32_t st = relicore_band_radiance_wavelength_f32(a, b, c, nul ? NULL : &out);
+            record("relicore_band_radiance_wavelength_f32", st);
+            double d[3] = { a, b, c };
+            describe(args, sizeof args, 3, d);
+            if (nul) {
+                check(st == RELICORE_ERROR_NULL_POINTER, "band f32(%s, NULL) = %" PRId32, args, st);
+            } else {
+                check_outf("relicore_band_radiance_wavelength_f32", st, out, args);
+            }
+        }
+    }
+}
+
+/* ------------------------------------------------------------------------------------------ */
+/* Array forms: exact-size heap buffers, NULL, n = 0, in place; elements agree with scalars   */
+/* ------------------------------------------------------------------------------------------ */
+
+#define MAXN 7
+
+/* The first failing code of a sequence of element statuses (0 if none failed). */
+static int32_t first_failure(const int32_t *codes, size_t n)
+{
+    for (size_t i = 0; i < n; i++) {
+        if (codes[i] != RELICORE_OK) {
+            return codes[i];
+        }
+    }
+    return RELICORE_OK;
+}
+
+/* Calls an array form with hostile pointers and lengths; `call` runs the form on (x, n, out),
+ * `scalar` computes element i alone. Returns nothing: every check is counted. */
+typedef int32_t (*array_call)(const void *ctx, const double *x, size_t n, double *out);
+typedef int32_t (*element_call)(const void *ctx, double x, double *out);
+
+static void hostile_array(const char *name, const void *ctx, array_call call, element_call scalar,
+                          double lo_exp, double hi_exp, size_t maxn)
+{
+    size_t n = below((unsigned)maxn + 1);
+    int mode = (int)below(12); /* 0: NULL x, 1: NULL out, 2: both NULL, 3: in place, else plain */
+    double *x = calloc(n ? n : 1, sizeof *x);
+    double *out = calloc(n ? n : 1, sizeof *out);
+    double one = SENTINEL;
+    if (x == NULL || out == NULL) {
+        fprintf(stderr, "out of memory\n");
+        exit(2);
+    }
+    for (size_t i = 0; i < n; i++) {
+        x[i] = arg_double(lo_exp, hi_exp);
+        out[i] = SENTINEL;
+    }
+    int32_t st;
+    if (mode == 0) {
+        st = call(ctx, NULL, n, out);
+        record(name, st);
+        check(st == RELICORE_ERROR_NULL_POINTER, "%s(NULL x, n=%zu) = %" PRId32, name, n, st);
+        for (size_t i = 0; i < n; i++) {
+            check(isnan(out[i]), "%s(NULL x): out[%zu] = %.17g, not NaN", name, i, out[i]);
+        }
+    } else if (mode == 1 || mode == 2) {
+        st = call(ctx, mode == 2 ? NULL : x, n, NULL);
+        record(name, st);
+        check(st == RELICORE_ERROR_NULL_POINTER, "%s(NULL out, n=%zu) = %" PRId32, name, n, st);
+    } else if (n == 0) {
+        st = call(ctx, x, 0, &one);
+        record(name, st);
+        check(st == RELICORE_OK && one == SENTINEL, "%s(n=0) = %" PRId32 ", wrote %.17g", name,
+              st, one);
+    } else {
+        double want[MAXN];
+        int32_t codes[MAXN];
+        for (size_t i = 0; i < n; i++) {
+            want[i] = SENTINEL;
+            codes[i] = scalar(ctx, x[i], &want[i]);
+        }
+        double *dst = mode == 3 ? x : out; /* in place: out is the input buffer */
+        st = call(ctx, x, n, dst);
+        record(name, st);
+        check(st == first_failure(codes, n),
+              "%s: returned %" PRId32 ", the first failing element's code is %" PRId32, name, st,
+              first_failure(codes, n));
+        for (size_t i = 0; i < n; i++) {
+            check(same_bits(dst[i], want[i]) || (isnan(dst[i]) && isnan(want[i])),
+                  "%s: element %zu = %.17g, the scalar call gives %.17g (status %" PRId32 ")", name,
+                  i, dst[i], want[i], codes[i]);
+            check((codes[i] == RELICORE_OK) ? isfinite(dst[i]) : isnan(dst[i]),
+                  "%s: element %zu = %.17g with element status %" PRId32, name, i, dst[i], codes[i]);
+        }
+    }
+    free(x);
+    free(out);
+}
+
+struct a1_ctx {
+    a1_fn f;
+    s2_fn scalar;
+    double t;
+};
+static int32_t a1_call(const void *c, const double *x, size_t n, double *out)
+{
+    const struct a1_ctx *k = c;
+    return k->f(x, n, k->t, out);
+}
+static int32_t a1_elem(const void *c, double x, double *out)
+{
+    const struct a1_ctx *k = c;
+    return k->scalar(x, k->t, out);
+}
+
+struct a2_ctx {
+    a2_fn f;
+    s2_fn scalar;
+    double v;
+};
+static int32_t a2_call(const void *c, const double *x, size_t n, double *out)
+{
+    const struct a2_ctx *k = c;
+    return k->f(k->v, x, n, out);
+}
+static int32_t a2_elem(const void *c, double x, double *out)
+{
+    const struct a2_ctx *k = c;
+    return k->scalar(k->v, x, out);
+}
+
+static void hostile_float_array(const char *name, fa1_fn f, f2_fn scalar)
+{
+    size_t n = below(MAXN + 1);
+    float t = below(2) ? any_float() : (float)ordinary(0.0, 4.0);
+    float *x = calloc(n ? n : 1, sizeof *x);
+    float *out = calloc(n ? n : 1, sizeof *out);
+    if (x == NULL || out == NULL) {
+        exit(2);
+    }
+    for (size_t i = 0; i < n; i++) {
+        x[i] = below(2) ? any_float() : (float)ordinary(-7.0, 14.0);
+        out[i] = (float)SENTINEL;
+    }
+    int mode = (int)below(10);
+    int32_t st;
+    if (mode == 0) {
+        st = f(NULL, n, t, out);
+        record(name, st);
+        check(st == RELICORE_ERROR_NULL_POINTER, "%s(NULL x) = %" PRId32, name, st);
+    } else if (mode == 1) {
+        st = f(x, n, t, NULL);
+        record(name, st);
+        check(st == RELICORE_ERROR_NULL_POINTER, "%s(NULL out) = %" PRId32, name, st);
+    } else {
+        float want[MAXN];
+        int32_t codes[MAXN];
+        for (size_t i = 0; i < n; i++) {
+            codes[i] = scalar(x[i], t, &want[i]);
+        }
+        float *dst = mode == 2 ? x : out;
+        st = f(x, n, t, dst);
+        record(name, st);
+        check(st == first_failure(codes, n), "%s: returned %" PRId32 " not %" PRId32, name, st,
+              first_failure(codes, n));
+        for (size_t i = 0; i < n; i++) {
+            check(same_bits_f(dst[i], want[i]) || (isnan(dst[i]) && isnan(want[i])),
+                  "%s: element %zu differs from the scalar call", name, i);
+            check(codes[i] == RELICORE_OK ? isfinite(dst[i]) : isnan(dst[i]),
+                  "%s: element %zu = %g with status %" PRId32, name, i, (double)dst[i], codes[i]);
+        }
+    }
+    free(x);
+    free(out);
+}
+
+static void hostile_blackbody_arrays(void)
+{
+    for (long it = 0; it < g_iterations; it++) {
+        for (size_t k = 0; k < LEN(A1); k++) {
+            struct a1_ctx c = { A1[k].f, A1[k].scalar, arg_double(-2.0, 8.0) };
+            hostile_array(A1[k].name, &c, a1_call, a1_elem, -9.0, 15.0, MAXN);
+        }
+        for (size_t k = 0; k < LEN(A2); k++) {
+            struct a2_ctx c = { A2[k].f, A2[k].scalar, arg_double(-9.0, 15.0) };
+            hostile_array(A2[k].name, &c, a2_call, a2_elem, -30.0, 10.0, MAXN);
+        }
+        for (size_t k = 0; k < LEN(FA1); k++) {
+            hostile_float_array(FA1[k].name, FA1[k].f, FA1[k].scalar);
+        }
+    }
+}
+
+/* ------------------------------------------------------------------------------------------ */
+/* Calibration and response tables                                                             */
+/* ------------------------------------------------------------------------------------------ */
+
+static void hostile_calibration(void)
+{
+    char args[256];
+    for (long it = 0; it < g_iterations; it++) {
+        double a[5] = { arg_double(9.0, 12.0), any_double(), arg_double(1.0, 3.0), any_double(),
+                        arg_double(0.0, 2.0) };
+        struct relicore_two_load_calibration cal = { SENTINEL, SENTINEL, SENTINEL };
+        int nul = null_out();
+        int32_t st = relicore_two_load_calibration(a[0], a[1], a[2], a[3], a[4], nul ? NULL : &cal);
+        record("relicore_two_load_calibration", st);
+        describe(args, sizeof args, 5, a);
+        if (nul) {
+            check(st == RELICORE_ERROR_NULL_POINTER, "two_load_calibration(NULL) = %" PRId32, st);
+        } else if (st == RELICORE_OK) {
+            check(isfinite(cal.frequency_hz) && isfinite(cal.gain) && isfinite(cal.offset),
+                  "two_load_calibration(%s) = OK with a non-finite field", args);
+        } else {
+            check(isnan(cal.frequency_hz) && isnan(cal.gain) && isnan(cal.offset),
+                  "two_load_calibration(%s) = %" PRId32 " without NaN in every field", args, st);
+        }
+        /* the calibration it made, or a forged one, or NULL */
+        if (st != RELICORE_OK || below(2) == 0) {
+            cal.frequency_hz = any_double();
+            cal.gain = any_double();
+            cal.offset = any_double();
+        }
+        int nulcal = below(16) == 0;
+        for (int which = 0; which < 2; which++) {
+            double r = any_double();
+            double out = SENTINEL;
+            const char *name = which ? "relicore_calibrated_brightness_temperature"
+                                     : "relicore_calibrated_temperature";
+            int32_t (*f)(const struct relicore_two_load_calibration *, double, double *) =
+                which ? relicore_calibrated_brightness_temperature : relicore_calibrated_temperature;
+            int nulo = null_out();
+            int32_t s = f(nulcal ? NULL : &cal, r, nulo ? NULL : &out);
+            record(name, s);
+            if (nulcal || nulo) {
+                check(s == RELICORE_ERROR_NULL_POINTER, "%s with NULL = %" PRId32, name, s);
+                if (!nulo) {
+                    check(isnan(out), "%s(NULL calibration) did not write NaN", name);
+                }
+            } else {
+                double d[4] = { cal.frequency_hz, cal.gain, cal.offset, r };
+                describe(args, sizeof args, 4, d);
+                check_out(name, s, out, args);
+            }
+        }
+        /* f32 */
+        float b[5] = { any_float(), any_float(), any_float(), any_float(), any_float() };
+        if (below(2)) {
+            b[0] = 30e9f;
+            b[2] = 300.0f;
+            b[4] = 77.0f;
+        }
+        struct relicore_two_load_calibration_f32 c32 = { 1.0f, 1.0f, 1.0f };
+        st = relicore_two_load_calibration_f32(b[0], b[1], b[2], b[3], b[4], nul ? NULL : &c32);
+        record("relicore_two_load_calibration_f32", st);
+        if (nul) {
+            check(st == RELICORE_ERROR_NULL_POINTER, "two_load_calibration_f32(NULL) = %" PRId32,
+                  st);
+        } else if (st == RELICORE_OK) {
+            check(isfinite(c32.frequency_hz) && isfinite(c32.gain) && isfinite(c32.offset),
+                  "two_load_calibration_f32 = OK with a non-finite field");
+        } else {
+            check(isnan(c32.frequency_hz) && isnan(c32.gain) && isnan(c32.offset),
+                  "two_load_calibration_f32 = %" PRId32 " without NaN fields", st);
+        }
+        if (st != RELICORE_OK || below(2) == 0) {
+            c32.frequency_hz = any_float();
+            c32.gain = any_float();
+            c32.offset = any_float();
+        }
+        for (int which = 0; which < 2; which++) {
+            float r = any_float();
+            float out = (float)SENTINEL;
+            const char *name = which ? "relicore_calibrated_brightness_temperature_f32"
+                                     : "relicore_calibrated_temperature_f32";
+            int32_t (*f)(const struct relicore_two_load_calibration_f32 *, float, float *) =
+                which ? relicore_calibrated_brightness_temperature_f32
+                      : relicore_calibrated_temperature_f32;
+            int32_t s = f(nulcal ? NULL : &c32, r, &out);
+            record(name, s);
+            if (nulcal) {
+                check(s == RELICORE_ERROR_NULL_POINTER && isnan(out), "%s(NULL) = %" PRId32, name,
+                      s);
+            } else {
+                check_outf(name, s, out, "forged or made f32 calibration");
+            }
+        }
+    }
+}
+
+/* A response table: exact-size heap arrays of lengths nw and nr (often different), filled with
+ * hostile values or with an increasing physical table. */
+static void hostile_response(void)
+{
+    for (long it = 0; it < g_iterations; it++) {
+        size_t nw = below(6), nr = below(3) ? nw : below(6);
+        double *w = calloc(nw ? nw : 1, sizeof *w);
+        double *r = calloc(nr ? nr : 1, sizeof *r);
+        float *w32 = calloc(nw ? nw : 1, sizeof *w32);
+        float *r32 = calloc(nr ? nr : 1, sizeof *r32);
+        if (!w || !r || !w32 || !r32) {
+            exit(2);
+        }
+        int physical = below(3) == 0;
+        double l = ordinary(-7.0, -3.0);
+        for (size_t i = 0; i < nw; i++) {
+            w[i] = physical ? l : any_double();
+            l *= 1.0 + uniform();
+            w32[i] = (float)w[i];
+        }
+        for (size_t i = 0; i < nr; i++) {
+            r[i] = physical ? uniform() : any_double();
+            r32[i] = (float)r[i];
+        }
+        int nulw = below(12) == 0, nulr = below(12) == 0, nulo = below(12) == 0;
+        for (int which = 0; which < 2; which++) {
+            double v = which ? arg_double(-10.0, 10.0) : arg_double(0.0, 4.0);
+            double out = SENTINEL;
+            const char *name = which ? "relicore_temperature_from_response_weighted_radiance"
+                                     : "relicore_response_weighted_radiance";
+            int32_t (*f)(const double *, size_t, const double *, size_t, double, double *) =
+                which ? relicore_temperature_from_response_weighted_radiance
+                      : relicore_response_weighted_radiance;
+            int32_t st = f(nulw ? NULL : w, nw, nulr ? NULL : r, nr, v, nulo ? NULL : &out);
+            record(name, st);
+            if (nulw || nulr || nulo) {
+                check(st == RELICORE_ERROR_NULL_POINTER, "%s with a NULL pointer = %" PRId32, name,
+                      st);
+                if (!nulo) {
+                    check(isnan(out), "%s(NULL) did not write NaN", name);
+                }
+            } else {
+                check_out(name, st, out, "response table");
+                if (nw < 2) {
+                    check(st == RELICORE_ERROR_ARRAY_TOO_SHORT, "%s with %zu wavelengths = %" PRId32,
+                          name, nw, st);
+                } else if (nr != nw) {
+                    check(st == RELICORE_ERROR_LENGTH_MISMATCH, "%s with lengths %zu, %zu = %" PRId32,
+                          name, nw, nr, st);
+                }
+            }
+            float v32 = (float)v, out32 = (float)SENTINEL;
+            const char *name32 = which ? "relicore_temperature_from_response_weighted_radiance_f32"
+                                       : "relicore_response_weighted_radiance_f32";
+            int32_t (*g)(const float *, size_t, const float *, size_t, float, float *) =
+                which ? relicore_temperature_from_response_weighted_radiance_f32
+                      : relicore_response_weighted_radiance_f32;
+            st = g(nulw ? NULL : w32, nw, nulr ? NULL : r32, nr, v32, nulo ? NULL : &out32);
+            record(name32, st);
+            if (nulw || nulr || nulo) {
+                check(st == RELICORE_ERROR_NULL_POINTER, "%s with a NULL pointer = %" PRId32,
+                      name32, st);
+            } else {
+                check_outf(name32, st, out32, "response table (f32)");
+                if (nr != nw && nw >= 2) {
+                    check(st == RELICORE_ERROR_LENGTH_MISMATCH, "%s mismatched = %" PRId32, name32,
+                          st);
+                }
+            }
+        }
+        free(w);
+        free(r);
+        free(w32);
+        free(r32);
+    }
+}
+
+/* ------------------------------------------------------------------------------------------ */
+/* Universes                                                                                   */
+/* ------------------------------------------------------------------------------------------ */
+
+typedef int32_t (*u0_fn)(const struct relicore_universe *, double *);
+typedef int32_t (*u1_fn)(const struct relicore_universe *, double, double *);
+typedef int32_t (*ua_fn)(const struct relicore_universe *, const double *, size_t, double *);
+
+static const struct { const char *name; u0_fn f; } U0[] = {
+    ENTRY(relicore_hubble_distance_mpc),
+    ENTRY(relicore_hubble_time_gyr),
+    ENTRY(relicore_omega_radiation),
+    ENTRY(relicore_omega_dark_energy),
+    ENTRY(relicore_matter_radiation_equality_redshift),
+};
+static const struct { const char *name; u1_fn f; const char *array_name; ua_fn array; } U1[] = {
+#define UENTRY(f) { #f, f, #f "_array", f##_array }
+    UENTRY(relicore_dimensionless_hubble),
+    UENTRY(relicore_hubble_parameter_km_s_mpc),
+    UENTRY(relicore_omega_matter_at),
+    UENTRY(relicore_omega_radiation_at),
+    UENTRY(relicore_omega_dark_energy_at),
+    UENTRY(relicore_omega_curvature_at),
+    UENTRY(relicore_critical_density_kg_m3),
+    UENTRY(relicore_cmb_temperature_at_k),
+    UENTRY(relicore_comoving_distance_mpc),
+    UENTRY(relicore_transverse_comoving_distance_mpc),
+    UENTRY(relicore_angular_diameter_distance_mpc),
+    UENTRY(relicore_luminosity_distance_mpc),
+    UENTRY(relicore_distance_modulus),
+    UENTRY(relicore_comoving_volume_gpc3),
+    UENTRY(relicore_differential_comoving_volume_mpc3_sr),
+    UENTRY(relicore_transverse_scale_kpc_per_arcsec),
+    UENTRY(relicore_lookback_time_gyr),
+    UENTRY(relicore_age_gyr),
+    UENTRY(relicore_conformal_time_mpc),
+    UENTRY(relicore_redshift_at_age_gyr),
+    UENTRY(relicore_redshift_at_lookback_time_gyr),
+    UENTRY(relicore_redshift_at_comoving_distance_mpc),
+    UENTRY(relicore_redshift_at_luminosity_distance_mpc),
+};
+/* names of the array forms, spelled out for the coverage guard (tests/coverage_guard.py):
+ * relicore_dimensionless_hubble_array relicore_hubble_parameter_km_s_mpc_array
+ * relicore_omega_matter_at_array relicore_omega_radiation_at_array
+ * relicore_omega_dark_energy_at_array relicore_omega_curvature_at_array
+ * relicore_critical_density_kg_m3_array relicore_cmb_temperature_at_k_array
+ * relicore_comoving_distance_mpc_array relicore_transverse_comoving_distance_mpc_array
+ * relicore_angular_diameter_distance_mpc_array relicore_luminosity_distance_mpc_array
+ * relicore_distance_modulus_array relicore_comoving_volume_gpc3_array
+ * relicore_differential_comoving_volume_mpc3_sr_array relicore_transverse_scale_kpc_per_arcsec_array
+ * relicore_lookback_time_gyr_array relicore_age_gyr_array relicore_conformal_time_mpc_array
+ * relicore_redshift_at_age_gyr_array relicore_redshift_at_lookback_time_gyr_array
+ * relicore_redshift_at_comoving_distance_mpc_array relicore_redshift_at_luminosity_distance_mpc_array
+ */
+
+#define NVALID 5
+static struct relicore_universe *g_valid[NVALID];
+static struct relicore_universe_parameters g_valid_params[NVALID];
+
+/* The kinds of universe pointer a call gets. */
+enum ukind {
+    U_VALID,       /* built by init */
+    U_COPY,        /* memcpy of a valid one */
+    U_NULL,        /* NULL */
+    U_UNINIT,      /* uninitialised heap memory */
+    U_ZERO,        /* all bytes 0 */
+    U_RANDOM,      /* random bytes */
+    U_FAILED,      /* cleared by a failed init */
+    U_TAG_FLIP,    /* valid, one bit of the tag flipped */
+    U_STORAGE_BAD, /* valid tag, storage words overwritten */
+    U_KINDS
+};
+
+static struct relicore_universe *g_scratch;
+
+/* A universe pointer of a random kind, written into *kind. */
+static const struct relicore_universe *pick_universe(enum ukind *kind)
+{
+    unsigned r = below(20);
+    enum ukind k = r < 10 ? U_VALID : (enum ukind)(1 + r % (U_KINDS - 1));
+    if (k == U_UNINIT && !g_uninit) {
+        k = U_ZERO;
+    }
+    *kind = k;
+    struct relicore_universe *v = g_valid[below(NVALID)];
+    switch (k) {
+    case U_VALID: return v;
+    case U_COPY: memcpy(g_scratch, v, sizeof *v); return g_scratch;
+    case U_NULL: return NULL;
+    case U_UNINIT: {
+        /* fresh, never written heap memory: free the scratch and take a new one */
+        free(g_scratch);
+        g_scratch = malloc(sizeof *g_scratch);
+        if (g_scratch == NULL) {
+            exit(2);
+        }
+        return g_scratch;
+    }
+    case U_ZERO: memset(g_scratch, 0, sizeof *g_scratch); return g_scratch;
+    case U_RANDOM: {
+        unsigned char *p = (unsigned char *)g_scratch;
+        for (size_t i = 0; i < sizeof *g_scratch; i += 8) {
+            uint64_t b = next_u64();
+            memcpy(p + i, &b, 8);
+        }
+        return g_scratch;
+    }
+    case U_FAILED: {
+        struct relicore_universe_parameters p = g_valid_params[0];
+        p.h0_km_s_mpc = -1.0;
+        memcpy(g_scratch, v, sizeof *v);
+        int32_t st = relicore_universe_init(&p, g_scratch);
+        check(st == RELICORE_ERROR_INVALID_PARAMETER, "init with H0 = -1 = %" PRId32, st);
+        return g_scratch;
+    }
+    case U_TAG_FLIP:
+        memcpy(g_scratch, v, sizeof *v);
+        g_scratch->tag ^= (uint64_t)1 << below(64);
+        return g_scratch;
+    case U_STORAGE_BAD:
+        memcpy(g_scratch, v, sizeof *v);
+        for (int i = 0; i < 8; i++) {
+            g_scratch->storage[below(RELICORE_UNIVERSE_STORAGE_WORDS)] = next_u64();
+        }
+        return g_scratch;
+    default: return v;
+    }
+}
+
+/* The checks of a call on a universe of kind `k`. */
+static void check_universe_call(const char *name, enum ukind k, int32_t st, int out_null,
+                                double out, const char *args)
+{
+    if (k == U_NULL || out_null) {
+        check(st == RELICORE_ERROR_NULL_POINTER, "%s on a NULL pointer = %" PRId32, name, st);
+        if (!out_null) {
+            check(isnan(out), "%s(NULL universe) wrote %.17g, not NaN", name, out);
+        }
+        return;
+    }
+    if (k == U_VALID || k == U_COPY) {
+        check_out(name, st, out, args);
+        return;
+    }
+    if (k == U_STORAGE_BAD) {
+        /* undetectable behind an intact tag: no crash, no sanitizer report, a documented code,
+         * NaN on failure (the value of a success is not checked: the storage is garbage) */
+        if (st != RELICORE_OK) {
+            check(isnan(out), "%s on a corrupted storage = %" PRId32 " without NaN", name, st);
+        }
+        return;
+    }
+    check(st == RELICORE_ERROR_INVALID_STRUCT && isnan(out),
+          "%s on a universe init did not produce (kind %d) = %" PRId32 " with %.17g", name, (int)k,
+          st, out);
+}
+
+/* Redshift-like arguments of the universe functions: hostile, or ordinary for each use. */
+static double universe_arg(void)
+{
+    switch (below(4)) {
+    case 0: return ordinary(-6.0, 4.0);
+    case 1: return uniform() * 20.0;
+    default: return any_double();
+    }
+}
+
+struct ua_ctx {
+    ua_fn f;
+    u1_fn scalar;
+    const struct relicore_universe *u;
+};
+static int32_t ua_call(const void *c, const double *x, size_t n, double *out)
+{
+    const struct ua_ctx *k = c;
+    return k->f(k->u, x, n, out);
+}
+static int32_t ua_elem(const void *c, double x, double *out)
+{
+    const struct ua_ctx *k = c;
+    return k->scalar(k->u, x, out);
+}
+
+static void hostile_universe_functions(void)
+{
+    char args[128];
+    for (long it = 0; it < g_iterations; it++) {
+        enum ukind kind;
+        const struct relicore_universe *u = pick_universe(&kind);
+        for (size_t k = 0; k < LEN(U0); k++) {
+            double out = SENTINEL;
+            int nul = null_out();
+            int32_t st = U0[k].f(u, nul ? NULL : &out);
+            record(U0[k].name, st);
+            check_universe_call(U0[k].name, kind, st, nul, out, "");
+        }
+        for (size_t k = 0; k < LEN(U1); k++) {
+            double z = universe_arg();
+            double out = SENTINEL;
+            int nul = null_out();
+            int32_t st = U1[k].f(u, z, nul ? NULL : &out);
+            record(U1[k].name, st);
+            describe(args, sizeof args, 1, &z);
+            check_universe_call(U1[k].name, kind, st, nul, out, args);
+            if (!nul && (kind == U_VALID || kind == U_COPY) && isnan(z)) {
+                check(st != RELICORE_OK, "%s(NaN) = %" PRId32, U1[k].name, st);
+            }
+        }
+        {
+            double z[2] = { universe_arg(), universe_arg() };
+            double out = SENTINEL;
+            int nul = null_out();
+            int32_t st = relicore_angular_diameter_distance_between_mpc(u, z[0], z[1],
+                                                                        nul ? NULL : &out);
+            record("relicore_angular_diameter_distance_between_mpc", st);
+            describe(args, sizeof args, 2, z);
+            check_universe_call("relicore_angular_diameter_distance_between_mpc", kind, st, nul,
+                                out, args);
+        }
+        /* array forms, on valid universes element by element against the scalar form */
+        for (size_t k = 0; k < LEN(U1); k++) {
+            if (kind == U_VALID || kind == U_COPY) {
+                struct ua_ctx c = { U1[k].array, U1[k].f, u };
+                /* up to 3 elements: each one costs up to tens of microseconds (inversions) */
+                hostile_array(U1[k].array_name, &c, ua_call, ua_elem, -6.0, 4.0, 3);
+            } else {
+                size_t n = below(4);
+                double x[4] = { universe_arg(), universe_arg(), universe_arg(), universe_arg() };
+                double out[4] = { SENTINEL, SENTINEL, SENTINEL, SENTINEL };
+                int32_t st = U1[k].array(u, x, n, out);
+                record(U1[k].array_name, st);
+                int32_t want = kind == U_NULL ? RELICORE_ERROR_NULL_POINTER
+                                              : RELICORE_ERROR_INVALID_STRUCT;
+                if (kind == U_STORAGE_BAD) {
+                    for (size_t i = 0; i < n; i++) {
+                        check(out[i] != SENTINEL, "%s: element %zu not written", U1[k].array_name,
+                              i);
+                    }
+                } else {
+                    check(st == want, "%s on a universe of kind %d = %" PRId32, U1[k].array_name,
+                          (int)kind, st);
+                    for (size_t i = 0; i < n; i++) {
+                        check(isnan(out[i]), "%s on a refused universe: out[%zu] = %.17g",
+                              U1[k].array_name, i, out[i]);
+                    }
+                }
+            }
+        }
+        /* get_parameters */
+        struct relicore_universe_parameters back;
+        memset(&back, 0, sizeof back);
+        int nul = null_out();
+        int32_t st = relicore_universe_get_parameters(u, nul ? NULL : &back);
+        record("relicore_universe_get_parameters", st);
+        if (kind == U_NULL || nul) {
+            check(st == RELICORE_ERROR_NULL_POINTER, "get_parameters(NULL) = %" PRId32, st);
+        } else if (kind == U_VALID || kind == U_COPY || kind == U_STORAGE_BAD) {
+            check(documented(st), "get_parameters = %" PRId32, st);
+        } else {
+            check(st == RELICORE_ERROR_INVALID_STRUCT && isnan(back.h0_km_s_mpc) &&
+                      isnan(back.neutrino_masses_ev[2]) && isnan(back.helium_mass_fraction),
+                  "get_parameters on an unproduced universe = %" PRId32, st);
+        }
+    }
+}
+
+/* Parameters: ordinary ones, with up to three fields replaced by hostile values. */
+static void hostile_parameters(struct relicore_universe_parameters *p)
+{
+    int32_t st = relicore_universe_parameters_default(40.0 + 60.0 * uniform(), 1.5 * uniform(), p);
+    check(st == RELICORE_OK, "parameters_default = %" PRId32, st);
+    p->omega_baryon = p->omega_matter * uniform();
+    if (below(3) == 0) {
+        p->omega_curvature = uniform() - 0.5;
+    }
+    if (below(4) == 0) {
+        p->cmb_temperature_k = 0.0;
+    }
+    if (below(4) == 0) {
+        p->neutrino_masses_ev[0] = uniform();
+    }
+    if (below(4) == 0) {
+        p->w0 = -2.0 * uniform();
+        p->wa = 2.0 * uniform() - 1.0;
+    }
+    double *fields = &p->h0_km_s_mpc; /* twelve doubles in a row (static assertion below) */
+    /* 1 in 25 parameter sets gets only arbitrary values (often still valid: a build costs
+     * about a millisecond); the others also get one value that init must refuse (NaN, +-inf,
+     * or a negative H0, matter density, temperature, N_eff or helium fraction) */
+    unsigned edits = 1 + below(3);
+    for (unsigned e = 0; e < edits; e++) {
+        double v = any_double();
+        memcpy((char *)fields + sizeof(double) * below(12), &v, sizeof v);
+    }
+    if (below(25) != 0) {
+        static const double bad[] = { NAN, INFINITY, -INFINITY, -1.0, -1e-300 };
+        static const unsigned where[] = { 0, 1, 4, 5, 11 }; /* H0, Om, T0, N_eff, Y_p */
+        double v = bad[below(5)];
+        unsigned i = below(5);
+        memcpy((char *)fields + sizeof(double) * (isnan(v) || isinf(v) ? below(12) : where[i]),
+               &v, sizeof v);
+    }
+}
+
+_Static_assert(sizeof(struct relicore_universe_parameters) == 12 * sizeof(double),
+               "the parameter struct is twelve doubles");
+
+static void hostile_init(void)
+{
+    struct relicore_universe_parameters p;
+    for (long it = 0; it < g_iterations; it++) {
+        hostile_parameters(&p);
+        int nulp = below(20) == 0, nulo = below(20) == 0;
+        int32_t which = 99;
+        int32_t chk = relicore_universe_check_parameters(nulp ? NULL : &p, &which);
+        record("relicore_universe_check_parameters", chk);
+        check(which >= -1 && which <= 9, "check_parameters named parameter %" PRId32, which);
+        int32_t chk_null = relicore_universe_check_parameters(&p, NULL);
+        record("relicore_universe_check_parameters", chk_null);
+        check(chk_null == RELICORE_ERROR_NULL_POINTER, "check_parameters(NULL) = %" PRId32,
+              chk_null);
+        /* parameters_default copies any value, refuses only NULL */
+        double h = any_double(), m = any_double();
+        struct relicore_universe_parameters d;
+        int nul = null_out();
+        int32_t sd = relicore_universe_parameters_default(h, m, nul ? NULL : &d);
+        record("relicore_universe_parameters_default", sd);
+        if (nul) {
+            check(sd == RELICORE_ERROR_NULL_POINTER, "parameters_default(NULL) = %" PRId32, sd);
+        } else {
+            check(sd == RELICORE_OK && same_bits(d.h0_km_s_mpc, h) && same_bits(d.omega_matter, m),
+                  "parameters_default(%.17g, %.17g) = %" PRId32, h, m, sd);
+        }
+        memset(g_scratch, 0xa5, sizeof *g_scratch);
+        int32_t st = relicore_universe_init(nulp ? NULL : &p, nulo ? NULL : g_scratch);
+        record("relicore_universe_init", st);
+        if (nulp || nulo) {
+            check(st == RELICORE_ERROR_NULL_POINTER, "init with NULL = %" PRId32, st);
+            if (nulp && !nulo) {
+                check(g_scratch->tag == 0, "init(NULL params) did not clear the struct");
+            }
+            continue;
+        }
+        check(st == chk, "init = %" PRId32 " but check_parameters = %" PRId32, st, chk);
+        if (st == RELICORE_OK) {
+            double out = SENTINEL;
+            int32_t s2 = relicore_hubble_time_gyr(g_scratch, &out);
+            check(s2 == RELICORE_OK && isfinite(out) && out > 0.0, "a fresh universe: t_H = %.17g",
+                  out);
+            struct relicore_universe_parameters back;
+            s2 = relicore_universe_get_parameters(g_scratch, &back);
+            check(s2 == RELICORE_OK && memcmp(&back, &p, sizeof p) == 0,
+                  "get_parameters does not return what init got");
+        } else {
+            int clear = g_scratch->tag == 0;
+            for (size_t i = 0; i < RELICORE_UNIVERSE_STORAGE_WORDS && clear; i++) {
+                clear = g_scratch->storage[i] == 0;
+            }
+            check(clear, "a failed init (%" PRId32 ") did not clear the struct", st);
+            check(st == RELICORE_ERROR_INVALID_PARAMETER || st == RELICORE_ERROR_NO_BIG_BANG ||
+                      st == RELICORE_ERROR_NO_CONVERGENCE,
+                  "init = %" PRId32 ", not a code init documents", st);
+        }
+    }
+}
+
+/* ------------------------------------------------------------------------------------------ */
+/* Messages and version                                                                        */
+/* ------------------------------------------------------------------------------------------ */
+
+static void hostile_messages(void)
+{
+    for (long it = 0; it < g_iterations; it++) {
+        int32_t code = below(4) == 0 ? -(int32_t)below(20) : (int32_t)(uint32_t)next_u64();
+        const char *m = relicore_status_message(code);
+        record("relicore_status_message", RELICORE_OK);
+        check(m != NULL && m[0] != '\0', "status_message(%" PRId32 ") is empty", code);
+        if (m != NULL && documented(code)) {
+            check(strcmp(m, "unknown status") != 0, "documented code %" PRId32 " unknown", code);
+        }
+        const char *v = relicore_version();
+        record("relicore_version", RELICORE_OK);
+        char want[32];
+        snprintf(want, sizeof want, "%d.%d.%d", RELICORE_VERSION_MAJOR, RELICORE_VERSION_MINOR,
+                 RELICORE_VERSION_PATCH);
+        check(v != NULL && strcmp(v, want) == 0, "version %s, header %s", v ? v : "NULL", want);
+    }
+}
+
+/* ------------------------------------------------------------------------------------------ */
+
+static void build_valid_universes(void)
+{
+    const double om[NVALID] = { 0.3, 0.315, 0.3, 1.0, 0.25 };
+    const double ok[NVALID] = { 0.0, 0.0, 0.1, 0.0, -0.05 };
+    const double t0[NVALID] = { 2.7255, 2.7255, 2.7255, 0.0, 2.7255 };
+    const double m0[NVALID] = { 0.0, 0.06, 0.0, 0.0, 0.1 };
+    for (int i = 0; i < NVALID; i++) {
+        struct relicore_universe_parameters p;
+        relicore_universe_parameters_default(67.7, om[i], &p);
+        p.omega_curvature = ok[i];
+        p.cmb_temperature_k = t0[i];
+        p.neutrino_masses_ev[0] = m0[i];
+        if (i == 4) {
+            p.w0 = -0.9;
+            p.wa = 0.2;
+        }
+        g_valid[i] = malloc(sizeof *g_valid[i]);
+        if (g_valid[i] == NULL) {
+            exit(2);
+        }
+        int32_t st = relicore_universe_init(&p, g_valid[i]);
+        if (st != RELICORE_OK) {
+            fprintf(stderr, "cannot build universe %d: %s\n", i, relicore_status_message(st));
+            exit(2);
+        }
+        g_valid_params[i] = p;
+    }
+    g_scratch = malloc(sizeof *g_scratch);
+    if (g_scratch == NULL) {
+        exit(2);
+    }
+}
+
+int main(int argc, char **argv)
+{
+    for (int i = 1; i < argc; i++) {
+        if (strcmp(argv[i], "--calls") == 0 && i + 1 < argc) {
+            g_iterations = strtol(argv[++i], NULL, 10);
+        } else if (strcmp(argv[i], "--seed") == 0 && i + 1 < argc) {
+            g_rng = strtoull(argv[++i], NULL, 0) | 1u;
+        } else if (strcmp(argv[i], "--no-uninit") == 0) {
+            g_uninit = 0;
+        } else {
+            fprintf(stderr, "usage: %s [--calls N] [--seed S] [--no-uninit]\n", argv[0]);
+            return 2;
+        }
+    }
+    build_valid_universes();
+    hostile_messages();
+    hostile_blackbody_scalars();
+    hostile_blackbody_arrays();
+    hostile_calibration();
+    hostile_response();
+    hostile_init();
+    hostile_universe_functions();
+
+    printf("%-62s %9s %9s  statuses (code:count)\n", "function", "calls", "ok");
+    long fewest = -1;
+    for (int i = 0; i < g_nstats; i++) {
+        const struct stats *s = &g_stats[i];
+        printf("%-62s %9ld %9ld ", s->name, s->calls, s->status[0]);
+        for (int c = 1; c < NCODES; c++) {
+            if (s->status[c]) {
+                printf(" %d:%ld", -c, s->status[c]);
+            }
+        }
+        printf("\n");
+        if (fewest < 0 || s->calls < fewest) {
+            fewest = s->calls;
+        }
+    }
+    long totals[NCODES] = { 0 };
+    for (int i = 0; i < g_nstats; i++) {
+        for (int c = 0; c < NCODES; c++) {
+            totals[c] += g_stats[i].status[c];
+        }
+    }
+    printf("statuses over all calls:");
+    for (int c = 0; c < NCODES; c++) {
+        if (totals[c]) {
+            printf(" %d:%ld", -c, totals[c]);
+        }
+    }
+    printf("\n");
+    check(fewest >= g_iterations, "a function was called only %ld times (< %ld)", fewest,
+          g_iterations);
+    free(g_scratch);
+    for (int i = 0; i < NVALID; i++) {
+        free(g_valid[i]);
+    }
+    printf("hostile: %ld calls to %d functions (each at least %ld times), %ld checks: %ld passed, "
+           "%ld failed\n",
+           g_calls, g_nstats, fewest, g_checks, g_checks - g_failed, g_failed);
+    printf("%ld passed, %ld failed\n", g_checks - g_failed, g_failed);
+    return g_failed == 0 ? 0 : 1;
+}
