@@ -1,13 +1,16 @@
 //! Property tests of the public numerical kernels (`relicore::math`), issue 5: the quadrature
 //! and the root finders, given arbitrary limits, tolerances and brackets (NaN, ±∞, ±0,
 //! subnormals, huge values), return `Ok` with a finite value or an `Err`, never panic; and on
-//! valid inputs they meet closed forms: ∫ₐᵇ cos = sin b − sin a, the root of x³ − c is ∛c.
+//! valid inputs they meet closed forms: ∫ₐᵇ cos = sin b − sin a, the root of x³ − c is ∛c. The
+//! exponentials (which return ±∞, 0 and NaN like any `exp`) keep their documented edges and
+//! agree with the platform's `exp`/`expm1` (glibc, correctly rounded in practice) within 1 ulp
+//! each, so within 2 ulp of each other.
 
 mod proptest_support;
 
 use proptest::prelude::*;
-use proptest_support::{any64, cases, close, contract, ok};
-use relicore::math::{dd, quadrature, roots};
+use proptest_support::{any32, any64, cases, close, contract, ok};
+use relicore::math::{dd, exp, quadrature, roots};
 
 proptest! {
     #![proptest_config(cases(1000))]
@@ -39,10 +42,43 @@ proptest! {
         }
         let _ = dd::fast_two_sum(a, b);
         let _ = dd::two_prod(a, b);
+        let _ = dd::two_prod_masked(a, b);
         let _ = dd::mul_dd_d(a, b, c);
         let _ = dd::mul_dd_dd(a, b, c, d);
         let _ = dd::div_dd_dd(a, b, c, d);
         let _ = dd::div_d_d(a, b);
+    }
+
+    #[test]
+    fn exponentials_on_any_input(x in any64(), xl in any64(), x32 in any32()) {
+        let ln_max = f64::MAX.ln();
+        for (what, e, want) in [("exp", exp::exp(x), x.exp()), ("exp_m1", exp::exp_m1(x), x.exp_m1())] {
+            prop_assert_eq!(e.is_nan(), x.is_nan(), "{}({:e}) = {:e}", what, x, e);
+            if x.is_nan() {
+                continue;
+            }
+            if x > ln_max {
+                prop_assert!(e == f64::INFINITY, "{}({:e}) = {:e} above ln MAX", what, x, e);
+            } else if x < ln_max - 1.0 {
+                prop_assert!(e.is_finite(), "{}({:e}) = {:e}", what, x, e);
+            }
+            // within 2 ulp of the platform's function (1 ulp each)
+            if want.is_finite() && want != 0.0 && e.is_finite() {
+                let ulp = (want.abs() * f64::EPSILON).max(f64::from_bits(1));
+                prop_assert!((e - want).abs() <= 2.0 * ulp, "{}({:e}) = {:e}, platform {:e}", what, x, e, want);
+            }
+        }
+        // double-length forms: any low part (even outside the documented few ulp of xh), no
+        // panic; a NaN high part gives NaN
+        let d = exp::exp_dd(x, xl);
+        let m = exp::exp_m1_dd(x, xl);
+        if x.is_nan() {
+            prop_assert!(d.is_nan() && m.is_nan());
+        }
+        let f = exp::exp(x32);
+        prop_assert_eq!(f.is_nan(), x32.is_nan());
+        let g = exp::exp_m1(x32);
+        prop_assert_eq!(g.is_nan(), x32.is_nan());
     }
 
     /// ∫ₐᵇ cos x dx = sin b − sin a (closed form), to the requested 1e-13 relative plus the
