@@ -9,7 +9,7 @@ PY := $(VENV)/bin/python
 export PYO3_PYTHON := $(abspath $(PY))
 PREFIX ?= /usr/local
 
-.PHONY: all deps test demo bench install fmt-check clippy rust-test nostd c-test fortran-test python-build python-test bench-build coverage clean
+.PHONY: all deps test demo bench install fmt-check clippy rust-test nostd c-test fortran-test python-build python-test bench-build coverage miri clean
 
 all: test
 
@@ -31,7 +31,7 @@ $(VENV)/.stamp: requirements-dev.txt
 	touch $@
 
 # ---------------------------------------------------------------- tests
-test: deps fmt-check clippy rust-test nostd c-test fortran-test python-test bench-build coverage
+test: deps fmt-check clippy rust-test nostd c-test fortran-test python-test bench-build coverage miri
 	@echo "make test: all steps passed"
 
 fmt-check:
@@ -65,6 +65,18 @@ bench-build:
 
 coverage: deps
 	$(PY) tests/coverage_guard.py
+
+# The C crate's unit tests under miri (undefined behaviour in the unsafe FFI code: pointer
+# reads and writes, the universe storage), where a nightly toolchain with the miri component is
+# installed; detected, never installed. The header tests are skipped (they run cbindgen).
+miri:
+	@installed=$$(rustup component list --toolchain nightly --installed 2>/dev/null || true); \
+	if printf '%s\n' "$$installed" | grep -q '^miri'; then \
+	  echo "miri: cargo +nightly miri test -p relicore-capi --lib"; \
+	  MIRIFLAGS=-Zmiri-disable-isolation cargo +nightly miri test -p relicore-capi --lib -- --skip header::; \
+	else \
+	  echo "miri: skipped (no nightly toolchain with the miri component installed)"; \
+	fi
 
 # ---------------------------------------------------------------- demo and benches
 demo: deps python-build
