@@ -9,6 +9,8 @@
  *    (stable, never reused); relicore_status_message() turns it into text;
  *  - on failure every output is NaN (every field of a struct); array forms set only the
  *    failing elements to NaN, compute the others and return the first failing element's code;
+ *  - a success always writes a finite value: finite arguments whose result a double (float)
+ *    cannot hold, or cannot be formed in it, give RELICORE_ERROR_OUT_OF_DOMAIN;
  *  - every pointer is checked for NULL; no function allocates, keeps global state or panics
  *    across the boundary; all are thread-safe.
  * Units are SI (m, Hz, m^-1, K, W, sr) unless the name says otherwise (cosmology: _mpc,
@@ -936,7 +938,7 @@ int32_t relicore_band_radiance_frequency(double lower_hz,
  * may be +∞); `RELICORE_ERROR_NEGATIVE` for a lower edge < 0; `RELICORE_ERROR_EMPTY_INTERVAL` for
  * upper ≤ lower; `RELICORE_ERROR_NON_POSITIVE` for radiance ≤ 0; `RELICORE_ERROR_OUT_OF_DOMAIN`
  * when no temperature between about 1e-120 and 1e120 K reproduces it;
- * `RELICORE_ERROR_NO_CONVERGENCE` (not seen in testing).
+ * `RELICORE_ERROR_NO_CONVERGENCE` (seen only for arguments far outside physical ones).
  *
  * Accuracy: round trip within 1e-14 relative against mpmath root finding.
  *
@@ -1034,7 +1036,7 @@ int32_t relicore_rayleigh_jeans_temperature(double frequency_hz,
  * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
  * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0; `RELICORE_ERROR_OUT_OF_DOMAIN` when the ratio
  * is one no blackbody can produce (for λ₁ < λ₂ it must lie in (0, (λ₂/λ₁)⁴)) or λ₁ = λ₂;
- * `RELICORE_ERROR_NO_CONVERGENCE` (not seen in testing).
+ * `RELICORE_ERROR_NO_CONVERGENCE` (seen only for arguments far outside physical ones).
  *
  * Accuracy: within 1e-13 relative against mpmath for |x₁ − x₂| ≥ 0.5.
  *
@@ -1975,7 +1977,8 @@ int32_t relicore_universe_parameters_default(double h0_km_s_mpc,
  * `relicore_universe_check_parameters`); `RELICORE_ERROR_NO_BIG_BANG` when E(z)² ≤ 0
  * somewhere between today and a → 0 (checked on 4097 points of a logarithmic grid in a from
  * 1e-30 to 1 and on every node of the distance table); `RELICORE_ERROR_NO_CONVERGENCE` if a
- * quadrature of the table fails (not seen in testing).
+ * quadrature of the table fails (seen only for parameters far outside physical ones, such as
+ * Ω_m in the hundreds or |Ω_k|, N_eff or |wa| in the thousands and more).
  *
  * Cost: a few thousand quadratures (of the order of a millisecond); allocates nothing.
  *

@@ -277,7 +277,7 @@ pub fn band_radiance_frequency<T: Real>(lower_hz: T, upper_hz: T, temperature_k:
 ///
 /// Returns K. Errors as [`band_fraction_wavelength`], `NonPositive(2)` for radiance ≤ 0,
 /// `OutOfDomain(2)` when no temperature between about 1e-120 and 1e120 K reproduces it,
-/// `NoConvergence` (not seen in testing).
+/// `NoConvergence` (seen only for arguments far outside physical ones).
 ///
 /// Method: safeguarded Newton on ln L(T) with the exact derivative
 /// dL/dT = (4L + K T⁴ (x_a f(x_a) − x_b f(x_b)))/T, f(t) = t³/(eᵗ−1), started from the

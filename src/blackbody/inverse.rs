@@ -108,7 +108,8 @@ fn ln_expm1<T: Real>(x: T) -> T {
 ///
 /// Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`; `OutOfDomain(2)` when the ratio is one
 /// no blackbody can produce (for λ₁ < λ₂, B₁/B₂ lies in (0, (λ₂/λ₁)⁴), the upper limit being
-/// the Rayleigh-Jeans limit T → ∞); `OutOfDomain(1)` when λ₁ = λ₂; `NoConvergence` (not seen in testing).
+/// the Rayleigh-Jeans limit T → ∞); `OutOfDomain(1)` when λ₁ = λ₂; `NoConvergence` (seen only for
+/// arguments far outside physical ones, such as subnormal wavelengths).
 ///
 /// Method: safeguarded Newton in u = 1/T on ln(B₁/B₂), which is nearly linear in u, started
 /// from the Wien-approximation solution.

@@ -112,7 +112,9 @@ impl<T: Real> Universe<T> {
     /// positive mass with T0 = 0 (no neutrino background), massive neutrinos denser today than
     /// Ω_m, Y_p outside [0, 1); `NoBigBang` when E(z)² ≤ 0 somewhere between today and a → 0
     /// (checked on the 4096 points of a logarithmic grid in a from 1e-30 to 1 and on every node
-    /// of the distance table).
+    /// of the distance table); `NoConvergence` when a quadrature of the distance table fails
+    /// (seen only for parameters far outside physical ones, such as Ω_m in the hundreds or
+    /// |Ω_k|, N_eff or |wa| in the thousands and more).
     ///
     /// Reference: the Friedmann equation with radiation, massive neutrinos (see
     /// [`dimensionless_hubble`](Self::dimensionless_hubble)), curvature and w0–wa dark energy

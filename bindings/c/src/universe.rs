@@ -287,7 +287,8 @@ pub unsafe extern "C" fn relicore_universe_parameters_default(
 /// `relicore_universe_check_parameters`); `RELICORE_ERROR_NO_BIG_BANG` when E(z)² ≤ 0
 /// somewhere between today and a → 0 (checked on 4097 points of a logarithmic grid in a from
 /// 1e-30 to 1 and on every node of the distance table); `RELICORE_ERROR_NO_CONVERGENCE` if a
-/// quadrature of the table fails (not seen in testing).
+/// quadrature of the table fails (seen only for parameters far outside physical ones, such as
+/// Ω_m in the hundreds or |Ω_k|, N_eff or |wa| in the thousands and more).
 ///
 /// Cost: a few thousand quadratures (of the order of a millisecond); allocates nothing.
 ///
