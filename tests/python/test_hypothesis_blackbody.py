@@ -389,6 +389,20 @@ def test_the_tables_cover_the_module():
 # --- the GIL ---------------------------------------------------------------------------------
 
 
+
+def long_enough(make_call, n: int, seconds: float = 0.1, cap: int = 1 << 24):
+    """A call over an array large enough that one call keeps the GIL released for at least
+    `seconds` (so a busy scheduler cannot make the helper thread miss every window). The size is
+    chosen by running the call; no time is asserted."""
+    while True:
+        call = make_call(n)
+        t0 = time.perf_counter()
+        call()
+        if time.perf_counter() - t0 >= seconds or n >= cap:
+            return call
+        n *= 4
+
+
 def runs_alongside(work, attempts: int = 30) -> bool:
     """Whether a second Python thread executes bytecode while `work()` runs in the main thread.
 
@@ -440,13 +454,16 @@ PHYSICAL = {
 def test_every_array_loop_releases_the_gil(name):
     argnames = ELEMENTWISE[name]
     n = 20_000 if name in SLOW else 400_000
-    # the first argument varies over the array (so nothing is a broadcast scalar)
-    first = np.linspace(0.5, 1.5, n) * PHYSICAL[argnames[0]]
     rest = [PHYSICAL[a] for a in argnames[1:]]
-    if name == "band_radiance_frequency" or name.startswith("band_") or name == "temperature_from_band_radiance_wavelength":
-        first = np.linspace(0.5, 1.0, n) * PHYSICAL[argnames[0]]
-    call = getattr(bb, name)
-    assert runs_alongside(lambda: call(first, *rest, nan_on_error=True)), f"{name}: the GIL was held"
+    fn = getattr(bb, name)
+    top = 1.0 if name.startswith("band_") or name == "temperature_from_band_radiance_wavelength" else 1.5
+
+    def make_call(size):
+        # the first argument varies over the array (so nothing is a broadcast scalar)
+        first = np.linspace(0.5, top, size) * PHYSICAL[argnames[0]]
+        return lambda: fn(first, *rest, nan_on_error=True)
+
+    assert runs_alongside(long_enough(make_call, n)), f"{name}: the GIL was held"
 
 
 def test_table_and_calibration_loops_release_the_gil():

@@ -29,6 +29,7 @@ from test_hypothesis_blackbody import (
     SETTINGS,
     VALUES,
     check_elementwise,
+    long_enough,
     mismatched_shapes,
     runs_alongside,
     same_bits,
@@ -256,7 +257,11 @@ TARGET = {"redshift_at_age_gyr": 5.0, "redshift_at_lookback_time_gyr": 5.0,
 def test_every_array_loop_releases_the_gil(name):
     u = UNIVERSES[1]
     n = 2_000 if name in SLOW else 400_000
-    x = np.linspace(0.5, 1.5, n) * TARGET.get(name, 1.0)
     rest = [3.0] * (len(METHODS[name]) - 1)
-    call = getattr(u, name)
-    assert runs_alongside(lambda: call(x, *rest, nan_on_error=True)), f"{name}: the GIL was held"
+    fn = getattr(u, name)
+
+    def make_call(size):
+        x = np.linspace(0.5, 1.5, size) * TARGET.get(name, 1.0)
+        return lambda: fn(x, *rest, nan_on_error=True)
+
+    assert runs_alongside(long_enough(make_call, n)), f"{name}: the GIL was held"
