@@ -257,11 +257,6 @@ NOT_NUMBERS = [
 ]
 
 
-@pytest.mark.xfail(
-    strict=True,
-    reason="face gap (reported with issue 5): relicore.blackbody converts complex (with only a "
-    "ComplexWarning), datetime64, timedelta64 and text arrays to float64 and computes on them",
-)
 @pytest.mark.parametrize("bad", NOT_NUMBERS, ids=lambda a: a.dtype.name)
 def test_arrays_that_are_not_numbers_are_refused_naming_the_argument(bad):
     with warnings.catch_warnings():
@@ -294,11 +289,6 @@ def test_shapes_that_do_not_broadcast_raise_value_error(name, data):
         getattr(bb, name)(*args, nan_on_error=True)
 
 
-@pytest.mark.xfail(
-    strict=True,
-    reason="face gap (reported with issue 5): shapes that do not broadcast raise numpy's "
-    "ValueError ('arg 0 with shape (3,)'), not RelicoreError naming the argument",
-)
 def test_shapes_that_do_not_broadcast_name_the_argument():
     with pytest.raises(relicore.RelicoreError) as info:
         bb.spectral_radiance_wavelength(np.ones(3) * 1e-5, np.ones(4) * 300.0)

@@ -131,11 +131,6 @@ def test_integer_and_narrow_float_dtypes_are_converted_to_float64(name, data):
         assert same_bits(call(arr, *rest), want)
 
 
-@pytest.mark.xfail(
-    strict=True,
-    reason="face gap (reported with issue 5): Universe methods convert complex (with only a "
-    "ComplexWarning), datetime64, timedelta64 and text arrays to float64 and compute on them",
-)
 @pytest.mark.parametrize("bad", NOT_NUMBERS, ids=lambda a: a.dtype.name)
 def test_arrays_that_are_not_numbers_are_refused_naming_the_argument(bad):
     u = UNIVERSES[0]
@@ -158,11 +153,6 @@ def test_redshifts_that_do_not_broadcast_raise_value_error(data):
         UNIVERSES[0].angular_diameter_distance_between_mpc(*args, nan_on_error=True)
 
 
-@pytest.mark.xfail(
-    strict=True,
-    reason="face gap (reported with issue 5): redshifts that do not broadcast raise numpy's "
-    "ValueError, not RelicoreError naming the argument",
-)
 def test_redshifts_that_do_not_broadcast_name_the_argument():
     with pytest.raises(relicore.RelicoreError) as info:
         UNIVERSES[0].angular_diameter_distance_between_mpc(np.ones(3), np.ones(4))

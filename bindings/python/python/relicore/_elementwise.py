@@ -25,3 +25,45 @@ def operand(a: np.ndarray[Any, Any], shape: tuple[int, ...]) -> np.ndarray[Any, 
     if a.shape != shape:
         a = np.broadcast_to(a, shape)
     return contiguous(a).reshape(-1)
+
+
+# numpy dtype kinds that are real numbers: bool, signed and unsigned integers, floats
+_REAL_KINDS = "biuf"
+
+
+def _error(message: str, function: str, argument: str) -> Exception:
+    from relicore import RelicoreError
+
+    err = RelicoreError(message)
+    err.function = function  # type: ignore[attr-defined]
+    err.argument = argument  # type: ignore[attr-defined]
+    err.index = None  # type: ignore[attr-defined]
+    err.status = None  # type: ignore[attr-defined]
+    return err
+
+
+def float_arrays(
+    function: str, names: tuple[str, ...] | list[str], args: tuple[Any, ...]
+) -> tuple[list[np.ndarray[Any, Any]], tuple[int, ...]]:
+    """The element-wise arguments as float64 arrays and their broadcast shape.
+
+    Raises RelicoreError naming the argument when an input is not made of real numbers
+    (complex, datetime64, timedelta64, text or object arrays are refused, not converted) or when
+    its shape does not broadcast with the arguments before it."""
+    arrays = []
+    for name, a in zip(names, args):
+        raw = np.asarray(a)
+        if raw.dtype.kind not in _REAL_KINDS:
+            raise _error(f"{function}: {name} has dtype {raw.dtype}: real numbers are required", function, name)
+        arrays.append(raw.astype(np.float64, copy=False))
+    shape: tuple[int, ...] = ()
+    for name, a in zip(names, arrays):
+        try:
+            shape = np.broadcast_shapes(shape, a.shape)
+        except ValueError:
+            raise _error(
+                f"{function}: {name} has shape {a.shape}, which does not broadcast with {shape}",
+                function,
+                name,
+            ) from None
+    return arrays, shape

@@ -42,17 +42,18 @@ import numpy as np
 from relicore import _native
 from relicore._elementwise import SCALAR_TYPES as _SCALAR_TYPES
 from relicore._elementwise import contiguous as _contiguous
+from relicore._elementwise import float_arrays as _float_arrays
 from relicore._elementwise import operand as _operand
 from relicore._native import TwoLoadCalibration
 
 _K = {name: _native.kernel(name) for name, _ in _native.kernel_signatures() if name != "two_load_calibration"}
+_ARGS = dict(_native.kernel_signatures())
 
 
 def _apply(kernel: Any, args: tuple[Any, ...], nan_on_error: bool) -> Any:
     if all(isinstance(a, _SCALAR_TYPES) for a in args):
         return kernel.call(args, nan_on_error)
-    arrays = [np.asarray(a, dtype=np.float64) for a in args]
-    shape = np.broadcast_shapes(*(a.shape for a in arrays))
+    arrays, shape = _float_arrays(kernel.name, _ARGS[kernel.name], args)
     out = np.empty(shape, dtype=np.float64)
     kernel.map([_operand(a, shape) for a in arrays], out.reshape(-1), shape, nan_on_error)
     return out

@@ -43,19 +43,19 @@ from typing import Any
 import numpy as np
 
 from relicore import _native
-from relicore._elementwise import SCALAR_TYPES, operand
+from relicore._elementwise import SCALAR_TYPES, float_arrays, operand
 
 __all__ = ["Universe"]
 
 _M = {name: _native.universe_method(name) for name, _ in _native.universe_method_signatures()}
+_ARGS = dict(_native.universe_method_signatures())
 _D: dict[str, Any] = dict(_native.universe_defaults())
 
 
 def _apply(universe: Any, method: Any, args: tuple[Any, ...], nan_on_error: bool) -> Any:
     if all(isinstance(a, SCALAR_TYPES) for a in args):
         return method.call(universe, args, nan_on_error)
-    arrays = [np.asarray(a, dtype=np.float64) for a in args]
-    shape = np.broadcast_shapes(*(a.shape for a in arrays))
+    arrays, shape = float_arrays(method.name, _ARGS[method.name], args)
     out = np.empty(shape, dtype=np.float64)
     method.map(universe, [operand(a, shape) for a in arrays], out.reshape(-1), shape, nan_on_error)
     return out
