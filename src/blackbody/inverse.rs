@@ -157,37 +157,7 @@ pub fn ratio_temperature<T: Real>(
     if !(u0 > T::zero()) || !u0.is_finite() {
         u0 = T::c(1e-3);
     }
-    // bracket in u; g(u) has the sign of (ln ρ(u) − target), monotone in u
-    let sign_at = |v: T| v > T::zero();
-    let g0 = g(u0).0;
-    if g0.is_nan() {
-        return Err(Error::NoConvergence);
-    }
-    if g0 == T::zero() {
-        return finite_result(T::one() / u0, 2);
-    }
-    let (mut lo, mut hi) = (u0, u0);
-    let want_down = sign_at(g0) == increasing_in_u_is_down; // need larger u to reach the root
-    let mut n = 0;
-    if want_down {
-        while sign_at(g(hi).0) == sign_at(g0) {
-            lo = hi;
-            hi = hi * T::c(2.0);
-            n += 1;
-            if n > 400 || !hi.is_finite() {
-                return Err(Error::OutOfDomain(2));
-            }
-        }
-    } else {
-        while sign_at(g(lo).0) == sign_at(g0) {
-            hi = lo;
-            lo = lo * T::c(0.5);
-            n += 1;
-            if n > 400 || lo == T::zero() {
-                return Err(Error::OutOfDomain(2));
-            }
-        }
-    }
-    let u = roots::bracketed_newton(g, lo, hi, T::c(2.0) * T::epsilon() * lo, 200)?;
+    // g(u) = ln ρ(u) − target is monotone in u: decreasing when λ1 < λ2
+    let u = roots::solve_monotone_positive(g, u0, !increasing_in_u_is_down, 2)?;
     finite_result(T::one() / u, 2)
 }

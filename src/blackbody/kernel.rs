@@ -201,9 +201,8 @@ pub(crate) fn invert_increasing<T: Real, F: FnMut(T) -> (T, T)>(
     guess: T,
     domain_arg: u8,
 ) -> crate::Result<T> {
-    use crate::Error;
     let ln_target = target.ln();
-    let mut g = |t: T| {
+    let g = |t: T| {
         let (v, dv) = f(t);
         (v.ln() - ln_target, dv / v)
     };
@@ -212,38 +211,7 @@ pub(crate) fn invert_increasing<T: Real, F: FnMut(T) -> (T, T)>(
     } else {
         T::one()
     };
-    let two = T::c(2.0);
-    let half = T::c(0.5);
-    let (mut lo, mut hi) = (guess, guess);
-    let g0 = g(guess).0;
-    if g0.is_nan() {
-        return Err(Error::NoConvergence);
-    }
-    if g0 == T::zero() {
-        return Ok(guess);
-    }
-    if g0 > T::zero() {
-        let mut n = 0;
-        while g(lo).0 > T::zero() {
-            hi = lo;
-            lo = lo * half;
-            n += 1;
-            if n > 400 || lo == T::zero() {
-                return Err(Error::OutOfDomain(domain_arg));
-            }
-        }
-    } else {
-        let mut n = 0;
-        while g(hi).0 < T::zero() {
-            lo = hi;
-            hi = hi * two;
-            n += 1;
-            if n > 400 || !hi.is_finite() {
-                return Err(Error::OutOfDomain(domain_arg));
-            }
-        }
-    }
-    crate::math::roots::bracketed_newton(g, lo, hi, T::c(2.0) * T::epsilon() * lo, 200)
+    crate::math::roots::solve_monotone_positive(g, guess, true, domain_arg)
 }
 
 /// ln(1 + a/b) for a, b > 0 without overflow or underflow of the quotient: the argument of the

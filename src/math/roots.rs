@@ -32,6 +32,68 @@ where
     newton_core(f, lo, hi, |x: T| rel_tol * x.abs(), max_iter)
 }
 
+/// Finds the root of a monotone f on (0, ∞), starting from a positive `guess`: the bracket
+/// grows from the guess by factors of 2 (at most 400 times each way) until f changes sign, then
+/// [`bracketed_newton`] polishes the root to about 2 ulp. `increasing` says whether f increases
+/// with x; `f` returns (f(x), f'(x)).
+///
+/// Errors: `NoConvergence` when f(guess) is NaN or the polish fails; `OutOfDomain(domain_arg)`
+/// when no sign change lies within a factor 2^400 of the guess (or x reaches 0 or ∞).
+pub fn solve_monotone_positive<T: Real, F>(
+    mut f: F,
+    guess: T,
+    increasing: bool,
+    domain_arg: u8,
+) -> Result<T>
+where
+    F: FnMut(T) -> (T, T),
+{
+    // the root lies above x when f(x) is on the "low" side of zero for its monotonicity
+    let root_above = |v: T| {
+        if increasing {
+            v < T::zero()
+        } else {
+            v > T::zero()
+        }
+    };
+    let root_below = |v: T| {
+        if increasing {
+            v > T::zero()
+        } else {
+            v < T::zero()
+        }
+    };
+    let f0 = f(guess).0;
+    if f0.is_nan() {
+        return Err(Error::NoConvergence);
+    }
+    if f0 == T::zero() {
+        return Ok(guess);
+    }
+    let (mut lo, mut hi) = (guess, guess);
+    let mut n = 0;
+    if root_above(f0) {
+        while root_above(f(hi).0) {
+            lo = hi;
+            hi = hi * T::c(2.0);
+            n += 1;
+            if n > 400 || !hi.is_finite() {
+                return Err(Error::OutOfDomain(domain_arg));
+            }
+        }
+    } else {
+        while root_below(f(lo).0) {
+            hi = lo;
+            lo = lo * T::c(0.5);
+            n += 1;
+            if n > 400 || lo == T::zero() {
+                return Err(Error::OutOfDomain(domain_arg));
+            }
+        }
+    }
+    bracketed_newton(f, lo, hi, T::c(2.0) * T::epsilon() * lo, 200)
+}
+
 fn newton_core<T: Real, F, G>(mut f: F, lo: T, hi: T, tol: G, max_iter: u32) -> Result<T>
 where
     F: FnMut(T) -> (T, T),
