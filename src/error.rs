@@ -50,6 +50,10 @@ pub enum Error {
     /// loitering universe), so ages and distances to high redshift do not exist.
     #[error("the model has no big bang: E(z)^2 <= 0 on the way back")]
     NoBigBang,
+    /// A fixed-capacity table (a thermal history) has too few nodes for what the argument
+    /// given asks of it (the highest redshift of the history).
+    #[error("the table capacity is too small for argument {0}")]
+    CapacityTooSmall(u8),
 }
 
 impl Error {
@@ -65,7 +69,8 @@ impl Error {
             | Error::NotIncreasing(a)
             | Error::DegenerateCalibration(a)
             | Error::OutOfDomain(a)
-            | Error::InvalidParameter(a) => Some(a),
+            | Error::InvalidParameter(a)
+            | Error::CapacityTooSmall(a) => Some(a),
             Error::NoConvergence | Error::NoBigBang => None,
         }
     }

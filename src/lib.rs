@@ -10,7 +10,7 @@
 //! * Every function returns [`Result`]; bad input is an [`Error`] naming the argument, never a
 //!   panic or a silent number.
 //!
-//! Topics available now: [`blackbody`], [`cosmology`]. Constants: [`constants`]. Numerical kernels shared by
+//! Topics: [`blackbody`], [`cosmology`], [`decoupling`]. Constants: [`constants`]. Numerical kernels shared by
 //! every topic: [`math`].
 //!
 //! # Cautions
@@ -42,6 +42,7 @@ pub mod blackbody;
 mod check;
 pub mod constants;
 pub mod cosmology;
+pub mod decoupling;
 mod error;
 pub mod math;
 mod real;
