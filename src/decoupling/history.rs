@@ -150,8 +150,32 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
     /// nodes up to z = 10⁴ (at most 10⁴ for N = [`HISTORY_NODES`]); `NoConvergence` if the
     /// integration fails (not seen for physical parameters).
     pub fn new(universe: &Universe<T>, options: HistoryOptions<T>) -> Result<Self> {
+        let mut h = Self::blank(universe)?;
+        h.compute(options)?;
+        Ok(h)
+    }
+
+    /// As [`new`](Self::new), writing into an existing value instead of returning a new one (no
+    /// large temporary on the stack: the form for small stacks and for the C face). On error
+    /// the value is left holding an incomplete history and must not be queried.
+    pub fn compute_in_place(
+        &mut self,
+        universe: &Universe<T>,
+        options: HistoryOptions<T>,
+    ) -> Result<()> {
+        self.universe = universe.clone();
+        self.species = Species::new(universe)?;
+        self.reion_on = 0;
+        self.reion_z = T::zero();
+        self.reion_y = T::zero();
+        self.reion_dy = T::one();
+        self.tau_reion_total = T::zero();
+        self.compute(options)
+    }
+
+    fn blank(universe: &Universe<T>) -> Result<Self> {
         let species = Species::new(universe)?;
-        let mut h = Self {
+        Ok(Self {
             universe: universe.clone(),
             species,
             reion_on: 0,
@@ -179,9 +203,7 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
             z_thermal: T::zero(),
             tau_reion_total: T::zero(),
             stats: [0; 3],
-        };
-        h.compute(options)?;
-        Ok(h)
+        })
     }
 
     fn compute(&mut self, options: HistoryOptions<T>) -> Result<()> {
@@ -792,28 +814,10 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
         self.tau_reion_total
     }
 
-    /// Highest redshift of the table.
-    pub fn highest_redshift(&self) -> T {
-        self.top_z
-    }
-
-    /// The reionisation redshift, if reionisation was requested.
-    pub fn reionization_redshift(&self) -> Option<T> {
-        if self.reion_on != 0 {
-            Some(self.reion_z)
-        } else {
-            None
-        }
-    }
-
-    /// The universe the history was computed for.
-    pub fn universe(&self) -> &Universe<T> {
-        &self.universe
-    }
-
     /// Work done by the stepper: (accepted steps, rejected steps, evaluations of the
     /// equations).
-    pub fn stepper_statistics(&self) -> (u32, u32, u32) {
+    #[cfg(test)]
+    pub(crate) fn stepper_statistics(&self) -> (u32, u32, u32) {
         let [a, r, e] = self.stats;
         (a, r, e)
     }
