@@ -109,6 +109,23 @@ pub struct ThermalHistory<T, const N: usize = HISTORY_NODES> {
     stats: [u32; 3],
 }
 
+/// The state-independent quantities of the equations at one u = ln(1+z).
+#[derive(Clone, Copy)]
+struct Background<T> {
+    u: T,
+    ln_s: [T; 3],
+    /// H in s⁻¹, n_H in m⁻³, T_r in K.
+    hub: T,
+    n_h: T,
+    t_r: T,
+    alpha_r: T,
+    beta: T,
+    ionise: T,
+    compton: T,
+    /// λ_α³/(8πH).
+    escape: T,
+}
+
 /// Cubic Hermite interpolation on [0, 1]: value, derivative and second derivative in the
 /// node variable, with spacing `h` and end values/slopes (p0, m0), (p1, m1).
 #[inline]
@@ -254,38 +271,58 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
         self.species.h0_si * e
     }
 
-    /// The balance, dx_p/du and dθ/du at (u, x_p, θ).
-    fn equations(&self, u: T, xp: T, theta: T) -> Result<(Balance<T>, T, T)> {
+    /// The state-independent part of the equations at u.
+    fn background(&self, u: T) -> Background<T> {
         let s = &self.species;
-        if !(xp > T::zero()) || !(theta > T::zero()) {
-            return Err(Error::NoConvergence);
-        }
         let ln_s = s.ln_saha_factors(u);
         let [ln_sh, _, _] = ln_s;
-        let b = electron_balance(s.f_he, Hydrogen::Fixed(xp), ln_s)?;
         let hub = self.hubble_si(u);
         let zp1 = u.exp();
         let z3 = zp1 * zp1 * zp1;
-        let n_h = s.n_h0 * z3;
         let t_r = s.t0 * zp1;
-        let t_m = theta * t_r;
-        let alpha_m = Species::alpha(t_m);
         let alpha_r = Species::alpha(t_r);
         // β = α(T_r) (2π m_e k T_r/h²)^{3/2} e^{−B₂/kT_r}, B₂ = χ_H/4
-        let inv_t = T::one() / t_r;
         let beta = alpha_r
-            * (s.ln_saha_density_free + T::c(1.5) * t_r.ln() - T::c(0.25) * s.chi_h * inv_t).exp();
-        let n1s = n_h * (T::one() - xp).max(T::zero());
-        let kf = s.lyman_k / hub;
+            * (s.ln_saha_density_free + T::c(1.5) * t_r.ln() - T::c(0.25) * s.chi_h / t_r).exp();
+        Background {
+            u,
+            ln_s,
+            hub,
+            n_h: s.n_h0 * z3,
+            t_r,
+            alpha_r,
+            beta,
+            // β e^{−E_α/kT_r} = α(T_r) n_H S_H: the photoionisation term per neutral atom / n_H
+            ionise: alpha_r * ln_sh.exp(),
+            compton: s.compton0 * z3 * zp1,
+            escape: s.lyman_k / hub,
+        }
+    }
+
+    /// dx_p/du and dθ/du at (x_p, θ) with the background `bg` and the balance `b` at x_p.
+    fn rates(&self, bg: &Background<T>, b: &Balance<T>, xp: T, theta: T) -> (T, T) {
+        let s = &self.species;
+        let alpha_m = Species::alpha(theta * bg.t_r);
+        let n1s = bg.n_h * (T::one() - xp).max(T::zero());
         let lam = T::c(super::species::TWO_PHOTON_RATE);
-        let c = (T::one() + kf * lam * n1s) / (T::one() + kf * (lam + beta) * n1s);
-        // β (1 − x_p) e^{−E_α/kT_r} = α(T_r) n_H S_H (1 − x_p)
-        let ionise = alpha_r * ln_sh.exp() * (T::one() - xp);
-        let dxp_dt = -c * n_h * (alpha_m * b.x_e * xp - ionise);
-        let gamma = s.compton0 * z3 * zp1 * b.x_e / (T::one() + s.f_he + b.x_e);
-        let dxp_du = -dxp_dt / hub;
-        let dtheta_du = theta - gamma / hub * (T::one() - theta);
-        Ok((b, dxp_du, dtheta_du))
+        let c = (T::one() + bg.escape * lam * n1s) / (T::one() + bg.escape * (lam + bg.beta) * n1s);
+        let dxp_dt = -c * bg.n_h * (alpha_m * b.x_e * xp - bg.ionise * (T::one() - xp));
+        let gamma = bg.compton * b.x_e / (T::one() + s.f_he + b.x_e);
+        (
+            -dxp_dt / bg.hub,
+            theta - gamma / bg.hub * (T::one() - theta),
+        )
+    }
+
+    /// The balance, dx_p/du and dθ/du at (u, x_p, θ).
+    fn equations(&self, u: T, xp: T, theta: T) -> Result<(Balance<T>, T, T)> {
+        if !(xp > T::zero()) || !(theta > T::zero()) {
+            return Err(Error::NoConvergence);
+        }
+        let bg = self.background(u);
+        let b = electron_balance(self.species.f_he, Hydrogen::Fixed(xp), bg.ln_s)?;
+        let (a, c) = self.rates(&bg, &b, xp, theta);
+        Ok((b, a, c))
     }
 
     fn integrate(&mut self) -> Result<()> {
@@ -306,9 +343,26 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
             };
             if i != N - 1 {
                 let this: &Self = self;
+                // the stepper evaluates several states at one u (the Jacobian columns) and
+                // several u at one x_p: keep the last background and the last balance
+                let mut last_bg: Option<Background<T>> = None;
+                let mut last_balance: Option<(T, T, Balance<T>)> = None;
                 let mut f = |uu: T, st: &[T; 2]| -> Result<[T; 2]> {
                     let [xp, th] = *st;
-                    let (_, a, b) = this.equations(uu, xp, th)?;
+                    if !(xp > T::zero()) || !(th > T::zero()) {
+                        return Err(Error::NoConvergence);
+                    }
+                    let bg = match last_bg {
+                        Some(b) if b.u == uu => b,
+                        _ => this.background(uu),
+                    };
+                    last_bg = Some(bg);
+                    let bal = match last_balance {
+                        Some((lu, lx, b)) if lu == uu && lx == xp => b,
+                        _ => electron_balance(this.species.f_he, Hydrogen::Fixed(xp), bg.ln_s)?,
+                    };
+                    last_balance = Some((uu, xp, bal));
+                    let (a, b) = this.rates(&bg, &bal, xp, th);
                     Ok([a, b])
                 };
                 y = stepper.advance(&mut f, u_prev, y, u)?;

@@ -213,6 +213,21 @@ pub(crate) fn electron_balance<T: Real>(
         if f_he == T::zero() || bound < lxp + (T::epsilon() * T::c(1e-3)).ln() {
             return Ok(Balance { x_e: xp, x_p: xp });
         }
+        // He III below 1e-3 ulp (2f y₂ ≤ 2f S_HeII/x_p): one helium stage, and the balance
+        // x_e = x_p + f S₁/(x_e + S₁) is the quadratic x_e² + (S₁ − x_p) x_e − S₁(x_p + f) = 0
+        let tiny = (T::epsilon() * T::c(1e-3)).ln();
+        if ln_2f + ln_s2 - lxp < lxp + tiny && ln_s1 < T::c(300.0) {
+            let s1 = ln_s1.exp();
+            let b = s1 - xp;
+            let c = s1 * (xp + f_he);
+            let root = (b * b + T::c(4.0) * c).sqrt();
+            let x_e = if b >= T::zero() {
+                T::c(2.0) * c / (b + root)
+            } else {
+                T::c(0.5) * (root - b)
+            };
+            return Ok(Balance { x_e, x_p: xp });
+        }
     }
     let g = |xi: T| -> (T, T) {
         let (lxp, dlxp) = hydrogen(xi);
