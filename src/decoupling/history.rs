@@ -118,7 +118,6 @@ struct Background<T> {
     hub: T,
     n_h: T,
     t_r: T,
-    alpha_r: T,
     beta: T,
     ionise: T,
     compton: T,
@@ -290,7 +289,6 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
             hub,
             n_h: s.n_h0 * z3,
             t_r,
-            alpha_r,
             beta,
             // β e^{−E_α/kT_r} = α(T_r) n_H S_H: the photoionisation term per neutral atom / n_H
             ionise: alpha_r * ln_sh.exp(),
@@ -866,13 +864,5 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
     /// Thomson optical depth of reionisation (0 without reionisation).
     pub fn reionization_optical_depth(&self) -> T {
         self.tau_reion_total
-    }
-
-    /// Work done by the stepper: (accepted steps, rejected steps, evaluations of the
-    /// equations).
-    #[cfg(test)]
-    pub(crate) fn stepper_statistics(&self) -> (u32, u32, u32) {
-        let [a, r, e] = self.stats;
-        (a, r, e)
     }
 }
