@@ -35,6 +35,7 @@ EQUAL = [
     ("GRAVITATIONAL_CONSTANT", sc.G),
     ("FINE_STRUCTURE", sc.alpha),
     ("RYDBERG_ENERGY", PC["Rydberg constant times hc in J"][0]),
+    ("ATOMIC_MASS_UNIT", PC["atomic mass constant"][0]),
     ("ASTRONOMICAL_UNIT", sc.astronomical_unit),
     ("JULIAN_YEAR", sc.Julian_year),
 ]

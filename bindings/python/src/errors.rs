@@ -32,6 +32,9 @@ pub(crate) enum Arg<'a> {
     Table(&'a [f64]),
     /// A calibration value.
     Calibration(&'a TwoLoadCalibration<f64>),
+    /// A value shared by all elements that the message names but does not print (a universe,
+    /// a thermal history).
+    Shared,
 }
 
 /// Where an element-wise call failed: the flat index into the broadcast shape and that shape.
@@ -56,6 +59,7 @@ pub(crate) fn status_code(err: Error) -> Option<i32> {
         Error::NoConvergence => Some(-11),
         Error::InvalidParameter(_) => Some(-14),
         Error::NoBigBang => Some(-15),
+        Error::CapacityTooSmall(_) => Some(-16),
         _ => None,
     }
 }
@@ -76,6 +80,7 @@ fn reason(err: Error) -> &'static str {
         Error::NoConvergence => "no convergence",
         Error::InvalidParameter(_) => "invalid parameter",
         Error::NoBigBang => "the model has no big bang",
+        Error::CapacityTooSmall(_) => "too large for the capacity of the table",
         _ => "invalid input",
     }
 }
@@ -259,6 +264,7 @@ pub(crate) fn core_error_because(
         (Some(n), Some(Arg::Calibration(c))) => {
             format!("{function}: {n} = {}: {why}", describe_calibration(c))
         }
+        (Some(n), Some(Arg::Shared)) => format!("{function}: {n}: {why}"),
         (Some(n), None) => format!("{function}: {n}{at}: {why}"),
         (None, _) => {
             let inputs: Vec<String> = names

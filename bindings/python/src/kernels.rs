@@ -227,6 +227,13 @@ pub(crate) struct Kernel {
     spec: &'static Spec,
 }
 
+impl Kernel {
+    /// The kernel of an entry of another table of plain functions (the decoupling fits).
+    pub(crate) fn of(spec: &'static Spec) -> Self {
+        Self { spec }
+    }
+}
+
 /// The kernel of a core function by name.
 #[pyfunction]
 pub(crate) fn kernel(name: &str) -> PyResult<Kernel> {

@@ -7,6 +7,8 @@
 //! * [`kernels`]: the table of core functions and the generic element loop.
 //! * [`calibration`]: the `TwoLoadCalibration` class.
 //! * [`cosmology`]: the native base of `relicore.Universe`, its method table and element loop.
+//! * [`decoupling`]: Saha equilibrium, the fits, and the native base of
+//!   `relicore.decoupling.ThermalHistory` with its query table and element loop.
 //! * [`errors`]: the one mapping from a core error to `relicore.RelicoreError`.
 //! * the constants of `relicore::constants`, as the dicts `CONSTANTS` and `ROOTS`, and the
 //!   core's `VERSION`.
@@ -29,6 +31,7 @@ use pyo3::types::PyDict;
 
 mod calibration;
 mod cosmology;
+mod decoupling;
 mod errors;
 mod kernels;
 
@@ -44,7 +47,9 @@ fn constants_dict(py: Python<'_>) -> PyResult<Bound<'_, PyDict>> {
     constants!(d, relicore::constants: [
         SPEED_OF_LIGHT, PLANCK, BOLTZMANN, ELEMENTARY_CHARGE, AVOGADRO, REDUCED_PLANCK,
         ELECTRON_MASS, PROTON_MASS, THOMSON_CROSS_SECTION, GRAVITATIONAL_CONSTANT,
-        FINE_STRUCTURE, RYDBERG_ENERGY, FIRST_RADIATION, FIRST_RADIATION_RADIANCE,
+        FINE_STRUCTURE, RYDBERG_ENERGY, ATOMIC_MASS_UNIT, HYDROGEN_ATOM_MASS_U,
+        HELIUM_ATOM_MASS_U, HYDROGEN_IONIZATION_EV, HELIUM_FIRST_IONIZATION_EV,
+        HELIUM_SECOND_IONIZATION_EV, FIRST_RADIATION, FIRST_RADIATION_RADIANCE,
         SECOND_RADIATION, SECOND_RADIATION_LO, PLANCK_OVER_BOLTZMANN, PLANCK_OVER_BOLTZMANN_LO,
         STEFAN_BOLTZMANN, RADIATION_DENSITY, PHOTON_STEFAN_BOLTZMANN, WIEN_WAVELENGTH,
         WIEN_FREQUENCY, WIEN_WAVENUMBER, WIEN_PHOTON_WAVELENGTH, WIEN_PHOTON_FREQUENCY,
@@ -76,6 +81,16 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_function(wrap_pyfunction!(cosmology::universe_method, m)?)?;
     m.add_function(wrap_pyfunction!(cosmology::universe_method_signatures, m)?)?;
     m.add_function(wrap_pyfunction!(cosmology::universe_defaults, m)?)?;
+    m.add_function(wrap_pyfunction!(decoupling::fit_kernel, m)?)?;
+    m.add_function(wrap_pyfunction!(decoupling::fit_signatures, m)?)?;
+    m.add_function(wrap_pyfunction!(decoupling::saha_ionized_fraction, m)?)?;
+    m.add_function(wrap_pyfunction!(decoupling::saha_ionized_fraction_map, m)?)?;
+    m.add_class::<decoupling::PyThermalHistory>()?;
+    m.add_class::<decoupling::HistoryMethod>()?;
+    m.add_function(wrap_pyfunction!(decoupling::history_method, m)?)?;
+    m.add_function(wrap_pyfunction!(decoupling::history_method_signatures, m)?)?;
+    m.add_function(wrap_pyfunction!(decoupling::history_defaults, m)?)?;
+    m.add_function(wrap_pyfunction!(decoupling::decoupling_constants, m)?)?;
     m.add("CONSTANTS", constants_dict(py)?)?;
     m.add("ROOTS", roots_dict(py)?)?;
     m.add("VERSION", relicore::VERSION)?;

@@ -1,5 +1,5 @@
-"""relicore: blackbody radiometry and the cosmological background from one validated Rust core,
-shared by Rust, C, Fortran and Python.
+"""relicore: blackbody radiometry, the cosmological background and decoupling from one validated
+Rust core, shared by Rust, C, Fortran and Python.
 
 Modules
 -------
@@ -13,6 +13,12 @@ relicore.cosmology (its class is also ``relicore.Universe``)
     w0-wa dark energy) whose methods take redshifts (scalars or arrays) and give the expansion
     rate, density parameters, distances, volumes, lookback time, age, conformal time and the
     inversions to redshift. Pickles, so dask and multiprocessing workers can use it.
+relicore.decoupling (its class is also ``relicore.ThermalHistory``)
+    Saha equilibrium, the published fits of the last-scattering and drag redshifts, and
+    :class:`ThermalHistory`: the recombination and thermal history of a universe (ionised
+    fraction, matter temperature, Thomson optical depth, visibility, sound horizon) with its
+    summary (last scattering, drag epoch, sound horizons, angular scale, thermal decoupling,
+    reionisation optical depth). Pickles.
 relicore.constants
     The physical and astronomical constants of the core, each in SI units.
 
@@ -32,10 +38,20 @@ the applicable standards, local codes and licensed practice.
 from relicore._native import VERSION as _VERSION
 from relicore._native import RelicoreError
 
-from relicore import blackbody, constants, cosmology
+from relicore import blackbody, constants, cosmology, decoupling
 from relicore.cosmology import Universe
+from relicore.decoupling import ThermalHistory
 
 __version__: str = _VERSION
 """Version of the Rust core this package was built from."""
 
-__all__ = ["RelicoreError", "Universe", "blackbody", "constants", "cosmology", "__version__"]
+__all__ = [
+    "RelicoreError",
+    "ThermalHistory",
+    "Universe",
+    "blackbody",
+    "constants",
+    "cosmology",
+    "decoupling",
+    "__version__",
+]

@@ -5,7 +5,9 @@ from typing import Final
 from relicore import blackbody as blackbody
 from relicore import constants as constants
 from relicore import cosmology as cosmology
+from relicore import decoupling as decoupling
 from relicore.cosmology import Universe as Universe
+from relicore.decoupling import ThermalHistory as ThermalHistory
 
 class RelicoreError(ValueError):
     """Invalid input to a relicore function (a ValueError)."""

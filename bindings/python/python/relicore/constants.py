@@ -48,6 +48,24 @@ FINE_STRUCTURE: Final[float] = _C["FINE_STRUCTURE"]
 RYDBERG_ENERGY: Final[float] = _C["RYDBERG_ENERGY"]
 """Rydberg energy R∞hc, J (CODATA 2022)."""
 
+ATOMIC_MASS_UNIT: Final[float] = _C["ATOMIC_MASS_UNIT"]
+"""Atomic mass constant u, kg (CODATA 2022)."""
+
+HYDROGEN_ATOM_MASS_U: Final[float] = _C["HYDROGEN_ATOM_MASS_U"]
+"""Mass of the hydrogen-1 atom, in u (AME 2020; value from memory)."""
+
+HELIUM_ATOM_MASS_U: Final[float] = _C["HELIUM_ATOM_MASS_U"]
+"""Mass of the helium-4 atom, in u (AME 2020; value from memory)."""
+
+HYDROGEN_IONIZATION_EV: Final[float] = _C["HYDROGEN_IONIZATION_EV"]
+"""Ionisation energy of hydrogen (1s), eV (NIST Atomic Spectra Database; value from memory)."""
+
+HELIUM_FIRST_IONIZATION_EV: Final[float] = _C["HELIUM_FIRST_IONIZATION_EV"]
+"""First ionisation energy of helium (He I → He II), eV (NIST ASD; value from memory)."""
+
+HELIUM_SECOND_IONIZATION_EV: Final[float] = _C["HELIUM_SECOND_IONIZATION_EV"]
+"""Second ionisation energy of helium (He II → He III), eV (NIST ASD; value from memory)."""
+
 FIRST_RADIATION: Final[float] = _C["FIRST_RADIATION"]
 """First radiation constant c₁ = 2πhc², W m² (derived from the exact h and c)."""
 
@@ -139,6 +157,12 @@ __all__ = [
     "GRAVITATIONAL_CONSTANT",
     "FINE_STRUCTURE",
     "RYDBERG_ENERGY",
+    "ATOMIC_MASS_UNIT",
+    "HYDROGEN_ATOM_MASS_U",
+    "HELIUM_ATOM_MASS_U",
+    "HYDROGEN_IONIZATION_EV",
+    "HELIUM_FIRST_IONIZATION_EV",
+    "HELIUM_SECOND_IONIZATION_EV",
     "FIRST_RADIATION",
     "FIRST_RADIATION_RADIANCE",
     "SECOND_RADIATION",
