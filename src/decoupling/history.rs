@@ -331,7 +331,10 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
         let [ln_sh, _, _] = ln_s;
         let start = electron_balance(s.f_he, Hydrogen::Saha(ln_sh), ln_s)?;
         let mut y = [start.x_p, T::one()];
-        let mut stepper = StiffStepper::new(T::c(RTOL), [T::c(1e-16), T::c(1e-14)], 2_000_000);
+        // per-step tolerance: RTOL in f64; half the square root of the rounding unit in f32, the
+        // floor set by the finite-difference Jacobian
+        let rtol = T::c(RTOL).max(T::epsilon().sqrt() * T::c(0.5));
+        let mut stepper = StiffStepper::new(rtol, [T::c(1e-16), T::c(1e-14)], 2_000_000);
         let mut u_prev = top_u;
         for i in (0..N).rev() {
             let u = if i == N - 1 {

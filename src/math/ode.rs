@@ -33,8 +33,8 @@ pub struct StiffStepper<T, const D: usize> {
     pub rtol: T,
     /// Absolute tolerance of each component.
     pub atol: [T; D],
-    /// Size of the next step to try (its sign is set by the direction of integration; 0 lets
-    /// the first call choose from the length of the interval).
+    /// Size of the next step to try (its sign is set by the direction of integration; 0 makes
+    /// the first call try the whole interval).
     pub step: T,
     /// Maximum number of steps (accepted and rejected) over the stepper's life.
     pub max_steps: u32,
@@ -96,7 +96,8 @@ impl<T: Real, const D: usize> StiffStepper<T, D> {
         };
         let mut h = self.step.abs();
         if h == T::zero() || !h.is_finite() {
-            h = span.abs() * T::c(1e-3);
+            // the whole interval: the controller shrinks a step that is too long
+            h = span.abs();
         }
         let sqrt2 = T::c(core::f64::consts::SQRT_2);
         let d = T::one() / (T::c(2.0) + sqrt2);
