@@ -8,6 +8,10 @@
 
 use relicore::blackbody as bb;
 use relicore::cosmology::{Universe, UniverseParameters};
+use relicore::decoupling::{
+    HistoryOptions, ThermalHistory, drag_redshift_fit, last_scattering_redshift_fit,
+    saha_ionized_fraction,
+};
 use relicore::{Error, Result};
 
 /// A result as comparable bits: the value's bit pattern, or the error.
@@ -287,6 +291,114 @@ fn universes_built_concurrently_are_identical() {
         assert!(
             b == serial,
             "a universe built in a thread differs from the serial one"
+        );
+    }
+}
+
+fn decoupling_universe() -> Universe<f64> {
+    let h = 0.6736;
+    let mut p = UniverseParameters::new(67.36, 0.3153);
+    p.omega_baryon = 0.02237 / (h * h);
+    p.neutrino_masses_ev = [0.06, 0.0, 0.0];
+    Universe::new(p).unwrap_or_else(|e| panic!("{e}"))
+}
+
+fn histories(u: &Universe<f64>) -> Vec<Box<ThermalHistory<f64>>> {
+    [None, Some(7.67)]
+        .into_iter()
+        .map(|zr| {
+            Box::new(
+                ThermalHistory::new(
+                    u,
+                    HistoryOptions {
+                        reionization_redshift: zr,
+                        ..HistoryOptions::default()
+                    },
+                )
+                .unwrap_or_else(|e| panic!("{e}")),
+            )
+        })
+        .collect()
+}
+
+/// Every decoupling function: Saha and the fits, and every query and summary value of two
+/// histories shared by reference.
+fn decoupling_calls<'a>(
+    u: &'a Universe<f64>,
+    hs: &'a [Box<ThermalHistory<f64>>],
+) -> Vec<Box<dyn Fn() -> Outcome + Send + Sync + 'a>> {
+    let mut calls: Vec<Box<dyn Fn() -> Outcome + Send + Sync + 'a>> = Vec::new();
+    type Q = fn(&ThermalHistory<f64>, f64) -> Result<f64>;
+    type S = fn(&ThermalHistory<f64>) -> f64;
+    let queries: [Q; 5] = [
+        ThermalHistory::ionized_fraction,
+        ThermalHistory::matter_temperature_k,
+        ThermalHistory::optical_depth,
+        ThermalHistory::visibility,
+        ThermalHistory::sound_horizon_mpc,
+    ];
+    let summary: [S; 10] = [
+        ThermalHistory::last_scattering_redshift,
+        ThermalHistory::drag_redshift,
+        ThermalHistory::sound_horizon_last_scattering_mpc,
+        ThermalHistory::sound_horizon_drag_mpc,
+        ThermalHistory::angular_scale_last_scattering,
+        ThermalHistory::age_at_last_scattering_yr,
+        ThermalHistory::temperature_at_last_scattering_k,
+        ThermalHistory::visibility_peak_redshift,
+        ThermalHistory::thermal_decoupling_redshift,
+        ThermalHistory::reionization_optical_depth,
+    ];
+    for z in REDSHIFTS.into_iter().chain([5000.0, 2e4]) {
+        calls.push(Box::new(move || outcome(saha_ionized_fraction(u, z))));
+        calls.push(Box::new(move || {
+            outcome(last_scattering_redshift_fit(0.0224, z))
+        }));
+        calls.push(Box::new(move || outcome(drag_redshift_fit(0.0224, z))));
+        for h in hs {
+            for q in queries {
+                calls.push(Box::new(move || outcome(q(h, z))));
+            }
+        }
+    }
+    for h in hs {
+        for s in summary {
+            calls.push(Box::new(move || outcome(Ok(s(h)))));
+        }
+    }
+    calls
+}
+
+#[test]
+fn decoupling_from_many_threads_equals_serial() {
+    let u = decoupling_universe();
+    let hs = histories(&u);
+    compare_threads("decoupling", &decoupling_calls(&u, &hs));
+}
+
+/// Thermal histories computed concurrently are identical to the serial ones (the stepper and
+/// the table keep no shared state).
+#[test]
+fn histories_computed_concurrently_are_identical() {
+    let u = decoupling_universe();
+    let serial = histories(&u);
+    let built: Vec<Vec<Box<ThermalHistory<f64>>>> = std::thread::scope(|s| {
+        let hs: Vec<_> = (0..2)
+            .map(|_| {
+                std::thread::Builder::new()
+                    .stack_size(8 << 20)
+                    .spawn_scoped(s, || histories(&u))
+                    .unwrap_or_else(|e| panic!("{e}"))
+            })
+            .collect();
+        hs.into_iter()
+            .map(|h| h.join().unwrap_or_else(|_| panic!("a thread panicked")))
+            .collect()
+    });
+    for b in built {
+        assert!(
+            b == serial,
+            "a history computed in a thread differs from the serial one"
         );
     }
 }
