@@ -101,7 +101,7 @@ def test_version_is_the_cores():
 
 # --- stubs -----------------------------------------------------------------------------------
 
-MODULES = ["relicore", "relicore.blackbody", "relicore.constants", "relicore.cosmology"]
+MODULES = ["relicore", "relicore.blackbody", "relicore.constants", "relicore.cosmology", "relicore.decoupling"]
 
 
 def stub_of(module: str) -> ast.Module:
