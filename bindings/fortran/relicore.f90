@@ -1,4 +1,5 @@
-! relicore: the Fortran face of relicore (blackbody radiometry and the cosmological background), a
+! relicore: the Fortran face of relicore (blackbody radiometry, the cosmological background and
+! decoupling), a
 ! thin binding of the C ABI
 ! declared in include/relicore.h. Physics lives only in the Rust core; this module binds the
 ! C functions, converts, checks sizes and turns status codes into NaN, a stat argument or a
@@ -38,6 +39,16 @@
 !       call relicore_age_gyr_array(universe, redshifts, ages, stat)
 !   Constants of a universe (relicore_hubble_distance_mpc(universe), ...) are functions of it.
 !   Units: Mpc, Gyr, km s-1 Mpc-1, kg m-3, Gpc3, as the names say.
+! * Decoupling: relicore_saha_ionized_fraction(universe, z) and the two fits of (omega_b h^2,
+!   omega_m h^2) are elemental functions like the others. The thermal history is a
+!   type(relicore_thermal_history) of 163848 bytes (keep it in a module, a derived type or an
+!   allocatable, not as a local variable of a small stack), computed once with
+!       options = relicore_thermal_history_options_default()   ! then change what differs
+!       call relicore_thermal_history_compute(universe, options, history, stat)
+!   and passed first to its queries and summary:
+!       xe = relicore_ionized_fraction(history, z)               ! elemental in z
+!       zstar = relicore_last_scattering_redshift(history)
+!   It keeps its own copy of the universe. Units: K, years, Mpc, Mpc-1 as the names say.
 ! * relicore_status_message(code) and relicore_version() return allocatable strings.
 ! * Nothing here allocates on the C side, keeps state or is thread-unsafe.
 !
@@ -168,6 +179,34 @@
 !   relicore_omega_radiation                                      function, _s
 !   relicore_omega_dark_energy                                    function, _s
 !   relicore_matter_radiation_equality_redshift                   function, _s
+!   relicore_saha_ionized_fraction                                function, _s
+!   relicore_last_scattering_redshift_fit                         function, _s
+!   relicore_drag_redshift_fit                                    function, _s
+!   relicore_thermal_history_options_default                      function
+!   relicore_thermal_history_compute                              subroutine (optional stat)
+!   relicore_ionized_fraction                                     function, _s
+!   relicore_matter_temperature_k                                 function, _s
+!   relicore_optical_depth                                        function, _s
+!   relicore_visibility                                           function, _s
+!   relicore_sound_horizon_mpc                                    function, _s
+!   relicore_last_scattering_redshift                             function, _s
+!   relicore_drag_redshift                                        function, _s
+!   relicore_sound_horizon_last_scattering_mpc                    function, _s
+!   relicore_sound_horizon_drag_mpc                               function, _s
+!   relicore_angular_scale_last_scattering                        function, _s
+!   relicore_age_at_last_scattering_yr                            function, _s
+!   relicore_temperature_at_last_scattering_k                     function, _s
+!   relicore_visibility_peak_redshift                             function, _s
+!   relicore_thermal_decoupling_redshift                          function, _s
+!   relicore_reionization_optical_depth                           function, _s
+!   relicore_saha_ionized_fraction_array                          subroutine
+!   relicore_last_scattering_redshift_fit_array                   subroutine
+!   relicore_drag_redshift_fit_array                              subroutine
+!   relicore_ionized_fraction_array                               subroutine
+!   relicore_matter_temperature_k_array                           subroutine
+!   relicore_optical_depth_array                                  subroutine
+!   relicore_visibility_array                                     subroutine
+!   relicore_sound_horizon_mpc_array                              subroutine
 module relicore
   use, intrinsic :: iso_c_binding, only: c_double, c_float, c_int32_t, c_int64_t, c_size_t, &
       c_char, c_ptr, c_null_char, c_associated, c_f_pointer
@@ -193,8 +232,11 @@ module relicore
   integer(c_int32_t), parameter, public :: RELICORE_ERROR_PANIC = -13_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_ERROR_INVALID_PARAMETER = -14_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_ERROR_NO_BIG_BANG = -15_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_ERROR_CAPACITY_TOO_SMALL = -16_c_int32_t
   ! Words of storage in type(relicore_universe) (struct relicore_universe).
   integer(c_int32_t), parameter, public :: RELICORE_UNIVERSE_STORAGE_WORDS = 1920_c_int32_t
+  ! Words of storage in type(relicore_thermal_history) (struct relicore_thermal_history).
+  integer(c_int32_t), parameter, public :: RELICORE_THERMAL_HISTORY_STORAGE_WORDS = 20480_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_MAJOR = 0_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_MINOR = 1_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_PATCH = 0_c_int32_t
@@ -211,6 +253,14 @@ module relicore
   real(c_double), parameter, public :: RELICORE_GRAVITATIONAL_CONSTANT = 6.67430e-11_c_double
   real(c_double), parameter, public :: RELICORE_FINE_STRUCTURE = 7.2973525643e-3_c_double
   real(c_double), parameter, public :: RELICORE_RYDBERG_ENERGY = 2.1798723611030e-18_c_double
+  real(c_double), parameter, public :: RELICORE_ATOMIC_MASS_UNIT = 1.66053906892e-27_c_double
+  real(c_double), parameter, public :: RELICORE_HYDROGEN_ATOM_MASS_U = 1.007825031898e0_c_double
+  real(c_double), parameter, public :: RELICORE_HELIUM_ATOM_MASS_U = 4.002603254130e0_c_double
+  real(c_double), parameter, public :: RELICORE_HYDROGEN_IONIZATION_EV = 13.598434599702e0_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_HELIUM_FIRST_IONIZATION_EV = 24.587389011e0_c_double
+  real(c_double), parameter, public :: &
+      RELICORE_HELIUM_SECOND_IONIZATION_EV = 54.4177655e0_c_double
   real(c_double), parameter, public :: RELICORE_FIRST_RADIATION = 3.741771852192758e-16_c_double
   real(c_double), parameter, public :: &
       RELICORE_FIRST_RADIATION_RADIANCE = 1.1910429723971884e-16_c_double
@@ -362,6 +412,27 @@ module relicore
       relicore_omega_radiation, relicore_omega_radiation_s, relicore_omega_dark_energy, &
       relicore_omega_dark_energy_s, relicore_matter_radiation_equality_redshift, &
       relicore_matter_radiation_equality_redshift_s
+  public :: relicore_saha_ionized_fraction, relicore_saha_ionized_fraction_s, &
+      relicore_saha_ionized_fraction_array, relicore_last_scattering_redshift_fit, &
+      relicore_last_scattering_redshift_fit_s, relicore_last_scattering_redshift_fit_array, &
+      relicore_drag_redshift_fit, relicore_drag_redshift_fit_s, &
+      relicore_drag_redshift_fit_array, relicore_thermal_history_options_default, &
+      relicore_thermal_history_compute, relicore_ionized_fraction, relicore_ionized_fraction_s, &
+      relicore_ionized_fraction_array, relicore_matter_temperature_k, &
+      relicore_matter_temperature_k_s, relicore_matter_temperature_k_array, &
+      relicore_optical_depth, relicore_optical_depth_s, relicore_optical_depth_array, &
+      relicore_visibility, relicore_visibility_s, relicore_visibility_array, &
+      relicore_sound_horizon_mpc, relicore_sound_horizon_mpc_s, &
+      relicore_sound_horizon_mpc_array, relicore_last_scattering_redshift, &
+      relicore_last_scattering_redshift_s, relicore_drag_redshift, relicore_drag_redshift_s, &
+      relicore_sound_horizon_last_scattering_mpc, relicore_sound_horizon_last_scattering_mpc_s, &
+      relicore_sound_horizon_drag_mpc, relicore_sound_horizon_drag_mpc_s, &
+      relicore_angular_scale_last_scattering, relicore_angular_scale_last_scattering_s, &
+      relicore_age_at_last_scattering_yr, relicore_age_at_last_scattering_yr_s, &
+      relicore_temperature_at_last_scattering_k, relicore_temperature_at_last_scattering_k_s, &
+      relicore_visibility_peak_redshift, relicore_visibility_peak_redshift_s, &
+      relicore_thermal_decoupling_redshift, relicore_thermal_decoupling_redshift_s, &
+      relicore_reionization_optical_depth, relicore_reionization_optical_depth_s
 
   ! ---------------------------------------------------------------- types
   ! struct relicore_two_load_calibration { double frequency_hz; double gain; double offset; };
@@ -414,6 +485,34 @@ module relicore
     integer(c_int64_t) :: tag = 0_c_int64_t                              ! private
     integer(c_int64_t) :: storage(RELICORE_UNIVERSE_STORAGE_WORDS)       ! private
   end type relicore_universe
+
+  ! struct relicore_thermal_history_options { int32_t reionization; double reionization_redshift;
+  !     double highest_redshift; };
+  ! The options of a thermal history: fill it with relicore_thermal_history_options_default()
+  ! (no reionisation, reionization_redshift NaN (unset), highest_redshift 1e4), change what
+  ! differs, then call relicore_thermal_history_compute.
+  type, bind(C), public :: relicore_thermal_history_options
+    integer(c_int32_t) :: reionization       ! 0: none; 1: tanh reionisation at
+                                             ! reionization_redshift (any other value:
+                                             ! RELICORE_ERROR_OUT_OF_DOMAIN)
+    real(c_double) :: reionization_redshift  ! z_re, 0 <= z_re <= 100 (used when reionization = 1)
+    real(c_double) :: highest_redshift       ! top of the table, 3000 <= z <= 1e4 (above 1e4:
+                                             ! RELICORE_ERROR_CAPACITY_TOO_SMALL)
+  end type relicore_thermal_history_options
+
+  ! struct relicore_thermal_history { uint64_t tag;
+  !     uint64_t storage[RELICORE_THERMAL_HISTORY_STORAGE_WORDS]; };
+  ! A computed recombination and thermal history (2048 table nodes and its summary, with a copy
+  ! of its universe), built by relicore_thermal_history_compute and passed to its queries. A
+  ! plain value of 163848 bytes owned by the caller: keep it in a module, a derived type or an
+  ! allocatable rather than as a local variable on a small stack; copy it by assignment; read it
+  ! from any number of threads; there is nothing to free. Its components are private to the
+  ! library. The tag starts at 0, so a history that was never computed (or whose compute failed)
+  ! is refused with RELICORE_ERROR_INVALID_STRUCT.
+  type, bind(C), public :: relicore_thermal_history
+    integer(c_int64_t) :: tag = 0_c_int64_t                                 ! private
+    integer(c_int64_t) :: storage(RELICORE_THERMAL_HISTORY_STORAGE_WORDS)   ! private
+  end type relicore_thermal_history
 
   ! The calibration from two loads, under the name of its type (see the conventions above).
   interface relicore_two_load_calibration
@@ -1615,6 +1714,285 @@ module relicore
       real(c_double), intent(out) :: out
       integer(c_int32_t) :: status
     end function c_matter_radiation_equality_redshift
+    ! int32_t relicore_saha_ionized_fraction(const struct relicore_universe *universe, double z,
+    !     double *out);
+    function c_saha_ionized_fraction(universe, z, out) &
+        bind(C, name='relicore_saha_ionized_fraction') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_saha_ionized_fraction
+    ! int32_t relicore_saha_ionized_fraction_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_saha_ionized_fraction_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_saha_ionized_fraction_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_saha_ionized_fraction_array
+    ! int32_t relicore_last_scattering_redshift_fit(double omega_baryon_h2, double omega_matter_h2,
+    !     double *out);
+    function c_last_scattering_redshift_fit(omega_baryon_h2, omega_matter_h2, out) &
+        bind(C, name='relicore_last_scattering_redshift_fit') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: omega_baryon_h2, omega_matter_h2
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_last_scattering_redshift_fit
+    ! int32_t relicore_last_scattering_redshift_fit_array(const double *omega_baryon_h2, size_t n,
+    !     double omega_matter_h2, double *out);
+    function c_last_scattering_redshift_fit_array(omega_baryon_h2, n, omega_matter_h2, out) &
+        bind(C, name='relicore_last_scattering_redshift_fit_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: omega_baryon_h2(*)
+      integer(c_size_t), value :: n
+      real(c_double), value :: omega_matter_h2
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_last_scattering_redshift_fit_array
+    ! int32_t relicore_drag_redshift_fit(double omega_baryon_h2, double omega_matter_h2,
+    !     double *out);
+    function c_drag_redshift_fit(omega_baryon_h2, omega_matter_h2, out) &
+        bind(C, name='relicore_drag_redshift_fit') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: omega_baryon_h2, omega_matter_h2
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_drag_redshift_fit
+    ! int32_t relicore_drag_redshift_fit_array(const double *omega_baryon_h2, size_t n,
+    !     double omega_matter_h2, double *out);
+    function c_drag_redshift_fit_array(omega_baryon_h2, n, omega_matter_h2, out) &
+        bind(C, name='relicore_drag_redshift_fit_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: omega_baryon_h2(*)
+      integer(c_size_t), value :: n
+      real(c_double), value :: omega_matter_h2
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_drag_redshift_fit_array
+    ! int32_t relicore_thermal_history_options_default(
+    !     struct relicore_thermal_history_options *out);
+    function c_thermal_history_options_default(out) &
+        bind(C, name='relicore_thermal_history_options_default') result(status)
+      import :: c_int32_t, relicore_thermal_history_options
+      type(relicore_thermal_history_options), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_thermal_history_options_default
+    ! int32_t relicore_thermal_history_compute(const struct relicore_universe *universe,
+    !     const struct relicore_thermal_history_options *options,
+    !     struct relicore_thermal_history *out);
+    function c_thermal_history_compute(universe, options, out) &
+        bind(C, name='relicore_thermal_history_compute') result(status)
+      import :: c_int32_t, relicore_universe, relicore_thermal_history_options, &
+          relicore_thermal_history
+      type(relicore_universe), intent(in) :: universe
+      type(relicore_thermal_history_options), intent(in) :: options
+      type(relicore_thermal_history), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_thermal_history_compute
+    ! int32_t relicore_ionized_fraction(const struct relicore_thermal_history *history, double z,
+    !     double *out);
+    function c_ionized_fraction(history, z, out) &
+        bind(C, name='relicore_ionized_fraction') result(status)
+      import :: c_double, c_int32_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_ionized_fraction
+    ! int32_t relicore_ionized_fraction_array(const struct relicore_thermal_history *history,
+    !     const double *redshifts, size_t n, double *out);
+    function c_ionized_fraction_array(history, redshifts, n, out) &
+        bind(C, name='relicore_ionized_fraction_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_ionized_fraction_array
+    ! int32_t relicore_matter_temperature_k(const struct relicore_thermal_history *history,
+    !     double z,
+    !     double *out);
+    function c_matter_temperature_k(history, z, out) &
+        bind(C, name='relicore_matter_temperature_k') result(status)
+      import :: c_double, c_int32_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_matter_temperature_k
+    ! int32_t relicore_matter_temperature_k_array(const struct relicore_thermal_history *history,
+    !     const double *redshifts, size_t n, double *out);
+    function c_matter_temperature_k_array(history, redshifts, n, out) &
+        bind(C, name='relicore_matter_temperature_k_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_matter_temperature_k_array
+    ! int32_t relicore_optical_depth(const struct relicore_thermal_history *history, double z,
+    !     double *out);
+    function c_optical_depth(history, z, out) &
+        bind(C, name='relicore_optical_depth') result(status)
+      import :: c_double, c_int32_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_optical_depth
+    ! int32_t relicore_optical_depth_array(const struct relicore_thermal_history *history,
+    !     const double *redshifts, size_t n, double *out);
+    function c_optical_depth_array(history, redshifts, n, out) &
+        bind(C, name='relicore_optical_depth_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_optical_depth_array
+    ! int32_t relicore_visibility(const struct relicore_thermal_history *history, double z,
+    !     double *out);
+    function c_visibility(history, z, out) &
+        bind(C, name='relicore_visibility') result(status)
+      import :: c_double, c_int32_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_visibility
+    ! int32_t relicore_visibility_array(const struct relicore_thermal_history *history,
+    !     const double *redshifts, size_t n, double *out);
+    function c_visibility_array(history, redshifts, n, out) &
+        bind(C, name='relicore_visibility_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_visibility_array
+    ! int32_t relicore_sound_horizon_mpc(const struct relicore_thermal_history *history, double z,
+    !     double *out);
+    function c_sound_horizon_mpc(history, z, out) &
+        bind(C, name='relicore_sound_horizon_mpc') result(status)
+      import :: c_double, c_int32_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_sound_horizon_mpc
+    ! int32_t relicore_sound_horizon_mpc_array(const struct relicore_thermal_history *history,
+    !     const double *redshifts, size_t n, double *out);
+    function c_sound_horizon_mpc_array(history, redshifts, n, out) &
+        bind(C, name='relicore_sound_horizon_mpc_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_sound_horizon_mpc_array
+    ! int32_t relicore_last_scattering_redshift(const struct relicore_thermal_history *history,
+    !     double *out);
+    function c_last_scattering_redshift(history, out) &
+        bind(C, name='relicore_last_scattering_redshift') result(status)
+      import :: c_double, c_int32_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_last_scattering_redshift
+    ! int32_t relicore_drag_redshift(const struct relicore_thermal_history *history,
+    !     double *out);
+    function c_drag_redshift(history, out) &
+        bind(C, name='relicore_drag_redshift') result(status)
+      import :: c_double, c_int32_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_drag_redshift
+    ! int32_t relicore_sound_horizon_last_scattering_mpc(const struct relicore_thermal_history
+    !     *history,
+    !     double *out);
+    function c_sound_horizon_last_scattering_mpc(history, out) &
+        bind(C, name='relicore_sound_horizon_last_scattering_mpc') result(status)
+      import :: c_double, c_int32_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_sound_horizon_last_scattering_mpc
+    ! int32_t relicore_sound_horizon_drag_mpc(const struct relicore_thermal_history *history,
+    !     double *out);
+    function c_sound_horizon_drag_mpc(history, out) &
+        bind(C, name='relicore_sound_horizon_drag_mpc') result(status)
+      import :: c_double, c_int32_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_sound_horizon_drag_mpc
+    ! int32_t relicore_angular_scale_last_scattering(const struct relicore_thermal_history *history,
+    !     double *out);
+    function c_angular_scale_last_scattering(history, out) &
+        bind(C, name='relicore_angular_scale_last_scattering') result(status)
+      import :: c_double, c_int32_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_angular_scale_last_scattering
+    ! int32_t relicore_age_at_last_scattering_yr(const struct relicore_thermal_history *history,
+    !     double *out);
+    function c_age_at_last_scattering_yr(history, out) &
+        bind(C, name='relicore_age_at_last_scattering_yr') result(status)
+      import :: c_double, c_int32_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_age_at_last_scattering_yr
+    ! int32_t relicore_temperature_at_last_scattering_k(const struct relicore_thermal_history
+    !     *history,
+    !     double *out);
+    function c_temperature_at_last_scattering_k(history, out) &
+        bind(C, name='relicore_temperature_at_last_scattering_k') result(status)
+      import :: c_double, c_int32_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_temperature_at_last_scattering_k
+    ! int32_t relicore_visibility_peak_redshift(const struct relicore_thermal_history *history,
+    !     double *out);
+    function c_visibility_peak_redshift(history, out) &
+        bind(C, name='relicore_visibility_peak_redshift') result(status)
+      import :: c_double, c_int32_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_visibility_peak_redshift
+    ! int32_t relicore_thermal_decoupling_redshift(const struct relicore_thermal_history *history,
+    !     double *out);
+    function c_thermal_decoupling_redshift(history, out) &
+        bind(C, name='relicore_thermal_decoupling_redshift') result(status)
+      import :: c_double, c_int32_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_thermal_decoupling_redshift
+    ! int32_t relicore_reionization_optical_depth(const struct relicore_thermal_history *history,
+    !     double *out);
+    function c_reionization_optical_depth(history, out) &
+        bind(C, name='relicore_reionization_optical_depth') result(status)
+      import :: c_double, c_int32_t, relicore_thermal_history
+      type(relicore_thermal_history), intent(in) :: history
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_reionization_optical_depth
   end interface
 
 contains
@@ -4720,5 +5098,640 @@ contains
     if (code /= RELICORE_OK) out = nan64()
     call report(code, 'relicore_matter_radiation_equality_redshift', stat)
   end subroutine relicore_matter_radiation_equality_redshift_s
+
+  ! ================================================================ decoupling
+
+  ! Ionised fraction x_e = n_e/n_H in Saha equilibrium at z: hydrogen and both helium stages in
+  ! equilibrium with the radiation at T0 (1+z), coupled through the electron density (above 1
+  ! while helium is ionised). Fails with RELICORE_ERROR_INVALID_PARAMETER for a universe without
+  ! baryons or without radiation.
+  !   universe: from relicore_universe_init (Omega_b > 0, T0 > 0)
+  !   z: redshift, finite, 0 <= z <= 1e8
+  ! Result: x_e, dimensionless; NaN on failure.
+  impure elemental function relicore_saha_ionized_fraction(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_saha_ionized_fraction(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_saha_ionized_fraction
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_saha_ionized_fraction_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_saha_ionized_fraction(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_saha_ionized_fraction', stat)
+  end subroutine relicore_saha_ionized_fraction_s
+
+  ! Array form of relicore_saha_ionized_fraction, one C call for the whole array: out(i) =
+  ! relicore_saha_ionized_fraction(universe, redshifts(i)). redshifts: 0 <= z <= 1e8; out: same
+  ! size as redshifts (x_e). Failing elements are NaN, the others computed; stat is the first
+  ! failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every element
+  ! NaN); an empty array still has its universe checked; without stat a failure stops with its
+  ! message.
+  subroutine relicore_saha_ionized_fraction_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_saha_ionized_fraction_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_saha_ionized_fraction_array(universe, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_saha_ionized_fraction_array', stat)
+  end subroutine relicore_saha_ionized_fraction_array
+
+  ! Redshift of last scattering by the fit of Hu & Sugiyama 1996 (ApJ 471, 542; about 1 %).
+  !   omega_baryon_h2: Omega_b h^2, > 0
+  !   omega_matter_h2: Omega_m h^2, > 0
+  ! Result: z*, dimensionless; NaN on failure.
+  impure elemental function relicore_last_scattering_redshift_fit(omega_baryon_h2, &
+      omega_matter_h2) result(res)
+    real(c_double), intent(in) :: omega_baryon_h2, omega_matter_h2
+    real(c_double) :: res
+    if (c_last_scattering_redshift_fit(omega_baryon_h2, omega_matter_h2, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_last_scattering_redshift_fit
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_last_scattering_redshift_fit_s(omega_baryon_h2, &
+      omega_matter_h2, out, stat)
+    real(c_double), intent(in) :: omega_baryon_h2, omega_matter_h2
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_last_scattering_redshift_fit(omega_baryon_h2, omega_matter_h2, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_last_scattering_redshift_fit', stat)
+  end subroutine relicore_last_scattering_redshift_fit_s
+
+  ! Array form of relicore_last_scattering_redshift_fit, one C call for the whole array: out(i)
+  ! at omega_baryon_h2(i) and one omega_matter_h2 (both > 0); out: same size as omega_baryon_h2
+  ! (z*). Failing elements are NaN, the others computed; stat is the first failing element's
+  ! code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ); without stat a failure stops
+  ! with its message.
+  subroutine relicore_last_scattering_redshift_fit_array(omega_baryon_h2, omega_matter_h2, &
+      out, stat)
+    real(c_double), intent(in) :: omega_baryon_h2(:)
+    real(c_double), intent(in) :: omega_matter_h2
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    if (size(out) /= size(omega_baryon_h2)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(omega_baryon_h2) == 0) then
+      code = RELICORE_OK
+    else
+      code = c_last_scattering_redshift_fit_array(omega_baryon_h2, &
+          size(omega_baryon_h2, kind=c_size_t), omega_matter_h2, out)
+    end if
+    call report(code, 'relicore_last_scattering_redshift_fit_array', stat)
+  end subroutine relicore_last_scattering_redshift_fit_array
+
+  ! Redshift of the drag epoch by the fit of Eisenstein & Hu 1998 (ApJ 496, 605; a few per
+  ! cent).
+  !   omega_baryon_h2: Omega_b h^2, > 0
+  !   omega_matter_h2: Omega_m h^2, > 0
+  ! Result: z_drag, dimensionless; NaN on failure.
+  impure elemental function relicore_drag_redshift_fit(omega_baryon_h2, omega_matter_h2) result(res)
+    real(c_double), intent(in) :: omega_baryon_h2, omega_matter_h2
+    real(c_double) :: res
+    if (c_drag_redshift_fit(omega_baryon_h2, omega_matter_h2, res) /= RELICORE_OK) res = nan64()
+  end function relicore_drag_redshift_fit
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_drag_redshift_fit_s(omega_baryon_h2, omega_matter_h2, &
+      out, stat)
+    real(c_double), intent(in) :: omega_baryon_h2, omega_matter_h2
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_drag_redshift_fit(omega_baryon_h2, omega_matter_h2, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_drag_redshift_fit', stat)
+  end subroutine relicore_drag_redshift_fit_s
+
+  ! Array form of relicore_drag_redshift_fit, one C call for the whole array: out(i) at
+  ! omega_baryon_h2(i) and one omega_matter_h2 (both > 0); out: same size as omega_baryon_h2
+  ! (z_drag). Failing elements are NaN, the others computed; stat is the first failing element's
+  ! code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ); without stat a failure stops
+  ! with its message.
+  subroutine relicore_drag_redshift_fit_array(omega_baryon_h2, omega_matter_h2, out, stat)
+    real(c_double), intent(in) :: omega_baryon_h2(:)
+    real(c_double), intent(in) :: omega_matter_h2
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    if (size(out) /= size(omega_baryon_h2)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(omega_baryon_h2) == 0) then
+      code = RELICORE_OK
+    else
+      code = c_drag_redshift_fit_array(omega_baryon_h2, &
+          size(omega_baryon_h2, kind=c_size_t), omega_matter_h2, out)
+    end if
+    call report(code, 'relicore_drag_redshift_fit_array', stat)
+  end subroutine relicore_drag_redshift_fit_array
+
+  ! The default options of a thermal history: no reionisation (reionization = 0,
+  ! reionization_redshift NaN, unset), highest_redshift = 1e4.
+  ! Result: type(relicore_thermal_history_options).
+  function relicore_thermal_history_options_default() result(options)
+    type(relicore_thermal_history_options) :: options
+    call report(c_thermal_history_options_default(options), &
+        'relicore_thermal_history_options_default')
+  end function relicore_thermal_history_options_default
+
+  ! Computes the recombination and thermal history of a universe into out (Peebles atom, helium
+  ! in Saha equilibrium, Compton-coupled matter temperature, optional tanh reionisation; of the
+  ! order of milliseconds): compute once, then pass it to every query. stat = RELICORE_OK,
+  ! RELICORE_ERROR_INVALID_STRUCT (universe not initialised), RELICORE_ERROR_INVALID_PARAMETER
+  ! (a universe without baryons or radiation), RELICORE_ERROR_OUT_OF_DOMAIN (a reionization
+  ! switch other than 0 or 1, z_re above 100, a highest redshift below 3000),
+  ! RELICORE_ERROR_NON_FINITE, RELICORE_ERROR_NEGATIVE (z_re < 0),
+  ! RELICORE_ERROR_CAPACITY_TOO_SMALL (a highest redshift above 1e4) or
+  ! RELICORE_ERROR_NO_CONVERGENCE; on failure out is cleared and every query refuses it
+  ! (RELICORE_ERROR_INVALID_STRUCT). Without stat a failure stops with the message.
+  subroutine relicore_thermal_history_compute(universe, options, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    type(relicore_thermal_history_options), intent(in) :: options
+    type(relicore_thermal_history), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    call report(c_thermal_history_compute(universe, options, out), &
+        'relicore_thermal_history_compute', stat)
+  end subroutine relicore_thermal_history_compute
+
+  ! Ionised fraction x_e = n_e/n_H of the history at z (reionisation included when it was
+  ! requested; above 1 while helium is ionised).
+  !   history: from relicore_thermal_history_compute
+  !   z: redshift, finite, 0 <= z <= the highest redshift of the history
+  ! Result: x_e, dimensionless; NaN on failure.
+  impure elemental function relicore_ionized_fraction(history, z) result(res)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_ionized_fraction(history, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_ionized_fraction
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_ionized_fraction_s(history, z, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_ionized_fraction(history, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_ionized_fraction', stat)
+  end subroutine relicore_ionized_fraction_s
+
+  ! Matter (gas) temperature T_m of the history at z (no reionisation heating).
+  !   history: from relicore_thermal_history_compute
+  !   z: redshift, finite, 0 <= z <= the highest redshift of the history
+  ! Result: T_m in K; NaN on failure.
+  impure elemental function relicore_matter_temperature_k(history, z) result(res)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_matter_temperature_k(history, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_matter_temperature_k
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_matter_temperature_k_s(history, z, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_matter_temperature_k(history, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_matter_temperature_k', stat)
+  end subroutine relicore_matter_temperature_k_s
+
+  ! Thomson optical depth from today to z (reionisation included when it was requested).
+  !   history: from relicore_thermal_history_compute
+  !   z: redshift, finite, 0 <= z <= the highest redshift of the history
+  ! Result: tau, dimensionless; NaN on failure.
+  impure elemental function relicore_optical_depth(history, z) result(res)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_optical_depth(history, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_optical_depth
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_optical_depth_s(history, z, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_optical_depth(history, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_optical_depth', stat)
+  end subroutine relicore_optical_depth_s
+
+  ! Visibility function per unit conformal distance, g = -dtau/deta exp(-tau), at z.
+  !   history: from relicore_thermal_history_compute
+  !   z: redshift, finite, 0 <= z <= the highest redshift of the history
+  ! Result: g in Mpc-1; NaN on failure.
+  impure elemental function relicore_visibility(history, z) result(res)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_visibility(history, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_visibility
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_visibility_s(history, z, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_visibility(history, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_visibility', stat)
+  end subroutine relicore_visibility_s
+
+  ! Comoving sound horizon r_s(z) of the photon-baryon fluid.
+  !   history: from relicore_thermal_history_compute
+  !   z: redshift, finite and >= 0 (any z)
+  ! Result: r_s in Mpc; NaN on failure.
+  impure elemental function relicore_sound_horizon_mpc(history, z) result(res)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_sound_horizon_mpc(history, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_sound_horizon_mpc
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_sound_horizon_mpc_s(history, z, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_sound_horizon_mpc(history, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_sound_horizon_mpc', stat)
+  end subroutine relicore_sound_horizon_mpc_s
+
+  ! Array form of relicore_ionized_fraction, one C call for the whole array: out(i) =
+  ! relicore_ionized_fraction(history, redshifts(i)). redshifts: finite, 0 <= z <= the highest
+  ! redshift of the history; out: same size as redshifts (x_e, dimensionless). Failing elements
+  ! are NaN, the others computed; stat is the first failing element's code
+  ! (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every element NaN); an empty array
+  ! still has its history checked; without stat a failure stops with its message.
+  subroutine relicore_ionized_fraction_array(history, redshifts, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_ionized_fraction_array(history, empty, 0_c_size_t, empty_out)
+    else
+      code = c_ionized_fraction_array(history, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_ionized_fraction_array', stat)
+  end subroutine relicore_ionized_fraction_array
+
+  ! Array form of relicore_matter_temperature_k, one C call for the whole array: out(i) =
+  ! relicore_matter_temperature_k(history, redshifts(i)). redshifts: finite, 0 <= z <= the
+  ! highest redshift of the history; out: same size as redshifts (T_m in K). Failing elements
+  ! are NaN, the others computed; stat is the first failing element's code
+  ! (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every element NaN); an empty array
+  ! still has its history checked; without stat a failure stops with its message.
+  subroutine relicore_matter_temperature_k_array(history, redshifts, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_matter_temperature_k_array(history, empty, 0_c_size_t, empty_out)
+    else
+      code = c_matter_temperature_k_array(history, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_matter_temperature_k_array', stat)
+  end subroutine relicore_matter_temperature_k_array
+
+  ! Array form of relicore_optical_depth, one C call for the whole array: out(i) =
+  ! relicore_optical_depth(history, redshifts(i)). redshifts: finite, 0 <= z <= the highest
+  ! redshift of the history; out: same size as redshifts (tau, dimensionless). Failing elements
+  ! are NaN, the others computed; stat is the first failing element's code
+  ! (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every element NaN); an empty array
+  ! still has its history checked; without stat a failure stops with its message.
+  subroutine relicore_optical_depth_array(history, redshifts, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_optical_depth_array(history, empty, 0_c_size_t, empty_out)
+    else
+      code = c_optical_depth_array(history, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_optical_depth_array', stat)
+  end subroutine relicore_optical_depth_array
+
+  ! Array form of relicore_visibility, one C call for the whole array: out(i) =
+  ! relicore_visibility(history, redshifts(i)). redshifts: finite, 0 <= z <= the highest
+  ! redshift of the history; out: same size as redshifts (g in Mpc-1). Failing elements are NaN,
+  ! the others computed; stat is the first failing element's code
+  ! (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ, every element NaN); an empty array
+  ! still has its history checked; without stat a failure stops with its message.
+  subroutine relicore_visibility_array(history, redshifts, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_visibility_array(history, empty, 0_c_size_t, empty_out)
+    else
+      code = c_visibility_array(history, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_visibility_array', stat)
+  end subroutine relicore_visibility_array
+
+  ! Array form of relicore_sound_horizon_mpc, one C call for the whole array: out(i) =
+  ! relicore_sound_horizon_mpc(history, redshifts(i)). redshifts: finite and >= 0 (any z); out:
+  ! same size as redshifts (r_s in Mpc). Failing elements are NaN, the others computed; stat is
+  ! the first failing element's code (RELICORE_ERROR_LENGTH_MISMATCH when the sizes differ,
+  ! every element NaN); an empty array still has its history checked; without stat a failure
+  ! stops with its message.
+  subroutine relicore_sound_horizon_mpc_array(history, redshifts, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_sound_horizon_mpc_array(history, empty, 0_c_size_t, empty_out)
+    else
+      code = c_sound_horizon_mpc_array(history, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_sound_horizon_mpc_array', stat)
+  end subroutine relicore_sound_horizon_mpc_array
+
+  ! Redshift of last scattering z*, where the Thomson optical depth (reionisation excluded)
+  ! reaches 1.
+  !   history: from relicore_thermal_history_compute
+  ! Result: z*; NaN on failure.
+  impure elemental function relicore_last_scattering_redshift(history) result(res)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double) :: res
+    if (c_last_scattering_redshift(history, res) /= RELICORE_OK) res = nan64()
+  end function relicore_last_scattering_redshift
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_last_scattering_redshift_s(history, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_last_scattering_redshift(history, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_last_scattering_redshift', stat)
+  end subroutine relicore_last_scattering_redshift_s
+
+  ! Redshift of the drag epoch, where the baryon-drag optical depth reaches 1.
+  !   history: from relicore_thermal_history_compute
+  ! Result: z_drag; NaN on failure.
+  impure elemental function relicore_drag_redshift(history) result(res)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double) :: res
+    if (c_drag_redshift(history, res) /= RELICORE_OK) res = nan64()
+  end function relicore_drag_redshift
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_drag_redshift_s(history, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_drag_redshift(history, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_drag_redshift', stat)
+  end subroutine relicore_drag_redshift_s
+
+  ! Comoving sound horizon at last scattering r_s(z*).
+  !   history: from relicore_thermal_history_compute
+  ! Result: r_s(z*) in Mpc; NaN on failure.
+  impure elemental function relicore_sound_horizon_last_scattering_mpc(history) result(res)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double) :: res
+    if (c_sound_horizon_last_scattering_mpc(history, res) /= RELICORE_OK) res = nan64()
+  end function relicore_sound_horizon_last_scattering_mpc
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_sound_horizon_last_scattering_mpc_s(history, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_sound_horizon_last_scattering_mpc(history, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_sound_horizon_last_scattering_mpc', stat)
+  end subroutine relicore_sound_horizon_last_scattering_mpc_s
+
+  ! Comoving sound horizon at the drag epoch r_s(z_drag).
+  !   history: from relicore_thermal_history_compute
+  ! Result: r_s(z_drag) in Mpc; NaN on failure.
+  impure elemental function relicore_sound_horizon_drag_mpc(history) result(res)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double) :: res
+    if (c_sound_horizon_drag_mpc(history, res) /= RELICORE_OK) res = nan64()
+  end function relicore_sound_horizon_drag_mpc
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_sound_horizon_drag_mpc_s(history, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_sound_horizon_drag_mpc(history, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_sound_horizon_drag_mpc', stat)
+  end subroutine relicore_sound_horizon_drag_mpc_s
+
+  ! Angular scale of the sound horizon at last scattering theta* = r_s(z*)/D_M(z*).
+  !   history: from relicore_thermal_history_compute
+  ! Result: theta* in radians; NaN on failure.
+  impure elemental function relicore_angular_scale_last_scattering(history) result(res)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double) :: res
+    if (c_angular_scale_last_scattering(history, res) /= RELICORE_OK) res = nan64()
+  end function relicore_angular_scale_last_scattering
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_angular_scale_last_scattering_s(history, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_angular_scale_last_scattering(history, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_angular_scale_last_scattering', stat)
+  end subroutine relicore_angular_scale_last_scattering_s
+
+  ! Age of the universe at last scattering.
+  !   history: from relicore_thermal_history_compute
+  ! Result: t(z*) in years (Julian); NaN on failure.
+  impure elemental function relicore_age_at_last_scattering_yr(history) result(res)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double) :: res
+    if (c_age_at_last_scattering_yr(history, res) /= RELICORE_OK) res = nan64()
+  end function relicore_age_at_last_scattering_yr
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_age_at_last_scattering_yr_s(history, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_age_at_last_scattering_yr(history, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_age_at_last_scattering_yr', stat)
+  end subroutine relicore_age_at_last_scattering_yr_s
+
+  ! Radiation temperature at last scattering T0 (1 + z*).
+  !   history: from relicore_thermal_history_compute
+  ! Result: T(z*) in K; NaN on failure.
+  impure elemental function relicore_temperature_at_last_scattering_k(history) result(res)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double) :: res
+    if (c_temperature_at_last_scattering_k(history, res) /= RELICORE_OK) res = nan64()
+  end function relicore_temperature_at_last_scattering_k
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_temperature_at_last_scattering_k_s(history, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_temperature_at_last_scattering_k(history, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_temperature_at_last_scattering_k', stat)
+  end subroutine relicore_temperature_at_last_scattering_k_s
+
+  ! Redshift of the peak of the visibility function (per conformal time) at recombination.
+  !   history: from relicore_thermal_history_compute
+  ! Result: the redshift of the peak; NaN on failure.
+  impure elemental function relicore_visibility_peak_redshift(history) result(res)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double) :: res
+    if (c_visibility_peak_redshift(history, res) /= RELICORE_OK) res = nan64()
+  end function relicore_visibility_peak_redshift
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_visibility_peak_redshift_s(history, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_visibility_peak_redshift(history, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_visibility_peak_redshift', stat)
+  end subroutine relicore_visibility_peak_redshift_s
+
+  ! Thermal decoupling: the highest redshift where T_m/T_r = 0.99.
+  !   history: from relicore_thermal_history_compute
+  ! Result: the redshift; NaN on failure.
+  impure elemental function relicore_thermal_decoupling_redshift(history) result(res)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double) :: res
+    if (c_thermal_decoupling_redshift(history, res) /= RELICORE_OK) res = nan64()
+  end function relicore_thermal_decoupling_redshift
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_thermal_decoupling_redshift_s(history, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_thermal_decoupling_redshift(history, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_thermal_decoupling_redshift', stat)
+  end subroutine relicore_thermal_decoupling_redshift_s
+
+  ! Thomson optical depth of reionisation (0 without reionisation).
+  !   history: from relicore_thermal_history_compute
+  ! Result: tau_reion; NaN on failure.
+  impure elemental function relicore_reionization_optical_depth(history) result(res)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double) :: res
+    if (c_reionization_optical_depth(history, res) /= RELICORE_OK) res = nan64()
+  end function relicore_reionization_optical_depth
+
+  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
+  ! without stat a failure stops with its message.
+  impure elemental subroutine relicore_reionization_optical_depth_s(history, out, stat)
+    type(relicore_thermal_history), intent(in) :: history
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_reionization_optical_depth(history, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_reionization_optical_depth', stat)
+  end subroutine relicore_reionization_optical_depth_s
 
 end module relicore

@@ -47,7 +47,7 @@
 /* Bookkeeping                                                                                 */
 /* ------------------------------------------------------------------------------------------ */
 
-#define NCODES 16 /* statuses 0 .. -15 */
+#define NCODES 17 /* statuses 0 .. -16 */
 
 struct stats {
     const char *name;
@@ -95,10 +95,10 @@ static void check(int ok, const char *fmt, ...)
     va_end(ap);
 }
 
-/* A documented status of the header: 0 or -1 .. -15, except PANIC (a bug by definition). */
+/* A documented status of the header: 0 or -1 .. -16, except PANIC (a bug by definition). */
 static int documented(int32_t st)
 {
-    return st <= 0 && st >= -15 && st != RELICORE_ERROR_PANIC;
+    return st <= 0 && st >= RELICORE_ERROR_CAPACITY_TOO_SMALL && st != RELICORE_ERROR_PANIC;
 }
 
 /* Records one call of `name` with status `st` and checks that the status is documented. */
@@ -1057,6 +1057,554 @@ static void hostile_universe_functions(void)
     }
 }
 
+/* ------------------------------------------------------------------------------------------ */
+/* Decoupling: Saha, the fits, the thermal history                                             */
+/* ------------------------------------------------------------------------------------------ */
+
+typedef int32_t (*h0_fn)(const struct relicore_thermal_history *, double *);
+typedef int32_t (*h1_fn)(const struct relicore_thermal_history *, double, double *);
+typedef int32_t (*ha_fn)(const struct relicore_thermal_history *, const double *, size_t,
+                         double *);
+
+static const struct { const char *name; h0_fn f; } H0[] = {
+    ENTRY(relicore_last_scattering_redshift),
+    ENTRY(relicore_drag_redshift),
+    ENTRY(relicore_sound_horizon_last_scattering_mpc),
+    ENTRY(relicore_sound_horizon_drag_mpc),
+    ENTRY(relicore_angular_scale_last_scattering),
+    ENTRY(relicore_age_at_last_scattering_yr),
+    ENTRY(relicore_temperature_at_last_scattering_k),
+    ENTRY(relicore_visibility_peak_redshift),
+    ENTRY(relicore_thermal_decoupling_redshift),
+    ENTRY(relicore_reionization_optical_depth),
+};
+static const struct { const char *name; h1_fn f; const char *array_name; ha_fn array; } H1[] = {
+    UENTRY(relicore_ionized_fraction),
+    UENTRY(relicore_matter_temperature_k),
+    UENTRY(relicore_optical_depth),
+    UENTRY(relicore_visibility),
+    UENTRY(relicore_sound_horizon_mpc),
+};
+/* names of the array forms, spelled out for the coverage guard (tests/coverage_guard.py):
+ * relicore_ionized_fraction_array relicore_matter_temperature_k_array relicore_optical_depth_array
+ * relicore_visibility_array relicore_sound_horizon_mpc_array relicore_saha_ionized_fraction_array
+ * relicore_last_scattering_redshift_fit_array relicore_drag_redshift_fit_array
+ */
+/* the fits and their array forms over omega_baryon_h2 (the a1 pattern of the blackbody arrays) */
+static const struct { const char *name; s2_fn f; const char *array_name; a1_fn array; } FIT[] = {
+    UENTRY(relicore_last_scattering_redshift_fit),
+    UENTRY(relicore_drag_redshift_fit),
+};
+
+/* Universes with baryons (the valid universes above have none: Saha and the history refuse
+ * those with RELICORE_ERROR_INVALID_PARAMETER) and computed histories. */
+#define NDVALID 3
+#define NHISTORY 3
+static struct relicore_universe *g_dvalid[NDVALID];
+static struct relicore_thermal_history *g_history[NHISTORY];
+static struct relicore_thermal_history *g_hscratch;
+
+/* The kinds of history pointer a call gets (as enum ukind for universes). */
+enum hkind {
+    H_VALID,       /* computed by relicore_thermal_history_compute */
+    H_COPY,        /* memcpy of a computed one */
+    H_NULL,        /* NULL */
+    H_UNINIT,      /* uninitialised heap memory */
+    H_ZERO,        /* all bytes 0 */
+    H_RANDOM,      /* random bytes in the tag and the first storage words, the rest left */
+    H_FAILED,      /* cleared by a failed compute */
+    H_TAG_FLIP,    /* computed, one bit of the tag flipped */
+    H_STORAGE_BAD, /* computed, storage words overwritten behind the intact tag */
+    H_KINDS
+};
+
+static void build_decoupling(void)
+{
+    const double ob[NDVALID] = { 0.049, 0.05, 0.04 };
+    const double ok[NDVALID] = { 0.0, 0.1, -0.05 };
+    const double m0[NDVALID] = { 0.06, 0.0, 0.1 };
+    for (int i = 0; i < NDVALID; i++) {
+        struct relicore_universe_parameters p;
+        relicore_universe_parameters_default(67.4, 0.315, &p);
+        p.omega_baryon = ob[i];
+        p.omega_curvature = ok[i];
+        p.neutrino_masses_ev[0] = m0[i];
+        if (i == 2) {
+            p.w0 = -0.9;
+            p.wa = 0.2;
+            p.helium_mass_fraction = 0.3;
+        }
+        g_dvalid[i] = malloc(sizeof *g_dvalid[i]);
+        if (g_dvalid[i] == NULL || relicore_universe_init(&p, g_dvalid[i]) != RELICORE_OK) {
+            fprintf(stderr, "cannot build decoupling universe %d\n", i);
+            exit(2);
+        }
+    }
+    for (int i = 0; i < NHISTORY; i++) {
+        struct relicore_thermal_history_options o;
+        relicore_thermal_history_options_default(&o);
+        if (i == 1) {
+            o.reionization = 1;
+            o.reionization_redshift = 7.7;
+        }
+        if (i == 2) {
+            o.highest_redshift = 5000.0;
+        }
+        g_history[i] = malloc(sizeof *g_history[i]);
+        int32_t st = g_history[i] == NULL ? RELICORE_ERROR_NULL_POINTER
+                                          : relicore_thermal_history_compute(g_dvalid[i], &o,
+                                                                             g_history[i]);
+        if (st != RELICORE_OK) {
+            fprintf(stderr, "cannot compute history %d: %s\n", i, relicore_status_message(st));
+            exit(2);
+        }
+    }
+    g_hscratch = malloc(sizeof *g_hscratch);
+    if (g_hscratch == NULL) {
+        exit(2);
+    }
+    memset(g_hscratch, 0, sizeof *g_hscratch);
+}
+
+static void free_decoupling(void)
+{
+    for (int i = 0; i < NDVALID; i++) {
+        free(g_dvalid[i]);
+    }
+    for (int i = 0; i < NHISTORY; i++) {
+        free(g_history[i]);
+    }
+    free(g_hscratch);
+}
+
+/* A history pointer of a random kind, written into *kind. */
+static const struct relicore_thermal_history *pick_history(enum hkind *kind)
+{
+    unsigned r = below(20);
+    enum hkind k = r < 10 ? H_VALID : (enum hkind)(1 + r % (H_KINDS - 1));
+    if (k == H_UNINIT && !g_uninit) {
+        k = H_ZERO;
+    }
+    *kind = k;
+    struct relicore_thermal_history *v = g_history[below(NHISTORY)];
+    switch (k) {
+    case H_VALID: return v;
+    case H_COPY: memcpy(g_hscratch, v, sizeof *v); return g_hscratch;
+    case H_NULL: return NULL;
+    case H_UNINIT:
+        /* glibc may hand the same block back with its old contents (a chunk this large is not
+         * overwritten by the allocator's bookkeeping): clear the tag first so that no stale
+         * computed history comes back; the storage words stay whatever they were (volatile:
+         * the compiler would drop a plain store to memory that is freed next) */
+        *(volatile uint64_t *)&g_hscratch->tag = 0;
+        free(g_hscratch);
+        g_hscratch = malloc(sizeof *g_hscratch);
+        if (g_hscratch == NULL) {
+            exit(2);
+        }
+        return g_hscratch;
+    case H_ZERO: memset(g_hscratch, 0, sizeof *g_hscratch); return g_hscratch;
+    case H_RANDOM: {
+        g_hscratch->tag = next_u64();
+        for (size_t i = 0; i < 64; i++) {
+            g_hscratch->storage[i] = next_u64();
+        }
+        return g_hscratch;
+    }
+    case H_FAILED: {
+        struct relicore_thermal_history_options o;
+        relicore_thermal_history_options_default(&o);
+        o.highest_redshift = 2e4;
+        memcpy(g_hscratch, v, sizeof *v);
+        int32_t st = relicore_thermal_history_compute(g_dvalid[0], &o, g_hscratch);
+        check(st == RELICORE_ERROR_CAPACITY_TOO_SMALL && g_hscratch->tag == 0,
+              "compute with highest redshift 2e4 = %" PRId32, st);
+        return g_hscratch;
+    }
+    case H_TAG_FLIP:
+        memcpy(g_hscratch, v, sizeof *v);
+        g_hscratch->tag ^= (uint64_t)1 << below(64);
+        return g_hscratch;
+    case H_STORAGE_BAD:
+        memcpy(g_hscratch, v, sizeof *v);
+        for (int i = 0; i < 8; i++) {
+            g_hscratch->storage[below(RELICORE_THERMAL_HISTORY_STORAGE_WORDS)] = next_u64();
+        }
+        return g_hscratch;
+    default: return v;
+    }
+}
+
+/* The checks of a call on a history of kind `k` (as check_universe_call). */
+static void check_history_call(const char *name, enum hkind k, int32_t st, int out_null,
+                               double out, const char *args)
+{
+    if (k == H_NULL || out_null) {
+        check(st == RELICORE_ERROR_NULL_POINTER, "%s on a NULL pointer = %" PRId32, name, st);
+        if (!out_null) {
+            check(isnan(out), "%s(NULL history) wrote %.17g, not NaN", name, out);
+        }
+        return;
+    }
+    if (k == H_VALID || k == H_COPY) {
+        check_out(name, st, out, args);
+        return;
+    }
+    if (k == H_STORAGE_BAD) {
+        if (st != RELICORE_OK) {
+            check(isnan(out), "%s on a corrupted history = %" PRId32 " without NaN", name, st);
+        }
+        return;
+    }
+    check(st == RELICORE_ERROR_INVALID_STRUCT && isnan(out),
+          "%s on a history compute did not produce (kind %d) = %" PRId32 " with %.17g", name,
+          (int)k, st, out);
+}
+
+/* Redshift arguments of the history queries: hostile, around recombination, or near the top of
+ * the tables (5000 and 1e4). */
+static double history_arg(void)
+{
+    switch (below(6)) {
+    case 0: return ordinary(-6.0, 4.0);
+    case 1: return uniform() * 2000.0;
+    case 2: return uniform() * 20.0;
+    case 3: return 4990.0 + 20.0 * uniform() + (below(2) ? 5010.0 : 0.0);
+    default: return any_double();
+    }
+}
+
+struct ha_ctx {
+    ha_fn f;
+    h1_fn scalar;
+    const struct relicore_thermal_history *h;
+};
+static int32_t ha_call(const void *c, const double *x, size_t n, double *out)
+{
+    const struct ha_ctx *k = c;
+    return k->f(k->h, x, n, out);
+}
+static int32_t ha_elem(const void *c, double x, double *out)
+{
+    const struct ha_ctx *k = c;
+    return k->scalar(k->h, x, out);
+}
+
+static void hostile_history_queries(void)
+{
+    char args[128];
+    for (long it = 0; it < g_iterations; it++) {
+        enum hkind kind;
+        const struct relicore_thermal_history *h = pick_history(&kind);
+        for (size_t k = 0; k < LEN(H0); k++) {
+            double out = SENTINEL;
+            int nul = null_out();
+            int32_t st = H0[k].f(h, nul ? NULL : &out);
+            record(H0[k].name, st);
+            check_history_call(H0[k].name, kind, st, nul, out, "");
+        }
+        for (size_t k = 0; k < LEN(H1); k++) {
+            double z = history_arg();
+            double out = SENTINEL;
+            int nul = null_out();
+            int32_t st = H1[k].f(h, z, nul ? NULL : &out);
+            record(H1[k].name, st);
+            describe(args, sizeof args, 1, &z);
+            check_history_call(H1[k].name, kind, st, nul, out, args);
+            if (!nul && (kind == H_VALID || kind == H_COPY)) {
+                if (isnan(z) || z < 0.0) {
+                    check(st != RELICORE_OK, "%s(%s) = OK", H1[k].name, args);
+                }
+                if (z > 1e4 && isfinite(z) && H1[k].f != relicore_sound_horizon_mpc) {
+                    check(st == RELICORE_ERROR_OUT_OF_DOMAIN, "%s(%s) above the table = %" PRId32,
+                          H1[k].name, args, st);
+                }
+            }
+        }
+        for (size_t k = 0; k < LEN(H1); k++) {
+            if (kind == H_VALID || kind == H_COPY) {
+                struct ha_ctx c = { H1[k].array, H1[k].f, h };
+                hostile_array(H1[k].array_name, &c, ha_call, ha_elem, -6.0, 4.0, 3);
+            } else {
+                size_t n = below(4);
+                double x[4] = { history_arg(), history_arg(), history_arg(), history_arg() };
+                double out[4] = { SENTINEL, SENTINEL, SENTINEL, SENTINEL };
+                int32_t st = H1[k].array(h, x, n, out);
+                record(H1[k].array_name, st);
+                int32_t want = kind == H_NULL ? RELICORE_ERROR_NULL_POINTER
+                                              : RELICORE_ERROR_INVALID_STRUCT;
+                if (kind == H_STORAGE_BAD) {
+                    check(documented(st), "%s on a corrupted history = %" PRId32,
+                          H1[k].array_name, st);
+                    for (size_t i = 0; i < n; i++) {
+                        check(out[i] != SENTINEL, "%s: element %zu not written", H1[k].array_name,
+                              i);
+                    }
+                } else {
+                    check(st == want, "%s on a history of kind %d = %" PRId32, H1[k].array_name,
+                          (int)kind, st);
+                    for (size_t i = 0; i < n; i++) {
+                        check(isnan(out[i]), "%s on a refused history: out[%zu] = %.17g",
+                              H1[k].array_name, i, out[i]);
+                    }
+                }
+            }
+        }
+    }
+}
+
+struct sa_ctx {
+    const struct relicore_universe *u;
+};
+static int32_t sa_call(const void *c, const double *x, size_t n, double *out)
+{
+    const struct sa_ctx *k = c;
+    return relicore_saha_ionized_fraction_array(k->u, x, n, out);
+}
+static int32_t sa_elem(const void *c, double x, double *out)
+{
+    const struct sa_ctx *k = c;
+    return relicore_saha_ionized_fraction(k->u, x, out);
+}
+
+/* Saha on universes with and without baryons and on refused structs; the fits. */
+static void hostile_saha_and_fits(void)
+{
+    char args[128];
+    for (long it = 0; it < g_iterations; it++) {
+        enum ukind kind;
+        const struct relicore_universe *u;
+        if (below(2) == 0) {
+            kind = U_VALID;
+            u = g_dvalid[below(NDVALID)];
+        } else {
+            u = pick_universe(&kind); /* its valid universes have no baryons */
+        }
+        double z = below(3) ? history_arg() : ordinary(-3.0, 9.0);
+        double out = SENTINEL;
+        int nul = null_out();
+        int32_t st = relicore_saha_ionized_fraction(u, z, nul ? NULL : &out);
+        record("relicore_saha_ionized_fraction", st);
+        describe(args, sizeof args, 1, &z);
+        check_universe_call("relicore_saha_ionized_fraction", kind, st, nul, out, args);
+        if (!nul && (kind == U_VALID || kind == U_COPY) && (isnan(z) || z < 0.0 || z > 1e8)) {
+            check(st != RELICORE_OK, "saha_ionized_fraction(%s) = OK", args);
+        }
+        if (kind == U_VALID || kind == U_COPY) {
+            struct sa_ctx c = { u };
+            hostile_array("relicore_saha_ionized_fraction_array", &c, sa_call, sa_elem, -3.0, 9.0,
+                          MAXN);
+        } else {
+            size_t n = below(4);
+            double x[4] = { history_arg(), history_arg(), history_arg(), history_arg() };
+            double o[4] = { SENTINEL, SENTINEL, SENTINEL, SENTINEL };
+            st = relicore_saha_ionized_fraction_array(u, x, n, o);
+            record("relicore_saha_ionized_fraction_array", st);
+            if (kind == U_STORAGE_BAD) {
+                check(documented(st), "saha array on a corrupted universe = %" PRId32, st);
+            } else {
+                check(st == (kind == U_NULL ? RELICORE_ERROR_NULL_POINTER
+                                            : RELICORE_ERROR_INVALID_STRUCT),
+                      "saha array on a universe of kind %d = %" PRId32, (int)kind, st);
+                for (size_t i = 0; i < n; i++) {
+                    check(isnan(o[i]), "saha array on a refused universe: out[%zu] = %.17g", i,
+                          o[i]);
+                }
+            }
+        }
+        for (size_t k = 0; k < LEN(FIT); k++) {
+            double a[2] = { arg_double(-3.0, 0.0), arg_double(-2.0, 1.0) };
+            out = SENTINEL;
+            nul = null_out();
+            st = FIT[k].f(a[0], a[1], nul ? NULL : &out);
+            record(FIT[k].name, st);
+            describe(args, sizeof args, 2, a);
+            if (nul) {
+                check(st == RELICORE_ERROR_NULL_POINTER, "%s(%s, NULL) = %" PRId32, FIT[k].name,
+                      args, st);
+            } else {
+                check_out(FIT[k].name, st, out, args);
+                if (isnan(a[0]) || isnan(a[1]) || !(a[0] > 0.0) || !(a[1] > 0.0)) {
+                    check(st != RELICORE_OK, "%s(%s) = OK", FIT[k].name, args);
+                }
+            }
+            struct a1_ctx c = { FIT[k].array, FIT[k].f, arg_double(-2.0, 1.0) };
+            hostile_array(FIT[k].array_name, &c, a1_call, a1_elem, -3.0, 0.0, MAXN);
+        }
+    }
+}
+
+/* Options: valid ones, or (refuse) with one value compute must refuse; returns whether it
+ * injected one (when not, hostile_compute refuses the universe or a pointer instead). */
+static int hostile_options(struct relicore_thermal_history_options *o, int refuse)
+{
+    relicore_thermal_history_options_default(o);
+    if (below(2)) {
+        o->reionization = 1;
+        o->reionization_redshift = below(2) ? uniform() * 100.0 : ordinary(-3.0, 2.0);
+    }
+    o->highest_redshift = below(2) ? 1e4 : 3000.0 + 7000.0 * uniform();
+    if (!refuse) {
+        return 0;
+    }
+    switch (below(6)) {
+    case 0: { /* the switch */
+        static const int32_t sw[] = { 2, -1, 3, INT32_MIN, INT32_MAX, 255 };
+        o->reionization = below(3) ? sw[below(6)] : (int32_t)(uint32_t)next_u64();
+        if (o->reionization == 0 || o->reionization == 1) {
+            o->reionization = 2;
+        }
+        return 1;
+    }
+    case 1: /* a reionisation redshift that is refused */
+        o->reionization = 1;
+        do {
+            o->reionization_redshift = any_double();
+        } while (o->reionization_redshift >= 0.0 && o->reionization_redshift <= 100.0);
+        return 1;
+    case 2: /* a highest redshift below 3000 or not finite */
+        do {
+            o->highest_redshift = any_double();
+        } while (o->highest_redshift >= 3000.0);
+        return 1;
+    case 3: /* above the capacity */
+        /* (the table accepts a rounding allowance of about 9e-12 relative above 1e4) */
+        o->highest_redshift = below(2) ? 1e4 * (1.0 + ordinary(-10.0, 3.0)) : any_double();
+        if (!(o->highest_redshift > 1e4)) {
+            o->highest_redshift = INFINITY;
+        }
+        return 1;
+    default: return 0;
+    }
+}
+
+/* The struct was cleared: the tag and (every word, or 34 sampled words) of the storage 0. */
+static int looks_cleared(const struct relicore_thermal_history *h)
+{
+    if (h->tag != 0) {
+        return 0;
+    }
+    if (below(64) == 0) {
+        for (size_t i = 0; i < RELICORE_THERMAL_HISTORY_STORAGE_WORDS; i++) {
+            if (h->storage[i] != 0) {
+                return 0;
+            }
+        }
+        return 1;
+    }
+    if (h->storage[0] != 0 || h->storage[RELICORE_THERMAL_HISTORY_STORAGE_WORDS - 1] != 0) {
+        return 0;
+    }
+    for (int i = 0; i < 32; i++) {
+        if (h->storage[below(RELICORE_THERMAL_HISTORY_STORAGE_WORDS)] != 0) {
+            return 0;
+        }
+    }
+    return 1;
+}
+
+static void hostile_compute(void)
+{
+    struct relicore_thermal_history *out = malloc(sizeof *out);
+    if (out == NULL) {
+        exit(2);
+    }
+    long computed = 0;
+    for (long it = 0; it < g_iterations; it++) {
+        /* the options default */
+        struct relicore_thermal_history_options o;
+        memset(&o, 0x33, sizeof o);
+        int nul = null_out();
+        int32_t st = relicore_thermal_history_options_default(nul ? NULL : &o);
+        record("relicore_thermal_history_options_default", st);
+        if (nul) {
+            check(st == RELICORE_ERROR_NULL_POINTER, "options_default(NULL) = %" PRId32, st);
+        } else {
+            check(st == RELICORE_OK && o.reionization == 0 && isnan(o.reionization_redshift) &&
+                      o.highest_redshift == 1e4,
+                  "options_default = %" PRId32 " (%d, %g, %g)", st, (int)o.reionization,
+                  o.reionization_redshift, o.highest_redshift);
+        }
+
+        /* a compute costs milliseconds: all but about 1 call in 2000 get something to refuse */
+        int refuse = below(2000) != 0;
+        int injected = hostile_options(&o, refuse);
+        enum ukind kind = U_VALID;
+        const struct relicore_universe *u = g_dvalid[below(NDVALID)]; /* with baryons */
+        int baryons = 1, nulu = 0, nulo = 0;
+        if ((refuse && !injected) || (refuse && below(4) == 0) || (!refuse && below(8) == 0)) {
+            switch (below(4)) {
+            case 0:
+                nulu = refuse && !injected;
+                if (nulu) {
+                    break;
+                }
+                /* fall through */
+            case 1:
+                nulo = refuse && !injected;
+                if (nulo) {
+                    break;
+                }
+                /* fall through */
+            default:
+                /* any kind of universe pointer (its valid universes have no baryons); a valid
+                 * tag with garbage storage only where a success may follow (rare) */
+                do {
+                    u = pick_universe(&kind);
+                } while (refuse && kind == U_STORAGE_BAD);
+                baryons = 0;
+                break;
+            }
+        }
+        int nulout = null_out();
+        if (!nulout) {
+            memcpy(out, g_history[below(NHISTORY)], sizeof *out); /* a valid history before */
+        }
+        st = relicore_thermal_history_compute(nulu ? NULL : u, nulo ? NULL : &o,
+                                              nulout ? NULL : out);
+        record("relicore_thermal_history_compute", st);
+        const char *what = refuse ? (injected ? "refused options" : "a refused universe")
+                                  : "valid options";
+        if (nulout || nulu || nulo || kind == U_NULL) {
+            check(st == RELICORE_ERROR_NULL_POINTER,
+                  "thermal_history_compute with NULL (%s) = %" PRId32, what, st);
+        } else if (kind != U_VALID && kind != U_COPY && kind != U_STORAGE_BAD) {
+            /* the struct is checked before the options */
+            check(st == RELICORE_ERROR_INVALID_STRUCT,
+                  "thermal_history_compute on a universe of kind %d (%s) = %" PRId32, (int)kind,
+                  what, st);
+        } else if (refuse || !baryons) {
+            check(st != RELICORE_OK && documented(st),
+                  "thermal_history_compute with %s (baryons %d, kind %d) = %" PRId32, what,
+                  baryons, (int)kind, st);
+            if (!baryons && !injected && kind != U_STORAGE_BAD) {
+                check(st == RELICORE_ERROR_INVALID_PARAMETER,
+                      "thermal_history_compute of a universe without baryons = %" PRId32, st);
+            }
+        } else {
+            check(st == RELICORE_OK,
+                  "compute of a valid universe with valid options = %" PRId32
+                  " (z_re %d %.17g, top %.17g)",
+                  st, (int)o.reionization, o.reionization_redshift, o.highest_redshift);
+        }
+        if (!nulout && st == RELICORE_OK) {
+            computed++;
+            double zs = SENTINEL;
+            int32_t s2 = relicore_last_scattering_redshift(out, &zs);
+            check(s2 == RELICORE_OK && zs > 0.0 && isfinite(zs),
+                  "a computed history: z* = %.17g (status %" PRId32 ")", zs, s2);
+        }
+        if (!nulout && st != RELICORE_OK) {
+            check(looks_cleared(out), "a failed compute (%" PRId32 ") did not clear the struct",
+                  st);
+        }
+    }
+    printf("thermal histories computed in the hostile loop: %ld\n", computed);
+    /* no stale computed history for a later "uninitialised" block (H_UNINIT) */
+    *(volatile uint64_t *)&out->tag = 0;
+    free(out);
+}
+
 /* Parameters: ordinary ones, with up to three fields replaced by hostile values. */
 static void hostile_parameters(struct relicore_universe_parameters *p)
 {
@@ -1230,6 +1778,7 @@ int main(int argc, char **argv)
         }
     }
     build_valid_universes();
+    build_decoupling();
     hostile_messages();
     hostile_blackbody_scalars();
     hostile_blackbody_arrays();
@@ -1237,6 +1786,9 @@ int main(int argc, char **argv)
     hostile_response();
     hostile_init();
     hostile_universe_functions();
+    hostile_saha_and_fits();
+    hostile_compute();
+    hostile_history_queries();
 
     printf("%-62s %9s %9s  statuses (code:count)\n", "function", "calls", "ok");
     long fewest = -1;
@@ -1268,6 +1820,7 @@ int main(int argc, char **argv)
     printf("\n");
     check(fewest >= g_iterations, "a function was called only %ld times (< %ld)", fewest,
           g_iterations);
+    free_decoupling();
     free(g_scratch);
     for (int i = 0; i < NVALID; i++) {
         free(g_valid[i]);

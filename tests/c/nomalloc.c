@@ -2,7 +2,8 @@
  * Firmware-style use of relicore: single-precision scalar functions, the two-load calibration
  * (float and double), the float response functions and the float array forms, and a universe
  * (built in static storage) with scalar, array, constant and inverse calls, with every other
- * buffer on the stack. tests/c/run.sh links it against librelicore.a with -Wl,--gc-sections
+ * buffer on the stack, and the decoupling functions with a thermal history in static storage.
+ * tests/c/run.sh links it against librelicore.a with -Wl,--gc-sections
  * and checks that the executable needs no malloc, calloc, realloc or free.
  * Uses no stdio; the exit status is the number of calls that did not succeed as expected.
  */
@@ -90,6 +91,30 @@ int main(void)
     failures += relicore_universe_check_parameters(&params, &which)
                 != RELICORE_ERROR_INVALID_PARAMETER;
     failures += which != 0;
+
+    /* decoupling: Saha, a fit, and a thermal history in static storage (163848 bytes) */
+    static struct relicore_universe with_baryons;
+    params.h0_km_s_mpc = 67.0;
+    params.omega_baryon = 0.049;
+    failures += relicore_universe_init(&params, &with_baryons) != RELICORE_OK;
+    failures += bad(relicore_saha_ionized_fraction(&with_baryons, 1400.0, &d), (float)d);
+    failures += bad(relicore_drag_redshift_fit(0.0224, 0.143, &d), (float)d);
+    static struct relicore_thermal_history history;
+    struct relicore_thermal_history_options options;
+    failures += relicore_thermal_history_options_default(&options) != RELICORE_OK;
+    options.reionization = 1;
+    options.reionization_redshift = 7.7;
+    failures += relicore_thermal_history_compute(&with_baryons, &options, &history) != RELICORE_OK;
+    failures += bad(relicore_last_scattering_redshift(&history, &d), (float)d);
+    failures += bad(relicore_visibility(&history, d, &d), (float)d);
+    for (int i = 0; i < 8; i++) {
+        z[i] = 200.0 * (double)i;
+    }
+    failures += relicore_ionized_fraction_array(&history, z, 8, dz) != RELICORE_OK;
+    failures += !isfinite(dz[7]);
+    options.highest_redshift = 2e4;
+    failures += relicore_thermal_history_compute(&with_baryons, &options, &history)
+                != RELICORE_ERROR_CAPACITY_TOO_SMALL;
 
     /* a failing call still allocates nothing */
     failures += relicore_spectral_radiance_wavelength_f32(-1.0f, 300.0f, &v)

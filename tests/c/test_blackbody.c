@@ -951,7 +951,8 @@ static void check_status_messages(void)
                               RELICORE_ERROR_INVALID_STRUCT,
                               RELICORE_ERROR_PANIC,
                               RELICORE_ERROR_INVALID_PARAMETER,
-                              RELICORE_ERROR_NO_BIG_BANG };
+                              RELICORE_ERROR_NO_BIG_BANG,
+                              RELICORE_ERROR_CAPACITY_TOO_SMALL };
     const size_t n = sizeof codes / sizeof codes[0];
     for (size_t i = 0; i < n; i++) {
         check(codes[i] == -(int32_t)i, "status constant %zu is %d, FORMAT.md says %d", i,
@@ -960,7 +961,7 @@ static void check_status_messages(void)
     const char *unknown = relicore_status_message(1);
     check(unknown != NULL && strcmp(unknown, "unknown status") == 0,
           "message of an unknown code is '%s'", unknown ? unknown : "(NULL)");
-    const int32_t others[] = { -16, 2, INT32_MIN, INT32_MAX };
+    const int32_t others[] = { -17, 2, INT32_MIN, INT32_MAX };
     for (size_t i = 0; i < sizeof others / sizeof others[0]; i++) {
         const char *m = relicore_status_message(others[i]);
         check(m != NULL && strcmp(m, "unknown status") == 0, "message of code %d is '%s'",

@@ -744,7 +744,8 @@ static void check_status_messages(void)
                               RELICORE_ERROR_INVALID_STRUCT,
                               RELICORE_ERROR_PANIC,
                               RELICORE_ERROR_INVALID_PARAMETER,
-                              RELICORE_ERROR_NO_BIG_BANG };
+                              RELICORE_ERROR_NO_BIG_BANG,
+                              RELICORE_ERROR_CAPACITY_TOO_SMALL };
     const size_t n = sizeof codes / sizeof codes[0];
     for (size_t i = 0; i < n; i++) {
         check(codes[i] == -(int32_t)i, "status constant %zu is %d, FORMAT.md says %d", i,

@@ -1473,7 +1473,8 @@ contains
         RELICORE_ERROR_LENGTH_MISMATCH, RELICORE_ERROR_NOT_INCREASING, &
         RELICORE_ERROR_DEGENERATE_CALIBRATION, RELICORE_ERROR_OUT_OF_DOMAIN, &
         RELICORE_ERROR_NO_CONVERGENCE, RELICORE_ERROR_INVALID_STRUCT, RELICORE_ERROR_PANIC, &
-        RELICORE_ERROR_INVALID_PARAMETER, RELICORE_ERROR_NO_BIG_BANG]
+        RELICORE_ERROR_INVALID_PARAMETER, RELICORE_ERROR_NO_BIG_BANG, &
+        RELICORE_ERROR_CAPACITY_TOO_SMALL]
     character(len=:), allocatable :: unknown, a, version
     integer :: k, j
     logical :: ok
@@ -1481,7 +1482,7 @@ contains
     unknown = relicore_status_message(1_c_int32_t)
     call check(len(unknown) > 0 .and. &
         relicore_status_message(-huge(1_c_int32_t)) == unknown .and. &
-        relicore_status_message(RELICORE_ERROR_NO_BIG_BANG - 1_c_int32_t) == unknown, &
+        relicore_status_message(RELICORE_ERROR_CAPACITY_TOO_SMALL - 1_c_int32_t) == unknown, &
         'codes that are not relicore status codes share one message')
     do k = 1, size(codes)
       a = relicore_status_message(codes(k))
@@ -1493,7 +1494,7 @@ contains
           '" is empty, unknown or shared')
     end do
     call check(codes(1) == 0 .and. all(codes(2:) == [(-k, k = 1, size(codes) - 1)]), &
-        'status codes are not 0, -1, ..., -15 (FORMAT.md)')
+        'status codes are not 0, -1, ..., -16 (FORMAT.md)')
     version = relicore_version()
     call check(version == int_text(int(RELICORE_VERSION_MAJOR)) // '.' // &
         int_text(int(RELICORE_VERSION_MINOR)) // '.' // int_text(int(RELICORE_VERSION_PATCH)), &

@@ -1049,7 +1049,7 @@ contains
         relicore_status_message(RELICORE_ERROR_NO_BIG_BANG) /= unknown .and. &
         relicore_status_message(RELICORE_ERROR_NO_BIG_BANG) /= &
         relicore_status_message(RELICORE_ERROR_INVALID_PARAMETER) .and. &
-        relicore_status_message(RELICORE_ERROR_NO_BIG_BANG - 1_c_int32_t) == unknown, &
+        relicore_status_message(RELICORE_ERROR_CAPACITY_TOO_SMALL - 1_c_int32_t) == unknown, &
         'messages of the cosmology status codes')
   end subroutine test_messages
 

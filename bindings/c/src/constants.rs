@@ -27,6 +27,21 @@ pub const RELICORE_GRAVITATIONAL_CONSTANT: f64 = 6.674_30e-11;
 pub const RELICORE_FINE_STRUCTURE: f64 = 7.297_352_564_3e-3;
 /// Rydberg energy R∞hc, J (CODATA 2022).
 pub const RELICORE_RYDBERG_ENERGY: f64 = 2.179_872_361_103_0e-18;
+/// Atomic mass constant u, kg (CODATA 2022).
+pub const RELICORE_ATOMIC_MASS_UNIT: f64 = 1.660_539_068_92e-27;
+/// Mass of the hydrogen-1 atom, in u (AME 2020, Wang et al. 2021, Chinese Phys. C 45, 030003;
+/// value from memory).
+pub const RELICORE_HYDROGEN_ATOM_MASS_U: f64 = 1.007_825_031_898;
+/// Mass of the helium-4 atom, in u (AME 2020; value from memory).
+pub const RELICORE_HELIUM_ATOM_MASS_U: f64 = 4.002_603_254_130;
+/// Ionisation energy of hydrogen (1s), eV (NIST Atomic Spectra Database; value from memory).
+pub const RELICORE_HYDROGEN_IONIZATION_EV: f64 = 13.598_434_599_702;
+/// First ionisation energy of helium (He I → He II), eV (NIST Atomic Spectra Database; value
+/// from memory).
+pub const RELICORE_HELIUM_FIRST_IONIZATION_EV: f64 = 24.587_389_011;
+/// Second ionisation energy of helium (He II → He III), eV (NIST Atomic Spectra Database; value
+/// from memory).
+pub const RELICORE_HELIUM_SECOND_IONIZATION_EV: f64 = 54.417_765_5;
 /// First radiation constant c₁ = 2πhc², W m² (derived from the exact h and c).
 pub const RELICORE_FIRST_RADIATION: f64 = 3.741_771_852_192_758e-16;
 /// First radiation constant for spectral radiance c₁L = 2hc², W m² sr⁻¹ (derived).
@@ -141,6 +156,36 @@ mod tests {
             "RELICORE_RYDBERG_ENERGY",
             RELICORE_RYDBERG_ENERGY,
             relicore::constants::RYDBERG_ENERGY,
+        ),
+        (
+            "RELICORE_ATOMIC_MASS_UNIT",
+            RELICORE_ATOMIC_MASS_UNIT,
+            relicore::constants::ATOMIC_MASS_UNIT,
+        ),
+        (
+            "RELICORE_HYDROGEN_ATOM_MASS_U",
+            RELICORE_HYDROGEN_ATOM_MASS_U,
+            relicore::constants::HYDROGEN_ATOM_MASS_U,
+        ),
+        (
+            "RELICORE_HELIUM_ATOM_MASS_U",
+            RELICORE_HELIUM_ATOM_MASS_U,
+            relicore::constants::HELIUM_ATOM_MASS_U,
+        ),
+        (
+            "RELICORE_HYDROGEN_IONIZATION_EV",
+            RELICORE_HYDROGEN_IONIZATION_EV,
+            relicore::constants::HYDROGEN_IONIZATION_EV,
+        ),
+        (
+            "RELICORE_HELIUM_FIRST_IONIZATION_EV",
+            RELICORE_HELIUM_FIRST_IONIZATION_EV,
+            relicore::constants::HELIUM_FIRST_IONIZATION_EV,
+        ),
+        (
+            "RELICORE_HELIUM_SECOND_IONIZATION_EV",
+            RELICORE_HELIUM_SECOND_IONIZATION_EV,
+            relicore::constants::HELIUM_SECOND_IONIZATION_EV,
         ),
         (
             "RELICORE_FIRST_RADIATION",

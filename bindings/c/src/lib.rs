@@ -21,7 +21,8 @@
 //! (`float` twins), `calibration` (two-load calibration), `response` (response-weighted
 //! radiance), `universe` (the universe struct, its init function, parameters and constants),
 //! `cosmology` (the redshift functions of a universe, their inverses), `cosmology_array`
-//! (their array forms).
+//! (their array forms), `decoupling` (Saha equilibrium, the fits, the thermal-history struct,
+//! its compute function, queries and summary), `decoupling_array` (their array forms).
 
 #![deny(missing_docs)]
 #![cfg_attr(
@@ -57,6 +58,10 @@ pub mod universe;
 pub mod cosmology;
 
 pub mod cosmology_array;
+
+pub mod decoupling;
+
+pub mod decoupling_array;
 
 #[cfg(test)]
 mod header;

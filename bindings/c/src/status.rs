@@ -42,6 +42,9 @@ pub const RELICORE_ERROR_INVALID_PARAMETER: i32 = -14;
 /// The model has no big bang: E(z)² ≤ 0 somewhere on the way back (a bounce or a loitering
 /// universe), so ages and distances to high redshift do not exist.
 pub const RELICORE_ERROR_NO_BIG_BANG: i32 = -15;
+/// A fixed-capacity table (a thermal history) has too few nodes for what an argument asks of it
+/// (the highest redshift of the history).
+pub const RELICORE_ERROR_CAPACITY_TOO_SMALL: i32 = -16;
 
 /// Major version of the library (equal to the core crate's version, checked by a test).
 pub const RELICORE_VERSION_MAJOR: u32 = 0;
@@ -69,6 +72,7 @@ pub(crate) fn status_of(e: Error) -> i32 {
         Error::NoConvergence => RELICORE_ERROR_NO_CONVERGENCE,
         Error::InvalidParameter(_) => RELICORE_ERROR_INVALID_PARAMETER,
         Error::NoBigBang => RELICORE_ERROR_NO_BIG_BANG,
+        Error::CapacityTooSmall(_) => RELICORE_ERROR_CAPACITY_TOO_SMALL,
         // `Error` is `#[non_exhaustive]`: a variant added to the core later must get its own
         // code here; until then it is reported as outside the domain of the function.
         _ => RELICORE_ERROR_OUT_OF_DOMAIN,
@@ -113,6 +117,9 @@ pub(crate) fn message(status: i32) -> &'static CStr {
         RELICORE_ERROR_NO_BIG_BANG => {
             c"the model has no big bang: E(z)^2 <= 0 somewhere on the way back"
         }
+        RELICORE_ERROR_CAPACITY_TOO_SMALL => {
+            c"a fixed-capacity table is too small for what the arguments ask of it"
+        }
         _ => c"unknown status",
     }
 }
@@ -141,7 +148,7 @@ pub extern "C" fn relicore_version() -> *const c_char {
 mod tests {
     use super::*;
 
-    const ALL: [i32; 16] = [
+    const ALL: [i32; 17] = [
         RELICORE_OK,
         RELICORE_ERROR_NULL_POINTER,
         RELICORE_ERROR_NON_FINITE,
@@ -158,11 +165,12 @@ mod tests {
         RELICORE_ERROR_PANIC,
         RELICORE_ERROR_INVALID_PARAMETER,
         RELICORE_ERROR_NO_BIG_BANG,
+        RELICORE_ERROR_CAPACITY_TOO_SMALL,
     ];
 
     #[test]
     fn codes_are_zero_then_consecutive_negatives() {
-        // FORMAT.md: 0 OK, then -1 ... -15 in this order
+        // FORMAT.md: 0 OK, then -1 ... -16 in this order
         for (i, &c) in ALL.iter().enumerate() {
             assert_eq!(c, -(i as i32), "status constant at position {i}");
         }
@@ -172,7 +180,7 @@ mod tests {
     fn every_status_has_a_distinct_message() {
         let unknown = message(1);
         assert_eq!(unknown, c"unknown status");
-        assert_eq!(message(-16), unknown);
+        assert_eq!(message(-17), unknown);
         assert_eq!(message(i32::MIN), unknown);
         assert_eq!(message(i32::MAX), unknown);
         for (i, &a) in ALL.iter().enumerate() {
@@ -208,6 +216,10 @@ mod tests {
             (Error::NoConvergence, RELICORE_ERROR_NO_CONVERGENCE),
             (Error::InvalidParameter(3), RELICORE_ERROR_INVALID_PARAMETER),
             (Error::NoBigBang, RELICORE_ERROR_NO_BIG_BANG),
+            (
+                Error::CapacityTooSmall(2),
+                RELICORE_ERROR_CAPACITY_TOO_SMALL,
+            ),
         ];
         for (e, c) in cases {
             assert_eq!(status_of(e), c, "{e:?}");
