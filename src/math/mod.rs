@@ -6,8 +6,8 @@
 //! * [`exp`]: Tang's table-driven e^x and e^x − 1 of a double-length argument (pure Rust,
 //!   deterministic), the exponential of the Planck kernel.
 //! * [`roots`]: the one root finder, a safeguarded (bracketed) Newton iteration.
-//! * [`ode`]: the one stiff ODE stepper, the L-stable modified Rosenbrock 2(3) pair of Shampine
-//!   & Reichelt 1997, fixed-size state, no heap (the recombination history).
+//! * [`ode`]: the one stiff ODE stepper, the Rosenbrock 4(3) method of Kaps & Rentrop with
+//!   Shampine's parameters, fixed-size state, no heap (the recombination history).
 //! * [`quadrature`]: the one quadrature, adaptive Gauss-Kronrod 7-15 on a fixed-capacity stack.
 
 pub mod dd;
