@@ -461,7 +461,7 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
     #[inline]
     fn xe_rec(&self, u: T) -> (T, T) {
         let (l, d, _) = self.interp(&self.ln_xe, &self.dln_xe, u);
-        (l.exp(), d)
+        (crate::math::exp::exp(l), d)
     }
 
     /// The reionisation excess of x_e over the recombination value x at z.
@@ -752,7 +752,7 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
     pub fn matter_temperature_k(&self, z: T) -> Result<T> {
         let u = self.query_u(z, 0)?;
         let (l, _, _) = self.interp(&self.ln_tm, &self.dln_tm, u);
-        finite_result(l.exp(), 0)
+        finite_result(crate::math::exp::exp(l), 0)
     }
 
     /// τ of the reionisation excess from 0 to u (exact quadrature from the node below).
