@@ -25,3 +25,7 @@ echo "== benches/compare: timing and accuracy"
 echo
 echo "== benches/compare: luminosity distances of a catalogue (cosmology)"
 "$PY" benches/compare/cosmology_compare.py
+
+echo
+echo "== benches/compare: one thermal history and its summary (decoupling)"
+"$PY" benches/compare/decoupling_compare.py
