@@ -331,7 +331,14 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
         let ln_s = s.ln_saha_factors(top_u);
         let [ln_sh, _, _] = ln_s;
         let start = electron_balance(s.f_he, Hydrogen::Saha(ln_sh), ln_s)?;
-        let mut y = [start.x_p, T::one()];
+        // and T_m on the tightly coupled (slow) solution of dθ/du = θ − (Γ/H)(1 − θ), where
+        // the two terms balance: θ = (Γ/H)/(1 + Γ/H). Starting at θ = 1 instead would begin
+        // 1e-8 off that solution, relax within Δu ~ H/Γ, and give the first node the slope of
+        // the relaxation (d ln T_m/du = 2 instead of 1), which the interpolant would carry
+        // over the whole first interval.
+        let bg = self.background(top_u);
+        let gamma = bg.compton * start.x_e / (T::one() + s.f_he + start.x_e) / bg.hub;
+        let mut y = [start.x_p, gamma / (T::one() + gamma)];
         // per-step tolerance: RTOL in f64; half the square root of the rounding unit in f32, the
         // floor set by the finite-difference Jacobian
         let rtol = T::c(RTOL).max(T::epsilon().sqrt() * T::c(0.5));
