@@ -543,7 +543,7 @@ def test_saha_and_fit_loops_release_the_gil(u):
 
 
 def test_the_computation_of_a_history_releases_the_gil(u):
-    """Another Python thread runs while histories are computed (each computation is 10 to 30 ms
+    """Another Python thread runs while histories are computed (each computation is milliseconds
     of native code with the GIL released; several in a row make one call of at least 0.1 s)."""
 
     def make_call(count):

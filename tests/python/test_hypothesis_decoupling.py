@@ -75,7 +75,7 @@ SUMMARY = (
 )
 
 # Universes of several kinds (flat, massive neutrinos, open, closed w0-wa, helium-free and
-# helium-rich) and their histories, with and without reionisation (each about 20 ms to build).
+# helium-rich) and their histories, with and without reionisation (each a few milliseconds to build).
 UNIVERSES = [
     relicore.Universe(67.7, 0.31, omega_baryon=0.049),
     relicore.Universe(67.4, 0.315, omega_baryon=0.049, neutrino_masses_ev=[0.06, 0.0, 0.0]),
@@ -94,7 +94,7 @@ REDSHIFTS = st.one_of(VALUES, st.floats(0.0, 1e4), st.floats(-6.0, 9.0).map(lamb
 
 EPS = np.finfo(np.float64).eps
 
-# few examples where one example computes a history (about 20 ms)
+# few examples where one example computes a history (a few milliseconds)
 HISTORY_SETTINGS = settings(SETTINGS, max_examples=40)
 
 

@@ -38,7 +38,7 @@ beyond what its fixed table can cover raises with ``status`` -16 (capacity too s
 
 Pickling
 --------
-A history pickles as its universe and options and is recomputed (10 to 30 ms) where it is
+A history pickles as its universe and options and is recomputed (a few milliseconds) where it is
 unpickled; the recomputed history gives bit-identical results.
 """
 
@@ -154,7 +154,7 @@ def _rebuild(cls: type, universe: Any, reionization_redshift: Any, highest_redsh
 
 
 class ThermalHistory(_native.ThermalHistoryBase):
-    """The recombination and thermal history of a universe, computed once (10 to 30 ms, with
+    """The recombination and thermal history of a universe, computed once (a few milliseconds, with
     the GIL released) onto a table of HISTORY_NODES nodes in ln(1+z) from z = 0 to
     ``highest_redshift``, then queried at any redshift of the table.
 
