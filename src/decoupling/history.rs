@@ -9,9 +9,10 @@
 //! the interpolant; the reionisation part of the optical depth (a tanh of width Δz = 0.5)
 //! is integrated by the shared adaptive quadrature.
 
-use super::species::{Balance, Hydrogen, Species, electron_balance};
+use super::species::{Balance, Hydrogen, Species, electron_balance, proton_balance};
 use crate::check::finite_result;
 use crate::cosmology::Universe;
+use crate::math::exp::exp;
 use crate::math::ode::StiffStepper;
 use crate::math::quadrature::integrate;
 use crate::math::roots::bracketed_newton;
@@ -28,6 +29,12 @@ pub const LOWEST_HIGHEST_REDSHIFT: f64 = 3000.0;
 /// Highest allowed reionisation redshift: the tanh transition must finish well after the
 /// recombination era.
 pub const HIGHEST_REIONIZATION_REDSHIFT: f64 = 100.0;
+/// ln 10⁴ (the temperature unit of the recombination-coefficient fit).
+const LN_1E4: f64 = 9.210_340_371_976_184;
+/// Most nodes one step of the stepper may span (the nodes inside are interpolated), and the
+/// redshift below which it may (where no rate of the equations exceeds a few H).
+const MAX_SPAN: usize = 8;
+const SPAN_BELOW_REDSHIFT: f64 = 200.0;
 /// Width Δz of the hydrogen reionisation tanh (Lewis 2008).
 const REIONIZATION_WIDTH: f64 = 0.5;
 /// Redshift and width of helium's second reionisation (common practice).
@@ -115,10 +122,13 @@ pub struct ThermalHistory<T, const N: usize = HISTORY_NODES> {
 struct Background<T> {
     u: T,
     ln_s: [T; 3],
-    /// H in s⁻¹, n_H in m⁻³, T_r in K.
+    /// S_HeI and S_HeII (the exponentials of the last two of `ln_s`).
+    s12: [T; 2],
+    /// H in s⁻¹, n_H in m⁻³.
     hub: T,
     n_h: T,
-    t_r: T,
+    /// ln T_r.
+    ln_t: T,
     beta: T,
     ionise: T,
     compton: T,
@@ -266,7 +276,12 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
     /// H(u) in s⁻¹.
     #[inline]
     fn hubble_si(&self, u: T) -> T {
-        let a = (-u).exp();
+        self.hubble_si_at(T::one() / exp(u))
+    }
+
+    /// H in s⁻¹ at scale factor a.
+    #[inline]
+    fn hubble_si_at(&self, a: T) -> T {
         let e = self.universe.q_squared(a).sqrt() / (a * a);
         self.species.h0_si * e
     }
@@ -274,25 +289,28 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
     /// The state-independent part of the equations at u.
     fn background(&self, u: T) -> Background<T> {
         let s = &self.species;
-        let ln_s = s.ln_saha_factors(u);
-        let [ln_sh, _, _] = ln_s;
-        let hub = self.hubble_si(u);
-        let zp1 = u.exp();
+        let zp1 = exp(u);
         let z3 = zp1 * zp1 * zp1;
         let t_r = s.t0 * zp1;
-        let alpha_r = Species::alpha(t_r);
+        let inv_t = T::one() / t_r;
+        let ln_t = s.ln_t0 + u;
+        let ln_s = s.ln_saha_factors_at(u, inv_t);
+        let [ln_sh, ln_s1, ln_s2] = ln_s;
+        let hub = self.hubble_si_at(T::one() / zp1);
+        let alpha_r = Species::alpha_ln(ln_t - T::c(LN_1E4));
         // β = α(T_r) (2π m_e k T_r/h²)^{3/2} e^{−B₂/kT_r}, B₂ = χ_H/4
-        let beta = alpha_r
-            * (s.ln_saha_density_free + T::c(1.5) * t_r.ln() - T::c(0.25) * s.chi_h / t_r).exp();
+        let beta =
+            alpha_r * exp(s.ln_saha_density_free + T::c(1.5) * ln_t - T::c(0.25) * s.chi_h * inv_t);
         Background {
             u,
             ln_s,
+            s12: [exp(ln_s1), exp(ln_s2)],
             hub,
             n_h: s.n_h0 * z3,
-            t_r,
+            ln_t,
             beta,
             // β e^{−E_α/kT_r} = α(T_r) n_H S_H: the photoionisation term per neutral atom / n_H
-            ionise: alpha_r * ln_sh.exp(),
+            ionise: alpha_r * exp(ln_sh),
             compton: s.compton0 * z3 * zp1,
             escape: s.lyman_k / hub,
         }
@@ -301,27 +319,18 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
     /// dx_p/du and dθ/du at (x_p, θ) with the background `bg` and the balance `b` at x_p.
     fn rates(&self, bg: &Background<T>, b: &Balance<T>, xp: T, theta: T) -> (T, T) {
         let s = &self.species;
-        let alpha_m = Species::alpha(theta * bg.t_r);
+        let alpha_m = Species::alpha_ln(theta.ln() + bg.ln_t - T::c(LN_1E4));
         let n1s = bg.n_h * (T::one() - xp).max(T::zero());
         let lam = T::c(super::species::TWO_PHOTON_RATE);
         let c = (T::one() + bg.escape * lam * n1s) / (T::one() + bg.escape * (lam + bg.beta) * n1s);
+        // (1 − x_p) unclamped here: a trial state just above x_p = 1 must feel the restoring
+        // term, or the stiff equilibrium at x_p ≈ 1 − 1e-14 gets a kink the stepper cannot pass
         let dxp_dt = -c * bg.n_h * (alpha_m * b.x_e * xp - bg.ionise * (T::one() - xp));
         let gamma = bg.compton * b.x_e / (T::one() + s.f_he + b.x_e);
         (
             -dxp_dt / bg.hub,
             theta - gamma / bg.hub * (T::one() - theta),
         )
-    }
-
-    /// The balance, dx_p/du and dθ/du at (u, x_p, θ).
-    fn equations(&self, u: T, xp: T, theta: T) -> Result<(Balance<T>, T, T)> {
-        if !(xp > T::zero()) || !(theta > T::zero()) {
-            return Err(Error::NoConvergence);
-        }
-        let bg = self.background(u);
-        let b = electron_balance(self.species.f_he, Hydrogen::Fixed(xp), bg.ln_s)?;
-        let (a, c) = self.rates(&bg, &b, xp, theta);
-        Ok((b, a, c))
     }
 
     fn integrate(&mut self) -> Result<()> {
@@ -335,7 +344,7 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
         // the two terms balance: θ = (Γ/H)/(1 + Γ/H). Starting at θ = 1 instead would begin
         // 1e-8 off that solution, relax within Δu ~ H/Γ, and give the first node the slope of
         // the relaxation (d ln T_m/du = 2 instead of 1), which the interpolant would carry
-        // over the whole first interval.
+        // over the first interval.
         let bg = self.background(top_u);
         let gamma = bg.compton * start.x_e / (T::one() + s.f_he + start.x_e) / bg.hub;
         let mut y = [start.x_p, gamma / (T::one() + gamma)];
@@ -343,59 +352,119 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
         // floor set by the finite-difference Jacobian
         let rtol = T::c(RTOL).max(T::epsilon().sqrt() * T::c(0.5));
         let mut stepper = StiffStepper::new(rtol, [T::c(1e-16), T::c(1e-14)], 2_000_000);
-        let mut u_prev = top_u;
-        for i in (0..N).rev() {
-            let u = if i == N - 1 {
-                top_u
+        let mut i = N - 1;
+        let mut fi = self.state_rates(top_u, &y)?;
+        self.record(i, top_u, &y, at(&fi, 1))?;
+        let span_below = T::c(SPAN_BELOW_REDSHIFT).ln_1p();
+        while i > 0 {
+            let ui = self.node_u(i);
+            // below z = 200, where no rate of the equations exceeds a few H (nothing is
+            // stiff), one step may span several nodes where the stepper wants long steps; the
+            // nodes inside are filled by cubic Hermite interpolation of the state (values and
+            // derivatives at both ends), at most MAX_SPAN nodes apart. Above, the derivatives
+            // of the stiff unknowns reflect their fast relaxation, not the slow solution, and
+            // every node is a step end.
+            let want = (stepper.step / self.spacing).to_f64_exact();
+            let k = if ui <= span_below && want.is_finite() && want >= 2.0 {
+                (want as usize).min(MAX_SPAN).min(i)
             } else {
-                T::c(i as f64) * self.spacing
+                1
             };
-            if i != N - 1 {
+            let j = i - k;
+            let uj = self.node_u(j);
+            let yj = {
                 let this: &Self = self;
-                // the stepper evaluates several states at one u (the Jacobian columns) and
-                // several u at one x_p: keep the last background and the last balance
-                let mut last_bg: Option<Background<T>> = None;
+                // the stepper evaluates several states at one u (the Jacobian columns, the
+                // second stage and the end of a step) and several u at one x_p: keep the
+                // last two backgrounds and the last balance
+                let mut recent: [Option<Background<T>>; 2] = [None, None];
                 let mut last_balance: Option<(T, T, Balance<T>)> = None;
                 let mut f = |uu: T, st: &[T; 2]| -> Result<[T; 2]> {
                     let [xp, th] = *st;
                     if !(xp > T::zero()) || !(th > T::zero()) {
                         return Err(Error::NoConvergence);
                     }
-                    let bg = match last_bg {
-                        Some(b) if b.u == uu => b,
-                        _ => this.background(uu),
+                    let bg = match recent {
+                        [Some(b), _] if b.u == uu => b,
+                        [_, Some(b)] if b.u == uu => b,
+                        [first, _] => {
+                            let b = this.background(uu);
+                            recent = [Some(b), first];
+                            b
+                        }
                     };
-                    last_bg = Some(bg);
                     let bal = match last_balance {
                         Some((lu, lx, b)) if lu == uu && lx == xp => b,
-                        _ => electron_balance(this.species.f_he, Hydrogen::Fixed(xp), bg.ln_s)?,
+                        _ => proton_balance(this.species.f_he, xp, bg.ln_s, bg.s12)?,
                     };
                     last_balance = Some((uu, xp, bal));
                     let (a, b) = this.rates(&bg, &bal, xp, th);
                     Ok([a, b])
                 };
-                y = stepper.advance(&mut f, u_prev, y, u)?;
+                stepper.advance(&mut f, ui, y, uj)?
+            };
+            let fj = self.state_rates(uj, &yj)?;
+            let h = uj - ui;
+            for m in j + 1..i {
+                let t = (self.node_u(m) - ui) / h;
+                let (v, _, _) = hermite(t, h, at(&y, 0), at(&fi, 0), at(&yj, 0), at(&fj, 0));
+                let (th, dth, _) = hermite(t, h, at(&y, 1), at(&fi, 1), at(&yj, 1), at(&fj, 1));
+                self.record(m, self.node_u(m), &[v, th], dth)?;
             }
-            u_prev = u;
-            let [xp, theta] = y;
-            let (b, _, dtheta) = self.equations(u, xp, theta)?;
-            let hub = self.hubble_si(u);
-            let zp1 = u.exp();
-            let dtau = s.thomson0 * b.x_e * zp1 * zp1 * zp1 / hub;
-            if let (Some(a), Some(c), Some(d), Some(e)) = (
-                self.ln_xe.get_mut(i),
-                self.ln_tm.get_mut(i),
-                self.dln_tm.get_mut(i),
-                self.dtau.get_mut(i),
-            ) {
-                *a = b.x_e.ln();
-                *c = theta.ln() + s.ln_t0 + u;
-                *d = dtheta / theta + T::one();
-                *e = dtau;
-            }
+            self.record(j, uj, &yj, at(&fj, 1))?;
+            y = yj;
+            fi = fj;
+            i = j;
         }
         self.stats = [stepper.accepted, stepper.rejected, stepper.evaluations];
         self.slopes_of_ln_xe();
+        Ok(())
+    }
+
+    /// u of node i (the top node is exactly top_u).
+    #[inline]
+    fn node_u(&self, i: usize) -> T {
+        if i >= N - 1 {
+            self.top_u
+        } else {
+            T::c(i as f64) * self.spacing
+        }
+    }
+
+    /// dx_p/du and dθ/du at (u, x_p, θ).
+    fn state_rates(&self, u: T, y: &[T; 2]) -> Result<[T; 2]> {
+        let [xp, th] = *y;
+        if !(xp > T::zero()) || !(th > T::zero()) {
+            return Err(Error::NoConvergence);
+        }
+        let bg = self.background(u);
+        let b = proton_balance(self.species.f_he, xp, bg.ln_s, bg.s12)?;
+        let (a, c) = self.rates(&bg, &b, xp, th);
+        Ok([a, c])
+    }
+
+    /// Writes node i from (x_p, θ) and dθ/du.
+    fn record(&mut self, i: usize, u: T, y: &[T; 2], dtheta: T) -> Result<()> {
+        let s = self.species;
+        let [xp, theta] = *y;
+        if !(xp > T::zero()) || !(theta > T::zero()) {
+            return Err(Error::NoConvergence);
+        }
+        let zp1 = exp(u);
+        let inv_t = T::one() / (s.t0 * zp1);
+        let b = electron_balance(s.f_he, Hydrogen::Fixed(xp), s.ln_saha_factors_at(u, inv_t))?;
+        let hub = self.hubble_si_at(T::one() / zp1);
+        if let (Some(a), Some(c), Some(d), Some(e)) = (
+            self.ln_xe.get_mut(i),
+            self.ln_tm.get_mut(i),
+            self.dln_tm.get_mut(i),
+            self.dtau.get_mut(i),
+        ) {
+            *a = b.x_e.ln();
+            *c = theta.ln() + s.ln_t0 + u;
+            *d = dtheta / theta + T::one();
+            *e = s.thomson0 * b.x_e * zp1 * zp1 * zp1 / hub;
+        }
         Ok(())
     }
 

@@ -5,7 +5,8 @@
 
 use crate::constants as k;
 use crate::cosmology::Universe;
-use crate::math::roots::bracketed_newton;
+use crate::math::exp::exp;
+use crate::math::roots::{bracketed_newton, bracketed_newton_relative};
 use crate::{Error, Real, Result};
 
 /// The 2s → 1s two-photon decay rate Λ, s⁻¹ (the value used with the Peebles atom by Seager,
@@ -120,7 +121,12 @@ impl<T: Real> Species<T> {
     /// The three ln S (hydrogen, He I, He II) at u = ln(1+z), temperature T_r = T0 e^u.
     #[inline]
     pub fn ln_saha_factors(&self, u: T) -> [T; 3] {
-        let inv_t = (-u).exp() / self.t0;
+        self.ln_saha_factors_at(u, T::one() / (self.t0 * exp(u)))
+    }
+
+    /// As [`ln_saha_factors`](Self::ln_saha_factors) with 1/T_r given.
+    #[inline]
+    pub fn ln_saha_factors_at(&self, u: T, inv_t: T) -> [T; 3] {
         let base = self.ln_saha + T::c(1.5) * (self.ln_t0 + u) - T::c(3.0) * u;
         [
             base - self.chi_h * inv_t,
@@ -129,12 +135,12 @@ impl<T: Real> Species<T> {
         ]
     }
 
-    /// Case-B coefficient with the fudge factor, m³ s⁻¹, at temperature `t` (K).
+    /// Case-B coefficient with the fudge factor, m³ s⁻¹, at the temperature T whose
+    /// ln(T/10⁴ K) is `lt`.
     #[inline]
-    pub fn alpha(t: T) -> T {
-        let lt = (t * T::c(1e-4)).ln();
+    pub fn alpha_ln(lt: T) -> T {
         let [a, b, c, d] = PPB;
-        T::c(FUDGE * 1e-19 * a) * (T::c(b) * lt).exp() / (T::one() + T::c(c) * (T::c(d) * lt).exp())
+        T::c(FUDGE * 1e-19 * a) * exp(T::c(b) * lt) / (T::one() + T::c(c) * exp(T::c(d) * lt))
     }
 }
 
@@ -189,24 +195,40 @@ pub(crate) fn electron_balance<T: Real>(
     hyd: Hydrogen<T>,
     ln_s: [T; 3],
 ) -> Result<Balance<T>> {
-    let [_, ln_s1, ln_s2] = ln_s;
-    let ln_f = f_he.ln();
-    let ln_2f = (T::c(2.0) * f_he).ln();
-    if let Hydrogen::Fixed(xp) = hyd {
-        if !(xp > T::zero()) {
-            return Err(Error::NoConvergence);
+    match hyd {
+        Hydrogen::Fixed(xp) => {
+            let [_, ln_s1, ln_s2] = ln_s;
+            proton_balance(f_he, xp, ln_s, [exp(ln_s1), exp(ln_s2)])
         }
-        // fast path: helium adds less than 1e-3 ulp even at the smallest possible x_e = x_p
-        let lxp = xp.ln();
-        let bound = ln_s1 - lxp + softplus(T::c(core::f64::consts::LN_2) + ln_s2 - lxp) + ln_f;
-        if f_he == T::zero() || bound < lxp + (T::epsilon() * T::c(1e-3)).ln() {
+        Hydrogen::Saha(_) => newton_balance(f_he, hyd, ln_s),
+    }
+}
+
+/// The electron balance with x_p given, the helium Saha factors given both as logarithms and
+/// as numbers (`s12` = [S_HeI, S_HeII], +∞ where they overflow).
+pub(crate) fn proton_balance<T: Real>(
+    f_he: T,
+    xp: T,
+    ln_s: [T; 3],
+    s12: [T; 2],
+) -> Result<Balance<T>> {
+    if !(xp > T::zero()) {
+        return Err(Error::NoConvergence);
+    }
+    let [s1, s2] = s12;
+    let tiny = T::epsilon() * T::c(1e-3);
+    if f_he == T::zero() {
+        return Ok(Balance { x_e: xp, x_p: xp });
+    }
+    if s1.is_finite() && s2.is_finite() && s1 < T::c(1e100) && s2 < T::c(1e100) {
+        // fast path: the helium share f(y₁ + 2y₂) ≤ f S₁(x_p + 2S₂)/x_p² (y₁ ≤ r₁ and
+        // y₂ ≤ r₁r₂ with r = S/x_e and x_e ≥ x_p) is below 1e-3 ulp of x_p
+        if f_he * s1 * (xp + T::c(2.0) * s2) < tiny * xp * xp * xp {
             return Ok(Balance { x_e: xp, x_p: xp });
         }
         // He III below 1e-3 ulp (2f y₂ ≤ 2f S_HeII/x_p): one helium stage, and the balance
         // x_e = x_p + f S₁/(x_e + S₁) is the quadratic x_e² + (S₁ − x_p) x_e − S₁(x_p + f) = 0
-        let tiny = (T::epsilon() * T::c(1e-3)).ln();
-        if ln_2f + ln_s2 - lxp < lxp + tiny && ln_s1 < T::c(300.0) {
-            let s1 = ln_s1.exp();
+        if T::c(2.0) * f_he * s2 < tiny * xp * xp {
             let b = s1 - xp;
             let c = s1 * (xp + f_he);
             let root = (b * b + T::c(4.0) * c).sqrt();
@@ -217,11 +239,30 @@ pub(crate) fn electron_balance<T: Real>(
             };
             return Ok(Balance { x_e, x_p: xp });
         }
+        // both stages: with x = x_p + d, the balance d (x² + S₁x + S₁S₂) = f S₁ (x + 2S₂) is a
+        // cubic in the helium share d ∈ [0, 2f] (negative at 0, positive at 2f), solved by a
+        // bracketed Newton iteration without transcendental functions
+        let cubic = |d: T| -> (T, T) {
+            let x = xp + d;
+            let q = x * x + s1 * x + s1 * s2;
+            (
+                d * q - f_he * s1 * (x + T::c(2.0) * s2),
+                q + d * (T::c(2.0) * x + s1) - f_he * s1,
+            )
+        };
+        let d = bracketed_newton_relative(
+            cubic,
+            T::zero(),
+            T::c(2.0) * f_he,
+            T::epsilon() * T::c(2.0),
+            200,
+        )?;
+        return Ok(Balance {
+            x_e: xp + d,
+            x_p: xp,
+        });
     }
-    match hyd {
-        Hydrogen::Fixed(xp) => fixed_balance(f_he, xp, ln_s),
-        Hydrogen::Saha(_) => newton_balance(f_he, hyd, ln_s),
-    }
+    fixed_balance(f_he, xp, ln_s)
 }
 
 /// The electron balance with x_p given, by a bracketed Newton iteration in η = ln(x_e/x_p) ∈
@@ -310,8 +351,9 @@ fn newton_balance<T: Real>(f_he: T, hyd: Hydrogen<T>, ln_s: [T; 3]) -> Result<Ba
 mod tests {
     use super::*;
 
-    /// The closed forms (helium negligible; one helium stage) give the root of the same balance
-    /// as the general Newton iteration, to a few ulp, over the states where they apply.
+    /// The closed forms (helium negligible; one helium stage) and the cubic in the helium share
+    /// give the root of the same balance as the general Newton iteration in ln(x_e/x_p), to a
+    /// few ulp, over the states where they apply.
     #[test]
     fn fast_paths_agree_with_the_general_solution() {
         let f = 0.0815f64;
@@ -320,7 +362,8 @@ mod tests {
             let xp = 10f64.powf(-4.0 + 4.0 * i as f64 / 59.0).min(1.0);
             for j in 0..40 {
                 let ln_s1 = -60.0 + 65.0 * j as f64 / 39.0;
-                let ln_s = [0.0, ln_s1, -200.0];
+                let ln_s2 = [-200.0, -30.0, -5.0, 0.0, 3.0][j % 5];
+                let ln_s = [0.0, ln_s1, ln_s2];
                 let fast = electron_balance(f, Hydrogen::Fixed(xp), ln_s).unwrap();
                 let slow = fixed_balance(f, xp, ln_s).unwrap();
                 let rel = ((fast.x_e - slow.x_e) / slow.x_e).abs();
