@@ -15,7 +15,7 @@ import re
 import sys
 
 ROOT = pathlib.Path(__file__).resolve().parent.parent
-TOPICS = ["blackbody", "cosmology"]
+TOPICS = ["blackbody", "cosmology", "decoupling"]
 
 # Functions whose vectors are named after the function that exercises them, with the reason.
 VECTOR_ALIASES = {
@@ -34,13 +34,27 @@ NOT_FUNCTIONS = {
 
 
 def public_functions(topic):
-    """Free functions (`pub fn` at the start of a line) and methods (`    pub fn name(&self`)."""
+    """Free functions (`pub fn` at the start of a line) and methods (`    pub fn name(&self`) of
+    the public types of the topic (`pub struct`/`pub enum`: a `pub fn` in the impl of a
+    `pub(crate)` type is not public API)."""
+    files = sorted((ROOT / "src" / topic).glob("*.rs"))
+    public_types = set()
+    for p in files:
+        public_types.update(re.findall(r"^pub (?:struct|enum) (\w+)", p.read_text(), flags=re.M))
     names = []
-    for p in sorted((ROOT / "src" / topic).glob("*.rs")):
+    for p in files:
         text = p.read_text()
         names += re.findall(r"^pub fn (\w+)", text, flags=re.M)
-        names += [n for n in re.findall(r"^    pub fn (\w+)(?:<[^>]*>)?\(&self", text, flags=re.M)]
-        names += [n for n in re.findall(r"^    pub fn (\w+)", text, flags=re.M) if n in NOT_FUNCTIONS]
+        impl_type = None
+        for line in text.splitlines():
+            m = re.match(r"impl(?:<[^>]*>)?\s+(?:\w+(?:<[^>]*>)?\s+for\s+)?(\w+)", line)
+            if m:
+                impl_type = m.group(1)
+            elif line.startswith("}"):
+                impl_type = None
+            m = re.match(r"    pub fn (\w+)(?:<[^>]*>)?\(&self", line)
+            if m and impl_type in public_types:
+                names.append(m.group(1))
     return [n for n in dict.fromkeys(names) if n not in NOT_FUNCTIONS]
 
 

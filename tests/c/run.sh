@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # C tests of relicore: builds the release-c library, then, for each C test program
-# (test_blackbody on the blackbody vector files, test_cosmology on tests/data/cosmology.txt):
+# (test_blackbody on the blackbody vector files, test_cosmology on tests/data/cosmology.txt,
+# test_decoupling on tests/data/decoupling.txt):
 #   1. the test against librelicore.a (by path, -lm, --gc-sections) on the reference vectors;
 #   2. the same test built with AddressSanitizer + UndefinedBehaviorSanitizer (leak checking on;
 #      falls back to valgrind if the sanitizer runtime is missing);
@@ -23,6 +24,7 @@ BUILD="$ROOT/build/c-tests"
 LIBDIR="$ROOT/target/release-c"
 DATA=("$ROOT/tests/data/blackbody.txt" "$ROOT/tests/data/blackbody_response.txt")
 COSMOLOGY_DATA=("$ROOT/tests/data/cosmology.txt")
+DECOUPLING_DATA=("$ROOT/tests/data/decoupling.txt")
 CC=${CC:-gcc}
 CFLAGS=(-std=c11 -Wall -Wextra -Wpedantic -Werror -I "$ROOT/include")
 mkdir -p "$BUILD"
@@ -43,7 +45,7 @@ step() { # step NAME COMMAND...: runs a step, counts it, never stops the script
     fi
 }
 
-for f in "${DATA[@]}" "${COSMOLOGY_DATA[@]}"; do
+for f in "${DATA[@]}" "${COSMOLOGY_DATA[@]}" "${DECOUPLING_DATA[@]}"; do
     [[ -f "$f" ]] || { echo "missing reference data $f" >&2; exit 1; }
 done
 
@@ -55,9 +57,10 @@ data_of() {
     case $1 in
     test_blackbody) echo "${DATA[@]}" ;;
     test_cosmology) echo "${COSMOLOGY_DATA[@]}" ;;
+    test_decoupling) echo "${DECOUPLING_DATA[@]}" ;;
     esac
 }
-TESTS=(test_blackbody test_cosmology)
+TESTS=(test_blackbody test_cosmology test_decoupling)
 
 build_static() { # build_static TEST
     "$CC" "${CFLAGS[@]}" -O2 "tests/c/$1.c" "$LIBDIR/librelicore.a" -lm \
@@ -107,7 +110,11 @@ check_shared() { # check_shared TEST
     local t=$1
     "$CC" "${CFLAGS[@]}" -O2 "tests/c/$t.c" -L "$LIBDIR" -lrelicore \
         -Wl,-rpath,"$LIBDIR" -lm -o "$BUILD/${t}_shared" || return 1
-    ldd "$BUILD/${t}_shared" | grep -q "$LIBDIR/librelicore.so" \
+    # ldd's output is captured first: with pipefail, `ldd | grep -q` fails whenever grep exits at
+    # its match before ldd has written its last line (ldd then dies of SIGPIPE)
+    local deps
+    deps=$(ldd "$BUILD/${t}_shared") || { echo "ldd ${t}_shared failed"; return 1; }
+    grep -qF "$LIBDIR/librelicore.so" <<<"$deps" \
         || { echo "${t}_shared does not load $LIBDIR/librelicore.so"; return 1; }
     # shellcheck disable=SC2046
     "$BUILD/${t}_shared" $(data_of "$t") || return 1

@@ -1,12 +1,13 @@
 #!/usr/bin/env bash
 # Fortran face of relicore: builds the module and the vector tests against the static C library,
-# runs test_blackbody on both blackbody data files and test_cosmology on the cosmology file,
-# the error-stop checks, the dump modes (the cosmology dump is compared bit for bit with the C
-# harness's when tests/c/run.sh has built it), the interface check against include/relicore.h
-# (and its self-test), and both tests under valgrind.
+# runs test_blackbody on both blackbody data files, test_cosmology on the cosmology file and
+# test_decoupling on the decoupling file, the error-stop checks, the dump modes (the cosmology and
+# decoupling dumps are compared bit for bit with the C harnesses' when tests/c/run.sh has built
+# them), the interface check against include/relicore.h (and its self-test), and the tests under
+# valgrind.
 # Run from the repository root:  bash tests/fortran/run.sh
-# Leaves build/fortran/test_blackbody and build/fortran/test_cosmology (their --dump modes are
-# used by the Python tests).
+# Leaves build/fortran/test_blackbody, build/fortran/test_cosmology and
+# build/fortran/test_decoupling (their --dump modes are used by the Python tests).
 set -euo pipefail
 
 FC=${FC:-gfortran}
@@ -16,6 +17,8 @@ BIN=$OUT/test_blackbody
 DATA=(tests/data/blackbody.txt tests/data/blackbody_response.txt)
 COSMOLOGY_BIN=$OUT/test_cosmology
 COSMOLOGY_DATA=tests/data/cosmology.txt
+DECOUPLING_BIN=$OUT/test_decoupling
+DECOUPLING_DATA=tests/data/decoupling.txt
 
 if [[ ! -f bindings/fortran/relicore.f90 ]]; then
   echo "run.sh: run from the repository root" >&2
@@ -38,9 +41,12 @@ mkdir -p "$OUT"
   -c tests/fortran/test_blackbody.f90 -o "$OUT/test_blackbody.o"
 "$FC" -std=f2018 -Wall -Werror -J "$OUT" \
   -c tests/fortran/test_cosmology.f90 -o "$OUT/test_cosmology.o"
+"$FC" -std=f2018 -Wall -Werror -J "$OUT" \
+  -c tests/fortran/test_decoupling.f90 -o "$OUT/test_decoupling.o"
 # the archive by path (DESIGN 9.6); on this glibc -lm is the only system library it needs
 "$FC" "$OUT/test_blackbody.o" "$OUT/relicore.o" "$LIB" -lm -o "$BIN"
 "$FC" "$OUT/test_cosmology.o" "$OUT/relicore.o" "$LIB" -lm -o "$COSMOLOGY_BIN"
+"$FC" "$OUT/test_decoupling.o" "$OUT/relicore.o" "$LIB" -lm -o "$DECOUPLING_BIN"
 
 # ------------------------------------------------------------------ vectors and tests in code
 log=$OUT/test_blackbody.log
@@ -77,6 +83,24 @@ else
   fail "test_cosmology on $COSMOLOGY_DATA (exit status $cstatus; see $clog)"
 fi
 
+dlog=$OUT/test_decoupling.log
+if "$DECOUPLING_BIN" "$DECOUPLING_DATA" >"$dlog" 2>&1; then
+  dstatus=0
+else
+  dstatus=$?
+fi
+grep '^FAIL' "$dlog" || true
+sed -n '/^largest deviation/,/^universes:/p' "$dlog"
+dsummary=$(grep -E '^[0-9]+ passed, [0-9]+ failed$' "$dlog" | tail -n 1 || true)
+echo "test_decoupling: ${dsummary:-no summary (exit status $dstatus)}"
+decoupling_passed=0
+if [[ $dstatus -eq 0 && $dsummary =~ ^([0-9]+)\ passed,\ 0\ failed$ && ${BASH_REMATCH[1]} -gt 0 ]]; then
+  decoupling_passed=${BASH_REMATCH[1]}
+  pass "test_decoupling on $DECOUPLING_DATA"
+else
+  fail "test_decoupling on $DECOUPLING_DATA (exit status $dstatus; see $dlog)"
+fi
+
 # ------------------------------------------------------------------ error stop without stat
 expect_out=$OUT/stop_check.out
 expect_err=$OUT/stop_check.err
@@ -102,6 +126,19 @@ else
     pass "a failing relicore_universe_init without stat stops with: $expected"
   else
     fail "--stop-check (cosmology): stop message '$(cat "$expect_err.cosmology")' lacks '$expected'"
+  fi
+fi
+
+# ------------------------------------------------------------------ error stop of a failed compute
+if "$DECOUPLING_BIN" --stop-check >"$expect_out.decoupling" 2>"$expect_err.decoupling"; then
+  fail "--stop-check (decoupling): a failing compute without stat did not stop the program"
+  cat "$expect_out.decoupling"
+else
+  expected=$(sed -n 's/^EXPECT //p' "$expect_out.decoupling")
+  if [[ -n $expected ]] && grep -qF -- "$expected" "$expect_err.decoupling"; then
+    pass "a failing relicore_thermal_history_compute without stat stops with: $expected"
+  else
+    fail "--stop-check (decoupling): stop message '$(cat "$expect_err.decoupling")' lacks '$expected'"
   fi
 fi
 
@@ -146,6 +183,33 @@ else
   fail "--dump (cosmology) failed"
 fi
 
+ddump=$OUT/dump_decoupling.txt
+if "$DECOUPLING_BIN" --dump "$DECOUPLING_DATA" >"$ddump"; then
+  want_lines=$(awk '!/^#/ && NF > 0 && $1 != "universe" && $1 != "history" && $1 != "history_reionized" && $(NF - 2) != "status"' "$DECOUPLING_DATA" | wc -l)
+  bad_lines=$(awk '{ if (NF != 3 || length($3) != 16 || $3 !~ /^[0-9A-F]+$/) bad++ } END { print bad + 0 }' "$ddump")
+  names_match=$(diff <(awk '{print $1, $2}' "$ddump") \
+    <(awk '!/^#/ && NF > 0 && $1 != "universe" && $1 != "history" && $1 != "history_reionized" && $(NF - 2) != "status" {print $2, $1}' "$DECOUPLING_DATA") \
+    >/dev/null && echo yes || echo no)
+  if [[ $(wc -l <"$ddump") -eq $want_lines && $bad_lines -eq 0 && $names_match == yes ]]; then
+    pass "--dump (decoupling): $want_lines lines 'target function bits' in file order"
+  else
+    fail "--dump (decoupling): $(wc -l <"$ddump") lines for $want_lines vectors, $bad_lines malformed, names in order: $names_match"
+  fi
+  # the same bits as the C harness (tests/c/run.sh builds it; skipped when it is absent)
+  cbin=build/c-tests/test_decoupling
+  if [[ -x $cbin ]]; then
+    if "$cbin" --dump "$DECOUPLING_DATA" | awk '{print $1, $2, toupper($3)}' | cmp -s - "$ddump"; then
+      pass "--dump (decoupling): Fortran and C agree bit for bit on $want_lines results"
+    else
+      fail "--dump (decoupling): Fortran and C results differ (compare $ddump with $cbin --dump)"
+    fi
+  else
+    echo "skip: $cbin not built (run tests/c/run.sh first) - no Fortran/C bit comparison"
+  fi
+else
+  fail "--dump (decoupling) failed"
+fi
+
 # ------------------------------------------------------------------ interfaces against the header
 if python3 tests/fortran/check_interfaces.py; then
   pass "interfaces match include/relicore.h"
@@ -178,10 +242,20 @@ if command -v valgrind >/dev/null 2>&1; then
     fail "valgrind (cosmology) reported errors (see $cvlog)"
     head -n 40 "$cvlog"
   fi
+  # the decoupling test: memory errors and leaks only (its vector failures are counted above)
+  dvlog=$OUT/valgrind_decoupling.log
+  valgrind --quiet --leak-check=full --errors-for-leak-kinds=definite,indirect \
+    --log-file="$dvlog" "$DECOUPLING_BIN" "$DECOUPLING_DATA" >"$OUT/valgrind_decoupling.out" 2>&1 || true
+  if [[ ! -s $dvlog ]] && grep -qE '^[0-9]+ passed, [0-9]+ failed$' "$OUT/valgrind_decoupling.out"; then
+    pass "valgrind (decoupling): no memory errors or leaks ($(grep -E '^[0-9]+ passed' "$OUT/valgrind_decoupling.out" | tail -n 1))"
+  else
+    fail "valgrind (decoupling) reported errors (see $dvlog)"
+    head -n 40 "$dvlog"
+  fi
 else
   fail "valgrind is not installed"
 fi
 
-echo "fortran: test_blackbody $binary_passed passed; test_cosmology $cosmology_passed passed; run.sh checks $script_passed passed, $script_failed failed"
-echo "$((binary_passed + cosmology_passed + script_passed)) passed, $script_failed failed"
+echo "fortran: test_blackbody $binary_passed passed; test_cosmology $cosmology_passed passed; test_decoupling $decoupling_passed passed; run.sh checks $script_passed passed, $script_failed failed"
+echo "$((binary_passed + cosmology_passed + decoupling_passed + script_passed)) passed, $script_failed failed"
 [[ $script_failed -eq 0 ]]
