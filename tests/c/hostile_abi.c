@@ -14,7 +14,11 @@
  * with one bit of its validity tag flipped (all must be refused with
  * RELICORE_ERROR_INVALID_STRUCT), and a valid universe with random storage words overwritten
  * behind an intact tag (undetectable by the tag: that case must only stay free of crashes,
- * sanitizer reports and undocumented codes).
+ * sanitizer reports and undocumented codes). Thermal histories get the same kinds (computed,
+ * copied, NULL, uninitialised, zeroed, random, cleared by a failed compute, tag bit flipped,
+ * storage overwritten); relicore_thermal_history_compute gets hostile options and universes
+ * (all but about 1 call in 2000 carry something it must refuse: a compute costs milliseconds),
+ * and every failed compute must leave the struct cleared.
  *
  * Asserts for every call: the status is 0 or a documented negative code (never PANIC, never
  * an unknown number); a success writes a finite value; a failure writes NaN to every output
