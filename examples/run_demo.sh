@@ -5,7 +5,11 @@
 #           handheld infrared thermometer (examples/data/invented_radiometer.txt);
 #   part 2: the fictional Quillmere Deep Field Survey: a distance-redshift table of the demo
 #           universe in all four languages, and a catalogue of 100,000 invented galaxies turned
-#           into distances and ages in Python (examples/data/invented_catalogue.txt).
+#           into distances and ages in Python (examples/data/invented_catalogue.txt);
+#   part 3: the fictional toy simulation code Wrenfold: its starting time, the last-scattering
+#           summary and the ionised fraction and gas temperature on its output redshifts, in all
+#           four languages, and plots of the decoupling history in Python
+#           (examples/data/invented_simulation.txt).
 # Prints how far the four agree and writes plots to examples/out/. Run from anywhere; `make
 # demo` first builds the Python package into .venv.
 set -euo pipefail
@@ -16,16 +20,19 @@ CC=${CC:-cc}
 FC=${FC:-gfortran}
 INPUT=examples/data/invented_radiometer.txt
 CATALOGUE=examples/data/invented_catalogue.txt
+SIMULATION=examples/data/invented_simulation.txt
 BUILD=build/demo
 OUT=examples/out
 mkdir -p "$BUILD" "$OUT"
 
-echo "relicore demo -- every number below comes from INVENTED data for a FICTIONAL observatory"
-echo "and a FICTIONAL galaxy survey (inputs: $INPUT, $CATALOGUE)"
+echo "relicore demo -- every number below comes from INVENTED data for a FICTIONAL observatory,"
+echo "a FICTIONAL galaxy survey and a FICTIONAL simulation code (inputs: $INPUT, $CATALOGUE,"
+echo "$SIMULATION)"
 echo
 
 echo "== building: Rust example, C static library, C and Fortran programs"
-cargo build --quiet --release --example radiometer_demo --example catalogue_table
+cargo build --quiet --release --example radiometer_demo --example catalogue_table \
+  --example simulation_start
 cargo build --quiet -p relicore-capi --profile release-c
 "$CC" -std=c11 -O2 -Wall -Wextra -Wpedantic -Werror -Iinclude examples/c/radiometer_demo.c \
   target/release-c/librelicore.a -lm -o "$BUILD/radiometer_demo_c"
@@ -36,6 +43,11 @@ cargo build --quiet -p relicore-capi --profile release-c
   target/release-c/librelicore.a -lm -o "$BUILD/catalogue_table_c"
 "$FC" -std=f2018 -O2 -Wall -Wextra -Werror -I"$BUILD" examples/fortran/catalogue_table.f90 \
   "$BUILD/relicore.o" target/release-c/librelicore.a -lm -o "$BUILD/catalogue_table_f"
+"$CC" -std=c11 -O2 -Wall -Wextra -Wpedantic -Werror -Iinclude examples/c/simulation_start.c \
+  target/release-c/librelicore.a -lm -o "$BUILD/simulation_start_c"
+# -J: the program's own module (its state) goes to $BUILD too, not to the working directory
+"$FC" -std=f2018 -O2 -Wall -Wextra -Werror -I"$BUILD" -J"$BUILD" examples/fortran/simulation_start.f90 \
+  "$BUILD/relicore.o" target/release-c/librelicore.a -lm -o "$BUILD/simulation_start_f"
 
 echo "== part 1: running the four radiometer programs on the same invented inputs"
 target/release/examples/radiometer_demo "$INPUT" >"$OUT/rust.txt"
@@ -99,3 +111,44 @@ echo
 
 echo "== the INVENTED catalogue of 100,000 galaxies (Python), and its plot"
 "$PY" examples/python/catalogue_demo.py "$CATALOGUE" "$OUT"
+echo
+
+echo "== part 3: the fictional toy simulation code Wrenfold"
+echo "== running the four simulation_start programs on the same invented inputs"
+target/release/examples/simulation_start "$SIMULATION" >"$OUT/simulation_rust.txt"
+"$BUILD/simulation_start_c" "$SIMULATION" >"$OUT/simulation_c.txt"
+"$BUILD/simulation_start_f" "$SIMULATION" >"$OUT/simulation_fortran.txt"
+"$PY" examples/python/simulation_start.py "$SIMULATION" >"$OUT/simulation_python.txt"
+for lang in rust c fortran python; do
+  echo "   $lang: $(grep -c ' = ' "$OUT/simulation_$lang.txt") quantities -> $OUT/simulation_$lang.txt"
+done
+echo
+echo "   what the fictional Fortran code printed, in part:"
+grep -E '^(start_(redshift|age_myr|ionized_fraction|matter_temperature_k)|history_(last_scattering|drag)_redshift|history_100_theta_star|history_reionization_optical_depth) = ' \
+  "$OUT/simulation_fortran.txt" | sed 's/^/     /'
+echo
+
+cat <<'EOF'
+== what the quantities are (part 2's demo universe -- flat, H0 = 70, Omega_m = 0.3,
+   Omega_b = 0.05, radiation, one 0.06 eV neutrino: a round-number model, not a published
+   fit -- with the invented reionisation redshift)
+   start_*               the fictional run's start: its redshift, the age of the universe there
+                         (Myr), the ionised fraction x_e = n_e/n_H, the gas temperature T_m, the
+                         radiation temperature T_r and T_m/T_r
+   reionization_redshift the invented redshift of the tanh reionisation of hydrogen
+   history_*             the last-scattering summary of the thermal history: z*, z_drag, the
+                         sound horizons at both (Mpc), 100 theta*, the age (years) and radiation
+                         temperature at last scattering, the visibility peak, the thermal
+                         decoupling redshift (T_m/T_r = 0.99), the reionisation optical depth
+   output_N_*            at each invented output redshift: age (Myr), x_e, T_m, T_r, T_m/T_r
+                         (the core does not model the heating of the gas by reionisation)
+
+EOF
+echo "== the four languages side by side"
+"$PY" examples/python/compare_outputs.py \
+  Rust="$OUT/simulation_rust.txt" C="$OUT/simulation_c.txt" Fortran="$OUT/simulation_fortran.txt" \
+  Python="$OUT/simulation_python.txt"
+echo
+
+echo "== plots of the decoupling history"
+"$PY" examples/python/plot_decoupling.py "$SIMULATION" "$OUT"
