@@ -199,15 +199,87 @@ fn is_element_error(body: Body, err: Error) -> bool {
 /// Calls `f` once per element: input k is read at the element index when it has `n`
 /// elements and at 0 when it has one (a broadcast scalar). On failure the element gets NaN
 /// when `nan_on_error` and `keep_going(err)`; otherwise the loop stops and returns the index.
+///
+/// Arrays of at least [`PARALLEL_MIN`] elements are split into one contiguous chunk per core
+/// (at most [`PARALLEL_MAX`]) computed on scoped threads: every element is still one core call
+/// on the same inputs, so the outputs are bit for bit those of the serial loop, and the failure
+/// reported is the one of the lowest index, as serially.
 pub(crate) fn run<const N: usize>(
     inputs: [&[f64]; N],
     out: &mut [f64],
     nan_on_error: bool,
-    keep_going: impl Fn(Error) -> bool,
-    f: impl Fn([f64; N]) -> Result<f64>,
+    keep_going: impl Fn(Error) -> bool + Sync,
+    f: impl Fn([f64; N]) -> Result<f64> + Sync,
+) -> Option<(usize, Error)> {
+    let n = out.len();
+    let threads = worker_count().min(n / PARALLEL_MIN.max(1) + 1);
+    if n < PARALLEL_MIN || threads < 2 {
+        return run_range(inputs, out, 0, nan_on_error, &keep_going, &f);
+    }
+    let chunk = n.div_ceil(threads);
+    let (keep_going, f) = (&keep_going, &f);
+    let spawned = std::thread::scope(|s| {
+        let mut handles = Vec::with_capacity(threads);
+        for (k, part) in out.chunks_mut(chunk).enumerate() {
+            let start = k * chunk;
+            let h = std::thread::Builder::new().spawn_scoped(s, move || {
+                run_range(inputs, part, start, nan_on_error, keep_going, f)
+            });
+            handles.push(h);
+        }
+        let mut first: Option<(usize, Error)> = None;
+        let mut all_ran = true;
+        for h in handles {
+            match h.map(|h| h.join()) {
+                Ok(Ok(Some((i, e)))) => {
+                    if first.is_none_or(|(j, _)| i < j) {
+                        first = Some((i, e));
+                    }
+                }
+                Ok(Ok(None)) => {}
+                // a thread that could not start or that panicked: redo serially below
+                _ => all_ran = false,
+            }
+        }
+        all_ran.then_some(first)
+    });
+    match spawned {
+        Some(first) => first,
+        None => run_range(inputs, out, 0, nan_on_error, &keep_going, &f),
+    }
+}
+
+/// Arrays shorter than this are computed on the calling thread (thread start-up, tens of
+/// microseconds, would not pay off).
+const PARALLEL_MIN: usize = 1 << 16;
+/// At most this many threads per call.
+const PARALLEL_MAX: usize = 8;
+
+/// Threads for a large array: the cores available to the process (read once), at most
+/// [`PARALLEL_MAX`].
+fn worker_count() -> usize {
+    use std::sync::OnceLock;
+    static COUNT: OnceLock<usize> = OnceLock::new();
+    *COUNT.get_or_init(|| {
+        std::thread::available_parallelism()
+            .map(|c| c.get())
+            .unwrap_or(1)
+            .clamp(1, PARALLEL_MAX)
+    })
+}
+
+/// The serial loop over `out`, whose element 0 is element `start` of the whole array.
+fn run_range<const N: usize>(
+    inputs: [&[f64]; N],
+    out: &mut [f64],
+    start: usize,
+    nan_on_error: bool,
+    keep_going: &(impl Fn(Error) -> bool + Sync),
+    f: &(impl Fn([f64; N]) -> Result<f64> + Sync),
 ) -> Option<(usize, Error)> {
     let strides = inputs.map(|s| usize::from(s.len() != 1));
     for (i, o) in out.iter_mut().enumerate() {
+        let i = start + i;
         let mut x = [f64::NAN; N];
         for ((xk, s), stride) in x.iter_mut().zip(inputs).zip(strides) {
             *xk = s.get(i * stride).copied().unwrap_or(f64::NAN);
