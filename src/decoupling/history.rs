@@ -113,8 +113,6 @@ pub struct ThermalHistory<T, const N: usize = HISTORY_NODES> {
     z_visibility_peak: T,
     z_thermal: T,
     tau_reion_total: T,
-    /// Stepper statistics: accepted and rejected steps, evaluations of the equations.
-    stats: [u32; 3],
 }
 
 /// The state-independent quantities of the equations at one u = ln(1+z).
@@ -229,7 +227,6 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
             z_visibility_peak: T::zero(),
             z_thermal: T::zero(),
             tau_reion_total: T::zero(),
-            stats: [0; 3],
         })
     }
 
@@ -416,7 +413,6 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
             fi = fj;
             i = j;
         }
-        self.stats = [stepper.accepted, stepper.rejected, stepper.evaluations];
         self.slopes_of_ln_xe();
         Ok(())
     }
