@@ -15,6 +15,8 @@
 #      mismatched lengths, forged and unproduced structs, under AddressSanitizer +
 #      UndefinedBehaviorSanitizer (HOSTILE_CALLS overrides the count), and 1000 times per
 #      function under valgrind memcheck.
+# Each test program is compiled with tests/c/vector_files.c, the reading and checking of the
+# vector files they share.
 # Run from anywhere; works in the repository root. Ends with "N passed, M failed" (steps).
 set -euo pipefail
 
@@ -27,6 +29,7 @@ COSMOLOGY_DATA=("$ROOT/tests/data/cosmology.txt")
 DECOUPLING_DATA=("$ROOT/tests/data/decoupling.txt")
 CC=${CC:-gcc}
 CFLAGS=(-std=c11 -Wall -Wextra -Wpedantic -Werror -I "$ROOT/include")
+SHARED=("$ROOT/tests/c/vector_files.c") # compiled into every test program
 mkdir -p "$BUILD"
 
 passed=0
@@ -63,7 +66,7 @@ data_of() {
 TESTS=(test_blackbody test_cosmology test_decoupling)
 
 build_static() { # build_static TEST
-    "$CC" "${CFLAGS[@]}" -O2 "tests/c/$1.c" "$LIBDIR/librelicore.a" -lm \
+    "$CC" "${CFLAGS[@]}" -O2 "tests/c/$1.c" "${SHARED[@]}" "$LIBDIR/librelicore.a" -lm \
         -Wl,--gc-sections -o "$BUILD/$1"
 }
 run_static() { # run_static TEST
@@ -78,7 +81,7 @@ sanitizer_available() {
 }
 run_sanitized() { # run_sanitized TEST
     "$CC" "${CFLAGS[@]}" -O1 -g -fsanitize=address,undefined -fno-omit-frame-pointer \
-        -fno-sanitize-recover=undefined "tests/c/$1.c" "$LIBDIR/librelicore.a" -lm \
+        -fno-sanitize-recover=undefined "tests/c/$1.c" "${SHARED[@]}" "$LIBDIR/librelicore.a" -lm \
         -o "$BUILD/$1_asan" || return 1
     # shellcheck disable=SC2046
     ASAN_OPTIONS=detect_leaks=1:abort_on_error=0 \
@@ -108,7 +111,7 @@ check_nomalloc() {
 
 check_shared() { # check_shared TEST
     local t=$1
-    "$CC" "${CFLAGS[@]}" -O2 "tests/c/$t.c" -L "$LIBDIR" -lrelicore \
+    "$CC" "${CFLAGS[@]}" -O2 "tests/c/$t.c" "${SHARED[@]}" -L "$LIBDIR" -lrelicore \
         -Wl,-rpath,"$LIBDIR" -lm -o "$BUILD/${t}_shared" || return 1
     # ldd's output is captured first: with pipefail, `ldd | grep -q` fails whenever grep exits at
     # its match before ldd has written its last line (ldd then dies of SIGPIPE)

@@ -14,41 +14,23 @@
  *       the _f32 names), so another language can compare its results bit for bit.
  *
  * An unknown function name in a data file is a failure, and so is an exported function with
- * no reference vector, so the data and this harness cannot drift apart silently.
+ * no reference vector, so the data and this harness cannot drift apart silently. The record
+ * reader, number parsing, tolerances and check counting it shares with test_cosmology and
+ * test_decoupling are in vector_files.c.
  */
 
 #include <float.h>
 #include <inttypes.h>
 #include <math.h>
-#include <stdarg.h>
 #include <stdint.h>
 #include <stdio.h>
 #include <stdlib.h>
 #include <string.h>
 
 #include "relicore.h"
+#include "vector_files.h"
 
-#define MAX_LINE 8192
 #define MAX_TOKENS 16
-
-static long g_passed = 0;
-static long g_failed = 0;
-
-/* Counts one check; prints the message when it failed. */
-static void check(int ok, const char *fmt, ...)
-{
-    if (ok) {
-        g_passed++;
-        return;
-    }
-    g_failed++;
-    va_list ap;
-    va_start(ap, fmt);
-    fputs("FAIL ", stdout);
-    vprintf(fmt, ap);
-    fputc('\n', stdout);
-    va_end(ap);
-}
 
 /* ------------------------------------------------------------------------------------------ */
 /* Dispatch table: every scalar function of the blackbody interface.                           */
@@ -173,54 +155,7 @@ static struct rentry rtable[] = {
 /* Numbers, tolerances, bits                                                                   */
 /* ------------------------------------------------------------------------------------------ */
 
-static int parse_number(const char *s, double *v)
-{
-    char *end = NULL;
-    *v = strtod(s, &end);
-    return end != s && *end == '\0';
-}
-
 static int is_f32_value(double x) { return isnan(x) || (double)(float)x == x; }
-
-/* Spacing of floating-point numbers at |w| as FORMAT.md defines it: 2^-(p-1) times |w| (at
- * least the smallest normal) rounded down to a power of two. */
-static double ulp_at(double w, int precision_bits, double min_normal)
-{
-    double a = fabs(w);
-    if (!(a >= min_normal)) {
-        a = min_normal;
-    }
-    int e = 0;
-    (void)frexp(a, &e); /* a = m 2^e, 0.5 <= m < 1 */
-    return ldexp(1.0, e - 1 - (precision_bits - 1));
-}
-
-/* 1 when got is within the tolerance of want; *units = |got - want| in units of the kind. */
-static int within(double got, double want, const char *kind, double tol, int *known_kind)
-{
-    double bound;
-    *known_kind = 1;
-    if (strcmp(kind, "ulp") == 0) {
-        bound = tol * ulp_at(want, 53, DBL_MIN);
-    } else if (strcmp(kind, "ulp32") == 0) {
-        bound = tol * ulp_at(want, 24, (double)FLT_MIN);
-    } else if (strcmp(kind, "rel") == 0) {
-        bound = tol * fabs(want);
-    } else if (strcmp(kind, "abs") == 0) {
-        bound = tol;
-    } else {
-        *known_kind = 0;
-        return 0;
-    }
-    return got == want || (isfinite(got) && fabs(got - want) <= bound);
-}
-
-static uint64_t bits64(double x)
-{
-    uint64_t b;
-    memcpy(&b, &x, sizeof b);
-    return b;
-}
 
 static uint32_t bits32(float x)
 {
@@ -298,55 +233,10 @@ static int32_t call_entry(const struct entry *e, const double *a, double *out, f
 /* Reading the data files                                                                      */
 /* ------------------------------------------------------------------------------------------ */
 
-struct reader {
-    FILE *fp;
-    const char *path;
-    long lineno;
-    char line[MAX_LINE];
-    char copy[MAX_LINE];
-};
-
-/* Next line that is neither blank nor a comment, split into tokens; 0 at end of file. */
-static int next_record(struct reader *r, char **tok, int *ntok)
-{
-    while (fgets(r->line, sizeof r->line, r->fp) != NULL) {
-        r->lineno++;
-        size_t len = strlen(r->line);
-        if (len == sizeof r->line - 1 && r->line[len - 1] != '\n') {
-            check(0, "%s:%ld: line longer than %d characters", r->path, r->lineno, MAX_LINE);
-            int c;
-            while ((c = fgetc(r->fp)) != EOF && c != '\n') {
-            }
-            continue;
-        }
-        char *p = r->line;
-        while (*p == ' ' || *p == '\t') {
-            p++;
-        }
-        if (*p == '#' || *p == '\n' || *p == '\r' || *p == '\0') {
-            continue;
-        }
-        strcpy(r->copy, r->line);
-        r->copy[strcspn(r->copy, "\r\n")] = '\0';
-        int n = 0;
-        for (char *t = strtok(r->line, " \t\r\n"); t != NULL; t = strtok(NULL, " \t\r\n")) {
-            if (n == MAX_TOKENS) {
-                n++;
-                break;
-            }
-            tok[n++] = t;
-        }
-        *ntok = n;
-        return 1;
-    }
-    return 0;
-}
-
 static void run_scalar_file(const char *path, int dump)
 {
-    struct reader r = { .fp = fopen(path, "r"), .path = path, .lineno = 0 };
-    if (r.fp == NULL) {
-        check(0, "cannot open %s", path);
+    struct reader r;
+    if (!open_reader(&r, path, MAX_TOKENS)) {
         return;
     }
     char *tok[MAX_TOKENS + 1];
@@ -421,7 +311,7 @@ static void run_scalar_file(const char *path, int dump)
             continue;
         }
         int known = 1;
-        int pass = s == RELICORE_OK && within(got, want, kind, tol, &known);
+        int pass = s == RELICORE_OK && within(got, want, kind, tol, 1, &known);
         if (!known) {
             check(0, "%s: unknown tolerance kind '%s'", where, kind);
             continue;
@@ -439,9 +329,8 @@ static void run_scalar_file(const char *path, int dump)
 
 static void run_response_file(const char *path, int dump)
 {
-    struct reader r = { .fp = fopen(path, "r"), .path = path, .lineno = 0 };
-    if (r.fp == NULL) {
-        check(0, "cannot open %s", path);
+    struct reader r;
+    if (!open_reader(&r, path, MAX_TOKENS)) {
         return;
     }
     char *tok[MAX_TOKENS + 1];
@@ -526,7 +415,7 @@ static void run_response_file(const char *path, int dump)
                       name, (int)tol, (int)s, got, source);
             } else {
                 int known = 1;
-                int pass = s == RELICORE_OK && within(got, want, kind, tol, &known);
+                int pass = s == RELICORE_OK && within(got, want, kind, tol, 1, &known);
                 if (!known) {
                     check(0, "%s: unknown tolerance kind '%s'", where, kind);
                 } else {

@@ -21,47 +21,27 @@
  *
  * An unknown function or universe name in the data file is a failure, and so is an exported
  * function with no reference vector, so the data and this harness cannot drift apart
- * silently.
+ * silently. The record reader, number parsing, tolerances, check counting and the reading of
+ * universe and vector lines it shares with test_decoupling (and in part test_blackbody) are in
+ * vector_files.c.
  */
 
-#include <float.h>
 #include <inttypes.h>
 #include <math.h>
-#include <stdarg.h>
 #include <stdint.h>
 #include <stdio.h>
 #include <stdlib.h>
 #include <string.h>
 
 #include "relicore.h"
+#include "vector_files.h"
 
-#define MAX_LINE 8192
 #define MAX_TOKENS 24
-#define NPARAMS 12
 
 _Static_assert(sizeof(struct relicore_universe) == 8 * (1 + (size_t)RELICORE_UNIVERSE_STORAGE_WORDS),
                "struct relicore_universe is a tag and RELICORE_UNIVERSE_STORAGE_WORDS words");
 _Static_assert(sizeof(struct relicore_universe_parameters) == 12 * sizeof(double),
                "struct relicore_universe_parameters is twelve doubles");
-
-static long g_passed = 0;
-static long g_failed = 0;
-
-/* Counts one check; prints the message when it failed. */
-static void check(int ok, const char *fmt, ...)
-{
-    if (ok) {
-        g_passed++;
-        return;
-    }
-    g_failed++;
-    va_list ap;
-    va_start(ap, fmt);
-    fputs("FAIL ", stdout);
-    vprintf(fmt, ap);
-    fputc('\n', stdout);
-    va_end(ap);
-}
 
 /* ------------------------------------------------------------------------------------------ */
 /* Dispatch table: every function of a universe.                                               */
@@ -141,57 +121,6 @@ static int32_t call_entry(const struct entry *e, const struct relicore_universe 
 }
 
 /* ------------------------------------------------------------------------------------------ */
-/* Numbers, tolerances, bits                                                                   */
-/* ------------------------------------------------------------------------------------------ */
-
-static int parse_number(const char *s, double *v)
-{
-    char *end = NULL;
-    *v = strtod(s, &end);
-    return end != s && *end == '\0';
-}
-
-/* Spacing of doubles at |w| as FORMAT.md defines it: 2^-52 times |w| (at least DBL_MIN)
- * rounded down to a power of two. */
-static double ulp_at(double w)
-{
-    double a = fabs(w);
-    if (!(a >= DBL_MIN)) {
-        a = DBL_MIN;
-    }
-    int e = 0;
-    (void)frexp(a, &e); /* a = m 2^e, 0.5 <= m < 1 */
-    return ldexp(1.0, e - 1 - 52);
-}
-
-static int within(double got, double want, const char *kind, double tol, int *known_kind)
-{
-    double bound;
-    *known_kind = 1;
-    if (strcmp(kind, "ulp") == 0) {
-        bound = tol * ulp_at(want);
-    } else if (strcmp(kind, "rel") == 0) {
-        bound = tol * fabs(want);
-    } else if (strcmp(kind, "abs") == 0) {
-        bound = tol;
-    } else {
-        *known_kind = 0;
-        return 0;
-    }
-    return got == want || (isfinite(got) && fabs(got - want) <= bound);
-}
-
-static uint64_t bits64(double x)
-{
-    uint64_t b;
-    memcpy(&b, &x, sizeof b);
-    return b;
-}
-
-/* Same bits, or both NaN (a NaN's payload is not part of the interface). */
-static int same(double a, double b) { return bits64(a) == bits64(b) || (isnan(a) && isnan(b)); }
-
-/* ------------------------------------------------------------------------------------------ */
 /* Universes and vectors read from the file                                                    */
 /* ------------------------------------------------------------------------------------------ */
 
@@ -215,16 +144,6 @@ static size_t g_nuniverses = 0;
 static struct vector *g_vectors = NULL;
 static size_t g_nvectors = 0, g_cap_vectors = 0;
 
-static void *grow(void *p, size_t count, size_t size)
-{
-    void *q = realloc(p, count * size);
-    if (q == NULL) {
-        fprintf(stderr, "out of memory\n");
-        exit(2);
-    }
-    return q;
-}
-
 static struct universe_entry *find_universe(const char *name)
 {
     for (size_t i = 0; i < g_nuniverses; i++) {
@@ -233,22 +152,6 @@ static struct universe_entry *find_universe(const char *name)
         }
     }
     return NULL;
-}
-
-static void params_from(const double *v, struct relicore_universe_parameters *p)
-{
-    p->h0_km_s_mpc = v[0];
-    p->omega_matter = v[1];
-    p->omega_baryon = v[2];
-    p->omega_curvature = v[3];
-    p->cmb_temperature_k = v[4];
-    p->n_eff = v[5];
-    p->neutrino_masses_ev[0] = v[6];
-    p->neutrino_masses_ev[1] = v[7];
-    p->neutrino_masses_ev[2] = v[8];
-    p->w0 = v[9];
-    p->wa = v[10];
-    p->helium_mass_fraction = v[11];
 }
 
 static int same_params(const struct relicore_universe_parameters *a,
@@ -264,28 +167,10 @@ static int same_params(const struct relicore_universe_parameters *a,
            && same(a->wa, b->wa) && same(a->helium_mass_fraction, b->helium_mass_fraction);
 }
 
-/* Splits a line into tokens; returns the number of tokens (MAX_TOKENS + 1 when too many). */
-static int split(char *line, char **tok)
-{
-    int n = 0;
-    for (char *t = strtok(line, " \t\r\n"); t != NULL; t = strtok(NULL, " \t\r\n")) {
-        if (n == MAX_TOKENS) {
-            return MAX_TOKENS + 1;
-        }
-        tok[n++] = t;
-    }
-    return n;
-}
-
 static void add_universe(const char *where, char **tok, int ntok, const char *copy)
 {
-    double v[NPARAMS];
-    int ok = ntok == 2 + NPARAMS && strlen(tok[1]) < sizeof g_universes[0].name;
-    for (int i = 0; ok && i < NPARAMS; i++) {
-        ok = parse_number(tok[2 + i], &v[i]);
-    }
-    if (!ok) {
-        check(0, "%s: malformed universe line: %s", where, copy);
+    struct relicore_universe_parameters params;
+    if (!parse_universe_line(where, tok, ntok, copy, sizeof g_universes[0].name, &params)) {
         return;
     }
     if (find_universe(tok[1]) != NULL) {
@@ -296,7 +181,7 @@ static void add_universe(const char *where, char **tok, int ntok, const char *co
     struct universe_entry *ue = &g_universes[g_nuniverses++];
     memset(ue, 0, sizeof *ue);
     snprintf(ue->name, sizeof ue->name, "%s", tok[1]);
-    params_from(v, &ue->params);
+    ue->params = params;
     ue->init_status = relicore_universe_init(&ue->params, &ue->u);
     int32_t which = 99;
     int32_t checked = relicore_universe_check_parameters(&ue->params, &which);
@@ -319,36 +204,15 @@ static void add_universe(const char *where, char **tok, int ntok, const char *co
 
 static void run_file(const char *path, int dump)
 {
-    FILE *fp = fopen(path, "r");
-    if (fp == NULL) {
-        check(0, "cannot open %s", path);
+    struct reader r;
+    if (!open_reader(&r, path, MAX_TOKENS)) {
         return;
     }
-    char line[MAX_LINE], copy[MAX_LINE];
     char *tok[MAX_TOKENS];
-    long lineno = 0, lines = 0;
-    while (fgets(line, sizeof line, fp) != NULL) {
-        lineno++;
-        char where[200];
-        snprintf(where, sizeof where, "%s:%ld", path, lineno);
-        size_t len = strlen(line);
-        if (len == sizeof line - 1 && line[len - 1] != '\n') {
-            check(0, "%s: line longer than %d characters", where, MAX_LINE);
-            int c;
-            while ((c = fgetc(fp)) != EOF && c != '\n') {
-            }
-            continue;
-        }
-        char *p = line;
-        while (*p == ' ' || *p == '\t') {
-            p++;
-        }
-        if (*p == '#' || *p == '\n' || *p == '\r' || *p == '\0') {
-            continue;
-        }
-        strcpy(copy, line);
-        copy[strcspn(copy, "\r\n")] = '\0';
-        int ntok = split(line, tok);
+    int ntok = 0;
+    long lines = 0;
+    while (next_record(&r, tok, &ntok)) {
+        const char *where = r.where, *copy = r.copy;
         if (ntok > MAX_TOKENS) {
             check(0, "%s: too many fields: %s", where, copy);
             continue;
@@ -359,30 +223,14 @@ static void run_file(const char *path, int dump)
         }
         /* function UNIVERSE nargs args... expected kind tolerance source */
         lines++;
-        double nargs_d = -1.0;
-        if (ntok < 3 || !parse_number(tok[2], &nargs_d) || nargs_d < 0 || nargs_d > 2
-            || nargs_d != floor(nargs_d)) {
-            check(0, "%s: malformed line: %s", where, copy);
+        struct vector_line v;
+        if (!parse_vector_line(where, tok, ntok, copy, &v)) {
             continue;
         }
-        int nargs = (int)nargs_d;
-        if (ntok != 3 + nargs + 4) {
-            check(0, "%s: wrong number of fields: %s", where, copy);
-            continue;
-        }
-        const char *name = tok[0];
-        double args[2] = { 0.0, 0.0 }, want = 0.0, tol = 0.0;
-        int ok = 1;
-        for (int i = 0; i < nargs; i++) {
-            ok = ok && parse_number(tok[3 + i], &args[i]);
-        }
-        ok = ok && parse_number(tok[3 + nargs], &want) && parse_number(tok[5 + nargs], &tol);
-        const char *kind = tok[4 + nargs];
-        const char *source = tok[6 + nargs];
-        if (!ok) {
-            check(0, "%s: unreadable number: %s", where, copy);
-            continue;
-        }
+        const char *name = v.name, *kind = v.kind, *source = v.source;
+        const double *args = v.args;
+        double want = v.want, tol = v.tol;
+        int nargs = v.nargs;
         struct entry *e = find_entry(name);
         if (e == NULL) {
             check(0, "%s: unknown function name '%s' (no C dispatch): %s", where, name, copy);
@@ -428,14 +276,11 @@ static void run_file(const char *path, int dump)
             continue;
         }
         if (is_status) {
-            check(s == (int32_t)tol && isnan(got),
-                  "%s: %s status want %d got %d (%s), output %.17e (want NaN) [source %s]\n"
-                  "     line: %s",
-                  where, name, (int)tol, (int)s, relicore_status_message(s), got, source, copy);
+            check_status_line(where, &v, s, got, copy);
             continue;
         }
         int known = 1;
-        int pass = s == RELICORE_OK && within(got, want, kind, tol, &known);
+        int pass = s == RELICORE_OK && within(got, want, kind, tol, 0, &known);
         if (!known) {
             check(0, "%s: unknown tolerance kind '%s'", where, kind);
             continue;
@@ -446,7 +291,7 @@ static void run_file(const char *path, int dump)
               where, name, want, got, (int)s, relicore_status_message(s), kind, tol,
               want != 0.0 ? fabs(got - want) / fabs(want) : fabs(got - want), source, copy);
     }
-    fclose(fp);
+    fclose(r.fp);
     if (!dump) {
         check(lines > 0, "%s holds no vectors", path);
         check(g_nuniverses > 0, "%s defines no universe", path);

@@ -29,22 +29,22 @@
  * An unknown function, universe or history name in the data file is a failure, and so is an
  * exported decoupling function with no reference vector, so the data and this harness cannot
  * drift apart silently. A history takes 163848 bytes: they are allocated on the heap here.
+ * The record reader, number parsing, tolerances, check counting and the reading of universe
+ * and vector lines it shares with test_cosmology (and in part test_blackbody) are in
+ * vector_files.c.
  */
 
-#include <float.h>
 #include <inttypes.h>
 #include <math.h>
-#include <stdarg.h>
 #include <stdint.h>
 #include <stdio.h>
 #include <stdlib.h>
 #include <string.h>
 
 #include "relicore.h"
+#include "vector_files.h"
 
-#define MAX_LINE 8192
 #define MAX_TOKENS 24
-#define NPARAMS 12
 
 _Static_assert(sizeof(struct relicore_thermal_history)
                    == 8 * (1 + (size_t)RELICORE_THERMAL_HISTORY_STORAGE_WORDS),
@@ -56,35 +56,6 @@ _Static_assert(_Alignof(struct relicore_thermal_history) == _Alignof(uint64_t),
                "struct relicore_thermal_history is aligned like uint64_t");
 _Static_assert(sizeof(struct relicore_thermal_history_options) == 24,
                "struct relicore_thermal_history_options: int32_t (padded) and two doubles");
-
-static long g_passed = 0;
-static long g_failed = 0;
-
-/* Counts one check; prints the message when it failed. */
-static void check(int ok, const char *fmt, ...)
-{
-    if (ok) {
-        g_passed++;
-        return;
-    }
-    g_failed++;
-    va_list ap;
-    va_start(ap, fmt);
-    fputs("FAIL ", stdout);
-    vprintf(fmt, ap);
-    fputc('\n', stdout);
-    va_end(ap);
-}
-
-static void *grow(void *p, size_t count, size_t size)
-{
-    void *q = realloc(p, count * size);
-    if (q == NULL) {
-        fprintf(stderr, "out of memory\n");
-        exit(2);
-    }
-    return q;
-}
 
 /* ------------------------------------------------------------------------------------------ */
 /* Dispatch table: every decoupling function.                                                  */
@@ -210,47 +181,12 @@ static int32_t call_array(const struct entry *e, const struct relicore_universe 
 /* Numbers, tolerances, bits                                                                   */
 /* ------------------------------------------------------------------------------------------ */
 
-static int parse_number(const char *s, double *v)
-{
-    char *end = NULL;
-    *v = strtod(s, &end);
-    return end != s && *end == '\0';
-}
-
-/* Spacing of doubles at |w| as FORMAT.md defines it. */
-static double ulp_at(double w)
-{
-    double a = fabs(w);
-    if (!(a >= DBL_MIN)) {
-        a = DBL_MIN;
-    }
-    int e = 0;
-    (void)frexp(a, &e);
-    return ldexp(1.0, e - 1 - 52);
-}
-
 /* The allowed deviation of a line, or -1 for an unknown kind. */
 static double bound_of(double want, const char *kind, double tol)
 {
-    if (strcmp(kind, "ulp") == 0) {
-        return tol * ulp_at(want);
-    } else if (strcmp(kind, "rel") == 0) {
-        return tol * fabs(want);
-    } else if (strcmp(kind, "abs") == 0) {
-        return tol;
-    }
-    return -1.0;
+    double bound;
+    return tolerance_bound(want, kind, tol, 0, &bound) ? bound : -1.0;
 }
-
-static uint64_t bits64(double x)
-{
-    uint64_t b;
-    memcpy(&b, &x, sizeof b);
-    return b;
-}
-
-/* Same bits, or both NaN (a NaN's payload is not part of the interface). */
-static int same(double a, double b) { return bits64(a) == bits64(b) || (isnan(a) && isnan(b)); }
 
 /* ------------------------------------------------------------------------------------------ */
 /* Universes, histories and vectors read from the file                                         */
@@ -305,22 +241,6 @@ static struct history_entry *find_history(const char *name)
     return NULL;
 }
 
-static void params_from(const double *v, struct relicore_universe_parameters *p)
-{
-    p->h0_km_s_mpc = v[0];
-    p->omega_matter = v[1];
-    p->omega_baryon = v[2];
-    p->omega_curvature = v[3];
-    p->cmb_temperature_k = v[4];
-    p->n_eff = v[5];
-    p->neutrino_masses_ev[0] = v[6];
-    p->neutrino_masses_ev[1] = v[7];
-    p->neutrino_masses_ev[2] = v[8];
-    p->w0 = v[9];
-    p->wa = v[10];
-    p->helium_mass_fraction = v[11];
-}
-
 static struct relicore_thermal_history *new_history(void)
 {
     struct relicore_thermal_history *h = malloc(sizeof *h);
@@ -343,19 +263,6 @@ static struct relicore_universe *new_universe(void)
     return u;
 }
 
-/* Splits a line into tokens; returns the number of tokens (MAX_TOKENS + 1 when too many). */
-static int split(char *line, char **tok)
-{
-    int n = 0;
-    for (char *t = strtok(line, " \t\r\n"); t != NULL; t = strtok(NULL, " \t\r\n")) {
-        if (n == MAX_TOKENS) {
-            return MAX_TOKENS + 1;
-        }
-        tok[n++] = t;
-    }
-    return n;
-}
-
 static int name_taken(const char *name)
 {
     return find_universe(name) != NULL || find_history(name) != NULL || strcmp(name, "-") == 0;
@@ -363,13 +270,8 @@ static int name_taken(const char *name)
 
 static void add_universe(const char *where, char **tok, int ntok, const char *copy)
 {
-    double v[NPARAMS];
-    int ok = ntok == 2 + NPARAMS && strlen(tok[1]) < sizeof g_universes[0].name;
-    for (int i = 0; ok && i < NPARAMS; i++) {
-        ok = parse_number(tok[2 + i], &v[i]);
-    }
-    if (!ok) {
-        check(0, "%s: malformed universe line: %s", where, copy);
+    struct relicore_universe_parameters params;
+    if (!parse_universe_line(where, tok, ntok, copy, sizeof g_universes[0].name, &params)) {
         return;
     }
     if (name_taken(tok[1])) {
@@ -380,7 +282,7 @@ static void add_universe(const char *where, char **tok, int ntok, const char *co
     struct universe_entry *ue = &g_universes[g_nuniverses++];
     memset(ue, 0, sizeof *ue);
     snprintf(ue->name, sizeof ue->name, "%s", tok[1]);
-    params_from(v, &ue->params);
+    ue->params = params;
     ue->u = new_universe();
     int32_t s = relicore_universe_init(&ue->params, ue->u);
     check(s == RELICORE_OK, "%s: relicore_universe_init(%s) returned %d (%s)", where, ue->name,
@@ -430,36 +332,15 @@ static void add_history(const char *where, char **tok, int ntok, const char *cop
 
 static void run_file(const char *path, int dump)
 {
-    FILE *fp = fopen(path, "r");
-    if (fp == NULL) {
-        check(0, "cannot open %s", path);
+    struct reader r;
+    if (!open_reader(&r, path, MAX_TOKENS)) {
         return;
     }
-    char line[MAX_LINE], copy[MAX_LINE];
     char *tok[MAX_TOKENS];
-    long lineno = 0, lines = 0;
-    while (fgets(line, sizeof line, fp) != NULL) {
-        lineno++;
-        char where[200];
-        snprintf(where, sizeof where, "%s:%ld", path, lineno);
-        size_t len = strlen(line);
-        if (len == sizeof line - 1 && line[len - 1] != '\n') {
-            check(0, "%s: line longer than %d characters", where, MAX_LINE);
-            int c;
-            while ((c = fgetc(fp)) != EOF && c != '\n') {
-            }
-            continue;
-        }
-        char *p = line;
-        while (*p == ' ' || *p == '\t') {
-            p++;
-        }
-        if (*p == '#' || *p == '\n' || *p == '\r' || *p == '\0') {
-            continue;
-        }
-        strcpy(copy, line);
-        copy[strcspn(copy, "\r\n")] = '\0';
-        int ntok = split(line, tok);
+    int ntok = 0;
+    long lines = 0;
+    while (next_record(&r, tok, &ntok)) {
+        const char *where = r.where, *copy = r.copy;
         if (ntok > MAX_TOKENS) {
             check(0, "%s: too many fields: %s", where, copy);
             continue;
@@ -474,30 +355,14 @@ static void run_file(const char *path, int dump)
         }
         /* function TARGET nargs args... expected kind tolerance source */
         lines++;
-        double nargs_d = -1.0;
-        if (ntok < 3 || !parse_number(tok[2], &nargs_d) || nargs_d < 0 || nargs_d > 2
-            || nargs_d != floor(nargs_d)) {
-            check(0, "%s: malformed line: %s", where, copy);
+        struct vector_line v;
+        if (!parse_vector_line(where, tok, ntok, copy, &v)) {
             continue;
         }
-        int nargs = (int)nargs_d;
-        if (ntok != 3 + nargs + 4) {
-            check(0, "%s: wrong number of fields: %s", where, copy);
-            continue;
-        }
-        const char *name = tok[0];
-        double args[2] = { 0.0, 0.0 }, want = 0.0, tol = 0.0;
-        int ok = 1;
-        for (int i = 0; i < nargs; i++) {
-            ok = ok && parse_number(tok[3 + i], &args[i]);
-        }
-        ok = ok && parse_number(tok[3 + nargs], &want) && parse_number(tok[5 + nargs], &tol);
-        const char *kind = tok[4 + nargs];
-        const char *source = tok[6 + nargs];
-        if (!ok) {
-            check(0, "%s: unreadable number: %s", where, copy);
-            continue;
-        }
+        const char *name = v.name, *kind = v.kind, *source = v.source;
+        const double *args = v.args;
+        double want = v.want, tol = v.tol;
+        int nargs = v.nargs;
         struct entry *e = find_entry(name);
         if (e == NULL) {
             check(0, "%s: unknown function name '%s' (no C dispatch): %s", where, name, copy);
@@ -562,10 +427,7 @@ static void run_file(const char *path, int dump)
             continue;
         }
         if (is_status) {
-            check(s == (int32_t)tol && isnan(got),
-                  "%s: %s status want %d got %d (%s), output %.17e (want NaN) [source %s]\n"
-                  "     line: %s",
-                  where, name, (int)tol, (int)s, relicore_status_message(s), got, source, copy);
+            check_status_line(where, &v, s, got, copy);
             continue;
         }
         double bound = bound_of(want, kind, tol);
@@ -593,7 +455,7 @@ static void run_file(const char *path, int dump)
               where, name, tok[1], want, got, (int)s, relicore_status_message(s), kind, tol,
               want != 0.0 ? dev / fabs(want) : dev, source, copy);
     }
-    fclose(fp);
+    fclose(r.fp);
     if (!dump) {
         check(lines > 0, "%s holds no vectors", path);
         check(g_nuniverses > 0 && g_nhistories > 0, "%s defines no universe or no history", path);

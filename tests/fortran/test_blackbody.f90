@@ -21,12 +21,17 @@
 ! the scalar calls bit for bit; the C array forms equal the elemental forms bit for bit
 ! (including failing elements and the first failing code), also for strided arrays; size
 ! checks; the response and calibration wrappers; stat and error stop; status messages and
-! the version string.
+! the version string. The record reader, number parsing, tolerances and failure messages it shares
+! with test_cosmology and test_decoupling are in vector_files.f90 (module vector_files).
 program test_blackbody
   use, intrinsic :: iso_c_binding, only: c_double, c_float, c_int32_t, c_int64_t
   use, intrinsic :: ieee_arithmetic, only: ieee_is_nan, ieee_value, ieee_quiet_nan
   use, intrinsic :: iso_fortran_env, only: error_unit, output_unit
   use relicore
+  ! same64 is not taken: the one below compares bits only (a NaN equals only the same NaN)
+  use vector_files, only: program_name, passed, failed, argument, check, g17, int_text, hex64, &
+      ulp64, first_failure, open_vector_file, next_record, split, number, known_call, &
+      check_status_line, allowed_deviation, check_value_line
   implicit none
 
   integer, parameter :: dp = c_double, sp = c_float
@@ -51,10 +56,10 @@ program test_blackbody
 
   type(vector), allocatable :: vectors(:)
   integer :: nvectors = 0
-  integer :: passed = 0, failed = 0
   character(len=:), allocatable :: first, path
   integer :: i
 
+  program_name = 'test_blackbody'
   allocate (vectors(256))
   if (command_argument_count() < 1) then
     write (error_unit, '(a)') 'usage: test_blackbody FILE... | --dump FILE | --stop-check'
@@ -88,55 +93,6 @@ contains
 
   ! ================================================================ bookkeeping
 
-  function argument(k) result(value)
-    integer, intent(in) :: k
-    character(len=:), allocatable :: value
-    integer :: length
-    call get_command_argument(k, length=length)
-    allocate (character(len=length) :: value)
-    call get_command_argument(k, value)
-  end function argument
-
-  subroutine check(ok, message)
-    logical, intent(in) :: ok
-    character(len=*), intent(in) :: message
-    if (ok) then
-      passed = passed + 1
-    else
-      failed = failed + 1
-      write (output_unit, '(a)') 'FAIL ' // message
-    end if
-  end subroutine check
-
-  function g17(x) result(s)
-    real(dp), intent(in) :: x
-    character(len=:), allocatable :: s
-    character(len=40) :: buffer
-    write (buffer, '(es25.16e3)') x
-    s = trim(adjustl(buffer))
-  end function g17
-
-  function int_text(k) result(s)
-    integer, intent(in) :: k
-    character(len=:), allocatable :: s
-    character(len=24) :: buffer
-    write (buffer, '(i0)') k
-    s = trim(buffer)
-  end function int_text
-
-  function hex64(x) result(h)
-    real(dp), intent(in) :: x
-    character(len=16) :: h
-    character(len=16), parameter :: digits = '0123456789ABCDEF'
-    integer(c_int64_t) :: bits
-    integer :: k, nibble
-    bits = transfer(x, bits)
-    do k = 1, 16
-      nibble = int(ibits(bits, 4 * (16 - k), 4))
-      h(k:k) = digits(nibble + 1:nibble + 1)
-    end do
-  end function hex64
-
   function hex32(x) result(h)
     real(sp), intent(in) :: x
     character(len=8) :: h
@@ -160,48 +116,12 @@ contains
     same32 = transfer(a, 0_c_int32_t) == transfer(b, 0_c_int32_t)
   end function same32
 
-  ! Spacing of doubles at |w| (at least the spacing at DBL_MIN): 2^-52 times the largest power
-  ! of 2 not above max(|w|, DBL_MIN) (FORMAT.md).
-  real(dp) function ulp64(w)
-    real(dp), intent(in) :: w
-    ulp64 = scale(1.0_dp, exponent(max(abs(w), tiny(1.0_dp))) - 1 - 52)
-  end function ulp64
-
-  ! The same with f32 spacing (2^-23, FLT_MIN), computed exactly in double.
+  ! Spacing of floats at |w| (at least the spacing at FLT_MIN): ulp64 of vector_files.f90 with
+  ! f32 spacing (2^-23, FLT_MIN), computed exactly in double.
   real(dp) function ulp32(w)
     real(dp), intent(in) :: w
     ulp32 = scale(1.0_dp, exponent(max(abs(w), real(tiny(1.0_sp), dp))) - 1 - 23)
   end function ulp32
-
-  subroutine split(line, tokens, ntokens)
-    character(len=*), intent(in) :: line
-    character(len=64), intent(out) :: tokens(max_tokens)
-    integer, intent(out) :: ntokens
-    integer :: pos, next
-    ntokens = 0
-    pos = 1
-    do
-      do while (pos <= len_trim(line))
-        if (line(pos:pos) /= ' ') exit
-        pos = pos + 1
-      end do
-      if (pos > len_trim(line)) exit
-      next = index(line(pos:), ' ')
-      if (next == 0) next = len(line(pos:)) + 1
-      ntokens = ntokens + 1
-      if (ntokens > max_tokens) error stop 'test_blackbody: too many fields on a line'
-      if (next - 1 > len(tokens(1))) error stop 'test_blackbody: field too long'
-      tokens(ntokens) = line(pos:pos + next - 2)
-      pos = pos + next
-    end do
-  end subroutine split
-
-  real(dp) function number(token, where)
-    character(len=*), intent(in) :: token, where
-    integer :: ios
-    read (token, *, iostat=ios) number
-    if (ios /= 0) error stop 'test_blackbody: not a number: "' // trim(token) // '" at ' // where
-  end function number
 
   logical function is_response(name)
     character(len=*), intent(in) :: name
@@ -238,21 +158,15 @@ contains
     character(len=max_line) :: line
     character(len=64) :: tokens(max_tokens), point(max_tokens)
     integer :: unit, ios, ntokens, npoint_tokens, lineno, nargs, npoints, k
+    logical :: found
     real(dp), allocatable :: wavelengths(:), response(:)
     character(len=:), allocatable :: where
 
-    open (newunit=unit, file=file, status='old', action='read', iostat=ios)
-    if (ios /= 0) error stop 'test_blackbody: cannot open ' // file
+    call open_vector_file(file, unit)
     lineno = 0
     do
-      read (unit, '(a)', iostat=ios) line
-      if (ios /= 0) exit
-      lineno = lineno + 1
-      if (len_trim(line) == len(line)) error stop 'test_blackbody: line too long in ' // file
-      if (len_trim(line) == 0) cycle
-      if (adjustl(line(1:1)) == '#') cycle
-      call split(line, tokens, ntokens)
-      where = file // ':' // int_text(lineno)
+      call next_record(unit, file, lineno, tokens, ntokens, where, found)
+      if (.not. found) exit
       if (ntokens < 2) error stop 'test_blackbody: malformed line at ' // where
       if (is_response(tokens(1))) then
         ! name npoints arg expected kind tolerance source, then npoints lines of 2 numbers
@@ -339,17 +253,9 @@ contains
     integer, intent(in) :: nargs
     real(dp) :: want, value, value_s, allowed, tol
     logical :: is32, ok
-    integer(c_int32_t) :: code
 
-    if (.not. got%known) then
-      call check(.false., call_text // ': unknown function name')
-      return
-    end if
-    if (got%nargs /= nargs) then
-      call check(.false., call_text // ': ' // trim(name) // ' takes ' // int_text(got%nargs) // &
-          ' arguments')
-      return
-    end if
+    call known_call(call_text, name, got%known, got%nargs, nargs, ok)
+    if (.not. ok) return
     is32 = ends_with_f32(name)
     if (is32) then
       value = real(got%f32, dp)
@@ -361,38 +267,25 @@ contains
     tol = number(tolerance, call_text)
 
     if (kind == 'status') then
-      code = int(nint(tol), c_int32_t)
-      ok = got%stat == code .and. ieee_is_nan(value) .and. ieee_is_nan(value_s)
-      call check(ok, call_text // ': want status ' // int_text(int(code)) // ' and NaN, got status ' &
-          // int_text(int(got%stat)) // ', function ' // g17(value) // ', status form ' // &
-          g17(value_s))
+      call check_status_line(call_text, tol, got%stat, value, value_s)
       return
     end if
 
     want = number(expected, call_text)
-    select case (kind)
-    case ('ulp')
-      allowed = tol * ulp64(want)
-    case ('ulp32')
+    if (kind == 'ulp32') then
       allowed = tol * ulp32(want)
-    case ('rel')
-      allowed = tol * abs(want)
-    case ('abs')
-      allowed = tol
-    case default
-      call check(.false., call_text // ': unknown tolerance kind ' // trim(kind))
-      return
-    end select
+    else
+      call allowed_deviation(call_text, kind, tol, want, allowed, ok)
+      if (.not. ok) return
+    end if
     if (is32) then
       ok = same32(got%f32, got%s32)
     else
       ok = same64(got%f64, got%s64)
     end if
     ok = ok .and. got%stat == RELICORE_OK .and. abs(value - want) <= allowed
-    call check(ok, call_text // ': want ' // g17(want) // ' got ' // g17(value) // &
-        ' (status form ' // g17(value_s) // ', status ' // int_text(int(got%stat)) // &
-        '), |got - want| = ' // g17(abs(value - want)) // ' > ' // trim(kind) // ' ' // &
-        trim(tolerance) // ' = ' // g17(allowed))
+    call check_value_line(ok, call_text, want, value, value_s, got%stat, abs(value - want), kind, &
+        tolerance, allowed)
   end subroutine judge
 
   ! A response-table vector: function and status forms, then the same table passed as
@@ -1178,18 +1071,6 @@ contains
     real(dp), intent(in) :: a, b
     same_value = transfer(a, 0_c_int64_t) == transfer(b, 0_c_int64_t)
   end function same_value
-
-  integer(c_int32_t) function first_failure(stats)
-    integer(c_int32_t), intent(in) :: stats(:)
-    integer :: k
-    first_failure = RELICORE_OK
-    do k = 1, size(stats)
-      if (stats(k) /= RELICORE_OK) then
-        first_failure = stats(k)
-        return
-      end if
-    end do
-  end function first_failure
 
   subroutine array_form_64(name, x, fixed)
     character(len=*), intent(in) :: name

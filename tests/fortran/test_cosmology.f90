@@ -25,17 +25,19 @@
 ! forms bit for bit (failing elements, first failing code, reversed and strided arrays, size
 ! mismatch, empty arrays); a universe that was never initialised, or whose init failed, is
 ! refused by every procedure; copies of a universe; the parameter checks and their positions;
-! the defaults; status messages.
+! the defaults; status messages. The record reader, number parsing, tolerances and failure
+! messages it shares with test_blackbody and test_decoupling are in vector_files.f90.
 program test_cosmology
-  use, intrinsic :: iso_c_binding, only: c_double, c_int32_t, c_int64_t
+  use, intrinsic :: iso_c_binding, only: c_double, c_int32_t
   use, intrinsic :: ieee_arithmetic, only: ieee_is_nan, ieee_value, ieee_quiet_nan, &
       ieee_positive_inf, ieee_negative_inf
   use, intrinsic :: iso_fortran_env, only: error_unit, output_unit
   use relicore
+  use vector_files
   implicit none
 
   integer, parameter :: dp = c_double
-  integer, parameter :: max_line = 4096, max_tokens = 24, nparams = 12
+  integer, parameter :: max_tokens = 24, nparams = 12
 
   ! What one dispatch returned: the function form, the status form and its status.
   type :: outcome
@@ -85,9 +87,9 @@ program test_cosmology
   type(named_universe), allocatable :: universes(:)
   type(vector), allocatable :: vectors(:)
   integer :: nuniverses = 0, nvectors = 0
-  integer :: passed = 0, failed = 0
   character(len=:), allocatable :: first, path
 
+  program_name = 'test_cosmology'
   allocate (universes(4), vectors(1024))
   if (command_argument_count() < 1) then
     write (error_unit, '(a)') 'usage: test_cosmology FILE | --dump FILE | --stop-check'
@@ -125,111 +127,6 @@ contains
 
   ! ================================================================ bookkeeping
 
-  function argument(k) result(value)
-    integer, intent(in) :: k
-    character(len=:), allocatable :: value
-    integer :: length
-    call get_command_argument(k, length=length)
-    allocate (character(len=length) :: value)
-    call get_command_argument(k, value)
-  end function argument
-
-  subroutine check(ok, message)
-    logical, intent(in) :: ok
-    character(len=*), intent(in) :: message
-    if (ok) then
-      passed = passed + 1
-    else
-      failed = failed + 1
-      write (output_unit, '(a)') 'FAIL ' // message
-    end if
-  end subroutine check
-
-  function g17(x) result(s)
-    real(dp), intent(in) :: x
-    character(len=:), allocatable :: s
-    character(len=40) :: buffer
-    write (buffer, '(es25.16e3)') x
-    s = trim(adjustl(buffer))
-  end function g17
-
-  function int_text(k) result(s)
-    integer, intent(in) :: k
-    character(len=:), allocatable :: s
-    character(len=24) :: buffer
-    write (buffer, '(i0)') k
-    s = trim(buffer)
-  end function int_text
-
-  function hex64(x) result(h)
-    real(dp), intent(in) :: x
-    character(len=16) :: h
-    character(len=16), parameter :: digits = '0123456789ABCDEF'
-    integer(c_int64_t) :: bits
-    integer :: k, nibble
-    bits = transfer(x, bits)
-    do k = 1, 16
-      nibble = int(ibits(bits, 4 * (16 - k), 4))
-      h(k:k) = digits(nibble + 1:nibble + 1)
-    end do
-  end function hex64
-
-  ! Same bits, or both NaN (the payload of a NaN is not part of the interface).
-  elemental logical function same64(a, b)
-    real(dp), intent(in) :: a, b
-    same64 = transfer(a, 0_c_int64_t) == transfer(b, 0_c_int64_t) .or. &
-        (ieee_is_nan(a) .and. ieee_is_nan(b))
-  end function same64
-
-  ! Spacing of doubles at |w| (at least the spacing at DBL_MIN): 2^-52 times the largest power
-  ! of 2 not above max(|w|, DBL_MIN) (FORMAT.md).
-  real(dp) function ulp64(w)
-    real(dp), intent(in) :: w
-    ulp64 = scale(1.0_dp, exponent(max(abs(w), tiny(1.0_dp))) - 1 - 52)
-  end function ulp64
-
-  subroutine split(line, tokens, ntokens)
-    character(len=*), intent(in) :: line
-    character(len=64), intent(out) :: tokens(max_tokens)
-    integer, intent(out) :: ntokens
-    integer :: pos, next
-    ntokens = 0
-    pos = 1
-    do
-      do while (pos <= len_trim(line))
-        if (line(pos:pos) /= ' ') exit
-        pos = pos + 1
-      end do
-      if (pos > len_trim(line)) exit
-      next = index(line(pos:), ' ')
-      if (next == 0) next = len(line(pos:)) + 1
-      ntokens = ntokens + 1
-      if (ntokens > max_tokens) error stop 'test_cosmology: too many fields on a line'
-      if (next - 1 > len(tokens(1))) error stop 'test_cosmology: field too long'
-      tokens(ntokens) = line(pos:pos + next - 2)
-      pos = pos + next
-    end do
-  end subroutine split
-
-  real(dp) function number(token, where)
-    character(len=*), intent(in) :: token, where
-    integer :: ios
-    read (token, *, iostat=ios) number
-    if (ios /= 0) error stop 'test_cosmology: not a number: "' // trim(token) // '" at ' // where
-  end function number
-
-  integer(c_int32_t) function first_failure(stats)
-    integer(c_int32_t), intent(in) :: stats(:)
-    integer :: k
-    first_failure = RELICORE_OK
-    do k = 1, size(stats)
-      if (stats(k) /= RELICORE_OK) then
-        first_failure = stats(k)
-        return
-      end if
-    end do
-  end function first_failure
-
   integer function find_universe(name)
     character(len=*), intent(in) :: name
     integer :: k
@@ -246,23 +143,16 @@ contains
 
   subroutine walk(file, mode)
     character(len=*), intent(in) :: file, mode
-    character(len=max_line) :: line
     character(len=64) :: tokens(max_tokens)
-    integer :: unit, ios, ntokens, lineno, nargs, k, which
+    integer :: unit, ntokens, lineno, nargs, k, which
+    logical :: found
     character(len=:), allocatable :: where
 
-    open (newunit=unit, file=file, status='old', action='read', iostat=ios)
-    if (ios /= 0) error stop 'test_cosmology: cannot open ' // file
+    call open_vector_file(file, unit)
     lineno = 0
     do
-      read (unit, '(a)', iostat=ios) line
-      if (ios /= 0) exit
-      lineno = lineno + 1
-      if (len_trim(line) == len(line)) error stop 'test_cosmology: line too long in ' // file
-      if (len_trim(line) == 0) cycle
-      if (adjustl(line(1:1)) == '#') cycle
-      call split(line, tokens, ntokens)
-      where = file // ':' // int_text(lineno)
+      call next_record(unit, file, lineno, tokens, ntokens, where, found)
+      if (.not. found) exit
       if (tokens(1) == 'universe') then
         if (ntokens /= 2 + nparams) error stop 'test_cosmology: malformed universe at ' // where
         if (find_universe(tokens(2)) /= 0) &
@@ -271,10 +161,7 @@ contains
         cycle
       end if
       ! function UNIVERSE nargs args... expected kind tolerance source
-      if (ntokens < 3) error stop 'test_cosmology: malformed vector at ' // where
-      nargs = nint(number(tokens(3), where))
-      if (nargs < 0 .or. nargs > 2 .or. ntokens /= nargs + 7) &
-          error stop 'test_cosmology: malformed vector at ' // where
+      nargs = vector_nargs(tokens, ntokens, where)
       which = find_universe(tokens(2))
       if (which == 0) then
         if (mode == 'dump') error stop 'test_cosmology --dump: unknown universe at ' // where
@@ -302,8 +189,7 @@ contains
     nuniverses = nuniverses + 1
     associate (nu => universes(nuniverses))
       nu%name = name
-      nu%params = relicore_universe_parameters(values(1), values(2), values(3), values(4), &
-          values(5), values(6), values(7:9), values(10), values(11), values(12))
+      nu%params = universe_parameters(values)
       call relicore_universe_init(nu%params, nu%u, stat)
       if (mode == 'dump') return
       call relicore_universe_check_parameters(nu%params, which, checked)
@@ -348,11 +234,7 @@ contains
       return
     end if
 
-    call_text = trim(name) // '(' // trim(universes(which)%name)
-    do k = 1, nargs
-      call_text = call_text // ', ' // g17(args(k))
-    end do
-    call_text = where // ' ' // call_text // ')'
+    call_text = vector_call_text(where, name, universes(which)%name, args)
     call judge(call_text, name, got, nargs, expected, kind, tolerance)
 
     if (got%known .and. got%nargs == nargs) then
@@ -377,44 +259,21 @@ contains
     integer, intent(in) :: nargs
     real(dp) :: want, allowed, tol
     logical :: ok
-    integer(c_int32_t) :: code
 
-    if (.not. got%known) then
-      call check(.false., call_text // ': unknown function name')
-      return
-    end if
-    if (got%nargs /= nargs) then
-      call check(.false., call_text // ': ' // trim(name) // ' takes ' // int_text(got%nargs) // &
-          ' arguments')
-      return
-    end if
+    call known_call(call_text, name, got%known, got%nargs, nargs, ok)
+    if (.not. ok) return
     tol = number(tolerance, call_text)
     if (kind == 'status') then
-      code = int(nint(tol), c_int32_t)
-      ok = got%stat == code .and. ieee_is_nan(got%f64) .and. ieee_is_nan(got%s64)
-      call check(ok, call_text // ': want status ' // int_text(int(code)) // &
-          ' and NaN, got status ' // int_text(int(got%stat)) // ', function ' // g17(got%f64) // &
-          ', status form ' // g17(got%s64))
+      call check_status_line(call_text, tol, got%stat, got%f64, got%s64)
       return
     end if
     want = number(expected, call_text)
-    select case (kind)
-    case ('ulp')
-      allowed = tol * ulp64(want)
-    case ('rel')
-      allowed = tol * abs(want)
-    case ('abs')
-      allowed = tol
-    case default
-      call check(.false., call_text // ': unknown tolerance kind ' // trim(kind))
-      return
-    end select
+    call allowed_deviation(call_text, kind, tol, want, allowed, ok)
+    if (.not. ok) return
     ok = same64(got%f64, got%s64) .and. got%stat == RELICORE_OK .and. &
         (got%f64 == want .or. abs(got%f64 - want) <= allowed)
-    call check(ok, call_text // ': want ' // g17(want) // ' got ' // g17(got%f64) // &
-        ' (status form ' // g17(got%s64) // ', status ' // int_text(int(got%stat)) // &
-        '), |got - want| = ' // g17(abs(got%f64 - want)) // ' > ' // trim(kind) // ' ' // &
-        trim(tolerance) // ' = ' // g17(allowed))
+    call check_value_line(ok, call_text, want, got%f64, got%s64, got%stat, abs(got%f64 - want), &
+        kind, tolerance, allowed)
   end subroutine judge
 
   ! ================================================================ dispatch by name
