@@ -1,13 +1,15 @@
 //! The recombination and thermal history on a fixed-capacity table, and its summary.
 //!
 //! Layout: N nodes uniform in u = ln(1+z) from 0 to u_top = ln(1 + highest redshift). The
-//! stiff stepper of [`crate::math::ode`] carries (x_p, θ = T_m/T_r) from node to node (adaptive
-//! steps in between, landing on every node); at every node the table keeps ln x_e, ln T_m,
-//! the Thomson and drag optical depths from z = 0 and the exact u-derivatives of ln x_e,
-//! ln T_m and τ (from the equations themselves), so queries are cubic Hermite interpolants.
-//! Optical depths are accumulated node to node by Simpson's rule with the midpoint value from
-//! the interpolant; the reionisation part of the optical depth (a tanh of width Δz = 0.5)
-//! is integrated by the shared adaptive quadrature.
+//! stiff stepper of [`crate::math::ode`] carries (x_p, θ = T_m/T_r) down from the top, with
+//! adaptive steps that land on every node above z = 200 and may span up to 8 nodes below (the
+//! nodes inside are cubic Hermite interpolants of the state). At every node the table keeps
+//! ln x_e, ln T_m, the Thomson and drag optical depths from z = 0 and their u-derivatives:
+//! ln T_m's and τ's from the equations, ln x_e's by fourth-order differences of the node values
+//! (see `slopes_of_ln_xe`), so queries are cubic Hermite interpolants. Optical depths are
+//! accumulated node to node by Simpson's rule with the midpoint value from the interpolant; the
+//! reionisation part of the optical depth (a tanh of width Δz = 0.5) by one Gauss-Kronrod panel
+//! of the shared quadrature per interval.
 
 use super::species::{Balance, Hydrogen, Species, electron_balance, proton_balance};
 use crate::check::finite_result;
