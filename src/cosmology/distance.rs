@@ -32,6 +32,10 @@ impl<T: Real> Universe<T> {
     }
 
     /// χ/D_H = ∫_s^1 2s'/q(s') ds' by the shared quadrature.
+    // out of line: its fixed-capacity interval stack would otherwise enlarge the frame of
+    // every distance function that inlines it, on the table path too
+    #[inline(never)]
+    #[cold]
     pub(crate) fn comoving_unit_quadrature(&self, s: T) -> Result<T> {
         integrate(
             |x: T| T::c(2.0) * x / self.q_of_s(x),
