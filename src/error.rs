@@ -78,3 +78,18 @@ impl Error {
 
 /// The result type of the core.
 pub type Result<T> = core::result::Result<T, Error>;
+
+/// The first failing element of an array function (the `_array` forms): its index and what was
+/// wrong with it. Every other element was computed; failing elements are NaN in the output.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, thiserror::Error)]
+#[error("element {index}: {error}")]
+pub struct ElementError {
+    /// Zero-based index of the first failing element (for `LengthMismatch`, the length of the
+    /// shorter slice).
+    pub index: usize,
+    /// What was wrong with it; the argument position is that of the scalar function.
+    pub error: Error,
+}
+
+/// The result type of the array functions: `Ok(())` when every element succeeded.
+pub type ArrayResult = core::result::Result<(), ElementError>;

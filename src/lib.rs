@@ -38,6 +38,7 @@
 #[cfg(feature = "std")]
 extern crate std;
 
+mod array;
 pub mod blackbody;
 mod check;
 pub mod constants;
@@ -47,7 +48,7 @@ mod error;
 pub mod math;
 mod real;
 
-pub use error::{Error, Result};
+pub use error::{ArrayResult, ElementError, Error, Result};
 pub use real::Real;
 
 /// Version of the core crate (`major.minor.patch`).

@@ -195,7 +195,7 @@ impl_real!(
     libm::expm1,
     libm::log,
     libm::log1p,
-    libm::sqrt,
+    sqrt_f64,
     libm::cbrt,
     libm::sinh,
     libm::tanh,
@@ -220,7 +220,7 @@ impl_real!(
     libm::expm1f,
     libm::logf,
     libm::log1pf,
-    libm::sqrtf,
+    sqrt_f32,
     libm::cbrtf,
     libm::sinhf,
     libm::tanhf,
@@ -235,3 +235,29 @@ impl_real!(
     12_582_912.0, // 1.5·2^23
     u32
 );
+
+// Square roots. IEEE 754 requires sqrt to be correctly rounded, and both forms below are the
+// hardware instruction or a correctly rounded emulation of it, so they give the same bits. With
+// `std` (the C and Python faces) the std form is used because the compiler knows it as the
+// generic square-root operation and can vectorise loops that contain it (the array functions);
+// libm's form is an opaque scalar instruction to the vectoriser.
+#[cfg(feature = "std")]
+#[inline(always)]
+fn sqrt_f64(x: f64) -> f64 {
+    x.sqrt()
+}
+#[cfg(not(feature = "std"))]
+#[inline(always)]
+fn sqrt_f64(x: f64) -> f64 {
+    libm::sqrt(x)
+}
+#[cfg(feature = "std")]
+#[inline(always)]
+fn sqrt_f32(x: f32) -> f32 {
+    x.sqrt()
+}
+#[cfg(not(feature = "std"))]
+#[inline(always)]
+fn sqrt_f32(x: f32) -> f32 {
+    libm::sqrtf(x)
+}

@@ -56,6 +56,12 @@ fn constant_times_quotient<T: Real>(ch: T, cl: T, a: T, t: T) -> (T, T) {
         // t below 1/MAX (a subnormal temperature): 1/t overflows, divide directly
         return constant_times_quotient_by_division(ch, cl, a, t);
     }
+    constant_times_quotient_with_inverse(ch, cl, a, t, inv)
+}
+
+/// [`constant_times_quotient`] given inv = 1/t ≤ MAX (computed once for a loop at one t).
+#[inline(always)]
+fn constant_times_quotient_with_inverse<T: Real>(ch: T, cl: T, a: T, t: T, inv: T) -> (T, T) {
     let q = a * inv;
     let (e1, e2) = dd::two_prod_masked(q, t);
     let ql = ((a - e1) - e2) * inv;
@@ -80,6 +86,36 @@ fn constant_times_quotient_by_division<T: Real>(ch: T, cl: T, a: T, t: T) -> (T,
 pub(crate) fn x_frequency_pair<T: Real>(frequency: T, temperature: T) -> (T, T) {
     let (hh, hl) = T::c2(k::PLANCK_OVER_BOLTZMANN, k::PLANCK_OVER_BOLTZMANN_LO);
     constant_times_quotient(hh, hl, frequency, temperature)
+}
+
+/// 1/T for the array functions of frequency and wavenumber at one temperature, when it is
+/// finite (T above 1/MAX; below, the scalar functions divide directly and so must the array).
+#[inline(always)]
+pub(crate) fn inverse_temperature<T: Real>(temperature: T) -> Option<T> {
+    let inv = T::one() / temperature;
+    (inv <= T::max_value()).then_some(inv)
+}
+
+/// [`x_frequency_pair`] given inv = [`inverse_temperature`]`(temperature)`: the same bits.
+#[inline(always)]
+pub(crate) fn x_frequency_pair_with_inverse<T: Real>(
+    frequency: T,
+    temperature: T,
+    inv: T,
+) -> (T, T) {
+    let (hh, hl) = T::c2(k::PLANCK_OVER_BOLTZMANN, k::PLANCK_OVER_BOLTZMANN_LO);
+    constant_times_quotient_with_inverse(hh, hl, frequency, temperature, inv)
+}
+
+/// [`x_wavenumber_pair`] given inv = [`inverse_temperature`]`(temperature)`: the same bits.
+#[inline(always)]
+pub(crate) fn x_wavenumber_pair_with_inverse<T: Real>(
+    wavenumber: T,
+    temperature: T,
+    inv: T,
+) -> (T, T) {
+    let (ch, cl) = T::c2(k::SECOND_RADIATION, k::SECOND_RADIATION_LO);
+    constant_times_quotient_with_inverse(ch, cl, wavenumber, temperature, inv)
 }
 
 /// x = (h/k)·ν/T as a double-length pair, normalized (|xl| ≤ ulp(xh)/2).
@@ -139,13 +175,22 @@ pub(crate) fn scaled_exp_neg<T: Real>(p: T, xh: T, xl: T) -> T {
 /// times a prefactor, accurate from x ≈ 1e-10 (Rayleigh-Jeans) to the far Wien tail.
 #[inline(always)]
 pub(crate) fn planck_quotient<T: Real>(p: T, xh: T, xl: T) -> T {
-    if xh < T::LN_MAX - T::one() {
-        // e^x − 1 of the double-length x ≥ 0, rounded once (Tang's table-driven kernel)
-        p / exp::exp_m1_nonnegative_in_range(xh, xl)
-    } else {
+    match planck_quotient_fast(p, xh, xl) {
+        (v, true) => v,
         // e^x − 1 = e^x (1 − e^−x), and e^−x < 1e-300 here: the correction is below an ulp.
-        scaled_exp_neg(p, xh, xl)
+        _ => scaled_exp_neg(p, xh, xl),
     }
+}
+
+/// The common case of [`planck_quotient`] as straight-line code for the array functions: its
+/// value and whether x is inside that case (xh < ln MAX − 1); outside, the value is garbage.
+#[inline(always)]
+pub(crate) fn planck_quotient_fast<T: Real>(p: T, xh: T, xl: T) -> (T, bool) {
+    // e^x − 1 of the double-length x ≥ 0, rounded once (Tang's table-driven kernel)
+    (
+        p / exp::exp_m1_nonnegative_in_range(xh, xl),
+        xh < T::LN_MAX - T::one(),
+    )
 }
 
 /// num / (den·(e^x − 1)) for x = xh + xl ≥ 0 and den > 0: [`planck_quotient`] of num/den with
@@ -154,13 +199,21 @@ pub(crate) fn planck_quotient<T: Real>(p: T, xh: T, xl: T) -> T {
 /// or extreme arguments) it is computed as `planck_quotient(num / den, xh, xl)`.
 #[inline(always)]
 pub(crate) fn planck_ratio<T: Real>(num: T, den: T, xh: T, xl: T) -> T {
-    if xh < T::LN_MAX - T::one() {
-        let d = den * exp::exp_m1_nonnegative_in_range(xh, xl);
-        if d >= T::min_positive_value() && d <= T::max_value() {
-            return num / d;
-        }
+    match planck_ratio_fast(num, den, xh, xl) {
+        (v, true) => v,
+        _ => planck_ratio_outside(num, den, xh, xl),
     }
-    planck_ratio_outside(num, den, xh, xl)
+}
+
+/// The common case of [`planck_ratio`] as straight-line code for the array functions: its
+/// value and whether the arguments are inside that case (xh < ln MAX − 1 and den·(e^x − 1) a
+/// normal number); outside, the value is garbage.
+#[inline(always)]
+pub(crate) fn planck_ratio_fast<T: Real>(num: T, den: T, xh: T, xl: T) -> (T, bool) {
+    let d = den * exp::exp_m1_nonnegative_in_range(xh, xl);
+    let inside =
+        (xh < T::LN_MAX - T::one()) & (d >= T::min_positive_value()) & (d <= T::max_value());
+    (num / d, inside)
 }
 
 #[cold]

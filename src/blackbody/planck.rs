@@ -12,12 +12,15 @@
 //! returned as the correctly scaled subnormal or 0, never as garbage.
 
 use super::kernel::{
-    TWO_C, TWO_OVER_C2, one_minus_exp_neg, planck_quotient, planck_ratio, pow5, two_h_nu3_over_c2,
-    x_frequency, x_frequency_pair, x_wavelength, x_wavelength_pair, x_wavenumber_pair,
+    TWO_C, TWO_OVER_C2, inverse_temperature, one_minus_exp_neg, planck_quotient,
+    planck_quotient_fast, planck_ratio, planck_ratio_fast, pow5, two_h_nu3_over_c2, x_frequency,
+    x_frequency_pair, x_frequency_pair_with_inverse, x_wavelength, x_wavelength_pair,
+    x_wavenumber_pair, x_wavenumber_pair_with_inverse,
 };
+use crate::array::blockwise;
 use crate::check::{finite_result, positive};
 use crate::constants as k;
-use crate::{Real, Result};
+use crate::{ArrayResult, Real, Result};
 
 /// Planck spectral radiance per unit wavelength, B_λ = 2hc²/λ⁵ / (e^(hc/λkT) − 1).
 ///
@@ -39,6 +42,47 @@ pub fn spectral_radiance_wavelength<T: Real>(wavelength_m: T, temperature_k: T) 
 pub(crate) fn spectral_radiance_wavelength_unchecked<T: Real>(l: T, t: T) -> T {
     let (xh, xl) = x_wavelength_pair(l, t);
     planck_ratio(T::c(k::FIRST_RADIATION_RADIANCE), pow5(l), xh, xl)
+}
+
+/// [`spectral_radiance_wavelength`] over many wavelengths at one temperature:
+/// `out[i] = spectral_radiance_wavelength(wavelengths_m[i], temperature_k)`, bit for bit.
+///
+/// * `wavelengths_m`: wavelengths λ in m, each finite and > 0.
+/// * `temperature_k`: temperature T in K, finite and > 0 (when it is not, every element fails).
+/// * `out`: the results, B_λ in W m⁻² sr⁻¹ m⁻¹; the same length as `wavelengths_m`.
+///
+/// Returns `Ok(())` when every element succeeded. Otherwise the failing elements are NaN, the
+/// others are computed, and the error names the first failing index and the scalar function's
+/// error (`NonFinite(0)`, `NonPositive(0)`, or `(1)` for the temperature);
+/// `LengthMismatch(2)` when `out` has another length (then `out` is all NaN).
+///
+/// Accuracy: that of the scalar function (≤ 4 ulp in `f64`). Method: the elements are taken in
+/// blocks of 64 by a branch-free form of the same operations, which the compiler vectorises;
+/// a block holding an element outside the common case (bad input, x beyond ln MAX − 1, a
+/// result that is not a normal number) is recomputed by the scalar function.
+#[inline(always)]
+pub fn spectral_radiance_wavelength_array<T: Real>(
+    wavelengths_m: &[T],
+    temperature_k: T,
+    out: &mut [T],
+) -> ArrayResult {
+    let Ok(t) = positive(temperature_k, 1) else {
+        // every element fails, each with the scalar function's error (its own argument first)
+        let scalar = |x| spectral_radiance_wavelength(x, temperature_k);
+        return blockwise(wavelengths_m, out, 2, |_| (T::nan(), false), scalar);
+    };
+    let num = T::c(k::FIRST_RADIATION_RADIANCE);
+    blockwise(
+        wavelengths_m,
+        out,
+        2,
+        |l| {
+            let (xh, xl) = x_wavelength_pair(l, t);
+            let (v, inside) = planck_ratio_fast(num, pow5(l), xh, xl);
+            (v, inside & (l > T::zero()) & (l <= T::max_value()))
+        },
+        |l| spectral_radiance_wavelength(l, t),
+    )
 }
 
 /// Planck spectral radiance per unit frequency, B_ν = (2hν³/c²) / (e^(hν/kT) − 1).
@@ -71,8 +115,93 @@ pub fn spectral_radiance_wavenumber<T: Real>(wavenumber_per_m: T, temperature_k:
     let v = positive(wavenumber_per_m, 0)?;
     let t = positive(temperature_k, 1)?;
     let (xh, xl) = x_wavenumber_pair(v, t);
-    let p = ((T::c(k::FIRST_RADIATION_RADIANCE) * v) * v) * v;
-    finite_result(planck_quotient(p, xh, xl), 0)
+    finite_result(planck_quotient(wavenumber_prefactor(v), xh, xl), 0)
+}
+
+/// 2hc²ṽ³, by products.
+#[inline(always)]
+fn wavenumber_prefactor<T: Real>(v: T) -> T {
+    ((T::c(k::FIRST_RADIATION_RADIANCE) * v) * v) * v
+}
+
+/// [`spectral_radiance_frequency`] over many frequencies at one temperature:
+/// `out[i] = spectral_radiance_frequency(frequencies_hz[i], temperature_k)`, bit for bit.
+///
+/// * `frequencies_hz`: frequencies ν in Hz, each finite and > 0.
+/// * `temperature_k`: temperature T in K, finite and > 0 (when it is not, every element fails).
+/// * `out`: the results, B_ν in W m⁻² sr⁻¹ Hz⁻¹; the same length as `frequencies_hz`.
+///
+/// Returns and errors as [`spectral_radiance_wavelength_array`]. Accuracy: that of the scalar
+/// function. Method as [`spectral_radiance_wavelength_array`].
+#[inline(always)]
+pub fn spectral_radiance_frequency_array<T: Real>(
+    frequencies_hz: &[T],
+    temperature_k: T,
+    out: &mut [T],
+) -> ArrayResult {
+    let Ok(t) = positive(temperature_k, 1) else {
+        // every element fails, each with the scalar function's error (its own argument first)
+        let scalar = |x| spectral_radiance_frequency(x, temperature_k);
+        return blockwise(frequencies_hz, out, 2, |_| (T::nan(), false), scalar);
+    };
+    let scalar = |nu| spectral_radiance_frequency(nu, t);
+    let Some(inv) = inverse_temperature(t) else {
+        return blockwise(frequencies_hz, out, 2, |_| (T::nan(), false), scalar);
+    };
+    blockwise(
+        frequencies_hz,
+        out,
+        2,
+        |nu| {
+            let (xh, xl) = x_frequency_pair_with_inverse(nu, t, inv);
+            let (v, inside) = planck_quotient_fast(two_h_nu3_over_c2(nu), xh, xl);
+            (
+                v,
+                inside & (nu > T::zero()) & (nu <= T::max_value()) & (v <= T::max_value()),
+            )
+        },
+        scalar,
+    )
+}
+
+/// [`spectral_radiance_wavenumber`] over many wavenumbers at one temperature:
+/// `out[i] = spectral_radiance_wavenumber(wavenumbers_per_m[i], temperature_k)`, bit for bit.
+///
+/// * `wavenumbers_per_m`: wavenumbers ṽ in m⁻¹, each finite and > 0.
+/// * `temperature_k`: temperature T in K, finite and > 0 (when it is not, every element fails).
+/// * `out`: the results, B_ṽ in W m⁻² sr⁻¹ per m⁻¹; the same length as `wavenumbers_per_m`.
+///
+/// Returns and errors as [`spectral_radiance_wavelength_array`]. Accuracy: that of the scalar
+/// function. Method as [`spectral_radiance_wavelength_array`].
+#[inline(always)]
+pub fn spectral_radiance_wavenumber_array<T: Real>(
+    wavenumbers_per_m: &[T],
+    temperature_k: T,
+    out: &mut [T],
+) -> ArrayResult {
+    let Ok(t) = positive(temperature_k, 1) else {
+        // every element fails, each with the scalar function's error (its own argument first)
+        let scalar = |x| spectral_radiance_wavenumber(x, temperature_k);
+        return blockwise(wavenumbers_per_m, out, 2, |_| (T::nan(), false), scalar);
+    };
+    let scalar = |v| spectral_radiance_wavenumber(v, t);
+    let Some(inv) = inverse_temperature(t) else {
+        return blockwise(wavenumbers_per_m, out, 2, |_| (T::nan(), false), scalar);
+    };
+    blockwise(
+        wavenumbers_per_m,
+        out,
+        2,
+        |v| {
+            let (xh, xl) = x_wavenumber_pair_with_inverse(v, t, inv);
+            let (b, inside) = planck_quotient_fast(wavenumber_prefactor(v), xh, xl);
+            (
+                b,
+                inside & (v > T::zero()) & (v <= T::max_value()) & (b <= T::max_value()),
+            )
+        },
+        scalar,
+    )
 }
 
 /// Photon spectral radiance per unit wavelength, N_λ = B_λ/(hc/λ) = (2c/λ⁴) / (e^x − 1).

@@ -5,9 +5,10 @@
 use super::Universe;
 use super::table::S_MIN;
 use super::universe::check_redshift;
+use crate::array::blockwise;
 use crate::check::finite_result;
 use crate::math::quadrature::integrate;
-use crate::{Error, Real, Result};
+use crate::{ArrayResult, Error, Real, Result};
 
 /// π/648000: radians per arcsecond.
 const RAD_PER_ARCSEC: f64 = 4.848_136_811_095_36e-6;
@@ -18,17 +19,75 @@ impl<T: Real> Universe<T> {
         if z == T::zero() {
             return Ok(T::zero());
         }
-        let r = (T::one() + z).sqrt();
-        // s = 1/r and 1 − s = z/(r(1 + r)) (without cancellation) from one division
-        let inv = T::one() / (r * (T::one() + r));
-        let s = (T::one() + r) * inv;
-        let one_minus_s = z * inv;
+        let (s, one_minus_s) = Self::s_of_redshift(z);
         if s >= T::c(S_MIN) {
             if let Some(g) = self.table.eval(s) {
                 return Ok(one_minus_s * g);
             }
         }
         self.comoving_unit_quadrature(s)
+    }
+
+    /// s = 1/√(1+z) and 1 − s = z/(r(1 + r)), r = √(1+z) (without cancellation), from one
+    /// division.
+    #[inline(always)]
+    fn s_of_redshift(z: T) -> (T, T) {
+        let r = (T::one() + z).sqrt();
+        let inv = T::one() / (r * (T::one() + r));
+        ((T::one() + r) * inv, z * inv)
+    }
+
+    /// [`comoving_unit`](Self::comoving_unit) as straight-line code for the array functions:
+    /// χ/D_H and whether z is inside the table's common case (z > 0 finite, s in the table, a
+    /// valid table), where the two agree bit for bit; outside, the value is garbage.
+    #[inline(always)]
+    fn comoving_unit_fast(&self, z: T) -> (T, bool) {
+        let (s, one_minus_s) = Self::s_of_redshift(z);
+        let (g, inside) = self.table.eval_fast(s);
+        (
+            one_minus_s * g,
+            inside & (z > T::zero()) & (z <= T::max_value()),
+        )
+    }
+
+    /// Runs one of the distance array functions: `distance(d_m, z)` of the transverse
+    /// comoving distance D_M, by the fast path where it applies (the flat case without a call
+    /// per element), by `scalar` where it does not. `distance` must be the operations of the
+    /// scalar function after D_M, and its result finite exactly when the scalar one is `Ok`.
+    #[inline(always)]
+    fn distance_array(
+        &self,
+        redshifts: &[T],
+        out: &mut [T],
+        distance: impl Fn(T, T) -> (T, bool),
+        scalar: impl Fn(T) -> Result<T>,
+    ) -> ArrayResult {
+        let dh = self.hubble_distance_mpc;
+        if self.params.omega_curvature == T::zero() {
+            blockwise(
+                redshifts,
+                out,
+                1,
+                |z| {
+                    let (chi, inside) = self.comoving_unit_fast(z);
+                    let (v, ok) = distance(dh * chi, z);
+                    (v, inside & ok)
+                },
+                scalar,
+            )
+        } else {
+            blockwise(
+                redshifts,
+                out,
+                1,
+                |z| {
+                    let (chi, inside) = self.comoving_unit_fast(z);
+                    let (v, ok) = distance(dh * self.transverse_unit(chi), z);
+                    (v, inside & ok)
+                },
+                scalar,
+            )
+        }
     }
 
     /// χ/D_H = ∫_s^1 2s'/q(s') ds' by the shared quadrature.
@@ -130,6 +189,87 @@ impl<T: Real> Universe<T> {
         finite_result(
             self.transverse_comoving_distance_mpc(z)? * (T::one() + z),
             0,
+        )
+    }
+
+    /// [`comoving_distance_mpc`](Self::comoving_distance_mpc) over many redshifts:
+    /// `out[i] = comoving_distance_mpc(redshifts[i])`, bit for bit.
+    ///
+    /// * `redshifts`: redshifts z, each finite and ≥ 0.
+    /// * `out`: D_C in Mpc, the same length as `redshifts`.
+    ///
+    /// Returns `Ok(())` when every element succeeded; otherwise failing elements are NaN and
+    /// the error names the first failing index and the scalar function's error;
+    /// `LengthMismatch(1)` when `out` has another length (then `out` is all NaN).
+    ///
+    /// Accuracy: that of the scalar function. Method: blocks of 64 redshifts go through a
+    /// branch-free form of the table evaluation, which the compiler vectorises; a block holding
+    /// a redshift outside the table (z = 0, z > 16383, bad input) is recomputed by the scalar
+    /// function.
+    #[inline(always)]
+    pub fn comoving_distance_mpc_array(&self, redshifts: &[T], out: &mut [T]) -> ArrayResult {
+        let dh = self.hubble_distance_mpc;
+        blockwise(
+            redshifts,
+            out,
+            1,
+            |z| {
+                let (chi, inside) = self.comoving_unit_fast(z);
+                let v = dh * chi;
+                (v, inside & (v.abs() <= T::max_value()))
+            },
+            |z| self.comoving_distance_mpc(z),
+        )
+    }
+
+    /// [`transverse_comoving_distance_mpc`](Self::transverse_comoving_distance_mpc) over many
+    /// redshifts, bit for bit. Arguments, errors and method as
+    /// [`comoving_distance_mpc_array`](Self::comoving_distance_mpc_array) (curved models add
+    /// one sinh or sin per element).
+    #[inline(always)]
+    pub fn transverse_comoving_distance_mpc_array(
+        &self,
+        redshifts: &[T],
+        out: &mut [T],
+    ) -> ArrayResult {
+        self.distance_array(
+            redshifts,
+            out,
+            |dm, _| (dm, dm.abs() <= T::max_value()),
+            |z| self.transverse_comoving_distance_mpc(z),
+        )
+    }
+
+    /// [`angular_diameter_distance_mpc`](Self::angular_diameter_distance_mpc) over many
+    /// redshifts, bit for bit. Arguments, errors and method as
+    /// [`comoving_distance_mpc_array`](Self::comoving_distance_mpc_array).
+    #[inline(always)]
+    pub fn angular_diameter_distance_mpc_array(
+        &self,
+        redshifts: &[T],
+        out: &mut [T],
+    ) -> ArrayResult {
+        self.distance_array(
+            redshifts,
+            out,
+            |dm, z| (dm / (T::one() + z), dm.abs() <= T::max_value()),
+            |z| self.angular_diameter_distance_mpc(z),
+        )
+    }
+
+    /// [`luminosity_distance_mpc`](Self::luminosity_distance_mpc) over many redshifts, bit for
+    /// bit: the catalogue call. Arguments, errors and method as
+    /// [`comoving_distance_mpc_array`](Self::comoving_distance_mpc_array).
+    #[inline(always)]
+    pub fn luminosity_distance_mpc_array(&self, redshifts: &[T], out: &mut [T]) -> ArrayResult {
+        self.distance_array(
+            redshifts,
+            out,
+            |dm, z| {
+                let v = dm * (T::one() + z);
+                (v, v.abs() <= T::max_value())
+            },
+            |z| self.luminosity_distance_mpc(z),
         )
     }
 

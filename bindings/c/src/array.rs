@@ -1,8 +1,10 @@
 //! Array forms of the spectral functions: a buffer and its length in, a buffer of the same
 //! length out, one core call per element (no allocation, no second implementation).
 
-use crate::boundary::elementwise;
+use crate::boundary::{elementwise, through_array};
+use relicore::ArrayResult;
 use relicore::blackbody as bb;
+use relicore_dispatch::widest;
 
 /// Array form of `relicore_spectral_radiance_wavelength`: out[i] =
 /// spectral_radiance_wavelength(x[i], temperature_k) for i < n, at one temperature.
@@ -34,8 +36,12 @@ pub unsafe extern "C" fn relicore_spectral_radiance_wavelength_array(
 ) -> i32 {
     // SAFETY: the buffers are NULL or valid for n elements (this function's contract).
     unsafe {
-        elementwise(wavelengths_m, n, out, |x| {
-            bb::spectral_radiance_wavelength(x, temperature_k)
+        through_array(wavelengths_m, n, out, |x, out| {
+            widest!(
+                |x: &[f64], temperature_k: f64, out: &mut [f64]| -> ArrayResult {
+                    bb::spectral_radiance_wavelength_array(x, temperature_k, out)
+                }
+            )
         })
     }
 }
@@ -70,8 +76,12 @@ pub unsafe extern "C" fn relicore_spectral_radiance_frequency_array(
 ) -> i32 {
     // SAFETY: the buffers are NULL or valid for n elements (this function's contract).
     unsafe {
-        elementwise(frequencies_hz, n, out, |x| {
-            bb::spectral_radiance_frequency(x, temperature_k)
+        through_array(frequencies_hz, n, out, |x, out| {
+            widest!(
+                |x: &[f64], temperature_k: f64, out: &mut [f64]| -> ArrayResult {
+                    bb::spectral_radiance_frequency_array(x, temperature_k, out)
+                }
+            )
         })
     }
 }
@@ -106,8 +116,12 @@ pub unsafe extern "C" fn relicore_spectral_radiance_wavenumber_array(
 ) -> i32 {
     // SAFETY: the buffers are NULL or valid for n elements (this function's contract).
     unsafe {
-        elementwise(wavenumbers_per_m, n, out, |x| {
-            bb::spectral_radiance_wavenumber(x, temperature_k)
+        through_array(wavenumbers_per_m, n, out, |x, out| {
+            widest!(
+                |x: &[f64], temperature_k: f64, out: &mut [f64]| -> ArrayResult {
+                    bb::spectral_radiance_wavenumber_array(x, temperature_k, out)
+                }
+            )
         })
     }
 }
@@ -396,8 +410,12 @@ pub unsafe extern "C" fn relicore_spectral_radiance_wavelength_array_f32(
 ) -> i32 {
     // SAFETY: the buffers are NULL or valid for n elements (this function's contract).
     unsafe {
-        elementwise(wavelengths_m, n, out, |x| {
-            bb::spectral_radiance_wavelength(x, temperature_k)
+        through_array(wavelengths_m, n, out, |x, out| {
+            widest!(
+                |x: &[f32], temperature_k: f32, out: &mut [f32]| -> ArrayResult {
+                    bb::spectral_radiance_wavelength_array(x, temperature_k, out)
+                }
+            )
         })
     }
 }
@@ -432,8 +450,12 @@ pub unsafe extern "C" fn relicore_spectral_radiance_frequency_array_f32(
 ) -> i32 {
     // SAFETY: the buffers are NULL or valid for n elements (this function's contract).
     unsafe {
-        elementwise(frequencies_hz, n, out, |x| {
-            bb::spectral_radiance_frequency(x, temperature_k)
+        through_array(frequencies_hz, n, out, |x, out| {
+            widest!(
+                |x: &[f32], temperature_k: f32, out: &mut [f32]| -> ArrayResult {
+                    bb::spectral_radiance_frequency_array(x, temperature_k, out)
+                }
+            )
         })
     }
 }
@@ -468,8 +490,12 @@ pub unsafe extern "C" fn relicore_spectral_radiance_wavenumber_array_f32(
 ) -> i32 {
     // SAFETY: the buffers are NULL or valid for n elements (this function's contract).
     unsafe {
-        elementwise(wavenumbers_per_m, n, out, |x| {
-            bb::spectral_radiance_wavenumber(x, temperature_k)
+        through_array(wavenumbers_per_m, n, out, |x, out| {
+            widest!(
+                |x: &[f32], temperature_k: f32, out: &mut [f32]| -> ArrayResult {
+                    bb::spectral_radiance_wavenumber_array(x, temperature_k, out)
+                }
+            )
         })
     }
 }

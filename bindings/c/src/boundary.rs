@@ -175,6 +175,100 @@ pub(crate) unsafe fn each<T: NotANumber>(
     }
 }
 
+/// An array call through one of the core's array functions (the `_array` forms, which compute
+/// blockwise with SIMD and give the scalar function's bits): `f(x, out)` on the caller's
+/// buffers. Semantics as [`elementwise`]: failing elements NaN, the others computed, the code
+/// of the first failure returned; NULL fails the whole call; n = 0 succeeds.
+///
+/// The core takes an input slice and a distinct output slice. When the caller's buffers
+/// overlap (the documented in-place use, `out == x`), the input is copied block by block to a
+/// stack buffer first, so no input slice ever aliases the output.
+///
+/// # Safety
+/// `x` is NULL or valid for `n` reads, `out` is NULL or valid for `n` writes (aligned); `out`
+/// may be `x`.
+#[inline(always)]
+pub(crate) unsafe fn through_array<T: NotANumber>(
+    x: *const T,
+    n: usize,
+    out: *mut T,
+    f: impl Fn(&[T], &mut [T]) -> relicore::ArrayResult,
+) -> i32 {
+    boundary(
+        // SAFETY: as this function's contract.
+        || unsafe { array_body(x, n, out, f) },
+        // SAFETY: out is NULL or valid for n writes (caller's contract).
+        || unsafe { put_nan_n(out, n) },
+    )
+}
+
+/// The body of [`through_array`] (to be run inside [`boundary`]).
+///
+/// # Safety
+/// As [`through_array`].
+#[inline(always)]
+pub(crate) unsafe fn array_body<T: NotANumber>(
+    x: *const T,
+    n: usize,
+    out: *mut T,
+    f: impl Fn(&[T], &mut [T]) -> relicore::ArrayResult,
+) -> Result<(), Failure> {
+    non_null(x)?;
+    non_null(out)?;
+    let bytes = n.saturating_mul(size_of::<T>());
+    let (xa, oa) = (x as usize, out as usize);
+    let disjoint = xa.saturating_add(bytes) <= oa || oa.saturating_add(bytes) <= xa;
+    let result = if disjoint || n == 0 {
+        // SAFETY: both non-NULL, aligned and valid for n elements (caller's contract), and
+        // disjoint, so the shared and the mutable slice do not alias.
+        let (xs, os) = unsafe {
+            (
+                std::slice::from_raw_parts(x, n),
+                std::slice::from_raw_parts_mut(out, n),
+            )
+        };
+        f(xs, os)
+    } else {
+        // SAFETY: as above; the blocks are read before they are written.
+        unsafe { through_array_in_place(x, n, out, &f) }
+    };
+    result.map_err(|e| Failure::Elements(status_of(e.error)))
+}
+
+/// [`through_array`] for overlapping buffers: each block of the input is copied to a stack
+/// buffer before the block of the output is formed as a slice and written.
+///
+/// # Safety
+/// As [`through_array`], both non-NULL.
+#[inline(never)]
+unsafe fn through_array_in_place<T: NotANumber>(
+    x: *const T,
+    n: usize,
+    out: *mut T,
+    f: &impl Fn(&[T], &mut [T]) -> relicore::ArrayResult,
+) -> relicore::ArrayResult {
+    const STEP: usize = 256;
+    let mut buffer = [T::NAN; STEP];
+    let mut first: Option<relicore::ElementError> = None;
+    let mut start = 0;
+    while start < n {
+        let len = STEP.min(n - start);
+        let input = buffer.split_at_mut(len).0;
+        // SAFETY: start + len ≤ n: x is valid for those reads, out for those writes (caller's
+        // contract); the input is copied out before the output slice is formed.
+        let os = unsafe {
+            std::ptr::copy(x.add(start), input.as_mut_ptr(), len);
+            std::slice::from_raw_parts_mut(out.add(start), len)
+        };
+        if let Err(mut e) = f(input, os) {
+            e.index += start;
+            first.get_or_insert(e);
+        }
+        start += len;
+    }
+    first.map_or(Ok(()), Err)
+}
+
 /// A caller's (pointer, length) buffer as a slice; NULL is `RELICORE_ERROR_NULL_POINTER`
 /// (also for n = 0).
 ///

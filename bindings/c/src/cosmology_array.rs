@@ -2,7 +2,10 @@
 //! length in, a buffer of the same length out, one core call per element (no allocation, no
 //! second implementation).
 
-use crate::universe::{relicore_universe, universe_array};
+use crate::universe::{relicore_universe, universe_array, universe_through_array};
+use relicore::ArrayResult;
+use relicore::cosmology::Universe;
+use relicore_dispatch::widest;
 
 /// Array form of `relicore_dimensionless_hubble`: out[i] = dimensionless_hubble(universe,
 /// redshifts[i]) for i < n.
@@ -328,8 +331,12 @@ pub unsafe extern "C" fn relicore_comoving_distance_mpc_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_array(universe, redshifts, n, out, |u, x| {
-            u.comoving_distance_mpc(x)
+        universe_through_array(universe, redshifts, n, out, |u, x, out| {
+            widest!(
+                |u: &Universe<f64>, x: &[f64], out: &mut [f64]| -> ArrayResult {
+                    u.comoving_distance_mpc_array(x, out)
+                }
+            )
         })
     }
 }
@@ -366,8 +373,12 @@ pub unsafe extern "C" fn relicore_transverse_comoving_distance_mpc_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_array(universe, redshifts, n, out, |u, x| {
-            u.transverse_comoving_distance_mpc(x)
+        universe_through_array(universe, redshifts, n, out, |u, x, out| {
+            widest!(
+                |u: &Universe<f64>, x: &[f64], out: &mut [f64]| -> ArrayResult {
+                    u.transverse_comoving_distance_mpc_array(x, out)
+                }
+            )
         })
     }
 }
@@ -404,8 +415,12 @@ pub unsafe extern "C" fn relicore_angular_diameter_distance_mpc_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_array(universe, redshifts, n, out, |u, x| {
-            u.angular_diameter_distance_mpc(x)
+        universe_through_array(universe, redshifts, n, out, |u, x, out| {
+            widest!(
+                |u: &Universe<f64>, x: &[f64], out: &mut [f64]| -> ArrayResult {
+                    u.angular_diameter_distance_mpc_array(x, out)
+                }
+            )
         })
     }
 }
@@ -442,8 +457,12 @@ pub unsafe extern "C" fn relicore_luminosity_distance_mpc_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_array(universe, redshifts, n, out, |u, x| {
-            u.luminosity_distance_mpc(x)
+        universe_through_array(universe, redshifts, n, out, |u, x, out| {
+            widest!(
+                |u: &Universe<f64>, x: &[f64], out: &mut [f64]| -> ArrayResult {
+                    u.luminosity_distance_mpc_array(x, out)
+                }
+            )
         })
     }
 }

@@ -221,6 +221,33 @@ pub(crate) unsafe fn universe_array(
     )
 }
 
+/// [`universe_array`] through one of the core's array functions `f(u, x, out)` (see
+/// [`crate::boundary::through_array`]): the same semantics, the scalar function's bits.
+///
+/// # Safety
+/// As [`universe_array`].
+#[inline(always)]
+pub(crate) unsafe fn universe_through_array(
+    universe: *const relicore_universe,
+    x: *const f64,
+    n: usize,
+    out: *mut f64,
+    f: impl Fn(&Universe<f64>, &[f64], &mut [f64]) -> relicore::ArrayResult,
+) -> i32 {
+    boundary(
+        || {
+            non_null(x)?;
+            non_null(out)?;
+            // SAFETY: NULL or readable, not written during the call (caller's contract).
+            let u = unsafe { universe_ref(universe) }?;
+            // SAFETY: x and out are non-NULL and valid for n elements (caller's contract).
+            unsafe { crate::boundary::array_body(x, n, out, |xs, os| f(u, xs, os)) }
+        },
+        // SAFETY: out is NULL or valid for n writes (caller's contract).
+        || unsafe { crate::boundary::put_nan_n(out, n) },
+    )
+}
+
 /// Clears `*out`: tag 0, every storage word 0.
 ///
 /// # Safety

@@ -14,10 +14,11 @@ use pyo3::exceptions::{PyTypeError, PyValueError};
 use pyo3::prelude::*;
 use pyo3::types::{PyDict, PyTuple};
 use relicore::cosmology::{Universe, UniverseParameters};
-use relicore::{Error, Result};
+use relicore::{ArrayResult, Error, Result};
+use relicore_dispatch::widest;
 
 use crate::errors::{Arg, Site, build, core_error_because, py_repr, shape_error};
-use crate::kernels::{check_shape, elements, run};
+use crate::kernels::{check_shape, elements, run, run_array};
 
 type U = Universe<f64>;
 
@@ -437,13 +438,37 @@ pub(crate) struct Spec {
     pub(crate) name: &'static str,
     pub(crate) args: &'static [&'static str],
     pub(crate) body: Body,
+    /// The core's array form, where the method has one (the distances).
+    pub(crate) array: Option<DistanceArray>,
 }
+
+/// A core distance array method, dispatched to the widest SIMD compilation of the CPU.
+pub(crate) type DistanceArray = fn(&U, &[f64], &mut [f64]) -> ArrayResult;
 
 macro_rules! method {
     ($kind:ident, $name:ident, [$($arg:ident),+]) => {
-        Spec { name: stringify!($name), args: &[$(stringify!($arg)),+], body: Body::$kind(U::$name) }
+        Spec { name: stringify!($name), args: &[$(stringify!($arg)),+], body: Body::$kind(U::$name), array: None }
+    };
+    ($kind:ident, $name:ident, [$($arg:ident),+], $array:ident) => {
+        Spec { name: stringify!($name), args: &[$(stringify!($arg)),+], body: Body::$kind(U::$name), array: Some($array) }
     };
 }
+
+/// A core distance array method, compiled for each SIMD level and chosen at run time.
+macro_rules! distance_array {
+    ($($name:ident),+) => {$(
+        fn $name(u: &U, z: &[f64], out: &mut [f64]) -> ArrayResult {
+            widest!(|u: &U, z: &[f64], out: &mut [f64]| -> ArrayResult { u.$name(z, out) })
+        }
+    )+};
+}
+
+distance_array!(
+    comoving_distance_mpc_array,
+    transverse_comoving_distance_mpc_array,
+    angular_diameter_distance_mpc_array,
+    luminosity_distance_mpc_array
+);
 
 /// Every element-wise method of the core's `Universe` (DESIGN 4a order).
 pub(crate) static METHODS: &[Spec] = &[
@@ -455,11 +480,26 @@ pub(crate) static METHODS: &[Spec] = &[
     method!(One, omega_curvature_at, [z]),
     method!(One, critical_density_kg_m3, [z]),
     method!(One, cmb_temperature_at_k, [z]),
-    method!(One, comoving_distance_mpc, [z]),
-    method!(One, transverse_comoving_distance_mpc, [z]),
-    method!(One, angular_diameter_distance_mpc, [z]),
+    method!(One, comoving_distance_mpc, [z], comoving_distance_mpc_array),
+    method!(
+        One,
+        transverse_comoving_distance_mpc,
+        [z],
+        transverse_comoving_distance_mpc_array
+    ),
+    method!(
+        One,
+        angular_diameter_distance_mpc,
+        [z],
+        angular_diameter_distance_mpc_array
+    ),
     method!(Two, angular_diameter_distance_between_mpc, [z1, z2]),
-    method!(One, luminosity_distance_mpc, [z]),
+    method!(
+        One,
+        luminosity_distance_mpc,
+        [z],
+        luminosity_distance_mpc_array
+    ),
     method!(One, distance_modulus, [z]),
     method!(One, comoving_volume_gpc3, [z]),
     method!(One, differential_comoving_volume_mpc3_sr, [z]),
@@ -611,6 +651,12 @@ impl UniverseMethod {
         let x = elements(&inputs, n, spec.name)?;
         let all = |_: Error| true;
         let failure = match (spec.body, x.as_slice()) {
+            (Body::One(_), &[a]) if a.len() == n && spec.array.is_some() => {
+                let array = spec
+                    .array
+                    .ok_or_else(|| PyTypeError::new_err("no array form"))?;
+                py.detach(|| run_array(a, out, nan_on_error, |xs, os| array(u, xs, os)))
+            }
             (Body::One(f), &[a]) => py.detach(|| run([a], out, nan_on_error, all, |[a]| f(u, a))),
             (Body::Two(f), &[a, b]) => {
                 py.detach(|| run([a, b], out, nan_on_error, all, |[a, b]| f(u, a, b)))

@@ -33,11 +33,13 @@ pub(crate) static FITS: &[KernelSpec] = &[
         name: "last_scattering_redshift_fit",
         args: &["omega_baryon_h2", "omega_matter_h2"],
         body: KernelBody::A2(dc::last_scattering_redshift_fit::<f64>),
+        array: None,
     },
     KernelSpec {
         name: "drag_redshift_fit",
         args: &["omega_baryon_h2", "omega_matter_h2"],
         body: KernelBody::A2(dc::drag_redshift_fit::<f64>),
+        array: None,
     },
 ];
 

@@ -12,7 +12,8 @@ use numpy::{
 use pyo3::exceptions::{PyTypeError, PyValueError};
 use pyo3::prelude::*;
 use relicore::blackbody as bb;
-use relicore::{Error, Result};
+use relicore::{ArrayResult, Error, Result};
+use relicore_dispatch::widest;
 
 use crate::calibration::PyTwoLoadCalibration;
 use crate::errors::{Arg, Site, core_error, shape_error};
@@ -32,18 +33,42 @@ pub(crate) enum Body {
     Calibrated(fn(&Cal, f64) -> Result<f64>),
 }
 
-/// A core function: its name, its parameter names in order, and how to call it.
+/// A core array function of (many values, one shared value), dispatched to the widest SIMD
+/// compilation of the CPU (see [`planck_array`]).
+pub(crate) type ArrayFn = fn(&[f64], f64, &mut [f64]) -> ArrayResult;
+
+/// A core function: its name, its parameter names in order, how to call it, and its core array
+/// form where it has one (used when the first input is an array and the second a scalar).
 pub(crate) struct Spec {
     pub(crate) name: &'static str,
     pub(crate) args: &'static [&'static str],
     pub(crate) body: Body,
+    pub(crate) array: Option<ArrayFn>,
 }
 
 macro_rules! spec {
     ($kind:ident, $name:ident, [$($arg:ident),+]) => {
-        Spec { name: stringify!($name), args: &[$(stringify!($arg)),+], body: Body::$kind(bb::$name::<f64>) }
+        Spec { name: stringify!($name), args: &[$(stringify!($arg)),+], body: Body::$kind(bb::$name::<f64>), array: None }
+    };
+    ($kind:ident, $name:ident, [$($arg:ident),+], $array:ident) => {
+        Spec { name: stringify!($name), args: &[$(stringify!($arg)),+], body: Body::$kind(bb::$name::<f64>), array: Some($array) }
     };
 }
+
+/// A core Planck array function, compiled for each SIMD level and chosen at run time.
+macro_rules! planck_array {
+    ($($name:ident),+) => {$(
+        fn $name(x: &[f64], t: f64, out: &mut [f64]) -> ArrayResult {
+            widest!(|x: &[f64], t: f64, out: &mut [f64]| -> ArrayResult { bb::$name(x, t, out) })
+        }
+    )+};
+}
+
+planck_array!(
+    spectral_radiance_wavelength_array,
+    spectral_radiance_frequency_array,
+    spectral_radiance_wavenumber_array
+);
 
 /// Every element-wise blackbody function of the core (`two_load_calibration` builds a value
 /// and lives in `calibration.rs`, with its parameter names in [`TWO_LOAD_ARGS`]).
@@ -51,17 +76,20 @@ pub(crate) static SPECS: &[Spec] = &[
     spec!(
         A2,
         spectral_radiance_wavelength,
-        [wavelength_m, temperature_k]
+        [wavelength_m, temperature_k],
+        spectral_radiance_wavelength_array
     ),
     spec!(
         A2,
         spectral_radiance_frequency,
-        [frequency_hz, temperature_k]
+        [frequency_hz, temperature_k],
+        spectral_radiance_frequency_array
     ),
     spec!(
         A2,
         spectral_radiance_wavenumber,
-        [wavenumber_per_m, temperature_k]
+        [wavenumber_per_m, temperature_k],
+        spectral_radiance_wavenumber_array
     ),
     spec!(
         A2,
@@ -211,20 +239,47 @@ pub(crate) fn run<const N: usize>(
     keep_going: impl Fn(Error) -> bool + Sync,
     f: impl Fn([f64; N]) -> Result<f64> + Sync,
 ) -> Option<(usize, Error)> {
+    split(out, |start, part| {
+        run_range(inputs, part, start, nan_on_error, &keep_going, &f)
+    })
+}
+
+/// `out[i] = f(x[i])` through a core array function `f(x, out)` (which computes every element,
+/// failing ones as NaN, with the scalar function's bits), split over cores as [`run`] does.
+/// Returns the first failing element; with `nan_on_error` the call succeeds with its NaN.
+pub(crate) fn run_array(
+    x: &[f64],
+    out: &mut [f64],
+    nan_on_error: bool,
+    f: impl Fn(&[f64], &mut [f64]) -> ArrayResult + Sync,
+) -> Option<(usize, Error)> {
+    let first = split(out, |start, part| {
+        let Some(xs) = x.get(start..start + part.len()) else {
+            return Some((start, Error::LengthMismatch(0)));
+        };
+        f(xs, part).err().map(|e| (start + e.index, e.error))
+    });
+    if nan_on_error { None } else { first }
+}
+
+/// Runs `body(start, part)` over `out`: on the calling thread for short arrays, else over one
+/// contiguous part per core (see [`run`]); returns the failure of the lowest index.
+fn split(
+    out: &mut [f64],
+    body: impl Fn(usize, &mut [f64]) -> Option<(usize, Error)> + Sync,
+) -> Option<(usize, Error)> {
     let n = out.len();
     let threads = worker_count().min(n / PARALLEL_MIN.max(1) + 1);
     if n < PARALLEL_MIN || threads < 2 {
-        return run_range(inputs, out, 0, nan_on_error, &keep_going, &f);
+        return body(0, out);
     }
     let chunk = n.div_ceil(threads);
-    let (keep_going, f) = (&keep_going, &f);
+    let body = &body;
     let spawned = std::thread::scope(|s| {
         let mut handles = Vec::with_capacity(threads);
         for (k, part) in out.chunks_mut(chunk).enumerate() {
             let start = k * chunk;
-            let h = std::thread::Builder::new().spawn_scoped(s, move || {
-                run_range(inputs, part, start, nan_on_error, keep_going, f)
-            });
+            let h = std::thread::Builder::new().spawn_scoped(s, move || body(start, part));
             handles.push(h);
         }
         let mut first: Option<(usize, Error)> = None;
@@ -245,7 +300,7 @@ pub(crate) fn run<const N: usize>(
     });
     match spawned {
         Some(first) => first,
-        None => run_range(inputs, out, 0, nan_on_error, &keep_going, &f),
+        None => body(0, out),
     }
 }
 
@@ -451,6 +506,10 @@ impl Kernel {
         let all = |_: Error| true;
         let failure = match (spec.body, x.as_slice()) {
             (Body::A1(f), &[a]) => py.detach(|| run([a], out, nan_on_error, all, |[a]| f(a))),
+            (Body::A2(_), &[a, &[b]]) if a.len() == n && spec.array.is_some() => {
+                let array = spec.array.ok_or_else(|| self.wrong_kind("map"))?;
+                py.detach(|| run_array(a, out, nan_on_error, |xs, os| array(xs, b, os)))
+            }
             (Body::A2(f), &[a, b]) => {
                 py.detach(|| run([a, b], out, nan_on_error, all, |[a, b]| f(a, b)))
             }
