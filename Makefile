@@ -42,6 +42,8 @@ clippy: deps
 
 rust-test:
 	cargo test --workspace --exclude relicore-python
+	# the SIMD compilations of the array functions, optimised as shipped, against the scalar bits
+	cargo test --release -p relicore-dispatch --quiet
 
 nostd:
 	cd tests/nostd-check && cargo build --release --quiet

@@ -47,6 +47,22 @@ fn spectral(c: &mut Criterion) {
             black_box(&out32);
         })
     });
+    // the core's array functions (built here for the baseline target; the C and Python faces
+    // run AVX2 or AVX-512 compilations of the same code, see bindings/dispatch)
+    g.bench_function("spectral_radiance_wavelength_array_f64_1000", |b| {
+        b.iter(|| bb::spectral_radiance_wavelength_array(&wl, black_box(1500.0), &mut out))
+    });
+    g.bench_function("spectral_radiance_wavelength_array_f32_1000", |b| {
+        b.iter(|| bb::spectral_radiance_wavelength_array(&wl32, black_box(1500.0f32), &mut out32))
+    });
+    let nu: Vec<f64> = wl.iter().map(|&l| 299_792_458.0 / l).collect();
+    g.bench_function("spectral_radiance_frequency_array_f64_1000", |b| {
+        b.iter(|| bb::spectral_radiance_frequency_array(&nu, black_box(1500.0), &mut out))
+    });
+    let k: Vec<f64> = wl.iter().map(|&l| 1.0 / l).collect();
+    g.bench_function("spectral_radiance_wavenumber_array_f64_1000", |b| {
+        b.iter(|| bb::spectral_radiance_wavenumber_array(&k, black_box(1500.0), &mut out))
+    });
     g.bench_function("temperature_derivative_wavelength_f64", |b| {
         b.iter(|| {
             bb::radiance_temperature_derivative_wavelength(black_box(10e-6), black_box(300.0f64))

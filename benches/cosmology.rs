@@ -140,6 +140,21 @@ fn methods(c: &mut Criterion) {
             black_box(&out);
         })
     });
+    // the core's array functions (baseline target here; AVX2/AVX-512 in the C and Python faces)
+    c.bench_function("cosmology_array/luminosity_distance_mpc_array_1000", |b| {
+        b.iter(|| flat.luminosity_distance_mpc_array(black_box(&zs), &mut out))
+    });
+    c.bench_function("cosmology_array/comoving_distance_mpc_array_1000", |b| {
+        b.iter(|| flat.comoving_distance_mpc_array(black_box(&zs), &mut out))
+    });
+    c.bench_function(
+        "cosmology_array/transverse_comoving_distance_mpc_array_1000",
+        |b| b.iter(|| flat.transverse_comoving_distance_mpc_array(black_box(&zs), &mut out)),
+    );
+    c.bench_function(
+        "cosmology_array/angular_diameter_distance_mpc_array_1000",
+        |b| b.iter(|| flat.angular_diameter_distance_mpc_array(black_box(&zs), &mut out)),
+    );
 }
 
 criterion_group!(benches, construction, methods);

@@ -28,6 +28,14 @@ fn outcome(r: Result<f64>) -> Outcome {
     }
 }
 
+/// An array call as one comparable outcome: its first failure, or a digest of every output bit.
+fn array_outcome(r: relicore::ArrayResult, out: &[f64]) -> Outcome {
+    match r {
+        Err(e) => Outcome::Failed(e.error),
+        Ok(()) => Outcome::Value(out.iter().fold(0u64, |h, v| h.rotate_left(7) ^ v.to_bits())),
+    }
+}
+
 fn outcome32(r: Result<f32>) -> Outcome {
     match r {
         Ok(v) => Outcome::Value(u64::from(v.to_bits())),
@@ -102,6 +110,22 @@ fn blackbody_calls() -> Vec<Box<dyn Fn() -> Outcome + Send + Sync>> {
     for f in one {
         for a in ARGS {
             calls.push(Box::new(move || outcome(f(a))));
+        }
+    }
+    // the array forms, over the whole argument grid at each temperature
+    type A = fn(&[f64], f64, &mut [f64]) -> relicore::ArrayResult;
+    let arrays: [A; 3] = [
+        bb::spectral_radiance_wavelength_array,
+        bb::spectral_radiance_frequency_array,
+        bb::spectral_radiance_wavenumber_array,
+    ];
+    for f in arrays {
+        for t in ARGS {
+            calls.push(Box::new(move || {
+                let x: Vec<f64> = (0..200).map(|i| ARGS[i % ARGS.len()] * 1e-6).collect();
+                let mut out = vec![0.0; x.len()];
+                array_outcome(f(&x, t, &mut out), &out)
+            }));
         }
     }
     for l in ARGS {
@@ -200,11 +224,29 @@ fn cosmology_calls<'a>(
         |u, z| u.redshift_at_comoving_distance_mpc(z * 1000.0),
         |u, z| u.redshift_at_luminosity_distance_mpc(z * 1000.0),
     ];
+    type D = fn(&Universe<f64>, &[f64], &mut [f64]) -> relicore::ArrayResult;
+    let arrays: [D; 4] = [
+        Universe::comoving_distance_mpc_array,
+        Universe::transverse_comoving_distance_mpc_array,
+        Universe::angular_diameter_distance_mpc_array,
+        Universe::luminosity_distance_mpc_array,
+    ];
     for u in us {
         for m in methods {
             for z in REDSHIFTS {
                 calls.push(Box::new(move || outcome(m(u, z))));
             }
+        }
+        for a in arrays {
+            calls.push(Box::new(move || {
+                let z: Vec<f64> = (0..300).map(|i| i as f64 * 0.01).collect();
+                let mut out = vec![0.0; z.len()];
+                array_outcome(a(u, &z, &mut out), &out)
+            }));
+            calls.push(Box::new(move || {
+                let mut out = vec![0.0; REDSHIFTS.len()];
+                array_outcome(a(u, &REDSHIFTS, &mut out), &out)
+            }));
         }
         calls.push(Box::new(move || {
             outcome(u.matter_radiation_equality_redshift())
