@@ -1290,7 +1290,8 @@ int32_t relicore_thermal_sz_null_frequency(double cmb_temperature_k,
  * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
  * of a non-NULL `out` is NaN.
  *
- * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+ * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
  * accuracy as there. Allocates nothing.
  *
  * # Safety
@@ -1318,7 +1319,8 @@ int32_t relicore_spectral_radiance_wavelength_array(const double *wavelengths_m,
  * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
  * of a non-NULL `out` is NaN.
  *
- * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+ * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
  * accuracy as there. Allocates nothing.
  *
  * # Safety
@@ -1346,7 +1348,8 @@ int32_t relicore_spectral_radiance_frequency_array(const double *frequencies_hz,
  * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
  * of a non-NULL `out` is NaN.
  *
- * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+ * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
  * accuracy as there. Allocates nothing.
  *
  * # Safety
@@ -1572,7 +1575,8 @@ int32_t relicore_brightness_temperature_frequency_array(double frequency_hz,
  * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
  * of a non-NULL `out` is NaN.
  *
- * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+ * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
  * accuracy as there. Allocates nothing.
  *
  * # Safety
@@ -1600,7 +1604,8 @@ int32_t relicore_spectral_radiance_wavelength_array_f32(const float *wavelengths
  * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
  * of a non-NULL `out` is NaN.
  *
- * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+ * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
  * accuracy as there. Allocates nothing.
  *
  * # Safety
@@ -1628,7 +1633,8 @@ int32_t relicore_spectral_radiance_frequency_array_f32(const float *frequencies_
  * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
  * of a non-NULL `out` is NaN.
  *
- * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+ * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
  * accuracy as there. Allocates nothing.
  *
  * # Safety
@@ -3119,7 +3125,8 @@ int32_t relicore_cmb_temperature_at_k_array(const struct relicore_universe *univ
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
- * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+ * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
  * accuracy as there. Allocates nothing.
  *
  * # Safety
@@ -3149,7 +3156,8 @@ int32_t relicore_comoving_distance_mpc_array(const struct relicore_universe *uni
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
- * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+ * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
  * accuracy as there. Allocates nothing.
  *
  * # Safety
@@ -3179,7 +3187,8 @@ int32_t relicore_transverse_comoving_distance_mpc_array(const struct relicore_un
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
- * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+ * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
  * accuracy as there. Allocates nothing.
  *
  * # Safety
@@ -3209,7 +3218,8 @@ int32_t relicore_angular_diameter_distance_mpc_array(const struct relicore_unive
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
- * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+ * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
  * accuracy as there. Allocates nothing.
  *
  * # Safety

@@ -1,5 +1,6 @@
 //! Array forms of the spectral functions: a buffer and its length in, a buffer of the same
-//! length out, one core call per element (no allocation, no second implementation).
+//! length out, one core call per element, or the core's array form where it has one (no
+//! allocation, no second implementation).
 
 use crate::boundary::{elementwise, through_array};
 use relicore::ArrayResult;
@@ -20,7 +21,8 @@ use relicore_dispatch::widest;
 /// `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
 /// of a non-NULL `out` is NaN.
 ///
-/// Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+/// Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+/// the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
 /// accuracy as there. Allocates nothing.
 ///
 /// # Safety
@@ -60,7 +62,8 @@ pub unsafe extern "C" fn relicore_spectral_radiance_wavelength_array(
 /// `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
 /// of a non-NULL `out` is NaN.
 ///
-/// Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+/// Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+/// the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
 /// accuracy as there. Allocates nothing.
 ///
 /// # Safety
@@ -100,7 +103,8 @@ pub unsafe extern "C" fn relicore_spectral_radiance_frequency_array(
 /// `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
 /// of a non-NULL `out` is NaN.
 ///
-/// Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+/// Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+/// the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
 /// accuracy as there. Allocates nothing.
 ///
 /// # Safety
@@ -394,7 +398,8 @@ pub unsafe extern "C" fn relicore_brightness_temperature_frequency_array(
 /// `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
 /// of a non-NULL `out` is NaN.
 ///
-/// Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+/// Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+/// the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
 /// accuracy as there. Allocates nothing.
 ///
 /// # Safety
@@ -434,7 +439,8 @@ pub unsafe extern "C" fn relicore_spectral_radiance_wavelength_array_f32(
 /// `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
 /// of a non-NULL `out` is NaN.
 ///
-/// Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+/// Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+/// the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
 /// accuracy as there. Allocates nothing.
 ///
 /// # Safety
@@ -474,7 +480,8 @@ pub unsafe extern "C" fn relicore_spectral_radiance_frequency_array_f32(
 /// `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
 /// of a non-NULL `out` is NaN.
 ///
-/// Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+/// Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+/// the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
 /// accuracy as there. Allocates nothing.
 ///
 /// # Safety

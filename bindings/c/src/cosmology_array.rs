@@ -1,6 +1,6 @@
 //! Array forms of the cosmology functions of one argument: a universe, a buffer and its
-//! length in, a buffer of the same length out, one core call per element (no allocation, no
-//! second implementation).
+//! length in, a buffer of the same length out, one core call per element, or the core's array
+//! form for the distances (no allocation, no second implementation).
 
 use crate::universe::{relicore_universe, universe_array, universe_through_array};
 use relicore::ArrayResult;
@@ -314,7 +314,8 @@ pub unsafe extern "C" fn relicore_cmb_temperature_at_k_array(
 /// `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
 /// `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
 ///
-/// Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+/// Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+/// the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
 /// accuracy as there. Allocates nothing.
 ///
 /// # Safety
@@ -356,7 +357,8 @@ pub unsafe extern "C" fn relicore_comoving_distance_mpc_array(
 /// `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
 /// `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
 ///
-/// Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+/// Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+/// the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
 /// accuracy as there. Allocates nothing.
 ///
 /// # Safety
@@ -398,7 +400,8 @@ pub unsafe extern "C" fn relicore_transverse_comoving_distance_mpc_array(
 /// `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
 /// `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
 ///
-/// Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+/// Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+/// the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
 /// accuracy as there. Allocates nothing.
 ///
 /// # Safety
@@ -440,7 +443,8 @@ pub unsafe extern "C" fn relicore_angular_diameter_distance_mpc_array(
 /// `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
 /// `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
 ///
-/// Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+/// Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
+/// the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
 /// accuracy as there. Allocates nothing.
 ///
 /// # Safety

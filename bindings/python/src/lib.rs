@@ -67,6 +67,23 @@ fn roots_dict(py: Python<'_>) -> PyResult<Bound<'_, PyDict>> {
     Ok(d)
 }
 
+/// The SIMD compilation the array functions run in: (level in use, level the CPU supports);
+/// 2 = AVX-512, 1 = AVX2, 0 = the baseline (see `relicore-dispatch`).
+#[pyfunction]
+fn simd_level() -> (u8, u8) {
+    (
+        relicore_dispatch::level(),
+        relicore_dispatch::detected_level(),
+    )
+}
+
+/// Caps the SIMD level for the whole process (tests of the narrower compilations, speed
+/// comparisons); returns the previous cap. Every level gives the same bits.
+#[pyfunction]
+fn cap_simd_level(cap: u8) -> u8 {
+    relicore_dispatch::cap_level(cap)
+}
+
 #[pymodule]
 fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     let py = m.py();
@@ -93,6 +110,8 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_function(wrap_pyfunction!(decoupling::decoupling_constants, m)?)?;
     m.add("CONSTANTS", constants_dict(py)?)?;
     m.add("ROOTS", roots_dict(py)?)?;
+    m.add_function(wrap_pyfunction!(simd_level, m)?)?;
+    m.add_function(wrap_pyfunction!(cap_simd_level, m)?)?;
     m.add("VERSION", relicore::VERSION)?;
     Ok(())
 }
