@@ -32,8 +32,25 @@ def core_methods() -> dict[str, list[str]]:
     out = {}
     for path in sorted((ROOT / "src" / "cosmology").glob("*.rs")):
         for m in re.finditer(r"^\s*pub fn (\w+)\s*\(\s*&self\s*,?([^)]*)\)", path.read_text(), flags=re.M):
+            # the array forms (`<name>_array`) are the array path of `<name>` in Python
+            # (tests/python/test_hypothesis_arrays.py), not methods of their own
+            if m.group(1).endswith("_array"):
+                ARRAY_FORMS.add(m.group(1))
+                continue
             out[m.group(1)] = re.findall(r"(\w+)\s*:", m.group(2))
     return out
+
+
+ARRAY_FORMS: set[str] = set()
+
+
+def test_every_core_array_form_is_the_array_path_of_its_method():
+    from test_hypothesis_arrays import DISTANCES
+
+    core_methods()
+    assert ARRAY_FORMS == {core for _, core in DISTANCES}, ARRAY_FORMS
+    for name in ARRAY_FORMS:
+        assert name[: -len("_array")] in core_methods(), name
 
 
 def core_parameter_fields() -> list[str]:

@@ -39,7 +39,20 @@ def core_functions() -> dict[str, list[str]]:
     return out
 
 
-CORE = core_functions()
+ALL_CORE = core_functions()
+# The array forms of the core (`<name>_array`) have no Python function of their own: a numpy
+# array passed to `<name>` runs through them (tests/python/test_hypothesis_arrays.py).
+CORE = {k: v for k, v in ALL_CORE.items() if not k.endswith("_array")}
+
+
+def test_every_core_array_form_is_the_array_path_of_its_function():
+    from test_hypothesis_arrays import BLACKBODY
+
+    arrays = {k for k in ALL_CORE if k.endswith("_array")}
+    assert arrays, "no array forms found in src/blackbody"
+    assert arrays == {core for _, core, _ in BLACKBODY}, arrays
+    for name in arrays:
+        assert name[: -len("_array")] in CORE, name
 
 
 def test_core_has_functions():
