@@ -83,6 +83,11 @@ pub trait Real:
     /// [`Real::MIN_NORMAL_EXPONENT`, `Real::MAX_EXPONENT`]; another m gives an unspecified
     /// value (never a panic).
     fn pow2i(m: i32) -> Self;
+    /// The integer k, 0 ≤ k < 2^20, exactly, assembled from its bits (a float with k in the low
+    /// bits of the significand, minus the power of two that carries them): the same value as
+    /// `k as Self`, in operations that SIMD units without integer-to-float conversion of 64-bit
+    /// lanes have. Another k gives an unspecified value (never a panic).
+    fn small_integer(k: i32) -> Self;
     /// x with the low ⌈p/2⌉ bits of its significand cleared (26 significant bits are left in
     /// `f64`, 12 in `f32`): the high part of the splitting x = hi + (x − hi), both parts exact,
     /// by one bit mask (no multiplication, no overflow, valid for subnormal x too).
@@ -177,6 +182,13 @@ macro_rules! impl_real {
                 <$t>::from_bits(biased.wrapping_shl($digits - 1))
             }
             #[inline(always)]
+            fn small_integer(k: i32) -> Self {
+                // 2^(p−1) has a zero significand: OR-ing k into it gives 2^(p−1) + k exactly
+                let big: $t =
+                    <$t>::from_bits((($emax as $bits) + ($digits as $bits) - 1) << ($digits - 1));
+                <$t>::from_bits(big.to_bits() | ((k as $bits) & 0xf_ffff)) - big
+            }
+            #[inline(always)]
             fn split_high(self) -> Self {
                 let low: $bits = (1 << (($digits + 1) / 2)) - 1;
                 <$t>::from_bits(self.to_bits() & !low)
@@ -195,7 +207,7 @@ impl_real!(
     libm::expm1,
     libm::log,
     libm::log1p,
-    sqrt_f64,
+    libm::sqrt,
     libm::cbrt,
     libm::sinh,
     libm::tanh,
@@ -220,7 +232,7 @@ impl_real!(
     libm::expm1f,
     libm::logf,
     libm::log1pf,
-    sqrt_f32,
+    libm::sqrtf,
     libm::cbrtf,
     libm::sinhf,
     libm::tanhf,
@@ -236,28 +248,15 @@ impl_real!(
     u32
 );
 
-// Square roots. IEEE 754 requires sqrt to be correctly rounded, and both forms below are the
-// hardware instruction or a correctly rounded emulation of it, so they give the same bits. With
-// `std` (the C and Python faces) the std form is used because the compiler knows it as the
-// generic square-root operation and can vectorise loops that contain it (the array functions);
-// libm's form is an opaque scalar instruction to the vectoriser.
-#[cfg(feature = "std")]
-#[inline(always)]
-fn sqrt_f64(x: f64) -> f64 {
-    x.sqrt()
-}
-#[cfg(not(feature = "std"))]
-#[inline(always)]
-fn sqrt_f64(x: f64) -> f64 {
-    libm::sqrt(x)
-}
-#[cfg(feature = "std")]
-#[inline(always)]
-fn sqrt_f32(x: f32) -> f32 {
-    x.sqrt()
-}
-#[cfg(not(feature = "std"))]
-#[inline(always)]
-fn sqrt_f32(x: f32) -> f32 {
-    libm::sqrtf(x)
+#[cfg(test)]
+mod tests {
+    use super::Real;
+
+    #[test]
+    fn small_integer_is_the_integer_for_every_k_below_2_to_the_20() {
+        for k in 0..(1 << 20) {
+            assert_eq!(f64::small_integer(k), f64::from(k), "f64 {k}");
+            assert_eq!(f32::small_integer(k), k as f32, "f32 {k}");
+        }
+    }
 }

@@ -3,7 +3,7 @@
 //! derivative, transverse scale. Definitions of Hogg 1999 (arXiv:astro-ph/9905116), eqs. 15–29.
 
 use super::Universe;
-use super::table::S_MIN;
+use super::table::A_MIN;
 use super::universe::check_redshift;
 use crate::array::blockwise;
 use crate::check::finite_result;
@@ -19,33 +19,33 @@ impl<T: Real> Universe<T> {
         if z == T::zero() {
             return Ok(T::zero());
         }
-        let (s, one_minus_s) = Self::s_of_redshift(z);
-        if s >= T::c(S_MIN) {
-            if let Some(g) = self.table.eval(s) {
-                return Ok(one_minus_s * g);
+        let (a, one_minus_a) = Self::a_of_redshift(z);
+        if a >= T::c(A_MIN) {
+            if let Some(g) = self.table.eval(a) {
+                return Ok(one_minus_a * g);
             }
         }
-        self.comoving_unit_quadrature(s)
+        // beyond the table (or without one): quadrature in s = √a
+        let r = (T::one() + z).sqrt();
+        self.comoving_unit_quadrature(T::one() / r)
     }
 
-    /// s = 1/√(1+z) and 1 − s = z/(r(1 + r)), r = √(1+z) (without cancellation), from one
-    /// division.
+    /// a = 1/(1+z) and 1 − a = z·a (without cancellation), from one division.
     #[inline(always)]
-    fn s_of_redshift(z: T) -> (T, T) {
-        let r = (T::one() + z).sqrt();
-        let inv = T::one() / (r * (T::one() + r));
-        ((T::one() + r) * inv, z * inv)
+    fn a_of_redshift(z: T) -> (T, T) {
+        let a = T::one() / (T::one() + z);
+        (a, z * a)
     }
 
     /// [`comoving_unit`](Self::comoving_unit) as straight-line code for the array functions:
-    /// χ/D_H and whether z is inside the table's common case (z > 0 finite, s in the table, a
+    /// χ/D_H and whether z is inside the table's common case (z > 0 finite, a in the table, a
     /// valid table), where the two agree bit for bit; outside, the value is garbage.
     #[inline(always)]
     fn comoving_unit_fast(&self, z: T) -> (T, bool) {
-        let (s, one_minus_s) = Self::s_of_redshift(z);
-        let (g, inside) = self.table.eval_fast(s);
+        let (a, one_minus_a) = Self::a_of_redshift(z);
+        let (g, inside) = self.table.eval_fast(a);
         (
-            one_minus_s * g,
+            one_minus_a * g,
             inside & (z > T::zero()) & (z <= T::max_value()),
         )
     }

@@ -1,41 +1,43 @@
 //! The per-universe distance table: a fixed-size piecewise Chebyshev interpolant of the
 //! line-of-sight comoving distance, built once by [`Universe::new`](super::Universe::new).
 //!
-//! With s = √a = (1+z)^(−1/2), χ(z)/D_H = ∫_s^1 2s'/q(s') ds' where q = a²E is finite and
-//! smooth down to a = 0 (DESIGN 4: the s = √a substitution). The table stores
-//! g(s) = χ/(D_H (1 − s)), smooth and of order one, so that (1 − s) g(s), with 1 − s formed
-//! from z without cancellation, keeps full relative accuracy down to z → 0.
+//! With a = 1/(1+z), χ(z)/D_H = ∫_a^1 da'/q(a') where q = a²E. The table stores
+//! g(a) = χ/(D_H (1 − a)), smooth and of order one, so that (1 − a) g(a), with 1 − a = z·a
+//! formed from z without cancellation, keeps full relative accuracy down to z → 0. A call then
+//! needs one division (a) and no square root.
 //!
-//! Pieces: the octaves [2^−j−1, 2^−j) of s for j = 0…6 (z up to 16383), each cut into 32
-//! equal pieces, so a piece is never wider than 1/32 of its distance from s = 0, the nearest
-//! singularity of a physical model. In each piece, 10 Chebyshev coefficients come from the
-//! values at the 10 Chebyshev points of the first kind, which are computed with the shared
-//! adaptive Gauss-Kronrod quadrature (relative tolerance 1e-15) and summed with compensation;
-//! the first 8 are kept. The piece index comes from the exponent and leading mantissa bits of
-//! s: no logarithm per call.
+//! Pieces: the octaves [2^−j−1, 2^−j) of a for j = 0…13 (z up to 16383), each cut into 16
+//! equal pieces, so a piece is never wider than 1/16 of its distance from a = 0, where χ has
+//! its square-root singularity. In each piece, 10 Chebyshev coefficients come from the values at
+//! the 10 Chebyshev points of the first kind; the values are the cumulative integral from
+//! a = 1 down to each node, piece by piece with the shared adaptive Gauss-Kronrod quadrature
+//! (relative tolerance 4ε) in a, summed with compensation. The first 8 coefficients are kept.
+//! The piece index comes from the exponent and leading mantissa bits of a: no logarithm per
+//! call.
 //!
 //! Error control (a posteriori): the table is used only if, in every piece, the two dropped
 //! coefficients (the 9th and 10th) together are below 1e-14 of the largest one (see
-//! [`TAIL_LIMIT`] for why not 1e-15). For analytic g
-//! the coefficients decay geometrically and the truncation error is of the order of the first
-//! neglected ones (Trefethen, Approximation Theory and Approximation Practice, SIAM 2013,
-//! ch. 8). Measured with mpmath for flat, open and closed Λ models with radiation and a
-//! low-density model, the dropped coefficients are below 5e-17 of the largest and the last kept
-//! one below 5e-15. Otherwise every call falls back to direct quadrature: slower, never less
-//! accurate. The tests compare both paths with mpmath vectors.
+//! [`TAIL_LIMIT`] for why not 1e-15). For analytic g the coefficients decay geometrically and
+//! the truncation error is of the order of the first neglected ones (Trefethen, Approximation
+//! Theory and Approximation Practice, SIAM 2013, ch. 8). Measured with mpmath (30 digits) for
+//! flat and closed Λ models with radiation, without radiation, and a low-density model, the
+//! 9th coefficient is below 2e-16 of the largest and the 10th at the quadrature's noise.
+//! Otherwise every call falls back to direct quadrature in s = √a (slower). The tests compare
+//! the table with mpmath vectors.
 //!
-//! Why 32 pieces of 8 coefficients rather than 16 of 14 (the first layout): the array
-//! functions evaluate many redshifts at once with SIMD, and there the cost is the gathering of
-//! each element's coefficients from its own piece; 8 gathers per element instead of 14 nearly
-//! halve the time of a catalogue of distances. The table is smaller too (1792 numbers).
+//! Why this layout (the first one had 16 pieces of 14 coefficients per octave of s = √a): the
+//! array functions evaluate many redshifts at once with SIMD, and there the cost is the
+//! gathering of each element's coefficients from its own piece, plus the square root and the
+//! division; 8 gathers and no square root instead of 14 and one more than halve the time of a
+//! catalogue of distances, and the table keeps its size (1792 numbers).
 
 use super::Universe;
 use crate::math::dd::two_sum;
 use crate::math::quadrature::integrate;
 use crate::{Real, Result};
 
-pub(crate) const OCTAVES: usize = 7;
-pub(crate) const SUB: usize = 32;
+pub(crate) const OCTAVES: usize = 14;
+pub(crate) const SUB: usize = 16;
 pub(crate) const PIECES: usize = OCTAVES * SUB;
 /// Coefficients kept per piece.
 pub(crate) const NCOEF: usize = 8;
@@ -47,8 +49,8 @@ const NODES: usize = 10;
 /// true tail is 1e-17; 1e-14 still keeps the truncation error 100 times below the 1e-12 the
 /// reference vectors demand.
 const TAIL_LIMIT: f64 = 1e-14;
-/// Smallest s in the table, 2^−7 (z = 16383).
-pub(crate) const S_MIN: f64 = 0.007_812_5;
+/// Smallest a in the table, 2^−14 (z = 16383).
+pub(crate) const A_MIN: f64 = 6.103_515_625e-5;
 
 /// Chebyshev coefficients of g(s) per piece; `valid` is false when the error control failed.
 #[derive(Debug, Clone, PartialEq)]
@@ -64,29 +66,31 @@ pub(crate) struct DistanceTable<T> {
     valid: u8,
 }
 
-/// Piece (octave j, sub-piece k) containing s ∈ [S_MIN, 1], and the local variable t ∈ [−1, 1].
+/// Piece (octave j, sub-piece k) containing a ∈ [A_MIN, 1], and the local variable t ∈ [−1, 1].
 #[inline]
-fn locate<T: Real>(s: T) -> Option<(usize, T)> {
-    if !(s >= T::c(S_MIN)) || s > T::one() {
+fn locate<T: Real>(a: T) -> Option<(usize, T)> {
+    if !(a >= T::c(A_MIN)) || a > T::one() {
         return None;
     }
-    if s == T::one() {
+    if a == T::one() {
         return Some((SUB - 1, T::one()));
     }
-    Some(locate_inside(s))
+    Some(locate_inside(a))
 }
 
-/// [`locate`] for S_MIN ≤ s < 1 as straight-line code (no branch, no table): another s gives
+/// [`locate`] for A_MIN ≤ a < 1 as straight-line code (no branch, no table): another a gives
 /// some piece index below [`PIECES`] and a garbage t.
 #[inline(always)]
-fn locate_inside<T: Real>(s: T) -> (usize, T) {
-    let (m, e, _) = s.integer_decode();
+fn locate_inside<T: Real>(a: T) -> (usize, T) {
+    let (m, e, _) = a.integer_decode();
     let d = T::MANTISSA_DIGITS as i32;
-    let octave_exp = i32::from(e) + d - 1; // s ∈ [2^E, 2^(E+1))
-    let j = (-octave_exp - 1).clamp(0, OCTAVES as i32 - 1);
-    let k = ((m >> (d - 6)) & 31) as i32;
-    // t = 64 (s / 2^E) − 64 − 2k − 1, exact; 2^(j+1) = 2^−E maps the octave onto [1, 2)
-    let t = T::c(64.0) * (s * T::pow2i(j + 1)) - T::c(f64::from(65 + 2 * k));
+    let octave_exp = i32::from(e) + d - 1; // a ∈ [2^E, 2^(E+1))
+    // a ∈ [2^E, 2^(E+1)): octave j = −E − 1 (any value for an a outside the table: the
+    // caller bounds the index and ignores t there)
+    let j = (-octave_exp - 1) & 63;
+    let k = ((m >> (d - 5)) & 15) as i32;
+    // t = 32 (a / 2^E) − 32 − 2k − 1, exact; 2^(j+1) = 2^−E maps the octave onto [1, 2)
+    let t = T::c(32.0) * (a * T::pow2i(j + 1)) - T::small_integer(33 + 2 * k);
     ((j * SUB as i32 + k) as usize, t)
 }
 
@@ -157,32 +161,33 @@ impl<T: Real> DistanceTable<T> {
     pub(crate) fn build(u: &Universe<T>) -> Result<Self> {
         let mut table = Self::empty();
         let tol = T::epsilon() * T::c(4.0);
-        // cumulative integral from s = 1 downwards, compensated
+        // cumulative integral from a = 1 downwards, compensated
         let (mut acc, mut comp) = (T::zero(), T::zero());
-        let mut s_prev = T::one();
+        let mut a_prev = T::one();
         let mut values = [T::zero(); NODES];
         let mut ok = true;
-        // pieces in order of decreasing s: octave 0 first, sub-pieces from the top
+        // pieces in order of decreasing a: octave 0 first, sub-pieces from the top
         for j in 0..OCTAVES {
             for k in (0..SUB).rev() {
                 let p = j * SUB + k;
                 let (lo, h) = piece_bounds(p);
                 for (m, v) in values.iter_mut().enumerate() {
-                    // m = 0 is the node nearest the top of the piece: s decreases with m
+                    // m = 0 is the node nearest the top of the piece: a decreases with m
                     let t = chebyshev_node(m);
-                    let s = T::c(lo + h * 0.5 * (t + 1.0));
+                    let a = T::c(lo + h * 0.5 * (t + 1.0));
+                    // dχ/D_H = da/q(a), q = a²E = √(q²(a)); the limits are the nodes themselves
                     let part = integrate(
-                        |x: T| T::c(2.0) * x / u.q_of_s(x),
-                        s,
-                        s_prev,
+                        |x: T| T::one() / u.q_squared(x).sqrt(),
+                        a,
+                        a_prev,
                         tol,
                         T::zero(),
                     )?;
-                    let (a, e) = two_sum(acc, part);
-                    acc = a;
+                    let (sum, e) = two_sum(acc, part);
+                    acc = sum;
                     comp = comp + e;
-                    s_prev = s;
-                    *v = (acc + comp) / (T::one() - s);
+                    a_prev = a;
+                    *v = (acc + comp) / (T::one() - a);
                 }
                 let mut cs = [T::zero(); NODES];
                 for (jj, c) in cs.iter_mut().enumerate() {
@@ -214,28 +219,28 @@ impl<T: Real> DistanceTable<T> {
         Ok(table)
     }
 
-    /// g(s) from the table, or `None` outside it (or when the table failed its error control).
+    /// g(a) from the table, or `None` outside it (or when the table failed its error control).
     #[inline]
-    pub(crate) fn eval(&self, s: T) -> Option<T> {
+    pub(crate) fn eval(&self, a: T) -> Option<T> {
         if self.valid != 1 {
             return None;
         }
-        let (p, t) = locate(s)?;
+        let (p, t) = locate(a)?;
         let a = self.monomial.get(p)?;
         Some(estrin(a, t))
     }
 
-    /// [`eval`](Self::eval) as straight-line code for the array functions: g(s) and whether s
-    /// is inside the table's common case (S_MIN ≤ s < 1 and a valid table); outside, the value
-    /// is garbage. For s inside, the same operations as `eval`, bit for bit.
+    /// [`eval`](Self::eval) as straight-line code for the array functions: g(a) and whether a
+    /// is inside the table's common case (A_MIN ≤ a < 1 and a valid table); outside, the value
+    /// is garbage. For a inside, the same operations as `eval`, bit for bit.
     #[inline(always)]
-    pub(crate) fn eval_fast(&self, s: T) -> (T, bool) {
-        let (p, t) = locate_inside(s);
+    pub(crate) fn eval_fast(&self, a: T) -> (T, bool) {
+        let (p, t) = locate_inside(a);
         let g = match self.monomial.get(p.min(PIECES - 1)) {
             Some(a) => estrin(a, t),
             None => T::nan(), // unreachable: the index is clamped below PIECES
         };
-        let inside = (self.valid == 1) & (s >= T::c(S_MIN)) & (s < T::one());
+        let inside = (self.valid == 1) & (a >= T::c(A_MIN)) & (a < T::one());
         (g, inside)
     }
 
