@@ -276,13 +276,17 @@ fn split(
     let chunk = n.div_ceil(threads);
     let body = &body;
     let spawned = std::thread::scope(|s| {
+        let mut parts = out.chunks_mut(chunk);
+        // the first part runs on the calling thread (idle otherwise: the GIL is released), the
+        // others on one new thread each
+        let own = parts.next();
         let mut handles = Vec::with_capacity(threads);
-        for (k, part) in out.chunks_mut(chunk).enumerate() {
-            let start = k * chunk;
+        for (k, part) in parts.enumerate() {
+            let start = (k + 1) * chunk;
             let h = std::thread::Builder::new().spawn_scoped(s, move || body(start, part));
             handles.push(h);
         }
-        let mut first: Option<(usize, Error)> = None;
+        let mut first: Option<(usize, Error)> = own.and_then(|part| body(0, part));
         let mut all_ran = true;
         for h in handles {
             match h.map(|h| h.join()) {
