@@ -229,7 +229,8 @@ fn is_element_error(body: Body, err: Error) -> bool {
 /// when `nan_on_error` and `keep_going(err)`; otherwise the loop stops and returns the index.
 ///
 /// Arrays of at least [`PARALLEL_MIN`] elements are split into one contiguous chunk per core
-/// (at most [`PARALLEL_MAX`]) computed on scoped threads: every element is still one core call
+/// (at most [`PARALLEL_MAX`]), the first on the calling thread and the others on scoped threads:
+/// every element is still one core call
 /// on the same inputs, so the outputs are bit for bit those of the serial loop, and the failure
 /// reported is the one of the lowest index, as serially.
 pub(crate) fn run<const N: usize>(
