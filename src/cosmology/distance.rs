@@ -25,9 +25,8 @@ impl<T: Real> Universe<T> {
                 return Ok(one_minus_a * g);
             }
         }
-        // beyond the table (or without one): quadrature in s = √a
-        let r = (T::one() + z).sqrt();
-        self.comoving_unit_quadrature(T::one() / r)
+        // beyond the table, or without one
+        self.comoving_unit_quadrature(z)
     }
 
     /// a = 1/(1+z) and 1 − a = z·a (without cancellation), from one division.
@@ -90,17 +89,33 @@ impl<T: Real> Universe<T> {
         }
     }
 
-    /// χ/D_H = ∫_s^1 2s'/q(s') ds' by the shared quadrature.
+    /// χ/D_H at z > 0 by the shared quadrature, without the table. For z < 1 as
+    /// ∫_0^(1−a) du/q(1 − u), whose upper limit 1 − a = z·a is formed without cancellation
+    /// (in s = √a the limit s = 1/√(1+z) carries an absolute rounding error of about 1e-16,
+    /// which is 1e-10 of an interval 1 − s ≈ z/2 at z = 1e-6); beyond, ∫_s^1 2s'/q(s') ds',
+    /// smooth down to a = 0.
     // out of line: its fixed-capacity interval stack would otherwise enlarge the frame of
     // every distance function that inlines it, on the table path too
     #[inline(never)]
     #[cold]
-    pub(crate) fn comoving_unit_quadrature(&self, s: T) -> Result<T> {
+    pub(crate) fn comoving_unit_quadrature(&self, z: T) -> Result<T> {
+        let tol = T::epsilon() * T::c(4.0);
+        if z < T::one() {
+            let (_, one_minus_a) = Self::a_of_redshift(z);
+            return integrate(
+                |u: T| T::one() / self.q_squared(T::one() - u).sqrt(),
+                T::zero(),
+                one_minus_a,
+                tol,
+                T::zero(),
+            );
+        }
+        let s = T::one() / (T::one() + z).sqrt();
         integrate(
             |x: T| T::c(2.0) * x / self.q_of_s(x),
             s,
             T::one(),
-            T::epsilon() * T::c(4.0),
+            tol,
             T::zero(),
         )
     }
