@@ -66,23 +66,57 @@ pub fn spectral_radiance_wavelength_array<T: Real>(
     temperature_k: T,
     out: &mut [T],
 ) -> ArrayResult {
-    let Ok(t) = positive(temperature_k, 1) else {
-        // every element fails, each with the scalar function's error (its own argument first)
-        let scalar = |x| spectral_radiance_wavelength(x, temperature_k);
-        return blockwise(wavelengths_m, out, 2, |_| (T::nan(), false), scalar);
-    };
     let num = T::c(k::FIRST_RADIATION_RADIANCE);
-    blockwise(
+    planck_array(
         wavelengths_m,
+        temperature_k,
         out,
-        2,
-        |l| {
-            let (xh, xl) = x_wavelength_pair(l, t);
-            let (v, inside) = planck_ratio_fast(num, pow5(l), xh, xl);
-            (v, inside & (l > T::zero()) & (l <= T::max_value()))
+        |t| {
+            Some(move |l| {
+                let (xh, xl) = x_wavelength_pair(l, t);
+                planck_ratio_fast(num, pow5(l), xh, xl)
+            })
         },
-        |l| spectral_radiance_wavelength(l, t),
+        spectral_radiance_wavelength,
     )
+}
+
+/// The array form of a Planck function f(x, T): `fast_at(T)` gives, for a valid T, the
+/// branch-free form of the common case (or `None` where there is none, then every element
+/// takes the scalar path); `scalar` is the function itself. Elements must be finite and
+/// positive and the result finite, as the scalar function requires; an invalid temperature
+/// fails every element with the scalar function's error (its own argument checked first).
+#[inline(always)]
+fn planck_array<T: Real, F: Fn(T) -> (T, bool)>(
+    x: &[T],
+    temperature_k: T,
+    out: &mut [T],
+    fast_at: impl FnOnce(T) -> Option<F>,
+    scalar: impl Fn(T, T) -> Result<T>,
+) -> ArrayResult {
+    let Ok(t) = positive(temperature_k, 1) else {
+        return blockwise(
+            x,
+            out,
+            2,
+            |_| (T::nan(), false),
+            |v| scalar(v, temperature_k),
+        );
+    };
+    match fast_at(t) {
+        Some(fast) => blockwise(
+            x,
+            out,
+            2,
+            |v| {
+                let (b, inside) = fast(v);
+                let valid = (v > T::zero()) & (v <= T::max_value()) & (b <= T::max_value());
+                (b, inside & valid)
+            },
+            |v| scalar(v, t),
+        ),
+        None => blockwise(x, out, 2, |_| (T::nan(), false), |v| scalar(v, t)),
+    }
 }
 
 /// Planck spectral radiance per unit frequency, B_ν = (2hν³/c²) / (e^(hν/kT) − 1).
@@ -139,28 +173,19 @@ pub fn spectral_radiance_frequency_array<T: Real>(
     temperature_k: T,
     out: &mut [T],
 ) -> ArrayResult {
-    let Ok(t) = positive(temperature_k, 1) else {
-        // every element fails, each with the scalar function's error (its own argument first)
-        let scalar = |x| spectral_radiance_frequency(x, temperature_k);
-        return blockwise(frequencies_hz, out, 2, |_| (T::nan(), false), scalar);
-    };
-    let scalar = |nu| spectral_radiance_frequency(nu, t);
-    let Some(inv) = inverse_temperature(t) else {
-        return blockwise(frequencies_hz, out, 2, |_| (T::nan(), false), scalar);
-    };
-    blockwise(
+    planck_array(
         frequencies_hz,
+        temperature_k,
         out,
-        2,
-        |nu| {
-            let (xh, xl) = x_frequency_pair_with_inverse(nu, t, inv);
-            let (v, inside) = planck_quotient_fast(two_h_nu3_over_c2(nu), xh, xl);
-            (
-                v,
-                inside & (nu > T::zero()) & (nu <= T::max_value()) & (v <= T::max_value()),
-            )
+        |t| {
+            inverse_temperature(t).map(|inv| {
+                move |nu| {
+                    let (xh, xl) = x_frequency_pair_with_inverse(nu, t, inv);
+                    planck_quotient_fast(two_h_nu3_over_c2(nu), xh, xl)
+                }
+            })
         },
-        scalar,
+        spectral_radiance_frequency,
     )
 }
 
@@ -179,28 +204,19 @@ pub fn spectral_radiance_wavenumber_array<T: Real>(
     temperature_k: T,
     out: &mut [T],
 ) -> ArrayResult {
-    let Ok(t) = positive(temperature_k, 1) else {
-        // every element fails, each with the scalar function's error (its own argument first)
-        let scalar = |x| spectral_radiance_wavenumber(x, temperature_k);
-        return blockwise(wavenumbers_per_m, out, 2, |_| (T::nan(), false), scalar);
-    };
-    let scalar = |v| spectral_radiance_wavenumber(v, t);
-    let Some(inv) = inverse_temperature(t) else {
-        return blockwise(wavenumbers_per_m, out, 2, |_| (T::nan(), false), scalar);
-    };
-    blockwise(
+    planck_array(
         wavenumbers_per_m,
+        temperature_k,
         out,
-        2,
-        |v| {
-            let (xh, xl) = x_wavenumber_pair_with_inverse(v, t, inv);
-            let (b, inside) = planck_quotient_fast(wavenumber_prefactor(v), xh, xl);
-            (
-                b,
-                inside & (v > T::zero()) & (v <= T::max_value()) & (b <= T::max_value()),
-            )
+        |t| {
+            inverse_temperature(t).map(|inv| {
+                move |v| {
+                    let (xh, xl) = x_wavenumber_pair_with_inverse(v, t, inv);
+                    planck_quotient_fast(wavenumber_prefactor(v), xh, xl)
+                }
+            })
         },
-        scalar,
+        spectral_radiance_wavenumber,
     )
 }
 
