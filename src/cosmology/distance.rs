@@ -15,7 +15,19 @@ const RAD_PER_ARCSEC: f64 = 4.848_136_811_095_36e-6;
 
 impl<T: Real> Universe<T> {
     /// χ/D_H at a validated redshift: from the table where it is valid, by quadrature otherwise.
+    /// The common case is [`comoving_unit_fast`](Self::comoving_unit_fast) itself, so the array
+    /// functions agree with the scalar ones by construction.
     pub(crate) fn comoving_unit(&self, z: T) -> Result<T> {
+        match self.comoving_unit_fast(z) {
+            (chi, true) => Ok(chi),
+            _ => self.comoving_unit_outside(z),
+        }
+    }
+
+    /// [`comoving_unit`](Self::comoving_unit) where the fast path does not apply: z = 0, z so
+    /// small that a rounds to 1, beyond the table, or a table that failed its error control.
+    #[cold]
+    fn comoving_unit_outside(&self, z: T) -> Result<T> {
         if z == T::zero() {
             return Ok(T::zero());
         }
@@ -25,7 +37,6 @@ impl<T: Real> Universe<T> {
                 return Ok(one_minus_a * g);
             }
         }
-        // beyond the table, or without one
         self.comoving_unit_quadrature(z)
     }
 
