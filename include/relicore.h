@@ -572,18 +572,21 @@ const char *relicore_version(void);
  *
  * * `wavelength_m`: wavelength λ in m, finite and > 0.
  * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: B_λ in W m⁻² sr⁻¹ m⁻¹, ≥ 0 (0 only where the true value is
- *   below the smallest subnormal).
  *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
+ * Returns W m⁻² sr⁻¹ m⁻¹, ≥ 0 (0 only where the true value is below the smallest subnormal).
  *
- * Accuracy: ≤ 4 ulp (normal results) against mpmath at 50 digits over x = 1e-10 … 1e3, T = 1 … 1e6
- * K; subnormal results correctly scaled or 0.
+ * Errors: `NonFinite(i)` for NaN or ±∞, `NonPositive(i)` for ≤ 0, i the argument position.
  *
- * Reference: M. Planck, Ann. Phys. 309 (1901) 553; forms as in Modest, Radiative Heat Transfer,
- * 3rd ed. 2013, ch. 1. Exact SI 2019 h, c, k.
+ * Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath; see the module documentation.
+ *
+ * Arguments of the C function:
+ * * `wavelength_m`: wavelength in m, > 0.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: B_lambda in W m-2 sr-1 m-1.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
  *
  * # Safety
  * `out` is NULL or points to a writable `double`.
@@ -593,706 +596,53 @@ int32_t relicore_spectral_radiance_wavelength(double wavelength_m,
                                               double *out);
 
 /**
- * Planck spectral radiance per unit frequency, B_ν = (2hν³/c²) / (e^(hν/kT) − 1).
+ * Single-precision twin of `relicore_spectral_radiance_wavelength`: the same core function
+ * computed in `float`.
  *
- * * `frequency_hz`: frequency ν in Hz, finite and > 0.
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: B_ν in W m⁻² sr⁻¹ Hz⁻¹, ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 4 ulp (normal results) against mpmath at 50 digits over x = 1e-10 … 1e3, T = 1 … 1e6
- * K; subnormal results correctly scaled or 0.
- *
- * Reference: M. Planck, Ann. Phys. 309 (1901) 553; forms as in Modest, Radiative Heat Transfer,
- * 3rd ed. 2013, ch. 1. Exact SI 2019 h, c, k.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_spectral_radiance_frequency(double frequency_hz,
-                                             double temperature_k,
-                                             double *out);
-
-/**
- * Planck spectral radiance per unit wavenumber, B_ṽ = 2hc²ṽ³ / (e^(hcṽ/kT) − 1).
- *
- * * `wavenumber_per_m`: wavenumber ṽ = 1/λ in m⁻¹ (not cm⁻¹), finite and > 0.
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: B_ṽ in W m⁻² sr⁻¹ per m⁻¹ (W m⁻¹ sr⁻¹), ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 4 ulp (normal results) against mpmath at 50 digits over x = 1e-10 … 1e3, T = 1 … 1e6
- * K; subnormal results correctly scaled or 0.
- *
- * Reference: M. Planck, Ann. Phys. 309 (1901) 553; forms as in Modest, Radiative Heat Transfer,
- * 3rd ed. 2013, ch. 1. Exact SI 2019 h, c, k.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_spectral_radiance_wavenumber(double wavenumber_per_m,
-                                              double temperature_k,
-                                              double *out);
-
-/**
- * Photon spectral radiance per unit wavelength, N_λ = (2c/λ⁴) / (e^x − 1), x = hc/(λkT).
+ * Planck spectral radiance per unit wavelength, B_λ = 2hc²/λ⁵ / (e^(hc/λkT) − 1).
  *
  * * `wavelength_m`: wavelength λ in m, finite and > 0.
  * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: N_λ in photons s⁻¹ m⁻² sr⁻¹ m⁻¹, ≥ 0.
  *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
+ * Returns W m⁻² sr⁻¹ m⁻¹, ≥ 0 (0 only where the true value is below the smallest subnormal).
  *
- * Accuracy: ≤ 4 ulp (normal results) against mpmath at 50 digits over x = 1e-10 … 1e3, T = 1 … 1e6
- * K; subnormal results correctly scaled or 0.
+ * Errors: `NonFinite(i)` for NaN or ±∞, `NonPositive(i)` for ≤ 0, i the argument position.
  *
- * Reference: M. Planck, Ann. Phys. 309 (1901) 553; forms as in Modest, Radiative Heat Transfer,
- * 3rd ed. 2013, ch. 1. Exact SI 2019 h, c, k.
+ * Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath; see the module documentation.
  *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_photon_radiance_wavelength(double wavelength_m,
-                                            double temperature_k,
-                                            double *out);
-
-/**
- * Photon spectral radiance per unit frequency, N_ν = (2ν²/c²) / (e^(hν/kT) − 1).
+ * Arguments of the C function:
+ * * `wavelength_m`: wavelength in m, > 0.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: B_lambda in W m-2 sr-1 m-1.
  *
- * * `frequency_hz`: frequency ν in Hz, finite and > 0.
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: N_ν in photons s⁻¹ m⁻² sr⁻¹ Hz⁻¹, ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 4 ulp (normal results) against mpmath at 50 digits over x = 1e-10 … 1e3, T = 1 … 1e6
- * K; subnormal results correctly scaled or 0.
- *
- * Reference: M. Planck, Ann. Phys. 309 (1901) 553; forms as in Modest, Radiative Heat Transfer,
- * 3rd ed. 2013, ch. 1. Exact SI 2019 h, c, k.
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
  *
  * # Safety
- * `out` is NULL or points to a writable `double`.
+ * `out` is NULL or points to a writable `float`.
  */
-int32_t relicore_photon_radiance_frequency(double frequency_hz,
-                                           double temperature_k,
-                                           double *out);
-
-/**
- * Photon spectral radiance per unit wavenumber, N_ṽ = 2cṽ² / (e^(hcṽ/kT) − 1).
- *
- * * `wavenumber_per_m`: wavenumber ṽ = 1/λ in m⁻¹ (not cm⁻¹), finite and > 0.
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: N_ṽ in photons s⁻¹ m⁻² sr⁻¹ per m⁻¹, ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 4 ulp (normal results) against mpmath at 50 digits over x = 1e-10 … 1e3, T = 1 … 1e6
- * K; subnormal results correctly scaled or 0.
- *
- * Reference: M. Planck, Ann. Phys. 309 (1901) 553; forms as in Modest, Radiative Heat Transfer,
- * 3rd ed. 2013, ch. 1. Exact SI 2019 h, c, k.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_photon_radiance_wavenumber(double wavenumber_per_m,
-                                            double temperature_k,
-                                            double *out);
-
-/**
- * Temperature derivative of B_λ: ∂B_λ/∂T = B_λ · (x/T) / (1 − e^−x), x = hc/(λkT).
- *
- * * `wavelength_m`: wavelength λ in m, finite and > 0.
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: ∂B_λ/∂T in W m⁻² sr⁻¹ m⁻¹ K⁻¹, ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 8 ulp (normal results) against mpmath at 50 digits.
- *
- * Reference: M. Planck, Ann. Phys. 309 (1901) 553; forms as in Modest, Radiative Heat Transfer,
- * 3rd ed. 2013, ch. 1. Exact SI 2019 h, c, k.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_radiance_temperature_derivative_wavelength(double wavelength_m,
-                                                            double temperature_k,
-                                                            double *out);
-
-/**
- * Temperature derivative of B_ν: ∂B_ν/∂T = B_ν · (x/T) / (1 − e^−x), x = hν/(kT).
- *
- * * `frequency_hz`: frequency ν in Hz, finite and > 0.
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: ∂B_ν/∂T in W m⁻² sr⁻¹ Hz⁻¹ K⁻¹, ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 8 ulp (normal results) against mpmath at 50 digits.
- *
- * Reference: M. Planck, Ann. Phys. 309 (1901) 553; forms as in Modest, Radiative Heat Transfer,
- * 3rd ed. 2013, ch. 1. Exact SI 2019 h, c, k.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_radiance_temperature_derivative_frequency(double frequency_hz,
-                                                           double temperature_k,
-                                                           double *out);
-
-/**
- * Radiant exitance of a blackbody, M = σT⁴ (Stefan-Boltzmann law).
- *
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: M in W m⁻².
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 2 ulp against mpmath (T⁴ formed to double length).
- *
- * Reference: J. Stefan (1879); L. Boltzmann (1884).
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_radiant_exitance(double temperature_k, double *out);
-
-/**
- * Photon exitance of a blackbody, M_p = 4πζ(3)k³T³/(h³c²).
- *
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: M_p in photons s⁻¹ m⁻².
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 2 ulp against mpmath.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_photon_exitance(double temperature_k, double *out);
-
-/**
- * Wavelength of the maximum of B_λ, λ_max = b/T with b = c₂/x₅, x₅ = 5(1 − e^−x₅) (Wien's
- * displacement law).
- *
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: λ_max in m.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 1 ulp against mpmath.
- *
- * Reference: W. Wien (1893); roots x = n(1 − e^−x) computed with mpmath.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_peak_wavelength(double temperature_k,
-                                 double *out);
-
-/**
- * Frequency of the maximum of B_ν, ν_max = x₃kT/h, x₃ = 3(1 − e^−x₃).
- *
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: ν_max in Hz.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 1 ulp against mpmath.
- *
- * Reference: W. Wien (1893).
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_peak_frequency(double temperature_k, double *out);
-
-/**
- * Wavenumber of the maximum of B_ṽ, ṽ_max = x₃T/c₂ (same root as the frequency form).
- *
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: ṽ_max in m⁻¹.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 1 ulp against mpmath.
- *
- * Reference: W. Wien (1893).
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_peak_wavenumber(double temperature_k, double *out);
-
-/**
- * Wavelength of the maximum of the photon radiance N_λ (and of λB_λ), c₂/(x₄T), x₄ = 4(1 − e^−x₄).
- *
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: wavelength in m.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 1 ulp against mpmath.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_photon_peak_wavelength(double temperature_k,
-                                        double *out);
-
-/**
- * Frequency of the maximum of the photon radiance N_ν, x₂kT/h, x₂ = 2(1 − e^−x₂).
- *
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: frequency in Hz.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 1 ulp against mpmath.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_photon_peak_frequency(double temperature_k, double *out);
-
-/**
- * Temperature whose B_λ peaks at the given wavelength, T = b/λ_max.
- *
- * * `wavelength_m`: wavelength λ_max of the B_λ maximum in m, finite and > 0.
- * * `out`: where the result is written: T in K.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 1 ulp against mpmath.
- *
- * Reference: W. Wien (1893).
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_temperature_from_peak_wavelength(double wavelength_m, double *out);
-
-/**
- * Temperature whose B_ν peaks at the given frequency, T = hν_max/(x₃k).
- *
- * * `frequency_hz`: frequency ν_max of the B_ν maximum in Hz, finite and > 0.
- * * `out`: where the result is written: T in K.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 1 ulp against mpmath.
- *
- * Reference: W. Wien (1893).
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_temperature_from_peak_frequency(double frequency_hz, double *out);
-
-/**
- * Fraction of the total blackbody radiance emitted between two wavelengths, F = ∫_{λ₁}^{λ₂} B_λ dλ
- * / (σT⁴/π).
- *
- * * `lower_m`: lower band edge λ₁ in m, finite and ≥ 0 (0: from the start of the spectrum).
- * * `upper_m`: upper band edge λ₂ in m, > λ₁; +∞ allowed (to the end of the spectrum).
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: F, a number in [0, 1].
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument (the upper edge
- * may be +∞); `RELICORE_ERROR_NEGATIVE` for a lower edge < 0; `RELICORE_ERROR_EMPTY_INTERVAL` for
- * upper ≤ lower; `RELICORE_ERROR_NON_POSITIVE` for T ≤ 0.
- *
- * Accuracy: within 1e-15 absolute against mpmath quadrature.
- *
- * Reference: series of Chang & Rhee 1984, Int. Commun. Heat Mass Transfer 11, 451; Widger &
- * Woodall 1976, Bull. Am. Meteorol. Soc. 57, 1217.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_band_fraction_wavelength(double lower_m,
-                                          double upper_m,
-                                          double temperature_k,
-                                          double *out);
-
-/**
- * Band radiance between two wavelengths, L = ∫_{λ₁}^{λ₂} B_λ(λ, T) dλ.
- *
- * * `lower_m`: lower band edge λ₁ in m, finite and ≥ 0 (0: from the start of the spectrum).
- * * `upper_m`: upper band edge λ₂ in m, > λ₁; +∞ allowed (to the end of the spectrum).
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: L in W m⁻² sr⁻¹.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument (the upper edge
- * may be +∞); `RELICORE_ERROR_NEGATIVE` for a lower edge < 0; `RELICORE_ERROR_EMPTY_INTERVAL` for
- * upper ≤ lower; `RELICORE_ERROR_NON_POSITIVE` for T ≤ 0.
- *
- * Accuracy: within max(1e-14·L, 1e-15·σT⁴/π) against mpmath quadrature.
- *
- * Reference: series of Chang & Rhee 1984, Int. Commun. Heat Mass Transfer 11, 451; Widger &
- * Woodall 1976, Bull. Am. Meteorol. Soc. 57, 1217.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_band_radiance_wavelength(double lower_m,
-                                          double upper_m,
-                                          double temperature_k,
-                                          double *out);
-
-/**
- * Band photon radiance between two wavelengths, ∫_{λ₁}^{λ₂} N_λ(λ, T) dλ.
- *
- * * `lower_m`: lower band edge λ₁ in m, finite and ≥ 0 (0: from the start of the spectrum).
- * * `upper_m`: upper band edge λ₂ in m, > λ₁; +∞ allowed (to the end of the spectrum).
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: photons s⁻¹ m⁻² sr⁻¹.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument (the upper edge
- * may be +∞); `RELICORE_ERROR_NEGATIVE` for a lower edge < 0; `RELICORE_ERROR_EMPTY_INTERVAL` for
- * upper ≤ lower; `RELICORE_ERROR_NON_POSITIVE` for T ≤ 0.
- *
- * Accuracy: within max(1e-14·N, 1e-15·N_total) against mpmath quadrature.
- *
- * Reference: series of Chang & Rhee 1984, Int. Commun. Heat Mass Transfer 11, 451; Widger &
- * Woodall 1976, Bull. Am. Meteorol. Soc. 57, 1217.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_band_photon_radiance_wavelength(double lower_m,
-                                                 double upper_m,
-                                                 double temperature_k,
-                                                 double *out);
-
-/**
- * Band radiance between two frequencies, L = ∫_{ν₁}^{ν₂} B_ν(ν, T) dν.
- *
- * * `lower_hz`: lower band edge ν₁ in Hz, finite and ≥ 0.
- * * `upper_hz`: upper band edge ν₂ in Hz, > ν₁; +∞ allowed.
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: L in W m⁻² sr⁻¹.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument (the upper edge
- * may be +∞); `RELICORE_ERROR_NEGATIVE` for a lower edge < 0; `RELICORE_ERROR_EMPTY_INTERVAL` for
- * upper ≤ lower; `RELICORE_ERROR_NON_POSITIVE` for T ≤ 0.
- *
- * Accuracy: within max(1e-14·L, 1e-15·σT⁴/π) against mpmath quadrature.
- *
- * Reference: series of Chang & Rhee 1984, Int. Commun. Heat Mass Transfer 11, 451; Widger &
- * Woodall 1976, Bull. Am. Meteorol. Soc. 57, 1217.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_band_radiance_frequency(double lower_hz,
-                                         double upper_hz,
-                                         double temperature_k,
-                                         double *out);
-
-/**
- * Temperature of the blackbody whose band radiance between two wavelengths equals the given value
- * (inverse in T of `relicore_band_radiance_wavelength`; safeguarded Newton).
- *
- * * `lower_m`: lower band edge λ₁ in m, finite and ≥ 0 (0: from the start of the spectrum).
- * * `upper_m`: upper band edge λ₂ in m, > λ₁; +∞ allowed (to the end of the spectrum).
- * * `radiance`: band radiance in W m⁻² sr⁻¹, finite and > 0.
- * * `out`: where the result is written: T in K.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument (the upper edge
- * may be +∞); `RELICORE_ERROR_NEGATIVE` for a lower edge < 0; `RELICORE_ERROR_EMPTY_INTERVAL` for
- * upper ≤ lower; `RELICORE_ERROR_NON_POSITIVE` for radiance ≤ 0; `RELICORE_ERROR_OUT_OF_DOMAIN`
- * when no temperature between about 1e-120 and 1e120 K reproduces it;
- * `RELICORE_ERROR_NO_CONVERGENCE` (seen only for arguments far outside physical ones).
- *
- * Accuracy: round trip within 1e-14 relative against mpmath root finding.
- *
- * Reference: series of Chang & Rhee 1984, Int. Commun. Heat Mass Transfer 11, 451; Widger &
- * Woodall 1976, Bull. Am. Meteorol. Soc. 57, 1217.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_temperature_from_band_radiance_wavelength(double lower_m,
-                                                           double upper_m,
-                                                           double radiance,
-                                                           double *out);
-
-/**
- * Brightness temperature at a wavelength: the T of the blackbody whose B_λ equals the given
- * spectral radiance, T = c₂ / (λ ln(1 + 2hc²/(λ⁵ L))).
- *
- * * `wavelength_m`: wavelength λ in m, finite and > 0.
- * * `spectral_radiance`: spectral radiance L in W m⁻² sr⁻¹ m⁻¹, finite and > 0.
- * * `out`: where the result is written: T in K.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: round trip with `relicore_spectral_radiance_wavelength` within 1e-14 relative against
- * mpmath.
- *
- * Reference: Planck's law solved for T (closed form). A real surface with emissivity < 1 is hotter
- * than its brightness temperature: do not use for safety decisions without the emissivity,
- * calibration and procedure the applicable standards require.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_brightness_temperature_wavelength(double wavelength_m,
-                                                   double spectral_radiance,
-                                                   double *out);
-
-/**
- * Brightness temperature at a frequency: T = (hν/k) / ln(1 + 2hν³/(c² L)).
- *
- * * `frequency_hz`: frequency ν in Hz, finite and > 0.
- * * `spectral_radiance`: spectral radiance L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
- * * `out`: where the result is written: T in K.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: round trip within 1e-14 relative against mpmath.
- *
- * Reference: Planck's law solved for T (closed form).
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_brightness_temperature_frequency(double frequency_hz,
-                                                  double spectral_radiance,
-                                                  double *out);
-
-/**
- * Rayleigh-Jeans temperature T_RJ = c² L / (2kν²), the radio astronomer's brightness temperature
- * (below the Planck brightness temperature by about hν/2k).
- *
- * * `frequency_hz`: frequency ν in Hz, finite and > 0.
- * * `spectral_radiance`: spectral radiance L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
- * * `out`: where the result is written: T_RJ in K.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 2 ulp against mpmath.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_rayleigh_jeans_temperature(double frequency_hz,
-                                            double spectral_radiance,
-                                            double *out);
-
-/**
- * Two-colour (ratio) temperature: the T at which ε₁B_λ(λ₁,T) / (ε₂B_λ(λ₂,T)) equals the measured
- * radiance ratio, with the exact Planck law (not Wien's approximation).
- *
- * * `wavelength_1_m`: first wavelength λ₁ in m, finite and > 0.
- * * `wavelength_2_m`: second wavelength λ₂ in m, finite, > 0 and ≠ λ₁.
- * * `radiance_ratio`: measured ratio L(λ₁)/L(λ₂), finite and > 0.
- * * `emissivity_ratio`: ε(λ₁)/ε(λ₂), finite and > 0 (1 for a gray body).
- * * `out`: where the result is written: T in K.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0; `RELICORE_ERROR_OUT_OF_DOMAIN` when the ratio
- * is one no blackbody can produce (for λ₁ < λ₂ it must lie in (0, (λ₂/λ₁)⁴)) or λ₁ = λ₂;
- * `RELICORE_ERROR_NO_CONVERGENCE` (seen only for arguments far outside physical ones).
- *
- * Accuracy: within 1e-13 relative against mpmath for |x₁ − x₂| ≥ 0.5.
- *
- * Reference: two-colour pyrometry, e.g. DeWitt & Nutter (eds.), Theory and Practice of Radiation
- * Thermometry, Wiley 1988, ch. 6.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_ratio_temperature(double wavelength_1_m,
-                                   double wavelength_2_m,
-                                   double radiance_ratio,
-                                   double emissivity_ratio,
-                                   double *out);
-
-/**
- * Thermodynamic-to-Rayleigh-Jeans conversion factor dT_RJ/dT_CMB = x²eˣ/(eˣ − 1)², x = hν/(kT₀).
- *
- * * `frequency_hz`: frequency ν in Hz, finite and > 0.
- * * `cmb_temperature_k`: CMB temperature T₀ in K, finite and > 0 (2.72548 K today, Fixsen 2009).
- * * `out`: where the result is written: a number in (0, 1).
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 8 ulp against mpmath.
- *
- * Reference: common practice in CMB analysis.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_thermodynamic_to_rayleigh_jeans_factor(double frequency_hz,
-                                                        double cmb_temperature_k,
-                                                        double *out);
-
-/**
- * dB_ν/dT at the CMB temperature, in MJy sr⁻¹ per K_CMB: converts a CMB temperature fluctuation to
- * a specific-intensity fluctuation.
- *
- * * `frequency_hz`: frequency ν in Hz, finite and > 0.
- * * `cmb_temperature_k`: CMB temperature T₀ in K, finite and > 0 (2.72548 K today, Fixsen 2009).
- * * `out`: where the result is written: MJy sr⁻¹ K⁻¹ (1e20 × the SI value in W m⁻² sr⁻¹ Hz⁻¹ K⁻¹).
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 8 ulp against mpmath.
- *
- * Reference: common practice in CMB analysis.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_kcmb_to_mjy_per_sr(double frequency_hz,
-                                    double cmb_temperature_k,
-                                    double *out);
-
-/**
- * Thermal Sunyaev-Zeldovich intensity shape g(x) = x⁴eˣ/(eˣ − 1)² (x coth(x/2) − 4), ΔI/I₀ = y
- * g(x).
- *
- * * `frequency_hz`: frequency ν in Hz, finite and > 0.
- * * `cmb_temperature_k`: CMB temperature T₀ in K, finite and > 0 (2.72548 K today, Fixsen 2009).
- * * `out`: where the result is written: g(x), a pure number (negative below the null, positive
- *   above).
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: within 1e-15·(x + 4)·x⁴eˣ/(eˣ − 1)² absolute against mpmath.
- *
- * Reference: Sunyaev & Zeldovich 1972, Comments Astrophys. Space Phys. 4, 173; Birkinshaw 1999,
- * Phys. Rep. 310, 97, eq. 81.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_thermal_sz_spectral_shape(double frequency_hz,
-                                           double cmb_temperature_k,
-                                           double *out);
-
-/**
- * Thermal Sunyaev-Zeldovich temperature shape f(x) = x coth(x/2) − 4, ΔT_CMB/T₀ = y f(x).
- *
- * * `frequency_hz`: frequency ν in Hz, finite and > 0.
- * * `cmb_temperature_k`: CMB temperature T₀ in K, finite and > 0 (2.72548 K today, Fixsen 2009).
- * * `out`: where the result is written: f(x), a pure number: −2 in the Rayleigh-Jeans limit, 0 at
- *   the null.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: within 1e-15·(x + 4) absolute against mpmath.
- *
- * Reference: Sunyaev & Zeldovich 1972, Comments Astrophys. Space Phys. 4, 173; Birkinshaw 1999,
- * Phys. Rep. 310, 97, eq. 81.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_thermal_sz_temperature_shape(double frequency_hz,
-                                              double cmb_temperature_k,
-                                              double *out);
-
-/**
- * Frequency of the thermal Sunyaev-Zeldovich null, ν₀ = x₀kT₀/h with x₀ coth(x₀/2) = 4 (x₀ =
- * 3.830016…).
- *
- * * `cmb_temperature_k`: CMB temperature T₀ in K, finite and > 0 (2.72548 K today, Fixsen 2009).
- * * `out`: where the result is written: ν₀ in Hz (217.5 GHz for T₀ = 2.72548 K).
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
- *
- * Accuracy: ≤ 2 ulp against mpmath (non-relativistic limit).
- *
- * Reference: Sunyaev & Zeldovich 1972, Comments Astrophys. Space Phys. 4, 173; Birkinshaw 1999,
- * Phys. Rep. 310, 97, eq. 81.
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_thermal_sz_null_frequency(double cmb_temperature_k,
-                                           double *out);
+int32_t relicore_spectral_radiance_wavelength_f32(float wavelength_m,
+                                                  float temperature_k,
+                                                  float *out);
 
 /**
  * Array form of `relicore_spectral_radiance_wavelength`: out[i] =
- * spectral_radiance_wavelength(x[i], temperature_k) for i < n, at one temperature.
+ * spectral_radiance_wavelength(wavelengths_m[i], temperature_k) for i < n.
  *
- * * `wavelengths_m`: n wavelengths λ in m, each finite and > 0.
+ * * `wavelengths_m`: n values of `wavelength_m`, wavelength in m, > 0.
  * * `n`: number of elements of both arrays.
- * * `temperature_k`: temperature T in K, finite and > 0 (when it is not, every element fails).
- * * `out`: n results, B_λ in W m⁻² sr⁻¹ m⁻¹.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: n results, B_lambda in W m-2 sr-1 m-1.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
- * failing element is returned (`RELICORE_ERROR_NON_FINITE`, `RELICORE_ERROR_NON_POSITIVE`).
- * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
- * of a non-NULL `out` is NaN.
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0); then every element of a
+ * non-NULL `out` is NaN.
  *
- * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
- * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
- * accuracy as there. Allocates nothing.
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation the
+ * CPU supports), with the scalar function's bits. Allocates nothing.
  *
  * # Safety
  * `wavelengths_m` is NULL or points to n readable `double`; `out` is NULL or points to n writable
@@ -1305,23 +655,103 @@ int32_t relicore_spectral_radiance_wavelength_array(const double *wavelengths_m,
                                                     double *out);
 
 /**
- * Array form of `relicore_spectral_radiance_frequency`: out[i] = spectral_radiance_frequency(x[i],
- * temperature_k) for i < n, at one temperature.
+ * Array form of `relicore_spectral_radiance_wavelength_f32`: out[i] =
+ * spectral_radiance_wavelength(wavelengths_m[i], temperature_k) for i < n.
  *
- * * `frequencies_hz`: n frequencies ν in Hz, each finite and > 0.
+ * * `wavelengths_m`: n values of `wavelength_m`, wavelength in m, > 0.
  * * `n`: number of elements of both arrays.
- * * `temperature_k`: temperature T in K, finite and > 0 (when it is not, every element fails).
- * * `out`: n results, B_ν in W m⁻² sr⁻¹ Hz⁻¹.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: n results, B_lambda in W m-2 sr-1 m-1.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
- * failing element is returned (`RELICORE_ERROR_NON_FINITE`, `RELICORE_ERROR_NON_POSITIVE`).
- * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
- * of a non-NULL `out` is NaN.
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0); then every element of a
+ * non-NULL `out` is NaN.
  *
- * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
- * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
- * accuracy as there. Allocates nothing.
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation the
+ * CPU supports), with the scalar function's bits. Allocates nothing.
+ *
+ * # Safety
+ * `wavelengths_m` is NULL or points to n readable `float`; `out` is NULL or points to n writable
+ * `float`. `out` may be the same buffer as `wavelengths_m` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_spectral_radiance_wavelength_array_f32(const float *wavelengths_m,
+                                                        size_t n,
+                                                        float temperature_k,
+                                                        float *out);
+
+/**
+ * Planck spectral radiance per unit frequency, B_ν = (2hν³/c²) / (e^(hν/kT) − 1).
+ *
+ * * `frequency_hz`: frequency ν in Hz, finite and > 0.
+ * * `temperature_k`: temperature T in K, finite and > 0.
+ *
+ * Returns W m⁻² sr⁻¹ Hz⁻¹, ≥ 0. Errors as `spectral_radiance_wavelength`.
+ * Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: B_nu in W m-2 sr-1 Hz-1.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_spectral_radiance_frequency(double frequency_hz,
+                                             double temperature_k,
+                                             double *out);
+
+/**
+ * Single-precision twin of `relicore_spectral_radiance_frequency`: the same core function computed
+ * in `float`.
+ *
+ * Planck spectral radiance per unit frequency, B_ν = (2hν³/c²) / (e^(hν/kT) − 1).
+ *
+ * * `frequency_hz`: frequency ν in Hz, finite and > 0.
+ * * `temperature_k`: temperature T in K, finite and > 0.
+ *
+ * Returns W m⁻² sr⁻¹ Hz⁻¹, ≥ 0. Errors as `spectral_radiance_wavelength`.
+ * Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: B_nu in W m-2 sr-1 Hz-1.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `float`.
+ */
+int32_t relicore_spectral_radiance_frequency_f32(float frequency_hz,
+                                                 float temperature_k,
+                                                 float *out);
+
+/**
+ * Array form of `relicore_spectral_radiance_frequency`: out[i] =
+ * spectral_radiance_frequency(frequencies_hz[i], temperature_k) for i < n.
+ *
+ * * `frequencies_hz`: n values of `frequency_hz`, frequency in Hz, > 0.
+ * * `n`: number of elements of both arrays.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: n results, B_nu in W m-2 sr-1 Hz-1.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0); then every element of a
+ * non-NULL `out` is NaN.
+ *
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation the
+ * CPU supports), with the scalar function's bits. Allocates nothing.
  *
  * # Safety
  * `frequencies_hz` is NULL or points to n readable `double`; `out` is NULL or points to n writable
@@ -1334,23 +764,103 @@ int32_t relicore_spectral_radiance_frequency_array(const double *frequencies_hz,
                                                    double *out);
 
 /**
- * Array form of `relicore_spectral_radiance_wavenumber`: out[i] =
- * spectral_radiance_wavenumber(x[i], temperature_k) for i < n, at one temperature.
+ * Array form of `relicore_spectral_radiance_frequency_f32`: out[i] =
+ * spectral_radiance_frequency(frequencies_hz[i], temperature_k) for i < n.
  *
- * * `wavenumbers_per_m`: n wavenumbers ṽ in m⁻¹, each finite and > 0.
+ * * `frequencies_hz`: n values of `frequency_hz`, frequency in Hz, > 0.
  * * `n`: number of elements of both arrays.
- * * `temperature_k`: temperature T in K, finite and > 0 (when it is not, every element fails).
- * * `out`: n results, B_ṽ in W m⁻² sr⁻¹ per m⁻¹.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: n results, B_nu in W m-2 sr-1 Hz-1.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
- * failing element is returned (`RELICORE_ERROR_NON_FINITE`, `RELICORE_ERROR_NON_POSITIVE`).
- * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
- * of a non-NULL `out` is NaN.
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0); then every element of a
+ * non-NULL `out` is NaN.
  *
- * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
- * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
- * accuracy as there. Allocates nothing.
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation the
+ * CPU supports), with the scalar function's bits. Allocates nothing.
+ *
+ * # Safety
+ * `frequencies_hz` is NULL or points to n readable `float`; `out` is NULL or points to n writable
+ * `float`. `out` may be the same buffer as `frequencies_hz` (computed in place); other overlaps
+ * give unspecified values.
+ */
+int32_t relicore_spectral_radiance_frequency_array_f32(const float *frequencies_hz,
+                                                       size_t n,
+                                                       float temperature_k,
+                                                       float *out);
+
+/**
+ * Planck spectral radiance per unit wavenumber, B_ṽ = 2hc²ṽ³ / (e^(hcṽ/kT) − 1).
+ *
+ * * `wavenumber_per_m`: wavenumber ṽ = 1/λ in m⁻¹ (not cm⁻¹), finite and > 0.
+ * * `temperature_k`: temperature T in K, finite and > 0.
+ *
+ * Returns W m⁻² sr⁻¹ per m⁻¹ (that is W m⁻¹ sr⁻¹), ≥ 0. Errors as
+ * `spectral_radiance_wavelength`. Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `wavenumber_per_m`: wavenumber in m-1, > 0.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: B_wavenumber in W m-2 sr-1 m.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_spectral_radiance_wavenumber(double wavenumber_per_m,
+                                              double temperature_k,
+                                              double *out);
+
+/**
+ * Single-precision twin of `relicore_spectral_radiance_wavenumber`: the same core function
+ * computed in `float`.
+ *
+ * Planck spectral radiance per unit wavenumber, B_ṽ = 2hc²ṽ³ / (e^(hcṽ/kT) − 1).
+ *
+ * * `wavenumber_per_m`: wavenumber ṽ = 1/λ in m⁻¹ (not cm⁻¹), finite and > 0.
+ * * `temperature_k`: temperature T in K, finite and > 0.
+ *
+ * Returns W m⁻² sr⁻¹ per m⁻¹ (that is W m⁻¹ sr⁻¹), ≥ 0. Errors as
+ * `spectral_radiance_wavelength`. Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `wavenumber_per_m`: wavenumber in m-1, > 0.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: B_wavenumber in W m-2 sr-1 m.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `float`.
+ */
+int32_t relicore_spectral_radiance_wavenumber_f32(float wavenumber_per_m,
+                                                  float temperature_k,
+                                                  float *out);
+
+/**
+ * Array form of `relicore_spectral_radiance_wavenumber`: out[i] =
+ * spectral_radiance_wavenumber(wavenumbers_per_m[i], temperature_k) for i < n.
+ *
+ * * `wavenumbers_per_m`: n values of `wavenumber_per_m`, wavenumber in m-1, > 0.
+ * * `n`: number of elements of both arrays.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: n results, B_wavenumber in W m-2 sr-1 m.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0); then every element of a
+ * non-NULL `out` is NaN.
+ *
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation the
+ * CPU supports), with the scalar function's bits. Allocates nothing.
  *
  * # Safety
  * `wavenumbers_per_m` is NULL or points to n readable `double`; `out` is NULL or points to n
@@ -1363,19 +873,69 @@ int32_t relicore_spectral_radiance_wavenumber_array(const double *wavenumbers_pe
                                                     double *out);
 
 /**
- * Array form of `relicore_photon_radiance_wavelength`: out[i] = photon_radiance_wavelength(x[i],
- * temperature_k) for i < n, at one temperature.
+ * Array form of `relicore_spectral_radiance_wavenumber_f32`: out[i] =
+ * spectral_radiance_wavenumber(wavenumbers_per_m[i], temperature_k) for i < n.
  *
- * * `wavelengths_m`: n wavelengths λ in m, each finite and > 0.
+ * * `wavenumbers_per_m`: n values of `wavenumber_per_m`, wavenumber in m-1, > 0.
  * * `n`: number of elements of both arrays.
- * * `temperature_k`: temperature T in K, finite and > 0 (when it is not, every element fails).
- * * `out`: n results, N_λ in photons s⁻¹ m⁻² sr⁻¹ m⁻¹.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: n results, B_wavenumber in W m-2 sr-1 m.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
- * failing element is returned (`RELICORE_ERROR_NON_FINITE`, `RELICORE_ERROR_NON_POSITIVE`).
- * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
- * of a non-NULL `out` is NaN.
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0); then every element of a
+ * non-NULL `out` is NaN.
+ *
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation the
+ * CPU supports), with the scalar function's bits. Allocates nothing.
+ *
+ * # Safety
+ * `wavenumbers_per_m` is NULL or points to n readable `float`; `out` is NULL or points to n
+ * writable `float`. `out` may be the same buffer as `wavenumbers_per_m` (computed in place); other
+ * overlaps give unspecified values.
+ */
+int32_t relicore_spectral_radiance_wavenumber_array_f32(const float *wavenumbers_per_m,
+                                                        size_t n,
+                                                        float temperature_k,
+                                                        float *out);
+
+/**
+ * Photon spectral radiance per unit wavelength, N_λ = B_λ/(hc/λ) = (2c/λ⁴) / (e^x − 1).
+ *
+ * * `wavelength_m`: m, > 0; `temperature_k`: K, > 0.
+ *
+ * Returns photons s⁻¹ m⁻² sr⁻¹ m⁻¹. Errors as `spectral_radiance_wavelength`.
+ * Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `wavelength_m`: wavelength in m, > 0.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: N_lambda in photons s-1 m-2 sr-1 m-1.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_photon_radiance_wavelength(double wavelength_m, double temperature_k, double *out);
+
+/**
+ * Array form of `relicore_photon_radiance_wavelength`: out[i] =
+ * photon_radiance_wavelength(wavelengths_m[i], temperature_k) for i < n.
+ *
+ * * `wavelengths_m`: n values of `wavelength_m`, wavelength in m, > 0.
+ * * `n`: number of elements of both arrays.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: n results, N_lambda in photons s-1 m-2 sr-1 m-1.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0); then every element of a
+ * non-NULL `out` is NaN.
  *
  * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
  * accuracy as there. Allocates nothing.
@@ -1391,19 +951,43 @@ int32_t relicore_photon_radiance_wavelength_array(const double *wavelengths_m,
                                                   double *out);
 
 /**
- * Array form of `relicore_photon_radiance_frequency`: out[i] = photon_radiance_frequency(x[i],
- * temperature_k) for i < n, at one temperature.
+ * Photon spectral radiance per unit frequency, N_ν = B_ν/(hν) = (2ν²/c²) / (e^(hν/kT) − 1).
  *
- * * `frequencies_hz`: n frequencies ν in Hz, each finite and > 0.
+ * * `frequency_hz`: Hz, > 0; `temperature_k`: K, > 0.
+ *
+ * Returns photons s⁻¹ m⁻² sr⁻¹ Hz⁻¹. Errors as `spectral_radiance_wavelength`.
+ * Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: N_nu in photons s-1 m-2 sr-1 Hz-1.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_photon_radiance_frequency(double frequency_hz,
+                                           double temperature_k,
+                                           double *out);
+
+/**
+ * Array form of `relicore_photon_radiance_frequency`: out[i] =
+ * photon_radiance_frequency(frequencies_hz[i], temperature_k) for i < n.
+ *
+ * * `frequencies_hz`: n values of `frequency_hz`, frequency in Hz, > 0.
  * * `n`: number of elements of both arrays.
- * * `temperature_k`: temperature T in K, finite and > 0 (when it is not, every element fails).
- * * `out`: n results, N_ν in photons s⁻¹ m⁻² sr⁻¹ Hz⁻¹.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: n results, N_nu in photons s-1 m-2 sr-1 Hz-1.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
- * failing element is returned (`RELICORE_ERROR_NON_FINITE`, `RELICORE_ERROR_NON_POSITIVE`).
- * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
- * of a non-NULL `out` is NaN.
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0); then every element of a
+ * non-NULL `out` is NaN.
  *
  * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
  * accuracy as there. Allocates nothing.
@@ -1419,19 +1003,43 @@ int32_t relicore_photon_radiance_frequency_array(const double *frequencies_hz,
                                                  double *out);
 
 /**
- * Array form of `relicore_photon_radiance_wavenumber`: out[i] = photon_radiance_wavenumber(x[i],
- * temperature_k) for i < n, at one temperature.
+ * Photon spectral radiance per unit wavenumber, N_ṽ = 2cṽ² / (e^(hcṽ/kT) − 1).
  *
- * * `wavenumbers_per_m`: n wavenumbers ṽ in m⁻¹, each finite and > 0.
+ * * `wavenumber_per_m`: m⁻¹, > 0; `temperature_k`: K, > 0.
+ *
+ * Returns photons s⁻¹ m⁻² sr⁻¹ per m⁻¹. Errors as `spectral_radiance_wavelength`.
+ * Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `wavenumber_per_m`: wavenumber in m-1, > 0.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: photons s-1 m-2 sr-1 m.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_photon_radiance_wavenumber(double wavenumber_per_m,
+                                            double temperature_k,
+                                            double *out);
+
+/**
+ * Array form of `relicore_photon_radiance_wavenumber`: out[i] =
+ * photon_radiance_wavenumber(wavenumbers_per_m[i], temperature_k) for i < n.
+ *
+ * * `wavenumbers_per_m`: n values of `wavenumber_per_m`, wavenumber in m-1, > 0.
  * * `n`: number of elements of both arrays.
- * * `temperature_k`: temperature T in K, finite and > 0 (when it is not, every element fails).
- * * `out`: n results, N_ṽ in photons s⁻¹ m⁻² sr⁻¹ per m⁻¹.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: n results, photons s-1 m-2 sr-1 m.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
- * failing element is returned (`RELICORE_ERROR_NON_FINITE`, `RELICORE_ERROR_NON_POSITIVE`).
- * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
- * of a non-NULL `out` is NaN.
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0); then every element of a
+ * non-NULL `out` is NaN.
  *
  * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
  * accuracy as there. Allocates nothing.
@@ -1447,19 +1055,43 @@ int32_t relicore_photon_radiance_wavenumber_array(const double *wavenumbers_per_
                                                   double *out);
 
 /**
- * Array form of `relicore_radiance_temperature_derivative_wavelength`: out[i] =
- * radiance_temperature_derivative_wavelength(x[i], temperature_k) for i < n, at one temperature.
+ * Temperature derivative of B_λ: ∂B_λ/∂T = B_λ · (x/T) / (1 − e^−x), x = hc/(λkT).
  *
- * * `wavelengths_m`: n wavelengths λ in m, each finite and > 0.
+ * * `wavelength_m`: m, > 0; `temperature_k`: K, > 0.
+ *
+ * Returns W m⁻² sr⁻¹ m⁻¹ K⁻¹, ≥ 0. Errors as `spectral_radiance_wavelength`.
+ * Accuracy: ≤ 8 ulp (`f64`, normal results) against mpmath (three roundings more than B_λ).
+ *
+ * Arguments of the C function:
+ * * `wavelength_m`: wavelength in m, > 0.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: dB_lambda/dT in W m-2 sr-1 m-1 K-1.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_radiance_temperature_derivative_wavelength(double wavelength_m,
+                                                            double temperature_k,
+                                                            double *out);
+
+/**
+ * Array form of `relicore_radiance_temperature_derivative_wavelength`: out[i] =
+ * radiance_temperature_derivative_wavelength(wavelengths_m[i], temperature_k) for i < n.
+ *
+ * * `wavelengths_m`: n values of `wavelength_m`, wavelength in m, > 0.
  * * `n`: number of elements of both arrays.
- * * `temperature_k`: temperature T in K, finite and > 0 (when it is not, every element fails).
- * * `out`: n results, ∂B_λ/∂T in W m⁻² sr⁻¹ m⁻¹ K⁻¹.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: n results, dB_lambda/dT in W m-2 sr-1 m-1 K-1.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
- * failing element is returned (`RELICORE_ERROR_NON_FINITE`, `RELICORE_ERROR_NON_POSITIVE`).
- * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
- * of a non-NULL `out` is NaN.
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0); then every element of a
+ * non-NULL `out` is NaN.
  *
  * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
  * accuracy as there. Allocates nothing.
@@ -1475,19 +1107,43 @@ int32_t relicore_radiance_temperature_derivative_wavelength_array(const double *
                                                                   double *out);
 
 /**
- * Array form of `relicore_radiance_temperature_derivative_frequency`: out[i] =
- * radiance_temperature_derivative_frequency(x[i], temperature_k) for i < n, at one temperature.
+ * Temperature derivative of B_ν: ∂B_ν/∂T = B_ν · (x/T) / (1 − e^−x), x = hν/(kT).
  *
- * * `frequencies_hz`: n frequencies ν in Hz, each finite and > 0.
+ * * `frequency_hz`: Hz, > 0; `temperature_k`: K, > 0.
+ *
+ * Returns W m⁻² sr⁻¹ Hz⁻¹ K⁻¹, ≥ 0. Errors as `spectral_radiance_wavelength`.
+ * Accuracy: ≤ 8 ulp (`f64`, normal results) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: dB_nu/dT in W m-2 sr-1 Hz-1 K-1.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_radiance_temperature_derivative_frequency(double frequency_hz,
+                                                           double temperature_k,
+                                                           double *out);
+
+/**
+ * Array form of `relicore_radiance_temperature_derivative_frequency`: out[i] =
+ * radiance_temperature_derivative_frequency(frequencies_hz[i], temperature_k) for i < n.
+ *
+ * * `frequencies_hz`: n values of `frequency_hz`, frequency in Hz, > 0.
  * * `n`: number of elements of both arrays.
- * * `temperature_k`: temperature T in K, finite and > 0 (when it is not, every element fails).
- * * `out`: n results, ∂B_ν/∂T in W m⁻² sr⁻¹ Hz⁻¹ K⁻¹.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: n results, dB_nu/dT in W m-2 sr-1 Hz-1 K-1.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
- * failing element is returned (`RELICORE_ERROR_NON_FINITE`, `RELICORE_ERROR_NON_POSITIVE`).
- * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
- * of a non-NULL `out` is NaN.
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0); then every element of a
+ * non-NULL `out` is NaN.
  *
  * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
  * accuracy as there. Allocates nothing.
@@ -1503,241 +1159,266 @@ int32_t relicore_radiance_temperature_derivative_frequency_array(const double *f
                                                                  double *out);
 
 /**
- * Array form of `relicore_brightness_temperature_wavelength`: out[i] =
- * brightness_temperature_wavelength(wavelength_m, spectral_radiance[i]) for i < n, at one spectral
- * coordinate.
+ * Radiant exitance of a blackbody, M = σT⁴ (Stefan 1879, Boltzmann 1884).
  *
- * * `wavelength_m`: wavelength λ in m, finite and > 0 (when it is not, every element fails).
- * * `spectral_radiance`: n spectral radiances L in W m⁻² sr⁻¹ m⁻¹, each finite and > 0.
- * * `n`: number of elements of both arrays.
- * * `out`: n brightness temperatures in K.
+ * * `temperature_k`: K, finite and > 0.
  *
- * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
- * some elements fail, those outputs are NaN, the others are computed, and the code of the first
- * failing element is returned (`RELICORE_ERROR_NON_FINITE`, `RELICORE_ERROR_NON_POSITIVE`).
- * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
- * of a non-NULL `out` is NaN.
+ * Returns W m⁻². Errors: `NonFinite(0)`, `NonPositive(0)`.
+ * Accuracy: ≤ 2 ulp (`f64`) against mpmath (T⁴ is formed to double length).
  *
- * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
- * accuracy as there. Allocates nothing.
+ * Arguments of the C function:
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: W m-2.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
  *
  * # Safety
- * `spectral_radiance` is NULL or points to n readable `double`; `out` is NULL or points to n
- * writable `double`. `out` may be the same buffer as `spectral_radiance`; other overlaps give
- * unspecified values.
+ * `out` is NULL or points to a writable `double`.
  */
-int32_t relicore_brightness_temperature_wavelength_array(double wavelength_m,
-                                                         const double *spectral_radiance,
-                                                         size_t n,
-                                                         double *out);
+int32_t relicore_radiant_exitance(double temperature_k, double *out);
 
 /**
- * Array form of `relicore_brightness_temperature_frequency`: out[i] =
- * brightness_temperature_frequency(frequency_hz, spectral_radiance[i]) for i < n, at one spectral
- * coordinate.
+ * Photon exitance of a blackbody, M_p = 4πζ(3)k³T³/(h³c²).
  *
- * * `frequency_hz`: frequency ν in Hz, finite and > 0 (when it is not, every element fails).
- * * `spectral_radiance`: n spectral radiances L in W m⁻² sr⁻¹ Hz⁻¹, each finite and > 0.
- * * `n`: number of elements of both arrays.
- * * `out`: n brightness temperatures in K.
+ * * `temperature_k`: K, finite and > 0.
  *
- * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
- * some elements fail, those outputs are NaN, the others are computed, and the code of the first
- * failing element is returned (`RELICORE_ERROR_NON_FINITE`, `RELICORE_ERROR_NON_POSITIVE`).
- * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
- * of a non-NULL `out` is NaN.
+ * Returns photons s⁻¹ m⁻². Errors: `NonFinite(0)`, `NonPositive(0)`.
+ * Accuracy: ≤ 2 ulp (`f64`) against mpmath.
  *
- * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
- * accuracy as there. Allocates nothing.
+ * Arguments of the C function:
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: photons s-1 m-2.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
  *
  * # Safety
- * `spectral_radiance` is NULL or points to n readable `double`; `out` is NULL or points to n
- * writable `double`. `out` may be the same buffer as `spectral_radiance`; other overlaps give
- * unspecified values.
+ * `out` is NULL or points to a writable `double`.
  */
-int32_t relicore_brightness_temperature_frequency_array(double frequency_hz,
-                                                        const double *spectral_radiance,
-                                                        size_t n,
-                                                        double *out);
+int32_t relicore_photon_exitance(double temperature_k, double *out);
 
 /**
- * Array form of `relicore_spectral_radiance_wavelength_f32`: out[i] =
- * spectral_radiance_wavelength(x[i], temperature_k) for i < n, at one temperature.
+ * Wavelength of the maximum of B_λ, λ_max = b/T with b = c₂/x₅ (Wien's displacement law).
  *
- * * `wavelengths_m`: n wavelengths λ in m, each finite and > 0.
- * * `n`: number of elements of both arrays.
- * * `temperature_k`: temperature T in K, finite and > 0 (when it is not, every element fails).
- * * `out`: n results, B_λ in W m⁻² sr⁻¹ m⁻¹.
+ * * `temperature_k`: K, > 0. Returns m. Errors: `NonFinite(0)`, `NonPositive(0)`.
  *
- * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
- * some elements fail, those outputs are NaN, the others are computed, and the code of the first
- * failing element is returned (`RELICORE_ERROR_NON_FINITE`, `RELICORE_ERROR_NON_POSITIVE`).
- * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
- * of a non-NULL `out` is NaN.
+ * Accuracy: ≤ 1 ulp (`f64`) against mpmath.
  *
- * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
- * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
- * accuracy as there. Allocates nothing.
+ * Arguments of the C function:
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: m.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
  *
  * # Safety
- * `wavelengths_m` is NULL or points to n readable `float`; `out` is NULL or points to n writable
- * `float`. `out` may be the same buffer as `wavelengths_m` (computed in place); other overlaps
- * give unspecified values.
+ * `out` is NULL or points to a writable `double`.
  */
-int32_t relicore_spectral_radiance_wavelength_array_f32(const float *wavelengths_m,
-                                                        size_t n,
-                                                        float temperature_k,
-                                                        float *out);
+int32_t relicore_peak_wavelength(double temperature_k, double *out);
 
 /**
- * Array form of `relicore_spectral_radiance_frequency_f32`: out[i] =
- * spectral_radiance_frequency(x[i], temperature_k) for i < n, at one temperature.
+ * Frequency of the maximum of B_ν, ν_max = x₃kT/h.
  *
- * * `frequencies_hz`: n frequencies ν in Hz, each finite and > 0.
- * * `n`: number of elements of both arrays.
- * * `temperature_k`: temperature T in K, finite and > 0 (when it is not, every element fails).
- * * `out`: n results, B_ν in W m⁻² sr⁻¹ Hz⁻¹.
+ * * `temperature_k`: K, > 0. Returns Hz. Errors: `NonFinite(0)`, `NonPositive(0)`.
  *
- * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
- * some elements fail, those outputs are NaN, the others are computed, and the code of the first
- * failing element is returned (`RELICORE_ERROR_NON_FINITE`, `RELICORE_ERROR_NON_POSITIVE`).
- * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
- * of a non-NULL `out` is NaN.
+ * Accuracy: ≤ 1 ulp (`f64`) against mpmath.
  *
- * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
- * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
- * accuracy as there. Allocates nothing.
+ * Arguments of the C function:
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: Hz.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
  *
  * # Safety
- * `frequencies_hz` is NULL or points to n readable `float`; `out` is NULL or points to n writable
- * `float`. `out` may be the same buffer as `frequencies_hz` (computed in place); other overlaps
- * give unspecified values.
+ * `out` is NULL or points to a writable `double`.
  */
-int32_t relicore_spectral_radiance_frequency_array_f32(const float *frequencies_hz,
-                                                       size_t n,
-                                                       float temperature_k,
-                                                       float *out);
+int32_t relicore_peak_frequency(double temperature_k, double *out);
 
 /**
- * Array form of `relicore_spectral_radiance_wavenumber_f32`: out[i] =
- * spectral_radiance_wavenumber(x[i], temperature_k) for i < n, at one temperature.
+ * Wavenumber of the maximum of B_ṽ, ṽ_max = x₃T/c₂ (same x as the frequency form).
  *
- * * `wavenumbers_per_m`: n wavenumbers ṽ in m⁻¹, each finite and > 0.
- * * `n`: number of elements of both arrays.
- * * `temperature_k`: temperature T in K, finite and > 0 (when it is not, every element fails).
- * * `out`: n results, B_ṽ in W m⁻² sr⁻¹ per m⁻¹.
+ * * `temperature_k`: K, > 0. Returns m⁻¹. Errors: `NonFinite(0)`, `NonPositive(0)`.
  *
- * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
- * some elements fail, those outputs are NaN, the others are computed, and the code of the first
- * failing element is returned (`RELICORE_ERROR_NON_FINITE`, `RELICORE_ERROR_NON_POSITIVE`).
- * `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL (even for n = 0); then every output
- * of a non-NULL `out` is NaN.
+ * Accuracy: ≤ 1 ulp (`f64`) against mpmath.
  *
- * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
- * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
- * accuracy as there. Allocates nothing.
+ * Arguments of the C function:
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: m-1.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
  *
  * # Safety
- * `wavenumbers_per_m` is NULL or points to n readable `float`; `out` is NULL or points to n
- * writable `float`. `out` may be the same buffer as `wavenumbers_per_m` (computed in place); other
- * overlaps give unspecified values.
+ * `out` is NULL or points to a writable `double`.
  */
-int32_t relicore_spectral_radiance_wavenumber_array_f32(const float *wavenumbers_per_m,
-                                                        size_t n,
-                                                        float temperature_k,
-                                                        float *out);
+int32_t relicore_peak_wavenumber(double temperature_k, double *out);
 
 /**
- * `float` twin of `relicore_spectral_radiance_wavelength`. Planck spectral radiance per unit
- * wavelength, B_λ = 2hc²/λ⁵ / (e^(hc/λkT) − 1).
+ * Wavelength of the maximum of the photon radiance N_λ (and of λB_λ), c₂/(x₄T).
  *
- * * `wavelength_m`: wavelength λ in m, finite and > 0.
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: B_λ in W m⁻² sr⁻¹ m⁻¹, ≥ 0 (0 only where the true value is
- *   below the smallest subnormal).
+ * * `temperature_k`: K, > 0. Returns m. Errors: `NonFinite(0)`, `NonPositive(0)`.
  *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
+ * Accuracy: ≤ 1 ulp (`f64`) against mpmath.
  *
- * Accuracy: ≤ 4 f32 ulp against mpmath for wavelengths 2e-7 … 1e-1 m (normal results).
+ * Arguments of the C function:
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: m.
  *
- * Reference: M. Planck, Ann. Phys. 309 (1901) 553; forms as in Modest, Radiative Heat Transfer,
- * 3rd ed. 2013, ch. 1. Exact SI 2019 h, c, k.
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
  *
  * # Safety
- * `out` is NULL or points to a writable `float`.
+ * `out` is NULL or points to a writable `double`.
  */
-int32_t relicore_spectral_radiance_wavelength_f32(float wavelength_m,
-                                                  float temperature_k,
-                                                  float *out);
+int32_t relicore_photon_peak_wavelength(double temperature_k, double *out);
 
 /**
- * `float` twin of `relicore_spectral_radiance_frequency`. Planck spectral radiance per unit
- * frequency, B_ν = (2hν³/c²) / (e^(hν/kT) − 1).
+ * Frequency of the maximum of the photon radiance N_ν, x₂kT/h.
  *
- * * `frequency_hz`: frequency ν in Hz, finite and > 0.
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: B_ν in W m⁻² sr⁻¹ Hz⁻¹, ≥ 0.
+ * * `temperature_k`: K, > 0. Returns Hz. Errors: `NonFinite(0)`, `NonPositive(0)`.
  *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
+ * Accuracy: ≤ 1 ulp (`f64`) against mpmath.
  *
- * Accuracy: ≤ 4 f32 ulp against mpmath for frequencies 1e9 … 3e14 Hz (normal results).
+ * Arguments of the C function:
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: Hz.
  *
- * Reference: M. Planck, Ann. Phys. 309 (1901) 553; forms as in Modest, Radiative Heat Transfer,
- * 3rd ed. 2013, ch. 1. Exact SI 2019 h, c, k.
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
  *
  * # Safety
- * `out` is NULL or points to a writable `float`.
+ * `out` is NULL or points to a writable `double`.
  */
-int32_t relicore_spectral_radiance_frequency_f32(float frequency_hz,
-                                                 float temperature_k,
-                                                 float *out);
+int32_t relicore_photon_peak_frequency(double temperature_k, double *out);
 
 /**
- * `float` twin of `relicore_spectral_radiance_wavenumber`. Planck spectral radiance per unit
- * wavenumber, B_ṽ = 2hc²ṽ³ / (e^(hcṽ/kT) − 1).
+ * Temperature whose B_λ peaks at the given wavelength, T = b/λ_max.
  *
- * * `wavenumber_per_m`: wavenumber ṽ = 1/λ in m⁻¹ (not cm⁻¹), finite and > 0.
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: B_ṽ in W m⁻² sr⁻¹ per m⁻¹ (W m⁻¹ sr⁻¹), ≥ 0.
+ * * `wavelength_m`: m, > 0. Returns K. Errors: `NonFinite(0)`, `NonPositive(0)`.
  *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
+ * Accuracy: ≤ 1 ulp (`f64`) against mpmath.
  *
- * Accuracy: ≤ 4 f32 ulp against mpmath for wavenumbers 1e2 … 5e6 m⁻¹ (normal results).
+ * Arguments of the C function:
+ * * `wavelength_m`: wavelength of the B_lambda peak in m, > 0.
+ * * `out`: where the result is written: K.
  *
- * Reference: M. Planck, Ann. Phys. 309 (1901) 553; forms as in Modest, Radiative Heat Transfer,
- * 3rd ed. 2013, ch. 1. Exact SI 2019 h, c, k.
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
  *
  * # Safety
- * `out` is NULL or points to a writable `float`.
+ * `out` is NULL or points to a writable `double`.
  */
-int32_t relicore_spectral_radiance_wavenumber_f32(float wavenumber_per_m,
-                                                  float temperature_k,
-                                                  float *out);
+int32_t relicore_temperature_from_peak_wavelength(double wavelength_m, double *out);
 
 /**
- * `float` twin of `relicore_band_radiance_wavelength`. Band radiance between two wavelengths, L =
- * ∫_{λ₁}^{λ₂} B_λ(λ, T) dλ.
+ * Temperature whose B_ν peaks at the given frequency, T = hν_max/(x₃k).
  *
- * * `lower_m`: lower band edge λ₁ in m, finite and ≥ 0 (0: from the start of the spectrum).
- * * `upper_m`: upper band edge λ₂ in m, > λ₁; +∞ allowed (to the end of the spectrum).
- * * `temperature_k`: temperature T in K, finite and > 0.
- * * `out`: where the result is written: L in W m⁻² sr⁻¹.
+ * * `frequency_hz`: Hz, > 0. Returns K. Errors: `NonFinite(0)`, `NonPositive(0)`.
  *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument (the upper edge
- * may be +∞); `RELICORE_ERROR_NEGATIVE` for a lower edge < 0; `RELICORE_ERROR_EMPTY_INTERVAL` for
- * upper ≤ lower; `RELICORE_ERROR_NON_POSITIVE` for T ≤ 0.
+ * Accuracy: ≤ 1 ulp (`f64`) against mpmath.
  *
- * Accuracy: within 2e-6 relative against mpmath quadrature.
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency of the B_nu peak in Hz, > 0.
+ * * `out`: where the result is written: K.
  *
- * Reference: series of Chang & Rhee 1984, Int. Commun. Heat Mass Transfer 11, 451; Widger &
- * Woodall 1976, Bull. Am. Meteorol. Soc. 57, 1217.
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_temperature_from_peak_frequency(double frequency_hz, double *out);
+
+/**
+ * Fraction of the total blackbody radiance emitted between two wavelengths,
+ * F = ∫_{λ₁}^{λ₂} B_λ dλ / (σT⁴/π).
+ *
+ * * `lower_m`: λ₁ in m, finite and ≥ 0 (0 means from the start of the spectrum).
+ * * `upper_m`: λ₂ in m, > λ₁; +∞ allowed (to the end of the spectrum).
+ * * `temperature_k`: K, finite and > 0.
+ *
+ * Returns a number in [0, 1]. Errors: `NonFinite(i)`, `Negative(0)` for λ₁ < 0,
+ * `EmptyInterval(0)` for λ₂ ≤ λ₁, `NonPositive(2)` for T ≤ 0.
+ *
+ * Accuracy: within 1e-15 absolute (`f64`) against mpmath quadrature; see the module docs.
+ *
+ * Arguments of the C function:
+ * * `lower_m`: lower band edge in m, >= 0.
+ * * `upper_m`: upper band edge in m, > lower_m, may be +Inf.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: fraction in [0, 1].
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_band_fraction_wavelength(double lower_m,
+                                          double upper_m,
+                                          double temperature_k,
+                                          double *out);
+
+/**
+ * Band radiance between two wavelengths, L = ∫_{λ₁}^{λ₂} B_λ(λ, T) dλ.
+ *
+ * * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
+ * * `temperature_k`: K, > 0.
+ *
+ * Returns W m⁻² sr⁻¹. Errors as `band_fraction_wavelength`.
+ * Accuracy: within max(1e-14·L, 1e-15·σT⁴/π) (`f64`) against mpmath quadrature.
+ *
+ * Arguments of the C function:
+ * * `lower_m`: lower band edge in m, >= 0.
+ * * `upper_m`: upper band edge in m, > lower_m, may be +Inf.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: W m-2 sr-1.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_band_radiance_wavelength(double lower_m,
+                                          double upper_m,
+                                          double temperature_k,
+                                          double *out);
+
+/**
+ * Single-precision twin of `relicore_band_radiance_wavelength`: the same core function computed in
+ * `float`.
+ *
+ * Band radiance between two wavelengths, L = ∫_{λ₁}^{λ₂} B_λ(λ, T) dλ.
+ *
+ * * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
+ * * `temperature_k`: K, > 0.
+ *
+ * Returns W m⁻² sr⁻¹. Errors as `band_fraction_wavelength`.
+ * Accuracy: within max(1e-14·L, 1e-15·σT⁴/π) (`f64`) against mpmath quadrature.
+ *
+ * Arguments of the C function:
+ * * `lower_m`: lower band edge in m, >= 0.
+ * * `upper_m`: upper band edge in m, > lower_m, may be +Inf.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: W m-2 sr-1.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
  *
  * # Safety
  * `out` is NULL or points to a writable `float`.
@@ -1748,23 +1429,144 @@ int32_t relicore_band_radiance_wavelength_f32(float lower_m,
                                               float *out);
 
 /**
- * `float` twin of `relicore_brightness_temperature_wavelength`. Brightness temperature at a
- * wavelength: the T of the blackbody whose B_λ equals the given spectral radiance, T = c₂ / (λ
- * ln(1 + 2hc²/(λ⁵ L))).
+ * Band photon radiance between two wavelengths, ∫_{λ₁}^{λ₂} N_λ(λ, T) dλ.
  *
- * * `wavelength_m`: wavelength λ in m, finite and > 0.
- * * `spectral_radiance`: spectral radiance L in W m⁻² sr⁻¹ m⁻¹, finite and > 0.
- * * `out`: where the result is written: T in K.
+ * * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
+ * * `temperature_k`: K, > 0.
  *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
+ * Returns photons s⁻¹ m⁻² sr⁻¹. Errors as `band_fraction_wavelength`.
+ * Accuracy: within max(1e-14·N, 1e-15·N_total) (`f64`) against mpmath quadrature.
  *
- * Accuracy: ≤ 4 f32 ulp against mpmath (normal-range radiances).
+ * Arguments of the C function:
+ * * `lower_m`: lower band edge in m, >= 0.
+ * * `upper_m`: upper band edge in m, > lower_m, may be +Inf.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: photons s-1 m-2 sr-1.
  *
- * Reference: Planck's law solved for T (closed form). A real surface with emissivity < 1 is hotter
- * than its brightness temperature: do not use for safety decisions without the emissivity,
- * calibration and procedure the applicable standards require.
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_band_photon_radiance_wavelength(double lower_m,
+                                                 double upper_m,
+                                                 double temperature_k,
+                                                 double *out);
+
+/**
+ * Band radiance between two frequencies, L = ∫_{ν₁}^{ν₂} B_ν(ν, T) dν.
+ *
+ * * `lower_hz`: ν₁ in Hz, finite and ≥ 0; `upper_hz`: ν₂ > ν₁, +∞ allowed.
+ * * `temperature_k`: K, > 0.
+ *
+ * Returns W m⁻² sr⁻¹. Errors as `band_fraction_wavelength`.
+ * Accuracy: within max(1e-14·L, 1e-15·σT⁴/π) (`f64`) against mpmath quadrature.
+ *
+ * Arguments of the C function:
+ * * `lower_hz`: lower band edge in Hz, >= 0.
+ * * `upper_hz`: upper band edge in Hz, > lower_hz, may be +Inf.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: W m-2 sr-1.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_band_radiance_frequency(double lower_hz,
+                                         double upper_hz,
+                                         double temperature_k,
+                                         double *out);
+
+/**
+ * Temperature of the blackbody whose band radiance between two wavelengths equals the given
+ * value: the inverse in T of `band_radiance_wavelength`.
+ *
+ * * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
+ * * `radiance`: band radiance in W m⁻² sr⁻¹, finite and > 0.
+ *
+ * Returns K. Errors as `band_fraction_wavelength`, `NonPositive(2)` for radiance ≤ 0,
+ * `OutOfDomain(2)` when no temperature between about 1e-120 and 1e120 K reproduces it,
+ * `NoConvergence` (seen only for arguments far outside physical ones).
+ *
+ * Method: safeguarded Newton on ln L(T) with the exact derivative
+ * dL/dT = (4L + K T⁴ (x_a f(x_a) − x_b f(x_b)))/T, f(t) = t³/(eᵗ−1), started from the
+ * brightness temperature of the mean spectral radiance at the band centre.
+ * Accuracy: round trip within 1e-14 relative (`f64`) against mpmath root finding.
+ *
+ * Arguments of the C function:
+ * * `lower_m`: lower band edge in m, >= 0.
+ * * `upper_m`: upper band edge in m, > lower_m, may be +Inf.
+ * * `radiance`: band radiance in W m-2 sr-1, > 0.
+ * * `out`: where the result is written: K.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_temperature_from_band_radiance_wavelength(double lower_m,
+                                                           double upper_m,
+                                                           double radiance,
+                                                           double *out);
+
+/**
+ * Brightness temperature at a wavelength: the T of the blackbody whose B_λ equals the given
+ * spectral radiance, T = c₂ / (λ ln(1 + 2hc²/(λ⁵ L))).
+ *
+ * * `wavelength_m`: m, finite and > 0.
+ * * `spectral_radiance`: L in W m⁻² sr⁻¹ m⁻¹, finite and > 0.
+ *
+ * Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
+ * Accuracy: round trip with `spectral_radiance_wavelength`
+ * within 1e-14 relative (`f64`) against mpmath.
+ * Reference: Planck's law solved for T (closed form).
+ *
+ * Arguments of the C function:
+ * * `wavelength_m`: wavelength in m, > 0.
+ * * `spectral_radiance`: B_lambda in W m-2 sr-1 m-1, > 0.
+ * * `out`: where the result is written: K.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_brightness_temperature_wavelength(double wavelength_m,
+                                                   double spectral_radiance,
+                                                   double *out);
+
+/**
+ * Single-precision twin of `relicore_brightness_temperature_wavelength`: the same core function
+ * computed in `float`.
+ *
+ * Brightness temperature at a wavelength: the T of the blackbody whose B_λ equals the given
+ * spectral radiance, T = c₂ / (λ ln(1 + 2hc²/(λ⁵ L))).
+ *
+ * * `wavelength_m`: m, finite and > 0.
+ * * `spectral_radiance`: L in W m⁻² sr⁻¹ m⁻¹, finite and > 0.
+ *
+ * Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
+ * Accuracy: round trip with `spectral_radiance_wavelength`
+ * within 1e-14 relative (`f64`) against mpmath.
+ * Reference: Planck's law solved for T (closed form).
+ *
+ * Arguments of the C function:
+ * * `wavelength_m`: wavelength in m, > 0.
+ * * `spectral_radiance`: B_lambda in W m-2 sr-1 m-1, > 0.
+ * * `out`: where the result is written: K.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
  *
  * # Safety
  * `out` is NULL or points to a writable `float`.
@@ -1774,20 +1576,78 @@ int32_t relicore_brightness_temperature_wavelength_f32(float wavelength_m,
                                                        float *out);
 
 /**
- * `float` twin of `relicore_brightness_temperature_frequency`. Brightness temperature at a
- * frequency: T = (hν/k) / ln(1 + 2hν³/(c² L)).
+ * Array form of `relicore_brightness_temperature_wavelength`: out[i] =
+ * brightness_temperature_wavelength(wavelength_m, spectral_radiance[i]) for i < n.
  *
- * * `frequency_hz`: frequency ν in Hz, finite and > 0.
- * * `spectral_radiance`: spectral radiance L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
- * * `out`: where the result is written: T in K.
+ * * `wavelength_m`: wavelength in m, > 0.
+ * * `spectral_radiance`: n values of `spectral_radiance`, B_lambda in W m-2 sr-1 m-1, > 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, K.
  *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0.
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0); then every element of a
+ * non-NULL `out` is NaN.
  *
- * Accuracy: ≤ 4 f32 ulp against mpmath (normal-range radiances).
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
  *
- * Reference: Planck's law solved for T (closed form).
+ * # Safety
+ * `spectral_radiance` is NULL or points to n readable `double`; `out` is NULL or points to n
+ * writable `double`. `out` may be the same buffer as `spectral_radiance` (computed in place);
+ * other overlaps give unspecified values.
+ */
+int32_t relicore_brightness_temperature_wavelength_array(double wavelength_m,
+                                                         const double *spectral_radiance,
+                                                         size_t n,
+                                                         double *out);
+
+/**
+ * Brightness temperature at a frequency: T = (hν/k) / ln(1 + 2hν³/(c² L)).
+ *
+ * * `frequency_hz`: Hz, finite and > 0.
+ * * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
+ *
+ * Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
+ * Accuracy: round trip within 1e-14 relative (`f64`) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `spectral_radiance`: B_nu in W m-2 sr-1 Hz-1, > 0.
+ * * `out`: where the result is written: K.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_brightness_temperature_frequency(double frequency_hz,
+                                                  double spectral_radiance,
+                                                  double *out);
+
+/**
+ * Single-precision twin of `relicore_brightness_temperature_frequency`: the same core function
+ * computed in `float`.
+ *
+ * Brightness temperature at a frequency: T = (hν/k) / ln(1 + 2hν³/(c² L)).
+ *
+ * * `frequency_hz`: Hz, finite and > 0.
+ * * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
+ *
+ * Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
+ * Accuracy: round trip within 1e-14 relative (`f64`) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `spectral_radiance`: B_nu in W m-2 sr-1 Hz-1, > 0.
+ * * `out`: where the result is written: K.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
  *
  * # Safety
  * `out` is NULL or points to a writable `float`.
@@ -1795,6 +1655,224 @@ int32_t relicore_brightness_temperature_wavelength_f32(float wavelength_m,
 int32_t relicore_brightness_temperature_frequency_f32(float frequency_hz,
                                                       float spectral_radiance,
                                                       float *out);
+
+/**
+ * Array form of `relicore_brightness_temperature_frequency`: out[i] =
+ * brightness_temperature_frequency(frequency_hz, spectral_radiance[i]) for i < n.
+ *
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `spectral_radiance`: n values of `spectral_radiance`, B_nu in W m-2 sr-1 Hz-1, > 0.
+ * * `n`: number of elements of both arrays.
+ * * `out`: n results, K.
+ *
+ * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
+ * some elements fail, those outputs are NaN, the others are computed, and the code of the first
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0); then every element of a
+ * non-NULL `out` is NaN.
+ *
+ * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
+ * accuracy as there. Allocates nothing.
+ *
+ * # Safety
+ * `spectral_radiance` is NULL or points to n readable `double`; `out` is NULL or points to n
+ * writable `double`. `out` may be the same buffer as `spectral_radiance` (computed in place);
+ * other overlaps give unspecified values.
+ */
+int32_t relicore_brightness_temperature_frequency_array(double frequency_hz,
+                                                        const double *spectral_radiance,
+                                                        size_t n,
+                                                        double *out);
+
+/**
+ * Rayleigh-Jeans temperature: T_RJ = c² L / (2kν²), the temperature the long-wavelength limit
+ * of Planck's law assigns to a spectral radiance (the radio astronomer's "brightness
+ * temperature"; below the Planck brightness temperature by about hν/2k).
+ *
+ * * `frequency_hz`: Hz, finite and > 0.
+ * * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
+ *
+ * Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`. Accuracy: ≤ 2 ulp (`f64`) against
+ * mpmath (formed to double length with exact power-of-two scalings, so `f32` does not
+ * overflow).
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `spectral_radiance`: B_nu in W m-2 sr-1 Hz-1, > 0.
+ * * `out`: where the result is written: K.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_rayleigh_jeans_temperature(double frequency_hz,
+                                            double spectral_radiance,
+                                            double *out);
+
+/**
+ * Two-colour (ratio) temperature: the T at which ε₁B_λ(λ₁,T) / (ε₂B_λ(λ₂,T)) equals the
+ * measured radiance ratio, with the exact Planck law (not Wien's approximation).
+ *
+ * * `wavelength_1_m`, `wavelength_2_m`: the two wavelengths in m, finite, > 0, different.
+ * * `radiance_ratio`: L(λ₁)/L(λ₂), finite and > 0.
+ * * `emissivity_ratio`: ε(λ₁)/ε(λ₂), finite and > 0 (1 for a gray body).
+ *
+ * Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`; `OutOfDomain(2)` when the ratio is one
+ * no blackbody can produce (for λ₁ < λ₂, B₁/B₂ lies in (0, (λ₂/λ₁)⁴), the upper limit being
+ * the Rayleigh-Jeans limit T → ∞); `OutOfDomain(1)` when λ₁ = λ₂; `NoConvergence` (seen only for
+ * arguments far outside physical ones, such as subnormal wavelengths).
+ *
+ * Method: safeguarded Newton in u = 1/T on ln(B₁/B₂), which is nearly linear in u, started
+ * from the Wien-approximation solution.
+ * Accuracy: within 1e-13 relative (`f64`) against mpmath for |x₁ − x₂| ≥ 0.5.
+ * Reference: two-colour pyrometry, e.g. DeWitt & Nutter (eds.), Theory and Practice of
+ * Radiation Thermometry, Wiley 1988, ch. 6. Cautions as in the module documentation.
+ *
+ * Arguments of the C function:
+ * * `wavelength_1_m`: first wavelength in m, > 0.
+ * * `wavelength_2_m`: second wavelength in m, > 0.
+ * * `radiance_ratio`: L(lambda_1)/L(lambda_2), > 0.
+ * * `emissivity_ratio`: emissivity(lambda_1)/emissivity(lambda_2), > 0.
+ * * `out`: where the result is written: K.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_ratio_temperature(double wavelength_1_m,
+                                   double wavelength_2_m,
+                                   double radiance_ratio,
+                                   double emissivity_ratio,
+                                   double *out);
+
+/**
+ * Thermodynamic-to-Rayleigh-Jeans conversion factor dT_RJ/dT_CMB = x²eˣ/(eˣ − 1)².
+ *
+ * * `frequency_hz`: Hz, finite and > 0.
+ * * `cmb_temperature_k`: the CMB temperature T₀ in K, finite and > 0 (2.72548 K today).
+ *
+ * Returns a number in (0, 1). Errors: `NonFinite(i)`, `NonPositive(i)`.
+ * Accuracy: ≤ 8 ulp (`f64`) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `cmb_temperature_k`: CMB temperature T0 in K, > 0.
+ * * `out`: where the result is written: dT_RJ/dT_CMB, in (0, 1).
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_thermodynamic_to_rayleigh_jeans_factor(double frequency_hz,
+                                                        double cmb_temperature_k,
+                                                        double *out);
+
+/**
+ * dB_ν/dT at the CMB temperature, in MJy sr⁻¹ per K_CMB: converts a CMB temperature
+ * fluctuation to a specific-intensity fluctuation.
+ *
+ * * `frequency_hz`: Hz, finite and > 0.
+ * * `cmb_temperature_k`: T₀ in K, finite and > 0.
+ *
+ * Returns MJy sr⁻¹ K⁻¹ (1e20 × the SI value in W m⁻² sr⁻¹ Hz⁻¹ K⁻¹). Errors: `NonFinite(i)`,
+ * `NonPositive(i)`. Accuracy: ≤ 8 ulp (`f64`) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `cmb_temperature_k`: CMB temperature T0 in K, > 0.
+ * * `out`: where the result is written: MJy sr-1 per K_CMB.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_kcmb_to_mjy_per_sr(double frequency_hz,
+                                    double cmb_temperature_k,
+                                    double *out);
+
+/**
+ * Thermal SZ intensity shape g(x) = x⁴eˣ/(eˣ − 1)² (x coth(x/2) − 4) (ΔI/I₀ = y g(x)).
+ *
+ * * `frequency_hz`: Hz, finite and > 0; `cmb_temperature_k`: T₀ in K, finite and > 0.
+ *
+ * Returns a pure number (negative below the null, positive above). Errors: `NonFinite(i)`,
+ * `NonPositive(i)`. Accuracy: within 1e-15·(x + 4)·x⁴eˣ/(eˣ − 1)² absolute (`f64`).
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `cmb_temperature_k`: CMB temperature T0 in K, > 0.
+ * * `out`: where the result is written: g(x), dimensionless.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_thermal_sz_spectral_shape(double frequency_hz,
+                                           double cmb_temperature_k,
+                                           double *out);
+
+/**
+ * Thermal SZ temperature shape f(x) = x coth(x/2) − 4 (ΔT_CMB/T₀ = y f(x)).
+ *
+ * * `frequency_hz`: Hz, finite and > 0; `cmb_temperature_k`: T₀ in K, finite and > 0.
+ *
+ * Returns a pure number: −2 in the Rayleigh-Jeans limit, 0 at the null (≈ 217.5 GHz for
+ * T₀ = 2.72548 K), growing like x − 4 at high frequency. Errors: `NonFinite(i)`,
+ * `NonPositive(i)`. Accuracy: within 1e-15·(x + 4) absolute (`f64`) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `cmb_temperature_k`: CMB temperature T0 in K, > 0.
+ * * `out`: where the result is written: f(x), dimensionless.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_thermal_sz_temperature_shape(double frequency_hz,
+                                              double cmb_temperature_k,
+                                              double *out);
+
+/**
+ * Frequency of the thermal SZ null, ν₀ = x₀kT₀/h with x₀ coth(x₀/2) = 4 (x₀ = 3.830016…).
+ *
+ * * `cmb_temperature_k`: T₀ in K, finite and > 0.
+ *
+ * Returns Hz (217.5 GHz for T₀ = 2.72548 K). Errors: `NonFinite(0)`, `NonPositive(0)`.
+ * Accuracy: ≤ 2 ulp (`f64`) against mpmath (non-relativistic limit; relativistic corrections
+ * move the null upward with cluster temperature and are not included).
+ *
+ * Arguments of the C function:
+ * * `cmb_temperature_k`: CMB temperature T0 in K, > 0.
+ * * `out`: where the result is written: Hz.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_thermal_sz_null_frequency(double cmb_temperature_k,
+                                           double *out);
 
 /**
  * Calibrates a radiometer channel from two blackbody loads: fits `reading = gain · J +
@@ -2146,742 +2224,142 @@ int32_t relicore_universe_get_parameters(const struct relicore_universe *univers
                                          struct relicore_universe_parameters *out);
 
 /**
- * Hubble distance D_H = c/H0 of a universe, Mpc.
+ * Hubble distance c/H0, Mpc.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `out`: D_H in Mpc, > 0.
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `out`: where the result is written: D_H in Mpc.
  *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN:
- * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
  * `*universe` was not filled by a successful `relicore_universe_init`.
  *
- * Accuracy: within 4 ulp against mpmath (c exact, SI 2019).
- *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or
- * points to a writable `double`.
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
  */
 int32_t relicore_hubble_distance_mpc(const struct relicore_universe *universe, double *out);
 
 /**
- * Hubble time t_H = 1/H0 of a universe, Gyr (of Julian years: 13.97 Gyr for H0 = 70
- * km s⁻¹ Mpc⁻¹).
+ * Hubble time 1/H0, Gyr (Julian years of 365.25 days; 13.97 Gyr for H0 = 70).
  *
- * * `universe`: from `relicore_universe_init`.
- * * `out`: t_H in Gyr, > 0.
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `out`: where the result is written: t_H in Gyr.
  *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN:
- * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
  * `*universe` was not filled by a successful `relicore_universe_init`.
  *
- * Accuracy: within 8 ulp against mpmath (Mpc from the IAU 2012 au, Julian year).
- *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or
- * points to a writable `double`.
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
  */
 int32_t relicore_hubble_time_gyr(const struct relicore_universe *universe, double *out);
 
 /**
- * Radiation density parameter today, Ω_r: photons (a_rad T0⁴/c²/ρ_c) plus the massless
- * neutrino species; massive species are counted in Ω_m.
+ * Radiation density parameter today: photons plus massless neutrino species (massive
+ * species are counted in `omega_matter`).
  *
- * * `universe`: from `relicore_universe_init`.
- * * `out`: Ω_r, ≥ 0 (0 when T0 = 0).
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `out`: where the result is written: Omega_r.
  *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN:
- * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
  * `*universe` was not filled by a successful `relicore_universe_init`.
  *
- * Accuracy: within 1e-14 relative against mpmath (exact SI constants, CODATA 2022 G).
- *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or
- * points to a writable `double`.
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
  */
 int32_t relicore_omega_radiation(const struct relicore_universe *universe, double *out);
 
 /**
- * Dark-energy density parameter today, Ω_de = 1 − Ω_m − Ω_r − Ω_k.
+ * Dark-energy density parameter today, 1 − Ω_m − Ω_r − Ω_k.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `out`: Ω_de (may be ≤ 0).
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `out`: where the result is written: Omega_de.
  *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN:
- * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
  * `*universe` was not filled by a successful `relicore_universe_init`.
  *
- * Accuracy: within 4 ulp(1) × (1 + |Ω_m| + Ω_r + |Ω_k|) absolute (the subtraction cancels),
- * or 1e-14 relative if larger, against mpmath.
- *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or
- * points to a writable `double`.
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
  */
 int32_t relicore_omega_dark_energy(const struct relicore_universe *universe, double *out);
 
 /**
- * Redshift of matter-radiation equality, Ω_cb/Ω_r,all − 1, with Ω_cb = cold dark matter plus
- * baryons and Ω_r,all = photons plus all N_eff neutrino species counted as massless (the
+ * Redshift of matter-radiation equality, Ω_cb/Ω_r − 1, with Ω_cb = cold dark matter plus
+ * baryons and Ω_r = photons plus all N_eff neutrino species counted as massless (the
  * convention of published parameter tables).
  *
- * * `universe`: from `relicore_universe_init`.
- * * `out`: z_eq (dimensionless).
+ * Errors: `OutOfDomain(0)` for a universe without radiation (T0 = 0).
  *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN:
- * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when
- * `*universe` was not filled by a successful `relicore_universe_init`;
- * `RELICORE_ERROR_OUT_OF_DOMAIN` for a universe without radiation (T0 = 0).
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `out`: where the result is written: z_eq.
  *
- * Accuracy: within 1e-14 relative against mpmath (1e-12 with massive neutrinos, whose
- * density today is a Fermi-Dirac integral).
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or
- * points to a writable `double`.
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
  */
 int32_t relicore_matter_radiation_equality_redshift(const struct relicore_universe *universe,
                                                     double *out);
 
 /**
- * Dimensionless Hubble rate E(z) = H(z)/H0, from the Friedmann equation E² = Ω_cb(1+z)³ +
- * Ω_r(1+z)⁴ + Σ ρ_ν,i(z)/ρ_c + Ω_k(1+z)² + Ω_de f_de(z), with massive neutrinos by the exact
- * Fermi-Dirac energy integral and f_de(z) of the w0–wa dark energy.
+ * Dimensionless Hubble rate E(z) = H(z)/H0, from the Friedmann equation
+ * E² = Ω_cb(1+z)³ + Ω_r(1+z)⁴ + Σ ρ_ν,i(z)/ρ_c + Ω_k(1+z)² + Ω_de f_de(z), with massive
+ * neutrinos by the exact Fermi-Dirac energy integral and f_de of the w0–wa model.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: E, dimensionless (≥ 1 for ordinary models).
+ * * `z`: redshift, finite and ≥ 0. Returns a number ≥ 1 for ordinary models.
  *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0.
+ * Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-14 relative (`f64`) against
+ * mpmath (`tests/data/cosmology.txt`).
  *
- * Accuracy: within 1e-14 relative against mpmath (1e-12 for universes with massive neutrinos,
- * whose density is a Fermi-Dirac integral), `tests/data/cosmology.txt`.
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: E, dimensionless (>= 1 for ordinary models).
  *
- * Reference: Friedmann equation; w0–wa dark energy of Chevallier & Polarski 2001, Int. J. Mod.
- * Phys. D 10, 213 and Linder 2003, PRL 90, 091301; neutrino energy density as in Lesgourgues &
- * Pastor 2006, Phys. Rep. 429, 307, eq. 13.
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
  */
 int32_t relicore_dimensionless_hubble(const struct relicore_universe *universe,
                                       double z,
                                       double *out);
 
 /**
- * Hubble parameter H(z) = H0 E(z).
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: H in km s⁻¹ Mpc⁻¹.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0.
- *
- * Accuracy: within 1e-14 relative against mpmath (1e-12 for universes with massive neutrinos,
- * whose density is a Fermi-Dirac integral), `tests/data/cosmology.txt`.
- *
- * Reference: the Friedmann equation, as `relicore_dimensionless_hubble`.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_hubble_parameter_km_s_mpc(const struct relicore_universe *universe,
-                                           double z,
-                                           double *out);
-
-/**
- * Matter density parameter at z: cold dark matter, baryons and massive neutrinos (the bookkeeping
- * of `omega_matter`) over the critical density at z.
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: Ω_m(z), dimensionless (in [0, 1] for flat models).
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0.
- *
- * Accuracy: within 1e-14 relative against mpmath (1e-12 for universes with massive neutrinos,
- * whose density is a Fermi-Dirac integral), `tests/data/cosmology.txt`.
- *
- * Reference: the Friedmann equation, as `relicore_dimensionless_hubble`.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_omega_matter_at(const struct relicore_universe *universe, double z, double *out);
-
-/**
- * Radiation density parameter at z: photons and massless neutrino species over the critical
- * density at z.
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: Ω_r(z), dimensionless.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0.
- *
- * Accuracy: within 1e-14 relative against mpmath (1e-12 for universes with massive neutrinos,
- * whose density is a Fermi-Dirac integral), `tests/data/cosmology.txt`.
- *
- * Reference: the Friedmann equation, as `relicore_dimensionless_hubble`.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_omega_radiation_at(const struct relicore_universe *universe,
-                                    double z,
-                                    double *out);
-
-/**
- * Dark-energy density parameter at z, Ω_de f_de(z)/E².
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: Ω_de(z), dimensionless.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0.
- *
- * Accuracy: within 1e-14 relative against mpmath (1e-12 for universes with massive neutrinos,
- * whose density is a Fermi-Dirac integral), `tests/data/cosmology.txt`.
- *
- * Reference: the Friedmann equation, as `relicore_dimensionless_hubble`.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_omega_dark_energy_at(const struct relicore_universe *universe,
-                                      double z,
-                                      double *out);
-
-/**
- * Curvature density parameter at z, Ω_k(1+z)²/E².
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: Ω_k(z), dimensionless.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0.
- *
- * Accuracy: within 1e-14 relative against mpmath (1e-12 for universes with massive neutrinos,
- * whose density is a Fermi-Dirac integral), `tests/data/cosmology.txt`.
- *
- * Reference: the Friedmann equation, as `relicore_dimensionless_hubble`.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_omega_curvature_at(const struct relicore_universe *universe,
-                                    double z,
-                                    double *out);
-
-/**
- * Critical density at z, ρ_c(z) = 3H(z)²/(8πG), with G of CODATA 2022.
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: ρ_c in kg m⁻³, > 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0.
- *
- * Accuracy: within 1e-14 relative against mpmath (1e-12 for universes with massive neutrinos,
- * whose density is a Fermi-Dirac integral), `tests/data/cosmology.txt`.
- *
- * Reference: the Friedmann equation, as `relicore_dimensionless_hubble`.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_critical_density_kg_m3(const struct relicore_universe *universe,
-                                        double z,
-                                        double *out);
-
-/**
- * CMB (radiation) temperature at z, T0(1+z).
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: T in K, ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0.
- *
- * Accuracy: exact to one rounding (within 2 ulp against mpmath).
- *
- * Reference: adiabatic expansion of a blackbody, T ∝ 1/a.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_cmb_temperature_at_k(const struct relicore_universe *universe,
-                                      double z,
-                                      double *out);
-
-/**
- * Line-of-sight comoving distance D_C = (c/H0) ∫₀^z dz'/E(z').
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: D_C in Mpc, ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_NO_CONVERGENCE` if the
- * quadrature beyond the table fails (not seen in testing).
- *
- * Accuracy: within 1e-12 relative against mpmath for z from 0 to 1e4 in every model of
- * `tests/data/cosmology.txt` (with and without radiation, open, flat, closed, w0–wa, massive
- * neutrinos). Method: the per-universe Chebyshev table for z ≤ 16383, adaptive Gauss-Kronrod
- * quadrature in s = √a beyond.
- *
- * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 15.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_comoving_distance_mpc(const struct relicore_universe *universe,
-                                       double z,
-                                       double *out);
-
-/**
- * Transverse comoving distance D_M: D_C in a flat universe, (D_H/√Ω_k) sinh(√Ω_k D_C/D_H) in an
- * open one, the sin form in a closed one.
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: D_M in Mpc (≥ 0 except past the antipode of a closed universe).
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_NO_CONVERGENCE` if the
- * quadrature beyond the table fails (not seen in testing).
- *
- * Accuracy: within 1e-12 relative against mpmath for z from 0 to 1e4; method as
- * `relicore_comoving_distance_mpc`.
- *
- * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 16.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_transverse_comoving_distance_mpc(const struct relicore_universe *universe,
-                                                  double z,
-                                                  double *out);
-
-/**
- * Angular-diameter distance D_A = D_M/(1+z).
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: D_A in Mpc.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_NO_CONVERGENCE` if the
- * quadrature beyond the table fails (not seen in testing).
- *
- * Accuracy: within 1e-12 relative against mpmath for z from 0 to 1e4; method as
- * `relicore_comoving_distance_mpc`.
- *
- * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 18.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_angular_diameter_distance_mpc(const struct relicore_universe *universe,
-                                               double z,
-                                               double *out);
-
-/**
- * Luminosity distance D_L = (1+z) D_M.
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: D_L in Mpc.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_NO_CONVERGENCE` if the
- * quadrature beyond the table fails (not seen in testing).
- *
- * Accuracy: within 1e-12 relative against mpmath for z from 0 to 1e4; method as
- * `relicore_comoving_distance_mpc`.
- *
- * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 21.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_luminosity_distance_mpc(const struct relicore_universe *universe,
-                                         double z,
-                                         double *out);
-
-/**
- * Distance modulus 5 log10(D_L / 10 pc).
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: the distance modulus in magnitudes.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_NO_CONVERGENCE` if the
- * quadrature beyond the table fails (not seen in testing); `RELICORE_ERROR_NON_POSITIVE` at z = 0
- * (D_L = 0).
- *
- * Accuracy: within 1e-12 relative against mpmath.
- *
- * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 25.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_distance_modulus(const struct relicore_universe *universe, double z, double *out);
-
-/**
- * Comoving volume inside redshift z over the whole sky, computed as V = 2πχ³ Σₙ 4ⁿ⁺¹ wⁿ/(2n+3)!, w
- * = Ω_k (χ/D_H)², exact for open, flat and closed models without the cancellation of the closed
- * forms at small w (which are used for |w| > 10).
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: V_C in Gpc³, ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_NO_CONVERGENCE` if the
- * quadrature beyond the table fails (not seen in testing).
- *
- * Accuracy: within 3e-12 relative against mpmath.
- *
- * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 29 (and its closed-model analogue).
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_comoving_volume_gpc3(const struct relicore_universe *universe,
-                                      double z,
-                                      double *out);
-
-/**
- * Differential comoving volume dV_C/dz/dΩ = D_H D_M²/E(z).
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: dV_C/dz/dΩ in Mpc³ sr⁻¹, ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_NO_CONVERGENCE` if the
- * quadrature beyond the table fails (not seen in testing).
- *
- * Accuracy: within 3e-12 relative against mpmath.
- *
- * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 28.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_differential_comoving_volume_mpc3_sr(const struct relicore_universe *universe,
-                                                      double z,
-                                                      double *out);
-
-/**
- * Proper transverse size subtended by one arcsecond at z, D_A · π/648000.
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: kpc per arcsec.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_NO_CONVERGENCE` if the
- * quadrature beyond the table fails (not seen in testing).
- *
- * Accuracy: within 1e-12 relative against mpmath for z from 0 to 1e4; method as
- * `relicore_comoving_distance_mpc`.
- *
- * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 18 (small-angle form).
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_transverse_scale_kpc_per_arcsec(const struct relicore_universe *universe,
-                                                 double z,
-                                                 double *out);
-
-/**
- * Lookback time t(0) − t(z) = (1/H0) ∫₀^z dz'/((1+z')E(z')).
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: the lookback time in Gyr (Julian years), ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_OUT_OF_DOMAIN` if the
- * quadrature fails (not seen in testing).
- *
- * Accuracy: within 1e-12 relative against mpmath for z up to 1e4. Method: adaptive Gauss-Kronrod
- * quadrature in s = √a.
- *
- * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 30.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_lookback_time_gyr(const struct relicore_universe *universe, double z, double *out);
-
-/**
- * Age of the universe at redshift z, (1/H0) ∫_z^∞ dz'/((1+z')E(z')) (z = 0: the age today).
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: the age in Gyr (Julian years), > 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_OUT_OF_DOMAIN` when the
- * integral diverges (a model whose past is infinite, e.g. pure de Sitter).
- *
- * Accuracy: within 1e-12 relative against mpmath for z up to 1e8; the Einstein-de Sitter and flat
- * ΛCDM closed forms are among the reference vectors. Method: adaptive Gauss-Kronrod quadrature in
- * s = √a, smooth down to a → 0.
- *
- * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 30 integrated to z = ∞.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_age_gyr(const struct relicore_universe *universe, double z, double *out);
-
-/**
- * Conformal time at z times c, c·η(z) = (c/H0) ∫_z^∞ dz'/E(z'): the comoving particle horizon.
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z`: redshift z, finite and ≥ 0.
- * * `out`: c·η in Mpc, > 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_OUT_OF_DOMAIN` where the
- * integral diverges (a model with neither radiation nor matter, e.g. the empty Milne model).
- *
- * Accuracy: within 1e-12 relative against mpmath for z up to 1e8. Method: adaptive Gauss-Kronrod
- * quadrature in s = √a.
- *
- * Reference: the conformal time of the Friedmann-Lemaître-Robertson-Walker metric, dη = dt/a.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_conformal_time_mpc(const struct relicore_universe *universe,
-                                    double z,
-                                    double *out);
-
-/**
- * Angular-diameter distance of an object at z2 seen from z1 ≤ z2, D_M(χ2 − χ1)/(1 + z2), χ the
- * line-of-sight comoving distance and D_M() the curvature function of
- * `relicore_transverse_comoving_distance_mpc` applied to the difference.
- *
- * * `universe`: from `relicore_universe_init`.
- * * `z1`: redshift of the observer, finite and ≥ 0.
- * * `z2`: redshift of the source, finite and ≥ z1.
- * * `out`: D_A(z1, z2) in Mpc.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite redshift; `RELICORE_ERROR_NEGATIVE` for a redshift < 0; `RELICORE_ERROR_EMPTY_INTERVAL`
- * when z2 < z1; `RELICORE_ERROR_NO_CONVERGENCE` if the quadrature beyond the table fails (not seen
- * in testing).
- *
- * Accuracy: within 1e-12 relative against mpmath, or 1e-15 κ when the interval is so short that χ2
- * − χ1 cancels (κ ≈ z/(z2 − z1), the condition number).
- *
- * Reference: Hogg 1999, arXiv:astro-ph/9905116, eq. 19, and its sin form for closed models.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_angular_diameter_distance_between_mpc(const struct relicore_universe *universe,
-                                                       double z1,
-                                                       double z2,
-                                                       double *out);
-
-/**
- * Redshift at which the age of the universe equals `age_gyr` (inverse of `relicore_age_gyr`).
- *
- * * `universe`: from `relicore_universe_init`.
- * * `age_gyr`: age of the universe in Gyr, finite and > 0, at most the age today.
- * * `out`: the redshift z, ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite age; `RELICORE_ERROR_NON_POSITIVE` for an age ≤ 0; `RELICORE_ERROR_OUT_OF_DOMAIN` above
- * the age today or below the age at z = 1e12; `RELICORE_ERROR_NO_CONVERGENCE` if the iteration
- * fails (not seen in testing).
- *
- * Accuracy: round trip within 1e-12 relative; against mpmath within max(1e-12, 1e-13 κ) relative,
- * κ = |d ln z/d ln target| (the condition number of the inversion). Method: safeguarded Newton
- * iteration in u = ln(1+z), bracketed by [0, ln(1 + 1e12)], with the exact derivative.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_redshift_at_age_gyr(const struct relicore_universe *universe,
-                                     double age_gyr,
-                                     double *out);
-
-/**
- * Redshift at which the lookback time equals `lookback_gyr` (inverse of
- * `relicore_lookback_time_gyr`).
- *
- * * `universe`: from `relicore_universe_init`.
- * * `lookback_gyr`: lookback time in Gyr, finite and ≥ 0, below the age today.
- * * `out`: the redshift z, ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite time; `RELICORE_ERROR_NEGATIVE` for a time < 0; `RELICORE_ERROR_OUT_OF_DOMAIN` at or
- * beyond the age today; `RELICORE_ERROR_NO_CONVERGENCE` if the iteration fails (not seen in
- * testing).
- *
- * Accuracy: round trip within 1e-12 relative; against mpmath within max(1e-12, 1e-13 κ) relative,
- * κ = |d ln z/d ln target| (the condition number of the inversion). Method: safeguarded Newton
- * iteration in u = ln(1+z), bracketed by [0, ln(1 + 1e12)], with the exact derivative.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_redshift_at_lookback_time_gyr(const struct relicore_universe *universe,
-                                               double lookback_gyr,
-                                               double *out);
-
-/**
- * Redshift at which the line-of-sight comoving distance equals `distance_mpc` (inverse of
- * `relicore_comoving_distance_mpc`).
- *
- * * `universe`: from `relicore_universe_init`.
- * * `distance_mpc`: line-of-sight comoving distance in Mpc, finite and ≥ 0.
- * * `out`: the redshift z, ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite distance; `RELICORE_ERROR_NEGATIVE` for a distance < 0; `RELICORE_ERROR_OUT_OF_DOMAIN`
- * beyond the distance reached at z = 1e12 (the particle horizon); `RELICORE_ERROR_NO_CONVERGENCE`
- * if the iteration fails (not seen in testing).
- *
- * Accuracy: round trip within 1e-12 relative; against mpmath within max(1e-12, 1e-13 κ) relative,
- * κ = |d ln z/d ln target| (the condition number of the inversion). Method: safeguarded Newton
- * iteration in u = ln(1+z), bracketed by [0, ln(1 + 1e12)], with the exact derivative.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_redshift_at_comoving_distance_mpc(const struct relicore_universe *universe,
-                                                   double distance_mpc,
-                                                   double *out);
-
-/**
- * Redshift at which the luminosity distance equals `distance_mpc` (inverse of
- * `relicore_luminosity_distance_mpc`). In a closed universe D_L need not grow monotonically; the
- * root found in the bracket is returned.
- *
- * * `universe`: from `relicore_universe_init`.
- * * `distance_mpc`: luminosity distance in Mpc, finite and ≥ 0.
- * * `out`: the redshift z, ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite distance; `RELICORE_ERROR_NEGATIVE` for a distance < 0; `RELICORE_ERROR_OUT_OF_DOMAIN`
- * when no redshift up to 1e12 gives it; `RELICORE_ERROR_NO_CONVERGENCE` if the iteration fails
- * (not seen in testing).
- *
- * Accuracy: round trip within 1e-12 relative; against mpmath within max(1e-12, 1e-13 κ) relative,
- * κ = |d ln z/d ln target| (the condition number of the inversion). Method: safeguarded Newton
- * iteration in u = ln(1+z), bracketed by [0, ln(1 + 1e12)], with the exact derivative.
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_redshift_at_luminosity_distance_mpc(const struct relicore_universe *universe,
-                                                     double distance_mpc,
-                                                     double *out);
-
-/**
  * Array form of `relicore_dimensionless_hubble`: out[i] = dimensionless_hubble(universe,
  * redshifts[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, E, dimensionless (≥ 1 for ordinary models).
+ * * `out`: n results, E, dimensionless (>= 1 for ordinary models).
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -2889,10 +2367,10 @@ int32_t relicore_redshift_at_luminosity_distance_mpc(const struct relicore_unive
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_dimensionless_hubble_array(const struct relicore_universe *universe,
                                             const double *redshifts,
@@ -2900,18 +2378,40 @@ int32_t relicore_dimensionless_hubble_array(const struct relicore_universe *univ
                                             double *out);
 
 /**
+ * Hubble parameter H(z) = H0 E(z), km s⁻¹ Mpc⁻¹. Errors and accuracy as
+ * `dimensionless_hubble`.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: H in km s-1 Mpc-1.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_hubble_parameter_km_s_mpc(const struct relicore_universe *universe,
+                                           double z,
+                                           double *out);
+
+/**
  * Array form of `relicore_hubble_parameter_km_s_mpc`: out[i] = hubble_parameter_km_s_mpc(universe,
  * redshifts[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, H in km s⁻¹ Mpc⁻¹.
+ * * `out`: n results, H in km s-1 Mpc-1.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -2919,10 +2419,10 @@ int32_t relicore_dimensionless_hubble_array(const struct relicore_universe *univ
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_hubble_parameter_km_s_mpc_array(const struct relicore_universe *universe,
                                                  const double *redshifts,
@@ -2930,18 +2430,39 @@ int32_t relicore_hubble_parameter_km_s_mpc_array(const struct relicore_universe 
                                                  double *out);
 
 /**
+ * Matter density parameter at z (cold dark matter, baryons and massive neutrinos, the
+ * same bookkeeping as `omega_matter` today), in [0, 1] for flat models. Errors as
+ * `dimensionless_hubble`.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: Omega_m(z), dimensionless (in [0, 1] for flat models).
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_omega_matter_at(const struct relicore_universe *universe, double z, double *out);
+
+/**
  * Array form of `relicore_omega_matter_at`: out[i] = omega_matter_at(universe, redshifts[i]) for i
  * < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, Ω_m(z), dimensionless (in [0, 1] for flat models).
+ * * `out`: n results, Omega_m(z), dimensionless (in [0, 1] for flat models).
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -2949,10 +2470,10 @@ int32_t relicore_hubble_parameter_km_s_mpc_array(const struct relicore_universe 
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_omega_matter_at_array(const struct relicore_universe *universe,
                                        const double *redshifts,
@@ -2960,18 +2481,40 @@ int32_t relicore_omega_matter_at_array(const struct relicore_universe *universe,
                                        double *out);
 
 /**
+ * Radiation density parameter at z (photons and massless neutrino species). Errors as
+ * `dimensionless_hubble`.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: Omega_r(z), dimensionless.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_omega_radiation_at(const struct relicore_universe *universe,
+                                    double z,
+                                    double *out);
+
+/**
  * Array form of `relicore_omega_radiation_at`: out[i] = omega_radiation_at(universe, redshifts[i])
  * for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, Ω_r(z), dimensionless.
+ * * `out`: n results, Omega_r(z), dimensionless.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -2979,10 +2522,10 @@ int32_t relicore_omega_matter_at_array(const struct relicore_universe *universe,
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_omega_radiation_at_array(const struct relicore_universe *universe,
                                           const double *redshifts,
@@ -2990,18 +2533,40 @@ int32_t relicore_omega_radiation_at_array(const struct relicore_universe *univer
                                           double *out);
 
 /**
+ * Dark-energy density parameter at z. Errors as
+ * `dimensionless_hubble`.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: Omega_de(z), dimensionless.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_omega_dark_energy_at(const struct relicore_universe *universe,
+                                      double z,
+                                      double *out);
+
+/**
  * Array form of `relicore_omega_dark_energy_at`: out[i] = omega_dark_energy_at(universe,
  * redshifts[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, Ω_de(z), dimensionless.
+ * * `out`: n results, Omega_de(z), dimensionless.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -3009,10 +2574,10 @@ int32_t relicore_omega_radiation_at_array(const struct relicore_universe *univer
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_omega_dark_energy_at_array(const struct relicore_universe *universe,
                                             const double *redshifts,
@@ -3020,18 +2585,40 @@ int32_t relicore_omega_dark_energy_at_array(const struct relicore_universe *univ
                                             double *out);
 
 /**
+ * Curvature density parameter at z, Ω_k(1+z)²/E². Errors as
+ * `dimensionless_hubble`.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: Omega_k(z), dimensionless.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_omega_curvature_at(const struct relicore_universe *universe,
+                                    double z,
+                                    double *out);
+
+/**
  * Array form of `relicore_omega_curvature_at`: out[i] = omega_curvature_at(universe, redshifts[i])
  * for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, Ω_k(z), dimensionless.
+ * * `out`: n results, Omega_k(z), dimensionless.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -3039,10 +2626,10 @@ int32_t relicore_omega_dark_energy_at_array(const struct relicore_universe *univ
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_omega_curvature_at_array(const struct relicore_universe *universe,
                                           const double *redshifts,
@@ -3050,18 +2637,40 @@ int32_t relicore_omega_curvature_at_array(const struct relicore_universe *univer
                                           double *out);
 
 /**
+ * Critical density at z, ρ_c(z) = 3H(z)²/(8πG), kg m⁻³ (G from CODATA 2022). Errors as
+ * `dimensionless_hubble`.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: rho_c in kg m-^3, > 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_critical_density_kg_m3(const struct relicore_universe *universe,
+                                        double z,
+                                        double *out);
+
+/**
  * Array form of `relicore_critical_density_kg_m3`: out[i] = critical_density_kg_m3(universe,
  * redshifts[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, ρ_c in kg m⁻³, > 0.
+ * * `out`: n results, rho_c in kg m-^3, > 0.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -3069,10 +2678,10 @@ int32_t relicore_omega_curvature_at_array(const struct relicore_universe *univer
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_critical_density_kg_m3_array(const struct relicore_universe *universe,
                                               const double *redshifts,
@@ -3080,18 +2689,40 @@ int32_t relicore_critical_density_kg_m3_array(const struct relicore_universe *un
                                               double *out);
 
 /**
+ * CMB temperature at z, T0(1+z), K. Errors: `NonFinite(0)`, `Negative(0)`. Exact to one
+ * rounding.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: T in K, >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_cmb_temperature_at_k(const struct relicore_universe *universe,
+                                      double z,
+                                      double *out);
+
+/**
  * Array form of `relicore_cmb_temperature_at_k`: out[i] = cmb_temperature_at_k(universe,
  * redshifts[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, T in K, ≥ 0.
+ * * `out`: n results, T in K, >= 0.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -3099,10 +2730,10 @@ int32_t relicore_critical_density_kg_m3_array(const struct relicore_universe *un
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_cmb_temperature_at_k_array(const struct relicore_universe *universe,
                                             const double *redshifts,
@@ -3110,30 +2741,58 @@ int32_t relicore_cmb_temperature_at_k_array(const struct relicore_universe *univ
                                             double *out);
 
 /**
+ * Line-of-sight comoving distance D_C = (c/H0) ∫₀^z dz'/E(z'), Mpc (Hogg 1999 eq. 15).
+ *
+ * * `z`: redshift, finite and ≥ 0.
+ *
+ * Errors: `NonFinite(0)`, `Negative(0)`, `NoConvergence` (not seen in testing).
+ * Accuracy: within 1e-12 relative (`f64`) for z from 0 to 1e4 against mpmath, for every
+ * model of `tests/data/cosmology.txt` (with and without radiation, curved, w0–wa, massive
+ * neutrinos). Method: the per-universe table (see `table.rs`) for z ≤ 16383, the shared
+ * quadrature in s = √a beyond.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: D_C in Mpc, >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_comoving_distance_mpc(const struct relicore_universe *universe,
+                                       double z,
+                                       double *out);
+
+/**
  * Array form of `relicore_comoving_distance_mpc`: out[i] = comoving_distance_mpc(universe,
  * redshifts[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, D_C in Mpc, ≥ 0.
+ * * `out`: n results, D_C in Mpc, >= 0.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
- * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
- * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
- * accuracy as there. Allocates nothing.
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation the
+ * CPU supports), with the scalar function's bits. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_comoving_distance_mpc_array(const struct relicore_universe *universe,
                                              const double *redshifts,
@@ -3141,30 +2800,53 @@ int32_t relicore_comoving_distance_mpc_array(const struct relicore_universe *uni
                                              double *out);
 
 /**
+ * Transverse comoving distance D_M, Mpc (Hogg 1999 eq. 16: equal to D_C when flat, the
+ * sinh/sin form when open/closed). Errors and accuracy as
+ * `comoving_distance_mpc`.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: D_M in Mpc (>= 0 except past the antipode of a closed
+ *   universe).
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_transverse_comoving_distance_mpc(const struct relicore_universe *universe,
+                                                  double z,
+                                                  double *out);
+
+/**
  * Array form of `relicore_transverse_comoving_distance_mpc`: out[i] =
  * transverse_comoving_distance_mpc(universe, redshifts[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, D_M in Mpc (≥ 0 except past the antipode of a closed universe).
+ * * `out`: n results, D_M in Mpc (>= 0 except past the antipode of a closed universe).
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
- * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
- * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
- * accuracy as there. Allocates nothing.
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation the
+ * CPU supports), with the scalar function's bits. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_transverse_comoving_distance_mpc_array(const struct relicore_universe *universe,
                                                         const double *redshifts,
@@ -3172,30 +2854,51 @@ int32_t relicore_transverse_comoving_distance_mpc_array(const struct relicore_un
                                                         double *out);
 
 /**
+ * Angular-diameter distance D_A = D_M/(1+z), Mpc (Hogg 1999 eq. 18). Errors and accuracy
+ * as `comoving_distance_mpc`.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: D_A in Mpc.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_angular_diameter_distance_mpc(const struct relicore_universe *universe,
+                                               double z,
+                                               double *out);
+
+/**
  * Array form of `relicore_angular_diameter_distance_mpc`: out[i] =
  * angular_diameter_distance_mpc(universe, redshifts[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
  * * `out`: n results, D_A in Mpc.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
- * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
- * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
- * accuracy as there. Allocates nothing.
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation the
+ * CPU supports), with the scalar function's bits. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_angular_diameter_distance_mpc_array(const struct relicore_universe *universe,
                                                      const double *redshifts,
@@ -3203,30 +2906,51 @@ int32_t relicore_angular_diameter_distance_mpc_array(const struct relicore_unive
                                                      double *out);
 
 /**
+ * Luminosity distance D_L = (1+z) D_M, Mpc (Hogg 1999 eq. 21). Errors and accuracy as
+ * `comoving_distance_mpc`.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: D_L in Mpc.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_luminosity_distance_mpc(const struct relicore_universe *universe,
+                                         double z,
+                                         double *out);
+
+/**
  * Array form of `relicore_luminosity_distance_mpc`: out[i] = luminosity_distance_mpc(universe,
  * redshifts[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
  * * `out`: n results, D_L in Mpc.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
- * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation
- * the CPU supports: AVX-512, AVX2 or the baseline), which gives the scalar function's bits;
- * accuracy as there. Allocates nothing.
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation the
+ * CPU supports), with the scalar function's bits. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_luminosity_distance_mpc_array(const struct relicore_universe *universe,
                                                const double *redshifts,
@@ -3234,18 +2958,40 @@ int32_t relicore_luminosity_distance_mpc_array(const struct relicore_universe *u
                                                double *out);
 
 /**
+ * Distance modulus 5 log10(D_L / 10 pc), magnitudes (Hogg 1999 eq. 25).
+ *
+ * Errors: `NonFinite(0)`, `Negative(0)`, `NonPositive(0)` at z = 0 (D_L = 0).
+ * Accuracy: within 1e-12 absolute (`f64`) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: the distance modulus in magnitudes.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_distance_modulus(const struct relicore_universe *universe, double z, double *out);
+
+/**
  * Array form of `relicore_distance_modulus`: out[i] = distance_modulus(universe, redshifts[i]) for
  * i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
  * * `out`: n results, the distance modulus in magnitudes.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -3253,10 +2999,10 @@ int32_t relicore_luminosity_distance_mpc_array(const struct relicore_universe *u
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_distance_modulus_array(const struct relicore_universe *universe,
                                         const double *redshifts,
@@ -3264,18 +3010,44 @@ int32_t relicore_distance_modulus_array(const struct relicore_universe *universe
                                         double *out);
 
 /**
+ * Comoving volume inside redshift z over the whole sky, Gpc³ (Hogg 1999 eq. 29), written
+ * as V = 2πχ³ Σₙ 4ⁿ⁺¹ wⁿ/(2n+3)!, w = Ω_k (χ/D_H)², which is exact for open, flat and
+ * closed models and free of the cancellation of the closed forms at small w (the closed
+ * forms (sinh φ cosh φ − φ) and (φ − sin φ cos φ) are used for |w| > 10).
+ *
+ * Errors and accuracy as `comoving_distance_mpc`.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: V_C in Gpc^3, >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_comoving_volume_gpc3(const struct relicore_universe *universe,
+                                      double z,
+                                      double *out);
+
+/**
  * Array form of `relicore_comoving_volume_gpc3`: out[i] = comoving_volume_gpc3(universe,
  * redshifts[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, V_C in Gpc³, ≥ 0.
+ * * `out`: n results, V_C in Gpc^3, >= 0.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -3283,10 +3055,10 @@ int32_t relicore_distance_modulus_array(const struct relicore_universe *universe
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_comoving_volume_gpc3_array(const struct relicore_universe *universe,
                                             const double *redshifts,
@@ -3294,18 +3066,40 @@ int32_t relicore_comoving_volume_gpc3_array(const struct relicore_universe *univ
                                             double *out);
 
 /**
+ * Differential comoving volume dV_C/dz/dΩ = D_H D_M²/E(z), Mpc³ sr⁻¹ (Hogg 1999 eq. 28).
+ * Errors and accuracy as `comoving_distance_mpc`.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: dV_C/dz/dOmega in Mpc^3 sr-1, >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_differential_comoving_volume_mpc3_sr(const struct relicore_universe *universe,
+                                                      double z,
+                                                      double *out);
+
+/**
  * Array form of `relicore_differential_comoving_volume_mpc3_sr`: out[i] =
  * differential_comoving_volume_mpc3_sr(universe, redshifts[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, dV_C/dz/dΩ in Mpc³ sr⁻¹, ≥ 0.
+ * * `out`: n results, dV_C/dz/dOmega in Mpc^3 sr-1, >= 0.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -3313,10 +3107,10 @@ int32_t relicore_comoving_volume_gpc3_array(const struct relicore_universe *univ
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_differential_comoving_volume_mpc3_sr_array(const struct relicore_universe *universe,
                                                             const double *redshifts,
@@ -3324,18 +3118,40 @@ int32_t relicore_differential_comoving_volume_mpc3_sr_array(const struct relicor
                                                             double *out);
 
 /**
+ * Proper transverse size per arcsecond at z, D_A·π/648000, kpc per arcsec. Errors and
+ * accuracy as `comoving_distance_mpc`.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: kpc per arcsec.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_transverse_scale_kpc_per_arcsec(const struct relicore_universe *universe,
+                                                 double z,
+                                                 double *out);
+
+/**
  * Array form of `relicore_transverse_scale_kpc_per_arcsec`: out[i] =
  * transverse_scale_kpc_per_arcsec(universe, redshifts[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
  * * `out`: n results, kpc per arcsec.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -3343,10 +3159,10 @@ int32_t relicore_differential_comoving_volume_mpc3_sr_array(const struct relicor
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_transverse_scale_kpc_per_arcsec_array(const struct relicore_universe *universe,
                                                        const double *redshifts,
@@ -3354,18 +3170,42 @@ int32_t relicore_transverse_scale_kpc_per_arcsec_array(const struct relicore_uni
                                                        double *out);
 
 /**
+ * Lookback time t(0) − t(z) = (1/H0) ∫₀^z dz'/((1+z')E(z')), Gyr (Hogg 1999 eq. 30).
+ *
+ * * `z`: redshift, finite and ≥ 0.
+ *
+ * Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-12 relative (`f64`) for z up
+ * to 1e4 against mpmath.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: the lookback time in Gyr (Julian years), >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_lookback_time_gyr(const struct relicore_universe *universe, double z, double *out);
+
+/**
  * Array form of `relicore_lookback_time_gyr`: out[i] = lookback_time_gyr(universe, redshifts[i])
  * for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, the lookback time in Gyr (Julian years), ≥ 0.
+ * * `out`: n results, the lookback time in Gyr (Julian years), >= 0.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -3373,10 +3213,10 @@ int32_t relicore_transverse_scale_kpc_per_arcsec_array(const struct relicore_uni
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_lookback_time_gyr_array(const struct relicore_universe *universe,
                                          const double *redshifts,
@@ -3384,17 +3224,43 @@ int32_t relicore_lookback_time_gyr_array(const struct relicore_universe *univers
                                          double *out);
 
 /**
+ * Age of the universe at redshift z, (1/H0) ∫_z^∞ dz'/((1+z')E(z')), Gyr.
+ *
+ * * `z`: redshift, finite and ≥ 0 (z = 0: the age today).
+ *
+ * Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` when the integral diverges (a
+ * model whose past is infinite, e.g. pure de Sitter). Accuracy: within 1e-12 relative
+ * (`f64`) for z up to 1e8 against mpmath; the Einstein-de Sitter and flat ΛCDM closed forms
+ * are among the vectors.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: the age in Gyr (Julian years), > 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_age_gyr(const struct relicore_universe *universe, double z, double *out);
+
+/**
  * Array form of `relicore_age_gyr`: out[i] = age_gyr(universe, redshifts[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
  * * `out`: n results, the age in Gyr (Julian years), > 0.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -3402,10 +3268,10 @@ int32_t relicore_lookback_time_gyr_array(const struct relicore_universe *univers
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_age_gyr_array(const struct relicore_universe *universe,
                                const double *redshifts,
@@ -3413,18 +3279,45 @@ int32_t relicore_age_gyr_array(const struct relicore_universe *universe,
                                double *out);
 
 /**
+ * Conformal time at z times c, c·η(z) = (c/H0) ∫_z^∞ dz'/E(z'), Mpc: the comoving horizon.
+ *
+ * * `z`: redshift, finite and ≥ 0.
+ *
+ * Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` where it diverges (a model with
+ * neither radiation nor matter, e.g. the empty Milne model). Accuracy: within 1e-12
+ * relative (`f64`) for z up to 1e8 against mpmath.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite and >= 0.
+ * * `out`: where the result is written: c*eta in Mpc, > 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_conformal_time_mpc(const struct relicore_universe *universe,
+                                    double z,
+                                    double *out);
+
+/**
  * Array form of `relicore_conformal_time_mpc`: out[i] = conformal_time_mpc(universe, redshifts[i])
  * for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, c·η in Mpc, > 0.
+ * * `out`: n results, c*eta in Mpc, > 0.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -3432,10 +3325,10 @@ int32_t relicore_age_gyr_array(const struct relicore_universe *universe,
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_conformal_time_mpc_array(const struct relicore_universe *universe,
                                           const double *redshifts,
@@ -3443,18 +3336,71 @@ int32_t relicore_conformal_time_mpc_array(const struct relicore_universe *univer
                                           double *out);
 
 /**
+ * Angular-diameter distance of an object at z2 seen from z1 ≤ z2, D_M(χ2 − χ1)/(1 + z2),
+ * Mpc (Hogg 1999 eq. 19, and its sin form for closed models).
+ *
+ * Errors: `NonFinite(i)`, `Negative(i)`, `EmptyInterval(0)` when z2 < z1.
+ * Accuracy: within 1e-12 relative (`f64`) unless z2 − z1 is so small that χ2 − χ1 cancels.
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z1`: redshift of the observer, >= 0.
+ * * `z2`: redshift of the source, >= z1.
+ * * `out`: where the result is written: D_A(z1, z2) in Mpc.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_angular_diameter_distance_between_mpc(const struct relicore_universe *universe,
+                                                       double z1,
+                                                       double z2,
+                                                       double *out);
+
+/**
+ * Redshift at which the age of the universe equals `age_gyr`.
+ *
+ * * `age_gyr`: Gyr, finite and > 0, at most the age today.
+ *
+ * Errors: `NonFinite(0)`, `NonPositive(0)`, `OutOfDomain(0)` above the age today or
+ * below the age at z = 1e12. Accuracy: round trip within 1e-12 relative (`f64`).
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `age_gyr`: age in Gyr, > 0, at most the age today.
+ * * `out`: where the result is written: the redshift z, >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_redshift_at_age_gyr(const struct relicore_universe *universe,
+                                     double age_gyr,
+                                     double *out);
+
+/**
  * Array form of `relicore_redshift_at_age_gyr`: out[i] = redshift_at_age_gyr(universe,
  * ages_gyr[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `ages_gyr`: n ages of the universe in Gyr, each finite and > 0, at most the age today.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `ages_gyr`: n values of `age_gyr`, age in Gyr, > 0, at most the age today.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, redshifts z, ≥ 0.
+ * * `out`: n results, the redshift z, >= 0.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `ages_gyr` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -3462,10 +3408,10 @@ int32_t relicore_conformal_time_mpc_array(const struct relicore_universe *univer
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `ages_gyr` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `ages_gyr` (computed in place); other overlaps give
- * unspecified values.
+ * `ages_gyr` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `ages_gyr` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_redshift_at_age_gyr_array(const struct relicore_universe *universe,
                                            const double *ages_gyr,
@@ -3473,29 +3419,56 @@ int32_t relicore_redshift_at_age_gyr_array(const struct relicore_universe *unive
                                            double *out);
 
 /**
+ * Redshift at which the lookback time equals `lookback_gyr`.
+ *
+ * * `lookback_gyr`: Gyr, finite and ≥ 0, below the age today.
+ *
+ * Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` at or beyond the age today.
+ * Accuracy: round trip within 1e-12 relative (`f64`).
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `lookback_gyr`: lookback time in Gyr, >= 0, below the age today.
+ * * `out`: where the result is written: the redshift z, >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_redshift_at_lookback_time_gyr(const struct relicore_universe *universe,
+                                               double lookback_gyr,
+                                               double *out);
+
+/**
  * Array form of `relicore_redshift_at_lookback_time_gyr`: out[i] =
  * redshift_at_lookback_time_gyr(universe, lookback_times_gyr[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `lookback_times_gyr`: n lookback times in Gyr, each finite and ≥ 0, below the age today.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `lookback_times_gyr`: n values of `lookback_gyr`, lookback time in Gyr, >= 0, below the age
+ *   today.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, redshifts z, ≥ 0.
+ * * `out`: n results, the redshift z, >= 0.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `lookback_times_gyr` or `out` is NULL (even for n
- * = 0) and `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
  * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `lookback_times_gyr` is
- * NULL or points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `lookback_times_gyr` (computed in place); other
- * overlaps give unspecified values.
+ * `lookback_times_gyr` is NULL or points to n readable `double`; `out` is NULL or points to n
+ * writable `double` outside `*universe`. `out` may be the same buffer as `lookback_times_gyr`
+ * (computed in place); other overlaps give unspecified values. `universe` is NULL or points to a
+ * readable `struct relicore_universe`.
  */
 int32_t relicore_redshift_at_lookback_time_gyr_array(const struct relicore_universe *universe,
                                                      const double *lookback_times_gyr,
@@ -3503,29 +3476,55 @@ int32_t relicore_redshift_at_lookback_time_gyr_array(const struct relicore_unive
                                                      double *out);
 
 /**
+ * Redshift at which the line-of-sight comoving distance equals `distance_mpc`.
+ *
+ * * `distance_mpc`: Mpc, finite and ≥ 0.
+ *
+ * Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` beyond the distance reachable
+ * by z = 1e12 (the particle horizon). Accuracy: round trip within 1e-12 relative (`f64`).
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `distance_mpc`: comoving distance in Mpc, >= 0.
+ * * `out`: where the result is written: the redshift z, >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_redshift_at_comoving_distance_mpc(const struct relicore_universe *universe,
+                                                   double distance_mpc,
+                                                   double *out);
+
+/**
  * Array form of `relicore_redshift_at_comoving_distance_mpc`: out[i] =
  * redshift_at_comoving_distance_mpc(universe, distances_mpc[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `distances_mpc`: n line-of-sight comoving distances in Mpc, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `distances_mpc`: n values of `distance_mpc`, comoving distance in Mpc, >= 0.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, redshifts z, ≥ 0.
+ * * `out`: n results, the redshift z, >= 0.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `distances_mpc` or `out` is NULL (even for n = 0)
- * and `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
  * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `distances_mpc` is NULL
- * or points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `distances_mpc` (computed in place); other overlaps
- * give unspecified values.
+ * `distances_mpc` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `distances_mpc` (computed in
+ * place); other overlaps give unspecified values. `universe` is NULL or points to a readable
+ * `struct relicore_universe`.
  */
 int32_t relicore_redshift_at_comoving_distance_mpc_array(const struct relicore_universe *universe,
                                                          const double *distances_mpc,
@@ -3533,121 +3532,61 @@ int32_t relicore_redshift_at_comoving_distance_mpc_array(const struct relicore_u
                                                          double *out);
 
 /**
+ * Redshift at which the luminosity distance equals `distance_mpc`.
+ *
+ * * `distance_mpc`: Mpc, finite and ≥ 0.
+ *
+ * Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` when no redshift up to 1e12
+ * gives it. Accuracy: round trip within 1e-12 relative (`f64`). (In a closed model D_L
+ * need not be monotone; the root in the bracket found is returned.)
+ *
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `distance_mpc`: luminosity distance in Mpc, >= 0.
+ * * `out`: where the result is written: the redshift z, >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
+ */
+int32_t relicore_redshift_at_luminosity_distance_mpc(const struct relicore_universe *universe,
+                                                     double distance_mpc,
+                                                     double *out);
+
+/**
  * Array form of `relicore_redshift_at_luminosity_distance_mpc`: out[i] =
  * redshift_at_luminosity_distance_mpc(universe, distances_mpc[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init`.
- * * `distances_mpc`: n luminosity distances in Mpc, each finite and ≥ 0.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `distances_mpc`: n values of `distance_mpc`, luminosity distance in Mpc, >= 0.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, redshifts z, ≥ 0.
+ * * `out`: n results, the redshift z, >= 0.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `distances_mpc` or `out` is NULL (even for n = 0)
- * and `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
+ * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
  * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `distances_mpc` is NULL
- * or points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `distances_mpc` (computed in place); other overlaps
- * give unspecified values.
+ * `distances_mpc` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `distances_mpc` (computed in
+ * place); other overlaps give unspecified values. `universe` is NULL or points to a readable
+ * `struct relicore_universe`.
  */
 int32_t relicore_redshift_at_luminosity_distance_mpc_array(const struct relicore_universe *universe,
                                                            const double *distances_mpc,
                                                            size_t n,
                                                            double *out);
-
-/**
- * Ionised fraction x_e = n_e/n_H in Saha equilibrium at redshift z: hydrogen and both helium
- * stages (He I → He II → He III) in equilibrium with the radiation at T_r = T0 (1+z), coupled
- * through the electron density. It exceeds 1 while helium is ionised, up to 1 + 2 n_He/n_H.
- *
- * * `universe`: from `relicore_universe_init`; its Ω_b, Y_p, T0 and H0 set the densities (it
- *   needs baryons, Ω_b > 0, and radiation, T0 > 0).
- * * `z`: redshift, finite, 0 ≤ z ≤ 1e8.
- * * `out`: x_e, dimensionless, ≥ 0 (0 where the equilibrium value is below the smallest
- *   positive double, as at z = 0).
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `universe` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not
- * filled by a successful `relicore_universe_init`; `RELICORE_ERROR_NON_FINITE` for a NaN or
- * infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_OUT_OF_DOMAIN` above
- * z = 1e8; `RELICORE_ERROR_INVALID_PARAMETER` for a universe without baryons (Ω_b = 0) or
- * without radiation (T0 = 0).
- *
- * Accuracy: within 1e-13 relative against mpmath (`tests/data/decoupling.txt`).
- *
- * Reference: Saha 1920, Phil. Mag. 40, 472; the cosmological form as in Peebles 1993,
- * Principles of Physical Cosmology, §6. Ionisation energies of the NIST Atomic Spectra
- * Database, atom masses of AME 2020 (`RELICORE_HYDROGEN_IONIZATION_EV`, …).
- *
- * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or points
- * to a writable `double` outside `*universe`.
- */
-int32_t relicore_saha_ionized_fraction(const struct relicore_universe *universe,
-                                       double z,
-                                       double *out);
-
-/**
- * Redshift of last scattering by the fit of Hu & Sugiyama 1996:
- * z* = 1048 [1 + 0.00124 ω_b^−0.738] [1 + g₁ ω_m^g₂], g₁ = 0.0783 ω_b^−0.238/(1 + 39.5 ω_b^0.763),
- * g₂ = 0.560/(1 + 21.1 ω_b^1.81). A fast approximation and cross-check of
- * `relicore_last_scattering_redshift` of a computed history.
- *
- * * `omega_baryon_h2`: ω_b = Ω_b h², finite and > 0.
- * * `omega_matter_h2`: ω_m = Ω_m h², finite and > 0.
- * * `out`: z*, dimensionless.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0; `RELICORE_ERROR_OUT_OF_DOMAIN` when the
- * formula overflows (arguments far outside physical ones).
- *
- * Accuracy: the formula is evaluated to a few ulp (mpmath vectors); the fit itself agrees with
- * full recombination calculations to about 1 % (as its authors state; from memory).
- *
- * Reference: Hu & Sugiyama 1996, ApJ 471, 542, eqs. E1–E2 (coefficients from memory).
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_last_scattering_redshift_fit(double omega_baryon_h2,
-                                              double omega_matter_h2,
-                                              double *out);
-
-/**
- * Redshift of the drag epoch by the fit of Eisenstein & Hu 1998:
- * z_d = 1291 ω_m^0.251/(1 + 0.659 ω_m^0.828) [1 + b₁ ω_b^b₂],
- * b₁ = 0.313 ω_m^−0.419 [1 + 0.607 ω_m^0.674], b₂ = 0.238 ω_m^0.223. A fast approximation and
- * cross-check of `relicore_drag_redshift` of a computed history.
- *
- * * `omega_baryon_h2`: ω_b = Ω_b h², finite and > 0.
- * * `omega_matter_h2`: ω_m = Ω_m h², finite and > 0.
- * * `out`: z_drag, dimensionless.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `out` is NULL; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite argument;
- * `RELICORE_ERROR_NON_POSITIVE` for an argument ≤ 0; `RELICORE_ERROR_OUT_OF_DOMAIN` when the
- * formula overflows (arguments far outside physical ones).
- *
- * Accuracy: the formula is evaluated to a few ulp (mpmath vectors); the fit itself agrees with
- * full calculations to a few per cent or better over the usual parameter range (as its authors
- * quote; from memory).
- *
- * Reference: Eisenstein & Hu 1998, ApJ 496, 605, eq. 4 (coefficients from memory).
- *
- * # Safety
- * `out` is NULL or points to a writable `double`.
- */
-int32_t relicore_drag_redshift_fit(double omega_baryon_h2,
-                                   double omega_matter_h2,
-                                   double *out);
 
 /**
  * Fills `*out` with the default options: no reionisation (`reionization` = 0,
@@ -3716,367 +3655,56 @@ int32_t relicore_thermal_history_compute(const struct relicore_universe *univers
                                          struct relicore_thermal_history *out);
 
 /**
- * Ionised fraction x_e = n_e/n_H of a computed history at redshift z (reionisation included
- * when it was requested; above 1 while helium is ionised).
+ * Ionised fraction x_e = n_e/n_H in Saha equilibrium at redshift z: hydrogen and both helium
+ * stages (He I → He II → He III) in equilibrium with the radiation at T_r = T0 (1+z), coupled
+ * through the electron density (equations: the module doc of `decoupling`). It exceeds
+ * 1 while helium is ionised, up to 1 + 2 n_He/n_H.
  *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `z`: redshift, finite, 0 ≤ z ≤ the highest redshift of the history.
- * * `out`: x_e, dimensionless, > 0.
+ * * `universe`: its Ω_b, Y_p, T0 and H0 set the densities.
+ * * `z`: redshift, finite, 0 ≤ z ≤ 1e8.
  *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `history` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not
- * filled by a successful `relicore_thermal_history_compute`; `RELICORE_ERROR_NON_FINITE` for a
- * NaN or infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_OUT_OF_DOMAIN` above
- * the highest redshift of the history.
+ * Returns x_e, dimensionless (0 where the equilibrium value is below the smallest positive
+ * number of the type, as at z = 0).
  *
- * Accuracy: within 1e-5 relative from z = 1600 to 50 against an independent scipy `solve_ivp`
- * (Radau) integration of the same equations; cubic Hermite interpolation in ln(1+z) between
- * the nodes.
+ * Errors: `NonFinite(1)`, `Negative(1)`, `OutOfDomain(1)` above z = 1e8;
+ * `InvalidParameter(2)` for a universe without baryons, `InvalidParameter(4)` without
+ * radiation (T0 = 0). Accuracy: within 1e-13 relative (`f64`) against mpmath
+ * (`tests/data/decoupling.txt`).
  *
- * Reference: as `relicore_thermal_history_compute`.
+ * Reference: Saha 1920, Phil. Mag. 40, 472; for the cosmological form, e.g. Peebles 1993,
+ * Principles of Physical Cosmology, §6.
  *
- * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `out` is NULL or
- * points to a writable `double` outside `*history`.
- */
-int32_t relicore_ionized_fraction(const struct relicore_thermal_history *history,
-                                  double z,
-                                  double *out);
-
-/**
- * Matter (gas) temperature T_m of a computed history at redshift z (reionisation heating is
- * not modelled).
+ * Arguments of the C function:
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `z`: redshift, finite, 0 <= z <= 1e8.
+ * * `out`: where the result is written: x_e, dimensionless.
  *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `z`: redshift, finite, 0 ≤ z ≤ the highest redshift of the history.
- * * `out`: T_m in K, > 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `history` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not
- * filled by a successful `relicore_thermal_history_compute`; `RELICORE_ERROR_NON_FINITE` for a
- * NaN or infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_OUT_OF_DOMAIN` above
- * the highest redshift of the history.
- *
- * Accuracy: within 1e-5 relative from z = 1600 to 50 against an independent scipy `solve_ivp`
- * (Radau) integration of the same equations.
- *
- * Reference: Compton coupling of matter and radiation as in the module doc of
- * `relicore::decoupling`; as `relicore_thermal_history_compute`.
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*universe` was not filled by a successful `relicore_universe_init`.
  *
  * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `out` is NULL or
- * points to a writable `double` outside `*history`.
+ * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
+ * to a readable `struct relicore_universe`.
  */
-int32_t relicore_matter_temperature_k(const struct relicore_thermal_history *history,
-                                      double z,
-                                      double *out);
-
-/**
- * Thomson optical depth of a computed history from today to redshift z,
- * τ = ∫₀^z n_e σ_T c dz'/((1+z') H(z')) (reionisation included when it was requested).
- *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `z`: redshift, finite, 0 ≤ z ≤ the highest redshift of the history.
- * * `out`: τ, dimensionless, ≥ 0 (0 at z = 0).
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `history` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not
- * filled by a successful `relicore_thermal_history_compute`; `RELICORE_ERROR_NON_FINITE` for a
- * NaN or infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_OUT_OF_DOMAIN` above
- * the highest redshift of the history; `RELICORE_ERROR_NO_CONVERGENCE` if the quadrature of
- * the reionisation part fails (not seen for a computed history).
- *
- * Accuracy: within 1e-5 relative against an independent scipy `solve_ivp` (Radau) integration
- * of the same equations.
- *
- * Reference: as `relicore_thermal_history_compute`.
- *
- * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `out` is NULL or
- * points to a writable `double` outside `*history`.
- */
-int32_t relicore_optical_depth(const struct relicore_thermal_history *history,
-                               double z,
-                               double *out);
-
-/**
- * Visibility function of a computed history per unit conformal distance,
- * g = −dτ/dη e^{−τ} = n_e σ_T a e^{−τ}, at redshift z (its integral over comoving conformal
- * distance is 1 − e^{−τ}).
- *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `z`: redshift, finite, 0 ≤ z ≤ the highest redshift of the history.
- * * `out`: g in Mpc⁻¹, ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `history` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not
- * filled by a successful `relicore_thermal_history_compute`; `RELICORE_ERROR_NON_FINITE` for a
- * NaN or infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_OUT_OF_DOMAIN` above
- * the highest redshift of the history; `RELICORE_ERROR_NO_CONVERGENCE` if the quadrature of
- * the reionisation part fails (not seen for a computed history).
- *
- * Accuracy: within 1e-5 relative near its peak against an independent scipy `solve_ivp`
- * (Radau) integration of the same equations.
- *
- * Reference: as `relicore_thermal_history_compute`.
- *
- * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `out` is NULL or
- * points to a writable `double` outside `*history`.
- */
-int32_t relicore_visibility(const struct relicore_thermal_history *history,
-                            double z,
-                            double *out);
-
-/**
- * Comoving sound horizon of the photon-baryon fluid at redshift z,
- * r_s(z) = ∫_z^∞ c_s dz'/H(z'), c_s = c/√(3(1 + R)), R = 3ρ_b/(4ρ_γ), for the universe of a
- * computed history.
- *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `z`: redshift, finite and ≥ 0 (any z: it needs the background only, not the table).
- * * `out`: r_s in Mpc, > 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when `history` or `out` is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not
- * filled by a successful `relicore_thermal_history_compute`; `RELICORE_ERROR_NON_FINITE` for a
- * NaN or infinite z; `RELICORE_ERROR_NEGATIVE` for z < 0; `RELICORE_ERROR_OUT_OF_DOMAIN` when
- * the result is not representable; `RELICORE_ERROR_NO_CONVERGENCE` if the quadrature fails.
- *
- * Accuracy: within 1e-12 relative against mpmath.
- *
- * Reference: the sound speed of the tightly coupled photon-baryon fluid, e.g. Peebles 1993,
- * Principles of Physical Cosmology, §6; Hu & Sugiyama 1996, ApJ 471, 542.
- *
- * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `out` is NULL or
- * points to a writable `double` outside `*history`.
- */
-int32_t relicore_sound_horizon_mpc(const struct relicore_thermal_history *history,
-                                   double z,
-                                   double *out);
-
-/**
- * Redshift of last scattering z*, where the Thomson optical depth (reionisation excluded)
- * reaches 1.
- *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `out`: z*, dimensionless.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not filled by a
- * successful `relicore_thermal_history_compute`.
- *
- * Accuracy: within 1e-5 relative against an independent scipy `solve_ivp` (Radau) integration
- * of the same equations (the fit `relicore_last_scattering_redshift_fit` is a cross-check to
- * about 1 %).
- *
- * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `out` is NULL or
- * points to a writable `double` outside `*history`.
- */
-int32_t relicore_last_scattering_redshift(const struct relicore_thermal_history *history,
-                                          double *out);
-
-/**
- * Redshift of the drag epoch z_drag, where the baryon-drag optical depth
- * τ_drag = ∫₀^z n_e σ_T c/(R (1+z') H) dz' reaches 1 (R = 3ρ_b/(4ρ_γ)).
- *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `out`: z_drag, dimensionless.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not filled by a
- * successful `relicore_thermal_history_compute`.
- *
- * Accuracy: within 1e-5 relative against an independent scipy `solve_ivp` (Radau) integration
- * of the same equations (the fit `relicore_drag_redshift_fit` is a cross-check to a few per
- * cent).
- *
- * Reference: the drag epoch as defined by Hu & Sugiyama 1996, ApJ 471, 542.
- *
- * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `out` is NULL or
- * points to a writable `double` outside `*history`.
- */
-int32_t relicore_drag_redshift(const struct relicore_thermal_history *history, double *out);
-
-/**
- * Comoving sound horizon at last scattering, r_s(z*).
- *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `out`: r_s(z*) in Mpc.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not filled by a
- * successful `relicore_thermal_history_compute`.
- *
- * Accuracy: that of z* (`relicore_last_scattering_redshift`) carried through r_s(z), whose
- * quadrature is within 1e-12 relative against mpmath.
- *
- * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `out` is NULL or
- * points to a writable `double` outside `*history`.
- */
-int32_t relicore_sound_horizon_last_scattering_mpc(const struct relicore_thermal_history *history,
-                                                   double *out);
-
-/**
- * Comoving sound horizon at the drag epoch, r_s(z_drag).
- *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `out`: r_s(z_drag) in Mpc.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not filled by a
- * successful `relicore_thermal_history_compute`.
- *
- * Accuracy: that of z_drag (`relicore_drag_redshift`) carried through r_s(z), whose quadrature
- * is within 1e-12 relative against mpmath.
- *
- * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `out` is NULL or
- * points to a writable `double` outside `*history`.
- */
-int32_t relicore_sound_horizon_drag_mpc(const struct relicore_thermal_history *history,
-                                        double *out);
-
-/**
- * Angular scale of the sound horizon at last scattering, θ* = r_s(z*)/D_M(z*), with D_M the
- * transverse comoving distance of the universe.
- *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `out`: θ* in radians.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not filled by a
- * successful `relicore_thermal_history_compute`.
- *
- * Accuracy: that of z* (`relicore_last_scattering_redshift`) carried through r_s and D_M.
- *
- * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `out` is NULL or
- * points to a writable `double` outside `*history`.
- */
-int32_t relicore_angular_scale_last_scattering(const struct relicore_thermal_history *history,
-                                               double *out);
-
-/**
- * Age of the universe at last scattering, t(z*).
- *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `out`: t(z*) in years (Julian).
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not filled by a
- * successful `relicore_thermal_history_compute`.
- *
- * Accuracy: that of z* (`relicore_last_scattering_redshift`) carried through the age t(z),
- * whose quadrature is within 1e-12 relative against mpmath.
- *
- * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `out` is NULL or
- * points to a writable `double` outside `*history`.
- */
-int32_t relicore_age_at_last_scattering_yr(const struct relicore_thermal_history *history,
-                                           double *out);
-
-/**
- * Radiation temperature at last scattering, T0 (1 + z*).
- *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `out`: T(z*) in K.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not filled by a
- * successful `relicore_thermal_history_compute`.
- *
- * Accuracy: that of z* (`relicore_last_scattering_redshift`).
- *
- * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `out` is NULL or
- * points to a writable `double` outside `*history`.
- */
-int32_t relicore_temperature_at_last_scattering_k(const struct relicore_thermal_history *history,
-                                                  double *out);
-
-/**
- * Redshift of the peak of the visibility function (per conformal time) at recombination.
- *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `out`: the redshift of the peak, dimensionless.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not filled by a
- * successful `relicore_thermal_history_compute`.
- *
- * Accuracy: within 1e-5 relative against an independent scipy `solve_ivp` (Radau) integration
- * of the same equations.
- *
- * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `out` is NULL or
- * points to a writable `double` outside `*history`.
- */
-int32_t relicore_visibility_peak_redshift(const struct relicore_thermal_history *history,
-                                          double *out);
-
-/**
- * Thermal decoupling: the highest redshift at which the matter temperature has fallen 1 %
- * below the radiation temperature (T_m/T_r = 0.99).
- *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `out`: the redshift, dimensionless.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not filled by a
- * successful `relicore_thermal_history_compute`.
- *
- * Accuracy: within 1e-5 relative against an independent scipy `solve_ivp` (Radau) integration
- * of the same equations.
- *
- * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `out` is NULL or
- * points to a writable `double` outside `*history`.
- */
-int32_t relicore_thermal_decoupling_redshift(const struct relicore_thermal_history *history,
-                                             double *out);
-
-/**
- * Thomson optical depth of reionisation: τ − τ_rec at the highest redshift of the history (0
- * without reionisation).
- *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `out`: τ_reion, dimensionless, ≥ 0.
- *
- * Returns `RELICORE_OK`, or an error code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
- * when a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not filled by a
- * successful `relicore_thermal_history_compute`.
- *
- * Accuracy: within 1e-5 relative against an independent scipy integration of the same
- * equations (adaptive quadrature of the tanh reionisation to 1e-12 relative).
- *
- * Reference: the tanh reionisation of Lewis 2008, PRD 78, 023002.
- *
- * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `out` is NULL or
- * points to a writable `double` outside `*history`.
- */
-int32_t relicore_reionization_optical_depth(const struct relicore_thermal_history *history,
-                                            double *out);
+int32_t relicore_saha_ionized_fraction(const struct relicore_universe *universe,
+                                       double z,
+                                       double *out);
 
 /**
  * Array form of `relicore_saha_ionized_fraction`: out[i] = saha_ionized_fraction(universe,
  * redshifts[i]) for i < n.
  *
- * * `universe`: from `relicore_universe_init` (with baryons and radiation).
- * * `redshifts`: n redshifts, each finite, 0 ≤ z ≤ 1e8.
+ * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `redshifts`: n values of `z`, redshift, finite, 0 <= z <= 1e8.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, x_e = n_e/n_H in Saha equilibrium, dimensionless.
+ * * `out`: n results, x_e, dimensionless.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `universe`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a successful
  * `relicore_universe_init`; then every element of a non-NULL `out` is NaN.
  *
@@ -4084,10 +3712,10 @@ int32_t relicore_reionization_optical_depth(const struct relicore_thermal_histor
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `universe` is NULL or points to a readable `struct relicore_universe`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*universe`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*universe`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `universe` is NULL or points to a readable `struct
+ * relicore_universe`.
  */
 int32_t relicore_saha_ionized_fraction_array(const struct relicore_universe *universe,
                                              const double *redshifts,
@@ -4095,19 +3723,48 @@ int32_t relicore_saha_ionized_fraction_array(const struct relicore_universe *uni
                                              double *out);
 
 /**
- * Array form of `relicore_last_scattering_redshift_fit`: out[i] = last_scattering_redshift_fit(omega_baryon_h2[i],
- * omega_matter_h2) for i < n, at one ω_m.
+ * Redshift of last scattering by the fit of Hu & Sugiyama 1996 (ApJ 471, 542, eqs. E1–E2;
+ * coefficients from memory):
+ * z* = 1048 [1 + 0.00124 ω_b^−0.738] [1 + g₁ ω_m^g₂], g₁ = 0.0783 ω_b^−0.238/(1 + 39.5 ω_b^0.763),
+ * g₂ = 0.560/(1 + 21.1 ω_b^1.81).
  *
- * * `omega_baryon_h2`: n values of ω_b = Ω_b h², each finite and > 0.
+ * * `omega_baryon_h2`: ω_b = Ω_b h², > 0.
+ * * `omega_matter_h2`: ω_m = Ω_m h², > 0.
+ *
+ * Returns z*, dimensionless. Errors: `NonFinite(i)`, `NonPositive(i)`. Accuracy: the fit's
+ * own, about 1% against full recombination calculations (as its authors state; from memory);
+ * the formula itself is evaluated to a few ulp (mpmath vectors).
+ *
+ * Arguments of the C function:
+ * * `omega_baryon_h2`: Omega_b h^2, > 0.
+ * * `omega_matter_h2`: Omega_m h^2, > 0.
+ * * `out`: where the result is written: z*, dimensionless.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_last_scattering_redshift_fit(double omega_baryon_h2,
+                                              double omega_matter_h2,
+                                              double *out);
+
+/**
+ * Array form of `relicore_last_scattering_redshift_fit`: out[i] =
+ * last_scattering_redshift_fit(omega_baryon_h2[i], omega_matter_h2) for i < n.
+ *
+ * * `omega_baryon_h2`: n values of `omega_baryon_h2`, Omega_b h^2, > 0.
  * * `n`: number of elements of both arrays.
- * * `omega_matter_h2`: ω_m = Ω_m h², finite and > 0 (when it is not, every element fails).
- * * `out`: n results, z*, the last-scattering redshift of the fit of Hu & Sugiyama 1996.
+ * * `omega_matter_h2`: Omega_m h^2, > 0.
+ * * `out`: n results, z*, dimensionless.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
- * failing element is returned (`RELICORE_ERROR_NON_FINITE`, `RELICORE_ERROR_NON_POSITIVE`,
- * `RELICORE_ERROR_OUT_OF_DOMAIN`). `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL
- * (even for n = 0); then every output of a non-NULL `out` is NaN.
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0); then every element of a
+ * non-NULL `out` is NaN.
  *
  * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
  * accuracy as there. Allocates nothing.
@@ -4123,19 +3780,46 @@ int32_t relicore_last_scattering_redshift_fit_array(const double *omega_baryon_h
                                                     double *out);
 
 /**
- * Array form of `relicore_drag_redshift_fit`: out[i] = drag_redshift_fit(omega_baryon_h2[i],
- * omega_matter_h2) for i < n, at one ω_m.
+ * Redshift of the drag epoch by the fit of Eisenstein & Hu 1998 (ApJ 496, 605, eq. 4;
+ * coefficients from memory):
+ * z_d = 1291 ω_m^0.251/(1 + 0.659 ω_m^0.828) [1 + b₁ ω_b^b₂],
+ * b₁ = 0.313 ω_m^−0.419 [1 + 0.607 ω_m^0.674], b₂ = 0.238 ω_m^0.223.
  *
- * * `omega_baryon_h2`: n values of ω_b = Ω_b h², each finite and > 0.
+ * * `omega_baryon_h2`: ω_b = Ω_b h², > 0.
+ * * `omega_matter_h2`: ω_m = Ω_m h², > 0.
+ *
+ * Returns z_d, dimensionless. Errors: `NonFinite(i)`, `NonPositive(i)`. Accuracy: the fit's
+ * own (its authors quote a few per cent or better over the usual parameter range; from
+ * memory); the formula itself is evaluated to a few ulp (mpmath vectors).
+ *
+ * Arguments of the C function:
+ * * `omega_baryon_h2`: Omega_b h^2, > 0.
+ * * `omega_matter_h2`: Omega_m h^2, > 0.
+ * * `out`: where the result is written: z_drag, dimensionless.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_drag_redshift_fit(double omega_baryon_h2, double omega_matter_h2, double *out);
+
+/**
+ * Array form of `relicore_drag_redshift_fit`: out[i] = drag_redshift_fit(omega_baryon_h2[i],
+ * omega_matter_h2) for i < n.
+ *
+ * * `omega_baryon_h2`: n values of `omega_baryon_h2`, Omega_b h^2, > 0.
  * * `n`: number of elements of both arrays.
- * * `omega_matter_h2`: ω_m = Ω_m h², finite and > 0 (when it is not, every element fails).
- * * `out`: n results, z_drag, the drag redshift of the fit of Eisenstein & Hu 1998.
+ * * `omega_matter_h2`: Omega_m h^2, > 0.
+ * * `out`: n results, z_drag, dimensionless.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
- * failing element is returned (`RELICORE_ERROR_NON_FINITE`, `RELICORE_ERROR_NON_POSITIVE`,
- * `RELICORE_ERROR_OUT_OF_DOMAIN`). `RELICORE_ERROR_NULL_POINTER` when an array pointer is NULL
- * (even for n = 0); then every output of a non-NULL `out` is NaN.
+ * failing element is returned (the element errors of the scalar function).
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0); then every element of a
+ * non-NULL `out` is NaN.
  *
  * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
  * accuracy as there. Allocates nothing.
@@ -4151,17 +3835,46 @@ int32_t relicore_drag_redshift_fit_array(const double *omega_baryon_h2,
                                          double *out);
 
 /**
- * Array form of `relicore_ionized_fraction`: out[i] = ionized_fraction(history, redshifts[i]) for i < n.
+ * Ionised fraction x_e = n_e/n_H at redshift z (reionisation included when it was
+ * requested; above 1 while helium is ionised).
  *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `redshifts`: n redshifts, each finite, 0 ≤ z ≤ the highest redshift of the history.
+ * * `z`: redshift, finite, 0 ≤ z ≤ the highest redshift of the table.
+ *
+ * Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` above the table. Accuracy:
+ * within 1e-5 relative from z = 1600 to 50 against scipy `solve_ivp` on the same
+ * equations; cubic Hermite interpolation in ln(1+z) between nodes.
+ *
+ * Arguments of the C function:
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `z`: redshift, finite, 0 <= z <= the highest redshift of the history.
+ * * `out`: where the result is written: x_e, dimensionless.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*history` was not filled by a successful `relicore_thermal_history_compute`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*history`. `history` is NULL or points
+ * to a readable `struct relicore_thermal_history`.
+ */
+int32_t relicore_ionized_fraction(const struct relicore_thermal_history *history,
+                                  double z,
+                                  double *out);
+
+/**
+ * Array form of `relicore_ionized_fraction`: out[i] = ionized_fraction(history, redshifts[i]) for
+ * i < n.
+ *
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `redshifts`: n values of `z`, redshift, finite, 0 <= z <= the highest redshift of the history.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, x_e = n_e/n_H, dimensionless.
+ * * `out`: n results, x_e, dimensionless.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `history`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not filled by a successful
  * `relicore_thermal_history_compute`; then every element of a non-NULL `out` is NaN.
  *
@@ -4169,10 +3882,10 @@ int32_t relicore_drag_redshift_fit_array(const double *omega_baryon_h2,
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*history`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*history`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `history` is NULL or points to a readable `struct
+ * relicore_thermal_history`.
  */
 int32_t relicore_ionized_fraction_array(const struct relicore_thermal_history *history,
                                         const double *redshifts,
@@ -4180,17 +3893,41 @@ int32_t relicore_ionized_fraction_array(const struct relicore_thermal_history *h
                                         double *out);
 
 /**
- * Array form of `relicore_matter_temperature_k`: out[i] = matter_temperature_k(history, redshifts[i]) for i < n.
+ * Matter (gas) temperature T_m at redshift z, K (reionisation heating is not modelled).
  *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `redshifts`: n redshifts, each finite, 0 ≤ z ≤ the highest redshift of the history.
+ * Errors and accuracy as `ionized_fraction`.
+ *
+ * Arguments of the C function:
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `z`: redshift, finite, 0 <= z <= the highest redshift of the history.
+ * * `out`: where the result is written: T_m in K.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*history` was not filled by a successful `relicore_thermal_history_compute`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*history`. `history` is NULL or points
+ * to a readable `struct relicore_thermal_history`.
+ */
+int32_t relicore_matter_temperature_k(const struct relicore_thermal_history *history,
+                                      double z,
+                                      double *out);
+
+/**
+ * Array form of `relicore_matter_temperature_k`: out[i] = matter_temperature_k(history,
+ * redshifts[i]) for i < n.
+ *
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `redshifts`: n values of `z`, redshift, finite, 0 <= z <= the highest redshift of the history.
  * * `n`: number of elements of both arrays.
  * * `out`: n results, T_m in K.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `history`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not filled by a successful
  * `relicore_thermal_history_compute`; then every element of a non-NULL `out` is NaN.
  *
@@ -4198,10 +3935,10 @@ int32_t relicore_ionized_fraction_array(const struct relicore_thermal_history *h
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*history`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*history`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `history` is NULL or points to a readable `struct
+ * relicore_thermal_history`.
  */
 int32_t relicore_matter_temperature_k_array(const struct relicore_thermal_history *history,
                                             const double *redshifts,
@@ -4209,17 +3946,42 @@ int32_t relicore_matter_temperature_k_array(const struct relicore_thermal_histor
                                             double *out);
 
 /**
+ * Thomson optical depth from today to redshift z, τ = ∫₀^z n_e σ_T c dz'/((1+z')H),
+ * dimensionless (reionisation included when it was requested).
+ *
+ * Errors as `ionized_fraction`. Accuracy: within 1e-5 relative
+ * against scipy `solve_ivp` on the same equations.
+ *
+ * Arguments of the C function:
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `z`: redshift, finite, 0 <= z <= the highest redshift of the history.
+ * * `out`: where the result is written: tau, dimensionless.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*history` was not filled by a successful `relicore_thermal_history_compute`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*history`. `history` is NULL or points
+ * to a readable `struct relicore_thermal_history`.
+ */
+int32_t relicore_optical_depth(const struct relicore_thermal_history *history,
+                               double z,
+                               double *out);
+
+/**
  * Array form of `relicore_optical_depth`: out[i] = optical_depth(history, redshifts[i]) for i < n.
  *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `redshifts`: n redshifts, each finite, 0 ≤ z ≤ the highest redshift of the history.
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `redshifts`: n values of `z`, redshift, finite, 0 <= z <= the highest redshift of the history.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, τ, dimensionless.
+ * * `out`: n results, tau, dimensionless.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `history`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not filled by a successful
  * `relicore_thermal_history_compute`; then every element of a non-NULL `out` is NaN.
  *
@@ -4227,10 +3989,10 @@ int32_t relicore_matter_temperature_k_array(const struct relicore_thermal_histor
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*history`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*history`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `history` is NULL or points to a readable `struct
+ * relicore_thermal_history`.
  */
 int32_t relicore_optical_depth_array(const struct relicore_thermal_history *history,
                                      const double *redshifts,
@@ -4238,17 +4000,40 @@ int32_t relicore_optical_depth_array(const struct relicore_thermal_history *hist
                                      double *out);
 
 /**
+ * Visibility function per unit conformal distance, g = −dτ/dη e^{−τ} = n_e σ_T a e^{−τ},
+ * in Mpc⁻¹ (its integral over comoving conformal distance is 1 − e^{−τ}).
+ *
+ * Errors as `ionized_fraction`. Accuracy: within 1e-5 relative
+ * against scipy `solve_ivp` near the peak.
+ *
+ * Arguments of the C function:
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `z`: redshift, finite, 0 <= z <= the highest redshift of the history.
+ * * `out`: where the result is written: g in Mpc-1.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*history` was not filled by a successful `relicore_thermal_history_compute`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*history`. `history` is NULL or points
+ * to a readable `struct relicore_thermal_history`.
+ */
+int32_t relicore_visibility(const struct relicore_thermal_history *history, double z, double *out);
+
+/**
  * Array form of `relicore_visibility`: out[i] = visibility(history, redshifts[i]) for i < n.
  *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `redshifts`: n redshifts, each finite, 0 ≤ z ≤ the highest redshift of the history.
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `redshifts`: n values of `z`, redshift, finite, 0 <= z <= the highest redshift of the history.
  * * `n`: number of elements of both arrays.
- * * `out`: n results, g in Mpc⁻¹.
+ * * `out`: n results, g in Mpc-1.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `history`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not filled by a successful
  * `relicore_thermal_history_compute`; then every element of a non-NULL `out` is NaN.
  *
@@ -4256,10 +4041,10 @@ int32_t relicore_optical_depth_array(const struct relicore_thermal_history *hist
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*history`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*history`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `history` is NULL or points to a readable `struct
+ * relicore_thermal_history`.
  */
 int32_t relicore_visibility_array(const struct relicore_thermal_history *history,
                                   const double *redshifts,
@@ -4267,17 +4052,44 @@ int32_t relicore_visibility_array(const struct relicore_thermal_history *history
                                   double *out);
 
 /**
- * Array form of `relicore_sound_horizon_mpc`: out[i] = sound_horizon_mpc(history, redshifts[i]) for i < n.
+ * Comoving sound horizon r_s(z) = ∫_z^∞ c_s dz'/H(z'), c_s = c/√(3(1+R)),
+ * R = 3ρ_b/(4ρ_γ), in Mpc.
  *
- * * `history`: from `relicore_thermal_history_compute`.
- * * `redshifts`: n redshifts, each finite and ≥ 0.
+ * * `z`: redshift, finite and ≥ 0 (any z: it needs the background only).
+ *
+ * Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-12 relative against mpmath.
+ *
+ * Arguments of the C function:
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `z`: redshift, finite and >= 0 (any z).
+ * * `out`: where the result is written: r_s in Mpc.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*history` was not filled by a successful `relicore_thermal_history_compute`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*history`. `history` is NULL or points
+ * to a readable `struct relicore_thermal_history`.
+ */
+int32_t relicore_sound_horizon_mpc(const struct relicore_thermal_history *history,
+                                   double z,
+                                   double *out);
+
+/**
+ * Array form of `relicore_sound_horizon_mpc`: out[i] = sound_horizon_mpc(history, redshifts[i])
+ * for i < n.
+ *
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `redshifts`: n values of `z`, redshift, finite and >= 0 (any z).
  * * `n`: number of elements of both arrays.
  * * `out`: n results, r_s in Mpc.
  *
  * Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). When
  * some elements fail, those outputs are NaN, the others are computed, and the code of the first
  * failing element is returned (the element errors of the scalar function).
- * `RELICORE_ERROR_NULL_POINTER` when `history`, `redshifts` or `out` is NULL (even for n = 0) and
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0) and
  * `RELICORE_ERROR_INVALID_STRUCT` when `*history` was not filled by a successful
  * `relicore_thermal_history_compute`; then every element of a non-NULL `out` is NaN.
  *
@@ -4285,15 +4097,206 @@ int32_t relicore_visibility_array(const struct relicore_thermal_history *history
  * accuracy as there. Allocates nothing.
  *
  * # Safety
- * `history` is NULL or points to a readable `struct relicore_thermal_history`; `redshifts` is NULL or
- * points to n readable `double`; `out` is NULL or points to n writable `double` outside
- * `*history`. `out` may be the same buffer as `redshifts` (computed in place); other overlaps
- * give unspecified values.
+ * `redshifts` is NULL or points to n readable `double`; `out` is NULL or points to n writable
+ * `double` outside `*history`. `out` may be the same buffer as `redshifts` (computed in place);
+ * other overlaps give unspecified values. `history` is NULL or points to a readable `struct
+ * relicore_thermal_history`.
  */
 int32_t relicore_sound_horizon_mpc_array(const struct relicore_thermal_history *history,
                                          const double *redshifts,
                                          size_t n,
                                          double *out);
+
+/**
+ * Redshift of last scattering z*, where the Thomson optical depth (reionisation excluded)
+ * reaches 1.
+ *
+ * Arguments of the C function:
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `out`: where the result is written: z*.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*history` was not filled by a successful `relicore_thermal_history_compute`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*history`. `history` is NULL or points
+ * to a readable `struct relicore_thermal_history`.
+ */
+int32_t relicore_last_scattering_redshift(const struct relicore_thermal_history *history,
+                                          double *out);
+
+/**
+ * Redshift of the drag epoch, where the baryon-drag optical depth reaches 1.
+ *
+ * Arguments of the C function:
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `out`: where the result is written: z_drag.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*history` was not filled by a successful `relicore_thermal_history_compute`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*history`. `history` is NULL or points
+ * to a readable `struct relicore_thermal_history`.
+ */
+int32_t relicore_drag_redshift(const struct relicore_thermal_history *history, double *out);
+
+/**
+ * Comoving sound horizon at last scattering r_s(z*), Mpc.
+ *
+ * Arguments of the C function:
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `out`: where the result is written: r_s(z*) in Mpc.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*history` was not filled by a successful `relicore_thermal_history_compute`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*history`. `history` is NULL or points
+ * to a readable `struct relicore_thermal_history`.
+ */
+int32_t relicore_sound_horizon_last_scattering_mpc(const struct relicore_thermal_history *history,
+                                                   double *out);
+
+/**
+ * Comoving sound horizon at the drag epoch r_s(z_drag), Mpc.
+ *
+ * Arguments of the C function:
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `out`: where the result is written: r_s(z_drag) in Mpc.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*history` was not filled by a successful `relicore_thermal_history_compute`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*history`. `history` is NULL or points
+ * to a readable `struct relicore_thermal_history`.
+ */
+int32_t relicore_sound_horizon_drag_mpc(const struct relicore_thermal_history *history,
+                                        double *out);
+
+/**
+ * Angular scale of the sound horizon at last scattering θ* = r_s(z*)/D_M(z*), radians.
+ *
+ * Arguments of the C function:
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `out`: where the result is written: theta* in radians.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*history` was not filled by a successful `relicore_thermal_history_compute`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*history`. `history` is NULL or points
+ * to a readable `struct relicore_thermal_history`.
+ */
+int32_t relicore_angular_scale_last_scattering(const struct relicore_thermal_history *history,
+                                               double *out);
+
+/**
+ * Age of the universe at last scattering, years (Julian).
+ *
+ * Arguments of the C function:
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `out`: where the result is written: t(z*) in years (Julian).
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*history` was not filled by a successful `relicore_thermal_history_compute`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*history`. `history` is NULL or points
+ * to a readable `struct relicore_thermal_history`.
+ */
+int32_t relicore_age_at_last_scattering_yr(const struct relicore_thermal_history *history,
+                                           double *out);
+
+/**
+ * Radiation temperature at last scattering T0 (1 + z*), K.
+ *
+ * Arguments of the C function:
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `out`: where the result is written: T(z*) in K.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*history` was not filled by a successful `relicore_thermal_history_compute`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*history`. `history` is NULL or points
+ * to a readable `struct relicore_thermal_history`.
+ */
+int32_t relicore_temperature_at_last_scattering_k(const struct relicore_thermal_history *history,
+                                                  double *out);
+
+/**
+ * Redshift of the peak of the visibility function (per conformal time) at recombination.
+ *
+ * Arguments of the C function:
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `out`: where the result is written: the redshift of the peak.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*history` was not filled by a successful `relicore_thermal_history_compute`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*history`. `history` is NULL or points
+ * to a readable `struct relicore_thermal_history`.
+ */
+int32_t relicore_visibility_peak_redshift(const struct relicore_thermal_history *history,
+                                          double *out);
+
+/**
+ * Thermal decoupling: the highest redshift at which the matter temperature has fallen 1 %
+ * below the radiation temperature (T_m/T_r = 0.99).
+ *
+ * Arguments of the C function:
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `out`: where the result is written: the redshift.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*history` was not filled by a successful `relicore_thermal_history_compute`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*history`. `history` is NULL or points
+ * to a readable `struct relicore_thermal_history`.
+ */
+int32_t relicore_thermal_decoupling_redshift(const struct relicore_thermal_history *history,
+                                             double *out);
+
+/**
+ * Thomson optical depth of reionisation (0 without reionisation).
+ *
+ * Arguments of the C function:
+ * * `history`: a `struct relicore_thermal_history` filled by `relicore_thermal_history_compute`.
+ * * `out`: where the result is written: tau_reion.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
+ * `*history` was not filled by a successful `relicore_thermal_history_compute`.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double` outside `*history`. `history` is NULL or points
+ * to a readable `struct relicore_thermal_history`.
+ */
+int32_t relicore_reionization_optical_depth(const struct relicore_thermal_history *history,
+                                            double *out);
 
 #ifdef __cplusplus
 }  // extern "C"

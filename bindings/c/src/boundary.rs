@@ -360,11 +360,11 @@ mod tests {
         let mut o = 2.0_f64;
         // SAFETY: o valid.
         let code =
-            unsafe { crate::blackbody::relicore_spectral_radiance_wavelength(1e-6, 300.0, &mut o) };
+            unsafe { crate::gen_blackbody::relicore_spectral_radiance_wavelength(1e-6, 300.0, &mut o) };
         assert_eq!(code, RELICORE_OK);
         // SAFETY: NULL out is allowed.
         let code = unsafe {
-            crate::blackbody::relicore_spectral_radiance_wavelength(
+            crate::gen_blackbody::relicore_spectral_radiance_wavelength(
                 1e-6,
                 300.0,
                 std::ptr::null_mut(),

@@ -123,3 +123,46 @@ fn header_declares_every_export_and_status_code() {
     }
     assert!(count > 140, "found only {count} exports in bindings/c/src");
 }
+
+/// Every prototype of a header, normalised to single spaces and sorted.
+fn prototypes(header: &str) -> Vec<String> {
+    // drop comments, then split at ';' and keep the function declarations
+    let mut text = String::new();
+    let mut rest = header;
+    while let Some(start) = rest.find("/*") {
+        text.push_str(&rest[..start]);
+        rest = rest[start..].find("*/").map_or("", |end| &rest[start + end + 2..]);
+    }
+    text.push_str(rest);
+    let mut out: Vec<String> = text
+        .split(';')
+        .map(|d| d.split_whitespace().collect::<Vec<_>>().join(" "))
+        .filter_map(|d| {
+            let start = ["int32_t relicore_", "const char *relicore_", "void relicore_"]
+                .iter()
+                .filter_map(|t| d.rfind(t))
+                .max()?;
+            let d = &d[start..];
+            (d.ends_with(')') && d.contains('(')).then(|| d.to_string())
+        })
+        .collect();
+    out.sort();
+    out
+}
+
+#[test]
+fn the_set_of_prototypes_is_the_committed_list() {
+    let committed = std::fs::read_to_string(crate_dir().join("prototypes.txt")).unwrap_or_default();
+    let want: Vec<String> = committed
+        .lines()
+        .filter(|l| !l.starts_with('#') && !l.is_empty())
+        .map(str::to_string)
+        .collect();
+    let got = prototypes(&generate());
+    let missing: Vec<_> = want.iter().filter(|p| !got.contains(p)).collect();
+    let extra: Vec<_> = got.iter().filter(|p| !want.contains(p)).collect();
+    assert!(
+        missing.is_empty() && extra.is_empty(),
+        "the header's prototypes differ from bindings/c/prototypes.txt\nmissing: {missing:#?}\nnew: {extra:#?}"
+    );
+}

@@ -17,12 +17,12 @@
 //! * nothing allocates, nothing keeps global state: every function is thread-safe.
 //!
 //! Module map: `status` (codes, messages, version), `constants` (physical constants),
-//! `boundary` (plumbing), `blackbody` (scalar `double`), `array` (array forms), `single`
-//! (`float` twins), `calibration` (two-load calibration), `response` (response-weighted
-//! radiance), `universe` (the universe struct, its init function, parameters and constants),
-//! `cosmology` (the redshift functions of a universe, their inverses), `cosmology_array`
-//! (their array forms), `decoupling` (Saha equilibrium, the fits, the thermal-history struct,
-//! its compute function, queries and summary), `decoupling_array` (their array forms).
+//! `boundary` (plumbing), `calibration` (two-load calibration), `response` (response-weighted
+//! radiance), `universe` (the universe struct, its init function and parameters),
+//! `decoupling` (the thermal-history struct and its compute function), and the generated
+//! `gen_blackbody`, `gen_cosmology`, `gen_decoupling`: the exports of every regular function of
+//! `bindings/functions.toml` (`double`, `float` twins, array forms), written by
+//! `bindings/generate.py` from that table and the core's rustdoc.
 
 #![deny(missing_docs)]
 #![cfg_attr(
@@ -43,11 +43,7 @@ pub mod constants;
 
 mod boundary;
 
-pub mod blackbody;
-
-pub mod array;
-
-pub mod single;
+pub mod gen_blackbody;
 
 pub mod calibration;
 
@@ -55,13 +51,11 @@ pub mod response;
 
 pub mod universe;
 
-pub mod cosmology;
-
-pub mod cosmology_array;
+pub mod gen_cosmology;
 
 pub mod decoupling;
 
-pub mod decoupling_array;
+pub mod gen_decoupling;
 
 #[cfg(test)]
 mod header;

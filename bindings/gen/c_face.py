@@ -1,0 +1,285 @@
+"""The C exports of the regular functions (bindings/c/src/gen_<topic>.rs): one plain
+`extern "C"` function per form, so cbindgen on stable Rust reads them as it reads hand-written
+ones. Each body is one call of the boundary helpers of bindings/c/src (scalar, elementwise,
+through_array, universe_*, history_*); the documentation is the core's rustdoc plus the C face's
+conventions."""
+
+from __future__ import annotations
+
+import re
+import subprocess
+import textwrap
+from pathlib import Path
+
+from . import rustdoc
+from .common import banner
+from .table import ROOT, TOPICS, Function
+
+C_SRC = ROOT / "bindings" / "c" / "src"
+
+RECEIVER_TYPE = {"universe": "relicore_universe", "history": "relicore_thermal_history"}
+RECEIVER_FILLED_BY = {
+    "universe": "`relicore_universe_init`",
+    "history": "`relicore_thermal_history_compute`",
+}
+CORE_TYPE = {"universe": "Universe<f64>", "history": "ThermalHistory<f64>"}
+SHORT = {"blackbody": "bb", "cosmology": "cosmo", "decoupling": "dc"}
+
+
+def _doc(lines: list[str]) -> list[str]:
+    """Doc comment lines, long ones wrapped at 100 columns (bullets keep a hanging indent)."""
+    out = []
+    for line in lines:
+        if len(line) <= 96:
+            out.append(f"/// {line}".rstrip())
+            continue
+        indent = "  " if line.lstrip().startswith("* ") else ""
+        for piece in textwrap.wrap(line, 96, subsequent_indent=indent, break_on_hyphens=False):
+            out.append(f"/// {piece}")
+    return out
+
+
+def _core_call(fn: Function, args: list[str], suffix: str = "") -> str:
+    """The core call with the given argument expressions (receiver as `r`)."""
+    a = ", ".join(args)
+    if fn.receiver == "none":
+        return f"{SHORT[fn.topic]}::{fn.name}{suffix}({a})"
+    if fn.core:
+        topic, _, name = fn.core.partition("::")
+        return f"{SHORT[topic]}::{name}{suffix}(r{', ' if a else ''}{a})"
+    return f"r.{fn.name}{suffix}({a})"
+
+
+def _receiver_lines(fn: Function) -> list[str]:
+    if fn.receiver == "none":
+        return []
+    return [f"* `{fn.receiver}`: a `struct {RECEIVER_TYPE[fn.receiver]}` filled by {RECEIVER_FILLED_BY[fn.receiver]}."]
+
+
+def _invalid_struct(fn: Function) -> str:
+    if fn.receiver == "none":
+        return ""
+    return (
+        f" `RELICORE_ERROR_INVALID_STRUCT` when `*{fn.receiver}` was not filled by a successful "
+        f"{RECEIVER_FILLED_BY[fn.receiver]}."
+    )
+
+
+def _safety_receiver(fn: Function) -> str:
+    if fn.receiver == "none":
+        return ""
+    return f" `{fn.receiver}` is NULL or points to a readable `struct {RECEIVER_TYPE[fn.receiver]}`."
+
+
+def scalar_export(fn: Function, ty: str) -> str:
+    c_ty = "double" if ty == "f64" else "float"
+    name = fn.c_name + ("" if ty == "f64" else "_f32")
+    doc = rustdoc.find(fn)[1]
+    lines: list[str] = []
+    if ty == "f32":
+        lines += [
+            f"Single-precision twin of `{fn.c_name}`: the same core function computed in `float`.",
+            "",
+        ]
+    lines += doc + [""]
+    lines += ["Arguments of the C function:"] + _receiver_lines(fn)
+    lines += [f"* `{a.name}`: {a.meaning}." for a in fn.args]
+    lines += [f"* `out`: where the result is written: {fn.result}.", ""]
+    lines += [
+        "Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the "
+        "core's errors named above as status codes (`relicore_status_message` gives the text); "
+        f"`RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.{_invalid_struct(fn)}",
+        "",
+        "# Safety",
+        f"`out` is NULL or points to a writable `{c_ty}`" + ("." if fn.receiver == "none" else f" outside `*{fn.receiver}`.")
+        + _safety_receiver(fn),
+    ]
+    params = []
+    if fn.receiver != "none":
+        params.append(f"{fn.receiver}: *const {RECEIVER_TYPE[fn.receiver]}")
+    params += [f"{a.name}: {ty}" for a in fn.args]
+    params.append(f"out: *mut {ty}")
+    call = _core_call(fn, fn.arg_names)
+    if fn.receiver == "none":
+        body = f"scalar(out, || {call})"
+    elif fn.receiver == "universe":
+        inner = f"Ok({call})" if fn.infallible else call
+        body = f"universe_scalar(universe, out, |r| {inner})"
+    elif fn.infallible:
+        body = f"history_summary(history, out, |r| {call})"
+    else:
+        body = f"history_scalar(history, out, |r| {call})"
+    return "\n".join(
+        _doc(lines)
+        + [
+            "#[unsafe(no_mangle)]",
+            f"pub unsafe extern \"C\" fn {name}({', '.join(params)}) -> i32 {{",
+            "    // SAFETY: the pointers are NULL or valid (this function's contract).",
+            f"    unsafe {{ {body} }}",
+            "}",
+        ]
+    )
+
+
+def array_export(fn: Function, ty: str) -> str:
+    assert fn.array
+    c_ty = "double" if ty == "f64" else "float"
+    name = fn.c_name + ("_array" if ty == "f64" else "_array_f32")
+    arr = fn.array
+    k = arr.index(fn)
+    element = [a.name if a.name != arr.arg else f"{arr.name}[i]" for a in fn.args]
+    lines = [
+        f"Array form of `{fn.c_name}{'' if ty == 'f64' else '_f32'}`: out[i] = {fn.name}("
+        + ", ".join(([fn.receiver] if fn.receiver != "none" else []) + element)
+        + ") for i < n.",
+        "",
+    ]
+    lines += _receiver_lines(fn)
+    for a in fn.args:
+        if a.name == arr.arg:
+            lines.append(f"* `{arr.name}`: n values of `{a.name}`, {a.meaning}.")
+            lines.append("* `n`: number of elements of both arrays.")
+        else:
+            lines.append(f"* `{a.name}`: {a.meaning}.")
+    lines += [f"* `out`: n results, {fn.result}.", ""]
+    lines += [
+        "Returns `RELICORE_OK` when every element succeeded (n = 0 included: nothing is written). "
+        "When some elements fail, those outputs are NaN, the others are computed, and the code of "
+        "the first failing element is returned (the element errors of the scalar function). "
+        "`RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0)"
+        + (f" and `RELICORE_ERROR_INVALID_STRUCT` when `*{fn.receiver}` was not filled by a successful "
+           f"{RECEIVER_FILLED_BY[fn.receiver]}" if fn.receiver != "none" else "")
+        + "; then every element of a non-NULL `out` is NaN.",
+        "",
+        (
+            "Computed by the core's array form (blocks of 64 elements in SIMD, in the widest "
+            "compilation the CPU supports), with the scalar function's bits. Allocates nothing."
+            if arr.simd
+            else "Each element is computed by the same code as the scalar function, so the two agree "
+            "bit for bit; accuracy as there. Allocates nothing."
+        ),
+        "",
+        "# Safety",
+        f"`{arr.name}` is NULL or points to n readable `{c_ty}`; `out` is NULL or points to n "
+        f"writable `{c_ty}`" + ("" if fn.receiver == "none" else f" outside `*{fn.receiver}`")
+        + f". `out` may be the same buffer as `{arr.name}` (computed in place); other overlaps "
+        "give unspecified values." + _safety_receiver(fn),
+    ]
+    params = []
+    if fn.receiver != "none":
+        params.append(f"{fn.receiver}: *const {RECEIVER_TYPE[fn.receiver]}")
+    for a in fn.args:
+        if a.name == arr.arg:
+            params += [f"{arr.name}: *const {ty}", "n: usize"]
+        else:
+            params.append(f"{a.name}: {ty}")
+    params.append(f"out: *mut {ty}")
+    shared = [a for a in fn.arg_names if a != arr.arg]
+    if arr.simd:
+        if fn.receiver == "none":
+            sig = ", ".join([f"x: &[{ty}]"] + [f"{s}: {ty}" for s in shared] + [f"out: &mut [{ty}]"])
+            call = _core_call(fn, ["x"] + shared + ["out"], "_array")
+            body = (
+                f"through_array({arr.name}, n, out, |x, out| {{ widest!(|{sig}| -> ArrayResult {{ {call} }}) }})"
+            )
+        else:
+            helper = f"{fn.receiver}_through_array"
+            core_ty = CORE_TYPE[fn.receiver]
+            sig = ", ".join([f"r: &{core_ty}", f"x: &[{ty}]"] + [f"{s}: {ty}" for s in shared] + [f"out: &mut [{ty}]"])
+            call = _core_call(fn, ["x"] + shared + ["out"], "_array")
+            body = (
+                f"{helper}({fn.receiver}, {arr.name}, n, out, |r, x, out| {{ widest!(|{sig}| -> ArrayResult {{ {call} }}) }})"
+            )
+    else:
+        args = ["x" if a == arr.arg else a for a in fn.arg_names]
+        call = _core_call(fn, args)
+        if fn.receiver == "none":
+            body = f"elementwise({arr.name}, n, out, |x| {call})"
+        else:
+            body = f"{fn.receiver}_array({fn.receiver}, {arr.name}, n, out, |r, x| {call})"
+    del k
+    return "\n".join(
+        _doc(lines)
+        + [
+            "#[unsafe(no_mangle)]",
+            f"pub unsafe extern \"C\" fn {name}({', '.join(params)}) -> i32 {{",
+            "    // SAFETY: the pointers are NULL or valid for n elements (this function's contract).",
+            f"    unsafe {{ {body} }}",
+            "}",
+        ]
+    )
+
+
+USES = {
+    "blackbody": [
+        "use crate::boundary::{elementwise, scalar, through_array};",
+        "use relicore::ArrayResult;",
+        "use relicore::blackbody as bb;",
+        "use relicore_dispatch::widest;",
+    ],
+    "cosmology": [
+        "use crate::universe::{relicore_universe, universe_array, universe_scalar, universe_through_array};",
+        "use relicore::ArrayResult;",
+        "use relicore::cosmology::Universe;",
+        "use relicore_dispatch::widest;",
+    ],
+    "decoupling": [
+        "use crate::boundary::{elementwise, scalar};",
+        "use crate::decoupling::{relicore_thermal_history, history_array, history_scalar, history_summary};",
+        "use crate::universe::{relicore_universe, universe_array, universe_scalar};",
+        "use relicore::decoupling as dc;",
+    ],
+}
+
+
+def rustfmt(text: str) -> str:
+    r = subprocess.run(
+        ["rustfmt", "--edition", "2024", "--emit", "stdout", "--quiet"],
+        input=text,
+        capture_output=True,
+        text=True,
+        check=False,
+    )
+    if r.returncode != 0:
+        raise SystemExit(f"c_face: rustfmt failed:\n{r.stderr}")
+    return r.stdout
+
+
+def module(topic: str, fns: list[Function]) -> str:
+    mine = [f for f in fns if f.topic == topic]
+    parts = [
+        banner("//", f"the C exports of the regular {topic} functions"),
+        f"//! The C exports of the regular {topic} functions: for each function of the table its "
+        "`double` form, its `float` twin (`_f32`) and its array forms (`_array`, `_array_f32`) "
+        "where the table lists them.\n",
+    ]
+    body: list[str] = []
+    for fn in mine:
+        body.append(scalar_export(fn, "f64"))
+        if fn.f32:
+            body.append(scalar_export(fn, "f32"))
+        if fn.array:
+            body.append(array_export(fn, "f64"))
+        if fn.array_f32:
+            body.append(array_export(fn, "f32"))
+    text = "\n\n".join(body)
+    uses = [u for u in (_prune(u, text) for u in USES[topic]) if u]
+    return rustfmt("\n".join(parts) + "\n" + "\n".join(uses) + "\n\n" + text + "\n")
+
+
+def _prune(use: str, text: str) -> str:
+    """`use` with only the names `text` uses ('' when none)."""
+    head, brace, inner = use.partition("{")
+    if not brace:
+        path, _, name = use.rstrip(";").rpartition("::")
+        alias = name.split(" as ")[-1]
+        return use if re.search(rf"\b{alias}\b", text) else ""
+    names = [n.strip() for n in inner.rstrip("};").split(",") if n.strip()]
+    kept = [n for n in names if re.search(rf"\b{n.split(' as ')[-1]}\b", text)]
+    if not kept:
+        return ""
+    return f"{head}{{{', '.join(kept)}}};" if len(kept) > 1 else f"{head}{kept[0]};"
+
+
+def outputs(fns: list[Function]) -> dict[Path, str]:
+    return {C_SRC / f"gen_{topic}.rs": module(topic, fns) for topic in TOPICS}

@@ -1,0 +1,134 @@
+"""The table of regular functions (bindings/functions.toml), loaded and checked."""
+
+from __future__ import annotations
+
+import tomllib
+from dataclasses import dataclass, field
+from pathlib import Path
+
+ROOT = Path(__file__).resolve().parents[2]
+TABLE = ROOT / "bindings" / "functions.toml"
+
+TOPICS = ("blackbody", "cosmology", "decoupling")
+RECEIVERS = ("none", "universe", "history")
+PYTHON = ("function", "method", "property")
+KEYS = {
+    "name", "topic", "receiver", "core", "infallible", "args", "result", "f32", "array",
+    "array_f32", "python",
+}
+
+
+@dataclass(frozen=True)
+class Arg:
+    name: str
+    meaning: str
+
+
+@dataclass(frozen=True)
+class ArrayForm:
+    arg: str  # the scalar argument that becomes the array
+    name: str  # the array's own name in C and Fortran
+    simd: bool  # through the core's `_array` function and the SIMD dispatch
+
+    def index(self, fn: Function) -> int:
+        return [a.name for a in fn.args].index(self.arg)
+
+
+@dataclass(frozen=True)
+class Function:
+    name: str
+    topic: str
+    receiver: str
+    core: str | None
+    infallible: bool
+    args: tuple[Arg, ...]
+    result: str
+    f32: bool
+    array: ArrayForm | None
+    array_f32: bool
+    python: str
+    order: int = field(compare=False)
+
+    @property
+    def c_name(self) -> str:
+        return f"relicore_{self.name}"
+
+    @property
+    def arg_names(self) -> list[str]:
+        return [a.name for a in self.args]
+
+    def forms(self) -> list[str]:
+        """Every C symbol suffix this entry exports: '', '_f32', '_array', '_array_f32'."""
+        out = [""]
+        if self.f32:
+            out.append("_f32")
+        if self.array:
+            out.append("_array")
+        if self.array_f32:
+            out.append("_array_f32")
+        return out
+
+
+class TableError(Exception):
+    pass
+
+
+def load(path: Path = TABLE) -> list[Function]:
+    with open(path, "rb") as f:
+        raw = tomllib.load(f)
+    fns: list[Function] = []
+    seen: set[str] = set()
+    for i, e in enumerate(raw.get("function", [])):
+        where = f"{path.name}: function {e.get('name', i)!r}"
+        unknown = set(e) - KEYS
+        if unknown:
+            raise TableError(f"{where}: unknown keys {sorted(unknown)}")
+        for k in ("name", "topic", "args", "result", "python"):
+            if k not in e:
+                raise TableError(f"{where}: missing {k}")
+        if e["name"] in seen:
+            raise TableError(f"{where}: listed twice")
+        seen.add(e["name"])
+        args = []
+        for a in e["args"]:
+            name, sep, meaning = a.partition(": ")
+            if not sep or not name.isidentifier():
+                raise TableError(f"{where}: argument {a!r} is not 'name: meaning'")
+            args.append(Arg(name, meaning))
+        receiver = e.get("receiver", "none")
+        arr = e.get("array")
+        array = ArrayForm(arr["arg"], arr["name"], bool(arr.get("simd", False))) if arr else None
+        fn = Function(
+            name=e["name"],
+            topic=e["topic"],
+            receiver=receiver,
+            core=e.get("core"),
+            infallible=bool(e.get("infallible", False)),
+            args=tuple(args),
+            result=e["result"],
+            f32=bool(e.get("f32", False)),
+            array=array,
+            array_f32=bool(e.get("array_f32", False)),
+            python=e["python"],
+            order=i,
+        )
+        if fn.topic not in TOPICS:
+            raise TableError(f"{where}: topic must be one of {TOPICS}")
+        if fn.receiver not in RECEIVERS:
+            raise TableError(f"{where}: receiver must be one of {RECEIVERS}")
+        if fn.python not in PYTHON:
+            raise TableError(f"{where}: python must be one of {PYTHON}")
+        if fn.python != "function" and fn.receiver == "none":
+            raise TableError(f"{where}: a {fn.python} needs a receiver")
+        if fn.python == "property" and fn.args:
+            raise TableError(f"{where}: a property takes no arguments")
+        if fn.array and fn.array.arg not in fn.arg_names:
+            raise TableError(f"{where}: array argument {fn.array.arg!r} is not an argument")
+        if fn.array_f32 and not (fn.array and fn.f32):
+            raise TableError(f"{where}: array_f32 needs array and f32")
+        if fn.f32 and fn.receiver != "none":
+            raise TableError(f"{where}: f32 twins exist only for functions without a receiver")
+        if fn.infallible and fn.args:
+            raise TableError(f"{where}: only constants (no arguments) are infallible")
+        fns.append(fn)
+    return fns
