@@ -3,7 +3,7 @@
 core's rustdoc: the C exports, the Fortran module, the Python registrations, wrappers and stubs,
 and the function lists of the test harnesses.
 
-    python3 bindings/generate.py --write    rewrite the generated files
+    python3 bindings/generate.py --write    rewrite the generated files (or only the paths given)
     python3 bindings/generate.py --check    regenerate in memory; fail with a diff on drift
                                             (RELICORE_BLESS=1 turns --check into --write)
 
@@ -19,9 +19,9 @@ from pathlib import Path
 
 sys.path.insert(0, str(Path(__file__).resolve().parent))
 
-from gen import c_face, fortran_face, harness, python_face, table  # noqa: E402
+from gen import c_face, fortran_face, harness, python_face, rust_tests, table  # noqa: E402
 
-EMITTERS = (c_face, fortran_face, python_face, harness)
+EMITTERS = (c_face, fortran_face, python_face, harness, rust_tests)
 
 
 def generated() -> dict[Path, str]:
@@ -37,12 +37,15 @@ def generated() -> dict[Path, str]:
 
 def main(argv: list[str]) -> int:
     mode = argv[1] if len(argv) > 1 else "--check"
+    only = [Path(a).resolve() for a in argv[2:]]  # optional: just these generated files
     if mode not in ("--check", "--write"):
         print(__doc__)
         return 2
     if mode == "--check" and os.environ.get("RELICORE_BLESS") == "1":
         mode = "--write"
     files = generated()
+    if only:
+        files = {p: t for p, t in files.items() if p in only}
     drift = 0
     for path, text in sorted(files.items()):
         rel = path.relative_to(table.ROOT)

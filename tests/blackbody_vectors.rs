@@ -3,6 +3,9 @@
 //! and `tests/reference/blackbody_vectors.py`). The tolerance of each line comes from the file
 //! (one central table in the generator, with reasons).
 
+#[path = "gen/dispatch.rs"]
+mod dispatch;
+
 use relicore::blackbody as bb;
 use relicore::{Error, Result};
 use std::path::PathBuf;
@@ -31,80 +34,35 @@ fn status(e: Error) -> i32 {
     }
 }
 
+/// The regular functions through the generated dispatch; the calibration (a value built from
+/// five arguments, then a reading) by hand.
 fn call64(name: &str, a: &[f64]) -> Option<Result<f64>> {
     let g = |i: usize| a.get(i).copied().unwrap_or(f64::NAN);
-    Some(match (name, a.len()) {
-        ("spectral_radiance_wavelength", 2) => bb::spectral_radiance_wavelength(g(0), g(1)),
-        ("spectral_radiance_frequency", 2) => bb::spectral_radiance_frequency(g(0), g(1)),
-        ("spectral_radiance_wavenumber", 2) => bb::spectral_radiance_wavenumber(g(0), g(1)),
-        ("photon_radiance_wavelength", 2) => bb::photon_radiance_wavelength(g(0), g(1)),
-        ("photon_radiance_frequency", 2) => bb::photon_radiance_frequency(g(0), g(1)),
-        ("photon_radiance_wavenumber", 2) => bb::photon_radiance_wavenumber(g(0), g(1)),
-        ("radiance_temperature_derivative_wavelength", 2) => {
-            bb::radiance_temperature_derivative_wavelength(g(0), g(1))
-        }
-        ("radiance_temperature_derivative_frequency", 2) => {
-            bb::radiance_temperature_derivative_frequency(g(0), g(1))
-        }
-        ("radiant_exitance", 1) => bb::radiant_exitance(g(0)),
-        ("photon_exitance", 1) => bb::photon_exitance(g(0)),
-        ("peak_wavelength", 1) => bb::peak_wavelength(g(0)),
-        ("peak_frequency", 1) => bb::peak_frequency(g(0)),
-        ("peak_wavenumber", 1) => bb::peak_wavenumber(g(0)),
-        ("photon_peak_wavelength", 1) => bb::photon_peak_wavelength(g(0)),
-        ("photon_peak_frequency", 1) => bb::photon_peak_frequency(g(0)),
-        ("temperature_from_peak_wavelength", 1) => bb::temperature_from_peak_wavelength(g(0)),
-        ("temperature_from_peak_frequency", 1) => bb::temperature_from_peak_frequency(g(0)),
-        ("band_fraction_wavelength", 3) => bb::band_fraction_wavelength(g(0), g(1), g(2)),
-        ("band_radiance_wavelength", 3) => bb::band_radiance_wavelength(g(0), g(1), g(2)),
-        ("band_photon_radiance_wavelength", 3) => {
-            bb::band_photon_radiance_wavelength(g(0), g(1), g(2))
-        }
-        ("band_radiance_frequency", 3) => bb::band_radiance_frequency(g(0), g(1), g(2)),
-        ("temperature_from_band_radiance_wavelength", 3) => {
-            bb::temperature_from_band_radiance_wavelength(g(0), g(1), g(2))
-        }
-        ("brightness_temperature_wavelength", 2) => {
-            bb::brightness_temperature_wavelength(g(0), g(1))
-        }
-        ("brightness_temperature_frequency", 2) => bb::brightness_temperature_frequency(g(0), g(1)),
-        ("rayleigh_jeans_temperature", 2) => bb::rayleigh_jeans_temperature(g(0), g(1)),
-        ("ratio_temperature", 4) => bb::ratio_temperature(g(0), g(1), g(2), g(3)),
-        ("calibrated_temperature", 6) => bb::two_load_calibration(g(0), g(1), g(2), g(3), g(4))
-            .and_then(|c| bb::calibrated_temperature(&c, g(5))),
-        ("calibrated_brightness_temperature", 6) => {
-            bb::two_load_calibration(g(0), g(1), g(2), g(3), g(4))
-                .and_then(|c| bb::calibrated_brightness_temperature(&c, g(5)))
-        }
-        ("thermodynamic_to_rayleigh_jeans_factor", 2) => {
-            bb::thermodynamic_to_rayleigh_jeans_factor(g(0), g(1))
-        }
-        ("kcmb_to_mjy_per_sr", 2) => bb::kcmb_to_mjy_per_sr(g(0), g(1)),
-        ("thermal_sz_spectral_shape", 2) => bb::thermal_sz_spectral_shape(g(0), g(1)),
-        ("thermal_sz_temperature_shape", 2) => bb::thermal_sz_temperature_shape(g(0), g(1)),
-        ("thermal_sz_null_frequency", 1) => bb::thermal_sz_null_frequency(g(0)),
-        _ => return None,
+    dispatch::call_none_f64(name, a).or_else(|| {
+        Some(match (name, a.len()) {
+            ("calibrated_temperature", 6) => bb::two_load_calibration(g(0), g(1), g(2), g(3), g(4))
+                .and_then(|c| bb::calibrated_temperature(&c, g(5))),
+            ("calibrated_brightness_temperature", 6) => {
+                bb::two_load_calibration(g(0), g(1), g(2), g(3), g(4))
+                    .and_then(|c| bb::calibrated_brightness_temperature(&c, g(5)))
+            }
+            _ => return None,
+        })
     })
 }
 
 fn call32(name: &str, a: &[f32]) -> Option<Result<f32>> {
     let g = |i: usize| a.get(i).copied().unwrap_or(f32::NAN);
-    Some(match (name, a.len()) {
-        ("spectral_radiance_wavelength", 2) => bb::spectral_radiance_wavelength(g(0), g(1)),
-        ("spectral_radiance_frequency", 2) => bb::spectral_radiance_frequency(g(0), g(1)),
-        ("spectral_radiance_wavenumber", 2) => bb::spectral_radiance_wavenumber(g(0), g(1)),
-        ("brightness_temperature_wavelength", 2) => {
-            bb::brightness_temperature_wavelength(g(0), g(1))
-        }
-        ("brightness_temperature_frequency", 2) => bb::brightness_temperature_frequency(g(0), g(1)),
-        ("band_radiance_wavelength", 3) => bb::band_radiance_wavelength(g(0), g(1), g(2)),
-        ("calibrated_temperature", 6) => bb::two_load_calibration(g(0), g(1), g(2), g(3), g(4))
-            .and_then(|c| bb::calibrated_temperature(&c, g(5))),
-        ("calibrated_brightness_temperature", 6) => {
-            bb::two_load_calibration(g(0), g(1), g(2), g(3), g(4))
-                .and_then(|c| bb::calibrated_brightness_temperature(&c, g(5)))
-        }
-        _ => return None,
+    dispatch::call_none_f32(name, a).or_else(|| {
+        Some(match (name, a.len()) {
+            ("calibrated_temperature", 6) => bb::two_load_calibration(g(0), g(1), g(2), g(3), g(4))
+                .and_then(|c| bb::calibrated_temperature(&c, g(5))),
+            ("calibrated_brightness_temperature", 6) => {
+                bb::two_load_calibration(g(0), g(1), g(2), g(3), g(4))
+                    .and_then(|c| bb::calibrated_brightness_temperature(&c, g(5)))
+            }
+            _ => return None,
+        })
     })
 }
 

@@ -4,6 +4,9 @@
 //! summary), Planck 2020 published values (from memory) and common-practice facts; see the
 //! `source` column and `tests/reference/decoupling_vectors.py`. Tolerances come from the file.
 
+#[path = "gen/dispatch.rs"]
+mod dispatch;
+
 use relicore::cosmology::{Universe, UniverseParameters};
 use relicore::decoupling::{
     HistoryOptions, ThermalHistory, drag_redshift_fit, last_scattering_redshift_fit,
@@ -37,25 +40,7 @@ fn parse(s: &str) -> f64 {
 }
 
 fn history_call(h: &ThermalHistory<f64>, name: &str, a: &[f64]) -> Option<Result<f64>> {
-    let g = |i: usize| a.get(i).copied().unwrap_or(f64::NAN);
-    Some(match (name, a.len()) {
-        ("ionized_fraction", 1) => h.ionized_fraction(g(0)),
-        ("matter_temperature_k", 1) => h.matter_temperature_k(g(0)),
-        ("optical_depth", 1) => h.optical_depth(g(0)),
-        ("visibility", 1) => h.visibility(g(0)),
-        ("sound_horizon_mpc", 1) => h.sound_horizon_mpc(g(0)),
-        ("last_scattering_redshift", 0) => Ok(h.last_scattering_redshift()),
-        ("drag_redshift", 0) => Ok(h.drag_redshift()),
-        ("sound_horizon_last_scattering_mpc", 0) => Ok(h.sound_horizon_last_scattering_mpc()),
-        ("sound_horizon_drag_mpc", 0) => Ok(h.sound_horizon_drag_mpc()),
-        ("angular_scale_last_scattering", 0) => Ok(h.angular_scale_last_scattering()),
-        ("age_at_last_scattering_yr", 0) => Ok(h.age_at_last_scattering_yr()),
-        ("temperature_at_last_scattering_k", 0) => Ok(h.temperature_at_last_scattering_k()),
-        ("visibility_peak_redshift", 0) => Ok(h.visibility_peak_redshift()),
-        ("thermal_decoupling_redshift", 0) => Ok(h.thermal_decoupling_redshift()),
-        ("reionization_optical_depth", 0) => Ok(h.reionization_optical_depth()),
-        _ => return None,
-    })
+    dispatch::call_history(h, name, a)
 }
 
 #[test]

@@ -61,6 +61,8 @@ TOL = {
                    "B times x/(1-exp(-x))/T: three more roundings than B itself"),
     "exitance": ("ulp", 2,
                  "an exact-formula constant times T^4 or T^3: one constant, one power, one product"),
+    "density_f32": ("ulp32", 2,
+                    "f32 twin of a density: a constant times T^3 or T^4 formed to double length, in f32 ulps"),
     "peak": ("ulp", 1,
              "one precomputed constant and one product or quotient"),
     "band_fraction": ("abs", 1e-15,
@@ -310,6 +312,18 @@ def radiant_exitance(T):
 
 def photon_exitance(T):
     return 4 * mp.pi * mp.zeta(3) * KB() ** 3 * T ** 3 / (H() ** 3 * C() ** 2)
+
+
+def photon_number_density(T):
+    """n = 16 pi zeta(3) (kT/hc)^3: Planck's photon spectrum 8 pi nu^2/c^3/(e^(h nu/kT) - 1)
+    integrated over nu (the Bose integral 2 zeta(3)); written from the defining constants, not
+    from the core's rounded constant."""
+    return 16 * mp.pi * mp.zeta(3) * (KB() * T / (H() * C())) ** 3
+
+
+def radiation_energy_density(T):
+    """u = a T^4, a = 8 pi^5 k^4/(15 h^3 c^3) (= 4 sigma/c)."""
+    return 8 * mp.pi ** 5 * KB() ** 4 * T ** 4 / (15 * H() ** 3 * C() ** 3)
 
 
 def peak_wavelength(T):
@@ -927,6 +941,26 @@ def build_scalar(summary):
     out.errors("radiant_exitance", [300.0], [(0, NAN, NF), (0, -INF, NF), (0, 0.0, NP), (0, -300.0, NP)])
     simple_T_section(out, "photon_exitance", photon_exitance, "exitance", Ts, (300.0, 5772.0, 2.72548))
     out.errors("photon_exitance", [300.0], [(0, NAN, NF), (0, INF, NF), (0, -0.0, NP), (0, -1.0, NP)])
+    out.blank()
+
+    # ---------------- densities of blackbody radiation ----------------
+    rng = rng_for("density")
+    Ts = logspace(1e-3, 1e8, 23) + [logu(rng, 1e-3, 1e8) for _ in range(8)]
+    out.comment("photon_number_density = 16 pi zeta(3) (kT/hc)^3, radiation_energy_density = 8 pi^5 k^4 T^4/(15 h^3 c^3);")
+    out.comment("T 1e-3..1e8 K; the _f32 twins at f32 temperatures 1e-3..1e8 K, expected rounded to f32.")
+    for name, fn in (("photon_number_density", photon_number_density),
+                     ("radiation_energy_density", radiation_energy_density)):
+        simple_T_section(out, name, fn, "exitance", Ts, (300.0, 5772.0, 2.7255))
+        out.errors(name, [300.0], [(0, NAN, NF), (0, INF, NF), (0, -INF, NF), (0, 0.0, NP), (0, -0.0, NP),
+                                   (0, -1.0, NP)])
+        for T in [f32(x) for x in logspace(1e-3, 1e8, 12)] + [f32(2.7255), 300.0]:
+            out.value(name + "_f32", [T], hp(fn, T), "density_f32", f32out=True)
+        out.errors(name + "_f32", [300.0], [(0, NAN, NF), (0, 0.0, NP), (0, -1.0, NP)])
+    # overflow of the f64 result is refused, not returned as infinity
+    out.status("radiation_energy_density", [1e80], OOD)
+    out.status("photon_number_density", [1e110], OOD)
+    out.status("radiation_energy_density_f32", [f32(1e14)], OOD)
+    out.status("photon_number_density_f32", [f32(1e14)], OOD)
     out.blank()
 
     # ---------------- peaks ----------------

@@ -359,8 +359,9 @@ mod tests {
 
         let mut o = 2.0_f64;
         // SAFETY: o valid.
-        let code =
-            unsafe { crate::gen_blackbody::relicore_spectral_radiance_wavelength(1e-6, 300.0, &mut o) };
+        let code = unsafe {
+            crate::gen_blackbody::relicore_spectral_radiance_wavelength(1e-6, 300.0, &mut o)
+        };
         assert_eq!(code, RELICORE_OK);
         // SAFETY: NULL out is allowed.
         let code = unsafe {

@@ -347,14 +347,14 @@ pub unsafe extern "C" fn relicore_thermal_history_compute(
 #[cfg(test)]
 mod tests {
     use super::*;
-    use crate::status::*;
     use crate::gen_decoupling::*;
-    use relicore::decoupling as dc;
+    use crate::status::*;
     use crate::universe::{
         RELICORE_UNIVERSE_STORAGE_WORDS, relicore_universe_init, relicore_universe_parameters,
         relicore_universe_parameters_default,
     };
     use relicore::cosmology::Universe;
+    use relicore::decoupling as dc;
 
     type Query = unsafe extern "C" fn(*const relicore_thermal_history, f64, *mut f64) -> i32;
     type CoreQuery = fn(&ThermalHistory<f64>, f64) -> relicore::Result<f64>;

@@ -131,17 +131,23 @@ fn prototypes(header: &str) -> Vec<String> {
     let mut rest = header;
     while let Some(start) = rest.find("/*") {
         text.push_str(&rest[..start]);
-        rest = rest[start..].find("*/").map_or("", |end| &rest[start + end + 2..]);
+        rest = rest[start..]
+            .find("*/")
+            .map_or("", |end| &rest[start + end + 2..]);
     }
     text.push_str(rest);
     let mut out: Vec<String> = text
         .split(';')
         .map(|d| d.split_whitespace().collect::<Vec<_>>().join(" "))
         .filter_map(|d| {
-            let start = ["int32_t relicore_", "const char *relicore_", "void relicore_"]
-                .iter()
-                .filter_map(|t| d.rfind(t))
-                .max()?;
+            let start = [
+                "int32_t relicore_",
+                "const char *relicore_",
+                "void relicore_",
+            ]
+            .iter()
+            .filter_map(|t| d.rfind(t))
+            .max()?;
             let d = &d[start..];
             (d.ends_with(')') && d.contains('(')).then(|| d.to_string())
         })
@@ -159,6 +165,20 @@ fn the_set_of_prototypes_is_the_committed_list() {
         .map(str::to_string)
         .collect();
     let got = prototypes(&generate());
+    if std::env::var_os("RELICORE_BLESS").is_some_and(|v| v == "1") && got != want {
+        let head: String = committed
+            .lines()
+            .filter(|l| l.starts_with('#'))
+            .map(|l| format!("{l}\n"))
+            .collect();
+        let body: String = got.iter().map(|p| format!("{p}\n")).collect();
+        std::fs::write(crate_dir().join("prototypes.txt"), head + &body)
+            .expect("write prototypes.txt");
+        eprintln!(
+            "RELICORE_BLESS=1: wrote bindings/c/prototypes.txt (review its diff: it is the C API)"
+        );
+        return;
+    }
     let missing: Vec<_> = want.iter().filter(|p| !got.contains(p)).collect();
     let extra: Vec<_> = got.iter().filter(|p| !want.contains(p)).collect();
     assert!(

@@ -438,8 +438,8 @@ pub unsafe extern "C" fn relicore_universe_get_parameters(
 #[cfg(test)]
 mod tests {
     use super::*;
-    use crate::status::*;
     use crate::gen_cosmology::*;
+    use crate::status::*;
 
     fn blank() -> Box<relicore_universe> {
         Box::new(relicore_universe {
