@@ -8,7 +8,9 @@ included) and the Python hypothesis tests (tests/python/test_hypothesis_*.py). E
 kernel of src/math/ is reached by tests/proptest_math.rs. Prints what is missing and exits 1.
 
 The list of public functions is read from the core's source (`pub fn` in src/<topic>/ and
-src/math/) and from the header, so a new function joins the guard automatically.
+src/math/) and from the header, so a new function joins the guard automatically; the regular
+functions and their forms (`_f32`, `_array`, `_array_f32`) are read from the one table,
+bindings/functions.toml. Comments never count: every text is searched with its comments removed.
 """
 import pathlib
 import re
@@ -62,9 +64,30 @@ def public_functions(topic):
     return [n for n in dict.fromkeys(names) if n not in NOT_FUNCTIONS]
 
 
+def strip_comments(text, suffix):
+    """`text` without its comments: // and /* */ (Rust, C), ! (Fortran), # (Python, data)."""
+    if suffix in (".rs", ".c", ".h"):
+        text = re.sub(r"/\*.*?\*/", " ", text, flags=re.S)
+        return re.sub(r"//[^\n]*", "", text)
+    if suffix in (".f90", ".inc"):
+        return re.sub(r"![^\n]*", "", text)
+    if suffix in (".py", ".pyi", ".txt"):
+        # docstrings stay (stubs keep signatures only); comment lines and trailing comments go
+        return re.sub(r"(^|\s)#[^\n]*", r"\1", text, flags=re.M)
+    return text
+
+
 def read_all(pattern):
-    """The text of every file matching a glob pattern under the repository root."""
-    return "".join(p.read_text() for p in sorted(ROOT.glob(pattern)))
+    """The text of every file matching a glob pattern under the repository root, comments removed."""
+    return "".join(strip_comments(p.read_text(), p.suffix) for p in sorted(ROOT.glob(pattern)))
+
+
+def table_functions():
+    """The regular functions of bindings/functions.toml (through the generator's loader)."""
+    sys.path.insert(0, str(ROOT / "bindings"))
+    from gen import table  # noqa: E402
+
+    return table.load()
 
 
 def math_kernels():
@@ -81,20 +104,22 @@ def header_functions(header):
 
 
 def main():
-    header = (ROOT / "include/relicore.h").read_text()
-    proptests = read_all("tests/proptest_*.rs")
-    threads = read_all("tests/threads.rs")
+    header = strip_comments((ROOT / "include/relicore.h").read_text(), ".h")
+    # tests/gen_regular.rs (generated from the table) holds the contract property test and the
+    # threads test of every regular function
+    proptests = read_all("tests/proptest_*.rs") + read_all("tests/gen_regular.rs")
+    threads = read_all("tests/threads.rs") + read_all("tests/gen_regular.rs")
     hostile_c = read_all("tests/c/hostile_*.c")
     hypothesis = read_all("tests/python/test_hypothesis_*.py")
     fortran_path = ROOT / "bindings/fortran/relicore.f90"
-    fortran = fortran_path.read_text() if fortran_path.exists() else ""
-    data = "".join(p.read_text() for p in (ROOT / "tests/data").glob("*.txt"))
-    benches = "".join(p.read_text() for p in (ROOT / "benches").rglob("*.rs"))
+    fortran = strip_comments(fortran_path.read_text(), ".f90") if fortran_path.exists() else ""
+    data = read_all("tests/data/*.txt")
+    benches = read_all("benches/**/*.rs")
     missing = []
     count = 0
     for topic in TOPICS:
         stub_path = ROOT / "bindings/python/python/relicore"
-        stub = "".join(p.read_text() for p in stub_path.glob("*.pyi"))
+        stub = read_all("bindings/python/python/relicore/*.pyi")
         for name in public_functions(topic):
             count += 1
             if not re.search(rf"\brelicore_{name}\s*\(", header):
@@ -121,6 +146,25 @@ def main():
                 missing.append(f"{topic}::{name}: relicore_{name} not called by the C hostile harness tests/c/hostile_*.c")
             if not re.search(rf"\b{name}\b", hypothesis):
                 missing.append(f"{topic}::{name}: not reached by the hypothesis tests tests/python/test_hypothesis_*.py")
+    # the table: every form of every regular function in every face and harness
+    for fn in table_functions():
+        for form in fn.forms():
+            count += 1
+            sym = f"relicore_{fn.name}{form}"
+            if not re.search(rf"\b{sym}\s*\(", header):
+                missing.append(f"table {fn.name}: no C export {sym} in include/relicore.h")
+            if not re.search(rf"\b{sym}\b", fortran, flags=re.I):
+                missing.append(f"table {fn.name}: no Fortran procedure {sym} in bindings/fortran/relicore.f90")
+            if not re.search(rf"\b{sym}\b", hostile_c):
+                missing.append(f"table {fn.name}: {sym} not called by the C hostile harness tests/c/hostile_*.c")
+            if form in ("", "_f32") and not re.search(rf"^{fn.name}{form} ", data, flags=re.M):
+                missing.append(f"table {fn.name}: no reference vectors for {fn.name}{form} in tests/data/")
+        if not re.search(rf'"{fn.name}"', benches) or not re.search(rf"\b{fn.name}\s*\(", benches):
+            missing.append(f"table {fn.name}: no criterion bench in benches/")
+        py = rf"\bdef {fn.name}\s*\("
+        if not re.search(py, stub_all := read_all("bindings/python/python/relicore/*.pyi")):
+            missing.append(f"table {fn.name}: no Python stub def {fn.name} in bindings/python/python/relicore/*.pyi")
+        del stub_all
     for name in header_functions(header):
         count += 1
         if not re.search(rf"\b{name}\b", hostile_c):

@@ -53,3 +53,158 @@ def outputs(fns: list[Function]) -> dict[Path, str]:
         + _function("call_history", "ThermalHistory<f64>", "f64", [f for f in fns if f.receiver == "history"])
     )
     return {PATH: rustfmt(text)}
+
+
+# ---------------------------------------------------------------- regular-function tests and benches
+
+DATA = ROOT / "tests" / "data"
+TEST_PATH = ROOT / "tests" / "gen_regular.rs"
+BENCH_PATH = ROOT / "benches" / "gen_regular.rs"
+
+
+def typical_arguments(fn: Function) -> list[str]:
+    """Arguments of the middle non-status reference vector of `fn` (tests/data): values a user
+    passes, not chosen here. Raises when the function has no reference vectors."""
+    rows = []
+    for path in sorted(DATA.glob("*.txt")):
+        for line in path.read_text().splitlines():
+            f = line.split()
+            if not f or f[0] != fn.name:
+                continue
+            k = 1 if fn.receiver == "none" and f[1:2] != ["-"] else 2
+            try:
+                n = int(f[k])
+            except (ValueError, IndexError):
+                continue
+            if n != len(fn.args) or "status" in f[k + 2 + n : k + 3 + n]:
+                continue
+            rows.append(f[k + 1 : k + 1 + n])
+    if not rows:
+        raise SystemExit(f"rust_tests: {fn.name} has no reference vectors in tests/data (add them first)")
+    return rows[len(rows) // 2]
+
+
+def _lit(x: str, ty: str) -> str:
+    if x in ("inf", "+inf"):
+        return f"{ty}::INFINITY"
+    return f"{float(x)!r}_{ty}"
+
+
+def _recv_call(fn: Function, args: list[str], suffix: str = "") -> str:
+    a = ", ".join(args)
+    if fn.receiver == "none":
+        return f"bb_or_topic::{fn.name}{suffix}({a})".replace("bb_or_topic", f"relicore::{fn.topic}")
+    if fn.core:
+        topic, _, name = fn.core.partition("::")
+        return f"relicore::{topic}::{name}(r{', ' if a else ''}{a})"
+    call = f"r.{fn.name}({a})"
+    return f"Ok::<f64, relicore::Error>({call})" if fn.infallible else call
+
+
+RECEIVERS_SETUP = """    let u = Universe::new(UniverseParameters {
+        omega_baryon: 0.0493,
+        ..UniverseParameters::new(67.36, 0.3153)
+    })
+    .expect("universe");
+    let h = Box::new(ThermalHistory::new(&u, HistoryOptions::default()).expect("history"));
+"""
+
+
+def bench_outputs(fns: list[Function]) -> str:
+    lines = []
+    for fn in fns:
+        ty = "f64"
+        args = [f"black_box({_lit(x, ty)})" for x in typical_arguments(fn)]
+        r = {"none": "", "universe": "let r = &u; ", "history": "let r = &*h; "}[fn.receiver]
+        lines.append(f'    g.bench_function("{fn.name}", |b| b.iter(|| {{ {r}{_recv_call(fn, args)} }}));')
+        if fn.f32:
+            args32 = [f"black_box({_lit(x, 'f32')})" for x in typical_arguments(fn)]
+            lines.append(f'    g.bench_function("{fn.name}_f32", |b| b.iter(|| {_recv_call(fn, args32)}));')
+    return rustfmt(
+        banner("//", "criterion benches of every regular function")
+        + "//! Criterion benches of every regular function of the table, one call at the arguments of\n"
+        "//! the middle reference vector of the function (tests/data). The topic benches\n"
+        "//! (benches/blackbody.rs, cosmology.rs, decoupling.rs) time arrays and constructions.\n\n"
+        "use criterion::{Criterion, criterion_group, criterion_main};\n"
+        "use relicore::cosmology::{Universe, UniverseParameters};\n"
+        "use relicore::decoupling::{HistoryOptions, ThermalHistory};\n"
+        "use std::hint::black_box;\n\n"
+        "fn regular(c: &mut Criterion) {\n" + RECEIVERS_SETUP
+        + '    let mut g = c.benchmark_group("regular");\n'
+        + "\n".join(lines)
+        + "\n    g.finish();\n}\n\ncriterion_group!(benches, regular);\ncriterion_main!(benches);\n"
+    )
+
+
+def test_outputs(fns: list[Function]) -> str:
+    """Property and threads tests of every regular function (the contract: no panic, Ok finite,
+    NaN refused; the same bits from every thread)."""
+    props = []
+    grid_calls = []
+    for fn in fns:
+        n = len(fn.args)
+        for ty in ("f64", "f32") if fn.f32 else ("f64",):
+            if fn.receiver != "none" and ty == "f32":
+                continue
+            vars_ = [f"x{i}" for i in range(n)]
+            recv = {"none": "", "universe": "let r = &*UNIVERSE; ", "history": "let r = &*HISTORY; "}[fn.receiver]
+            call = _recv_call(fn, vars_)
+            if n == 0:
+                props.append(
+                    f"#[test]\nfn contract_{fn.name}() {{ {recv}let v = {call}; "
+                    f"if let Ok(v) = v {{ assert!(v.is_finite(), \"{fn.name}: Ok({{v}})\"); }} }}"
+                )
+                continue
+            bits = "u64" if ty == "f64" else "u32"
+            strat = ", ".join(f"{v} in any::<{bits}>()" for v in vars_)
+            conv = " ".join(f"let {v} = {ty}::from_bits({v});" for v in vars_)
+            props.append(
+                "proptest! {\n    #[test]\n"
+                f"    fn contract_{fn.name}_{ty}({strat}) {{\n"
+                f"        {conv}\n        {recv}let any_nan = {' || '.join(f'{v}.is_nan()' for v in vars_)};\n"
+                f"        match {call} {{\n"
+                f"            Ok(v) => {{ prop_assert!(v.is_finite(), \"{fn.name}({{:?}}) = Ok({{}})\", ({', '.join(vars_)}), v); prop_assert!(!any_nan, \"{fn.name}: NaN accepted\"); }}\n"
+                "            Err(_) => {}\n        }\n    }\n}"
+            )
+        if fn.receiver == "none":
+            args = ", ".join(f"a[{i}]" for i in range(n))
+            grid_calls.append(f"        |a: &[f64]| relicore::{fn.topic}::{fn.name}({args}),")
+    return rustfmt(
+        banner("//", "the property and threads tests of every regular function")
+        + "//! Every regular function of the table against its contract on arbitrary bit patterns\n"
+        "//! (no panic; `Ok` holds a finite value; a NaN argument is refused), and the functions\n"
+        "//! without a receiver called from several threads at once give the serial bits.\n\n"
+        "use proptest::prelude::*;\n"
+        "use relicore::cosmology::{Universe, UniverseParameters};\n"
+        "use relicore::decoupling::{HistoryOptions, ThermalHistory};\n"
+        "use std::sync::LazyLock;\n\n"
+        "static UNIVERSE: LazyLock<Universe<f64>> = LazyLock::new(|| {\n"
+        "    Universe::new(UniverseParameters { omega_baryon: 0.0493, ..UniverseParameters::new(67.36, 0.3153) })\n"
+        '        .expect("universe")\n});\n'
+        "static HISTORY: LazyLock<Box<ThermalHistory<f64>>> = LazyLock::new(|| {\n"
+        '    Box::new(ThermalHistory::new(&UNIVERSE, HistoryOptions::default()).expect("history"))\n});\n\n'
+        + "\n\n".join(props)
+        + "\n\ntype Grid = fn(&[f64]) -> relicore::Result<f64>;\n\n"
+        "#[test]\nfn threads_give_the_serial_bits() {\n"
+        "    let fns: &[Grid] = &[\n" + "\n".join(grid_calls) + "\n    ];\n"
+        "    const ARGS: [f64; 9] = [1e-9, 1e-6, 3e-3, 0.5, 2.7255, 300.0, 5e3, 3e13, -1.0];\n"
+        "    let grid: Vec<[f64; 4]> = (0..ARGS.len().pow(4))\n"
+        "        .map(|k| [ARGS[k % 9], ARGS[k / 9 % 9], ARGS[k / 81 % 9], ARGS[k / 729 % 9]])\n"
+        "        .collect();\n"
+        "    let run = |f: Grid| -> Vec<u64> { grid.iter().map(|a| f(a).map_or(u64::MAX, f64::to_bits)).collect() };\n"
+        "    let serial: Vec<Vec<u64>> = fns.iter().map(|&f| run(f)).collect();\n"
+        "    std::thread::scope(|s| {\n"
+        "        let handles: Vec<_> = (0..4).map(|_| s.spawn(|| fns.iter().map(|&f| run(f)).collect::<Vec<_>>())).collect();\n"
+        '        for h in handles { assert_eq!(h.join().expect("thread"), serial); }\n'
+        "    });\n}\n"
+    )
+
+
+_old_outputs = outputs
+
+
+def outputs(fns: list[Function]) -> dict[Path, str]:  # noqa: F811
+    out = _old_outputs(fns)
+    out[TEST_PATH] = test_outputs(fns)
+    out[BENCH_PATH] = bench_outputs(fns)
+    return out
