@@ -13,6 +13,14 @@ PREFIX ?= /usr/local
 
 all: test
 
+# The generated faces (C exports, Fortran module, Python registrations/wrappers/stubs, harness
+# lists) must be current: regenerated in memory from bindings/functions.toml and the core's
+# rustdoc and compared; RELICORE_BLESS=1 rewrites them.
+.PHONY: generated
+generated:
+	python3 bindings/generate.py --check
+
+
 # ---------------------------------------------------------------- dependencies
 deps: $(VENV)/.stamp .gfortran.stamp
 
@@ -31,7 +39,7 @@ $(VENV)/.stamp: requirements-dev.txt
 	touch $@
 
 # ---------------------------------------------------------------- tests
-test: deps fmt-check clippy rust-test nostd c-test fortran-test python-test bench-build coverage miri
+test: deps generated fmt-check clippy rust-test nostd c-test fortran-test python-test bench-build coverage miri
 	@echo "make test: all steps passed"
 
 fmt-check:
