@@ -1,5 +1,5 @@
-//! Criterion benches of decoupling: the whole thermal history with its summary (the target of
-//! issue 4 is at least 300× faster than a scipy `solve_ivp` integration of the same equations,
+//! Criterion benches of decoupling: the whole thermal history with its summary (the target:
+//! at least 300× faster than a scipy `solve_ivp` integration of the same equations,
 //! timed side by side in `benches/compare/decoupling_compare.py`), every query at one redshift
 //! (target: x_e at one z under 100 ns), the summary getters, Saha equilibrium and the fits.
 

@@ -3,7 +3,7 @@
 //! Arithmetic, comparisons and classification come from [`num_traits::float::FloatCore`]
 //! (pure Rust, no platform library). Every transcendental function is routed through the
 //! `libm` crate directly, so the same input gives the same bits in every build, whatever
-//! features other crates switch on in a workspace (DESIGN 9.1: `num-traits/std` would
+//! features other crates switch on in a workspace (`num-traits/std` would
 //! otherwise silently send `exp_m1` to the platform libm and make the C and Python faces
 //! differ by an ulp on some inputs).
 

@@ -1,7 +1,7 @@
 #!/usr/bin/env python3
 """Coverage guard: every public function of the core has its C, Fortran and Python faces,
 reference vectors in tests/data/ and a criterion bench, and is reached by the reliability
-harnesses of issue 5: the property tests (tests/proptest_*.rs), the threads test
+harnesses: the property tests (tests/proptest_*.rs), the threads test
 (tests/threads.rs), the C hostile-input harness (tests/c/hostile_*.c, which must also call
 every function declared in include/relicore.h: array forms, f32 twins and universe functions
 included) and the Python hypothesis tests (tests/python/test_hypothesis_*.py). Every public
@@ -137,7 +137,7 @@ def main():
                 missing.append(f"{topic}::{name}: no reference vectors in tests/data/")
             if not re.search(rf"\b{name}\s*\(", benches):
                 missing.append(f"{topic}::{name}: no criterion bench in benches/")
-            # issue 5: the reliability harnesses reach it
+            # the reliability harnesses reach it
             if not re.search(rf"\b{name}\b", proptests):
                 missing.append(f"{topic}::{name}: not reached by the property tests tests/proptest_*.rs")
             if not re.search(rf"\b{name}\b", threads):

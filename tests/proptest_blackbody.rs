@@ -1,4 +1,4 @@
-//! Property tests of every public blackbody function (issue 5).
+//! Property tests of every public blackbody function.
 //!
 //! Part 1, robustness: each function, in `f64` and in `f32`, is called with arbitrary inputs —
 //! NaN, ±∞, ±0, subnormals, the largest floats, raw bit patterns and log-uniform values of
@@ -587,7 +587,7 @@ proptest! {
         }
     }
 
-    /// Microwave conversions: K_CMB → MJy/sr is 1e20·dB_ν/dT (DESIGN 4a), and dT_RJ/dT_CMB =
+    /// Microwave conversions: K_CMB → MJy/sr is 1e20·dB_ν/dT (README, microwave conversions), and dT_RJ/dT_CMB =
     /// c²/(2kν²)·dB_ν/dT (derivative of the Rayleigh-Jeans temperature); tolerance: 8 ulp for
     /// each function (documented) and 4 ε here. In the Rayleigh-Jeans limit x ≪ 1:
     /// ((x/2)/sinh(x/2))² = 1 − x²/12 + O(x⁴) and x coth(x/2) − 4 = −2 + x²/6 + O(x⁴)
@@ -608,7 +608,7 @@ proptest! {
             prop_assert!((shape + 2.0).abs() <= x * x / 6.0 + 8.0 * EPS,
                 "RJ limit of the SZ shape: {shape:e} vs -2");
         }
-        // g(x) = x² · dT_RJ/dT_CMB · f(x) (DESIGN 4a: g = x⁴eˣ/(eˣ−1)² f, factor = x²eˣ/(eˣ−1)²)
+        // g(x) = x² · dT_RJ/dT_CMB · f(x) (g = x⁴eˣ/(eˣ−1)² f, factor = x²eˣ/(eˣ−1)²)
         let shape = ok("f(x)", bb::thermal_sz_temperature_shape(nu, t0))?;
         let g = ok("g(x)", bb::thermal_sz_spectral_shape(nu, t0))?;
         let want = x * x * f * shape;

@@ -1,4 +1,4 @@
-//! Property tests of every public function of the cosmological background (issue 5).
+//! Property tests of every public function of the cosmological background.
 //!
 //! Part 1, robustness: `Universe::new` on arbitrary parameter sets (valid ones, and valid ones
 //! with up to three fields replaced by NaN, ±∞, ±0, subnormals, huge values or raw bit

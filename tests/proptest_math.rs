@@ -1,4 +1,4 @@
-//! Property tests of the public numerical kernels (`relicore::math`), issue 5: the quadrature
+//! Property tests of the public numerical kernels (`relicore::math`): the quadrature
 //! and the root finders, given arbitrary limits, tolerances and brackets (NaN, ±∞, ±0,
 //! subnormals, huge values), return `Ok` with a finite value or an `Err`, never panic; and on
 //! valid inputs they meet closed forms: ∫ₐᵇ cos = sin b − sin a, the root of x³ − c is ∛c. The

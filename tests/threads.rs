@@ -1,4 +1,4 @@
-//! No hidden global state (issue 5): every public function of every topic is called from
+//! No hidden global state: every public function of every topic is called from
 //! several threads at once — each thread walking the same inputs in a different order, the
 //! cosmology threads sharing the same `Universe` values by reference — and every result must
 //! equal, bit for bit (or as the same error), the result of a serial run before the threads

@@ -1,7 +1,7 @@
 //! The cosmological background: the [`Universe`] parameter set, its expansion rate and density
 //! parameters, distances, times and their inverses.
 //!
-//! Conventions (DESIGN 4a):
+//! Conventions:
 //! * `omega_matter` counts everything non-relativistic today, massive neutrinos included, as
 //!   published parameter tables quote it; Ω_cb = Ω_m − Ω_ν,massive is cold dark matter plus
 //!   baryons.
@@ -21,6 +21,7 @@
 //! per-universe fixed-size Chebyshev table with an a-posteriori error check (`table.rs`) so an
 //! array of a million redshifts costs a few nanoseconds per element.
 
+mod bao;
 mod distance;
 mod expansion;
 mod inverse;

@@ -1,6 +1,6 @@
 //! Times: lookback time, age and conformal time, by the shared quadrature in s = √a, where
 //! dt = (1/H0)·2s³ ds/q and c dη = (c/H0)·2s ds/q with q = a²E finite and smooth at a → 0
-//! (Hogg 1999 eq. 30; DESIGN 4).
+//! (Hogg 1999 eq. 30).
 
 use super::Universe;
 use super::universe::check_redshift;
