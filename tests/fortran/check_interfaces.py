@@ -1,8 +1,11 @@
 #!/usr/bin/env python3
 """Checks bindings/fortran/relicore.f90 against include/relicore.h, mechanically.
 
-Hand-written interfaces drift; this script reads both files (python3, standard library only)
-and fails, naming each problem, when
+The module is generated (bindings/gen/fortran_face.py, from bindings/functions.toml and the
+hand-kept template bindings/fortran/relicore.in.f90), and the header by cbindgen from the C
+exports; this script reads neither the table nor the generator, only the two files they write
+(python3, standard library only), so a mistake in either generator or in the template shows
+here. It fails, naming each problem, when
 
 * a function of the header has no bind(C) interface in the module, or an interface binds a
   name the header does not declare, or a function is bound twice;
@@ -17,7 +20,10 @@ and fails, naming each problem, when
   `uint64_t s[N]` with `#define N 1920` is `integer(c_int64_t) :: s(N)` with the Fortran
   parameter N = 1920; a component may have a default initialisation);
 * a #define of the header has no Fortran parameter of the same name and value;
-* a header function has no public Fortran procedure of the same name.
+* a header function has no public Fortran procedure of the same name;
+* a stop message names the wrong routine: every routine name a procedure hands to report (or
+  report_parameters) must be the procedure's own name without a trailing `_s`, and the C name
+  of a bind(C) interface the procedure calls.
 
 Pointer convention read from the header (its calling convention): `const T *` is an input
 array when T is double or float, `const struct S *` a struct read by reference, `T *` an output;
@@ -252,6 +258,54 @@ def parse_module(text):
     return interfaces, types, parameters, public, duplicates
 
 
+def stop_names(text, interfaces):
+    """Problems with the routine names of the stop messages (see the module docstring); the C
+    functions a procedure calls include those its module helpers call."""
+    raw = {itf["fortran_name"]: cname for cname, itf in interfaces.items()}
+    procs, current, in_interface = {}, None, False
+    for stmt in fortran_statements(text):
+        low = stmt.lower()
+        if re.fullmatch(r"(abstract\s+)?interface(\s+\w+)?", low):
+            in_interface = True
+        elif re.fullmatch(r"end\s*interface(\s+\w+)?", low):
+            in_interface = False
+        if in_interface:
+            continue
+        m = re.match(r"(?:(?:impure|pure|elemental|recursive)\s+)*(?:" + TYPESPEC +
+                     r"\s+)?(?:function|subroutine)\s+(\w+)", low)
+        if m:
+            current = m.group(3)
+            procs[current] = {"names": [], "calls": set()}
+        elif re.match(r"end\s*(function|subroutine)\b", low):
+            current = None
+        elif current:
+            procs[current]["calls"].update(re.findall(r"\b(\w+)\s*\(", low))
+            for m in re.finditer(r"\breport(?:_parameters)?\s*\((.*)\)", low):
+                procs[current]["names"] += re.findall(r"'(relicore_\w+)'", m.group(1))
+
+    def c_called(name, seen):
+        out = set()
+        for callee in procs[name]["calls"]:
+            if callee in raw:
+                out.add(raw[callee])
+            elif callee in procs and callee not in seen:
+                out |= c_called(callee, seen | {callee})
+        return out
+
+    problems = []
+    for proc, info in procs.items():
+        own = re.sub(r"_s$", "", proc)
+        for name in info["names"]:
+            if name != own:
+                problems.append(f"{proc}: stop message names {name}, not {own}")
+                continue
+            called = c_called(proc, {proc})
+            if name not in called:
+                problems.append(f"{proc}: stop message names {name}, which it does not call "
+                                f"(it calls {', '.join(sorted(called)) or 'no C function'})")
+    return problems
+
+
 # ---------------------------------------------------------------------------- comparison
 def expected_dummy(param, array_outputs):
     """What a C parameter must look like as a Fortran dummy: (base, kind, value, array, intent)."""
@@ -407,6 +461,8 @@ def compare(header_text, module_text):
     for cname in functions:
         if cname not in public:
             problems.append(f"{cname}: no public Fortran procedure of this name")
+    # the routine named by each stop message
+    problems += stop_names(module_text, interfaces)
     return problems, len(functions), len(structs), len(defines)
 
 
@@ -507,6 +563,18 @@ def self_test(header_text, module_text):
         ("wrapper not public",
          lambda h, f: (h, sub_once(r"relicore_thermal_sz_null_frequency, ", "", f)),
          "relicore_thermal_sz_null_frequency: no public Fortran procedure"),
+        ("stop message names another routine",
+         lambda h, f: (h, sub_once(r"call report\(code, 'relicore_peak_frequency', stat\)",
+                                   "call report(code, 'relicore_peak_wavelength', stat)", f)),
+         "relicore_peak_frequency_s: stop message names relicore_peak_wavelength"),
+        ("array form's stop message names its scalar form",
+         lambda h, f: (h, sub_once(r"call report\(code, 'relicore_age_gyr_array', stat\)",
+                                   "call report(code, 'relicore_age_gyr', stat)", f)),
+         "relicore_age_gyr_array: stop message names relicore_age_gyr"),
+        ("stop message of a wrapper that calls another C function",
+         lambda h, f: (h, sub_once(r"(subroutine relicore_drag_redshift_s\(.*?code = )c_drag_redshift\(",
+                                   r"\1c_last_scattering_redshift(", f, re.S)),
+         "relicore_drag_redshift_s: stop message names relicore_drag_redshift, which it does not call"),
         ("stale interface",
          lambda h, f: (sub_once(r"int32_t relicore_photon_exitance\(double temperature_k,\s*double \*out\);",
                                 "", h), f),

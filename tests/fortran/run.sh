@@ -33,7 +33,7 @@ fail() { script_failed=$((script_failed + 1)); echo "FAIL $*"; }
 # ------------------------------------------------------------------ build
 cargo build -p relicore-capi --profile release-c --quiet
 mkdir -p "$OUT"
-# the module must stay clean under the strictest flags; the test under -Wall (DESIGN 9.10:
+# the module must stay clean under the strictest flags; the test under -Wall (gfortran's
 # -Wextra objects to the exact real comparisons a bit-for-bit test makes); vector_files.f90, the
 # reading and checking of the vector files the three tests share, makes none and takes the
 # strictest flags too
@@ -47,7 +47,8 @@ mkdir -p "$OUT"
   -c tests/fortran/test_cosmology.f90 -o "$OUT/test_cosmology.o"
 "$FC" -std=f2018 -Wall -Werror -J "$OUT" \
   -c tests/fortran/test_decoupling.f90 -o "$OUT/test_decoupling.o"
-# the archive by path (DESIGN 9.6); on this glibc -lm is the only system library it needs
+# the archive by path (gcc would take the shared library for -lrelicore when both exist); on
+# this glibc -lm is the only system library it needs
 "$FC" "$OUT/test_blackbody.o" "$OUT/vector_files.o" "$OUT/relicore.o" "$LIB" -lm -o "$BIN"
 "$FC" "$OUT/test_cosmology.o" "$OUT/vector_files.o" "$OUT/relicore.o" "$LIB" -lm -o "$COSMOLOGY_BIN"
 "$FC" "$OUT/test_decoupling.o" "$OUT/vector_files.o" "$OUT/relicore.o" "$LIB" -lm -o "$DECOUPLING_BIN"

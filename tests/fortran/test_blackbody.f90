@@ -23,6 +23,9 @@
 ! checks; the response and calibration wrappers; stat and error stop; status messages and
 ! the version string. The record reader, number parsing, tolerances and failure messages it shares
 ! with test_cosmology and test_decoupling are in vector_files.f90 (module vector_files).
+! The dispatch by name of the regular functions (their `case` blocks and name lists) is
+! generated from bindings/functions.toml into tests/fortran/generated/*.inc by
+! `python3 bindings/generate.py --write`; only the irregular functions are dispatched here.
 program test_blackbody
   use, intrinsic :: iso_c_binding, only: c_double, c_float, c_int32_t, c_int64_t
   use, intrinsic :: ieee_arithmetic, only: ieee_is_nan, ieee_value, ieee_quiet_nan
@@ -376,239 +379,7 @@ contains
     stat2 = stat
     got%known = .true.
     select case (name)
-    case ('spectral_radiance_wavelength')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_spectral_radiance_wavelength(a(1), a(2))
-        call relicore_spectral_radiance_wavelength_s(a(1), a(2), s64, stat)
-      end if
-    case ('spectral_radiance_frequency')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_spectral_radiance_frequency(a(1), a(2))
-        call relicore_spectral_radiance_frequency_s(a(1), a(2), s64, stat)
-      end if
-    case ('spectral_radiance_wavenumber')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_spectral_radiance_wavenumber(a(1), a(2))
-        call relicore_spectral_radiance_wavenumber_s(a(1), a(2), s64, stat)
-      end if
-    case ('photon_radiance_wavelength')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_photon_radiance_wavelength(a(1), a(2))
-        call relicore_photon_radiance_wavelength_s(a(1), a(2), s64, stat)
-      end if
-    case ('photon_radiance_frequency')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_photon_radiance_frequency(a(1), a(2))
-        call relicore_photon_radiance_frequency_s(a(1), a(2), s64, stat)
-      end if
-    case ('photon_radiance_wavenumber')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_photon_radiance_wavenumber(a(1), a(2))
-        call relicore_photon_radiance_wavenumber_s(a(1), a(2), s64, stat)
-      end if
-    case ('radiance_temperature_derivative_wavelength')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_radiance_temperature_derivative_wavelength(a(1), a(2))
-        call relicore_radiance_temperature_derivative_wavelength_s(a(1), a(2), s64, stat)
-      end if
-    case ('radiance_temperature_derivative_frequency')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_radiance_temperature_derivative_frequency(a(1), a(2))
-        call relicore_radiance_temperature_derivative_frequency_s(a(1), a(2), s64, stat)
-      end if
-    case ('radiant_exitance')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_radiant_exitance(a(1))
-        call relicore_radiant_exitance_s(a(1), s64, stat)
-      end if
-    case ('photon_exitance')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_photon_exitance(a(1))
-        call relicore_photon_exitance_s(a(1), s64, stat)
-      end if
-    case ('peak_wavelength')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_peak_wavelength(a(1))
-        call relicore_peak_wavelength_s(a(1), s64, stat)
-      end if
-    case ('peak_frequency')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_peak_frequency(a(1))
-        call relicore_peak_frequency_s(a(1), s64, stat)
-      end if
-    case ('peak_wavenumber')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_peak_wavenumber(a(1))
-        call relicore_peak_wavenumber_s(a(1), s64, stat)
-      end if
-    case ('photon_peak_wavelength')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_photon_peak_wavelength(a(1))
-        call relicore_photon_peak_wavelength_s(a(1), s64, stat)
-      end if
-    case ('photon_peak_frequency')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_photon_peak_frequency(a(1))
-        call relicore_photon_peak_frequency_s(a(1), s64, stat)
-      end if
-    case ('temperature_from_peak_wavelength')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_temperature_from_peak_wavelength(a(1))
-        call relicore_temperature_from_peak_wavelength_s(a(1), s64, stat)
-      end if
-    case ('temperature_from_peak_frequency')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_temperature_from_peak_frequency(a(1))
-        call relicore_temperature_from_peak_frequency_s(a(1), s64, stat)
-      end if
-    case ('band_fraction_wavelength')
-      nargs = 3
-      if (size(a, 1) == nargs) then
-        f64 = relicore_band_fraction_wavelength(a(1), a(2), a(3))
-        call relicore_band_fraction_wavelength_s(a(1), a(2), a(3), s64, stat)
-      end if
-    case ('band_radiance_wavelength')
-      nargs = 3
-      if (size(a, 1) == nargs) then
-        f64 = relicore_band_radiance_wavelength(a(1), a(2), a(3))
-        call relicore_band_radiance_wavelength_s(a(1), a(2), a(3), s64, stat)
-      end if
-    case ('band_photon_radiance_wavelength')
-      nargs = 3
-      if (size(a, 1) == nargs) then
-        f64 = relicore_band_photon_radiance_wavelength(a(1), a(2), a(3))
-        call relicore_band_photon_radiance_wavelength_s(a(1), a(2), a(3), s64, stat)
-      end if
-    case ('band_radiance_frequency')
-      nargs = 3
-      if (size(a, 1) == nargs) then
-        f64 = relicore_band_radiance_frequency(a(1), a(2), a(3))
-        call relicore_band_radiance_frequency_s(a(1), a(2), a(3), s64, stat)
-      end if
-    case ('temperature_from_band_radiance_wavelength')
-      nargs = 3
-      if (size(a, 1) == nargs) then
-        f64 = relicore_temperature_from_band_radiance_wavelength(a(1), a(2), a(3))
-        call relicore_temperature_from_band_radiance_wavelength_s(a(1), a(2), a(3), s64, stat)
-      end if
-    case ('brightness_temperature_wavelength')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_brightness_temperature_wavelength(a(1), a(2))
-        call relicore_brightness_temperature_wavelength_s(a(1), a(2), s64, stat)
-      end if
-    case ('brightness_temperature_frequency')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_brightness_temperature_frequency(a(1), a(2))
-        call relicore_brightness_temperature_frequency_s(a(1), a(2), s64, stat)
-      end if
-    case ('rayleigh_jeans_temperature')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_rayleigh_jeans_temperature(a(1), a(2))
-        call relicore_rayleigh_jeans_temperature_s(a(1), a(2), s64, stat)
-      end if
-    case ('ratio_temperature')
-      nargs = 4
-      if (size(a, 1) == nargs) then
-        f64 = relicore_ratio_temperature(a(1), a(2), a(3), a(4))
-        call relicore_ratio_temperature_s(a(1), a(2), a(3), a(4), s64, stat)
-      end if
-    case ('thermodynamic_to_rayleigh_jeans_factor')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_thermodynamic_to_rayleigh_jeans_factor(a(1), a(2))
-        call relicore_thermodynamic_to_rayleigh_jeans_factor_s(a(1), a(2), s64, stat)
-      end if
-    case ('kcmb_to_mjy_per_sr')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_kcmb_to_mjy_per_sr(a(1), a(2))
-        call relicore_kcmb_to_mjy_per_sr_s(a(1), a(2), s64, stat)
-      end if
-    case ('thermal_sz_spectral_shape')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_thermal_sz_spectral_shape(a(1), a(2))
-        call relicore_thermal_sz_spectral_shape_s(a(1), a(2), s64, stat)
-      end if
-    case ('thermal_sz_temperature_shape')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_thermal_sz_temperature_shape(a(1), a(2))
-        call relicore_thermal_sz_temperature_shape_s(a(1), a(2), s64, stat)
-      end if
-    case ('thermal_sz_null_frequency')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_thermal_sz_null_frequency(a(1))
-        call relicore_thermal_sz_null_frequency_s(a(1), s64, stat)
-      end if
-    case ('spectral_radiance_wavelength_f32')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f32 = relicore_spectral_radiance_wavelength_f32(real(a(1), c_float), real(a(2), &
-            c_float))
-        call relicore_spectral_radiance_wavelength_f32_s(real(a(1), c_float), real(a(2), &
-            c_float), s32, stat)
-      end if
-    case ('spectral_radiance_frequency_f32')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f32 = relicore_spectral_radiance_frequency_f32(real(a(1), c_float), real(a(2), c_float))
-        call relicore_spectral_radiance_frequency_f32_s(real(a(1), c_float), real(a(2), &
-            c_float), s32, stat)
-      end if
-    case ('spectral_radiance_wavenumber_f32')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f32 = relicore_spectral_radiance_wavenumber_f32(real(a(1), c_float), real(a(2), &
-            c_float))
-        call relicore_spectral_radiance_wavenumber_f32_s(real(a(1), c_float), real(a(2), &
-            c_float), s32, stat)
-      end if
-    case ('brightness_temperature_wavelength_f32')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f32 = relicore_brightness_temperature_wavelength_f32(real(a(1), c_float), &
-            real(a(2), c_float))
-        call relicore_brightness_temperature_wavelength_f32_s(real(a(1), c_float), &
-            real(a(2), c_float), s32, stat)
-      end if
-    case ('brightness_temperature_frequency_f32')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f32 = relicore_brightness_temperature_frequency_f32(real(a(1), c_float), real(a(2), &
-            c_float))
-        call relicore_brightness_temperature_frequency_f32_s(real(a(1), c_float), &
-            real(a(2), c_float), s32, stat)
-      end if
-    case ('band_radiance_wavelength_f32')
-      nargs = 3
-      if (size(a, 1) == nargs) then
-        f32 = relicore_band_radiance_wavelength_f32(real(a(1), c_float), real(a(2), &
-            c_float), real(a(3), c_float))
-        call relicore_band_radiance_wavelength_f32_s(real(a(1), c_float), real(a(2), &
-            c_float), real(a(3), c_float), s32, stat)
-      end if
+    include 'generated/blackbody_one.inc'
     case ('calibrated_temperature')
       nargs = 6
       if (size(a, 1) == nargs) then
@@ -682,241 +453,7 @@ contains
     stat2 = stat
     got%known = .true.
     select case (name)
-    case ('spectral_radiance_wavelength')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_spectral_radiance_wavelength(a(1, :), a(2, :))
-        call relicore_spectral_radiance_wavelength_s(a(1, :), a(2, :), s64, stat)
-      end if
-    case ('spectral_radiance_frequency')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_spectral_radiance_frequency(a(1, :), a(2, :))
-        call relicore_spectral_radiance_frequency_s(a(1, :), a(2, :), s64, stat)
-      end if
-    case ('spectral_radiance_wavenumber')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_spectral_radiance_wavenumber(a(1, :), a(2, :))
-        call relicore_spectral_radiance_wavenumber_s(a(1, :), a(2, :), s64, stat)
-      end if
-    case ('photon_radiance_wavelength')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_photon_radiance_wavelength(a(1, :), a(2, :))
-        call relicore_photon_radiance_wavelength_s(a(1, :), a(2, :), s64, stat)
-      end if
-    case ('photon_radiance_frequency')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_photon_radiance_frequency(a(1, :), a(2, :))
-        call relicore_photon_radiance_frequency_s(a(1, :), a(2, :), s64, stat)
-      end if
-    case ('photon_radiance_wavenumber')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_photon_radiance_wavenumber(a(1, :), a(2, :))
-        call relicore_photon_radiance_wavenumber_s(a(1, :), a(2, :), s64, stat)
-      end if
-    case ('radiance_temperature_derivative_wavelength')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_radiance_temperature_derivative_wavelength(a(1, :), a(2, :))
-        call relicore_radiance_temperature_derivative_wavelength_s(a(1, :), a(2, :), s64, stat)
-      end if
-    case ('radiance_temperature_derivative_frequency')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_radiance_temperature_derivative_frequency(a(1, :), a(2, :))
-        call relicore_radiance_temperature_derivative_frequency_s(a(1, :), a(2, :), s64, stat)
-      end if
-    case ('radiant_exitance')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_radiant_exitance(a(1, :))
-        call relicore_radiant_exitance_s(a(1, :), s64, stat)
-      end if
-    case ('photon_exitance')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_photon_exitance(a(1, :))
-        call relicore_photon_exitance_s(a(1, :), s64, stat)
-      end if
-    case ('peak_wavelength')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_peak_wavelength(a(1, :))
-        call relicore_peak_wavelength_s(a(1, :), s64, stat)
-      end if
-    case ('peak_frequency')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_peak_frequency(a(1, :))
-        call relicore_peak_frequency_s(a(1, :), s64, stat)
-      end if
-    case ('peak_wavenumber')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_peak_wavenumber(a(1, :))
-        call relicore_peak_wavenumber_s(a(1, :), s64, stat)
-      end if
-    case ('photon_peak_wavelength')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_photon_peak_wavelength(a(1, :))
-        call relicore_photon_peak_wavelength_s(a(1, :), s64, stat)
-      end if
-    case ('photon_peak_frequency')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_photon_peak_frequency(a(1, :))
-        call relicore_photon_peak_frequency_s(a(1, :), s64, stat)
-      end if
-    case ('temperature_from_peak_wavelength')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_temperature_from_peak_wavelength(a(1, :))
-        call relicore_temperature_from_peak_wavelength_s(a(1, :), s64, stat)
-      end if
-    case ('temperature_from_peak_frequency')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_temperature_from_peak_frequency(a(1, :))
-        call relicore_temperature_from_peak_frequency_s(a(1, :), s64, stat)
-      end if
-    case ('band_fraction_wavelength')
-      nargs = 3
-      if (size(a, 1) == nargs) then
-        f64 = relicore_band_fraction_wavelength(a(1, :), a(2, :), a(3, :))
-        call relicore_band_fraction_wavelength_s(a(1, :), a(2, :), a(3, :), s64, stat)
-      end if
-    case ('band_radiance_wavelength')
-      nargs = 3
-      if (size(a, 1) == nargs) then
-        f64 = relicore_band_radiance_wavelength(a(1, :), a(2, :), a(3, :))
-        call relicore_band_radiance_wavelength_s(a(1, :), a(2, :), a(3, :), s64, stat)
-      end if
-    case ('band_photon_radiance_wavelength')
-      nargs = 3
-      if (size(a, 1) == nargs) then
-        f64 = relicore_band_photon_radiance_wavelength(a(1, :), a(2, :), a(3, :))
-        call relicore_band_photon_radiance_wavelength_s(a(1, :), a(2, :), a(3, :), s64, stat)
-      end if
-    case ('band_radiance_frequency')
-      nargs = 3
-      if (size(a, 1) == nargs) then
-        f64 = relicore_band_radiance_frequency(a(1, :), a(2, :), a(3, :))
-        call relicore_band_radiance_frequency_s(a(1, :), a(2, :), a(3, :), s64, stat)
-      end if
-    case ('temperature_from_band_radiance_wavelength')
-      nargs = 3
-      if (size(a, 1) == nargs) then
-        f64 = relicore_temperature_from_band_radiance_wavelength(a(1, :), a(2, :), a(3, :))
-        call relicore_temperature_from_band_radiance_wavelength_s(a(1, :), a(2, :), a(3, &
-            :), s64, stat)
-      end if
-    case ('brightness_temperature_wavelength')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_brightness_temperature_wavelength(a(1, :), a(2, :))
-        call relicore_brightness_temperature_wavelength_s(a(1, :), a(2, :), s64, stat)
-      end if
-    case ('brightness_temperature_frequency')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_brightness_temperature_frequency(a(1, :), a(2, :))
-        call relicore_brightness_temperature_frequency_s(a(1, :), a(2, :), s64, stat)
-      end if
-    case ('rayleigh_jeans_temperature')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_rayleigh_jeans_temperature(a(1, :), a(2, :))
-        call relicore_rayleigh_jeans_temperature_s(a(1, :), a(2, :), s64, stat)
-      end if
-    case ('ratio_temperature')
-      nargs = 4
-      if (size(a, 1) == nargs) then
-        f64 = relicore_ratio_temperature(a(1, :), a(2, :), a(3, :), a(4, :))
-        call relicore_ratio_temperature_s(a(1, :), a(2, :), a(3, :), a(4, :), s64, stat)
-      end if
-    case ('thermodynamic_to_rayleigh_jeans_factor')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_thermodynamic_to_rayleigh_jeans_factor(a(1, :), a(2, :))
-        call relicore_thermodynamic_to_rayleigh_jeans_factor_s(a(1, :), a(2, :), s64, stat)
-      end if
-    case ('kcmb_to_mjy_per_sr')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_kcmb_to_mjy_per_sr(a(1, :), a(2, :))
-        call relicore_kcmb_to_mjy_per_sr_s(a(1, :), a(2, :), s64, stat)
-      end if
-    case ('thermal_sz_spectral_shape')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_thermal_sz_spectral_shape(a(1, :), a(2, :))
-        call relicore_thermal_sz_spectral_shape_s(a(1, :), a(2, :), s64, stat)
-      end if
-    case ('thermal_sz_temperature_shape')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f64 = relicore_thermal_sz_temperature_shape(a(1, :), a(2, :))
-        call relicore_thermal_sz_temperature_shape_s(a(1, :), a(2, :), s64, stat)
-      end if
-    case ('thermal_sz_null_frequency')
-      nargs = 1
-      if (size(a, 1) == nargs) then
-        f64 = relicore_thermal_sz_null_frequency(a(1, :))
-        call relicore_thermal_sz_null_frequency_s(a(1, :), s64, stat)
-      end if
-    case ('spectral_radiance_wavelength_f32')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f32 = relicore_spectral_radiance_wavelength_f32(real(a(1, :), c_float), real(a(2, &
-            :), c_float))
-        call relicore_spectral_radiance_wavelength_f32_s(real(a(1, :), c_float), real(a(2, &
-            :), c_float), s32, stat)
-      end if
-    case ('spectral_radiance_frequency_f32')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f32 = relicore_spectral_radiance_frequency_f32(real(a(1, :), c_float), real(a(2, &
-            :), c_float))
-        call relicore_spectral_radiance_frequency_f32_s(real(a(1, :), c_float), real(a(2, &
-            :), c_float), s32, stat)
-      end if
-    case ('spectral_radiance_wavenumber_f32')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f32 = relicore_spectral_radiance_wavenumber_f32(real(a(1, :), c_float), real(a(2, &
-            :), c_float))
-        call relicore_spectral_radiance_wavenumber_f32_s(real(a(1, :), c_float), real(a(2, &
-            :), c_float), s32, stat)
-      end if
-    case ('brightness_temperature_wavelength_f32')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f32 = relicore_brightness_temperature_wavelength_f32(real(a(1, :), c_float), &
-            real(a(2, :), c_float))
-        call relicore_brightness_temperature_wavelength_f32_s(real(a(1, :), c_float), &
-            real(a(2, :), c_float), s32, stat)
-      end if
-    case ('brightness_temperature_frequency_f32')
-      nargs = 2
-      if (size(a, 1) == nargs) then
-        f32 = relicore_brightness_temperature_frequency_f32(real(a(1, :), c_float), &
-            real(a(2, :), c_float))
-        call relicore_brightness_temperature_frequency_f32_s(real(a(1, :), c_float), &
-            real(a(2, :), c_float), s32, stat)
-      end if
-    case ('band_radiance_wavelength_f32')
-      nargs = 3
-      if (size(a, 1) == nargs) then
-        f32 = relicore_band_radiance_wavelength_f32(real(a(1, :), c_float), real(a(2, :), &
-            c_float), real(a(3, :), c_float))
-        call relicore_band_radiance_wavelength_f32_s(real(a(1, :), c_float), real(a(2, :), &
-            c_float), real(a(3, :), c_float), s32, stat)
-      end if
+    include 'generated/blackbody_many.inc'
     case ('calibrated_temperature')
       nargs = 6
       if (size(a, 1) == nargs) then
@@ -1032,36 +569,25 @@ contains
   ! same values; a too-long out is RELICORE_ERROR_LENGTH_MISMATCH with every element NaN; an
   ! empty array is RELICORE_OK.
   subroutine test_array_forms()
-    character(len=64), parameter :: names(*) = [character(len=64) :: &
-        'spectral_radiance_wavelength', 'spectral_radiance_frequency', &
-        'spectral_radiance_wavenumber', 'photon_radiance_wavelength', &
-        'photon_radiance_frequency', 'photon_radiance_wavenumber', &
-        'radiance_temperature_derivative_wavelength', &
-        'radiance_temperature_derivative_frequency', 'brightness_temperature_wavelength', &
-        'brightness_temperature_frequency', 'spectral_radiance_wavelength_f32', &
-        'spectral_radiance_frequency_f32', 'spectral_radiance_wavenumber_f32']
+    include 'generated/blackbody_names.inc'
     integer :: k, j, which, vary, hold
     integer, allocatable :: members(:)
     real(dp), allocatable :: values(:), fixed_values(:)
 
-    do k = 1, size(names)
-      members = pack([(j, j = 1, nvectors)], vectors(1:nvectors)%name == names(k))
-      call check(size(members) > 1, 'array forms: fewer than 2 vectors of ' // trim(names(k)))
+    do k = 1, size(array_names)
+      members = pack([(j, j = 1, nvectors)], vectors(1:nvectors)%name == array_names(k))
+      call check(size(members) > 1, 'array forms: fewer than 2 vectors of ' // trim(array_names(k)))
       if (size(members) < 2) cycle
-      vary = 1
-      hold = 2
-      if (index(names(k), 'brightness_temperature') == 1) then
-        vary = 2
-        hold = 1
-      end if
+      vary = array_positions(k)
+      hold = 3 - vary
       values = [(vectors(members(j))%args(vary), j = 1, size(members))]
       fixed_values = [(vectors(members(j))%args(hold), j = 1, size(members))]
       do which = 1, size(fixed_values)
         if (any(same_value(fixed_values(1:which - 1), fixed_values(which)))) cycle
-        if (ends_with_f32(names(k))) then
-          call array_form_32(names(k), real(values, sp), real(fixed_values(which), sp))
+        if (ends_with_f32(array_names(k))) then
+          call array_form_32(array_names(k), real(values, sp), real(fixed_values(which), sp))
         else
-          call array_form_64(names(k), values, fixed_values(which))
+          call array_form_64(array_names(k), values, fixed_values(which))
         end if
       end do
     end do
@@ -1083,90 +609,7 @@ contains
     n = size(x)
     out_strided = 0
     select case (name)
-    case ('spectral_radiance_wavelength')
-      call relicore_spectral_radiance_wavelength_array(x, fixed, out, stat)
-      call relicore_spectral_radiance_wavelength_array(x(n:1:-1), fixed, &
-          out_strided(2 * n:2:-2), stat_reversed)
-      call relicore_spectral_radiance_wavelength_array(x, fixed, too_long, stat_mismatch)
-      call relicore_spectral_radiance_wavelength_array(x(1:0), fixed, out(1:0), stat_empty)
-      ref = relicore_spectral_radiance_wavelength(x, fixed)
-      call relicore_spectral_radiance_wavelength_s(x, fixed, ref_s, stats)
-    case ('spectral_radiance_frequency')
-      call relicore_spectral_radiance_frequency_array(x, fixed, out, stat)
-      call relicore_spectral_radiance_frequency_array(x(n:1:-1), fixed, &
-          out_strided(2 * n:2:-2), stat_reversed)
-      call relicore_spectral_radiance_frequency_array(x, fixed, too_long, stat_mismatch)
-      call relicore_spectral_radiance_frequency_array(x(1:0), fixed, out(1:0), stat_empty)
-      ref = relicore_spectral_radiance_frequency(x, fixed)
-      call relicore_spectral_radiance_frequency_s(x, fixed, ref_s, stats)
-    case ('spectral_radiance_wavenumber')
-      call relicore_spectral_radiance_wavenumber_array(x, fixed, out, stat)
-      call relicore_spectral_radiance_wavenumber_array(x(n:1:-1), fixed, &
-          out_strided(2 * n:2:-2), stat_reversed)
-      call relicore_spectral_radiance_wavenumber_array(x, fixed, too_long, stat_mismatch)
-      call relicore_spectral_radiance_wavenumber_array(x(1:0), fixed, out(1:0), stat_empty)
-      ref = relicore_spectral_radiance_wavenumber(x, fixed)
-      call relicore_spectral_radiance_wavenumber_s(x, fixed, ref_s, stats)
-    case ('photon_radiance_wavelength')
-      call relicore_photon_radiance_wavelength_array(x, fixed, out, stat)
-      call relicore_photon_radiance_wavelength_array(x(n:1:-1), fixed, &
-          out_strided(2 * n:2:-2), stat_reversed)
-      call relicore_photon_radiance_wavelength_array(x, fixed, too_long, stat_mismatch)
-      call relicore_photon_radiance_wavelength_array(x(1:0), fixed, out(1:0), stat_empty)
-      ref = relicore_photon_radiance_wavelength(x, fixed)
-      call relicore_photon_radiance_wavelength_s(x, fixed, ref_s, stats)
-    case ('photon_radiance_frequency')
-      call relicore_photon_radiance_frequency_array(x, fixed, out, stat)
-      call relicore_photon_radiance_frequency_array(x(n:1:-1), fixed, &
-          out_strided(2 * n:2:-2), stat_reversed)
-      call relicore_photon_radiance_frequency_array(x, fixed, too_long, stat_mismatch)
-      call relicore_photon_radiance_frequency_array(x(1:0), fixed, out(1:0), stat_empty)
-      ref = relicore_photon_radiance_frequency(x, fixed)
-      call relicore_photon_radiance_frequency_s(x, fixed, ref_s, stats)
-    case ('photon_radiance_wavenumber')
-      call relicore_photon_radiance_wavenumber_array(x, fixed, out, stat)
-      call relicore_photon_radiance_wavenumber_array(x(n:1:-1), fixed, &
-          out_strided(2 * n:2:-2), stat_reversed)
-      call relicore_photon_radiance_wavenumber_array(x, fixed, too_long, stat_mismatch)
-      call relicore_photon_radiance_wavenumber_array(x(1:0), fixed, out(1:0), stat_empty)
-      ref = relicore_photon_radiance_wavenumber(x, fixed)
-      call relicore_photon_radiance_wavenumber_s(x, fixed, ref_s, stats)
-    case ('radiance_temperature_derivative_wavelength')
-      call relicore_radiance_temperature_derivative_wavelength_array(x, fixed, out, stat)
-      call relicore_radiance_temperature_derivative_wavelength_array(x(n:1:-1), fixed, &
-          out_strided(2 * n:2:-2), stat_reversed)
-      call relicore_radiance_temperature_derivative_wavelength_array(x, fixed, too_long, &
-          stat_mismatch)
-      call relicore_radiance_temperature_derivative_wavelength_array(x(1:0), fixed, &
-          out(1:0), stat_empty)
-      ref = relicore_radiance_temperature_derivative_wavelength(x, fixed)
-      call relicore_radiance_temperature_derivative_wavelength_s(x, fixed, ref_s, stats)
-    case ('radiance_temperature_derivative_frequency')
-      call relicore_radiance_temperature_derivative_frequency_array(x, fixed, out, stat)
-      call relicore_radiance_temperature_derivative_frequency_array(x(n:1:-1), fixed, &
-          out_strided(2 * n:2:-2), stat_reversed)
-      call relicore_radiance_temperature_derivative_frequency_array(x, fixed, too_long, &
-          stat_mismatch)
-      call relicore_radiance_temperature_derivative_frequency_array(x(1:0), fixed, &
-          out(1:0), stat_empty)
-      ref = relicore_radiance_temperature_derivative_frequency(x, fixed)
-      call relicore_radiance_temperature_derivative_frequency_s(x, fixed, ref_s, stats)
-    case ('brightness_temperature_wavelength')
-      call relicore_brightness_temperature_wavelength_array(fixed, x, out, stat)
-      call relicore_brightness_temperature_wavelength_array(fixed, x(n:1:-1), &
-          out_strided(2 * n:2:-2), stat_reversed)
-      call relicore_brightness_temperature_wavelength_array(fixed, x, too_long, stat_mismatch)
-      call relicore_brightness_temperature_wavelength_array(fixed, x(1:0), out(1:0), stat_empty)
-      ref = relicore_brightness_temperature_wavelength(fixed, x)
-      call relicore_brightness_temperature_wavelength_s(fixed, x, ref_s, stats)
-    case ('brightness_temperature_frequency')
-      call relicore_brightness_temperature_frequency_array(fixed, x, out, stat)
-      call relicore_brightness_temperature_frequency_array(fixed, x(n:1:-1), &
-          out_strided(2 * n:2:-2), stat_reversed)
-      call relicore_brightness_temperature_frequency_array(fixed, x, too_long, stat_mismatch)
-      call relicore_brightness_temperature_frequency_array(fixed, x(1:0), out(1:0), stat_empty)
-      ref = relicore_brightness_temperature_frequency(fixed, x)
-      call relicore_brightness_temperature_frequency_s(fixed, x, ref_s, stats)
+    include 'generated/blackbody_array_64.inc'
     case default
       error stop 'test_blackbody: no array form for ' // name
     end select
@@ -1193,30 +636,7 @@ contains
     n = size(x)
     out_strided = 0
     select case (name)
-    case ('spectral_radiance_wavelength_f32')
-      call relicore_spectral_radiance_wavelength_array_f32(x, fixed, out, stat)
-      call relicore_spectral_radiance_wavelength_array_f32(x(n:1:-1), fixed, &
-          out_strided(2 * n:2:-2), stat_reversed)
-      call relicore_spectral_radiance_wavelength_array_f32(x, fixed, too_long, stat_mismatch)
-      call relicore_spectral_radiance_wavelength_array_f32(x(1:0), fixed, out(1:0), stat_empty)
-      ref = relicore_spectral_radiance_wavelength_f32(x, fixed)
-      call relicore_spectral_radiance_wavelength_f32_s(x, fixed, ref_s, stats)
-    case ('spectral_radiance_frequency_f32')
-      call relicore_spectral_radiance_frequency_array_f32(x, fixed, out, stat)
-      call relicore_spectral_radiance_frequency_array_f32(x(n:1:-1), fixed, &
-          out_strided(2 * n:2:-2), stat_reversed)
-      call relicore_spectral_radiance_frequency_array_f32(x, fixed, too_long, stat_mismatch)
-      call relicore_spectral_radiance_frequency_array_f32(x(1:0), fixed, out(1:0), stat_empty)
-      ref = relicore_spectral_radiance_frequency_f32(x, fixed)
-      call relicore_spectral_radiance_frequency_f32_s(x, fixed, ref_s, stats)
-    case ('spectral_radiance_wavenumber_f32')
-      call relicore_spectral_radiance_wavenumber_array_f32(x, fixed, out, stat)
-      call relicore_spectral_radiance_wavenumber_array_f32(x(n:1:-1), fixed, &
-          out_strided(2 * n:2:-2), stat_reversed)
-      call relicore_spectral_radiance_wavenumber_array_f32(x, fixed, too_long, stat_mismatch)
-      call relicore_spectral_radiance_wavenumber_array_f32(x(1:0), fixed, out(1:0), stat_empty)
-      ref = relicore_spectral_radiance_wavenumber_f32(x, fixed)
-      call relicore_spectral_radiance_wavenumber_f32_s(x, fixed, ref_s, stats)
+    include 'generated/blackbody_array_32.inc'
     case default
       error stop 'test_blackbody: no array form for ' // name
     end select

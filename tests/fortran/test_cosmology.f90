@@ -27,6 +27,9 @@
 ! refused by every procedure; copies of a universe; the parameter checks and their positions;
 ! the defaults; status messages. The record reader, number parsing, tolerances and failure
 ! messages it shares with test_blackbody and test_decoupling are in vector_files.f90.
+! The dispatch by name of the regular functions (their `case` blocks and name lists) is
+! generated from bindings/functions.toml into tests/fortran/generated/*.inc by
+! `python3 bindings/generate.py --write`; only the irregular functions are dispatched here.
 program test_cosmology
   use, intrinsic :: iso_c_binding, only: c_double, c_int32_t
   use, intrinsic :: ieee_arithmetic, only: ieee_is_nan, ieee_value, ieee_quiet_nan, &
@@ -62,28 +65,7 @@ program test_cosmology
     type(outcome) :: got
   end type vector
 
-    character(len=48), parameter :: all_names(*) = [character(len=48) :: &
-        'dimensionless_hubble', 'hubble_parameter_km_s_mpc', 'omega_matter_at', &
-        'omega_radiation_at', 'omega_dark_energy_at', 'omega_curvature_at', &
-        'critical_density_kg_m3', 'cmb_temperature_at_k', 'comoving_distance_mpc', &
-        'transverse_comoving_distance_mpc', 'angular_diameter_distance_mpc', &
-        'luminosity_distance_mpc', 'distance_modulus', 'comoving_volume_gpc3', &
-        'differential_comoving_volume_mpc3_sr', 'transverse_scale_kpc_per_arcsec', &
-        'lookback_time_gyr', 'age_gyr', 'conformal_time_mpc', 'redshift_at_age_gyr', &
-        'redshift_at_lookback_time_gyr', 'redshift_at_comoving_distance_mpc', &
-        'redshift_at_luminosity_distance_mpc', 'angular_diameter_distance_between_mpc', &
-        'hubble_distance_mpc', 'hubble_time_gyr', 'omega_radiation', 'omega_dark_energy', &
-        'matter_radiation_equality_redshift']
-    character(len=48), parameter :: one_names(*) = [character(len=48) :: &
-        'dimensionless_hubble', 'hubble_parameter_km_s_mpc', 'omega_matter_at', &
-        'omega_radiation_at', 'omega_dark_energy_at', 'omega_curvature_at', &
-        'critical_density_kg_m3', 'cmb_temperature_at_k', 'comoving_distance_mpc', &
-        'transverse_comoving_distance_mpc', 'angular_diameter_distance_mpc', &
-        'luminosity_distance_mpc', 'distance_modulus', 'comoving_volume_gpc3', &
-        'differential_comoving_volume_mpc3_sr', 'transverse_scale_kpc_per_arcsec', &
-        'lookback_time_gyr', 'age_gyr', 'conformal_time_mpc', 'redshift_at_age_gyr', &
-        'redshift_at_lookback_time_gyr', 'redshift_at_comoving_distance_mpc', &
-        'redshift_at_luminosity_distance_mpc']
+  include 'generated/cosmology_names.inc'
   type(named_universe), allocatable :: universes(:)
   type(vector), allocatable :: vectors(:)
   integer :: nuniverses = 0, nvectors = 0
@@ -293,180 +275,7 @@ contains
     stat = -huge(stat)
     got%known = .true.
     select case (name)
-    case ('dimensionless_hubble')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_dimensionless_hubble(u, a(1))
-        call relicore_dimensionless_hubble_s(u, a(1), s64, stat)
-      end if
-    case ('hubble_parameter_km_s_mpc')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_hubble_parameter_km_s_mpc(u, a(1))
-        call relicore_hubble_parameter_km_s_mpc_s(u, a(1), s64, stat)
-      end if
-    case ('omega_matter_at')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_omega_matter_at(u, a(1))
-        call relicore_omega_matter_at_s(u, a(1), s64, stat)
-      end if
-    case ('omega_radiation_at')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_omega_radiation_at(u, a(1))
-        call relicore_omega_radiation_at_s(u, a(1), s64, stat)
-      end if
-    case ('omega_dark_energy_at')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_omega_dark_energy_at(u, a(1))
-        call relicore_omega_dark_energy_at_s(u, a(1), s64, stat)
-      end if
-    case ('omega_curvature_at')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_omega_curvature_at(u, a(1))
-        call relicore_omega_curvature_at_s(u, a(1), s64, stat)
-      end if
-    case ('critical_density_kg_m3')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_critical_density_kg_m3(u, a(1))
-        call relicore_critical_density_kg_m3_s(u, a(1), s64, stat)
-      end if
-    case ('cmb_temperature_at_k')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_cmb_temperature_at_k(u, a(1))
-        call relicore_cmb_temperature_at_k_s(u, a(1), s64, stat)
-      end if
-    case ('comoving_distance_mpc')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_comoving_distance_mpc(u, a(1))
-        call relicore_comoving_distance_mpc_s(u, a(1), s64, stat)
-      end if
-    case ('transverse_comoving_distance_mpc')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_transverse_comoving_distance_mpc(u, a(1))
-        call relicore_transverse_comoving_distance_mpc_s(u, a(1), s64, stat)
-      end if
-    case ('angular_diameter_distance_mpc')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_angular_diameter_distance_mpc(u, a(1))
-        call relicore_angular_diameter_distance_mpc_s(u, a(1), s64, stat)
-      end if
-    case ('luminosity_distance_mpc')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_luminosity_distance_mpc(u, a(1))
-        call relicore_luminosity_distance_mpc_s(u, a(1), s64, stat)
-      end if
-    case ('distance_modulus')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_distance_modulus(u, a(1))
-        call relicore_distance_modulus_s(u, a(1), s64, stat)
-      end if
-    case ('comoving_volume_gpc3')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_comoving_volume_gpc3(u, a(1))
-        call relicore_comoving_volume_gpc3_s(u, a(1), s64, stat)
-      end if
-    case ('differential_comoving_volume_mpc3_sr')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_differential_comoving_volume_mpc3_sr(u, a(1))
-        call relicore_differential_comoving_volume_mpc3_sr_s(u, a(1), s64, stat)
-      end if
-    case ('transverse_scale_kpc_per_arcsec')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_transverse_scale_kpc_per_arcsec(u, a(1))
-        call relicore_transverse_scale_kpc_per_arcsec_s(u, a(1), s64, stat)
-      end if
-    case ('lookback_time_gyr')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_lookback_time_gyr(u, a(1))
-        call relicore_lookback_time_gyr_s(u, a(1), s64, stat)
-      end if
-    case ('age_gyr')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_age_gyr(u, a(1))
-        call relicore_age_gyr_s(u, a(1), s64, stat)
-      end if
-    case ('conformal_time_mpc')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_conformal_time_mpc(u, a(1))
-        call relicore_conformal_time_mpc_s(u, a(1), s64, stat)
-      end if
-    case ('redshift_at_age_gyr')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_redshift_at_age_gyr(u, a(1))
-        call relicore_redshift_at_age_gyr_s(u, a(1), s64, stat)
-      end if
-    case ('redshift_at_lookback_time_gyr')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_redshift_at_lookback_time_gyr(u, a(1))
-        call relicore_redshift_at_lookback_time_gyr_s(u, a(1), s64, stat)
-      end if
-    case ('redshift_at_comoving_distance_mpc')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_redshift_at_comoving_distance_mpc(u, a(1))
-        call relicore_redshift_at_comoving_distance_mpc_s(u, a(1), s64, stat)
-      end if
-    case ('redshift_at_luminosity_distance_mpc')
-      nargs = 1
-      if (size(a) == 1) then
-        f64 = relicore_redshift_at_luminosity_distance_mpc(u, a(1))
-        call relicore_redshift_at_luminosity_distance_mpc_s(u, a(1), s64, stat)
-      end if
-    case ('angular_diameter_distance_between_mpc')
-      nargs = 2
-      if (size(a) == 2) then
-        f64 = relicore_angular_diameter_distance_between_mpc(u, a(1), a(2))
-        call relicore_angular_diameter_distance_between_mpc_s(u, a(1), a(2), s64, stat)
-      end if
-    case ('hubble_distance_mpc')
-      nargs = 0
-      if (size(a) == 0) then
-        f64 = relicore_hubble_distance_mpc(u)
-        call relicore_hubble_distance_mpc_s(u, s64, stat)
-      end if
-    case ('hubble_time_gyr')
-      nargs = 0
-      if (size(a) == 0) then
-        f64 = relicore_hubble_time_gyr(u)
-        call relicore_hubble_time_gyr_s(u, s64, stat)
-      end if
-    case ('omega_radiation')
-      nargs = 0
-      if (size(a) == 0) then
-        f64 = relicore_omega_radiation(u)
-        call relicore_omega_radiation_s(u, s64, stat)
-      end if
-    case ('omega_dark_energy')
-      nargs = 0
-      if (size(a) == 0) then
-        f64 = relicore_omega_dark_energy(u)
-        call relicore_omega_dark_energy_s(u, s64, stat)
-      end if
-    case ('matter_radiation_equality_redshift')
-      nargs = 0
-      if (size(a) == 0) then
-        f64 = relicore_matter_radiation_equality_redshift(u)
-        call relicore_matter_radiation_equality_redshift_s(u, s64, stat)
-      end if
+    include 'generated/cosmology_one.inc'
     case default
       got%known = .false.
       nargs = -1
@@ -485,78 +294,7 @@ contains
     real(dp), intent(out) :: f64(:), s64(:)
     integer(c_int32_t), intent(out) :: stat(:)
     select case (name)
-    case ('dimensionless_hubble')
-      f64 = relicore_dimensionless_hubble(u, a(1, :))
-      call relicore_dimensionless_hubble_s(u, a(1, :), s64, stat)
-    case ('hubble_parameter_km_s_mpc')
-      f64 = relicore_hubble_parameter_km_s_mpc(u, a(1, :))
-      call relicore_hubble_parameter_km_s_mpc_s(u, a(1, :), s64, stat)
-    case ('omega_matter_at')
-      f64 = relicore_omega_matter_at(u, a(1, :))
-      call relicore_omega_matter_at_s(u, a(1, :), s64, stat)
-    case ('omega_radiation_at')
-      f64 = relicore_omega_radiation_at(u, a(1, :))
-      call relicore_omega_radiation_at_s(u, a(1, :), s64, stat)
-    case ('omega_dark_energy_at')
-      f64 = relicore_omega_dark_energy_at(u, a(1, :))
-      call relicore_omega_dark_energy_at_s(u, a(1, :), s64, stat)
-    case ('omega_curvature_at')
-      f64 = relicore_omega_curvature_at(u, a(1, :))
-      call relicore_omega_curvature_at_s(u, a(1, :), s64, stat)
-    case ('critical_density_kg_m3')
-      f64 = relicore_critical_density_kg_m3(u, a(1, :))
-      call relicore_critical_density_kg_m3_s(u, a(1, :), s64, stat)
-    case ('cmb_temperature_at_k')
-      f64 = relicore_cmb_temperature_at_k(u, a(1, :))
-      call relicore_cmb_temperature_at_k_s(u, a(1, :), s64, stat)
-    case ('comoving_distance_mpc')
-      f64 = relicore_comoving_distance_mpc(u, a(1, :))
-      call relicore_comoving_distance_mpc_s(u, a(1, :), s64, stat)
-    case ('transverse_comoving_distance_mpc')
-      f64 = relicore_transverse_comoving_distance_mpc(u, a(1, :))
-      call relicore_transverse_comoving_distance_mpc_s(u, a(1, :), s64, stat)
-    case ('angular_diameter_distance_mpc')
-      f64 = relicore_angular_diameter_distance_mpc(u, a(1, :))
-      call relicore_angular_diameter_distance_mpc_s(u, a(1, :), s64, stat)
-    case ('luminosity_distance_mpc')
-      f64 = relicore_luminosity_distance_mpc(u, a(1, :))
-      call relicore_luminosity_distance_mpc_s(u, a(1, :), s64, stat)
-    case ('distance_modulus')
-      f64 = relicore_distance_modulus(u, a(1, :))
-      call relicore_distance_modulus_s(u, a(1, :), s64, stat)
-    case ('comoving_volume_gpc3')
-      f64 = relicore_comoving_volume_gpc3(u, a(1, :))
-      call relicore_comoving_volume_gpc3_s(u, a(1, :), s64, stat)
-    case ('differential_comoving_volume_mpc3_sr')
-      f64 = relicore_differential_comoving_volume_mpc3_sr(u, a(1, :))
-      call relicore_differential_comoving_volume_mpc3_sr_s(u, a(1, :), s64, stat)
-    case ('transverse_scale_kpc_per_arcsec')
-      f64 = relicore_transverse_scale_kpc_per_arcsec(u, a(1, :))
-      call relicore_transverse_scale_kpc_per_arcsec_s(u, a(1, :), s64, stat)
-    case ('lookback_time_gyr')
-      f64 = relicore_lookback_time_gyr(u, a(1, :))
-      call relicore_lookback_time_gyr_s(u, a(1, :), s64, stat)
-    case ('age_gyr')
-      f64 = relicore_age_gyr(u, a(1, :))
-      call relicore_age_gyr_s(u, a(1, :), s64, stat)
-    case ('conformal_time_mpc')
-      f64 = relicore_conformal_time_mpc(u, a(1, :))
-      call relicore_conformal_time_mpc_s(u, a(1, :), s64, stat)
-    case ('redshift_at_age_gyr')
-      f64 = relicore_redshift_at_age_gyr(u, a(1, :))
-      call relicore_redshift_at_age_gyr_s(u, a(1, :), s64, stat)
-    case ('redshift_at_lookback_time_gyr')
-      f64 = relicore_redshift_at_lookback_time_gyr(u, a(1, :))
-      call relicore_redshift_at_lookback_time_gyr_s(u, a(1, :), s64, stat)
-    case ('redshift_at_comoving_distance_mpc')
-      f64 = relicore_redshift_at_comoving_distance_mpc(u, a(1, :))
-      call relicore_redshift_at_comoving_distance_mpc_s(u, a(1, :), s64, stat)
-    case ('redshift_at_luminosity_distance_mpc')
-      f64 = relicore_redshift_at_luminosity_distance_mpc(u, a(1, :))
-      call relicore_redshift_at_luminosity_distance_mpc_s(u, a(1, :), s64, stat)
-    case ('angular_diameter_distance_between_mpc')
-      f64 = relicore_angular_diameter_distance_between_mpc(u, a(1, :), a(2, :))
-      call relicore_angular_diameter_distance_between_mpc_s(u, a(1, :), a(2, :), s64, stat)
+    include 'generated/cosmology_many.inc'
     case default
       error stop 'test_cosmology: no elemental dispatch for ' // name
     end select
@@ -570,52 +308,7 @@ contains
     real(dp), intent(out) :: out(:)
     integer(c_int32_t), intent(out) :: stat
     select case (name)
-    case ('dimensionless_hubble')
-      call relicore_dimensionless_hubble_array(u, x, out, stat)
-    case ('hubble_parameter_km_s_mpc')
-      call relicore_hubble_parameter_km_s_mpc_array(u, x, out, stat)
-    case ('omega_matter_at')
-      call relicore_omega_matter_at_array(u, x, out, stat)
-    case ('omega_radiation_at')
-      call relicore_omega_radiation_at_array(u, x, out, stat)
-    case ('omega_dark_energy_at')
-      call relicore_omega_dark_energy_at_array(u, x, out, stat)
-    case ('omega_curvature_at')
-      call relicore_omega_curvature_at_array(u, x, out, stat)
-    case ('critical_density_kg_m3')
-      call relicore_critical_density_kg_m3_array(u, x, out, stat)
-    case ('cmb_temperature_at_k')
-      call relicore_cmb_temperature_at_k_array(u, x, out, stat)
-    case ('comoving_distance_mpc')
-      call relicore_comoving_distance_mpc_array(u, x, out, stat)
-    case ('transverse_comoving_distance_mpc')
-      call relicore_transverse_comoving_distance_mpc_array(u, x, out, stat)
-    case ('angular_diameter_distance_mpc')
-      call relicore_angular_diameter_distance_mpc_array(u, x, out, stat)
-    case ('luminosity_distance_mpc')
-      call relicore_luminosity_distance_mpc_array(u, x, out, stat)
-    case ('distance_modulus')
-      call relicore_distance_modulus_array(u, x, out, stat)
-    case ('comoving_volume_gpc3')
-      call relicore_comoving_volume_gpc3_array(u, x, out, stat)
-    case ('differential_comoving_volume_mpc3_sr')
-      call relicore_differential_comoving_volume_mpc3_sr_array(u, x, out, stat)
-    case ('transverse_scale_kpc_per_arcsec')
-      call relicore_transverse_scale_kpc_per_arcsec_array(u, x, out, stat)
-    case ('lookback_time_gyr')
-      call relicore_lookback_time_gyr_array(u, x, out, stat)
-    case ('age_gyr')
-      call relicore_age_gyr_array(u, x, out, stat)
-    case ('conformal_time_mpc')
-      call relicore_conformal_time_mpc_array(u, x, out, stat)
-    case ('redshift_at_age_gyr')
-      call relicore_redshift_at_age_gyr_array(u, x, out, stat)
-    case ('redshift_at_lookback_time_gyr')
-      call relicore_redshift_at_lookback_time_gyr_array(u, x, out, stat)
-    case ('redshift_at_comoving_distance_mpc')
-      call relicore_redshift_at_comoving_distance_mpc_array(u, x, out, stat)
-    case ('redshift_at_luminosity_distance_mpc')
-      call relicore_redshift_at_luminosity_distance_mpc_array(u, x, out, stat)
+    include 'generated/cosmology_array.inc'
     case default
       error stop 'test_cosmology: no array form for ' // name
     end select
@@ -628,21 +321,7 @@ contains
     real(dp), intent(out) :: f64(:), s64(:)
     integer(c_int32_t), intent(out) :: stat(:)
     select case (name)
-    case ('hubble_distance_mpc')
-      f64 = relicore_hubble_distance_mpc(us)
-      call relicore_hubble_distance_mpc_s(us, s64, stat)
-    case ('hubble_time_gyr')
-      f64 = relicore_hubble_time_gyr(us)
-      call relicore_hubble_time_gyr_s(us, s64, stat)
-    case ('omega_radiation')
-      f64 = relicore_omega_radiation(us)
-      call relicore_omega_radiation_s(us, s64, stat)
-    case ('omega_dark_energy')
-      f64 = relicore_omega_dark_energy(us)
-      call relicore_omega_dark_energy_s(us, s64, stat)
-    case ('matter_radiation_equality_redshift')
-      f64 = relicore_matter_radiation_equality_redshift(us)
-      call relicore_matter_radiation_equality_redshift_s(us, s64, stat)
+    include 'generated/cosmology_constants.inc'
     case default
       error stop 'test_cosmology: not a constant: ' // name
     end select
@@ -699,9 +378,6 @@ contains
   ! The constants of all universes at once (elemental in the universe, on a copy of the
   ! universes made by assignment) equal the scalar calls on the originals.
   subroutine test_elemental_universes()
-    character(len=48), parameter :: constants(*) = [character(len=48) :: 'hubble_distance_mpc', &
-        'hubble_time_gyr', 'omega_radiation', 'omega_dark_energy', &
-        'matter_radiation_equality_redshift']
     type(relicore_universe) :: us(nuniverses)
     real(dp) :: f64(nuniverses), s64(nuniverses)
     integer(c_int32_t) :: stat(nuniverses)
@@ -711,15 +387,15 @@ contains
     logical :: ok
 
     us(:) = universes(1:nuniverses)%u
-    do k = 1, size(constants)
-      call evaluate_constants(trim(constants(k)), us, f64, s64, stat)
+    do k = 1, size(constant_names)
+      call evaluate_constants(trim(constant_names(k)), us, f64, s64, stat)
       ok = .true.
       do ui = 1, nuniverses
-        call evaluate_one(trim(constants(k)), universes(ui)%u, none, one)
+        call evaluate_one(trim(constant_names(k)), universes(ui)%u, none, one)
         ok = ok .and. same64(one%f64, f64(ui)) .and. same64(one%s64, s64(ui)) .and. &
             one%stat == stat(ui)
       end do
-      call check(ok, 'elemental ' // trim(constants(k)) // ' over ' // int_text(nuniverses) // &
+      call check(ok, 'elemental ' // trim(constant_names(k)) // ' over ' // int_text(nuniverses) // &
           ' copied universes differs from the scalar calls')
     end do
   end subroutine test_elemental_universes

@@ -34,6 +34,9 @@
 ! allocatable (163848 bytes each: not for the stack). The record reader, number parsing,
 ! tolerances and failure messages it shares with test_blackbody and test_cosmology are in
 ! vector_files.f90.
+! The dispatch by name of the regular functions (their `case` blocks and name lists) is
+! generated from bindings/functions.toml into tests/fortran/generated/*.inc by
+! `python3 bindings/generate.py --write`; only the irregular functions are dispatched here.
 program test_decoupling
   use, intrinsic :: iso_c_binding, only: c_double, c_int32_t
   use, intrinsic :: ieee_arithmetic, only: ieee_is_nan, ieee_value, ieee_quiet_nan, &
@@ -76,23 +79,7 @@ program test_decoupling
     type(outcome) :: got
   end type vector
 
-  character(len=48), parameter :: all_names(*) = [character(len=48) :: &
-      'saha_ionized_fraction', 'last_scattering_redshift_fit', 'drag_redshift_fit', &
-      'ionized_fraction', 'matter_temperature_k', 'optical_depth', 'visibility', &
-      'sound_horizon_mpc', 'last_scattering_redshift', 'drag_redshift', &
-      'sound_horizon_last_scattering_mpc', 'sound_horizon_drag_mpc', &
-      'angular_scale_last_scattering', 'age_at_last_scattering_yr', &
-      'temperature_at_last_scattering_k', 'visibility_peak_redshift', &
-      'thermal_decoupling_redshift', 'reionization_optical_depth']
-  character(len=48), parameter :: query_names(*) = [character(len=48) :: 'ionized_fraction', &
-      'matter_temperature_k', 'optical_depth', 'visibility', 'sound_horizon_mpc']
-  character(len=48), parameter :: summary_names(*) = [character(len=48) :: &
-      'last_scattering_redshift', 'drag_redshift', 'sound_horizon_last_scattering_mpc', &
-      'sound_horizon_drag_mpc', 'angular_scale_last_scattering', 'age_at_last_scattering_yr', &
-      'temperature_at_last_scattering_k', 'visibility_peak_redshift', &
-      'thermal_decoupling_redshift', 'reionization_optical_depth']
-  character(len=48), parameter :: fit_names(*) = [character(len=48) :: &
-      'last_scattering_redshift_fit', 'drag_redshift_fit']
+  include 'generated/decoupling_names.inc'
 
   type(named_universe), allocatable :: universes(:)
   type(named_history), allocatable :: histories(:)
@@ -180,7 +167,7 @@ contains
   ! The target of a name: on_universe, on_history, on_nothing (fits), 0 unknown.
   integer function target_of(name)
     character(len=*), intent(in) :: name
-    if (name == 'saha_ionized_fraction') then
+    if (any(universe_names == name)) then
       target_of = on_universe
     else if (any(fit_names == name)) then
       target_of = on_nothing
@@ -459,12 +446,13 @@ contains
     type(outcome), intent(out) :: got
     got%f64 = nan()
     got%s64 = nan()
-    got%known = name == 'saha_ionized_fraction'
-    got%nargs = 1
-    if (got%known .and. size(a) == 1) then
-      got%f64 = relicore_saha_ionized_fraction(u, a(1))
-      call relicore_saha_ionized_fraction_s(u, a(1), got%s64, got%stat)
-    end if
+    got%known = .true.
+    select case (name)
+    include 'generated/decoupling_universe.inc'
+    case default
+      got%known = .false.
+      got%nargs = -1
+    end select
   end subroutine evaluate_universe
 
   subroutine evaluate_fit(name, a, got)
@@ -474,17 +462,11 @@ contains
     got%f64 = nan()
     got%s64 = nan()
     got%known = .true.
-    got%nargs = 2
-    if (size(a) /= 2) return
     select case (name)
-    case ('last_scattering_redshift_fit')
-      got%f64 = relicore_last_scattering_redshift_fit(a(1), a(2))
-      call relicore_last_scattering_redshift_fit_s(a(1), a(2), got%s64, got%stat)
-    case ('drag_redshift_fit')
-      got%f64 = relicore_drag_redshift_fit(a(1), a(2))
-      call relicore_drag_redshift_fit_s(a(1), a(2), got%s64, got%stat)
+    include 'generated/decoupling_fit.inc'
     case default
       got%known = .false.
+      got%nargs = -1
     end select
   end subroutine evaluate_fit
 
@@ -493,61 +475,11 @@ contains
     type(relicore_thermal_history), intent(in) :: h
     real(dp), intent(in) :: a(:)
     type(outcome), intent(out) :: got
-    real(dp) :: z
     got%f64 = nan()
     got%s64 = nan()
     got%known = .true.
-    got%nargs = 0
-    if (any(query_names == name)) got%nargs = 1
-    if (size(a) /= got%nargs) return
-    z = 0
-    if (got%nargs == 1) z = a(1)
     select case (name)
-    case ('ionized_fraction')
-      got%f64 = relicore_ionized_fraction(h, z)
-      call relicore_ionized_fraction_s(h, z, got%s64, got%stat)
-    case ('matter_temperature_k')
-      got%f64 = relicore_matter_temperature_k(h, z)
-      call relicore_matter_temperature_k_s(h, z, got%s64, got%stat)
-    case ('optical_depth')
-      got%f64 = relicore_optical_depth(h, z)
-      call relicore_optical_depth_s(h, z, got%s64, got%stat)
-    case ('visibility')
-      got%f64 = relicore_visibility(h, z)
-      call relicore_visibility_s(h, z, got%s64, got%stat)
-    case ('sound_horizon_mpc')
-      got%f64 = relicore_sound_horizon_mpc(h, z)
-      call relicore_sound_horizon_mpc_s(h, z, got%s64, got%stat)
-    case ('last_scattering_redshift')
-      got%f64 = relicore_last_scattering_redshift(h)
-      call relicore_last_scattering_redshift_s(h, got%s64, got%stat)
-    case ('drag_redshift')
-      got%f64 = relicore_drag_redshift(h)
-      call relicore_drag_redshift_s(h, got%s64, got%stat)
-    case ('sound_horizon_last_scattering_mpc')
-      got%f64 = relicore_sound_horizon_last_scattering_mpc(h)
-      call relicore_sound_horizon_last_scattering_mpc_s(h, got%s64, got%stat)
-    case ('sound_horizon_drag_mpc')
-      got%f64 = relicore_sound_horizon_drag_mpc(h)
-      call relicore_sound_horizon_drag_mpc_s(h, got%s64, got%stat)
-    case ('angular_scale_last_scattering')
-      got%f64 = relicore_angular_scale_last_scattering(h)
-      call relicore_angular_scale_last_scattering_s(h, got%s64, got%stat)
-    case ('age_at_last_scattering_yr')
-      got%f64 = relicore_age_at_last_scattering_yr(h)
-      call relicore_age_at_last_scattering_yr_s(h, got%s64, got%stat)
-    case ('temperature_at_last_scattering_k')
-      got%f64 = relicore_temperature_at_last_scattering_k(h)
-      call relicore_temperature_at_last_scattering_k_s(h, got%s64, got%stat)
-    case ('visibility_peak_redshift')
-      got%f64 = relicore_visibility_peak_redshift(h)
-      call relicore_visibility_peak_redshift_s(h, got%s64, got%stat)
-    case ('thermal_decoupling_redshift')
-      got%f64 = relicore_thermal_decoupling_redshift(h)
-      call relicore_thermal_decoupling_redshift_s(h, got%s64, got%stat)
-    case ('reionization_optical_depth')
-      got%f64 = relicore_reionization_optical_depth(h)
-      call relicore_reionization_optical_depth_s(h, got%s64, got%stat)
+    include 'generated/decoupling_history.inc'
     case default
       got%known = .false.
       got%nargs = -1
@@ -563,24 +495,7 @@ contains
     real(dp), intent(out) :: f64(:), s64(:)
     integer(c_int32_t), intent(out) :: stat(:)
     select case (name)
-    case ('saha_ionized_fraction')
-      f64 = relicore_saha_ionized_fraction(u, z)
-      call relicore_saha_ionized_fraction_s(u, z, s64, stat)
-    case ('ionized_fraction')
-      f64 = relicore_ionized_fraction(h, z)
-      call relicore_ionized_fraction_s(h, z, s64, stat)
-    case ('matter_temperature_k')
-      f64 = relicore_matter_temperature_k(h, z)
-      call relicore_matter_temperature_k_s(h, z, s64, stat)
-    case ('optical_depth')
-      f64 = relicore_optical_depth(h, z)
-      call relicore_optical_depth_s(h, z, s64, stat)
-    case ('visibility')
-      f64 = relicore_visibility(h, z)
-      call relicore_visibility_s(h, z, s64, stat)
-    case ('sound_horizon_mpc')
-      f64 = relicore_sound_horizon_mpc(h, z)
-      call relicore_sound_horizon_mpc_s(h, z, s64, stat)
+    include 'generated/decoupling_many.inc'
     case default
       error stop 'test_decoupling: no elemental dispatch for ' // name
     end select
@@ -595,18 +510,7 @@ contains
     real(dp), intent(out) :: out(:)
     integer(c_int32_t), intent(out) :: stat
     select case (name)
-    case ('saha_ionized_fraction')
-      call relicore_saha_ionized_fraction_array(u, x, out, stat)
-    case ('ionized_fraction')
-      call relicore_ionized_fraction_array(h, x, out, stat)
-    case ('matter_temperature_k')
-      call relicore_matter_temperature_k_array(h, x, out, stat)
-    case ('optical_depth')
-      call relicore_optical_depth_array(h, x, out, stat)
-    case ('visibility')
-      call relicore_visibility_array(h, x, out, stat)
-    case ('sound_horizon_mpc')
-      call relicore_sound_horizon_mpc_array(h, x, out, stat)
+    include 'generated/decoupling_array.inc'
     case default
       error stop 'test_decoupling: no array form for ' // name
     end select
@@ -619,36 +523,7 @@ contains
     real(dp), intent(out) :: f64(:), s64(:)
     integer(c_int32_t), intent(out) :: stat(:)
     select case (name)
-    case ('last_scattering_redshift')
-      f64 = relicore_last_scattering_redshift(hs)
-      call relicore_last_scattering_redshift_s(hs, s64, stat)
-    case ('drag_redshift')
-      f64 = relicore_drag_redshift(hs)
-      call relicore_drag_redshift_s(hs, s64, stat)
-    case ('sound_horizon_last_scattering_mpc')
-      f64 = relicore_sound_horizon_last_scattering_mpc(hs)
-      call relicore_sound_horizon_last_scattering_mpc_s(hs, s64, stat)
-    case ('sound_horizon_drag_mpc')
-      f64 = relicore_sound_horizon_drag_mpc(hs)
-      call relicore_sound_horizon_drag_mpc_s(hs, s64, stat)
-    case ('angular_scale_last_scattering')
-      f64 = relicore_angular_scale_last_scattering(hs)
-      call relicore_angular_scale_last_scattering_s(hs, s64, stat)
-    case ('age_at_last_scattering_yr')
-      f64 = relicore_age_at_last_scattering_yr(hs)
-      call relicore_age_at_last_scattering_yr_s(hs, s64, stat)
-    case ('temperature_at_last_scattering_k')
-      f64 = relicore_temperature_at_last_scattering_k(hs)
-      call relicore_temperature_at_last_scattering_k_s(hs, s64, stat)
-    case ('visibility_peak_redshift')
-      f64 = relicore_visibility_peak_redshift(hs)
-      call relicore_visibility_peak_redshift_s(hs, s64, stat)
-    case ('thermal_decoupling_redshift')
-      f64 = relicore_thermal_decoupling_redshift(hs)
-      call relicore_thermal_decoupling_redshift_s(hs, s64, stat)
-    case ('reionization_optical_depth')
-      f64 = relicore_reionization_optical_depth(hs)
-      call relicore_reionization_optical_depth_s(hs, s64, stat)
+    include 'generated/decoupling_summaries.inc'
     case default
       error stop 'test_decoupling: not a summary value: ' // name
     end select
@@ -678,9 +553,7 @@ contains
   ! For each target and one-argument name: the arguments of all its vectors as an array through
   ! the elemental forms give the scalar calls' results and statuses bit for bit.
   subroutine test_elemental_arrays()
-    character(len=48), parameter :: names(*) = [character(len=48) :: 'saha_ionized_fraction', &
-        'ionized_fraction', 'matter_temperature_k', 'optical_depth', 'visibility', &
-        'sound_horizon_mpc']
+    character(len=48), parameter :: names(*) = [universe_names, query_names]
     integer :: ti, k, j, n, ntargets, hi, ui
     integer, allocatable :: members(:)
     real(dp), allocatable :: z(:), f64(:), s64(:)
@@ -689,7 +562,7 @@ contains
 
     do k = 1, size(names)
       ntargets = nhistories
-      if (k == 1) ntargets = nuniverses
+      if (k <= size(universe_names)) ntargets = nuniverses
       do ti = 1, ntargets
         members = members_of(trim(names(k)), ti)
         n = size(members)
@@ -698,8 +571,8 @@ contains
         allocate (f64(n), s64(n), stat(n))
         ui = 1
         hi = 1
-        if (k == 1) ui = ti
-        if (k /= 1) hi = ti
+        if (k <= size(universe_names)) ui = ti
+        if (k > size(universe_names)) hi = ti
         call evaluate_many(trim(names(k)), universes(ui)%u, histories(hi)%h, z, f64, s64, stat)
         ok = .true.
         do j = 1, n
@@ -748,9 +621,7 @@ contains
   ! values; a too-long out is RELICORE_ERROR_LENGTH_MISMATCH with every element NaN; an empty
   ! array is RELICORE_OK.
   subroutine test_array_forms()
-    character(len=48), parameter :: names(*) = [character(len=48) :: 'saha_ionized_fraction', &
-        'ionized_fraction', 'matter_temperature_k', 'optical_depth', 'visibility', &
-        'sound_horizon_mpc']
+    character(len=48), parameter :: names(*) = [universe_names, query_names]
     integer :: ti, k, j, n, ntargets, ui, hi
     integer, allocatable :: members(:)
     real(dp), allocatable :: x(:), out(:), ref(:), ref_s(:), strided(:), too_long(:)
@@ -761,15 +632,15 @@ contains
 
     do k = 1, size(names)
       ntargets = nhistories
-      if (k == 1) ntargets = nuniverses
+      if (k <= size(universe_names)) ntargets = nuniverses
       do ti = 1, ntargets
         members = members_of(trim(names(k)), ti)
         n = size(members)
         if (n == 0) cycle
         ui = 1
         hi = 1
-        if (k == 1) ui = ti
-        if (k /= 1) hi = ti
+        if (k <= size(universe_names)) ui = ti
+        if (k > size(universe_names)) hi = ti
         x = [(vectors(members(j))%args(1), j = 1, n)]
         allocate (out(n), ref(n), ref_s(n), stats(n), strided(2 * n), too_long(n + 1))
         strided = 0
@@ -814,17 +685,10 @@ contains
       do m = 1, n
         wm = vectors(members(m))%args(2)
         if (any(same64([(vectors(members(j))%args(2), j = 1, m - 1)], wm))) cycle
-        select case (k)
-        case (1)
-          call relicore_last_scattering_redshift_fit_array(wb, wm, out, stat)
-          ref = relicore_last_scattering_redshift_fit(wb, wm)
-          call relicore_last_scattering_redshift_fit_s(wb, wm, ref_s, stats)
-          call relicore_last_scattering_redshift_fit_array(wb(1:1), wm, too_long, stat_mismatch)
+        select case (fit_names(k))
+        include 'generated/decoupling_fit_arrays.inc'
         case default
-          call relicore_drag_redshift_fit_array(wb, wm, out, stat)
-          ref = relicore_drag_redshift_fit(wb, wm)
-          call relicore_drag_redshift_fit_s(wb, wm, ref_s, stats)
-          call relicore_drag_redshift_fit_array(wb(1:1), wm, too_long, stat_mismatch)
+          error stop 'test_decoupling: no array form for ' // trim(fit_names(k))
         end select
         ok = stat == first_failure(stats) .and. all(same64(out, ref)) .and. &
             all(same64(ref_s, ref)) .and. stat_mismatch == RELICORE_ERROR_LENGTH_MISMATCH .and. &

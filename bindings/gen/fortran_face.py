@@ -1,0 +1,544 @@
+"""The Fortran face: bindings/fortran/relicore.f90 from the hand-kept template
+bindings/fortran/relicore.in.f90 (module header, kinds, types, constants, status message and
+version, the calibration, response-table, universe and thermal-history procedures) and the
+table. The template's marker lines are replaced:
+
+    !@ coverage     rows of the coverage table (C function, Fortran procedures), in a comment
+    !@ public       the public statement of the table's procedures
+    !@ interfaces   one bind(C) interface per C symbol of the table, its prototype above it
+    !@ procedures   per table entry: its doc comment, then the elemental function, the `_s`
+                    status subroutine, the `_array` subroutine and the `_f32`, `_f32_s`,
+                    `_array_f32` twins it has
+
+Each procedure's comment is the core's rustdoc summary plus the table's argument meanings and
+result; the conventions every wrapper shares (NaN on failure, stat, the stop message) are said
+once, in the template's module header. Template lines starting with `!!` describe the template
+itself and are not copied.
+
+Also written: the dispatch lists of the Fortran vector tests (tests/fortran/generated/*.inc),
+the `case` blocks and name lists by which test_blackbody, test_cosmology and test_decoupling
+call a table function by its name.
+"""
+
+from __future__ import annotations
+
+import re
+import textwrap
+from dataclasses import dataclass
+from pathlib import Path
+
+from . import rustdoc
+from .common import banner
+from .table import ROOT, Function
+
+TEMPLATE = ROOT / "bindings" / "fortran" / "relicore.in.f90"
+MODULE = ROOT / "bindings" / "fortran" / "relicore.f90"
+TESTS = ROOT / "tests" / "fortran" / "generated"
+MARKERS = ("coverage", "public", "interfaces", "procedures")
+WIDTH = 100
+
+# the value passed first: (dummy name, Fortran type, C struct, where it comes from)
+RECEIVERS = {
+    "universe": ("universe", "relicore_universe", "from relicore_universe_init"),
+    "history": ("history", "relicore_thermal_history", "from relicore_thermal_history_compute"),
+}
+
+
+class FortranFaceError(Exception):
+    pass
+
+
+# ---------------------------------------------------------------------------- text
+# The core's docs are Unicode; the module stays ASCII (any compiler, any terminal).
+_SUPER = dict(zip("⁰¹²³⁴⁵⁶⁷⁸⁹⁻⁺ⁿˣ", "0123456789-+nx"))
+_SUB = dict(zip("₀₁₂₃₄₅₆₇₈₉ₙ", "0123456789n"))
+_WORDS = {
+    "λ": "lambda", "ν": "nu", "Ω": "Omega", "ω": "omega", "φ": "phi", "π": "pi", "ρ": "rho",
+    "τ": "tau", "σ": "sigma", "χ": "chi", "ε": "epsilon", "Δ": "Delta", "Σ": "Sigma",
+    "η": "eta", "ζ": "zeta", "γ": "gamma", "θ": "theta", "ṽ": "nu~", "∫": "int", "√": "sqrt",
+    "∂": "d", "∞": "Inf",
+}
+_SYMBOLS = {"−": "-", "–": "-", "·": "*", "→": "->", "…": "...", "≤": "<=", "≥": ">=", "×": "x"}
+
+
+def ascii_text(text: str) -> str:
+    """Unicode of the rustdoc to plain ASCII; fails on a character it has no spelling for."""
+    out: list[str] = []
+    i = 0
+    while i < len(text):
+        ch = text[i]
+        if ch in _SUPER:
+            run = ""
+            while i < len(text) and text[i] in _SUPER:
+                run += _SUPER[text[i]]
+                i += 1
+            out.append("^" + run)
+            continue
+        if ch in _SUB:
+            out.append(_SUB[ch])
+        elif ch in _WORDS:
+            word = _WORDS[ch]
+            if out and out[-1][-1:].isalnum():
+                word = " " + word
+            if i + 1 < len(text) and text[i + 1].isalpha():
+                word += " "
+            out.append(word)
+        elif ch in _SYMBOLS:
+            out.append(_SYMBOLS[ch])
+        elif ord(ch) > 127:
+            raise FortranFaceError(
+                f"no ASCII spelling for {ch!r} (U+{ord(ch):04X}) in {text!r}: add it to "
+                "bindings/gen/fortran_face.py"
+            )
+        else:
+            out.append(ch)
+        i += 1
+    return "".join(out)
+
+
+def comment(text: str, indent: str = "  ", lead: str = "", hang: str = "") -> list[str]:
+    """A comment paragraph wrapped to WIDTH."""
+    return textwrap.wrap(
+        text, WIDTH, initial_indent=f"{indent}! {lead}", subsequent_indent=f"{indent}! {hang}",
+        break_on_hyphens=False, break_long_words=False,
+    )
+
+
+def statement(indent: str, text: str, extra: str = "    ") -> list[str]:
+    """A Fortran statement, continued with `&` at ', ' boundaries to stay within WIDTH."""
+    if len(indent) + len(text) <= WIDTH:
+        return [indent + text]
+    parts = text.split(", ")
+    lines: list[str] = []
+    current = indent + parts[0]
+    for part in parts[1:]:
+        if len(current) + 2 + len(part) + 2 > WIDTH:
+            lines.append(current + ", &")
+            current = indent + extra + part
+        else:
+            current += ", " + part
+    lines.append(current)
+    return lines
+
+
+# ---------------------------------------------------------------------------- forms
+@dataclass(frozen=True)
+class Form:
+    """One C symbol of a table entry and the Fortran procedures over it."""
+
+    fn: Function
+    f32: bool
+    array: bool
+
+    @property
+    def kind(self) -> str:
+        return "c_float" if self.f32 else "c_double"
+
+    @property
+    def ctype(self) -> str:
+        return "float" if self.f32 else "double"
+
+    @property
+    def nan(self) -> str:
+        return "nan32()" if self.f32 else "nan64()"
+
+    @property
+    def suffix(self) -> str:
+        return ("_array" if self.array else "") + ("_f32" if self.f32 else "")
+
+    @property
+    def c_name(self) -> str:
+        return f"relicore_{self.fn.name}{self.suffix}"
+
+    @property
+    def raw(self) -> str:
+        return f"c_{self.fn.name}{self.suffix}"
+
+    @property
+    def receiver(self) -> tuple[str, str, str] | None:
+        return RECEIVERS.get(self.fn.receiver)
+
+    def args(self) -> list[str]:
+        """The Fortran dummies before out/stat: receiver, arguments, the array in its place."""
+        names = [self.receiver[0]] if self.receiver else []
+        for a in self.fn.args:
+            if self.array and a.name == self.fn.array.arg:
+                names.append(self.fn.array.name)
+            else:
+                names.append(a.name)
+        return names
+
+    def c_args(self) -> list[str]:
+        """The C parameters' names: the array followed by its length n, then out."""
+        out = []
+        for name in self.args():
+            out.append(name)
+            if self.array and name == self.fn.array.name:
+                out.append("n")
+        return out + ["out"]
+
+    def scalars(self) -> list[str]:
+        return [a for a in self.args() if (not self.receiver or a != self.receiver[0])
+                and not (self.array and a == self.fn.array.name)]
+
+
+def forms(fn: Function) -> list[Form]:
+    out = [Form(fn, False, False)]
+    if fn.f32:
+        out.append(Form(fn, True, False))
+    if fn.array:
+        out.append(Form(fn, False, True))
+    if fn.array_f32:
+        out.append(Form(fn, True, True))
+    return out
+
+
+def procedures(form: Form) -> list[str]:
+    """The Fortran names over one C symbol: the function and `_s`, or the array subroutine."""
+    if form.array:
+        return [form.c_name]
+    return [form.c_name, form.c_name + "_s"]
+
+
+# ---------------------------------------------------------------------------- the module
+def prototype(form: Form) -> str:
+    params = []
+    if form.receiver:
+        params.append(f"const struct {form.receiver[1]} *{form.receiver[0]}")
+    for name in form.args()[1 if form.receiver else 0:]:
+        if form.array and name == form.fn.array.name:
+            params += [f"const {form.ctype} *{name}", "size_t n"]
+        else:
+            params.append(f"{form.ctype} {name}")
+    params.append(f"{form.ctype} *out")
+    return f"int32_t {form.c_name}({', '.join(params)});"
+
+
+def interface(form: Form) -> list[str]:
+    lines = comment(prototype(form), indent="    ", hang="    ")
+    lines += statement("    ", f"function {form.raw}({', '.join(form.c_args())}) &")
+    lines.append(f"        bind(C, name='{form.c_name}') result(status)")
+    imports = [form.kind, "c_int32_t"] + (["c_size_t"] if form.array else [])
+    if form.receiver:
+        imports.append(form.receiver[1])
+    lines += statement("      ", f"import :: {', '.join(imports)}")
+    if form.receiver:
+        lines.append(f"      type({form.receiver[1]}), intent(in) :: {form.receiver[0]}")
+    for name in form.args()[1 if form.receiver else 0:]:
+        if form.array and name == form.fn.array.name:
+            lines.append(f"      real({form.kind}), intent(in) :: {name}(*)")
+            lines.append("      integer(c_size_t), value :: n")
+        else:
+            lines.append(f"      real({form.kind}), value :: {name}")
+    lines.append(f"      real({form.kind}), intent(out) :: out{'(*)' if form.array else ''}")
+    lines.append("      integer(c_int32_t) :: status")
+    lines.append(f"    end function {form.raw}")
+    return lines
+
+
+def _inputs(form: Form) -> list[str]:
+    lines = []
+    if form.receiver:
+        lines.append(f"    type({form.receiver[1]}), intent(in) :: {form.receiver[0]}")
+    if form.array:
+        lines.append(f"    real({form.kind}), intent(in) :: {form.fn.array.name}(:)")
+    if form.scalars():
+        lines += statement("    ", f"real({form.kind}), intent(in) :: {', '.join(form.scalars())}")
+    return lines
+
+
+def scalar_procedures(form: Form) -> list[str]:
+    name, args = form.c_name, form.args()
+    call = ", ".join(args + ["res"])
+    lines = statement("  ", f"impure elemental function {name}({', '.join(args)}) result(res)")
+    lines += _inputs(form)
+    lines.append(f"    real({form.kind}) :: res")
+    lines += statement("    ", f"if ({form.raw}({call}) /= RELICORE_OK) res = {form.nan}")
+    lines.append(f"  end function {name}")
+    lines.append("")
+    lines += statement("  ", f"impure elemental subroutine {name}_s({', '.join(args + ['out', 'stat'])})")
+    lines += _inputs(form)
+    lines.append(f"    real({form.kind}), intent(out) :: out")
+    lines.append("    integer(c_int32_t), intent(out), optional :: stat")
+    lines.append("    integer(c_int32_t) :: code")
+    lines += statement("    ", f"code = {form.raw}({', '.join(args + ['out'])})")
+    lines.append(f"    if (code /= RELICORE_OK) out = {form.nan}")
+    lines.append(f"    call report(code, '{name}', stat)")
+    lines.append(f"  end subroutine {name}_s")
+    return lines
+
+
+def array_procedure(form: Form) -> list[str]:
+    name, args, x = form.c_name, form.args(), form.fn.array.name
+
+    def c_call(array: str, n: str, out: str) -> str:
+        actual = [a if a != x else f"{array}, {n}" for a in args]
+        return f"code = {form.raw}({', '.join(actual + [out])})"
+
+    lines = statement("  ", f"subroutine {name}({', '.join(args + ['out', 'stat'])})")
+    lines += _inputs(form)
+    lines.append(f"    real({form.kind}), intent(out) :: out(:)")
+    lines.append("    integer(c_int32_t), intent(out), optional :: stat")
+    lines.append("    integer(c_int32_t) :: code")
+    if form.receiver:
+        lines.append(f"    real({form.kind}) :: empty(1), empty_out(1)")
+    lines.append(f"    if (size(out) /= size({x})) then")
+    lines.append(f"      out = {form.nan}")
+    lines.append("      code = RELICORE_ERROR_LENGTH_MISMATCH")
+    lines.append(f"    else if (size({x}) == 0) then")
+    if form.receiver:  # the receiver is still checked
+        lines.append("      empty = 0")
+        lines += statement("      ", c_call("empty", "0_c_size_t", "empty_out"))
+    else:
+        lines.append("      code = RELICORE_OK")
+    lines.append("    else")
+    lines += statement("      ", c_call(x, f"size({x}, kind=c_size_t)", "out"))
+    lines.append("    end if")
+    lines.append(f"    call report(code, '{name}', stat)")
+    lines.append(f"  end subroutine {name}")
+    return lines
+
+
+def doc_comment(fn: Function) -> list[str]:
+    _, doc = rustdoc.find(fn)
+    lines = comment(ascii_text(rustdoc.summary(doc)))
+    receiver = RECEIVERS.get(fn.receiver)
+    if receiver:
+        lines += comment(f"{receiver[0]}: {receiver[2]}", lead="  ", hang="      ")
+    for a in fn.args:
+        lines += comment(f"{a.name}: {ascii_text(a.meaning)}", lead="  ", hang="      ")
+    lines += comment(f"Result: {ascii_text(fn.result)}.")
+    base = f"relicore_{fn.name}"
+    text = f"Forms: {base}, {base}_s"
+    if fn.array:
+        arr = Form(fn, False, True)
+        text += (f"; {arr.c_name}({', '.join(arr.args() + ['out', 'stat'])}) with "
+                 f"{fn.array.name}(i) in place of {fn.array.arg}")
+    if fn.f32:
+        text += f"; real(c_float) twins {base}_f32, {base}_f32_s"
+        if fn.array_f32:
+            text += f", {base}_array_f32"
+    lines += comment(text + ".", hang="  ")
+    return lines
+
+
+def module_text(fns: list[Function]) -> str:
+    template = TEMPLATE.read_text().splitlines()
+    all_forms = [form for fn in fns for form in forms(fn)]
+
+    coverage = []
+    for form in all_forms:
+        what = "subroutine" if form.array else "function, _s"
+        coverage.append(f"!   {form.c_name:<62}{what}")
+
+    names = [p for form in all_forms for p in procedures(form)]
+    public = statement("  ", "public :: " + ", ".join(names), extra="    ")
+
+    interfaces = []
+    for form in all_forms:
+        interfaces += interface(form)
+
+    procs: list[str] = []
+    for fn in fns:
+        procs.append("")
+        procs += doc_comment(fn)
+        for k, form in enumerate(forms(fn)):
+            if k:
+                procs.append("")
+            procs += array_procedure(form) if form.array else scalar_procedures(form)
+
+    inserts = {"coverage": coverage, "public": public, "interfaces": interfaces,
+               "procedures": procs}
+    out: list[str] = []
+    seen = set()
+    for line in template:
+        if line.startswith("!!"):
+            continue
+        m = re.fullmatch(r"!@ (\w+)", line.strip())
+        if m:
+            key = m.group(1)
+            if key not in inserts or key in seen:
+                raise FortranFaceError(f"{TEMPLATE.name}: unknown or repeated marker {line!r}")
+            seen.add(key)
+            out += inserts[key]
+        else:
+            out.append(line)
+    missing = set(MARKERS) - seen
+    if missing:
+        raise FortranFaceError(f"{TEMPLATE.name}: markers missing: {sorted(missing)}")
+    for i, line in enumerate(out, 1):
+        if len(line) > 132 or not line.isascii():
+            raise FortranFaceError(f"relicore.f90 line {i} is longer than 132 or not ASCII: {line!r}")
+    what = f"module relicore from the template {TEMPLATE.name}"
+    return banner("!", what) + "\n".join(out).rstrip("\n") + "\n"
+
+
+# ---------------------------------------------------------------------------- test dispatch
+# The vector tests call a table function by its name: each list below is one `select case`
+# block (or one set of name lists) of tests/fortran/test_<topic>.f90, which includes it.
+
+
+def _names(var: str, names: list[str], length: int = 48) -> list[str]:
+    quoted = ", ".join(f"'{n}'" for n in names)
+    head = f"character(len={length})\0parameter :: {var}(*) = [character(len={length}) :: "
+    return [line.replace("\0", ", ") for line in statement("  ", head + quoted + "]")]
+
+
+def _case(name: str, body: list[str], indent: str = "    ") -> list[str]:
+    return [f"{indent}case ('{name}')"] + [indent + "  " + line for line in body]
+
+
+def _body(lines: list[str], indent: str = "") -> list[str]:
+    out = []
+    for line in lines:
+        stripped = line.lstrip(" ")
+        out += statement(indent + line[: len(line) - len(stripped)], stripped)
+    return out
+
+
+def _actuals(fn: Function, column: bool, f32: bool = False, prefix: str = "") -> list[str]:
+    out = []
+    for k in range(1, len(fn.args) + 1):
+        a = f"a({k}, :)" if column else f"a({k})"
+        out.append(f"real({a}, c_float)" if f32 else a)
+    return ([prefix] if prefix else []) + out
+
+
+def _call(fn: Function, actuals: list[str], suffix: str = "") -> str:
+    return f"relicore_{fn.name}{suffix}({', '.join(actuals)})"
+
+
+def _array_actuals(fn: Function, x: str, prefix: str = "") -> list[str]:
+    i = fn.array.index(fn)
+    out = ["fixed"] * len(fn.args)
+    out[i] = x
+    return ([prefix] if prefix else []) + out
+
+
+def test_dispatch(fns: list[Function]) -> dict[str, list[str]]:
+    """{include file name: lines}."""
+    bb = [f for f in fns if f.topic == "blackbody" and f.receiver == "none"]
+    cos = [f for f in fns if f.topic == "cosmology"]
+    dec = [f for f in fns if f.topic == "decoupling"]
+    files: dict[str, list[str]] = {}
+
+    # test_blackbody: evaluate_one, evaluate_many, array_form_64, array_form_32
+    for key, column in (("blackbody_one", False), ("blackbody_many", True)):
+        lines = []
+        for f32 in (False, True):
+            for fn in bb:
+                if f32 and not fn.f32:
+                    continue
+                sfx, res = ("_f32", "32") if f32 else ("", "64")
+                act = _actuals(fn, column, f32)
+                size = "size(a, 1)"
+                lines += _case(fn.name + sfx, _body([
+                    f"nargs = {len(fn.args)}",
+                    f"if ({size} == nargs) then",
+                    f"  f{res} = {_call(fn, act, sfx)}",
+                    f"  call {_call(fn, act + [f's{res}', 'stat'], sfx + '_s')}",
+                    "end if"]))
+        files[key] = lines
+    arrays = [(fn, False) for fn in bb if fn.array] + [(fn, True) for fn in bb if fn.array_f32]
+    for fn, _ in arrays:
+        if len(fn.args) != 2:
+            raise FortranFaceError(f"{fn.name}: test_blackbody's array tests take two arguments")
+    files["blackbody_names"] = (
+        _names("array_names", [fn.name + ("_f32" if f32 else "") for fn, f32 in arrays], 64)
+        + statement("  ", "integer, parameter :: array_positions(*) = ["
+                    + ", ".join(str(fn.array.index(fn) + 1) for fn, _ in arrays) + "]"))
+    for key, want32 in (("blackbody_array_64", False), ("blackbody_array_32", True)):
+        lines = []
+        for fn, f32 in arrays:
+            if f32 != want32:
+                continue
+            sfx = "_f32" if f32 else ""
+            arr = f"_array{sfx}"
+            lines += _case(fn.name + sfx, _body([
+                f"call {_call(fn, _array_actuals(fn, 'x') + ['out', 'stat'], arr)}",
+                f"call {_call(fn, _array_actuals(fn, 'x(n:1:-1)') + ['out_strided(2 * n:2:-2)', 'stat_reversed'], arr)}",
+                f"call {_call(fn, _array_actuals(fn, 'x') + ['too_long', 'stat_mismatch'], arr)}",
+                f"call {_call(fn, _array_actuals(fn, 'x(1:0)') + ['out(1:0)', 'stat_empty'], arr)}",
+                f"ref = {_call(fn, _array_actuals(fn, 'x'), sfx)}",
+                f"call {_call(fn, _array_actuals(fn, 'x') + ['ref_s', 'stats'], sfx + '_s')}"]))
+        files[key] = lines
+
+    # test_cosmology: names, evaluate_one, evaluate_many, array_form, evaluate_constants
+    files["cosmology_names"] = (
+        _names("all_names", [fn.name for fn in cos])
+        + _names("one_names", [fn.name for fn in cos if fn.array])
+        + _names("constant_names", [fn.name for fn in cos if not fn.args]))
+    files["cosmology_one"] = [
+        line for fn in cos for line in _case(fn.name, _body([
+            f"nargs = {len(fn.args)}",
+            f"if (size(a) == {len(fn.args)}) then",
+            f"  f64 = {_call(fn, _actuals(fn, False, prefix='u'))}",
+            f"  call {_call(fn, _actuals(fn, False, prefix='u') + ['s64', 'stat'], '_s')}",
+            "end if"]))]
+    files["cosmology_many"] = [
+        line for fn in cos if fn.args for line in _case(fn.name, _body([
+            f"f64 = {_call(fn, _actuals(fn, True, prefix='u'))}",
+            f"call {_call(fn, _actuals(fn, True, prefix='u') + ['s64', 'stat'], '_s')}"]))]
+    files["cosmology_array"] = [
+        line for fn in cos if fn.array for line in _case(fn.name, _body([
+            f"call {_call(fn, ['u', 'x', 'out', 'stat'], '_array')}"]))]
+    files["cosmology_constants"] = [
+        line for fn in cos if not fn.args for line in _case(fn.name, _body([
+            f"f64 = {_call(fn, ['us'])}",
+            f"call {_call(fn, ['us', 's64', 'stat'], '_s')}"]))]
+
+    # test_decoupling: names; the universe (Saha), fit and history dispatch; the elemental
+    # and array forms over redshifts; the summary values over histories; the fits' arrays
+    recv = {"universe": "u", "history": "h", "none": ""}
+    files["decoupling_names"] = (
+        _names("all_names", [fn.name for fn in dec])
+        + _names("universe_names", [fn.name for fn in dec if fn.receiver == "universe"])
+        + _names("fit_names", [fn.name for fn in dec if fn.receiver == "none"])
+        + _names("query_names", [fn.name for fn in dec if fn.receiver == "history" and fn.args])
+        + _names("summary_names",
+                 [fn.name for fn in dec if fn.receiver == "history" and not fn.args]))
+    for key, receiver in (("decoupling_universe", "universe"), ("decoupling_fit", "none"),
+                          ("decoupling_history", "history")):
+        files[key] = [
+            line for fn in dec if fn.receiver == receiver for line in _case(fn.name, _body([
+                f"got%nargs = {len(fn.args)}",
+                f"if (size(a) == {len(fn.args)}) then",
+                f"  got%f64 = {_call(fn, _actuals(fn, False, prefix=recv[receiver]))}",
+                f"  call {_call(fn, _actuals(fn, False, prefix=recv[receiver]) + ['got%s64', 'got%stat'], '_s')}",
+                "end if"]))]
+    one = [fn for fn in dec if fn.receiver != "none" and len(fn.args) == 1]
+    files["decoupling_many"] = [
+        line for fn in one for line in _case(fn.name, _body([
+            f"f64 = {_call(fn, [recv[fn.receiver], 'z'])}",
+            f"call {_call(fn, [recv[fn.receiver], 'z', 's64', 'stat'], '_s')}"]))]
+    files["decoupling_array"] = [
+        line for fn in one if fn.array for line in _case(fn.name, _body([
+            f"call {_call(fn, [recv[fn.receiver], 'x', 'out', 'stat'], '_array')}"]))]
+    files["decoupling_summaries"] = [
+        line for fn in dec if fn.receiver == "history" and not fn.args
+        for line in _case(fn.name, _body([
+            f"f64 = {_call(fn, ['hs'])}",
+            f"call {_call(fn, ['hs', 's64', 'stat'], '_s')}"]))]
+    fits = [fn for fn in dec if fn.receiver == "none" and fn.array]
+    for fn in fits:
+        if [a.name for a in fn.args].index(fn.array.arg) != 0 or len(fn.args) != 2:
+            raise FortranFaceError(f"{fn.name}: test_fit_arrays takes the first of two arguments")
+    files["decoupling_fit_arrays"] = [
+        line for fn in fits for line in _case(fn.name, _body([
+            f"call {_call(fn, ['wb', 'wm', 'out', 'stat'], '_array')}",
+            f"ref = {_call(fn, ['wb', 'wm'])}",
+            f"call {_call(fn, ['wb', 'wm', 'ref_s', 'stats'], '_s')}",
+            f"call {_call(fn, ['wb(1:1)', 'wm', 'too_long', 'stat_mismatch'], '_array')}"]),
+            indent="        ")]
+    return files
+
+
+def outputs(fns: list[Function]) -> dict[Path, str]:
+    out = {MODULE: module_text(fns)}
+    for key, lines in test_dispatch(fns).items():
+        for i, line in enumerate(lines, 1):
+            if len(line) > 132:
+                raise FortranFaceError(f"{key}.inc line {i} is longer than 132: {line!r}")
+        what = "a dispatch list of the Fortran vector tests"
+        out[TESTS / f"{key}.inc"] = banner("!", what) + "\n".join(lines) + "\n"
+    return out
