@@ -10,7 +10,8 @@
 //! * Every function returns [`Result`]; bad input is an [`Error`] naming the argument, never a
 //!   panic or a silent number.
 //!
-//! Topics: [`blackbody`], [`cosmology`], [`decoupling`]. Constants: [`constants`]. Numerical kernels shared by
+//! Topics: [`blackbody`], [`cosmology`], [`decoupling`], [`growth`] (structure growth: growth
+//! factor and rate, transfer function, linear power spectrum, σ8, BAO ratios, leapfrog factors). Constants: [`constants`]. Numerical kernels shared by
 //! every topic: [`math`].
 //!
 //! # Cautions
@@ -45,6 +46,7 @@ pub mod constants;
 pub mod cosmology;
 pub mod decoupling;
 mod error;
+pub mod growth;
 pub mod math;
 mod real;
 
