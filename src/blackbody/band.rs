@@ -162,7 +162,7 @@ fn edge_term<T: Real>(p: u32, x: T) -> T {
 }
 
 /// Checks a wavelength or frequency band: lower finite ≥ 0, upper > lower (+∞ allowed).
-fn check_band<T: Real>(lower: T, upper: T) -> Result<(T, T)> {
+pub(crate) fn check_band<T: Real>(lower: T, upper: T) -> Result<(T, T)> {
     let lower = non_negative(lower, 0)?;
     if upper.is_nan() || upper == T::neg_infinity() {
         return Err(Error::NonFinite(1));
@@ -299,14 +299,23 @@ pub fn temperature_from_band_radiance_wavelength<T: Real>(
             .sqrt()
             .sqrt()
     };
-    let f = |t: T| {
-        let (a, b) = x_edges_wavelength(lo, up, t);
-        let t2 = t * t;
-        let k4t4 = T::c(K4) * (t2 * t2);
-        let v = k4t4 * planck_band_integral(3, a, b);
-        let edge = edge_term(3, a.0) - edge_term(3, b.0);
-        let dv = (T::c(4.0) * v + k4t4 * edge) / t;
-        (v, dv)
-    };
+    let f = |t: T| band_radiance_and_derivative_wavelength_unchecked(lo, up, t);
     finite_result(invert_increasing(f, l, guess, 2)?, 2)
+}
+
+/// Band radiance between two wavelengths and its temperature derivative, (L, dL/dT), for a band
+/// checked by [`check_band`] and T > 0: dL/dT = (4L + K T⁴ (x_a f(x_a) − x_b f(x_b)))/T with
+/// f(t) = t³/(eᵗ−1), the derivative of K T⁴ ∫_{x_a}^{x_b} f(t) dt with x = c₂/(λT).
+pub(crate) fn band_radiance_and_derivative_wavelength_unchecked<T: Real>(
+    lo: T,
+    up: T,
+    t: T,
+) -> (T, T) {
+    let (a, b) = x_edges_wavelength(lo, up, t);
+    let t2 = t * t;
+    let k4t4 = T::c(K4) * (t2 * t2);
+    let v = k4t4 * planck_band_integral(3, a, b);
+    let edge = edge_term(3, a.0) - edge_term(3, b.0);
+    let dv = (T::c(4.0) * v + k4t4 * edge) / t;
+    (v, dv)
 }

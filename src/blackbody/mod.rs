@@ -1,6 +1,8 @@
 //! Blackbody radiometry: Planck's law in every form, exitances, peaks, band integrals,
 //! inversions to temperature, response-weighted radiance, two-load radiometer calibration and
-//! the microwave-sky conversions at the CMB temperature.
+//! the microwave-sky conversions at the CMB temperature; the measurement equation of radiation
+//! thermometry (emissivity, reflected surroundings, path) with the uncertainty of every
+//! inferred temperature (JCGM 100:2008).
 //!
 //! Every function is generic over [`Real`](crate::Real) (`f32` for firmware, `f64` for
 //! pipelines), allocates nothing, and returns [`Result`](crate::Result).
@@ -37,14 +39,18 @@ mod calibration;
 mod exitance;
 mod inverse;
 pub(crate) mod kernel;
+mod measurement;
 mod microwave;
 mod planck;
 mod response;
+mod uncertainty;
 
 pub use band::*;
 pub use calibration::*;
 pub use exitance::*;
 pub use inverse::*;
+pub use measurement::*;
 pub use microwave::*;
 pub use planck::*;
 pub use response::*;
+pub use uncertainty::*;

@@ -18,7 +18,7 @@ use crate::check::{finite_result, positive};
 use crate::math::quadrature::integrate;
 use crate::{Error, Real, Result};
 
-fn check_table<T: Real>(wavelengths_m: &[T], response: &[T]) -> Result<()> {
+pub(crate) fn check_table<T: Real>(wavelengths_m: &[T], response: &[T]) -> Result<()> {
     if wavelengths_m.len() < 2 {
         return Err(Error::ArrayTooShort(0));
     }
@@ -157,4 +157,16 @@ pub fn temperature_from_response_weighted_radiance<T: Real>(
         (Err(_), Some(e)) => Err(e),
         (Err(e), None) => Err(e),
     }
+}
+
+/// ∫ r(λ) ∂B_λ/∂T dλ for a table checked by [`check_table`] and T > 0: the temperature
+/// derivative of [`response_weighted_radiance`], by the same quadrature of the library's dB/dT.
+pub(crate) fn response_weighted_derivative_unchecked<T: Real>(
+    wavelengths_m: &[T],
+    response: &[T],
+    t: T,
+) -> Result<T> {
+    weighted(wavelengths_m, response, |l| {
+        radiance_temperature_derivative_wavelength_unchecked(l, t)
+    })
 }

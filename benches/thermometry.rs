@@ -1,0 +1,236 @@
+//! Criterion benches of the radiation-thermometry functions (issue 12): one object temperature
+//! with its uncertainty (the firmware case, f32 and f64), the band and response forms, and a
+//! 1000 × 1000 frame of signals to object temperature and u_c, with shared and with per-pixel
+//! emissivity, in f32 and f64. Speed targets live here, never in timed tests.
+
+use criterion::{Criterion, criterion_group, criterion_main};
+use relicore::blackbody as bb;
+use std::hint::black_box;
+
+const SIDE: usize = 1000;
+
+/// An invented frame: a smooth 280…360 K object field seen at 10 µm through a window
+/// (ε 0.95 or per pixel 0.6…0.98, T_refl 295 K, τ 0.92, T_path 290 K).
+fn frame(per_pixel: bool) -> (Vec<f64>, Vec<f64>) {
+    let n = SIDE * SIDE;
+    let mut sig = Vec::with_capacity(n);
+    let mut eps = Vec::with_capacity(if per_pixel { n } else { 1 });
+    if !per_pixel {
+        eps.push(0.95);
+    }
+    for i in 0..n {
+        let (r, c) = ((i / SIDE) as f64, (i % SIDE) as f64);
+        let t = 280.0 + 80.0 * (0.5 + 0.5 * libm::sin(r * 0.01) * libm::cos(c * 0.013));
+        let e = if per_pixel {
+            0.6 + 0.38 * (0.5 + 0.5 * libm::sin((r + c) * 0.003))
+        } else {
+            0.95
+        };
+        if per_pixel {
+            eps.push(e);
+        }
+        sig.push(
+            bb::measured_spectral_radiance_wavelength(10e-6, t, e, 295.0, 0.92, 290.0)
+                .unwrap_or(f64::NAN),
+        );
+    }
+    (sig, eps)
+}
+
+fn scalar(c: &mut Criterion) {
+    let mut g = c.benchmark_group("thermometry_scalar");
+    let s64 = bb::measured_spectral_radiance_wavelength(10e-6, 310.0, 0.95, 295.0, 0.92, 290.0)
+        .unwrap_or(f64::NAN);
+    let s32 = s64 as f32;
+    g.bench_function("object_temperature_wavelength_with_uncertainty_f32", |b| {
+        b.iter(|| {
+            bb::object_temperature_wavelength_with_uncertainty(
+                black_box(10e-6f32),
+                black_box(s32),
+                black_box(0.95f32),
+                black_box(295.0f32),
+                black_box(0.92f32),
+                black_box(290.0f32),
+                black_box(s32 * 0.01),
+                black_box(0.02f32),
+                black_box(2.0f32),
+                black_box(0.01f32),
+                black_box(2.0f32),
+            )
+        })
+    });
+    g.bench_function("object_temperature_wavelength_with_uncertainty_f64", |b| {
+        b.iter(|| {
+            bb::object_temperature_wavelength_with_uncertainty(
+                black_box(10e-6),
+                black_box(s64),
+                black_box(0.95),
+                black_box(295.0),
+                black_box(0.92),
+                black_box(290.0),
+                black_box(s64 * 0.01),
+                black_box(0.02),
+                black_box(2.0),
+                black_box(0.01),
+                black_box(2.0),
+            )
+        })
+    });
+    g.bench_function("object_temperature_wavelength_f32", |b| {
+        b.iter(|| {
+            bb::object_temperature_wavelength(
+                black_box(10e-6f32),
+                black_box(s32),
+                black_box(0.95f32),
+                black_box(295.0f32),
+                black_box(0.92f32),
+                black_box(290.0f32),
+            )
+        })
+    });
+    g.bench_function("object_temperature_wavelength_f64", |b| {
+        b.iter(|| {
+            bb::object_temperature_wavelength(
+                black_box(10e-6),
+                black_box(s64),
+                black_box(0.95),
+                black_box(295.0),
+                black_box(0.92),
+                black_box(290.0),
+            )
+        })
+    });
+    let sb = bb::measured_band_radiance_wavelength(8e-6, 14e-6, 310.0, 0.95, 295.0, 0.92, 290.0)
+        .unwrap_or(f64::NAN);
+    g.bench_function("object_temperature_band_with_uncertainty_f64", |b| {
+        b.iter(|| {
+            bb::object_temperature_band_with_uncertainty(
+                black_box(8e-6),
+                black_box(14e-6),
+                black_box(sb),
+                0.95,
+                295.0,
+                0.92,
+                290.0,
+                sb * 0.01,
+                0.02,
+                2.0,
+                0.01,
+                2.0,
+            )
+        })
+    });
+    let w = [7.5e-6, 8e-6, 13.5e-6, 14e-6];
+    let r = [0.0, 1.0, 1.0, 0.0];
+    let sr = bb::measured_response_weighted_radiance(&w, &r, 310.0, 0.95, 295.0, 0.92, 290.0)
+        .unwrap_or(f64::NAN);
+    g.bench_function("object_temperature_response_with_uncertainty_f64", |b| {
+        b.iter(|| {
+            bb::object_temperature_response_with_uncertainty(
+                &w,
+                &r,
+                black_box(sr),
+                0.95,
+                295.0,
+                0.92,
+                290.0,
+                sr * 0.01,
+                0.02,
+                2.0,
+                0.01,
+                2.0,
+            )
+        })
+    });
+    g.bench_function("calibrated_temperature_with_uncertainty_f32", |b| {
+        b.iter(|| {
+            bb::calibrated_temperature_with_uncertainty(
+                black_box(90e9f32),
+                black_box(1200.0f32),
+                black_box(300.0f32),
+                black_box(400.0f32),
+                black_box(77.0f32),
+                black_box(700.0f32),
+                1.0,
+                0.1,
+                1.0,
+                0.2,
+                1.0,
+            )
+        })
+    });
+    g.finish();
+}
+
+fn frames(c: &mut Criterion) {
+    let mut g = c.benchmark_group("thermometry_frame_1000x1000");
+    g.sample_size(10);
+    for per_pixel in [false, true] {
+        let (sig, eps) = frame(per_pixel);
+        let sig32: Vec<f32> = sig.iter().map(|&x| x as f32).collect();
+        let eps32: Vec<f32> = eps.iter().map(|&x| x as f32).collect();
+        let n = sig.len();
+        let (mut t64, mut u64_) = (vec![0.0f64; n], vec![0.0f64; n]);
+        let (mut t32, mut u32_) = (vec![0.0f32; n], vec![0.0f32; n]);
+        let tag = if per_pixel {
+            "per_pixel_emissivity"
+        } else {
+            "shared"
+        };
+        g.bench_function(format!("with_uncertainty_f64_{tag}"), |b| {
+            b.iter(|| {
+                bb::object_temperature_wavelength_with_uncertainty_array(
+                    10e-6,
+                    &sig,
+                    &eps,
+                    &[295.0],
+                    &[0.92],
+                    &[290.0],
+                    &[1e4],
+                    &[0.02],
+                    &[2.0],
+                    &[0.01],
+                    &[2.0],
+                    &mut t64,
+                    &mut u64_,
+                )
+            })
+        });
+        g.bench_function(format!("with_uncertainty_f32_{tag}"), |b| {
+            b.iter(|| {
+                bb::object_temperature_wavelength_with_uncertainty_array(
+                    10e-6f32,
+                    &sig32,
+                    &eps32,
+                    &[295.0],
+                    &[0.92],
+                    &[290.0],
+                    &[1e4],
+                    &[0.02],
+                    &[2.0],
+                    &[0.01],
+                    &[2.0],
+                    &mut t32,
+                    &mut u32_,
+                )
+            })
+        });
+        g.bench_function(format!("temperature_only_f32_{tag}"), |b| {
+            b.iter(|| {
+                bb::object_temperature_wavelength_array(
+                    10e-6f32,
+                    &sig32,
+                    &eps32,
+                    &[295.0],
+                    &[0.92],
+                    &[290.0],
+                    &mut t32,
+                )
+            })
+        });
+    }
+    g.finish();
+}
+
+criterion_group!(benches, scalar, frames);
+criterion_main!(benches);

@@ -1,0 +1,1288 @@
+//! The measurement equation of radiation thermometry: the signal of a real (grey, reflecting)
+//! surface seen through a partly transmitting path, its inverse (the object temperature), the
+//! sensitivity coefficients of that temperature and its combined standard uncertainty, for one
+//! value and for images.
+//!
+//! # The equation
+//! An instrument that sees a surface of emissivity ε at temperature T_obj, which reflects
+//! surroundings at T_refl, through a path (air, a window) of transmittance τ at temperature
+//! T_path, receives
+//!
+//! L_meas = τ [ε L(T_obj) + (1 − ε) L(T_refl)] + (1 − τ) L(T_path),
+//!
+//! where L(T) is the blackbody quantity the instrument measures: the spectral radiance B_λ at
+//! one wavelength or B_ν at one frequency, the band radiance between two wavelengths, or the
+//! response-weighted radiance of a tabulated spectral response (the conventions of
+//! [`band_radiance_wavelength`] and [`response_weighted_radiance`]). The surface is opaque and
+//! grey over the instrument's spectrum (reflectance 1 − ε), the path does not scatter, and the
+//! reflected surroundings and the path are blackbodies at their temperatures (common practice
+//! in radiation thermometry; e.g. DeWitt & Nutter (eds.), Theory and Practice of Radiation
+//! Thermometry, Wiley 1988, ch. 2, and the manuals of every thermal camera).
+//!
+//! **Domain.** 0 < ε ≤ 1, 0 < τ ≤ 1; T_obj > 0; T_refl ≥ 0 and T_path ≥ 0, where 0 K stands for
+//! surroundings or a path that emit nothing at the instrument's wavelengths (a cold sky, a
+//! cryogenic shroud): L(0) = 0 and dL/dT(0) = 0. The signal is any finite number.
+//!
+//! **Inverse.** The corrected object radiance
+//! L_obj = ([L_meas − (1 − τ) L(T_path)]/τ − (1 − ε) L(T_refl))/ε
+//! must be positive; otherwise no object temperature reproduces the signal and the inverse
+//! returns `OutOfDomain` naming the signal (never NaN, never a clamped value). T_obj is then the
+//! brightness temperature of L_obj: the closed form [`brightness_temperature_wavelength`] or
+//! [`brightness_temperature_frequency`] at one wavelength or frequency, and the shared root
+//! finder through [`temperature_from_band_radiance_wavelength`] and
+//! [`temperature_from_response_weighted_radiance`] for the band and response forms. With ε = 1
+//! and τ = 1 the inverse is that brightness temperature bit for bit; a term whose weight is
+//! exactly 0 (1 − ε for ε = 1, 1 − τ for τ = 1) is not evaluated, so its temperature only
+//! needs to pass the argument checks.
+//!
+//! **Sensitivity coefficients** (implicit differentiation of the equation at the solution, with
+//! D = τ ε L′(T_obj), L′ = dL/dT the library's own derivative):
+//! ∂T/∂L_meas = 1/D, ∂T/∂ε = −τ (L_obj − L(T_refl))/D, ∂T/∂T_refl = −τ (1 − ε) L′(T_refl)/D,
+//! ∂T/∂τ = −(ε L_obj + (1 − ε) L(T_refl) − L(T_path))/D, ∂T/∂T_path = −(1 − τ) L′(T_path)/D.
+//! L′ is [`radiance_temperature_derivative_wavelength`] (or `_frequency`), the band form
+//! [`band_radiance_temperature_derivative_wavelength`] and the response form
+//! [`response_weighted_radiance_temperature_derivative`]. The `_with_uncertainty` forms return
+//! them in a [`TemperatureUncertainty`] in that order (signal, emissivity, reflected
+//! temperature, transmittance, path temperature) with the combined standard uncertainty of
+//! uncorrelated inputs (JCGM 100:2008 eq. 10); for correlated inputs pass the coefficients to
+//! [`combined_standard_uncertainty_correlated`](super::combined_standard_uncertainty_correlated) (eq. 13). They evaluate L(T_refl) and L(T_path)
+//! even where their weight is 0, because ∂T/∂ε and ∂T/∂τ need them.
+//!
+//! **Accuracy** (`f64`, measured against mpmath at 40 digits, `tests/data/thermometry.txt`):
+//! the object temperature within 1e-13 relative where the condition number of the correction
+//! κ = (|L_meas| + (1 − τ) L(T_path) + τ(1 − ε) L(T_refl))/(τ ε L_obj) is at most 20 (in general
+//! the error grows as κ ε times the relative sensitivity (1 − e^−x)/x of T to L); coefficients
+//! within 1e-12 relative (those of ε and τ, which vanish where T_refl = T_obj or where the scene
+//! is balanced, within 1e-12 of the size of their terms); `f32` temperatures within 4 `f32` ulp
+//! for κ ≤ 2.
+//!
+//! # Cautions
+//! Emissivity and reflections dominate the errors of real radiation thermometry: an emissivity
+//! guessed 0.05 too high or a reflected temperature taken from the wrong wall moves T_obj by far
+//! more than any rounding here, and the combined standard uncertainty covers only the inputs and
+//! standard uncertainties given (not the emissivity model, the size-of-source effect, the
+//! instrument's non-linearity or drift). Fever screening, furnaces, molten metal and fire safety
+//! follow the applicable standards (for example the IEC 80601-2-59 and ISO/TR 13154 series for
+//! screening thermographs), local codes and licensed practice; these functions are not a
+//! certified measurement chain.
+
+use super::band::{band_radiance_and_derivative_wavelength_unchecked, check_band};
+use super::inverse::{brightness_temperature_frequency, brightness_temperature_wavelength};
+use super::planck::{
+    radiance_temperature_derivative_frequency, radiance_temperature_derivative_wavelength,
+    spectral_radiance_frequency, spectral_radiance_wavelength,
+};
+use super::response::{check_table, response_weighted_derivative_unchecked};
+use super::uncertainty::{SENSITIVITY_CAPACITY, TemperatureUncertainty};
+use super::{
+    band_radiance_wavelength, response_weighted_radiance,
+    temperature_from_band_radiance_wavelength, temperature_from_response_weighted_radiance,
+};
+use crate::check::{finite, finite_result, non_negative, positive};
+use crate::{ArrayResult, ElementError, Error, Real, Result};
+
+// ---------------------------------------------------------------------------------------------
+// The blackbody quantity of each form
+// ---------------------------------------------------------------------------------------------
+
+/// The blackbody quantity an instrument measures, L(T), with its derivative and its inverse.
+/// Implementations are built from checked spectral arguments; `first` is the position of the
+/// first scene argument (the signal or the object temperature) in the public functions.
+trait Quantity<T: Real> {
+    /// Position of the signal (or object temperature) argument.
+    const FIRST: u8;
+    /// L(T) for T > 0.
+    fn radiance(&self, t: T) -> Result<T>;
+    /// dL/dT for T > 0.
+    fn derivative(&self, t: T) -> Result<T>;
+    /// The T > 0 with L(T) = l, for l > 0.
+    fn temperature(&self, l: T) -> Result<T>;
+}
+
+#[derive(Clone, Copy)]
+struct Wavelength<T>(T);
+#[derive(Clone, Copy)]
+struct Frequency<T>(T);
+#[derive(Clone, Copy)]
+struct Band<T>(T, T);
+#[derive(Clone, Copy)]
+struct Response<'a, T>(&'a [T], &'a [T]);
+
+impl<T: Real> Quantity<T> for Wavelength<T> {
+    const FIRST: u8 = 1;
+    #[inline(always)]
+    fn radiance(&self, t: T) -> Result<T> {
+        spectral_radiance_wavelength(self.0, t)
+    }
+    #[inline(always)]
+    fn derivative(&self, t: T) -> Result<T> {
+        radiance_temperature_derivative_wavelength(self.0, t)
+    }
+    #[inline(always)]
+    fn temperature(&self, l: T) -> Result<T> {
+        brightness_temperature_wavelength(self.0, l)
+    }
+}
+
+impl<T: Real> Quantity<T> for Frequency<T> {
+    const FIRST: u8 = 1;
+    #[inline(always)]
+    fn radiance(&self, t: T) -> Result<T> {
+        spectral_radiance_frequency(self.0, t)
+    }
+    #[inline(always)]
+    fn derivative(&self, t: T) -> Result<T> {
+        radiance_temperature_derivative_frequency(self.0, t)
+    }
+    #[inline(always)]
+    fn temperature(&self, l: T) -> Result<T> {
+        brightness_temperature_frequency(self.0, l)
+    }
+}
+
+impl<T: Real> Quantity<T> for Band<T> {
+    const FIRST: u8 = 2;
+    fn radiance(&self, t: T) -> Result<T> {
+        band_radiance_wavelength(self.0, self.1, t)
+    }
+    fn derivative(&self, t: T) -> Result<T> {
+        let t = positive(t, 2)?;
+        finite_result(
+            band_radiance_and_derivative_wavelength_unchecked(self.0, self.1, t).1,
+            2,
+        )
+    }
+    fn temperature(&self, l: T) -> Result<T> {
+        temperature_from_band_radiance_wavelength(self.0, self.1, l)
+    }
+}
+
+impl<T: Real> Quantity<T> for Response<'_, T> {
+    const FIRST: u8 = 2;
+    fn radiance(&self, t: T) -> Result<T> {
+        response_weighted_radiance(self.0, self.1, t)
+    }
+    fn derivative(&self, t: T) -> Result<T> {
+        let t = positive(t, 2)?;
+        finite_result(
+            response_weighted_derivative_unchecked(self.0, self.1, t)?,
+            2,
+        )
+    }
+    fn temperature(&self, l: T) -> Result<T> {
+        temperature_from_response_weighted_radiance(self.0, self.1, l)
+    }
+}
+
+fn wavelength<T: Real>(wavelength_m: T) -> Result<Wavelength<T>> {
+    Ok(Wavelength(positive(wavelength_m, 0)?))
+}
+
+fn frequency<T: Real>(frequency_hz: T) -> Result<Frequency<T>> {
+    Ok(Frequency(positive(frequency_hz, 0)?))
+}
+
+fn band<T: Real>(lower_m: T, upper_m: T) -> Result<Band<T>> {
+    let (lo, up) = check_band(lower_m, upper_m)?;
+    Ok(Band(lo, up))
+}
+
+fn response<'a, T: Real>(wavelengths_m: &'a [T], response: &'a [T]) -> Result<Response<'a, T>> {
+    check_table(wavelengths_m, response)?;
+    Ok(Response(wavelengths_m, response))
+}
+
+/// An error of evaluating L or L′ at a valid temperature (only overflow or a failed quadrature
+/// can occur) names that temperature's argument; a failed quadrature stays `NoConvergence`.
+fn at(arg: u8) -> impl Fn(Error) -> Error {
+    move |e| match e {
+        Error::NoConvergence => Error::NoConvergence,
+        _ => Error::OutOfDomain(arg),
+    }
+}
+
+// ---------------------------------------------------------------------------------------------
+// The scene: emissivity, reflected surroundings, path
+// ---------------------------------------------------------------------------------------------
+
+/// The checked scene parameters and the blackbody quantities of the surroundings and the path.
+#[derive(Clone, Copy)]
+struct Scene<T> {
+    emissivity: T,
+    transmittance: T,
+    reflected: T,
+    path: T,
+    reflected_derivative: T,
+    path_derivative: T,
+}
+
+/// Checks ε, T_refl, τ, T_path (positions `first + 1 … first + 4`) in that order.
+fn check_scene<T: Real>(first: u8, e: T, tr: T, tau: T, tp: T) -> Result<(T, T, T, T)> {
+    let e = fraction(e, first + 1)?;
+    let tr = non_negative(tr, first + 2)?;
+    let tau = fraction(tau, first + 3)?;
+    let tp = non_negative(tp, first + 4)?;
+    Ok((e, tr, tau, tp))
+}
+
+/// A value in (0, 1]: `NonFinite`, `NonPositive`, or `OutOfDomain` above 1.
+fn fraction<T: Real>(x: T, arg: u8) -> Result<T> {
+    let x = positive(x, arg)?;
+    if x > T::one() {
+        return Err(Error::OutOfDomain(arg));
+    }
+    Ok(x)
+}
+
+/// L(T) and, when `derivative`, L′(T), for T ≥ 0 (0 and 0 at T = 0).
+fn quantity_at<T: Real, Q: Quantity<T>>(q: &Q, t: T, arg: u8, derivative: bool) -> Result<(T, T)> {
+    if t == T::zero() {
+        return Ok((T::zero(), T::zero()));
+    }
+    let l = q.radiance(t).map_err(at(arg))?;
+    let d = if derivative {
+        q.derivative(t).map_err(at(arg))?
+    } else {
+        T::zero()
+    };
+    Ok((l, d))
+}
+
+/// Checks the scene and evaluates its surroundings and path. Without `derivative` (the value
+/// only), a term of weight exactly 0 is not evaluated.
+fn scene<T: Real, Q: Quantity<T>>(
+    q: &Q,
+    e: T,
+    tr: T,
+    tau: T,
+    tp: T,
+    derivative: bool,
+) -> Result<Scene<T>> {
+    let first = Q::FIRST;
+    let (e, tr, tau, tp) = check_scene(first, e, tr, tau, tp)?;
+    let (reflected, reflected_derivative) = if derivative || e < T::one() {
+        quantity_at(q, tr, first + 2, derivative)?
+    } else {
+        (T::zero(), T::zero())
+    };
+    let (path, path_derivative) = if derivative || tau < T::one() {
+        quantity_at(q, tp, first + 4, derivative)?
+    } else {
+        (T::zero(), T::zero())
+    };
+    Ok(Scene {
+        emissivity: e,
+        transmittance: tau,
+        reflected,
+        path,
+        reflected_derivative,
+        path_derivative,
+    })
+}
+
+/// L_meas of an object of radiance `l` in the scene.
+#[inline(always)]
+fn forward<T: Real>(s: &Scene<T>, l: T) -> T {
+    let (e, tau) = (s.emissivity, s.transmittance);
+    tau * (e * l + (T::one() - e) * s.reflected) + (T::one() - tau) * s.path
+}
+
+/// The corrected object radiance L_obj of a signal (may be ≤ 0 or not finite).
+#[inline(always)]
+fn corrected<T: Real>(s: &Scene<T>, signal: T) -> T {
+    let (e, tau) = (s.emissivity, s.transmittance);
+    let a = signal - (T::one() - tau) * s.path;
+    (a / tau - (T::one() - e) * s.reflected) / e
+}
+
+/// (T_obj, L_obj) of a finite signal.
+fn solve<T: Real, Q: Quantity<T>>(q: &Q, s: &Scene<T>, signal: T) -> Result<(T, T)> {
+    let arg = Q::FIRST;
+    let l = corrected(s, signal);
+    if !(l > T::zero()) || !l.is_finite() {
+        return Err(Error::OutOfDomain(arg));
+    }
+    let t = q.temperature(l).map_err(at(arg))?;
+    Ok((t, l))
+}
+
+/// The object temperature of a signal with its coefficients and u_c (`u` in the order signal,
+/// ε, T_refl, τ, T_path, already checked).
+fn solve_with_uncertainty<T: Real, Q: Quantity<T>>(
+    q: &Q,
+    s: &Scene<T>,
+    signal: T,
+    u: [T; SENSITIVITY_CAPACITY],
+) -> Result<TemperatureUncertainty<T>> {
+    let arg = Q::FIRST;
+    let (t, l) = solve(q, s, signal)?;
+    let (e, tau) = (s.emissivity, s.transmittance);
+    let d = tau * e * q.derivative(t).map_err(at(arg))?;
+    if !(d >= T::min_positive_value()) {
+        return Err(Error::OutOfDomain(arg));
+    }
+    let inv = T::one() / d;
+    let c = [
+        inv,
+        -(tau * (l - s.reflected)) * inv,
+        -(tau * (T::one() - e) * s.reflected_derivative) * inv,
+        -((e * l + (T::one() - e) * s.reflected) - s.path) * inv,
+        -((T::one() - tau) * s.path_derivative) * inv,
+    ];
+    TemperatureUncertainty::from_parts(t, c, u, 5, arg)
+}
+
+/// Checks the five standard uncertainties (positions `first … first + 4`).
+fn check_uncertainties<T: Real>(first: u8, u: [T; 5]) -> Result<[T; 5]> {
+    let mut out = [T::zero(); 5];
+    for (k, (o, x)) in out.iter_mut().zip(u).enumerate() {
+        *o = non_negative(x, first + k as u8)?;
+    }
+    Ok(out)
+}
+
+fn measured<T: Real, Q: Quantity<T>>(q: Result<Q>, t: T, e: T, tr: T, tau: T, tp: T) -> Result<T> {
+    let q = q?;
+    let arg = Q::FIRST;
+    let t = positive(t, arg)?;
+    let s = scene(&q, e, tr, tau, tp, false)?;
+    let l = q.radiance(t).map_err(at(arg))?;
+    finite_result(forward(&s, l), arg)
+}
+
+fn object<T: Real, Q: Quantity<T>>(
+    q: Result<Q>,
+    signal: T,
+    e: T,
+    tr: T,
+    tau: T,
+    tp: T,
+) -> Result<T> {
+    let q = q?;
+    let signal = finite(signal, Q::FIRST)?;
+    let s = scene(&q, e, tr, tau, tp, false)?;
+    Ok(solve(&q, &s, signal)?.0)
+}
+
+#[allow(clippy::too_many_arguments)]
+fn object_with_uncertainty<T: Real, Q: Quantity<T>>(
+    q: Result<Q>,
+    signal: T,
+    e: T,
+    tr: T,
+    tau: T,
+    tp: T,
+    u: [T; 5],
+) -> Result<TemperatureUncertainty<T>> {
+    let q = q?;
+    let signal = finite(signal, Q::FIRST)?;
+    let s = scene(&q, e, tr, tau, tp, true)?;
+    let u = check_uncertainties(Q::FIRST + 5, u)?;
+    solve_with_uncertainty(&q, &s, signal, u)
+}
+
+// ---------------------------------------------------------------------------------------------
+// Public scalar functions
+// ---------------------------------------------------------------------------------------------
+
+/// Measured spectral radiance at one wavelength of a scene (the forward measurement equation):
+/// L_meas = τ[ε B_λ(T_obj) + (1 − ε) B_λ(T_refl)] + (1 − τ) B_λ(T_path).
+///
+/// * `wavelength_m`: λ in m, finite and > 0.
+/// * `object_temperature_k`: T_obj in K, finite and > 0.
+/// * `emissivity`: ε of the surface, finite, 0 < ε ≤ 1.
+/// * `reflected_temperature_k`: T_refl of the reflected surroundings in K, finite and ≥ 0.
+/// * `transmittance`: τ of the path, finite, 0 < τ ≤ 1.
+/// * `path_temperature_k`: T_path in K, finite and ≥ 0.
+///
+/// Returns W m⁻² sr⁻¹ m⁻¹, ≥ 0. Errors: `NonFinite(i)`; `NonPositive(0|1|2|4)`;
+/// `Negative(3|5)`; `OutOfDomain(2|4)` for ε or τ above 1; `OutOfDomain(i)` when a radiance
+/// overflows. Domain and conventions: module documentation.
+///
+/// Accuracy: within 1e-14 relative (`f64`) against mpmath (a sum of non-negative terms, each
+/// within 4 ulp). Reference: the measurement equation of radiation thermometry (module docs).
+pub fn measured_spectral_radiance_wavelength<T: Real>(
+    wavelength_m: T,
+    object_temperature_k: T,
+    emissivity: T,
+    reflected_temperature_k: T,
+    transmittance: T,
+    path_temperature_k: T,
+) -> Result<T> {
+    measured(
+        wavelength(wavelength_m),
+        object_temperature_k,
+        emissivity,
+        reflected_temperature_k,
+        transmittance,
+        path_temperature_k,
+    )
+}
+
+/// Measured spectral radiance at one frequency of a scene:
+/// L_meas = τ[ε B_ν(T_obj) + (1 − ε) B_ν(T_refl)] + (1 − τ) B_ν(T_path).
+///
+/// * `frequency_hz`: ν in Hz, finite and > 0.
+/// * the scene arguments as [`measured_spectral_radiance_wavelength`].
+///
+/// Returns W m⁻² sr⁻¹ Hz⁻¹, ≥ 0. Errors as [`measured_spectral_radiance_wavelength`].
+/// Accuracy: within 1e-14 relative (`f64`) against mpmath.
+pub fn measured_spectral_radiance_frequency<T: Real>(
+    frequency_hz: T,
+    object_temperature_k: T,
+    emissivity: T,
+    reflected_temperature_k: T,
+    transmittance: T,
+    path_temperature_k: T,
+) -> Result<T> {
+    measured(
+        frequency(frequency_hz),
+        object_temperature_k,
+        emissivity,
+        reflected_temperature_k,
+        transmittance,
+        path_temperature_k,
+    )
+}
+
+/// Measured band radiance between two wavelengths of a scene: the measurement equation with
+/// L = [`band_radiance_wavelength`].
+///
+/// * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
+/// * `object_temperature_k` (argument 2), `emissivity`, `reflected_temperature_k`,
+///   `transmittance`, `path_temperature_k` (arguments 3 to 6): as
+///   [`measured_spectral_radiance_wavelength`].
+///
+/// Returns W m⁻² sr⁻¹. Errors: those of [`band_radiance_wavelength`] for the band; the scene
+/// errors of [`measured_spectral_radiance_wavelength`] at positions 2 to 6.
+/// Accuracy: within 1e-14 relative (`f64`) against mpmath quadrature.
+pub fn measured_band_radiance_wavelength<T: Real>(
+    lower_m: T,
+    upper_m: T,
+    object_temperature_k: T,
+    emissivity: T,
+    reflected_temperature_k: T,
+    transmittance: T,
+    path_temperature_k: T,
+) -> Result<T> {
+    measured(
+        band(lower_m, upper_m),
+        object_temperature_k,
+        emissivity,
+        reflected_temperature_k,
+        transmittance,
+        path_temperature_k,
+    )
+}
+
+/// Measured response-weighted radiance of a scene: the measurement equation with
+/// L = [`response_weighted_radiance`] (the response table linear between its points).
+///
+/// * `wavelengths_m`, `response`: the response table, as [`response_weighted_radiance`].
+/// * `object_temperature_k` (argument 2) and the scene (arguments 3 to 6): as
+///   [`measured_spectral_radiance_wavelength`].
+///
+/// Returns W m⁻² sr⁻¹ (times the unit of the response). Errors: those of
+/// [`response_weighted_radiance`] for the table; the scene errors at positions 2 to 6.
+/// Accuracy: within 1e-13 relative (`f64`) against mpmath quadrature.
+pub fn measured_response_weighted_radiance<T: Real>(
+    wavelengths_m: &[T],
+    response_table: &[T],
+    object_temperature_k: T,
+    emissivity: T,
+    reflected_temperature_k: T,
+    transmittance: T,
+    path_temperature_k: T,
+) -> Result<T> {
+    measured(
+        response(wavelengths_m, response_table),
+        object_temperature_k,
+        emissivity,
+        reflected_temperature_k,
+        transmittance,
+        path_temperature_k,
+    )
+}
+
+/// Object temperature from the spectral radiance measured at one wavelength (the inverse
+/// measurement equation): the brightness temperature of the corrected object radiance
+/// L_obj = ([L_meas − (1 − τ)B_λ(T_path)]/τ − (1 − ε)B_λ(T_refl))/ε.
+///
+/// * `wavelength_m`: λ in m, finite and > 0.
+/// * `signal`: L_meas in W m⁻² sr⁻¹ m⁻¹, finite.
+/// * `emissivity`: ε, 0 < ε ≤ 1. `reflected_temperature_k`: T_refl ≥ 0 K.
+/// * `transmittance`: τ, 0 < τ ≤ 1. `path_temperature_k`: T_path ≥ 0 K.
+///
+/// Returns T_obj in K, > 0. Errors: `NonFinite(i)`; `NonPositive(0|2|4)`; `Negative(3|5)`;
+/// `OutOfDomain(2|4)` for ε or τ above 1; `OutOfDomain(1)` when L_obj ≤ 0 (the signal is at or
+/// below what the surroundings and the path alone give: no object temperature exists) or
+/// when no temperature can be formed; `OutOfDomain(3|5)` when a radiance of the surroundings
+/// overflows.
+///
+/// Accuracy: within 1e-13 relative (`f64`) against mpmath for a correction condition number
+/// κ ≤ 20 (module docs); ε = τ = 1 gives [`brightness_temperature_wavelength`] bit for bit.
+/// Reference: the measurement equation (module docs), Planck's law solved for T.
+pub fn object_temperature_wavelength<T: Real>(
+    wavelength_m: T,
+    signal: T,
+    emissivity: T,
+    reflected_temperature_k: T,
+    transmittance: T,
+    path_temperature_k: T,
+) -> Result<T> {
+    object(
+        wavelength(wavelength_m),
+        signal,
+        emissivity,
+        reflected_temperature_k,
+        transmittance,
+        path_temperature_k,
+    )
+}
+
+/// Object temperature from the spectral radiance measured at one frequency: the brightness
+/// temperature ([`brightness_temperature_frequency`]) of the corrected object radiance.
+///
+/// * `frequency_hz`: ν in Hz, finite and > 0.
+/// * `signal`: L_meas in W m⁻² sr⁻¹ Hz⁻¹, finite; the scene as
+///   [`object_temperature_wavelength`].
+///
+/// Returns T_obj in K. Errors as [`object_temperature_wavelength`]. Accuracy: within 1e-13
+/// relative (`f64`) against mpmath for κ ≤ 20.
+pub fn object_temperature_frequency<T: Real>(
+    frequency_hz: T,
+    signal: T,
+    emissivity: T,
+    reflected_temperature_k: T,
+    transmittance: T,
+    path_temperature_k: T,
+) -> Result<T> {
+    object(
+        frequency(frequency_hz),
+        signal,
+        emissivity,
+        reflected_temperature_k,
+        transmittance,
+        path_temperature_k,
+    )
+}
+
+/// Object temperature from the band radiance measured between two wavelengths: the
+/// temperature ([`temperature_from_band_radiance_wavelength`], the shared root finder) of the
+/// corrected object band radiance.
+///
+/// * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
+/// * `signal` (argument 2): band radiance in W m⁻² sr⁻¹, finite.
+/// * `emissivity`, `reflected_temperature_k`, `transmittance`, `path_temperature_k`
+///   (arguments 3 to 6): as [`object_temperature_wavelength`].
+///
+/// Returns T_obj in K. Errors: the band errors of [`band_radiance_wavelength`]; the scene errors
+/// of [`object_temperature_wavelength`] at positions 2 to 6 (`OutOfDomain(2)` for L_obj ≤ 0);
+/// `NoConvergence` (seen only far outside physical arguments).
+/// Accuracy: within 1e-13 relative (`f64`) against mpmath for κ ≤ 20.
+pub fn object_temperature_band<T: Real>(
+    lower_m: T,
+    upper_m: T,
+    signal: T,
+    emissivity: T,
+    reflected_temperature_k: T,
+    transmittance: T,
+    path_temperature_k: T,
+) -> Result<T> {
+    object(
+        band(lower_m, upper_m),
+        signal,
+        emissivity,
+        reflected_temperature_k,
+        transmittance,
+        path_temperature_k,
+    )
+}
+
+/// Object temperature from a response-weighted signal: the temperature
+/// ([`temperature_from_response_weighted_radiance`], the shared root finder) of the corrected
+/// object radiance.
+///
+/// * `wavelengths_m`, `response_table`: the response table, as [`response_weighted_radiance`].
+/// * `signal` (argument 2) and the scene (arguments 3 to 6): as [`object_temperature_band`].
+///
+/// Returns T_obj in K. Errors: the table errors of [`response_weighted_radiance`]; the scene
+/// errors at positions 2 to 6; `OutOfDomain(2)` also when the response is zero everywhere;
+/// `NoConvergence` when a quadrature cannot meet its tolerance.
+/// Accuracy: within 1e-13 relative (`f64`) against mpmath for κ ≤ 20.
+pub fn object_temperature_response<T: Real>(
+    wavelengths_m: &[T],
+    response_table: &[T],
+    signal: T,
+    emissivity: T,
+    reflected_temperature_k: T,
+    transmittance: T,
+    path_temperature_k: T,
+) -> Result<T> {
+    object(
+        response(wavelengths_m, response_table),
+        signal,
+        emissivity,
+        reflected_temperature_k,
+        transmittance,
+        path_temperature_k,
+    )
+}
+
+/// [`object_temperature_wavelength`] with its sensitivity coefficients and combined standard
+/// uncertainty.
+///
+/// * `wavelength_m`, `signal`, `emissivity`, `reflected_temperature_k`, `transmittance`,
+///   `path_temperature_k` (arguments 0 to 5): as [`object_temperature_wavelength`].
+/// * `signal_uncertainty`, `emissivity_uncertainty`, `reflected_temperature_uncertainty_k`,
+///   `transmittance_uncertainty`, `path_temperature_uncertainty_k` (arguments 6 to 10): the
+///   standard uncertainties of the five inputs, finite and ≥ 0, in their units.
+///
+/// Returns a [`TemperatureUncertainty`]: the temperature (the bits of
+/// [`object_temperature_wavelength`]), u_c in K (JCGM 100:2008 eq. 10, uncorrelated inputs),
+/// `inputs` = 5 and the coefficients ∂T/∂(L_meas, ε, T_refl, τ, T_path) of the module
+/// documentation, in K per W m⁻² sr⁻¹ m⁻¹, K, K/K, K, K/K. Errors: as
+/// [`object_temperature_wavelength`] (where a term of weight 0 is evaluated here too, its
+/// overflow is `OutOfDomain(3|5)`); `NonFinite(i)`, `Negative(i)` for i = 6…10;
+/// `OutOfDomain(1)` when dB/dT at T_obj is not a positive normal number.
+///
+/// Accuracy: coefficients within 1e-12 relative (`f64`) against mpmath (module docs for those
+/// of ε and τ), u_c within 1e-12 relative. Reference: JCGM 100:2008 eq. 10; implicit
+/// differentiation of the measurement equation.
+#[allow(clippy::too_many_arguments)]
+pub fn object_temperature_wavelength_with_uncertainty<T: Real>(
+    wavelength_m: T,
+    signal: T,
+    emissivity: T,
+    reflected_temperature_k: T,
+    transmittance: T,
+    path_temperature_k: T,
+    signal_uncertainty: T,
+    emissivity_uncertainty: T,
+    reflected_temperature_uncertainty_k: T,
+    transmittance_uncertainty: T,
+    path_temperature_uncertainty_k: T,
+) -> Result<TemperatureUncertainty<T>> {
+    object_with_uncertainty(
+        wavelength(wavelength_m),
+        signal,
+        emissivity,
+        reflected_temperature_k,
+        transmittance,
+        path_temperature_k,
+        [
+            signal_uncertainty,
+            emissivity_uncertainty,
+            reflected_temperature_uncertainty_k,
+            transmittance_uncertainty,
+            path_temperature_uncertainty_k,
+        ],
+    )
+}
+
+/// [`object_temperature_frequency`] with its sensitivity coefficients and combined standard
+/// uncertainty; arguments, result and errors as
+/// [`object_temperature_wavelength_with_uncertainty`] with the frequency ν in Hz first and the
+/// signal in W m⁻² sr⁻¹ Hz⁻¹.
+///
+/// Accuracy: coefficients and u_c within 1e-12 relative (`f64`) against mpmath.
+#[allow(clippy::too_many_arguments)]
+pub fn object_temperature_frequency_with_uncertainty<T: Real>(
+    frequency_hz: T,
+    signal: T,
+    emissivity: T,
+    reflected_temperature_k: T,
+    transmittance: T,
+    path_temperature_k: T,
+    signal_uncertainty: T,
+    emissivity_uncertainty: T,
+    reflected_temperature_uncertainty_k: T,
+    transmittance_uncertainty: T,
+    path_temperature_uncertainty_k: T,
+) -> Result<TemperatureUncertainty<T>> {
+    object_with_uncertainty(
+        frequency(frequency_hz),
+        signal,
+        emissivity,
+        reflected_temperature_k,
+        transmittance,
+        path_temperature_k,
+        [
+            signal_uncertainty,
+            emissivity_uncertainty,
+            reflected_temperature_uncertainty_k,
+            transmittance_uncertainty,
+            path_temperature_uncertainty_k,
+        ],
+    )
+}
+
+/// [`object_temperature_band`] with its sensitivity coefficients and combined standard
+/// uncertainty. The band derivative is [`band_radiance_temperature_derivative_wavelength`].
+///
+/// * `lower_m`, `upper_m`, `signal`, the scene (arguments 0 to 6): as
+///   [`object_temperature_band`].
+/// * the five standard uncertainties (arguments 7 to 11), as
+///   [`object_temperature_wavelength_with_uncertainty`].
+///
+/// Returns a [`TemperatureUncertainty`] (coefficients in K per W m⁻² sr⁻¹, K, K/K, K, K/K).
+/// Errors: as [`object_temperature_band`]; `NonFinite(i)`, `Negative(i)` for i = 7…11.
+/// Accuracy: coefficients and u_c within 1e-12 relative (`f64`) against mpmath quadrature.
+#[allow(clippy::too_many_arguments)]
+pub fn object_temperature_band_with_uncertainty<T: Real>(
+    lower_m: T,
+    upper_m: T,
+    signal: T,
+    emissivity: T,
+    reflected_temperature_k: T,
+    transmittance: T,
+    path_temperature_k: T,
+    signal_uncertainty: T,
+    emissivity_uncertainty: T,
+    reflected_temperature_uncertainty_k: T,
+    transmittance_uncertainty: T,
+    path_temperature_uncertainty_k: T,
+) -> Result<TemperatureUncertainty<T>> {
+    object_with_uncertainty(
+        band(lower_m, upper_m),
+        signal,
+        emissivity,
+        reflected_temperature_k,
+        transmittance,
+        path_temperature_k,
+        [
+            signal_uncertainty,
+            emissivity_uncertainty,
+            reflected_temperature_uncertainty_k,
+            transmittance_uncertainty,
+            path_temperature_uncertainty_k,
+        ],
+    )
+}
+
+/// [`object_temperature_response`] with its sensitivity coefficients and combined standard
+/// uncertainty. The derivative is [`response_weighted_radiance_temperature_derivative`].
+///
+/// * `wavelengths_m`, `response_table`, `signal`, the scene (arguments 0 to 6): as
+///   [`object_temperature_response`].
+/// * the five standard uncertainties (arguments 7 to 11).
+///
+/// Returns a [`TemperatureUncertainty`]. Errors: as [`object_temperature_response`];
+/// `NonFinite(i)`, `Negative(i)` for i = 7…11.
+/// Accuracy: coefficients and u_c within 1e-12 relative (`f64`) against mpmath quadrature.
+#[allow(clippy::too_many_arguments)]
+pub fn object_temperature_response_with_uncertainty<T: Real>(
+    wavelengths_m: &[T],
+    response_table: &[T],
+    signal: T,
+    emissivity: T,
+    reflected_temperature_k: T,
+    transmittance: T,
+    path_temperature_k: T,
+    signal_uncertainty: T,
+    emissivity_uncertainty: T,
+    reflected_temperature_uncertainty_k: T,
+    transmittance_uncertainty: T,
+    path_temperature_uncertainty_k: T,
+) -> Result<TemperatureUncertainty<T>> {
+    object_with_uncertainty(
+        response(wavelengths_m, response_table),
+        signal,
+        emissivity,
+        reflected_temperature_k,
+        transmittance,
+        path_temperature_k,
+        [
+            signal_uncertainty,
+            emissivity_uncertainty,
+            reflected_temperature_uncertainty_k,
+            transmittance_uncertainty,
+            path_temperature_uncertainty_k,
+        ],
+    )
+}
+
+/// Temperature derivative of the band radiance between two wavelengths, dL/dT with
+/// L = [`band_radiance_wavelength`]: dL/dT = (4L + K T⁴ (x₁ f(x₁) − x₂ f(x₂)))/T,
+/// f(t) = t³/(eᵗ − 1), x = c₂/(λT) at the band edges, K = 2k⁴/(h³c²) (the derivative of
+/// K T⁴ ∫ f(t) dt under the change of variables t = c₂/(λT)).
+///
+/// * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
+/// * `temperature_k`: K, finite and > 0.
+///
+/// Returns W m⁻² sr⁻¹ K⁻¹, ≥ 0. Errors as [`band_radiance_wavelength`].
+/// Accuracy: within 1e-13 relative (`f64`) against mpmath quadrature of ∂B_λ/∂T over the band
+/// for x at the long-wave edge ≥ 0.05 (below, 4L and the edge terms cancel as 4/x).
+pub fn band_radiance_temperature_derivative_wavelength<T: Real>(
+    lower_m: T,
+    upper_m: T,
+    temperature_k: T,
+) -> Result<T> {
+    let b = band(lower_m, upper_m)?;
+    b.derivative(temperature_k)
+}
+
+/// Temperature derivative of the response-weighted radiance, ∫ r(λ) ∂B_λ/∂T dλ, by the shared
+/// quadrature of [`radiance_temperature_derivative_wavelength`] over the table.
+///
+/// * `wavelengths_m`, `response_table`: the response table, as [`response_weighted_radiance`].
+/// * `temperature_k`: K, finite and > 0.
+///
+/// Returns W m⁻² sr⁻¹ K⁻¹ (times the unit of the response), ≥ 0. Errors as
+/// [`response_weighted_radiance`]. Accuracy: within 1e-13 relative (`f64`) against mpmath
+/// quadrature.
+pub fn response_weighted_radiance_temperature_derivative<T: Real>(
+    wavelengths_m: &[T],
+    response_table: &[T],
+    temperature_k: T,
+) -> Result<T> {
+    let r = response(wavelengths_m, response_table)?;
+    r.derivative(temperature_k)
+}
+
+// ---------------------------------------------------------------------------------------------
+// Array forms
+// ---------------------------------------------------------------------------------------------
+
+/// A per-pixel or shared parameter: `s[i]` when `s` has one value per element, `s[0]` when it
+/// has one value for all.
+#[inline(always)]
+fn pick<T: Real>(s: &[T], i: usize) -> T {
+    if s.len() == 1 {
+        s.first().copied().unwrap_or(T::nan())
+    } else {
+        s.get(i).copied().unwrap_or(T::nan())
+    }
+}
+
+/// `Ok` when every parameter slice holds 1 or `n` values and every output `n`; otherwise the
+/// outputs are NaN and the error names the first offending argument.
+fn check_lengths<T: Real>(
+    n: usize,
+    params: &[(&[T], u8)],
+    outs: &mut [&mut [T]],
+    out_first: u8,
+) -> ArrayResult {
+    let mut bad = None;
+    for &(s, arg) in params {
+        if s.len() != 1 && s.len() != n {
+            bad = Some(ElementError {
+                index: n.min(s.len()),
+                error: Error::LengthMismatch(arg),
+            });
+            break;
+        }
+    }
+    if bad.is_none() {
+        for (k, o) in outs.iter().enumerate() {
+            if o.len() != n {
+                bad = Some(ElementError {
+                    index: n.min(o.len()),
+                    error: Error::LengthMismatch(out_first + k as u8),
+                });
+                break;
+            }
+        }
+    }
+    match bad {
+        None => Ok(()),
+        Some(e) => {
+            for o in outs.iter_mut() {
+                o.fill(T::nan());
+            }
+            Err(e)
+        }
+    }
+}
+
+/// The scene of element i, reused from the previous element when its four parameters are the
+/// same (always so for shared parameters).
+struct SceneCache<T> {
+    key: [T; 4],
+    scene: Option<Result<Scene<T>>>,
+}
+
+impl<T: Real> SceneCache<T> {
+    fn new() -> Self {
+        Self {
+            key: [T::nan(); 4],
+            scene: None,
+        }
+    }
+
+    fn get<Q: Quantity<T>>(&mut self, q: &Q, key: [T; 4], derivative: bool) -> Result<Scene<T>> {
+        let same = self.key.iter().zip(key.iter()).all(|(a, b)| a == b);
+        match (&self.scene, same) {
+            (Some(s), true) => *s,
+            _ => {
+                let [e, tr, tau, tp] = key;
+                let s = scene(q, e, tr, tau, tp, derivative);
+                self.key = key;
+                self.scene = Some(s);
+                s
+            }
+        }
+    }
+}
+
+/// Records the first failure.
+fn note(first: &mut Option<ElementError>, index: usize, error: Error) {
+    if first.is_none() {
+        *first = Some(ElementError { index, error });
+    }
+}
+
+#[allow(clippy::too_many_arguments)]
+fn object_array<T: Real, Q: Quantity<T>>(
+    q: Result<Q>,
+    signals: &[T],
+    e: &[T],
+    tr: &[T],
+    tau: &[T],
+    tp: &[T],
+    out: &mut [T],
+) -> ArrayResult {
+    let a = Q::FIRST;
+    let n = signals.len();
+    check_lengths(
+        n,
+        &[(e, a + 1), (tr, a + 2), (tau, a + 3), (tp, a + 4)],
+        &mut [out],
+        a + 5,
+    )?;
+    let mut first = None;
+    let q = match q {
+        Ok(q) => q,
+        Err(err) => {
+            out.fill(T::nan());
+            return if n == 0 {
+                Ok(())
+            } else {
+                Err(ElementError {
+                    index: 0,
+                    error: err,
+                })
+            };
+        }
+    };
+    let mut cache = SceneCache::new();
+    for (i, (&s, o)) in signals.iter().zip(out.iter_mut()).enumerate() {
+        let key = [pick(e, i), pick(tr, i), pick(tau, i), pick(tp, i)];
+        let r = finite(s, a).and_then(|s| {
+            let sc = cache.get(&q, key, false)?;
+            Ok(solve(&q, &sc, s)?.0)
+        });
+        match r {
+            Ok(t) => *o = t,
+            Err(err) => {
+                *o = T::nan();
+                note(&mut first, i, err);
+            }
+        }
+    }
+    first.map_or(Ok(()), Err)
+}
+
+#[allow(clippy::too_many_arguments)]
+fn object_uncertainty_array<T: Real, Q: Quantity<T>>(
+    q: Result<Q>,
+    signals: &[T],
+    scene_params: [&[T]; 4],
+    u: [&[T]; 5],
+    out_t: &mut [T],
+    out_u: &mut [T],
+) -> ArrayResult {
+    let a = Q::FIRST;
+    let n = signals.len();
+    let [e, tr, tau, tp] = scene_params;
+    let [u0, u1, u2, u3, u4] = u;
+    check_lengths(
+        n,
+        &[
+            (e, a + 1),
+            (tr, a + 2),
+            (tau, a + 3),
+            (tp, a + 4),
+            (u0, a + 5),
+            (u1, a + 6),
+            (u2, a + 7),
+            (u3, a + 8),
+            (u4, a + 9),
+        ],
+        &mut [&mut *out_t, &mut *out_u],
+        a + 10,
+    )?;
+    let q = match q {
+        Ok(q) => q,
+        Err(err) => {
+            out_t.fill(T::nan());
+            out_u.fill(T::nan());
+            return if n == 0 {
+                Ok(())
+            } else {
+                Err(ElementError {
+                    index: 0,
+                    error: err,
+                })
+            };
+        }
+    };
+    let mut first = None;
+    let mut cache = SceneCache::new();
+    for (i, ((&s, ot), ou)) in signals
+        .iter()
+        .zip(out_t.iter_mut())
+        .zip(out_u.iter_mut())
+        .enumerate()
+    {
+        let key = [pick(e, i), pick(tr, i), pick(tau, i), pick(tp, i)];
+        let us = [
+            pick(u0, i),
+            pick(u1, i),
+            pick(u2, i),
+            pick(u3, i),
+            pick(u4, i),
+        ];
+        let r = finite(s, a).and_then(|s| {
+            let sc = cache.get(&q, key, true)?;
+            let us = check_uncertainties(a + 5, us)?;
+            solve_with_uncertainty(&q, &sc, s, us)
+        });
+        match r {
+            Ok(v) => {
+                *ot = v.temperature_k;
+                *ou = v.combined_standard_uncertainty_k;
+            }
+            Err(err) => {
+                *ot = T::nan();
+                *ou = T::nan();
+                note(&mut first, i, err);
+            }
+        }
+    }
+    first.map_or(Ok(()), Err)
+}
+
+/// [`object_temperature_wavelength`] over a frame of signals (an image), with per-pixel or
+/// shared scene parameters: `out[i] = object_temperature_wavelength(wavelength_m, signals[i],
+/// ε, T_refl, τ, T_path)` bit for bit, each parameter taken from its slice at i when the slice
+/// has one value per signal, or from its only value when it has one.
+///
+/// * `wavelength_m`: λ in m (argument 0), finite and > 0 (when it is not, every element fails).
+/// * `signals`: L_meas in W m⁻² sr⁻¹ m⁻¹ (argument 1), any length n.
+/// * `emissivity`, `reflected_temperature_k`, `transmittance`, `path_temperature_k`
+///   (arguments 2 to 5): slices of length n (per pixel) or 1 (shared), domains as the scalar
+///   function.
+/// * `out`: T_obj in K (argument 6), length n.
+///
+/// Returns `Ok(())` when every element succeeded; otherwise the failing elements are NaN, the
+/// others computed, and the error names the first failing index and the scalar function's
+/// error. `LengthMismatch(i)` when a parameter slice has neither 1 nor n values or `out` is
+/// not of length n (then `out` is all NaN).
+///
+/// Accuracy: that of [`object_temperature_wavelength`]. Method: an element loop; the
+/// radiances of the surroundings and the path are computed once for shared parameters (and
+/// reused while per-pixel parameters repeat), so the cost per pixel is one brightness
+/// temperature.
+pub fn object_temperature_wavelength_array<T: Real>(
+    wavelength_m: T,
+    signals: &[T],
+    emissivity: &[T],
+    reflected_temperature_k: &[T],
+    transmittance: &[T],
+    path_temperature_k: &[T],
+    out: &mut [T],
+) -> ArrayResult {
+    object_array(
+        wavelength(wavelength_m),
+        signals,
+        emissivity,
+        reflected_temperature_k,
+        transmittance,
+        path_temperature_k,
+        out,
+    )
+}
+
+/// [`object_temperature_frequency`] over a frame of signals; arguments, result and errors as
+/// [`object_temperature_wavelength_array`] with the frequency ν in Hz (argument 0) and signals
+/// in W m⁻² sr⁻¹ Hz⁻¹. Accuracy: that of [`object_temperature_frequency`], bit for bit.
+pub fn object_temperature_frequency_array<T: Real>(
+    frequency_hz: T,
+    signals: &[T],
+    emissivity: &[T],
+    reflected_temperature_k: &[T],
+    transmittance: &[T],
+    path_temperature_k: &[T],
+    out: &mut [T],
+) -> ArrayResult {
+    object_array(
+        frequency(frequency_hz),
+        signals,
+        emissivity,
+        reflected_temperature_k,
+        transmittance,
+        path_temperature_k,
+        out,
+    )
+}
+
+/// [`object_temperature_band`] over a frame of signals (a thermal camera with a band filter):
+/// arguments as [`object_temperature_wavelength_array`] with the band edges `lower_m`,
+/// `upper_m` first (arguments 0, 1), the signals (band radiance, W m⁻² sr⁻¹) argument 2, the
+/// scene slices arguments 3 to 6 and `out` argument 7. Each element costs one root finding.
+/// Accuracy: that of [`object_temperature_band`], bit for bit.
+#[allow(clippy::too_many_arguments)]
+pub fn object_temperature_band_array<T: Real>(
+    lower_m: T,
+    upper_m: T,
+    signals: &[T],
+    emissivity: &[T],
+    reflected_temperature_k: &[T],
+    transmittance: &[T],
+    path_temperature_k: &[T],
+    out: &mut [T],
+) -> ArrayResult {
+    object_array(
+        band(lower_m, upper_m),
+        signals,
+        emissivity,
+        reflected_temperature_k,
+        transmittance,
+        path_temperature_k,
+        out,
+    )
+}
+
+/// [`object_temperature_wavelength_with_uncertainty`] over a frame of signals: the object
+/// temperature and its combined standard uncertainty per pixel, bit for bit those of the
+/// scalar function.
+///
+/// * `wavelength_m` (argument 0), `signals` (1), `emissivity`, `reflected_temperature_k`,
+///   `transmittance`, `path_temperature_k` (2 to 5): as [`object_temperature_wavelength_array`].
+/// * `signal_uncertainty`, `emissivity_uncertainty`, `reflected_temperature_uncertainty_k`,
+///   `transmittance_uncertainty`, `path_temperature_uncertainty_k` (6 to 10): standard
+///   uncertainties, slices of length n or 1, finite and ≥ 0.
+/// * `out_temperature` (11): T_obj in K; `out_uncertainty` (12): u_c in K; both of length n.
+///
+/// Returns and errors as [`object_temperature_wavelength_array`] (a failing element is NaN in
+/// both outputs). Accuracy: that of the scalar function. Method: as
+/// [`object_temperature_wavelength_array`]; per pixel one brightness temperature and one dB/dT.
+#[allow(clippy::too_many_arguments)]
+pub fn object_temperature_wavelength_with_uncertainty_array<T: Real>(
+    wavelength_m: T,
+    signals: &[T],
+    emissivity: &[T],
+    reflected_temperature_k: &[T],
+    transmittance: &[T],
+    path_temperature_k: &[T],
+    signal_uncertainty: &[T],
+    emissivity_uncertainty: &[T],
+    reflected_temperature_uncertainty_k: &[T],
+    transmittance_uncertainty: &[T],
+    path_temperature_uncertainty_k: &[T],
+    out_temperature: &mut [T],
+    out_uncertainty: &mut [T],
+) -> ArrayResult {
+    object_uncertainty_array(
+        wavelength(wavelength_m),
+        signals,
+        [
+            emissivity,
+            reflected_temperature_k,
+            transmittance,
+            path_temperature_k,
+        ],
+        [
+            signal_uncertainty,
+            emissivity_uncertainty,
+            reflected_temperature_uncertainty_k,
+            transmittance_uncertainty,
+            path_temperature_uncertainty_k,
+        ],
+        out_temperature,
+        out_uncertainty,
+    )
+}
+
+/// [`object_temperature_frequency_with_uncertainty`] over a frame of signals; arguments,
+/// result and errors as [`object_temperature_wavelength_with_uncertainty_array`] with the
+/// frequency ν in Hz first. Accuracy: that of the scalar function, bit for bit.
+#[allow(clippy::too_many_arguments)]
+pub fn object_temperature_frequency_with_uncertainty_array<T: Real>(
+    frequency_hz: T,
+    signals: &[T],
+    emissivity: &[T],
+    reflected_temperature_k: &[T],
+    transmittance: &[T],
+    path_temperature_k: &[T],
+    signal_uncertainty: &[T],
+    emissivity_uncertainty: &[T],
+    reflected_temperature_uncertainty_k: &[T],
+    transmittance_uncertainty: &[T],
+    path_temperature_uncertainty_k: &[T],
+    out_temperature: &mut [T],
+    out_uncertainty: &mut [T],
+) -> ArrayResult {
+    object_uncertainty_array(
+        frequency(frequency_hz),
+        signals,
+        [
+            emissivity,
+            reflected_temperature_k,
+            transmittance,
+            path_temperature_k,
+        ],
+        [
+            signal_uncertainty,
+            emissivity_uncertainty,
+            reflected_temperature_uncertainty_k,
+            transmittance_uncertainty,
+            path_temperature_uncertainty_k,
+        ],
+        out_temperature,
+        out_uncertainty,
+    )
+}
+
+/// [`object_temperature_band_with_uncertainty`] over a frame of signals; arguments as
+/// [`object_temperature_wavelength_with_uncertainty_array`] with the band edges first
+/// (arguments 0, 1), the signals argument 2, the scene 3 to 6, the uncertainties 7 to 11 and
+/// the outputs 12 and 13. Accuracy: that of the scalar function, bit for bit.
+#[allow(clippy::too_many_arguments)]
+pub fn object_temperature_band_with_uncertainty_array<T: Real>(
+    lower_m: T,
+    upper_m: T,
+    signals: &[T],
+    emissivity: &[T],
+    reflected_temperature_k: &[T],
+    transmittance: &[T],
+    path_temperature_k: &[T],
+    signal_uncertainty: &[T],
+    emissivity_uncertainty: &[T],
+    reflected_temperature_uncertainty_k: &[T],
+    transmittance_uncertainty: &[T],
+    path_temperature_uncertainty_k: &[T],
+    out_temperature: &mut [T],
+    out_uncertainty: &mut [T],
+) -> ArrayResult {
+    object_uncertainty_array(
+        band(lower_m, upper_m),
+        signals,
+        [
+            emissivity,
+            reflected_temperature_k,
+            transmittance,
+            path_temperature_k,
+        ],
+        [
+            signal_uncertainty,
+            emissivity_uncertainty,
+            reflected_temperature_uncertainty_k,
+            transmittance_uncertainty,
+            path_temperature_uncertainty_k,
+        ],
+        out_temperature,
+        out_uncertainty,
+    )
+}

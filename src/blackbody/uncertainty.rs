@@ -1,0 +1,361 @@
+//! Uncertainty of inferred temperatures: the result value of every `_with_uncertainty`
+//! function, the combined standard uncertainty of the law of propagation of uncertainty
+//! (JCGM 100:2008, eqs. 10 and 13), and the sensitivity coefficients of the brightness
+//! temperature and of the two-load calibrated temperature.
+//!
+//! Every sensitivity coefficient is a partial derivative of the inferred temperature with
+//! respect to one input, obtained by implicit differentiation of the defining equation with the
+//! library's own dB/dT (no finite differences). The combined standard uncertainty is the first
+//! order (linear) propagation of the standard uncertainties given by the caller; it covers only
+//! those inputs, not the model (emissivity model, size-of-source effect, non-linearity of the
+//! detector, drift of the calibration, ...).
+//!
+//! # Cautions
+//! Emissivity and reflections dominate the errors of real radiation thermometry; an uncertainty
+//! computed here is only as honest as the standard uncertainties the caller gives it. Fever
+//! screening, furnaces, molten metal and fire safety follow the applicable standards, local
+//! codes and licensed practice.
+//!
+//! Reference: JCGM 100:2008, Evaluation of measurement data — Guide to the expression of
+//! uncertainty in measurement (GUM), §5.1.2 eq. (10), §5.2.2 eq. (13).
+
+use super::inverse::{brightness_temperature_frequency, brightness_temperature_wavelength};
+use super::microwave::thermodynamic_to_rayleigh_jeans_factor;
+use super::planck::{
+    radiance_temperature_derivative_frequency, radiance_temperature_derivative_wavelength,
+};
+use super::{calibrated_temperature, two_load_calibration};
+use crate::check::{finite, finite_result, non_negative};
+use crate::{Error, Real, Result};
+
+/// The number of sensitivity coefficients a [`TemperatureUncertainty`] can hold.
+pub const SENSITIVITY_CAPACITY: usize = 5;
+
+/// An inferred temperature with its combined standard uncertainty and its sensitivity
+/// coefficients: the result of every `_with_uncertainty` function. A plain value
+/// (`#[repr(C)]`, no `Option`, enum or `bool`), mirrored by a struct in C and a derived type in
+/// Fortran.
+///
+/// `sensitivity_coefficients[i]` is ∂T/∂xᵢ for the i-th uncertain input of the function that
+/// produced the value, in the order its documentation gives (for the measurement equation:
+/// signal, emissivity, reflected temperature, path transmittance, path temperature), in K per
+/// unit of that input; the first `inputs` entries are used, the others are 0.
+#[repr(C)]
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct TemperatureUncertainty<T> {
+    /// The inferred temperature, K.
+    pub temperature_k: T,
+    /// Combined standard uncertainty u_c(T), K (JCGM 100:2008 eq. 10, uncorrelated inputs).
+    pub combined_standard_uncertainty_k: T,
+    /// ∂T/∂xᵢ, K per unit of input i; entries at and beyond `inputs` are 0.
+    pub sensitivity_coefficients: [T; SENSITIVITY_CAPACITY],
+    /// Number of inputs used (1 to [`SENSITIVITY_CAPACITY`]).
+    pub inputs: u32,
+}
+
+impl<T: Real> TemperatureUncertainty<T> {
+    /// Builds the value from the coefficients and standard uncertainties of `n` inputs.
+    pub(crate) fn from_parts(
+        temperature_k: T,
+        coefficients: [T; SENSITIVITY_CAPACITY],
+        uncertainties: [T; SENSITIVITY_CAPACITY],
+        n: usize,
+        result_arg: u8,
+    ) -> Result<Self> {
+        let mut c = [T::zero(); SENSITIVITY_CAPACITY];
+        for (d, s) in c.iter_mut().zip(coefficients.iter()).take(n) {
+            *d = finite_result(*s, result_arg)?;
+        }
+        let u = root_sum_of_squares(&c, &uncertainties, result_arg)?;
+        Ok(Self {
+            temperature_k: finite_result(temperature_k, result_arg)?,
+            combined_standard_uncertainty_k: u,
+            sensitivity_coefficients: c,
+            inputs: n as u32,
+        })
+    }
+}
+
+/// (Σ (cᵢuᵢ)²)^½ over the common length, scaled by the largest |cᵢuᵢ| so that no square
+/// overflows or underflows early (in `f32` the products span many decades).
+fn root_sum_of_squares<T: Real>(c: &[T], u: &[T], result_arg: u8) -> Result<T> {
+    let mut m = T::zero();
+    for (&ci, &ui) in c.iter().zip(u.iter()) {
+        m = m.max((ci * ui).abs());
+    }
+    let m = finite_result(m, result_arg)?;
+    if m == T::zero() {
+        return Ok(T::zero());
+    }
+    let mut s = T::zero();
+    for (&ci, &ui) in c.iter().zip(u.iter()) {
+        let y = (ci * ui) / m;
+        s = s + y * y;
+    }
+    finite_result(m * s.sqrt(), result_arg)
+}
+
+/// Checks sensitivity coefficients (finite) and standard uncertainties (finite, ≥ 0) of the
+/// same length.
+fn check_coefficients<T: Real>(c: &[T], u: &[T]) -> Result<()> {
+    if u.len() != c.len() {
+        return Err(Error::LengthMismatch(1));
+    }
+    for &ci in c {
+        finite(ci, 0)?;
+    }
+    for &ui in u {
+        non_negative(ui, 1)?;
+    }
+    Ok(())
+}
+
+/// Combined standard uncertainty of uncorrelated inputs,
+/// u_c = (Σᵢ cᵢ² u(xᵢ)²)^½ (JCGM 100:2008 eq. 10 with cᵢ = ∂f/∂xᵢ).
+///
+/// * `sensitivity_coefficients`: cᵢ, finite (for example the first `inputs` entries of a
+///   [`TemperatureUncertainty`]), in K per unit of input i.
+/// * `standard_uncertainties`: u(xᵢ), finite and ≥ 0, in the unit of input i; same length.
+///
+/// Returns u_c in K (≥ 0; 0 for empty slices). Errors: `NonFinite(0|1)`, `Negative(1)`,
+/// `LengthMismatch(1)`; `OutOfDomain(0)` when a product cᵢu(xᵢ) or the result overflows.
+///
+/// Accuracy: within 2(n + 2) ε relative (a scaled sum of n squares and one square root).
+/// Reference: JCGM 100:2008 (GUM), §5.1.2, eq. (10).
+pub fn combined_standard_uncertainty<T: Real>(
+    sensitivity_coefficients: &[T],
+    standard_uncertainties: &[T],
+) -> Result<T> {
+    check_coefficients(sensitivity_coefficients, standard_uncertainties)?;
+    root_sum_of_squares(sensitivity_coefficients, standard_uncertainties, 0)
+}
+
+/// Combined standard uncertainty of correlated inputs,
+/// u_c² = Σᵢ Σⱼ cᵢ cⱼ u(xᵢ) u(xⱼ) r(xᵢ, xⱼ) (JCGM 100:2008 eq. 13 written with the correlation
+/// coefficients r of eq. 14; the double sum over i, j equals the form of eq. 16).
+///
+/// * `sensitivity_coefficients`: cᵢ, n finite values, in K per unit of input i.
+/// * `standard_uncertainties`: u(xᵢ), n finite values ≥ 0.
+/// * `correlation`: the n × n correlation matrix r, row-major (r[i·n + j] = r(xᵢ, xⱼ)), a caller
+///   slice (a fixed-size array coerces to it): finite, |rᵢⱼ| ≤ 1, rᵢᵢ = 1, symmetric.
+///
+/// Returns u_c in K, ≥ 0. Errors: as [`combined_standard_uncertainty`]; `LengthMismatch(2)` when
+/// the matrix does not hold n² values; `NonFinite(2)`; `OutOfDomain(2)` when it is not a
+/// correlation matrix (an entry beyond ±1, a diagonal entry other than 1, rᵢⱼ ≠ rⱼᵢ), or when
+/// the quadratic form is negative beyond its rounding error (4 n² ε of the sum of the absolute
+/// values of its terms): the matrix is then not positive semi-definite. A form that is negative
+/// only by rounding (exactly compensating, fully correlated inputs) gives 0.
+///
+/// Accuracy: within (4n² + 4) ε of the sum of the absolute values of the terms, relative to
+/// u_c²; for r = identity this function gives [`combined_standard_uncertainty`] to a few ulp.
+/// Reference: JCGM 100:2008 (GUM), §5.2.2, eqs. (13), (14) and (16).
+pub fn combined_standard_uncertainty_correlated<T: Real>(
+    sensitivity_coefficients: &[T],
+    standard_uncertainties: &[T],
+    correlation: &[T],
+) -> Result<T> {
+    let c = sensitivity_coefficients;
+    let u = standard_uncertainties;
+    check_coefficients(c, u)?;
+    let n = c.len();
+    if n.checked_mul(n) != Some(correlation.len()) {
+        return Err(Error::LengthMismatch(2));
+    }
+    for &r in correlation {
+        let r = finite(r, 2)?;
+        if r.abs() > T::one() {
+            return Err(Error::OutOfDomain(2));
+        }
+    }
+    for i in 0..n {
+        for j in 0..n {
+            let rij = correlation.get(i * n + j).copied();
+            let rji = correlation.get(j * n + i).copied();
+            let ok = if i == j {
+                rij == Some(T::one())
+            } else {
+                rij == rji
+            };
+            if !ok {
+                return Err(Error::OutOfDomain(2));
+            }
+        }
+    }
+    // scale by the largest |cᵢuᵢ| as in eq. 10
+    let mut m = T::zero();
+    for (&ci, &ui) in c.iter().zip(u.iter()) {
+        m = m.max((ci * ui).abs());
+    }
+    let m = finite_result(m, 0)?;
+    if m == T::zero() {
+        return Ok(T::zero());
+    }
+    let mut sum = T::zero();
+    let mut size = T::zero();
+    for (i, (&ci, &ui)) in c.iter().zip(u.iter()).enumerate() {
+        let yi = (ci * ui) / m;
+        for (j, (&cj, &uj)) in c.iter().zip(u.iter()).enumerate() {
+            let yj = (cj * uj) / m;
+            let r = correlation.get(i * n + j).copied().unwrap_or(T::zero());
+            let term = yi * yj * r;
+            sum = sum + term;
+            size = size + term.abs();
+        }
+    }
+    if sum < T::zero() {
+        let n2 = T::c((n * n) as f64);
+        if -sum > T::c(4.0) * n2 * T::epsilon() * size {
+            return Err(Error::OutOfDomain(2));
+        }
+        return Ok(T::zero());
+    }
+    finite_result(m * sum.sqrt(), 0)
+}
+
+/// Brightness temperature at a wavelength with its uncertainty: T from
+/// [`brightness_temperature_wavelength`] (the same bits) and the sensitivity coefficient
+/// ∂T/∂L = 1/(∂B_λ/∂T) (Planck's law differentiated implicitly, with
+/// [`radiance_temperature_derivative_wavelength`]).
+///
+/// * `wavelength_m`: m, finite and > 0.
+/// * `spectral_radiance`: L in W m⁻² sr⁻¹ m⁻¹, finite and > 0.
+/// * `spectral_radiance_uncertainty`: standard uncertainty u(L), same unit, finite and ≥ 0.
+///
+/// Returns a [`TemperatureUncertainty`] with `inputs` = 1, coefficient 0 = ∂T/∂L in
+/// K per (W m⁻² sr⁻¹ m⁻¹), u_c = |∂T/∂L| u(L). Errors: those of
+/// [`brightness_temperature_wavelength`]; `NonFinite(2)`, `Negative(2)`; `OutOfDomain(1)` when
+/// dB/dT at T is not a positive normal number (radiances far outside thermal ones).
+///
+/// Accuracy: temperature as [`brightness_temperature_wavelength`]; coefficient within 1e-12
+/// relative (`f64`) against mpmath (`tests/data/thermometry.txt`). Reference: JCGM 100:2008
+/// eq. 10 with the implicit derivative of Planck's law.
+pub fn brightness_temperature_wavelength_with_uncertainty<T: Real>(
+    wavelength_m: T,
+    spectral_radiance: T,
+    spectral_radiance_uncertainty: T,
+) -> Result<TemperatureUncertainty<T>> {
+    let t = brightness_temperature_wavelength(wavelength_m, spectral_radiance)?;
+    let u = non_negative(spectral_radiance_uncertainty, 2)?;
+    let d = radiance_temperature_derivative_wavelength(wavelength_m, t)
+        .map_err(|_| Error::OutOfDomain(1))?;
+    single_input(t, d, u)
+}
+
+/// Brightness temperature at a frequency with its uncertainty: T from
+/// [`brightness_temperature_frequency`] (the same bits) and ∂T/∂L = 1/(∂B_ν/∂T)
+/// ([`radiance_temperature_derivative_frequency`]).
+///
+/// * `frequency_hz`: Hz, finite and > 0.
+/// * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
+/// * `spectral_radiance_uncertainty`: u(L), same unit, finite and ≥ 0.
+///
+/// Returns a [`TemperatureUncertainty`] with `inputs` = 1 (coefficient 0 = ∂T/∂L in
+/// K per W m⁻² sr⁻¹ Hz⁻¹). Errors as [`brightness_temperature_wavelength_with_uncertainty`].
+/// Accuracy: coefficient within 1e-12 relative (`f64`) against mpmath. Reference: JCGM 100:2008
+/// eq. 10.
+pub fn brightness_temperature_frequency_with_uncertainty<T: Real>(
+    frequency_hz: T,
+    spectral_radiance: T,
+    spectral_radiance_uncertainty: T,
+) -> Result<TemperatureUncertainty<T>> {
+    let t = brightness_temperature_frequency(frequency_hz, spectral_radiance)?;
+    let u = non_negative(spectral_radiance_uncertainty, 2)?;
+    let d = radiance_temperature_derivative_frequency(frequency_hz, t)
+        .map_err(|_| Error::OutOfDomain(1))?;
+    single_input(t, d, u)
+}
+
+fn single_input<T: Real>(t: T, d: T, u: T) -> Result<TemperatureUncertainty<T>> {
+    if !(d >= T::min_positive_value()) {
+        return Err(Error::OutOfDomain(1));
+    }
+    let mut c = [T::zero(); SENSITIVITY_CAPACITY];
+    let mut us = [T::zero(); SENSITIVITY_CAPACITY];
+    if let (Some(c0), Some(u0)) = (c.first_mut(), us.first_mut()) {
+        *c0 = T::one() / d;
+        *u0 = u;
+    }
+    TemperatureUncertainty::from_parts(t, c, us, 1, 1)
+}
+
+/// Two-load calibrated temperature with its uncertainty: T from [`two_load_calibration`] and
+/// [`calibrated_temperature`] (the same bits), and its sensitivity to the three readings and
+/// the two load temperatures.
+///
+/// With J(T) the Rayleigh-Jeans brightness temperature (hν/k)/(e^(hν/kT) − 1),
+/// w = (r − r_c)/(r_h − r_c) and the scene J = J(T_c) + w (J(T_h) − J(T_c)), implicit
+/// differentiation of J(T) = J gives, with J′ = dJ/dT = x²eˣ/(eˣ − 1)²
+/// ([`thermodynamic_to_rayleigh_jeans_factor`]) and g the gain:
+/// ∂T/∂r_h = −w/(g J′(T)), ∂T/∂T_h = w J′(T_h)/J′(T), ∂T/∂r_c = −(1 − w)/(g J′(T)),
+/// ∂T/∂T_c = (1 − w) J′(T_c)/J′(T), ∂T/∂r = 1/(g J′(T)).
+///
+/// * `frequency_hz`, `reading_hot`, `temperature_hot_k`, `reading_cold`, `temperature_cold_k`:
+///   as [`two_load_calibration`] (arguments 0 to 4).
+/// * `reading`: the scene reading, as [`calibrated_temperature`] (argument 5).
+/// * `reading_hot_uncertainty`, `temperature_hot_uncertainty_k`, `reading_cold_uncertainty`,
+///   `temperature_cold_uncertainty_k`, `reading_uncertainty`: standard uncertainties of the
+///   five inputs, finite and ≥ 0 (arguments 6 to 10), in reading units or K.
+///
+/// Returns a [`TemperatureUncertainty`] with `inputs` = 5 and the coefficients in the order
+/// (reading_hot, temperature_hot, reading_cold, temperature_cold, reading), in K per reading
+/// unit or K/K. Errors: those of [`two_load_calibration`] and [`calibrated_temperature`]
+/// (`OutOfDomain(5)` for a reading no blackbody gives); `NonFinite(i)`, `Negative(i)` for
+/// i = 6…10; `OutOfDomain(5)` when J′(T) is not a positive normal number.
+///
+/// Accuracy: temperature as [`calibrated_temperature`]; coefficients within 1e-12 relative
+/// (`f64`) against mpmath (`tests/data/thermometry.txt`). Reference: JCGM 100:2008 eq. 10;
+/// the calibration line as in [`two_load_calibration`].
+#[allow(clippy::too_many_arguments)]
+pub fn calibrated_temperature_with_uncertainty<T: Real>(
+    frequency_hz: T,
+    reading_hot: T,
+    temperature_hot_k: T,
+    reading_cold: T,
+    temperature_cold_k: T,
+    reading: T,
+    reading_hot_uncertainty: T,
+    temperature_hot_uncertainty_k: T,
+    reading_cold_uncertainty: T,
+    temperature_cold_uncertainty_k: T,
+    reading_uncertainty: T,
+) -> Result<TemperatureUncertainty<T>> {
+    let cal = two_load_calibration(
+        frequency_hz,
+        reading_hot,
+        temperature_hot_k,
+        reading_cold,
+        temperature_cold_k,
+    )?;
+    let t = calibrated_temperature(&cal, reading).map_err(|e| match e {
+        Error::NonFinite(_) => Error::NonFinite(5),
+        Error::OutOfDomain(_) => Error::OutOfDomain(5),
+        other => other,
+    })?;
+    let us = [
+        non_negative(reading_hot_uncertainty, 6)?,
+        non_negative(temperature_hot_uncertainty_k, 7)?,
+        non_negative(reading_cold_uncertainty, 8)?,
+        non_negative(temperature_cold_uncertainty_k, 9)?,
+        non_negative(reading_uncertainty, 10)?,
+    ];
+    let nu = cal.frequency_hz;
+    let domain = |_| Error::OutOfDomain(5);
+    let jt = thermodynamic_to_rayleigh_jeans_factor(nu, t).map_err(domain)?;
+    let jh = thermodynamic_to_rayleigh_jeans_factor(nu, temperature_hot_k).map_err(domain)?;
+    let jc = thermodynamic_to_rayleigh_jeans_factor(nu, temperature_cold_k).map_err(domain)?;
+    if !(jt >= T::min_positive_value()) {
+        return Err(Error::OutOfDomain(5));
+    }
+    let span = reading_hot - reading_cold;
+    let w = (reading - reading_cold) / span;
+    let w_cold = (reading_hot - reading) / span;
+    let per_reading = T::one() / (cal.gain * jt);
+    let c = [
+        -w * per_reading,
+        w * jh / jt,
+        -w_cold * per_reading,
+        w_cold * jc / jt,
+        per_reading,
+    ];
+    TemperatureUncertainty::from_parts(t, c, us, 5, 5)
+}
