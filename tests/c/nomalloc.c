@@ -1,5 +1,6 @@
 /*
- * Firmware-style use of relicore: single-precision scalar functions, the two-load calibration
+ * Firmware-style use of relicore: every float form of the table (from tests/c/gen_functions.h),
+ * single-precision scalar functions, the two-load calibration
  * (float and double), the float response functions and the float array forms, and a universe
  * (built in static storage) with scalar, array, constant and inverse calls, with every other
  * buffer on the stack, and the decoupling functions with a thermal history in static storage.
@@ -12,6 +13,7 @@
 #include <stddef.h>
 #include <stdint.h>
 
+#include "gen_functions.h"
 #include "relicore.h"
 
 static int bad(int32_t status, float value)
@@ -19,9 +21,43 @@ static int bad(int32_t status, float value)
     return status != RELICORE_OK || !isfinite(value);
 }
 
-int main(void)
+/* 1 unless the status is 0 or a documented error code (never PANIC) */
+static int undocumented(int32_t status)
+{
+    return !(status <= 0 && status >= RELICORE_ERROR_CAPACITY_TOO_SMALL
+             && status != RELICORE_ERROR_PANIC);
+}
+
+/* Every float form of the table (the lists of tests/c/gen_functions.h), so that each is linked
+ * in and none may pull in an allocator: called with arguments 1 (whatever the status, as long
+ * as it is a documented one) and, for the array forms, a four-element stack buffer. */
+#define ONES_1 1.0f
+#define ONES_2 1.0f, 1.0f
+#define ONES_3 1.0f, 1.0f, 1.0f
+#define ONES_4 1.0f, 1.0f, 1.0f, 1.0f
+#define CALL_F32(n, k, domain, upper, array) \
+    failures += undocumented(relicore_##n##_f32(ONES_##k, &v));
+#define ARRAY_F32_0(n) relicore_##n##_array_f32(xs, 4, 1.0f, ys)
+#define ARRAY_F32_1(n) relicore_##n##_array_f32(1.0f, xs, 4, ys)
+#define CALL_ARRAY_F32(n, k, pos) failures += undocumented(ARRAY_F32_##pos(n));
+static int every_float_form(void)
 {
     int failures = 0;
+    float v = 0.0f;
+    const float xs[4] = { 0.5f, 1.0f, 2.0f, 4.0f };
+    float ys[4];
+    RELICORE_BLACKBODY_SCALARS_F32(CALL_F32)
+    RELICORE_COSMOLOGY_SCALARS_F32(CALL_F32)
+    RELICORE_DECOUPLING_SCALARS_F32(CALL_F32)
+    RELICORE_BLACKBODY_ARRAYS_F32(CALL_ARRAY_F32)
+    RELICORE_COSMOLOGY_ARRAYS_F32(CALL_ARRAY_F32)
+    RELICORE_DECOUPLING_ARRAYS_F32(CALL_ARRAY_F32)
+    return failures;
+}
+
+int main(void)
+{
+    int failures = every_float_form();
     float v = 0.0f;
 
     failures += bad(relicore_spectral_radiance_wavelength_f32(10e-6f, 300.0f, &v), v);

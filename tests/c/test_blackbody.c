@@ -13,8 +13,12 @@
  *       first: bits is the IEEE-754 pattern of the result in hex (16 digits for double, 8 for
  *       the _f32 names), so another language can compare its results bit for bit.
  *
- * An unknown function name in a data file is a failure, and so is an exported function with
- * no reference vector, so the data and this harness cannot drift apart silently. The record
+ * The regular functions it dispatches to are the lists of tests/c/gen_functions.h (generated
+ * from bindings/functions.toml); the calibration and response functions are written here. The
+ * array checks take the typical value of the array variable and the fixed argument from the
+ * scalar function's first value line in the data file. An unknown function name in a data
+ * file is a failure, and so is an exported function with no reference vector, so the data and
+ * this harness cannot drift apart silently. The record
  * reader, number parsing, tolerances and check counting it shares with test_cosmology and
  * test_decoupling are in vector_files.c.
  */
@@ -27,6 +31,7 @@
 #include <stdlib.h>
 #include <string.h>
 
+#include "gen_functions.h"
 #include "relicore.h"
 #include "vector_files.h"
 
@@ -40,15 +45,19 @@ typedef int32_t (*d1_fn)(double, double *);
 typedef int32_t (*d2_fn)(double, double, double *);
 typedef int32_t (*d3_fn)(double, double, double, double *);
 typedef int32_t (*d4_fn)(double, double, double, double, double *);
+typedef int32_t (*f1_fn)(float, float *);
 typedef int32_t (*f2_fn)(float, float, float *);
 typedef int32_t (*f3_fn)(float, float, float, float *);
+typedef int32_t (*f4_fn)(float, float, float, float, float *);
 typedef int32_t (*cal_fn)(const struct relicore_two_load_calibration *, double, double *);
 typedef int32_t (*calf_fn)(const struct relicore_two_load_calibration_f32 *, float, float *);
 
 /* CAL: the six arguments of the vector are two_load_calibration's five, then the reading. */
-enum shape { S_D1, S_D2, S_D3, S_D4, S_CAL, S_F2, S_F3, S_CALF };
-static const int shape_nargs[] = { 1, 2, 3, 4, 6, 2, 3, 6 };
-static int shape_is_f32(enum shape s) { return s == S_F2 || s == S_F3 || s == S_CALF; }
+enum shape { S_D1, S_D2, S_D3, S_D4, S_CAL, S_F1, S_F2, S_F3, S_F4, S_CALF };
+static const int shape_nargs[] = { 1, 2, 3, 4, 6, 1, 2, 3, 4, 6 };
+static int shape_is_f32(enum shape s) { return s >= S_F1; }
+
+#define MAX_ARGS 8
 
 struct entry {
     const char *name; /* name in the data files (without the relicore_ prefix) */
@@ -58,63 +67,38 @@ struct entry {
         d2_fn d2;
         d3_fn d3;
         d4_fn d4;
+        f1_fn f1;
         f2_fn f2;
         f3_fn f3;
+        f4_fn f4;
         cal_fn cal;
         calf_fn calf;
     } fn;
     long vectors; /* number of lines of the data files that used it */
+    int has_sample; /* the arguments of its first value line (not a status line) were kept */
+    double sample[MAX_ARGS];
 };
 
-#define D1(n) { #n, S_D1, { .d1 = relicore_##n }, 0 }
-#define D2(n) { #n, S_D2, { .d2 = relicore_##n }, 0 }
-#define D3(n) { #n, S_D3, { .d3 = relicore_##n }, 0 }
-#define D4(n) { #n, S_D4, { .d4 = relicore_##n }, 0 }
-#define CAL(n) { #n, S_CAL, { .cal = relicore_##n }, 0 }
-#define F2(n) { #n "_f32", S_F2, { .f2 = relicore_##n##_f32 }, 0 }
-#define F3(n) { #n "_f32", S_F3, { .f3 = relicore_##n##_f32 }, 0 }
-#define CALF(n) { #n "_f32", S_CALF, { .calf = relicore_##n##_f32 }, 0 }
+#define D1(n) { #n, S_D1, { .d1 = relicore_##n }, 0, 0, { 0 } }
+#define D2(n) { #n, S_D2, { .d2 = relicore_##n }, 0, 0, { 0 } }
+#define D3(n) { #n, S_D3, { .d3 = relicore_##n }, 0, 0, { 0 } }
+#define D4(n) { #n, S_D4, { .d4 = relicore_##n }, 0, 0, { 0 } }
+#define CAL(n) { #n, S_CAL, { .cal = relicore_##n }, 0, 0, { 0 } }
+#define F1(n) { #n "_f32", S_F1, { .f1 = relicore_##n##_f32 }, 0, 0, { 0 } }
+#define F2(n) { #n "_f32", S_F2, { .f2 = relicore_##n##_f32 }, 0, 0, { 0 } }
+#define F3(n) { #n "_f32", S_F3, { .f3 = relicore_##n##_f32 }, 0, 0, { 0 } }
+#define F4(n) { #n "_f32", S_F4, { .f4 = relicore_##n##_f32 }, 0, 0, { 0 } }
+#define CALF(n) { #n "_f32", S_CALF, { .calf = relicore_##n##_f32 }, 0, 0, { 0 } }
+/* the entries of the generated lists (tests/c/gen_functions.h), by arity */
+#define DOUBLE_ENTRY(n, k, domain, upper, array) D##k(n),
+#define FLOAT_ENTRY(n, k, domain, upper, array) F##k(n),
 
+/* the regular functions from the table (bindings/functions.toml), then the calibration */
 static struct entry table[] = {
-    D2(spectral_radiance_wavelength),
-    D2(spectral_radiance_frequency),
-    D2(spectral_radiance_wavenumber),
-    D2(photon_radiance_wavelength),
-    D2(photon_radiance_frequency),
-    D2(photon_radiance_wavenumber),
-    D2(radiance_temperature_derivative_wavelength),
-    D2(radiance_temperature_derivative_frequency),
-    D1(radiant_exitance),
-    D1(photon_exitance),
-    D1(peak_wavelength),
-    D1(peak_frequency),
-    D1(peak_wavenumber),
-    D1(photon_peak_wavelength),
-    D1(photon_peak_frequency),
-    D1(temperature_from_peak_wavelength),
-    D1(temperature_from_peak_frequency),
-    D3(band_fraction_wavelength),
-    D3(band_radiance_wavelength),
-    D3(band_photon_radiance_wavelength),
-    D3(band_radiance_frequency),
-    D3(temperature_from_band_radiance_wavelength),
-    D2(brightness_temperature_wavelength),
-    D2(brightness_temperature_frequency),
-    D2(rayleigh_jeans_temperature),
-    D4(ratio_temperature),
-    D2(thermodynamic_to_rayleigh_jeans_factor),
-    D2(kcmb_to_mjy_per_sr),
-    D2(thermal_sz_spectral_shape),
-    D2(thermal_sz_temperature_shape),
-    D1(thermal_sz_null_frequency),
+    RELICORE_BLACKBODY_SCALARS(DOUBLE_ENTRY)
+    RELICORE_BLACKBODY_SCALARS_F32(FLOAT_ENTRY)
     CAL(calibrated_temperature),
     CAL(calibrated_brightness_temperature),
-    F2(spectral_radiance_wavelength),
-    F2(spectral_radiance_frequency),
-    F2(spectral_radiance_wavenumber),
-    F2(brightness_temperature_wavelength),
-    F2(brightness_temperature_frequency),
-    F3(band_radiance_wavelength),
     CALF(calibrated_temperature),
     CALF(calibrated_brightness_temperature),
 };
@@ -182,8 +166,10 @@ static int32_t call_entry(const struct entry *e, const double *a, double *out, f
     case S_D2: s = e->fn.d2(a[0], a[1], &d); break;
     case S_D3: s = e->fn.d3(a[0], a[1], a[2], &d); break;
     case S_D4: s = e->fn.d4(a[0], a[1], a[2], a[3], &d); break;
+    case S_F1: s = e->fn.f1((float)a[0], &f); break;
     case S_F2: s = e->fn.f2((float)a[0], (float)a[1], &f); break;
     case S_F3: s = e->fn.f3((float)a[0], (float)a[1], (float)a[2], &f); break;
+    case S_F4: s = e->fn.f4((float)a[0], (float)a[1], (float)a[2], (float)a[3], &f); break;
     case S_CAL: {
         struct relicore_two_load_calibration cal;
         s = relicore_two_load_calibration(a[0], a[1], a[2], a[3], a[4], &cal);
@@ -247,7 +233,7 @@ static void run_scalar_file(const char *path, int dump)
         char where[160];
         snprintf(where, sizeof where, "%s:%ld", path, r.lineno);
         double nargs_d = 0.0;
-        if (ntok < 2 || !parse_number(tok[1], &nargs_d) || nargs_d < 0 || nargs_d > 8) {
+        if (ntok < 2 || !parse_number(tok[1], &nargs_d) || nargs_d < 0 || nargs_d > MAX_ARGS) {
             check(0, "%s: malformed line: %s", where, r.copy);
             continue;
         }
@@ -257,7 +243,7 @@ static void run_scalar_file(const char *path, int dump)
             continue;
         }
         const char *name = tok[0];
-        double args[8], want = 0.0, tol = 0.0;
+        double args[MAX_ARGS], want = 0.0, tol = 0.0;
         int ok = 1;
         for (int i = 0; i < nargs; i++) {
             ok = ok && parse_number(tok[2 + i], &args[i]);
@@ -281,6 +267,10 @@ static void run_scalar_file(const char *path, int dump)
         }
         e->vectors++;
         int is_status = strcmp(kind, "status") == 0;
+        if (!is_status && !e->has_sample) {
+            memcpy(e->sample, args, (size_t)nargs * sizeof args[0]);
+            e->has_sample = 1;
+        }
         if (shape_is_f32(e->shape)) {
             int representable = 1;
             for (int i = 0; i < nargs; i++) {
@@ -463,8 +453,10 @@ static void check_null_scalars(void)
         case S_D2: s = e->fn.d2(1e-5, 300.0, NULL); break;
         case S_D3: s = e->fn.d3(1e-6, 2e-6, 300.0, NULL); break;
         case S_D4: s = e->fn.d4(1e-6, 2e-6, 1.0, 1.0, NULL); break;
+        case S_F1: s = e->fn.f1(300.0f, NULL); break;
         case S_F2: s = e->fn.f2(1e-5f, 300.0f, NULL); break;
         case S_F3: s = e->fn.f3(1e-6f, 2e-6f, 300.0f, NULL); break;
+        case S_F4: s = e->fn.f4(1e-6f, 2e-6f, 1.0f, 1.0f, NULL); break;
         case S_CAL: {
             struct relicore_two_load_calibration cal;
             int32_t c = relicore_two_load_calibration(90e9, 2.0, 300.0, 1.0, 77.0, &cal);
@@ -500,40 +492,42 @@ static void check_null_scalars(void)
           "relicore_two_load_calibration_f32(..., NULL)");
 }
 
-/* Array forms: x array at a fixed temperature (spectral) or fixed coordinate (brightness). */
-enum akind { A_X_T, A_C_L }; /* out[i] = f(x[i], T)  or  out[i] = f(c, L[i]) */
-typedef int32_t (*ad_fn)(const double *, size_t, double, double *);
-typedef int32_t (*ab_fn)(double, const double *, size_t, double *);
-typedef int32_t (*af_fn)(const float *, size_t, float, float *);
+/* Array forms of two-argument functions: the array at position pos (0: out[i] = f(x[i], c),
+ * 1: out[i] = f(c, x[i])), c fixed. The typical value of the array variable and the fixed
+ * argument are the arguments of the scalar function's first value line in the data file. */
+typedef int32_t (*ad0_fn)(const double *, size_t, double, double *);
+typedef int32_t (*ad1_fn)(double, const double *, size_t, double *);
+typedef int32_t (*af0_fn)(const float *, size_t, float, float *);
+typedef int32_t (*af1_fn)(float, const float *, size_t, float *);
 struct aentry {
-    const char *name;
+    const char *name;   /* the array form, without relicore_ */
+    const char *scalar; /* its scalar function in table[] */
     int is_f32;
-    enum akind kind;
-    ad_fn xt;
-    ab_fn cl;
-    af_fn xt32;
-    d2_fn scalar;
-    f2_fn scalar32;
-    double scale; /* typical value of the array variable */
-    double fixed; /* the fixed argument: temperature, or spectral coordinate */
+    int pos;
+    union {
+        ad0_fn d0;
+        ad1_fn d1;
+        af0_fn f0;
+        af1_fn f1;
+    } fn;
+    union {
+        d2_fn d;
+        f2_fn f;
+    } one; /* the scalar function each element must agree with */
 };
-#define AX(n, sc) { #n "_array", 0, A_X_T, relicore_##n##_array, NULL, NULL, relicore_##n, NULL, sc, 300.0 }
-#define AB(n, c, sc) { #n "_array", 0, A_C_L, NULL, relicore_##n##_array, NULL, relicore_##n, NULL, sc, c }
-#define AF(n, sc) { #n "_array_f32", 1, A_X_T, NULL, NULL, relicore_##n##_array_f32, NULL, relicore_##n##_f32, sc, 300.0 }
+#define AD0(n) { #n "_array", #n, 0, 0, { .d0 = relicore_##n##_array }, { .d = relicore_##n } }
+#define AD1(n) { #n "_array", #n, 0, 1, { .d1 = relicore_##n##_array }, { .d = relicore_##n } }
+#define AF0(n) \
+    { #n "_array_f32", #n "_f32", 1, 0, { .f0 = relicore_##n##_array_f32 }, \
+      { .f = relicore_##n##_f32 } }
+#define AF1(n) \
+    { #n "_array_f32", #n "_f32", 1, 1, { .f1 = relicore_##n##_array_f32 }, \
+      { .f = relicore_##n##_f32 } }
+#define DOUBLE_ARRAY(n, k, pos) AD##pos(n),
+#define FLOAT_ARRAY(n, k, pos) AF##pos(n),
 static const struct aentry atable[] = {
-    AX(spectral_radiance_wavelength, 1e-5),
-    AX(spectral_radiance_frequency, 3e13),
-    AX(spectral_radiance_wavenumber, 1e5),
-    AX(photon_radiance_wavelength, 1e-5),
-    AX(photon_radiance_frequency, 3e13),
-    AX(photon_radiance_wavenumber, 1e5),
-    AX(radiance_temperature_derivative_wavelength, 1e-5),
-    AX(radiance_temperature_derivative_frequency, 3e13),
-    AB(brightness_temperature_wavelength, 1e-5, 1e7),
-    AB(brightness_temperature_frequency, 3e13, 1e-12),
-    AF(spectral_radiance_wavelength, 1e-5),
-    AF(spectral_radiance_frequency, 3e13),
-    AF(spectral_radiance_wavenumber, 1e5),
+    RELICORE_BLACKBODY_ARRAYS(DOUBLE_ARRAY)
+    RELICORE_BLACKBODY_ARRAYS_F32(FLOAT_ARRAY)
 };
 #define ATABLE_LEN (sizeof atable / sizeof atable[0])
 
@@ -544,23 +538,23 @@ static const double amul[NA] = { 0.01, 0.1, 0.5, 1.0, -1.0, 2.0, 0.0, 10.0, NAN,
 static int32_t call_array(const struct aentry *a, const void *x, size_t n, double fixed, void *out)
 {
     if (a->is_f32) {
-        return a->xt32((const float *)x, n, (float)fixed, (float *)out);
+        return a->pos == 0 ? a->fn.f0((const float *)x, n, (float)fixed, (float *)out)
+                           : a->fn.f1((float)fixed, (const float *)x, n, (float *)out);
     }
-    if (a->kind == A_X_T) {
-        return a->xt((const double *)x, n, fixed, (double *)out);
-    }
-    return a->cl(fixed, (const double *)x, n, (double *)out);
+    return a->pos == 0 ? a->fn.d0((const double *)x, n, fixed, (double *)out)
+                       : a->fn.d1(fixed, (const double *)x, n, (double *)out);
 }
 
 static int32_t call_scalar(const struct aentry *a, double xi, double fixed, double *out)
 {
+    double first = a->pos == 0 ? xi : fixed, second = a->pos == 0 ? fixed : xi;
     if (a->is_f32) {
         float o = NAN;
-        int32_t s = a->scalar32((float)xi, (float)fixed, &o);
+        int32_t s = a->one.f((float)first, (float)second, &o);
         *out = (double)o;
         return s;
     }
-    return a->kind == A_X_T ? a->scalar(xi, fixed, out) : a->scalar(fixed, xi, out);
+    return a->one.d(first, second, out);
 }
 
 static int same_bits(const struct aentry *a, const void *p, size_t i, double scalar_result)
@@ -583,24 +577,32 @@ static void check_arrays(void)
 {
     for (size_t k = 0; k < ATABLE_LEN; k++) {
         const struct aentry *a = &atable[k];
+        const struct entry *one = find_entry(a->scalar);
+        if (one == NULL || !one->has_sample || shape_nargs[one->shape] != 2) {
+            check(0, "relicore_%s: no value line of %s to take its arguments from", a->name,
+                  a->scalar);
+            continue;
+        }
+        const double scale = one->sample[a->pos];     /* typical value of the array variable */
+        const double fixed = one->sample[1 - a->pos]; /* the other argument */
         double xd[NA], od[NA];
         float xf[NA], of[NA];
         void *x = a->is_f32 ? (void *)xf : (void *)xd;
         void *o = a->is_f32 ? (void *)of : (void *)od;
         for (int i = 0; i < NA; i++) {
-            xd[i] = amul[i] * a->scale;
+            xd[i] = amul[i] * scale;
             xf[i] = (float)xd[i];
             od[i] = 7.0;
             of[i] = 7.0f;
         }
         /* element-wise agreement with the scalar call, first error code, NaN elements */
-        int32_t s = call_array(a, x, NA, a->fixed, o);
+        int32_t s = call_array(a, x, NA, fixed, o);
         int32_t first = RELICORE_OK;
         int agree = 1, nan_ok = 1;
         for (int i = 0; i < NA; i++) {
             double xi = a->is_f32 ? (double)xf[i] : xd[i];
             double r = NAN;
-            int32_t si = call_scalar(a, xi, a->fixed, &r);
+            int32_t si = call_scalar(a, xi, fixed, &r);
             if (si != RELICORE_OK && first == RELICORE_OK) {
                 first = si;
             }
@@ -619,7 +621,7 @@ static void check_arrays(void)
         memcpy(xd2, xd, sizeof xd2);
         memcpy(xf2, xf, sizeof xf2);
         void *x2 = a->is_f32 ? (void *)xf2 : (void *)xd2;
-        int32_t s2 = call_array(a, x2, NA, a->fixed, x2);
+        int32_t s2 = call_array(a, x2, NA, fixed, x2);
         int inplace = s2 == s;
         for (int i = 0; i < NA; i++) {
             inplace = inplace && (a->is_f32 ? (bits32(xf2[i]) == bits32(of[i])
@@ -630,7 +632,7 @@ static void check_arrays(void)
         check(inplace, "relicore_%s: in-place call differs from the out-of-place one", a->name);
 
         /* all-valid input returns OK */
-        s = call_array(a, x, 4, a->fixed, o); /* the first four multipliers are valid */
+        s = call_array(a, x, 4, fixed, o); /* the first four multipliers are valid */
         check(s == RELICORE_OK, "relicore_%s: valid elements returned %d", a->name, (int)s);
 
         /* an invalid fixed argument fails every element */
@@ -648,22 +650,22 @@ static void check_arrays(void)
             od[i] = 7.0;
             of[i] = 7.0f;
         }
-        s = call_array(a, x, 0, a->fixed, o);
+        s = call_array(a, x, 0, fixed, o);
         check(s == RELICORE_OK && (a->is_f32 ? of[0] == 7.0f : od[0] == 7.0),
               "relicore_%s: n = 0 returned %d or wrote an output", a->name, (int)s);
 
         /* NULL input: -1 and every output NaN; NULL output: -1 */
-        s = call_array(a, NULL, 4, a->fixed, o);
+        s = call_array(a, NULL, 4, fixed, o);
         all_nan = 1;
         for (size_t i = 0; i < 4; i++) {
             all_nan = all_nan && is_nan_at(a, o, i);
         }
         check(s == RELICORE_ERROR_NULL_POINTER && all_nan,
               "relicore_%s: NULL input returned %d, outputs NaN %d", a->name, (int)s, all_nan);
-        s = call_array(a, x, 4, a->fixed, NULL);
+        s = call_array(a, x, 4, fixed, NULL);
         check(s == RELICORE_ERROR_NULL_POINTER, "relicore_%s: NULL output returned %d", a->name,
               (int)s);
-        s = call_array(a, NULL, 0, a->fixed, o);
+        s = call_array(a, NULL, 0, fixed, o);
         check(s == RELICORE_ERROR_NULL_POINTER, "relicore_%s: NULL input with n = 0 returned %d",
               a->name, (int)s);
     }

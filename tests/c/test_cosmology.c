@@ -19,9 +19,11 @@
  *       bits is the IEEE-754 pattern of the result in 16 hex digits, so another language can
  *       compare its results bit for bit.
  *
- * An unknown function or universe name in the data file is a failure, and so is an exported
- * function with no reference vector, so the data and this harness cannot drift apart
- * silently. The record reader, number parsing, tolerances, check counting and the reading of
+ * The functions of a universe are the list of tests/c/gen_functions.h (generated from
+ * bindings/functions.toml); the interface checks call each on the arguments of its first value
+ * line in the data file. An unknown function or universe name in the data file is a failure,
+ * and so is an exported function with no reference vector, so the data and this harness cannot
+ * drift apart silently. The record reader, number parsing, tolerances, check counting and the reading of
  * universe and vector lines it shares with test_decoupling (and in part test_blackbody) are in
  * vector_files.c.
  */
@@ -33,6 +35,7 @@
 #include <stdlib.h>
 #include <string.h>
 
+#include "gen_functions.h"
 #include "relicore.h"
 #include "vector_files.h"
 
@@ -59,45 +62,20 @@ struct entry {
     u1_fn f1;
     u2_fn f2;
     ua_fn array; /* the array form of a one-argument function */
-    double sample; /* a valid argument for the interface checks */
     long vectors;  /* number of lines of the data file that used it */
+    int has_sample; /* valid arguments for the interface checks were kept: */
+    double sample[2]; /* the arguments of its first value line (not a status line) */
 };
 
-#define U0(n) { #n, 0, relicore_##n, NULL, NULL, NULL, 0.0, 0 }
-#define U1(n, x) { #n, 1, NULL, relicore_##n, NULL, relicore_##n##_array, x, 0 }
-#define U2(n) { #n, 2, NULL, NULL, relicore_##n, NULL, 0.0, 0 }
+#define U0_0(n) { #n, 0, relicore_##n, NULL, NULL, NULL, 0, 0, { 0.0, 0.0 } }
+#define U1_0(n) { #n, 1, NULL, relicore_##n, NULL, NULL, 0, 0, { 0.0, 0.0 } }
+#define U1_1(n) { #n, 1, NULL, relicore_##n, NULL, relicore_##n##_array, 0, 0, { 0.0, 0.0 } }
+#define U2_0(n) { #n, 2, NULL, NULL, relicore_##n, NULL, 0, 0, { 0.0, 0.0 } }
+/* an entry of the generated list (tests/c/gen_functions.h), by arity and array form */
+#define UNIVERSE_ENTRY(n, k, domain, upper, array) U##k##_##array(n),
 
-static struct entry table[] = {
-    U1(dimensionless_hubble, 1.0),
-    U1(hubble_parameter_km_s_mpc, 1.0),
-    U1(omega_matter_at, 1.0),
-    U1(omega_radiation_at, 1.0),
-    U1(omega_dark_energy_at, 1.0),
-    U1(omega_curvature_at, 1.0),
-    U1(critical_density_kg_m3, 1.0),
-    U1(cmb_temperature_at_k, 1.0),
-    U1(comoving_distance_mpc, 1.0),
-    U1(transverse_comoving_distance_mpc, 1.0),
-    U1(angular_diameter_distance_mpc, 1.0),
-    U1(luminosity_distance_mpc, 1.0),
-    U1(distance_modulus, 1.0),
-    U1(comoving_volume_gpc3, 1.0),
-    U1(differential_comoving_volume_mpc3_sr, 1.0),
-    U1(transverse_scale_kpc_per_arcsec, 1.0),
-    U1(lookback_time_gyr, 1.0),
-    U1(age_gyr, 1.0),
-    U1(conformal_time_mpc, 1.0),
-    U2(angular_diameter_distance_between_mpc),
-    U1(redshift_at_age_gyr, 5.0),
-    U1(redshift_at_lookback_time_gyr, 5.0),
-    U1(redshift_at_comoving_distance_mpc, 3000.0),
-    U1(redshift_at_luminosity_distance_mpc, 3000.0),
-    U0(hubble_distance_mpc),
-    U0(hubble_time_gyr),
-    U0(omega_radiation),
-    U0(omega_dark_energy),
-    U0(matter_radiation_equality_redshift),
-};
+/* every function of a universe in the table (bindings/functions.toml) */
+static struct entry table[] = { RELICORE_COSMOLOGY_UNIVERSE(UNIVERSE_ENTRY) };
 #define TABLE_LEN (sizeof table / sizeof table[0])
 
 static struct entry *find_entry(const char *name)
@@ -249,6 +227,11 @@ static void run_file(const char *path, int dump)
         int is_status = strcmp(kind, "status") == 0;
         double got = NAN;
         int32_t s = call_entry(e, &ue->u, args, &got);
+        if (!is_status && !e->has_sample) {
+            e->sample[0] = args[0];
+            e->sample[1] = args[1];
+            e->has_sample = 1;
+        }
 
         /* the array form on the same single argument: same bits, same status */
         if (e->array != NULL) {
@@ -306,6 +289,9 @@ static void check_coverage(void)
 {
     for (size_t i = 0; i < TABLE_LEN; i++) {
         check(table[i].vectors > 0, "no reference vector for relicore_%s", table[i].name);
+        check(table[i].has_sample || table[i].nargs == 0,
+              "no value line of relicore_%s (its arguments serve the interface checks)",
+              table[i].name);
     }
 }
 
@@ -379,7 +365,7 @@ static void check_refused(const struct relicore_universe *u, int32_t want_code, 
 {
     for (size_t i = 0; i < TABLE_LEN; i++) {
         const struct entry *e = &table[i];
-        double a[2] = { e->sample, 2.0 * e->sample + 1.0 };
+        const double *a = e->sample;
         double out = 1.0;
         int32_t s = call_entry(e, u, a, &out);
         check(s == want_code && isnan(out), "relicore_%s on %s returned %d (want %d), output %g",
@@ -390,7 +376,7 @@ static void check_refused(const struct relicore_universe *u, int32_t want_code, 
         check(s == want_code, "relicore_%s(NaN) on %s returned %d (want %d)", e->name, what,
               (int)s, (int)want_code);
         if (e->array != NULL) {
-            double x[3] = { e->sample, NAN, -1.0 }, o[3] = { 1.0, 1.0, 1.0 };
+            double x[3] = { e->sample[0], NAN, -1.0 }, o[3] = { 1.0, 1.0, 1.0 };
             s = e->array(u, x, 3, o);
             check(s == want_code && isnan(o[0]) && isnan(o[1]) && isnan(o[2]),
                   "relicore_%s_array on %s returned %d (want %d) or left a non-NaN element",
@@ -437,12 +423,12 @@ static void check_structs(void)
     check(s == RELICORE_OK, "relicore_universe_init on the defaults returned %d", (int)s);
     for (size_t i = 0; i < TABLE_LEN; i++) {
         const struct entry *e = &table[i];
-        double a[2] = { e->sample, 2.0 * e->sample + 1.0 };
+        const double *a = e->sample;
         s = call_entry(e, &u, a, NULL);
         check(s == RELICORE_ERROR_NULL_POINTER, "relicore_%s(..., NULL) returned %d", e->name,
               (int)s);
         if (e->array != NULL) {
-            double x[2] = { e->sample, e->sample }, o[2] = { 1.0, 1.0 };
+            double x[2] = { e->sample[0], e->sample[0] }, o[2] = { 1.0, 1.0 };
             s = e->array(&u, NULL, 2, o);
             check(s == RELICORE_ERROR_NULL_POINTER && isnan(o[0]) && isnan(o[1]),
                   "relicore_%s_array(NULL input) returned %d", e->name, (int)s);
@@ -483,7 +469,7 @@ static void check_structs(void)
     *assigned = u;
     for (size_t i = 0; i < TABLE_LEN; i++) {
         const struct entry *e = &table[i];
-        double a[2] = { e->sample, 2.0 * e->sample + 1.0 };
+        const double *a = e->sample;
         double o1 = NAN, o2 = NAN, o3 = NAN;
         int32_t s1 = call_entry(e, &u, a, &o1);
         int32_t s2 = call_entry(e, &copy, a, &o2);

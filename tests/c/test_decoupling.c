@@ -26,9 +26,11 @@
  *       bits is the IEEE-754 pattern of the result in 16 hex digits (lower case), so another
  *       language can compare its results bit for bit.
  *
- * An unknown function, universe or history name in the data file is a failure, and so is an
- * exported decoupling function with no reference vector, so the data and this harness cannot
- * drift apart silently. A history takes 163848 bytes: they are allocated on the heap here.
+ * The decoupling functions are the lists of tests/c/gen_functions.h (generated from
+ * bindings/functions.toml); the interface checks call each on the arguments of its first value
+ * line in the data file. An unknown function, universe or history name in the data file is a
+ * failure, and so is an exported decoupling function with no reference vector, so the data and
+ * this harness cannot drift apart silently. A history takes 163848 bytes: they are allocated on the heap here.
  * The record reader, number parsing, tolerances, check counting and the reading of universe
  * and vector lines it shares with test_cosmology (and in part test_blackbody) are in
  * vector_files.c.
@@ -41,6 +43,7 @@
 #include <stdlib.h>
 #include <string.h>
 
+#include "gen_functions.h"
 #include "relicore.h"
 #include "vector_files.h"
 
@@ -83,8 +86,9 @@ struct entry {
     ha_fn ha;
     f2_fn f2;
     fa_fn fa;
-    double sample; /* a valid first argument for the interface checks */
     long vectors;  /* number of lines of the data file that used it */
+    int has_sample; /* valid arguments for the interface checks were kept: */
+    double sample[2]; /* the arguments of its first value line (not a status line) */
 };
 
 /* The largest deviation of a function's value lines of one source: |got - want|/|want| (or
@@ -116,33 +120,35 @@ static struct deviation *deviation_of(size_t entry, const char *source)
     return d;
 }
 
-#define U1(n, x) { #n, ON_UNIVERSE, 1, relicore_##n, relicore_##n##_array, NULL, NULL, NULL, NULL, NULL, x, 0 }
-#define H1(n, x) { #n, ON_HISTORY, 1, NULL, NULL, NULL, relicore_##n, relicore_##n##_array, NULL, NULL, x, 0 }
-#define H0(n) { #n, ON_HISTORY, 0, NULL, NULL, relicore_##n, NULL, NULL, NULL, NULL, 0.0, 0 }
-#define F2(n) { #n, ON_NOTHING, 2, NULL, NULL, NULL, NULL, NULL, relicore_##n, relicore_##n##_array, 0.0224, 0 }
+#define S0 0, 0, { 0.0, 0.0 } /* vectors, has_sample, sample */
+#define U1_0(n) { #n, ON_UNIVERSE, 1, relicore_##n, NULL, NULL, NULL, NULL, NULL, NULL, S0 }
+#define U1_1(n) \
+    { #n, ON_UNIVERSE, 1, relicore_##n, relicore_##n##_array, NULL, NULL, NULL, NULL, NULL, S0 }
+#define H0_0(n) { #n, ON_HISTORY, 0, NULL, NULL, relicore_##n, NULL, NULL, NULL, NULL, S0 }
+#define H1_0(n) { #n, ON_HISTORY, 1, NULL, NULL, NULL, relicore_##n, NULL, NULL, NULL, S0 }
+#define H1_1(n) \
+    { #n, ON_HISTORY, 1, NULL, NULL, NULL, relicore_##n, relicore_##n##_array, NULL, NULL, S0 }
+#define N2_0(n) { #n, ON_NOTHING, 2, NULL, NULL, NULL, NULL, NULL, relicore_##n, NULL, S0 }
+#define N2_1(n) \
+    { #n, ON_NOTHING, 2, NULL, NULL, NULL, NULL, NULL, relicore_##n, relicore_##n##_array, S0 }
+/* the entries of the generated lists (tests/c/gen_functions.h), by arity and array form */
+#define UNIVERSE_ENTRY(n, k, domain, upper, array) U##k##_##array(n),
+#define HISTORY_ENTRY(n, k, domain, upper, array) H##k##_##array(n),
+#define NOTHING_ENTRY(n, k, domain, upper, array) N##k##_##array(n),
 
+/* every decoupling function in the table (bindings/functions.toml) */
 static struct entry table[] = {
-    U1(saha_ionized_fraction, 1400.0),
-    F2(last_scattering_redshift_fit),
-    F2(drag_redshift_fit),
-    H1(ionized_fraction, 1100.0),
-    H1(matter_temperature_k, 1100.0),
-    H1(optical_depth, 1100.0),
-    H1(visibility, 1100.0),
-    H1(sound_horizon_mpc, 1100.0),
-    H0(last_scattering_redshift),
-    H0(drag_redshift),
-    H0(sound_horizon_last_scattering_mpc),
-    H0(sound_horizon_drag_mpc),
-    H0(angular_scale_last_scattering),
-    H0(age_at_last_scattering_yr),
-    H0(temperature_at_last_scattering_k),
-    H0(visibility_peak_redshift),
-    H0(thermal_decoupling_redshift),
-    H0(reionization_optical_depth),
+    RELICORE_DECOUPLING_UNIVERSE(UNIVERSE_ENTRY)
+    RELICORE_DECOUPLING_SCALARS(NOTHING_ENTRY)
+    RELICORE_DECOUPLING_HISTORY(HISTORY_ENTRY)
 };
 #define TABLE_LEN (sizeof table / sizeof table[0])
-#define FIT_OMEGA_MATTER_H2 0.143 /* second argument of the fits in the interface checks */
+
+/* 1 when the entry has an array form (over its first argument) */
+static int has_array(const struct entry *e)
+{
+    return e->ua != NULL || e->ha != NULL || e->fa != NULL;
+}
 
 static struct entry *find_entry(const char *name)
 {
@@ -400,9 +406,14 @@ static void run_file(const char *path, int dump)
         int is_status = strcmp(kind, "status") == 0;
         double got = NAN;
         int32_t s = call_entry(e, u, h, args, &got);
+        if (!is_status && !e->has_sample) {
+            e->sample[0] = args[0];
+            e->sample[1] = args[1];
+            e->has_sample = 1;
+        }
 
         /* the array form on the same single argument: same bits, same status */
-        if (nargs >= 1) {
+        if (nargs >= 1 && has_array(e)) {
             double in = args[0], out = 7.0;
             int32_t sa = call_array(e, u, h, &in, 1, args[1], &out);
             check(sa == s && same(out, got),
@@ -470,6 +481,9 @@ static void check_coverage(void)
 {
     for (size_t i = 0; i < TABLE_LEN; i++) {
         check(table[i].vectors > 0, "no reference vector for relicore_%s", table[i].name);
+        check(table[i].has_sample || table[i].nargs == 0,
+              "no value line of relicore_%s (its arguments serve the interface checks)",
+              table[i].name);
     }
 }
 
@@ -535,7 +549,7 @@ static void check_arrays_on_vectors(void)
     int32_t *st = grow(NULL, g_nvectors + 1, sizeof *st);
     for (size_t ei = 0; ei < TABLE_LEN; ei++) {
         const struct entry *e = &table[ei];
-        if (e->nargs != 1) {
+        if (e->nargs != 1 || !has_array(e)) {
             continue;
         }
         size_t ntargets = e->target == ON_UNIVERSE ? g_nuniverses : g_nhistories;
@@ -562,7 +576,7 @@ static void check_arrays_on_vectors(void)
     }
     for (size_t ei = 0; ei < TABLE_LEN; ei++) {
         const struct entry *e = &table[ei];
-        if (e->nargs != 2) {
+        if (e->nargs != 2 || !has_array(e)) {
             continue;
         }
         for (size_t m = 0; m < g_nvectors; m++) {
@@ -607,9 +621,8 @@ static void check_refused(const struct relicore_thermal_history *h, int32_t want
         if (e->target != ON_HISTORY) {
             continue;
         }
-        double a[2] = { e->sample, 0.0 };
         double out = 1.0;
-        int32_t s = call_entry(e, NULL, h, a, &out);
+        int32_t s = call_entry(e, NULL, h, e->sample, &out);
         check(s == want_code && isnan(out), "relicore_%s on %s returned %d (want %d), output %g",
               e->name, what, (int)s, (int)want_code, out);
         if (e->nargs == 1) {
@@ -617,7 +630,9 @@ static void check_refused(const struct relicore_thermal_history *h, int32_t want
             s = call_entry(e, NULL, h, bad, &out);
             check(s == want_code, "relicore_%s(NaN) on %s returned %d (want %d)", e->name, what,
                   (int)s, (int)want_code);
-            double x[3] = { e->sample, NAN, -1.0 }, o[3] = { 1.0, 1.0, 1.0 };
+        }
+        if (e->nargs == 1 && has_array(e)) {
+            double x[3] = { e->sample[0], NAN, -1.0 }, o[3] = { 1.0, 1.0, 1.0 };
             s = e->ha(h, x, 3, o);
             check(s == want_code && isnan(o[0]) && isnan(o[1]) && isnan(o[2]),
                   "relicore_%s_array on %s returned %d (want %d) or left a non-NaN element",
@@ -651,8 +666,7 @@ static void snapshot(const struct relicore_thermal_history *h, double *out, int3
         out[i] = NAN;
         st[i] = RELICORE_OK;
         if (e->target == ON_HISTORY) {
-            double a[2] = { e->sample, 0.0 };
-            st[i] = call_entry(e, NULL, h, a, &out[i]);
+            st[i] = call_entry(e, NULL, h, e->sample, &out[i]);
         }
     }
 }
@@ -714,13 +728,13 @@ static void check_histories(void)
     /* NULL outputs, NULL arrays, n = 0 */
     for (size_t i = 0; i < TABLE_LEN; i++) {
         const struct entry *e = &table[i];
-        double a[2] = { e->sample, FIT_OMEGA_MATTER_H2 };
+        const double *a = e->sample;
         struct relicore_universe *uu = e->target == ON_UNIVERSE ? u : NULL;
         s = call_entry(e, uu, h, a, NULL);
         check(s == RELICORE_ERROR_NULL_POINTER, "relicore_%s(..., NULL) returned %d", e->name,
               (int)s);
-        if (e->nargs >= 1) {
-            double x[2] = { e->sample, e->sample }, o2[2] = { 1.0, 1.0 };
+        if (e->nargs >= 1 && has_array(e)) {
+            double x[2] = { e->sample[0], e->sample[0] }, o2[2] = { 1.0, 1.0 };
             s = call_array(e, uu, h, NULL, 2, a[1], o2);
             check(s == RELICORE_ERROR_NULL_POINTER && isnan(o2[0]) && isnan(o2[1]),
                   "relicore_%s_array(NULL input) returned %d", e->name, (int)s);
@@ -877,10 +891,10 @@ static void check_histories(void)
     /* the fits with a NULL output and refused second arguments of the array forms */
     for (size_t i = 0; i < TABLE_LEN; i++) {
         const struct entry *e = &table[i];
-        if (e->target != ON_NOTHING) {
+        if (e->target != ON_NOTHING || !has_array(e)) {
             continue;
         }
-        double x[2] = { 0.0224, 0.03 }, o2[2] = { 1.0, 1.0 };
+        double x[2] = { e->sample[0], e->sample[0] }, o2[2] = { 1.0, 1.0 };
         s = e->fa(x, 2, NAN, o2);
         check(s == RELICORE_ERROR_NON_FINITE && isnan(o2[0]) && isnan(o2[1]),
               "relicore_%s_array(..., omega_matter_h2 = NaN) = %d", e->name, (int)s);
