@@ -232,5 +232,27 @@ fn frames(c: &mut Criterion) {
     g.finish();
 }
 
-criterion_group!(benches, scalar, frames);
+/// The pieces of one object temperature with uncertainty (f32), to see where its time goes.
+fn pieces(c: &mut Criterion) {
+    let mut g = c.benchmark_group("thermometry_pieces_f32");
+    g.bench_function("spectral_radiance_wavelength", |b| {
+        b.iter(|| bb::spectral_radiance_wavelength(black_box(10e-6f32), black_box(295.0f32)))
+    });
+    g.bench_function("radiance_temperature_derivative_wavelength", |b| {
+        b.iter(|| {
+            bb::radiance_temperature_derivative_wavelength(black_box(10e-6f32), black_box(295.0f32))
+        })
+    });
+    g.bench_function("brightness_temperature_wavelength", |b| {
+        b.iter(|| bb::brightness_temperature_wavelength(black_box(10e-6f32), black_box(9.3e6f32)))
+    });
+    g.bench_function("combined_standard_uncertainty_5", |b| {
+        let c5 = [1e-6f32, -20.0, 0.1, -30.0, 0.05];
+        let u5 = [1e4f32, 0.02, 2.0, 0.01, 2.0];
+        b.iter(|| bb::combined_standard_uncertainty(black_box(&c5), black_box(&u5)))
+    });
+    g.finish();
+}
+
+criterion_group!(benches, scalar, frames, pieces);
 criterion_main!(benches);
