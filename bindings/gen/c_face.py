@@ -17,12 +17,6 @@ from .table import ROOT, TOPICS, Function
 
 C_SRC = ROOT / "bindings" / "c" / "src"
 
-RECEIVER_TYPE = {"universe": "relicore_universe", "history": "relicore_thermal_history"}
-RECEIVER_FILLED_BY = {
-    "universe": "`relicore_universe_init`",
-    "history": "`relicore_thermal_history_compute`",
-}
-CORE_TYPE = {"universe": "Universe<f64>", "history": "ThermalHistory<f64>"}
 SHORT = {"blackbody": "bb", "cosmology": "cosmo", "decoupling": "dc"}
 
 
@@ -43,32 +37,32 @@ def _core_call(fn: Function, args: list[str], suffix: str = "") -> str:
     """The core call with the given argument expressions (receiver as `r`)."""
     a = ", ".join(args)
     if fn.receiver == "none":
-        return f"{SHORT[fn.topic]}::{fn.name}{suffix}({a})"
+        return f"relicore::{fn.topic}::{fn.name}{suffix}({a})"
     if fn.core:
         topic, _, name = fn.core.partition("::")
-        return f"{SHORT[topic]}::{name}{suffix}(r{', ' if a else ''}{a})"
+        return f"relicore::{topic}::{name}{suffix}(r{', ' if a else ''}{a})"
     return f"r.{fn.name}{suffix}({a})"
 
 
 def _receiver_lines(fn: Function) -> list[str]:
-    if fn.receiver == "none":
+    if not fn.recv:
         return []
-    return [f"* `{fn.receiver}`: a `struct {RECEIVER_TYPE[fn.receiver]}` filled by {RECEIVER_FILLED_BY[fn.receiver]}."]
+    return [f"* `{fn.receiver}`: a `struct {fn.recv.c_struct}` filled by `{fn.recv.filled_by}`."]
 
 
 def _invalid_struct(fn: Function) -> str:
-    if fn.receiver == "none":
+    if not fn.recv:
         return ""
     return (
         f" `RELICORE_ERROR_INVALID_STRUCT` when `*{fn.receiver}` was not filled by a successful "
-        f"{RECEIVER_FILLED_BY[fn.receiver]}."
+        f"`{fn.recv.filled_by}`."
     )
 
 
 def _safety_receiver(fn: Function) -> str:
-    if fn.receiver == "none":
+    if not fn.recv:
         return ""
-    return f" `{fn.receiver}` is NULL or points to a readable `struct {RECEIVER_TYPE[fn.receiver]}`."
+    return f" `{fn.receiver}` is NULL or points to a readable `struct {fn.recv.c_struct}`."
 
 
 def scalar_export(fn: Function, ty: str) -> str:
@@ -95,20 +89,20 @@ def scalar_export(fn: Function, ty: str) -> str:
         + _safety_receiver(fn),
     ]
     params = []
-    if fn.receiver != "none":
-        params.append(f"{fn.receiver}: *const {RECEIVER_TYPE[fn.receiver]}")
+    if fn.recv:
+        params.append(f"{fn.receiver}: *const {fn.recv.c_struct}")
     params += [f"{a.name}: {ty}" for a in fn.args]
     params.append(f"out: *mut {ty}")
     call = _core_call(fn, fn.arg_names)
-    if fn.receiver == "none":
+    r = fn.receiver
+    if not fn.recv:
         body = f"scalar(out, || {call})"
-    elif fn.receiver == "universe":
-        inner = f"Ok({call})" if fn.infallible else call
-        body = f"universe_scalar(universe, out, |r| {inner})"
+    elif fn.infallible and fn.recv.summary:
+        body = f"{r}_summary({r}, out, |r| {call})"
     elif fn.infallible:
-        body = f"history_summary(history, out, |r| {call})"
+        body = f"{r}_scalar({r}, out, |r| Ok({call}))"
     else:
-        body = f"history_scalar(history, out, |r| {call})"
+        body = f"{r}_scalar({r}, out, |r| {call})"
     return "\n".join(
         _doc(lines)
         + [
@@ -148,7 +142,7 @@ def array_export(fn: Function, ty: str) -> str:
         "the first failing element is returned (the element errors of the scalar function). "
         "`RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for n = 0)"
         + (f" and `RELICORE_ERROR_INVALID_STRUCT` when `*{fn.receiver}` was not filled by a successful "
-           f"{RECEIVER_FILLED_BY[fn.receiver]}" if fn.receiver != "none" else "")
+           f"`{fn.recv.filled_by}`" if fn.recv else "")
         + "; then every element of a non-NULL `out` is NaN.",
         "",
         (
@@ -166,8 +160,8 @@ def array_export(fn: Function, ty: str) -> str:
         "give unspecified values." + _safety_receiver(fn),
     ]
     params = []
-    if fn.receiver != "none":
-        params.append(f"{fn.receiver}: *const {RECEIVER_TYPE[fn.receiver]}")
+    if fn.recv:
+        params.append(f"{fn.receiver}: *const {fn.recv.c_struct}")
     for a in fn.args:
         if a.name == arr.arg:
             params += [f"{arr.name}: *const {ty}", "n: usize"]
@@ -184,7 +178,7 @@ def array_export(fn: Function, ty: str) -> str:
             )
         else:
             helper = f"{fn.receiver}_through_array"
-            core_ty = CORE_TYPE[fn.receiver]
+            core_ty = f"{fn.recv.core_type}<{ty}>"
             sig = ", ".join([f"r: &{core_ty}", f"x: &[{ty}]"] + [f"{s}: {ty}" for s in shared] + [f"out: &mut [{ty}]"])
             call = _core_call(fn, ["x"] + shared + ["out"], "_array")
             body = (
@@ -210,26 +204,19 @@ def array_export(fn: Function, ty: str) -> str:
     )
 
 
-USES = {
-    "blackbody": [
+def _uses(fns: list[Function]) -> list[str]:
+    """Every `use` a module of these functions may need (pruned to what the code uses)."""
+    out = [
         "use crate::boundary::{elementwise, scalar, through_array};",
         "use relicore::ArrayResult;",
-        "use relicore::blackbody as bb;",
         "use relicore_dispatch::widest;",
-    ],
-    "cosmology": [
-        "use crate::universe::{relicore_universe, universe_array, universe_scalar, universe_through_array};",
-        "use relicore::ArrayResult;",
-        "use relicore::cosmology::Universe;",
-        "use relicore_dispatch::widest;",
-    ],
-    "decoupling": [
-        "use crate::boundary::{elementwise, scalar};",
-        "use crate::decoupling::{relicore_thermal_history, history_array, history_scalar, history_summary};",
-        "use crate::universe::{relicore_universe, universe_array, universe_scalar};",
-        "use relicore::decoupling as dc;",
-    ],
-}
+    ]
+    for rname in dict.fromkeys(f.receiver for f in fns if f.recv):
+        r = next(f.recv for f in fns if f.receiver == rname)
+        helpers = ", ".join(f"{rname}_{h}" for h in ("scalar", "array", "through_array", "summary"))
+        out.append(f"use crate::{r.c_module}::{{{r.c_struct}, {helpers}}};")
+        out.append(f"use {r.core_path};")
+    return out
 
 
 def rustfmt(text: str) -> str:
@@ -263,7 +250,8 @@ def module(topic: str, fns: list[Function]) -> str:
         if fn.array_f32:
             body.append(array_export(fn, "f32"))
     text = "\n\n".join(body)
-    uses = [u for u in (_prune(u, text) for u in USES[topic]) if u]
+    code = "\n".join(line for line in text.splitlines() if not line.lstrip().startswith("//"))
+    uses = [u for u in (_prune(u, code) for u in _uses(mine)) if u]
     return rustfmt("\n".join(parts) + "\n" + "\n".join(uses) + "\n\n" + text + "\n")
 
 

@@ -10,10 +10,6 @@ from .table import ROOT, Function
 
 SRC = ROOT / "src"
 
-# the file(s) where a receiver's methods live
-_RECEIVER_DIRS = {"universe": "cosmology", "history": "decoupling"}
-
-
 class DocError(Exception):
     pass
 
@@ -46,26 +42,44 @@ def plain(text: str) -> str:
     return text
 
 
+_IMPL = re.compile(r"^impl(?:<[^>]*>)?\s+(?:\w+(?:<[^>]*>)?\s+for\s+)?(\w+)")
+
+
+def _methods(core_type: str, name: str) -> list[tuple[Path, list[str]]]:
+    """Doc blocks of `pub fn name(&self ...` inside the impl blocks of `core_type` anywhere in
+    src/ (a topic may add methods to another topic's type)."""
+    hits = []
+    for path in sorted(SRC.rglob("*.rs")):
+        lines = path.read_text().splitlines()
+        impl = None
+        for i, line in enumerate(lines):
+            m = _IMPL.match(line)
+            if m:
+                impl = m.group(1)
+            elif line.startswith("}"):
+                impl = None
+            if impl != core_type or not re.match(rf"^    pub fn {name}\(", line):
+                continue
+            if "&self" in line or (i + 1 < len(lines) and "&self" in lines[i + 1]):
+                hits.append((path, _doc_above(lines, i)))
+    return hits
+
+
 def find(fn: Function) -> tuple[Path, list[str]]:
     """(file, doc lines) of the core function behind `fn`."""
-    if fn.receiver != "none" and not fn.core:
-        topic = _RECEIVER_DIRS[fn.receiver]
-        pattern = re.compile(rf"^\s*pub fn {fn.name}\(\s*&self")
-        multiline = re.compile(rf"^\s*pub fn {fn.name}\($")
+    if fn.recv and not fn.core:
+        hits = _methods(fn.recv.core_type, fn.name)
+        where = f"the impl blocks of {fn.recv.core_type}"
     else:
         topic, _, name = (fn.core or f"{fn.topic}::{fn.name}").partition("::")
-        pattern = re.compile(rf"^\s*pub fn {name}\s*<")
-        multiline = pattern
-    hits = []
-    for path in _sources(topic):
-        lines = path.read_text().splitlines()
-        for i, line in enumerate(lines):
-            if pattern.match(line) or (
-                multiline.match(line) and i + 1 < len(lines) and "&self" in lines[i + 1]
-            ):
-                hits.append((path, _doc_above(lines, i)))
+        pattern = re.compile(rf"^pub fn {name}\s*<")
+        hits = []
+        for path in _sources(topic):
+            lines = path.read_text().splitlines()
+            hits += [(path, _doc_above(lines, i)) for i, line in enumerate(lines) if pattern.match(line)]
+        where = f"src/{topic}"
     if len(hits) != 1:
-        raise DocError(f"{fn.name}: found {len(hits)} core definitions in src/{topic}")
+        raise DocError(f"{fn.name}: found {len(hits)} core definitions in {where}")
     path, doc = hits[0]
     if not doc:
         raise DocError(f"{fn.name}: the core function in {path.relative_to(ROOT)} has no rustdoc")

@@ -10,12 +10,33 @@ ROOT = Path(__file__).resolve().parents[2]
 TABLE = ROOT / "bindings" / "functions.toml"
 
 TOPICS = ("blackbody", "cosmology", "decoupling")
-RECEIVERS = ("none", "universe", "history")
+RECEIVER_KEYS = {
+    "core_type", "core_path", "c_struct", "c_module", "filled_by", "summary", "fortran_type",
+    "python_class",
+}
 PYTHON = ("function", "method", "property")
 KEYS = {
     "name", "topic", "receiver", "core", "infallible", "args", "result", "f32", "array",
     "array_f32", "python",
 }
+
+
+@dataclass(frozen=True)
+class Receiver:
+    """A value passed first (a universe, a thermal history, ...): how each face names it."""
+
+    name: str
+    core_type: str
+    core_path: str
+    c_struct: str
+    c_module: str
+    filled_by: str
+    summary: bool
+    fortran_type: str
+    python_class: str
+
+
+RECEIVERS: dict[str, Receiver] = {}
 
 
 @dataclass(frozen=True)
@@ -50,6 +71,11 @@ class Function:
     order: int = field(compare=False)
 
     @property
+    def recv(self) -> Receiver | None:
+        """The receiver's description, None for a function without one."""
+        return RECEIVERS.get(self.receiver)
+
+    @property
     def c_name(self) -> str:
         return f"relicore_{self.name}"
 
@@ -76,6 +102,11 @@ class TableError(Exception):
 def load(path: Path = TABLE) -> list[Function]:
     with open(path, "rb") as f:
         raw = tomllib.load(f)
+    RECEIVERS.clear()
+    for rname, r in raw.get("receiver", {}).items():
+        if set(r) != RECEIVER_KEYS:
+            raise TableError(f"{path.name}: receiver {rname!r} needs exactly the keys {sorted(RECEIVER_KEYS)}")
+        RECEIVERS[rname] = Receiver(name=rname, **r)
     fns: list[Function] = []
     seen: set[str] = set()
     for i, e in enumerate(raw.get("function", [])):
@@ -114,8 +145,8 @@ def load(path: Path = TABLE) -> list[Function]:
         )
         if fn.topic not in TOPICS:
             raise TableError(f"{where}: topic must be one of {TOPICS}")
-        if fn.receiver not in RECEIVERS:
-            raise TableError(f"{where}: receiver must be one of {RECEIVERS}")
+        if fn.receiver != "none" and fn.receiver not in RECEIVERS:
+            raise TableError(f"{where}: receiver must be none or one of {sorted(RECEIVERS)}")
         if fn.python not in PYTHON:
             raise TableError(f"{where}: python must be one of {PYTHON}")
         if fn.python != "function" and fn.receiver == "none":

@@ -24,6 +24,7 @@ import os
 from dataclasses import dataclass
 from typing import Any
 
+from faces_table import UNIVERSE_PROPERTIES
 from refdata import DATA, ROOT, allowed_error, bits
 
 import relicore
@@ -46,13 +47,7 @@ PARAMETER_FIELDS = (
 )
 
 #: the constants of a universe: read-only properties in Python, nargs 0 in the file
-PROPERTIES = (
-    "hubble_distance_mpc",
-    "hubble_time_gyr",
-    "omega_radiation",
-    "omega_dark_energy",
-    "matter_radiation_equality_redshift",
-)
+PROPERTIES = UNIVERSE_PROPERTIES
 
 
 @dataclass(frozen=True)

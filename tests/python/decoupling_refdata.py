@@ -30,6 +30,8 @@ from dataclasses import dataclass
 from typing import Any
 
 from cosmo_refdata import PARAMETER_FIELDS
+from faces_table import DECOUPLING, HISTORY_METHODS, HISTORY_PROPERTIES
+from faces_table import FITS as TABLE_FITS
 from refdata import DATA, ROOT, allowed_error, bits
 
 import relicore
@@ -38,24 +40,13 @@ from relicore import decoupling as dc
 DECOUPLING_FILE = DATA / "decoupling.txt"
 
 #: target "-": functions of their arguments only
-FITS = ("last_scattering_redshift_fit", "drag_redshift_fit")
+FITS = TABLE_FITS
 #: target a universe
-UNIVERSE_FUNCTIONS = ("saha_ionized_fraction",)
+UNIVERSE_FUNCTIONS = tuple(n for n in DECOUPLING if n not in FITS)
 #: target a history, one argument (z)
-QUERIES = ("ionized_fraction", "matter_temperature_k", "optical_depth", "visibility", "sound_horizon_mpc")
+QUERIES = tuple(HISTORY_METHODS)
 #: target a history, no argument: read-only properties in Python
-SUMMARY = (
-    "last_scattering_redshift",
-    "drag_redshift",
-    "sound_horizon_last_scattering_mpc",
-    "sound_horizon_drag_mpc",
-    "angular_scale_last_scattering",
-    "age_at_last_scattering_yr",
-    "temperature_at_last_scattering_k",
-    "visibility_peak_redshift",
-    "thermal_decoupling_redshift",
-    "reionization_optical_depth",
-)
+SUMMARY = HISTORY_PROPERTIES
 NARGS = {**{n: 2 for n in FITS}, **{n: 1 for n in UNIVERSE_FUNCTIONS + QUERIES}, **{n: 0 for n in SUMMARY}}
 
 

@@ -13,6 +13,7 @@ from typing import Any, Callable
 
 import numpy as np
 
+from faces_table import BLACKBODY
 from relicore import blackbody as bb
 
 ROOT = pathlib.Path(__file__).resolve().parents[2]
@@ -182,39 +183,8 @@ def _calibrated(name: str) -> Callable[..., Any]:
     return call
 
 
-PLAIN = [
-    "spectral_radiance_wavelength",
-    "spectral_radiance_frequency",
-    "spectral_radiance_wavenumber",
-    "photon_radiance_wavelength",
-    "photon_radiance_frequency",
-    "photon_radiance_wavenumber",
-    "radiance_temperature_derivative_wavelength",
-    "radiance_temperature_derivative_frequency",
-    "radiant_exitance",
-    "photon_exitance",
-    "peak_wavelength",
-    "peak_frequency",
-    "peak_wavenumber",
-    "photon_peak_wavelength",
-    "photon_peak_frequency",
-    "temperature_from_peak_wavelength",
-    "temperature_from_peak_frequency",
-    "band_fraction_wavelength",
-    "band_radiance_wavelength",
-    "band_photon_radiance_wavelength",
-    "band_radiance_frequency",
-    "temperature_from_band_radiance_wavelength",
-    "brightness_temperature_wavelength",
-    "brightness_temperature_frequency",
-    "rayleigh_jeans_temperature",
-    "ratio_temperature",
-    "thermodynamic_to_rayleigh_jeans_factor",
-    "kcmb_to_mjy_per_sr",
-    "thermal_sz_spectral_shape",
-    "thermal_sz_temperature_shape",
-    "thermal_sz_null_frequency",
-]
+#: the regular functions, from the table (bindings/functions.toml)
+PLAIN = list(BLACKBODY)
 CALIBRATED = ["calibrated_temperature", "calibrated_brightness_temperature"]
 
 #: scalar-file vector name -> call(args, nan_on_error) of the Python face

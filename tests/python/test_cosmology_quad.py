@@ -3,7 +3,7 @@ the test, from scipy.constants (CODATA 2022 and the exact SI values) and integra
 scipy.integrate.quad (adaptive Gauss-Kronrod in double precision; none of the core's
 substitution s = sqrt(a), table or quadrature).
 
-The model (DESIGN 4a, the Friedmann equation):
+The model (the Friedmann equation, as src/cosmology/ documents it):
     E^2(z) = Omega_cb (1+z)^3 + Omega_r (1+z)^4 + sum_i rho_nu,i(z)/rho_crit
              + Omega_k (1+z)^2 + Omega_de (1+z)^(3(1+w0+wa)) exp(-3 wa z/(1+z))
 with photons a_rad T0^4/c^2/rho_crit (a_rad = 4 sigma/c), N_eff neutrino species shared equally

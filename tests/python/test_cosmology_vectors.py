@@ -15,6 +15,7 @@ import numpy as np
 import pytest
 
 import relicore
+from faces_table import UNIVERSE_METHODS
 from cosmo_refdata import (
     COSMOLOGY_FILE,
     PROPERTIES,
@@ -27,7 +28,7 @@ from cosmo_refdata import (
 )
 
 UNIVERSES, VECTORS = read_cosmology_file() if COSMOLOGY_FILE.exists() else ({}, [])
-METHODS = {name for name, _ in relicore._native.universe_method_signatures()}
+METHODS = set(UNIVERSE_METHODS)
 
 
 def test_reference_file_exists_and_is_not_empty():

@@ -19,8 +19,9 @@ import re
 
 import pytest
 
-from relicore import ThermalHistory, _native
+from relicore import ThermalHistory
 from relicore import decoupling as dc
+from faces_table import native_signatures
 
 ROOT = pathlib.Path(__file__).resolve().parents[2]
 SRC = ROOT / "src" / "decoupling"
@@ -72,7 +73,7 @@ CONSTANTS = core_constants()
 
 
 def test_the_core_has_what_the_design_names():
-    # DESIGN 4a: Saha, two fits, five queries, ten summary values
+    # Saha, two fits, five queries, ten summary values
     assert set(FUNCTIONS) == {"saha_ionized_fraction", "last_scattering_redshift_fit", "drag_redshift_fit"}
     assert len(QUERIES) == 5 and len(SUMMARY) == 10, METHODS
 
@@ -88,12 +89,16 @@ def test_every_core_function_has_a_python_function(name):
 
 
 def test_native_argument_names_are_the_cores():
-    fits = dict(_native.fit_signatures())
+    fits = native_signatures("decoupling", "none")
     assert set(fits) == set(FUNCTIONS) - {"saha_ionized_fraction"}
     for name, args in fits.items():
         assert list(args) == FUNCTIONS[name], name
-    queries = dict(_native.history_method_signatures())
+    # the core's error positions of saha_ionized_fraction count the universe (argument 0)
+    assert native_signatures("decoupling", "universe") == {"saha_ionized_fraction": tuple(FUNCTIONS["saha_ionized_fraction"][1:])}
+    history = native_signatures("decoupling", "history")
+    queries = {n: a for n, a in history.items() if a}
     assert set(queries) == set(QUERIES)
+    assert set(history) - set(queries) == set(SUMMARY)
     for name, args in queries.items():
         assert list(args) == QUERIES[name], name
 

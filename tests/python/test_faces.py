@@ -20,9 +20,9 @@ import tomllib
 import pytest
 
 import relicore
-from relicore import _native
 from relicore import blackbody as bb
 from relicore import constants as rc
+from faces_table import native_blackbody
 
 ROOT = pathlib.Path(__file__).resolve().parents[2]
 PACKAGE = ROOT / "bindings" / "python" / "python" / "relicore"
@@ -71,7 +71,7 @@ def test_every_core_function_has_a_python_face(name):
 
 
 def test_native_argument_names_are_the_cores():
-    native = dict(_native.kernel_signatures())
+    native = native_blackbody()
     assert set(native) == set(CORE)
     for name, args in native.items():
         assert list(args) == CORE[name], f"{name}: native names {args}, core {CORE[name]}"

@@ -22,22 +22,19 @@ from test_hypothesis_blackbody import SETTINGS, VALUES, same_bits
 import relicore
 import relicore.blackbody as bb
 from relicore import _native
+from faces_table import BLACKBODY as BLACKBODY_ARGS
+from faces_table import SIMD
 
 CURRENT, DETECTED = _native.simd_level()
 LEVELS = list(range(DETECTED + 1))
 
+# a range of ordinary values (log10) of the array argument of each SIMD array form
+RANGES = {"wavelength_m": (-8.0, 0.0), "frequency_hz": (8.0, 16.0), "wavenumber_per_m": (0.0, 8.0)}
 # the Python function, its core array function, a range of ordinary values (log10)
 BLACKBODY = [
-    (bb.spectral_radiance_wavelength, "spectral_radiance_wavelength_array", (-8.0, 0.0)),
-    (bb.spectral_radiance_frequency, "spectral_radiance_frequency_array", (8.0, 16.0)),
-    (bb.spectral_radiance_wavenumber, "spectral_radiance_wavenumber_array", (0.0, 8.0)),
+    (getattr(bb, name), core, RANGES[BLACKBODY_ARGS[name][0]]) for name, core, receiver in SIMD if receiver == "none"
 ]
-DISTANCES = [
-    ("comoving_distance_mpc", "comoving_distance_mpc_array"),
-    ("transverse_comoving_distance_mpc", "transverse_comoving_distance_mpc_array"),
-    ("angular_diameter_distance_mpc", "angular_diameter_distance_mpc_array"),
-    ("luminosity_distance_mpc", "luminosity_distance_mpc_array"),
-]
+DISTANCES = [(name, core) for name, core, receiver in SIMD if receiver == "universe"]
 UNIVERSES = [
     relicore.Universe(70.0, 0.3, n_eff=3.044),
     relicore.Universe(67.0, 0.3, omega_curvature=0.1),

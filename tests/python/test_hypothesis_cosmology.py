@@ -1,4 +1,4 @@
-"""Hypothesis tests of relicore.Universe with hostile inputs (issue 5): construction from
+"""Hypothesis tests of relicore.Universe with hostile inputs: construction from
 parameter sets with NaN, +-inf, +-0, subnormal, huge and arbitrary values, and every method on
 hostile arrays of any broadcastable shapes and layouts (see test_hypothesis_blackbody.py for the
 contract every element-wise call keeps: the result equals the scalar calls bit for bit and is
@@ -37,39 +37,13 @@ from test_hypothesis_blackbody import (
 
 import relicore
 from relicore import _native
+from faces_table import UNIVERSE_METHODS, UNIVERSE_PROPERTIES, native_signatures
 
-# Every method of a universe and its arguments, written out (tests/coverage_guard.py looks for
-# every public function's name in these files; test_the_tables_cover_the_class checks this
-# table against the native module).
-METHODS = {
-    "dimensionless_hubble": ("z",),
-    "hubble_parameter_km_s_mpc": ("z",),
-    "omega_matter_at": ("z",),
-    "omega_radiation_at": ("z",),
-    "omega_dark_energy_at": ("z",),
-    "omega_curvature_at": ("z",),
-    "critical_density_kg_m3": ("z",),
-    "cmb_temperature_at_k": ("z",),
-    "comoving_distance_mpc": ("z",),
-    "transverse_comoving_distance_mpc": ("z",),
-    "angular_diameter_distance_mpc": ("z",),
-    "angular_diameter_distance_between_mpc": ("z1", "z2"),
-    "luminosity_distance_mpc": ("z",),
-    "distance_modulus": ("z",),
-    "comoving_volume_gpc3": ("z",),
-    "differential_comoving_volume_mpc3_sr": ("z",),
-    "transverse_scale_kpc_per_arcsec": ("z",),
-    "lookback_time_gyr": ("z",),
-    "age_gyr": ("z",),
-    "conformal_time_mpc": ("z",),
-    "redshift_at_age_gyr": ("age_gyr",),
-    "redshift_at_lookback_time_gyr": ("lookback_gyr",),
-    "redshift_at_comoving_distance_mpc": ("distance_mpc",),
-    "redshift_at_luminosity_distance_mpc": ("distance_mpc",),
-}
-# constants of a universe (read-only properties)
-CONSTANTS = ("hubble_distance_mpc", "hubble_time_gyr", "omega_radiation", "omega_dark_energy",
-             "matter_radiation_equality_redshift")
+# Every method of a universe and its arguments, and the constants of a universe (read-only
+# properties), from the table of regular functions (bindings/functions.toml);
+# test_the_tables_cover_the_class checks them against the native module and the class.
+METHODS = UNIVERSE_METHODS
+CONSTANTS = UNIVERSE_PROPERTIES
 
 PARAMETERS = ("h0_km_s_mpc", "omega_matter", "omega_baryon", "omega_curvature", "cmb_temperature_k",
               "n_eff", "neutrino_masses_ev", "w0", "wa", "helium_mass_fraction")
@@ -226,8 +200,9 @@ def test_construction_from_hostile_parameters(p):
 def test_the_tables_cover_the_class():
     """Every method of the native module is in METHODS with its arguments, and every parameter
     of the constructor in PARAMETERS (so a new method joins these tests or this test says so)."""
-    native = dict((name, tuple(args)) for name, args in _native.universe_method_signatures())
-    assert native == METHODS
+    native = native_signatures("cosmology", "universe")
+    assert {n: a for n, a in native.items() if a} == METHODS
+    assert {n for n, a in native.items() if not a} == set(CONSTANTS)
     assert set(dict(_native.universe_defaults())) | {"h0_km_s_mpc", "omega_matter"} == set(PARAMETERS)
     for name in CONSTANTS:
         assert inspect.isdatadescriptor(inspect.getattr_static(relicore.Universe, name)), name

@@ -43,37 +43,18 @@ from test_hypothesis_blackbody import (
 )
 
 import relicore
-from relicore import _native
+from faces_table import DECOUPLING, HISTORY_METHODS, HISTORY_PROPERTIES, native_signatures
 from relicore import constants as rc
 from relicore import decoupling as dc
 
-# Every function and method of relicore.decoupling, written out (tests/coverage_guard.py looks
-# for every public function's name in these files; test_the_tables_cover_the_module checks
-# them against the native module).
-FUNCTIONS = {
-    "saha_ionized_fraction": ("universe", "z"),
-    "last_scattering_redshift_fit": ("omega_baryon_h2", "omega_matter_h2"),
-    "drag_redshift_fit": ("omega_baryon_h2", "omega_matter_h2"),
-}
-QUERIES = {
-    "ionized_fraction": ("z",),
-    "matter_temperature_k": ("z",),
-    "optical_depth": ("z",),
-    "visibility": ("z",),
-    "sound_horizon_mpc": ("z",),
-}
-SUMMARY = (
-    "last_scattering_redshift",
-    "drag_redshift",
-    "sound_horizon_last_scattering_mpc",
-    "sound_horizon_drag_mpc",
-    "angular_scale_last_scattering",
-    "age_at_last_scattering_yr",
-    "temperature_at_last_scattering_k",
-    "visibility_peak_redshift",
-    "thermal_decoupling_redshift",
-    "reionization_optical_depth",
-)
+# Every function, method and summary property of relicore.decoupling, from the table of regular
+# functions (bindings/functions.toml); test_the_tables_cover_the_module checks them against the
+# native module and the class.
+FUNCTIONS = DECOUPLING
+QUERIES = HISTORY_METHODS
+SUMMARY = HISTORY_PROPERTIES
+# the summary values that reionisation leaves as they are
+RECOMBINATION_SUMMARY = [n for n in SUMMARY if n != "reionization_optical_depth"]
 
 # Universes of several kinds (flat, massive neutrinos, open, closed w0-wa, helium-free and
 # helium-rich) and their histories, with and without reionisation (each a few milliseconds to build).
@@ -340,7 +321,7 @@ def test_the_summary_follows_its_definitions(h):
     else:
         plain = dc.ThermalHistory(u, highest_redshift=h.highest_redshift)
         assert h.reionization_optical_depth > 0.0
-        for name in SUMMARY[:-1]:
+        for name in RECOMBINATION_SUMMARY:
             assert getattr(plain, name) == getattr(h, name), name
 
 
@@ -363,8 +344,10 @@ def test_saha_facts(data):
 def test_the_tables_cover_the_module():
     """Every function of the native decoupling part is in the tables above (so a new one joins
     these tests, or this test says it has not)."""
-    assert dict((n, tuple(a)) for n, a in _native.history_method_signatures()) == QUERIES
-    fits = {n: tuple(a) for n, a in _native.fit_signatures()}
+    history = native_signatures("decoupling", "history")
+    assert {n: a for n, a in history.items() if a} == QUERIES
+    assert {n for n, a in history.items() if not a} == set(SUMMARY)
+    fits = native_signatures("decoupling", "none")
     assert fits == {k: v for k, v in FUNCTIONS.items() if k != "saha_ionized_fraction"}
     public = {n for n in dir(dc.ThermalHistory) if not n.startswith("_")}
     assert public == set(QUERIES) | set(SUMMARY) | {"universe", "reionization_redshift", "highest_redshift"}

@@ -6,7 +6,6 @@
 
 use crate::boundary::{elementwise, scalar, through_array};
 use relicore::ArrayResult;
-use relicore::blackbody as bb;
 use relicore_dispatch::widest;
 
 /// Planck spectral radiance per unit wavelength, B_λ = 2hc²/λ⁵ / (e^(hc/λkT) − 1).
@@ -40,7 +39,7 @@ pub unsafe extern "C" fn relicore_spectral_radiance_wavelength(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::spectral_radiance_wavelength(wavelength_m, temperature_k)
+            relicore::blackbody::spectral_radiance_wavelength(wavelength_m, temperature_k)
         })
     }
 }
@@ -79,7 +78,7 @@ pub unsafe extern "C" fn relicore_spectral_radiance_wavelength_f32(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::spectral_radiance_wavelength(wavelength_m, temperature_k)
+            relicore::blackbody::spectral_radiance_wavelength(wavelength_m, temperature_k)
         })
     }
 }
@@ -117,7 +116,7 @@ pub unsafe extern "C" fn relicore_spectral_radiance_wavelength_array(
         through_array(wavelengths_m, n, out, |x, out| {
             widest!(
                 |x: &[f64], temperature_k: f64, out: &mut [f64]| -> ArrayResult {
-                    bb::spectral_radiance_wavelength_array(x, temperature_k, out)
+                    relicore::blackbody::spectral_radiance_wavelength_array(x, temperature_k, out)
                 }
             )
         })
@@ -157,7 +156,7 @@ pub unsafe extern "C" fn relicore_spectral_radiance_wavelength_array_f32(
         through_array(wavelengths_m, n, out, |x, out| {
             widest!(
                 |x: &[f32], temperature_k: f32, out: &mut [f32]| -> ArrayResult {
-                    bb::spectral_radiance_wavelength_array(x, temperature_k, out)
+                    relicore::blackbody::spectral_radiance_wavelength_array(x, temperature_k, out)
                 }
             )
         })
@@ -192,7 +191,7 @@ pub unsafe extern "C" fn relicore_spectral_radiance_frequency(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::spectral_radiance_frequency(frequency_hz, temperature_k)
+            relicore::blackbody::spectral_radiance_frequency(frequency_hz, temperature_k)
         })
     }
 }
@@ -228,7 +227,7 @@ pub unsafe extern "C" fn relicore_spectral_radiance_frequency_f32(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::spectral_radiance_frequency(frequency_hz, temperature_k)
+            relicore::blackbody::spectral_radiance_frequency(frequency_hz, temperature_k)
         })
     }
 }
@@ -266,7 +265,7 @@ pub unsafe extern "C" fn relicore_spectral_radiance_frequency_array(
         through_array(frequencies_hz, n, out, |x, out| {
             widest!(
                 |x: &[f64], temperature_k: f64, out: &mut [f64]| -> ArrayResult {
-                    bb::spectral_radiance_frequency_array(x, temperature_k, out)
+                    relicore::blackbody::spectral_radiance_frequency_array(x, temperature_k, out)
                 }
             )
         })
@@ -306,7 +305,7 @@ pub unsafe extern "C" fn relicore_spectral_radiance_frequency_array_f32(
         through_array(frequencies_hz, n, out, |x, out| {
             widest!(
                 |x: &[f32], temperature_k: f32, out: &mut [f32]| -> ArrayResult {
-                    bb::spectral_radiance_frequency_array(x, temperature_k, out)
+                    relicore::blackbody::spectral_radiance_frequency_array(x, temperature_k, out)
                 }
             )
         })
@@ -341,7 +340,7 @@ pub unsafe extern "C" fn relicore_spectral_radiance_wavenumber(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::spectral_radiance_wavenumber(wavenumber_per_m, temperature_k)
+            relicore::blackbody::spectral_radiance_wavenumber(wavenumber_per_m, temperature_k)
         })
     }
 }
@@ -377,7 +376,7 @@ pub unsafe extern "C" fn relicore_spectral_radiance_wavenumber_f32(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::spectral_radiance_wavenumber(wavenumber_per_m, temperature_k)
+            relicore::blackbody::spectral_radiance_wavenumber(wavenumber_per_m, temperature_k)
         })
     }
 }
@@ -415,7 +414,7 @@ pub unsafe extern "C" fn relicore_spectral_radiance_wavenumber_array(
         through_array(wavenumbers_per_m, n, out, |x, out| {
             widest!(
                 |x: &[f64], temperature_k: f64, out: &mut [f64]| -> ArrayResult {
-                    bb::spectral_radiance_wavenumber_array(x, temperature_k, out)
+                    relicore::blackbody::spectral_radiance_wavenumber_array(x, temperature_k, out)
                 }
             )
         })
@@ -455,7 +454,7 @@ pub unsafe extern "C" fn relicore_spectral_radiance_wavenumber_array_f32(
         through_array(wavenumbers_per_m, n, out, |x, out| {
             widest!(
                 |x: &[f32], temperature_k: f32, out: &mut [f32]| -> ArrayResult {
-                    bb::spectral_radiance_wavenumber_array(x, temperature_k, out)
+                    relicore::blackbody::spectral_radiance_wavenumber_array(x, temperature_k, out)
                 }
             )
         })
@@ -489,7 +488,7 @@ pub unsafe extern "C" fn relicore_photon_radiance_wavelength(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::photon_radiance_wavelength(wavelength_m, temperature_k)
+            relicore::blackbody::photon_radiance_wavelength(wavelength_m, temperature_k)
         })
     }
 }
@@ -525,7 +524,7 @@ pub unsafe extern "C" fn relicore_photon_radiance_wavelength_array(
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
         elementwise(wavelengths_m, n, out, |x| {
-            bb::photon_radiance_wavelength(x, temperature_k)
+            relicore::blackbody::photon_radiance_wavelength(x, temperature_k)
         })
     }
 }
@@ -557,7 +556,7 @@ pub unsafe extern "C" fn relicore_photon_radiance_frequency(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::photon_radiance_frequency(frequency_hz, temperature_k)
+            relicore::blackbody::photon_radiance_frequency(frequency_hz, temperature_k)
         })
     }
 }
@@ -593,7 +592,7 @@ pub unsafe extern "C" fn relicore_photon_radiance_frequency_array(
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
         elementwise(frequencies_hz, n, out, |x| {
-            bb::photon_radiance_frequency(x, temperature_k)
+            relicore::blackbody::photon_radiance_frequency(x, temperature_k)
         })
     }
 }
@@ -625,7 +624,7 @@ pub unsafe extern "C" fn relicore_photon_radiance_wavenumber(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::photon_radiance_wavenumber(wavenumber_per_m, temperature_k)
+            relicore::blackbody::photon_radiance_wavenumber(wavenumber_per_m, temperature_k)
         })
     }
 }
@@ -661,7 +660,7 @@ pub unsafe extern "C" fn relicore_photon_radiance_wavenumber_array(
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
         elementwise(wavenumbers_per_m, n, out, |x| {
-            bb::photon_radiance_wavenumber(x, temperature_k)
+            relicore::blackbody::photon_radiance_wavenumber(x, temperature_k)
         })
     }
 }
@@ -693,7 +692,10 @@ pub unsafe extern "C" fn relicore_radiance_temperature_derivative_wavelength(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::radiance_temperature_derivative_wavelength(wavelength_m, temperature_k)
+            relicore::blackbody::radiance_temperature_derivative_wavelength(
+                wavelength_m,
+                temperature_k,
+            )
         })
     }
 }
@@ -729,7 +731,7 @@ pub unsafe extern "C" fn relicore_radiance_temperature_derivative_wavelength_arr
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
         elementwise(wavelengths_m, n, out, |x| {
-            bb::radiance_temperature_derivative_wavelength(x, temperature_k)
+            relicore::blackbody::radiance_temperature_derivative_wavelength(x, temperature_k)
         })
     }
 }
@@ -761,7 +763,10 @@ pub unsafe extern "C" fn relicore_radiance_temperature_derivative_frequency(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::radiance_temperature_derivative_frequency(frequency_hz, temperature_k)
+            relicore::blackbody::radiance_temperature_derivative_frequency(
+                frequency_hz,
+                temperature_k,
+            )
         })
     }
 }
@@ -797,7 +802,7 @@ pub unsafe extern "C" fn relicore_radiance_temperature_derivative_frequency_arra
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
         elementwise(frequencies_hz, n, out, |x| {
-            bb::radiance_temperature_derivative_frequency(x, temperature_k)
+            relicore::blackbody::radiance_temperature_derivative_frequency(x, temperature_k)
         })
     }
 }
@@ -822,7 +827,7 @@ pub unsafe extern "C" fn relicore_radiance_temperature_derivative_frequency_arra
 #[unsafe(no_mangle)]
 pub unsafe extern "C" fn relicore_radiant_exitance(temperature_k: f64, out: *mut f64) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { scalar(out, || bb::radiant_exitance(temperature_k)) }
+    unsafe { scalar(out, || relicore::blackbody::radiant_exitance(temperature_k)) }
 }
 
 /// Photon exitance of a blackbody, M_p = 4πζ(3)k³T³/(h³c²).
@@ -845,7 +850,7 @@ pub unsafe extern "C" fn relicore_radiant_exitance(temperature_k: f64, out: *mut
 #[unsafe(no_mangle)]
 pub unsafe extern "C" fn relicore_photon_exitance(temperature_k: f64, out: *mut f64) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { scalar(out, || bb::photon_exitance(temperature_k)) }
+    unsafe { scalar(out, || relicore::blackbody::photon_exitance(temperature_k)) }
 }
 
 /// Photon number density of blackbody radiation at temperature T (isotropic, in equilibrium),
@@ -874,7 +879,11 @@ pub unsafe extern "C" fn relicore_photon_exitance(temperature_k: f64, out: *mut 
 #[unsafe(no_mangle)]
 pub unsafe extern "C" fn relicore_photon_number_density(temperature_k: f64, out: *mut f64) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { scalar(out, || bb::photon_number_density(temperature_k)) }
+    unsafe {
+        scalar(out, || {
+            relicore::blackbody::photon_number_density(temperature_k)
+        })
+    }
 }
 
 /// Single-precision twin of `relicore_photon_number_density`: the same core function computed in
@@ -909,7 +918,11 @@ pub unsafe extern "C" fn relicore_photon_number_density_f32(
     out: *mut f32,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { scalar(out, || bb::photon_number_density(temperature_k)) }
+    unsafe {
+        scalar(out, || {
+            relicore::blackbody::photon_number_density(temperature_k)
+        })
+    }
 }
 
 /// Energy density of blackbody radiation at temperature T, u = aT⁴ = 4σT⁴/c, with the radiation
@@ -941,7 +954,11 @@ pub unsafe extern "C" fn relicore_radiation_energy_density(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { scalar(out, || bb::radiation_energy_density(temperature_k)) }
+    unsafe {
+        scalar(out, || {
+            relicore::blackbody::radiation_energy_density(temperature_k)
+        })
+    }
 }
 
 /// Single-precision twin of `relicore_radiation_energy_density`: the same core function computed in
@@ -976,7 +993,11 @@ pub unsafe extern "C" fn relicore_radiation_energy_density_f32(
     out: *mut f32,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { scalar(out, || bb::radiation_energy_density(temperature_k)) }
+    unsafe {
+        scalar(out, || {
+            relicore::blackbody::radiation_energy_density(temperature_k)
+        })
+    }
 }
 
 /// Wavelength of the maximum of B_λ, λ_max = b/T with b = c₂/x₅ (Wien's displacement law).
@@ -998,7 +1019,7 @@ pub unsafe extern "C" fn relicore_radiation_energy_density_f32(
 #[unsafe(no_mangle)]
 pub unsafe extern "C" fn relicore_peak_wavelength(temperature_k: f64, out: *mut f64) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { scalar(out, || bb::peak_wavelength(temperature_k)) }
+    unsafe { scalar(out, || relicore::blackbody::peak_wavelength(temperature_k)) }
 }
 
 /// Frequency of the maximum of B_ν, ν_max = x₃kT/h.
@@ -1020,7 +1041,7 @@ pub unsafe extern "C" fn relicore_peak_wavelength(temperature_k: f64, out: *mut 
 #[unsafe(no_mangle)]
 pub unsafe extern "C" fn relicore_peak_frequency(temperature_k: f64, out: *mut f64) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { scalar(out, || bb::peak_frequency(temperature_k)) }
+    unsafe { scalar(out, || relicore::blackbody::peak_frequency(temperature_k)) }
 }
 
 /// Wavenumber of the maximum of B_ṽ, ṽ_max = x₃T/c₂ (same x as the frequency form).
@@ -1042,7 +1063,7 @@ pub unsafe extern "C" fn relicore_peak_frequency(temperature_k: f64, out: *mut f
 #[unsafe(no_mangle)]
 pub unsafe extern "C" fn relicore_peak_wavenumber(temperature_k: f64, out: *mut f64) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { scalar(out, || bb::peak_wavenumber(temperature_k)) }
+    unsafe { scalar(out, || relicore::blackbody::peak_wavenumber(temperature_k)) }
 }
 
 /// Wavelength of the maximum of the photon radiance N_λ (and of λB_λ), c₂/(x₄T).
@@ -1064,7 +1085,11 @@ pub unsafe extern "C" fn relicore_peak_wavenumber(temperature_k: f64, out: *mut 
 #[unsafe(no_mangle)]
 pub unsafe extern "C" fn relicore_photon_peak_wavelength(temperature_k: f64, out: *mut f64) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { scalar(out, || bb::photon_peak_wavelength(temperature_k)) }
+    unsafe {
+        scalar(out, || {
+            relicore::blackbody::photon_peak_wavelength(temperature_k)
+        })
+    }
 }
 
 /// Frequency of the maximum of the photon radiance N_ν, x₂kT/h.
@@ -1086,7 +1111,11 @@ pub unsafe extern "C" fn relicore_photon_peak_wavelength(temperature_k: f64, out
 #[unsafe(no_mangle)]
 pub unsafe extern "C" fn relicore_photon_peak_frequency(temperature_k: f64, out: *mut f64) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { scalar(out, || bb::photon_peak_frequency(temperature_k)) }
+    unsafe {
+        scalar(out, || {
+            relicore::blackbody::photon_peak_frequency(temperature_k)
+        })
+    }
 }
 
 /// Temperature whose B_λ peaks at the given wavelength, T = b/λ_max.
@@ -1111,7 +1140,11 @@ pub unsafe extern "C" fn relicore_temperature_from_peak_wavelength(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { scalar(out, || bb::temperature_from_peak_wavelength(wavelength_m)) }
+    unsafe {
+        scalar(out, || {
+            relicore::blackbody::temperature_from_peak_wavelength(wavelength_m)
+        })
+    }
 }
 
 /// Temperature whose B_ν peaks at the given frequency, T = hν_max/(x₃k).
@@ -1136,7 +1169,11 @@ pub unsafe extern "C" fn relicore_temperature_from_peak_frequency(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { scalar(out, || bb::temperature_from_peak_frequency(frequency_hz)) }
+    unsafe {
+        scalar(out, || {
+            relicore::blackbody::temperature_from_peak_frequency(frequency_hz)
+        })
+    }
 }
 
 /// Fraction of the total blackbody radiance emitted between two wavelengths,
@@ -1173,7 +1210,7 @@ pub unsafe extern "C" fn relicore_band_fraction_wavelength(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::band_fraction_wavelength(lower_m, upper_m, temperature_k)
+            relicore::blackbody::band_fraction_wavelength(lower_m, upper_m, temperature_k)
         })
     }
 }
@@ -1208,7 +1245,7 @@ pub unsafe extern "C" fn relicore_band_radiance_wavelength(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::band_radiance_wavelength(lower_m, upper_m, temperature_k)
+            relicore::blackbody::band_radiance_wavelength(lower_m, upper_m, temperature_k)
         })
     }
 }
@@ -1246,7 +1283,7 @@ pub unsafe extern "C" fn relicore_band_radiance_wavelength_f32(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::band_radiance_wavelength(lower_m, upper_m, temperature_k)
+            relicore::blackbody::band_radiance_wavelength(lower_m, upper_m, temperature_k)
         })
     }
 }
@@ -1281,7 +1318,7 @@ pub unsafe extern "C" fn relicore_band_photon_radiance_wavelength(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::band_photon_radiance_wavelength(lower_m, upper_m, temperature_k)
+            relicore::blackbody::band_photon_radiance_wavelength(lower_m, upper_m, temperature_k)
         })
     }
 }
@@ -1316,7 +1353,7 @@ pub unsafe extern "C" fn relicore_band_radiance_frequency(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::band_radiance_frequency(lower_hz, upper_hz, temperature_k)
+            relicore::blackbody::band_radiance_frequency(lower_hz, upper_hz, temperature_k)
         })
     }
 }
@@ -1358,7 +1395,9 @@ pub unsafe extern "C" fn relicore_temperature_from_band_radiance_wavelength(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::temperature_from_band_radiance_wavelength(lower_m, upper_m, radiance)
+            relicore::blackbody::temperature_from_band_radiance_wavelength(
+                lower_m, upper_m, radiance,
+            )
         })
     }
 }
@@ -1394,7 +1433,7 @@ pub unsafe extern "C" fn relicore_brightness_temperature_wavelength(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::brightness_temperature_wavelength(wavelength_m, spectral_radiance)
+            relicore::blackbody::brightness_temperature_wavelength(wavelength_m, spectral_radiance)
         })
     }
 }
@@ -1433,7 +1472,7 @@ pub unsafe extern "C" fn relicore_brightness_temperature_wavelength_f32(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::brightness_temperature_wavelength(wavelength_m, spectral_radiance)
+            relicore::blackbody::brightness_temperature_wavelength(wavelength_m, spectral_radiance)
         })
     }
 }
@@ -1469,7 +1508,7 @@ pub unsafe extern "C" fn relicore_brightness_temperature_wavelength_array(
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
         elementwise(spectral_radiance, n, out, |x| {
-            bb::brightness_temperature_wavelength(wavelength_m, x)
+            relicore::blackbody::brightness_temperature_wavelength(wavelength_m, x)
         })
     }
 }
@@ -1502,7 +1541,7 @@ pub unsafe extern "C" fn relicore_brightness_temperature_frequency(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::brightness_temperature_frequency(frequency_hz, spectral_radiance)
+            relicore::blackbody::brightness_temperature_frequency(frequency_hz, spectral_radiance)
         })
     }
 }
@@ -1538,7 +1577,7 @@ pub unsafe extern "C" fn relicore_brightness_temperature_frequency_f32(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::brightness_temperature_frequency(frequency_hz, spectral_radiance)
+            relicore::blackbody::brightness_temperature_frequency(frequency_hz, spectral_radiance)
         })
     }
 }
@@ -1574,7 +1613,7 @@ pub unsafe extern "C" fn relicore_brightness_temperature_frequency_array(
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
         elementwise(spectral_radiance, n, out, |x| {
-            bb::brightness_temperature_frequency(frequency_hz, x)
+            relicore::blackbody::brightness_temperature_frequency(frequency_hz, x)
         })
     }
 }
@@ -1610,7 +1649,7 @@ pub unsafe extern "C" fn relicore_rayleigh_jeans_temperature(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::rayleigh_jeans_temperature(frequency_hz, spectral_radiance)
+            relicore::blackbody::rayleigh_jeans_temperature(frequency_hz, spectral_radiance)
         })
     }
 }
@@ -1657,7 +1696,7 @@ pub unsafe extern "C" fn relicore_ratio_temperature(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::ratio_temperature(
+            relicore::blackbody::ratio_temperature(
                 wavelength_1_m,
                 wavelength_2_m,
                 radiance_ratio,
@@ -1695,7 +1734,10 @@ pub unsafe extern "C" fn relicore_thermodynamic_to_rayleigh_jeans_factor(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::thermodynamic_to_rayleigh_jeans_factor(frequency_hz, cmb_temperature_k)
+            relicore::blackbody::thermodynamic_to_rayleigh_jeans_factor(
+                frequency_hz,
+                cmb_temperature_k,
+            )
         })
     }
 }
@@ -1729,7 +1771,7 @@ pub unsafe extern "C" fn relicore_kcmb_to_mjy_per_sr(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::kcmb_to_mjy_per_sr(frequency_hz, cmb_temperature_k)
+            relicore::blackbody::kcmb_to_mjy_per_sr(frequency_hz, cmb_temperature_k)
         })
     }
 }
@@ -1761,7 +1803,7 @@ pub unsafe extern "C" fn relicore_thermal_sz_spectral_shape(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::thermal_sz_spectral_shape(frequency_hz, cmb_temperature_k)
+            relicore::blackbody::thermal_sz_spectral_shape(frequency_hz, cmb_temperature_k)
         })
     }
 }
@@ -1794,7 +1836,7 @@ pub unsafe extern "C" fn relicore_thermal_sz_temperature_shape(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            bb::thermal_sz_temperature_shape(frequency_hz, cmb_temperature_k)
+            relicore::blackbody::thermal_sz_temperature_shape(frequency_hz, cmb_temperature_k)
         })
     }
 }
@@ -1823,5 +1865,9 @@ pub unsafe extern "C" fn relicore_thermal_sz_null_frequency(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { scalar(out, || bb::thermal_sz_null_frequency(cmb_temperature_k)) }
+    unsafe {
+        scalar(out, || {
+            relicore::blackbody::thermal_sz_null_frequency(cmb_temperature_k)
+        })
+    }
 }

@@ -7,7 +7,6 @@
 use crate::boundary::{elementwise, scalar};
 use crate::decoupling::{history_array, history_scalar, history_summary, relicore_thermal_history};
 use crate::universe::{relicore_universe, universe_array, universe_scalar};
-use relicore::decoupling as dc;
 
 /// Ionised fraction x_e = n_e/n_H in Saha equilibrium at redshift z: hydrogen and both helium
 /// stages (He I → He II → He III) in equilibrium with the radiation at T_r = T0 (1+z), coupled
@@ -48,7 +47,11 @@ pub unsafe extern "C" fn relicore_saha_ionized_fraction(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| dc::saha_ionized_fraction(r, z)) }
+    unsafe {
+        universe_scalar(universe, out, |r| {
+            relicore::decoupling::saha_ionized_fraction(r, z)
+        })
+    }
 }
 
 /// Array form of `relicore_saha_ionized_fraction`: out[i] = saha_ionized_fraction(universe,
@@ -84,7 +87,7 @@ pub unsafe extern "C" fn relicore_saha_ionized_fraction_array(
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
         universe_array(universe, redshifts, n, out, |r, x| {
-            dc::saha_ionized_fraction(r, x)
+            relicore::decoupling::saha_ionized_fraction(r, x)
         })
     }
 }
@@ -121,7 +124,7 @@ pub unsafe extern "C" fn relicore_last_scattering_redshift_fit(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            dc::last_scattering_redshift_fit(omega_baryon_h2, omega_matter_h2)
+            relicore::decoupling::last_scattering_redshift_fit(omega_baryon_h2, omega_matter_h2)
         })
     }
 }
@@ -157,7 +160,7 @@ pub unsafe extern "C" fn relicore_last_scattering_redshift_fit_array(
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
         elementwise(omega_baryon_h2, n, out, |x| {
-            dc::last_scattering_redshift_fit(x, omega_matter_h2)
+            relicore::decoupling::last_scattering_redshift_fit(x, omega_matter_h2)
         })
     }
 }
@@ -194,7 +197,7 @@ pub unsafe extern "C" fn relicore_drag_redshift_fit(
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
         scalar(out, || {
-            dc::drag_redshift_fit(omega_baryon_h2, omega_matter_h2)
+            relicore::decoupling::drag_redshift_fit(omega_baryon_h2, omega_matter_h2)
         })
     }
 }
@@ -230,7 +233,7 @@ pub unsafe extern "C" fn relicore_drag_redshift_fit_array(
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
         elementwise(omega_baryon_h2, n, out, |x| {
-            dc::drag_redshift_fit(x, omega_matter_h2)
+            relicore::decoupling::drag_redshift_fit(x, omega_matter_h2)
         })
     }
 }

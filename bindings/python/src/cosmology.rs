@@ -1,26 +1,21 @@
-//! `relicore.Universe`: the native base class wrapping the core's `Universe<f64>`, the table
-//! of its methods and their element loop.
+//! `relicore.Universe`: the native base class wrapping the core's `Universe<f64>`, and what
+//! the regular functions of a universe add to their error messages.
 //!
-//! The Python class `relicore.cosmology.Universe` derives from [`PyUniverse`] only to give the
-//! constructor its keyword defaults (read from the core by [`universe_defaults`]) and one
-//! broadcasting wrapper per method; every number comes from here, and every array loop runs
-//! in [`crate::kernels::run`] with the GIL released.
+//! The Python class `relicore.cosmology.Universe` derives from [`PyUniverse`] to give the
+//! constructor its keyword defaults (read from the core by [`universe_defaults`]) and from the
+//! generated mixin of its methods and properties, which call [`crate::functions`].
 
 use std::collections::hash_map::DefaultHasher;
 use std::hash::{Hash, Hasher};
 
-use numpy::{PyArray1, PyArrayMethods, PyReadonlyArray1};
-use pyo3::exceptions::{PyTypeError, PyValueError};
 use pyo3::prelude::*;
 use pyo3::types::{PyDict, PyTuple};
+use relicore::Error;
 use relicore::cosmology::{Universe, UniverseParameters};
-use relicore::{ArrayResult, Error, Result};
-use relicore_dispatch::widest;
 
-use crate::errors::{Arg, Site, build, core_error_because, py_repr, shape_error};
-use crate::kernels::{check_shape, elements, run, run_array};
-
-type U = Universe<f64>;
+use crate::decoupling::universe_refused;
+use crate::errors::{build, py_repr, shape_error};
+use crate::functions::{Receiver, U};
 
 /// Names of the parameters in the order of the core's `Error::InvalidParameter(i)`.
 pub(crate) const PARAMETER_NAMES: [&str; 10] = [
@@ -297,53 +292,6 @@ impl PyUniverse {
         self.params().helium_mass_fraction
     }
 
-    /// Hubble distance c/H0, Mpc.
-    #[getter]
-    fn hubble_distance_mpc(&self) -> f64 {
-        self.inner.hubble_distance_mpc()
-    }
-
-    /// Hubble time 1/H0, Gyr (Julian years).
-    #[getter]
-    fn hubble_time_gyr(&self) -> f64 {
-        self.inner.hubble_time_gyr()
-    }
-
-    /// Radiation density parameter today (photons and massless neutrino species).
-    #[getter]
-    fn omega_radiation(&self) -> f64 {
-        self.inner.omega_radiation()
-    }
-
-    /// Dark-energy density parameter today, 1 - omega_matter - omega_radiation - omega_curvature.
-    #[getter]
-    fn omega_dark_energy(&self) -> f64 {
-        self.inner.omega_dark_energy()
-    }
-
-    /// Redshift of matter-radiation equality (cold dark matter + baryons over photons + all
-    /// n_eff species counted as massless, minus 1). Raises RelicoreError without radiation.
-    #[getter]
-    fn matter_radiation_equality_redshift(&self, py: Python<'_>) -> PyResult<f64> {
-        self.inner
-            .matter_radiation_equality_redshift()
-            .map_err(|e| {
-                let because = format!(
-                    "undefined for a universe without radiation (cmb_temperature_k = {})",
-                    py_repr(self.params().cmb_temperature_k)
-                );
-                core_error_because(
-                    py,
-                    "Universe.matter_radiation_equality_redshift",
-                    &[],
-                    &[],
-                    None,
-                    e,
-                    Some(&because),
-                )
-            })
-    }
-
     /// The ten parameters as a dict of keyword arguments: `Universe(**u.parameters) == u`.
     #[getter]
     fn parameters<'py>(&self, py: Python<'py>) -> PyResult<Bound<'py, PyDict>> {
@@ -422,96 +370,34 @@ pub(crate) fn universe_defaults(py: Python<'_>) -> PyResult<Bound<'_, PyDict>> {
     Ok(d)
 }
 
-// ------------------------------------------------------------------------------ methods
+// ------------------------------------------------------------- receiver of regular functions
 
-/// How a universe method is called.
-#[derive(Clone, Copy)]
-pub(crate) enum Body {
-    /// One element-wise argument (a redshift or an inversion target).
-    One(fn(&U, f64) -> Result<f64>),
-    /// Two element-wise arguments (z1, z2).
-    Two(fn(&U, f64, f64) -> Result<f64>),
-}
+impl Receiver for PyUniverse {
+    type Core = U;
+    const ARGUMENT: &'static str = "universe";
 
-/// A method of the core's `Universe`: its name, parameter names (after `self`) and body.
-pub(crate) struct Spec {
-    pub(crate) name: &'static str,
-    pub(crate) args: &'static [&'static str],
-    pub(crate) body: Body,
-    /// The core's array form, where the method has one (the distances).
-    pub(crate) array: Option<DistanceArray>,
-}
+    fn core(&self) -> &U {
+        &self.inner
+    }
 
-/// A core distance array method, dispatched to the widest SIMD compilation of the CPU.
-pub(crate) type DistanceArray = fn(&U, &[f64], &mut [f64]) -> ArrayResult;
+    fn refused(&self, py: Python<'_>, label: &str, err: Error) -> Option<PyErr> {
+        Some(universe_refused(py, label, self.params(), err))
+    }
 
-macro_rules! method {
-    ($kind:ident, $name:ident, [$($arg:ident),+]) => {
-        Spec { name: stringify!($name), args: &[$(stringify!($arg)),+], body: Body::$kind(U::$name), array: None }
-    };
-    ($kind:ident, $name:ident, [$($arg:ident),+], $array:ident) => {
-        Spec { name: stringify!($name), args: &[$(stringify!($arg)),+], body: Body::$kind(U::$name), array: Some($array) }
-    };
-}
-
-/// A core distance array method, compiled for each SIMD level and chosen at run time.
-macro_rules! distance_array {
-    ($($name:ident),+) => {$(
-        fn $name(u: &U, z: &[f64], out: &mut [f64]) -> ArrayResult {
-            widest!(|u: &U, z: &[f64], out: &mut [f64]| -> ArrayResult { u.$name(z, out) })
+    fn because(&self, name: &str, err: Error) -> Option<String> {
+        match (name, err) {
+            ("matter_radiation_equality_redshift", _) => Some(format!(
+                "undefined for a universe without radiation (cmb_temperature_k = {})",
+                py_repr(self.params().cmb_temperature_k)
+            )),
+            ("saha_ionized_fraction", Error::OutOfDomain(1)) => Some(format!(
+                "must not exceed {} (the highest redshift of the function)",
+                py_repr(relicore::decoupling::SAHA_HIGHEST_REDSHIFT)
+            )),
+            _ => because(name, err).map(str::to_string),
         }
-    )+};
+    }
 }
-
-distance_array!(
-    comoving_distance_mpc_array,
-    transverse_comoving_distance_mpc_array,
-    angular_diameter_distance_mpc_array,
-    luminosity_distance_mpc_array
-);
-
-/// Every element-wise method of the core's `Universe` (DESIGN 4a order).
-pub(crate) static METHODS: &[Spec] = &[
-    method!(One, dimensionless_hubble, [z]),
-    method!(One, hubble_parameter_km_s_mpc, [z]),
-    method!(One, omega_matter_at, [z]),
-    method!(One, omega_radiation_at, [z]),
-    method!(One, omega_dark_energy_at, [z]),
-    method!(One, omega_curvature_at, [z]),
-    method!(One, critical_density_kg_m3, [z]),
-    method!(One, cmb_temperature_at_k, [z]),
-    method!(One, comoving_distance_mpc, [z], comoving_distance_mpc_array),
-    method!(
-        One,
-        transverse_comoving_distance_mpc,
-        [z],
-        transverse_comoving_distance_mpc_array
-    ),
-    method!(
-        One,
-        angular_diameter_distance_mpc,
-        [z],
-        angular_diameter_distance_mpc_array
-    ),
-    method!(Two, angular_diameter_distance_between_mpc, [z1, z2]),
-    method!(
-        One,
-        luminosity_distance_mpc,
-        [z],
-        luminosity_distance_mpc_array
-    ),
-    method!(One, distance_modulus, [z]),
-    method!(One, comoving_volume_gpc3, [z]),
-    method!(One, differential_comoving_volume_mpc3_sr, [z]),
-    method!(One, transverse_scale_kpc_per_arcsec, [z]),
-    method!(One, lookback_time_gyr, [z]),
-    method!(One, age_gyr, [z]),
-    method!(One, conformal_time_mpc, [z]),
-    method!(One, redshift_at_age_gyr, [age_gyr]),
-    method!(One, redshift_at_lookback_time_gyr, [lookback_gyr]),
-    method!(One, redshift_at_comoving_distance_mpc, [distance_mpc]),
-    method!(One, redshift_at_luminosity_distance_mpc, [distance_mpc]),
-];
 
 /// The reason of a failure in the method's own terms, where the generic one would be vague.
 fn because(method: &str, err: Error) -> Option<&'static str> {
@@ -545,174 +431,9 @@ fn because(method: &str, err: Error) -> Option<&'static str> {
     })
 }
 
-/// One method of `Universe`, as the Python class calls it (`relicore._native.universe_method`).
-#[pyclass(frozen, module = "relicore._native", name = "UniverseMethod")]
-pub(crate) struct UniverseMethod {
-    spec: &'static Spec,
-}
-
-/// The universe method of the core by name.
-#[pyfunction]
-pub(crate) fn universe_method(name: &str) -> PyResult<UniverseMethod> {
-    METHODS
-        .iter()
-        .find(|s| s.name == name)
-        .map(|spec| UniverseMethod { spec })
-        .ok_or_else(|| PyValueError::new_err(format!("no Universe method named {name:?}")))
-}
-
-/// Names and parameter names of every universe method, in table order.
-#[pyfunction]
-pub(crate) fn universe_method_signatures() -> Vec<(&'static str, Vec<&'static str>)> {
-    METHODS.iter().map(|s| (s.name, s.args.to_vec())).collect()
-}
-
-impl UniverseMethod {
-    fn error(&self, py: Python<'_>, values: &[f64], site: Option<Site<'_>>, e: Error) -> PyErr {
-        let spec = self.spec;
-        let args: Vec<Arg<'_>> = values.iter().map(|&v| Arg::Value(v)).collect();
-        let function = format!("Universe.{}", spec.name);
-        core_error_because(
-            py,
-            &function,
-            spec.args,
-            &args,
-            site,
-            e,
-            because(spec.name, e),
-        )
-    }
-}
-
-#[pymethods]
-impl UniverseMethod {
-    /// Name of the core method.
-    #[getter]
-    fn name(&self) -> &'static str {
-        self.spec.name
-    }
-
-    /// Parameter names of the core method (after the universe), in order.
-    #[getter]
-    fn arguments(&self) -> Vec<&'static str> {
-        self.spec.args.to_vec()
-    }
-
-    /// Calls the method of `universe` on scalars; with `nan_on_error` a failure gives NaN.
-    #[pyo3(signature = (universe, args, nan_on_error=false))]
-    fn call(
-        &self,
-        py: Python<'_>,
-        universe: &Bound<'_, PyUniverse>,
-        args: Vec<f64>,
-        nan_on_error: bool,
-    ) -> PyResult<f64> {
-        let u = universe.get().value();
-        let r = match (self.spec.body, args.as_slice()) {
-            (Body::One(f), &[a]) => f(u, a),
-            (Body::Two(f), &[a, b]) => f(u, a, b),
-            _ => {
-                return Err(PyTypeError::new_err(format!(
-                    "Universe.{}: takes {} arguments, got {}",
-                    self.spec.name,
-                    self.spec.args.len(),
-                    args.len()
-                )));
-            }
-        };
-        match r {
-            Ok(v) => Ok(v),
-            Err(_) if nan_on_error => Ok(f64::NAN),
-            Err(e) => Err(self.error(py, &args, None, e)),
-        }
-    }
-
-    /// Element loop: `inputs` are contiguous 1-D float64 arrays of `prod(shape)` elements or of
-    /// one (broadcast) element, `out` the contiguous output of `prod(shape)` elements. Runs
-    /// with the GIL released.
-    #[pyo3(signature = (universe, inputs, out, shape, nan_on_error=false))]
-    fn map(
-        &self,
-        py: Python<'_>,
-        universe: &Bound<'_, PyUniverse>,
-        inputs: Vec<PyReadonlyArray1<'_, f64>>,
-        out: &Bound<'_, PyArray1<f64>>,
-        shape: Vec<usize>,
-        nan_on_error: bool,
-    ) -> PyResult<()> {
-        let spec = self.spec;
-        let u = universe.get().value();
-        let mut out = out.try_readwrite()?;
-        let out = out
-            .as_slice_mut()
-            .map_err(|e| PyValueError::new_err(format!("Universe.{}: out: {e}", spec.name)))?;
-        let n = out.len();
-        check_shape(&shape, n, spec.name)?;
-        let x = elements(&inputs, n, spec.name)?;
-        let all = |_: Error| true;
-        let failure = match (spec.body, x.as_slice()) {
-            (Body::One(_), &[a]) if a.len() == n && spec.array.is_some() => {
-                let array = spec
-                    .array
-                    .ok_or_else(|| PyTypeError::new_err("no array form"))?;
-                py.detach(|| run_array(a, out, nan_on_error, |xs, os| array(u, xs, os)))
-            }
-            (Body::One(f), &[a]) => py.detach(|| run([a], out, nan_on_error, all, |[a]| f(u, a))),
-            (Body::Two(f), &[a, b]) => {
-                py.detach(|| run([a, b], out, nan_on_error, all, |[a, b]| f(u, a, b)))
-            }
-            _ => {
-                return Err(PyTypeError::new_err(format!(
-                    "Universe.{}: takes {} inputs, got {}",
-                    spec.name,
-                    spec.args.len(),
-                    x.len()
-                )));
-            }
-        };
-        match failure {
-            None => Ok(()),
-            Some((i, e)) => {
-                let values: Vec<f64> = x
-                    .iter()
-                    .map(|s| {
-                        s.get(if s.len() == 1 { 0 } else { i })
-                            .copied()
-                            .unwrap_or(f64::NAN)
-                    })
-                    .collect();
-                let site = Site {
-                    index: i,
-                    shape: &shape,
-                };
-                Err(self.error(py, &values, Some(site), e))
-            }
-        }
-    }
-
-    fn __repr__(&self) -> String {
-        format!(
-            "<relicore Universe method {}({})>",
-            self.spec.name,
-            self.spec.args.join(", ")
-        )
-    }
-}
-
 #[cfg(test)]
 mod tests {
     use super::*;
-
-    #[test]
-    fn names_are_unique() {
-        for (i, a) in METHODS.iter().enumerate() {
-            assert!(
-                METHODS.iter().skip(i + 1).all(|b| b.name != a.name),
-                "{}",
-                a.name
-            );
-        }
-    }
 
     #[test]
     fn parameter_names_follow_the_core_positions() {
@@ -726,21 +447,5 @@ mod tests {
         assert_eq!(U::new(p).err(), Some(Error::InvalidParameter(9)));
         assert_eq!(PARAMETER_NAMES[9], "helium_mass_fraction");
         assert!(parameter_rule(&p, 9).contains("below 1"));
-    }
-
-    #[test]
-    fn the_loop_gives_the_scalar_results() {
-        let u = U::new(UniverseParameters::new(70.0, 0.3)).unwrap();
-        let z = [0.1, -1.0, 2.0];
-        let mut out = [0.0; 3];
-        let f = |[z]: [f64; 1]| u.luminosity_distance_mpc(z);
-        assert_eq!(
-            run([&z], &mut out, false, |_| true, f),
-            Some((1, Error::Negative(0)))
-        );
-        assert_eq!(run([&z], &mut out, true, |_| true, f), None);
-        assert!(out[1].is_nan());
-        assert_eq!(out[0], u.luminosity_distance_mpc(0.1).unwrap());
-        assert_eq!(out[2], u.luminosity_distance_mpc(2.0).unwrap());
     }
 }

@@ -1,62 +1,24 @@
-//! `relicore.decoupling`: Saha equilibrium, the published fits of the last-scattering and drag
-//! redshifts, and the native base of `relicore.decoupling.ThermalHistory` with the table of its
-//! queries and their element loop.
+//! `relicore.decoupling.ThermalHistory`: the native base class computing and holding the
+//! core's `ThermalHistory<f64>`, and what the regular functions of a history add to their
+//! error messages.
 //!
-//! The Python module broadcasts the inputs, allocates the outputs and calls the loops here,
-//! which run with the GIL released (the computation of a history too); every number comes from
-//! the core's `relicore::decoupling`.
+//! The Python class derives from [`PyThermalHistory`] to give the constructor its keyword
+//! defaults (read from the core by [`history_defaults`]) and from the generated mixin of its
+//! methods and properties, which call [`crate::functions`]. The computation of a history runs
+//! with the GIL released; every number comes from the core's `relicore::decoupling`.
 
 use std::collections::hash_map::DefaultHasher;
 use std::hash::{Hash, Hasher};
 
-use numpy::{PyArray1, PyArrayMethods, PyReadonlyArray1};
-use pyo3::exceptions::{PyTypeError, PyValueError};
 use pyo3::prelude::*;
 use pyo3::types::PyDict;
-use relicore::cosmology::{Universe, UniverseParameters};
-use relicore::decoupling::{self as dc, HistoryOptions, ThermalHistory};
+use relicore::cosmology::UniverseParameters;
+use relicore::decoupling::{self as dc, HistoryOptions};
 use relicore::{Error, Result};
 
 use crate::cosmology::{PARAMETER_NAMES, PyUniverse};
-use crate::errors::{Arg, Site, build, core_error_because, py_repr, status_code};
-use crate::kernels::{Body as KernelBody, Kernel, Spec as KernelSpec, check_shape, elements, run};
-
-type U = Universe<f64>;
-type H = ThermalHistory<f64>;
-
-// ------------------------------------------------------------------------ the published fits
-
-/// The fits of the last-scattering and drag redshifts: plain functions of (ω_b, ω_m), called
-/// through the generic kernel of `kernels.rs`.
-pub(crate) static FITS: &[KernelSpec] = &[
-    KernelSpec {
-        name: "last_scattering_redshift_fit",
-        args: &["omega_baryon_h2", "omega_matter_h2"],
-        body: KernelBody::A2(dc::last_scattering_redshift_fit::<f64>),
-        array: None,
-    },
-    KernelSpec {
-        name: "drag_redshift_fit",
-        args: &["omega_baryon_h2", "omega_matter_h2"],
-        body: KernelBody::A2(dc::drag_redshift_fit::<f64>),
-        array: None,
-    },
-];
-
-/// The kernel of a fit by name.
-#[pyfunction]
-pub(crate) fn fit_kernel(name: &str) -> PyResult<Kernel> {
-    FITS.iter()
-        .find(|s| s.name == name)
-        .map(Kernel::of)
-        .ok_or_else(|| PyValueError::new_err(format!("no relicore fit named {name:?}")))
-}
-
-/// Names and parameter names of the fits, in table order.
-#[pyfunction]
-pub(crate) fn fit_signatures() -> Vec<(&'static str, Vec<&'static str>)> {
-    FITS.iter().map(|s| (s.name, s.args.to_vec())).collect()
-}
+use crate::errors::{Arg, build, core_error_because, py_repr, status_code};
+use crate::functions::{H, Receiver, U};
 
 // ------------------------------------------------------------------ errors of the universe
 
@@ -69,7 +31,7 @@ fn is_element_error(err: Error) -> bool {
 /// The `RelicoreError` for a universe the decoupling model refuses (`InvalidParameter(i)`,
 /// `i` a position in `UniverseParameters`): argument `universe`, the parameter and its value in
 /// the message.
-fn universe_refused(
+pub(crate) fn universe_refused(
     py: Python<'_>,
     function: &str,
     p: &UniverseParameters<f64>,
@@ -107,99 +69,6 @@ fn universe_refused(
         None,
         status_code(err),
     )
-}
-
-// --------------------------------------------------------------------------- Saha equilibrium
-
-const SAHA: &str = "saha_ionized_fraction";
-/// Parameter names of `saha_ionized_fraction`, in the core's order (z is argument 1).
-pub(crate) const SAHA_ARGS: &[&str] = &["universe", "z"];
-
-fn saha_error(py: Python<'_>, u: &U, z: f64, site: Option<Site<'_>>, err: Error) -> PyErr {
-    if !is_element_error(err) {
-        return universe_refused(py, SAHA, u.parameters(), err);
-    }
-    let because = match err {
-        Error::OutOfDomain(1) => Some(format!(
-            "must not exceed {} (the highest redshift of the function)",
-            py_repr(dc::SAHA_HIGHEST_REDSHIFT)
-        )),
-        _ => None,
-    };
-    core_error_because(
-        py,
-        SAHA,
-        SAHA_ARGS,
-        &[Arg::Shared, Arg::Value(z)],
-        site,
-        err,
-        because.as_deref(),
-    )
-}
-
-/// `saha_ionized_fraction(universe, z)` on a scalar z; with `nan_on_error` a failure of z gives
-/// NaN (a universe the model refuses always raises).
-#[pyfunction]
-#[pyo3(signature = (universe, z, nan_on_error=false))]
-pub(crate) fn saha_ionized_fraction(
-    py: Python<'_>,
-    universe: &Bound<'_, PyUniverse>,
-    z: f64,
-    nan_on_error: bool,
-) -> PyResult<f64> {
-    let u = universe.get().value();
-    match dc::saha_ionized_fraction(u, z) {
-        Ok(v) => Ok(v),
-        Err(e) if nan_on_error && is_element_error(e) => Ok(f64::NAN),
-        Err(e) => Err(saha_error(py, u, z, None, e)),
-    }
-}
-
-/// Element loop of `saha_ionized_fraction`: `inputs` is one contiguous 1-D float64 array of z
-/// (`prod(shape)` elements or one), `out` the contiguous output. Runs with the GIL released.
-#[pyfunction]
-#[pyo3(signature = (universe, inputs, out, shape, nan_on_error=false))]
-pub(crate) fn saha_ionized_fraction_map(
-    py: Python<'_>,
-    universe: &Bound<'_, PyUniverse>,
-    inputs: Vec<PyReadonlyArray1<'_, f64>>,
-    out: &Bound<'_, PyArray1<f64>>,
-    shape: Vec<usize>,
-    nan_on_error: bool,
-) -> PyResult<()> {
-    let u = universe.get().value();
-    let mut out = out.try_readwrite()?;
-    let out = out
-        .as_slice_mut()
-        .map_err(|e| PyValueError::new_err(format!("{SAHA}: out: {e}")))?;
-    let n = out.len();
-    check_shape(&shape, n, SAHA)?;
-    let x = elements(&inputs, n, SAHA)?;
-    let [z] = x.as_slice() else {
-        return Err(PyTypeError::new_err(format!(
-            "{SAHA}: one z array expected, got {}",
-            x.len()
-        )));
-    };
-    let failure = py.detach(|| {
-        run([*z], out, nan_on_error, is_element_error, |[z]| {
-            dc::saha_ionized_fraction(u, z)
-        })
-    });
-    match failure {
-        None => Ok(()),
-        Some((i, e)) => {
-            let zi = z
-                .get(if z.len() == 1 { 0 } else { i })
-                .copied()
-                .unwrap_or(f64::NAN);
-            let site = Site {
-                index: i,
-                shape: &shape,
-            };
-            Err(saha_error(py, u, zi, Some(site), e))
-        }
-    }
 }
 
 // ---------------------------------------------------------------------------- the history
@@ -304,12 +173,6 @@ pub(crate) struct PyThermalHistory {
     options: HistoryOptions<f64>,
 }
 
-impl PyThermalHistory {
-    pub(crate) fn value(&self) -> &H {
-        &self.inner
-    }
-}
-
 #[pymethods]
 impl PyThermalHistory {
     /// Computes the history of `universe` (every argument given; the defaults live in the
@@ -353,68 +216,6 @@ impl PyThermalHistory {
     #[getter]
     fn highest_redshift(&self) -> f64 {
         self.options.highest_redshift
-    }
-
-    /// Redshift of last scattering z*, where the Thomson optical depth (reionisation excluded)
-    /// reaches 1.
-    #[getter]
-    fn last_scattering_redshift(&self) -> f64 {
-        self.inner.last_scattering_redshift()
-    }
-
-    /// Redshift of the drag epoch, where the baryon-drag optical depth reaches 1.
-    #[getter]
-    fn drag_redshift(&self) -> f64 {
-        self.inner.drag_redshift()
-    }
-
-    /// Comoving sound horizon at last scattering r_s(z*), Mpc.
-    #[getter]
-    fn sound_horizon_last_scattering_mpc(&self) -> f64 {
-        self.inner.sound_horizon_last_scattering_mpc()
-    }
-
-    /// Comoving sound horizon at the drag epoch r_s(z_drag), Mpc.
-    #[getter]
-    fn sound_horizon_drag_mpc(&self) -> f64 {
-        self.inner.sound_horizon_drag_mpc()
-    }
-
-    /// Angular scale of the sound horizon at last scattering θ* = r_s(z*)/D_M(z*), radians.
-    #[getter]
-    fn angular_scale_last_scattering(&self) -> f64 {
-        self.inner.angular_scale_last_scattering()
-    }
-
-    /// Age of the universe at last scattering, years (Julian).
-    #[getter]
-    fn age_at_last_scattering_yr(&self) -> f64 {
-        self.inner.age_at_last_scattering_yr()
-    }
-
-    /// Radiation temperature at last scattering T0 (1 + z*), K.
-    #[getter]
-    fn temperature_at_last_scattering_k(&self) -> f64 {
-        self.inner.temperature_at_last_scattering_k()
-    }
-
-    /// Redshift of the peak of the visibility function (per conformal time) at recombination.
-    #[getter]
-    fn visibility_peak_redshift(&self) -> f64 {
-        self.inner.visibility_peak_redshift()
-    }
-
-    /// Highest redshift at which the matter temperature has fallen 1 % below the radiation
-    /// temperature.
-    #[getter]
-    fn thermal_decoupling_redshift(&self) -> f64 {
-        self.inner.thermal_decoupling_redshift()
-    }
-
-    /// Thomson optical depth of reionisation (0 without reionisation).
-    #[getter]
-    fn reionization_optical_depth(&self) -> f64 {
-        self.inner.reionization_optical_depth()
     }
 
     fn __repr__(slf: &Bound<'_, Self>) -> PyResult<String> {
@@ -474,177 +275,24 @@ pub(crate) fn decoupling_constants(py: Python<'_>) -> PyResult<Bound<'_, PyDict>
     Ok(d)
 }
 
-// ------------------------------------------------------------------------- history queries
+// ------------------------------------------------------------- receiver of regular functions
 
-/// A query of the core's `ThermalHistory` at one redshift: its name, parameter names (after
-/// `self`) and body.
-pub(crate) struct Query {
-    pub(crate) name: &'static str,
-    pub(crate) args: &'static [&'static str],
-    pub(crate) body: fn(&H, f64) -> Result<f64>,
-}
+impl Receiver for PyThermalHistory {
+    type Core = H;
+    const ARGUMENT: &'static str = "history";
 
-macro_rules! query {
-    ($name:ident) => {
-        Query {
-            name: stringify!($name),
-            args: &["z"],
-            body: H::$name,
+    fn core(&self) -> &H {
+        &self.inner
+    }
+
+    fn because(&self, _name: &str, err: Error) -> Option<String> {
+        match err {
+            Error::OutOfDomain(0) => Some(format!(
+                "above the highest redshift of the history ({})",
+                py_repr(self.options.highest_redshift)
+            )),
+            _ => None,
         }
-    };
-}
-
-/// Every element-wise query of the core's `ThermalHistory` (DESIGN 4a order).
-pub(crate) static QUERIES: &[Query] = &[
-    query!(ionized_fraction),
-    query!(matter_temperature_k),
-    query!(optical_depth),
-    query!(visibility),
-    query!(sound_horizon_mpc),
-];
-
-/// The reason of a failure in the query's own terms, where the generic one would be vague.
-fn query_because(highest_redshift: f64, err: Error) -> Option<String> {
-    match err {
-        Error::OutOfDomain(0) => Some(format!(
-            "above the highest redshift of the history ({})",
-            py_repr(highest_redshift)
-        )),
-        _ => None,
-    }
-}
-
-/// One query of `ThermalHistory`, as the Python class calls it
-/// (`relicore._native.history_method`).
-#[pyclass(frozen, module = "relicore._native", name = "HistoryMethod")]
-pub(crate) struct HistoryMethod {
-    spec: &'static Query,
-}
-
-/// The history query of the core by name.
-#[pyfunction]
-pub(crate) fn history_method(name: &str) -> PyResult<HistoryMethod> {
-    QUERIES
-        .iter()
-        .find(|s| s.name == name)
-        .map(|spec| HistoryMethod { spec })
-        .ok_or_else(|| PyValueError::new_err(format!("no ThermalHistory method named {name:?}")))
-}
-
-/// Names and parameter names of every history query, in table order.
-#[pyfunction]
-pub(crate) fn history_method_signatures() -> Vec<(&'static str, Vec<&'static str>)> {
-    QUERIES.iter().map(|s| (s.name, s.args.to_vec())).collect()
-}
-
-impl HistoryMethod {
-    fn error(
-        &self,
-        py: Python<'_>,
-        history: &PyThermalHistory,
-        z: f64,
-        site: Option<Site<'_>>,
-        e: Error,
-    ) -> PyErr {
-        let function = format!("ThermalHistory.{}", self.spec.name);
-        let because = query_because(history.options.highest_redshift, e);
-        core_error_because(
-            py,
-            &function,
-            self.spec.args,
-            &[Arg::Value(z)],
-            site,
-            e,
-            because.as_deref(),
-        )
-    }
-}
-
-#[pymethods]
-impl HistoryMethod {
-    /// Name of the core method.
-    #[getter]
-    fn name(&self) -> &'static str {
-        self.spec.name
-    }
-
-    /// Parameter names of the core method (after the history), in order.
-    #[getter]
-    fn arguments(&self) -> Vec<&'static str> {
-        self.spec.args.to_vec()
-    }
-
-    /// Calls the query of `history` at a scalar z; with `nan_on_error` a failure gives NaN.
-    #[pyo3(signature = (history, z, nan_on_error=false))]
-    fn call(
-        &self,
-        py: Python<'_>,
-        history: &Bound<'_, PyThermalHistory>,
-        z: f64,
-        nan_on_error: bool,
-    ) -> PyResult<f64> {
-        let history = history.get();
-        match (self.spec.body)(history.value(), z) {
-            Ok(v) => Ok(v),
-            Err(_) if nan_on_error => Ok(f64::NAN),
-            Err(e) => Err(self.error(py, history, z, None, e)),
-        }
-    }
-
-    /// Element loop: `inputs` is one contiguous 1-D float64 array of z (`prod(shape)` elements
-    /// or one), `out` the contiguous output of `prod(shape)` elements. Runs with the GIL
-    /// released.
-    #[pyo3(signature = (history, inputs, out, shape, nan_on_error=false))]
-    fn map(
-        &self,
-        py: Python<'_>,
-        history: &Bound<'_, PyThermalHistory>,
-        inputs: Vec<PyReadonlyArray1<'_, f64>>,
-        out: &Bound<'_, PyArray1<f64>>,
-        shape: Vec<usize>,
-        nan_on_error: bool,
-    ) -> PyResult<()> {
-        let spec = self.spec;
-        let f = spec.body;
-        let history = history.get();
-        let h = history.value();
-        let mut out = out.try_readwrite()?;
-        let out = out.as_slice_mut().map_err(|e| {
-            PyValueError::new_err(format!("ThermalHistory.{}: out: {e}", spec.name))
-        })?;
-        let n = out.len();
-        check_shape(&shape, n, spec.name)?;
-        let x = elements(&inputs, n, spec.name)?;
-        let [z] = x.as_slice() else {
-            return Err(PyTypeError::new_err(format!(
-                "ThermalHistory.{}: takes 1 input, got {}",
-                spec.name,
-                x.len()
-            )));
-        };
-        let failure = py.detach(|| run([*z], out, nan_on_error, |_| true, |[z]| f(h, z)));
-        match failure {
-            None => Ok(()),
-            Some((i, e)) => {
-                let zi = z
-                    .get(if z.len() == 1 { 0 } else { i })
-                    .copied()
-                    .unwrap_or(f64::NAN);
-                let site = Site {
-                    index: i,
-                    shape: &shape,
-                };
-                Err(self.error(py, history, zi, Some(site), e))
-            }
-        }
-    }
-
-    fn __repr__(&self) -> String {
-        format!(
-            "<relicore ThermalHistory method {}({})>",
-            self.spec.name,
-            self.spec.args.join(", ")
-        )
     }
 }
 
@@ -652,17 +300,6 @@ impl HistoryMethod {
 mod tests {
     use super::*;
     use relicore::cosmology::UniverseParameters;
-
-    #[test]
-    fn names_are_unique() {
-        for (i, a) in QUERIES.iter().enumerate() {
-            assert!(
-                QUERIES.iter().skip(i + 1).all(|b| b.name != a.name),
-                "{}",
-                a.name
-            );
-        }
-    }
 
     #[test]
     fn universe_errors_are_not_element_errors() {
@@ -689,7 +326,6 @@ mod tests {
         };
         assert_eq!(H::new(&u, o).err(), Some(Error::CapacityTooSmall(2)));
         assert_eq!(HISTORY_ARGS[2], "highest_redshift");
-        assert_eq!(SAHA_ARGS[1], "z");
         assert_eq!(dc::saha_ionized_fraction(&u, -1.0), Err(Error::Negative(1)));
     }
 }

@@ -4,11 +4,12 @@
 //! `bindings/python/python/relicore/` broadcast the inputs, allocate the outputs and call the
 //! element loops here, which run with the GIL released.
 //!
-//! * [`kernels`]: the table of core functions and the generic element loop.
-//! * [`calibration`]: the `TwoLoadCalibration` class.
-//! * [`cosmology`]: the native base of `relicore.Universe`, its method table and element loop.
-//! * [`decoupling`]: Saha equilibrium, the fits, and the native base of
-//!   `relicore.decoupling.ThermalHistory` with its query table and element loop.
+//! * [`functions`]: the regular functions (tables generated into [`generated`] from
+//!   `bindings/functions.toml`) and the one class `Function` that calls or loops any of them.
+//! * [`kernels`]: the generic element loop.
+//! * [`blackbody`]: the irregular blackbody functions (calibration, response tables).
+//! * [`cosmology`]: the native base of `relicore.Universe`.
+//! * [`decoupling`]: the native base of `relicore.decoupling.ThermalHistory`.
 //! * [`errors`]: the one mapping from a core error to `relicore.RelicoreError`.
 //! * the constants of `relicore::constants`, as the dicts `CONSTANTS` and `ROOTS`, and the
 //!   core's `VERSION`.
@@ -29,10 +30,14 @@
 use pyo3::prelude::*;
 use pyo3::types::PyDict;
 
-mod calibration;
+mod blackbody;
 mod cosmology;
 mod decoupling;
 mod errors;
+mod functions;
+// written by bindings/generate.py, which keeps its own layout
+#[rustfmt::skip]
+mod generated;
 mod kernels;
 
 macro_rules! constants {
@@ -88,24 +93,16 @@ fn cap_simd_level(cap: u8) -> u8 {
 fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     let py = m.py();
     m.add("RelicoreError", py.get_type::<errors::RelicoreError>())?;
-    m.add_class::<calibration::PyTwoLoadCalibration>()?;
-    m.add_class::<kernels::Kernel>()?;
-    m.add_function(wrap_pyfunction!(kernels::kernel, m)?)?;
-    m.add_function(wrap_pyfunction!(kernels::kernel_signatures, m)?)?;
-    m.add_function(wrap_pyfunction!(calibration::two_load_calibration, m)?)?;
+    m.add_class::<functions::Function>()?;
+    m.add_function(wrap_pyfunction!(functions::functions, m)?)?;
+    m.add_class::<blackbody::PyTwoLoadCalibration>()?;
+    m.add_function(wrap_pyfunction!(blackbody::two_load_calibration, m)?)?;
+    m.add_function(wrap_pyfunction!(blackbody::table_map, m)?)?;
+    m.add_function(wrap_pyfunction!(blackbody::calibrated_map, m)?)?;
+    m.add_function(wrap_pyfunction!(blackbody::irregular_signatures, m)?)?;
     m.add_class::<cosmology::PyUniverse>()?;
-    m.add_class::<cosmology::UniverseMethod>()?;
-    m.add_function(wrap_pyfunction!(cosmology::universe_method, m)?)?;
-    m.add_function(wrap_pyfunction!(cosmology::universe_method_signatures, m)?)?;
     m.add_function(wrap_pyfunction!(cosmology::universe_defaults, m)?)?;
-    m.add_function(wrap_pyfunction!(decoupling::fit_kernel, m)?)?;
-    m.add_function(wrap_pyfunction!(decoupling::fit_signatures, m)?)?;
-    m.add_function(wrap_pyfunction!(decoupling::saha_ionized_fraction, m)?)?;
-    m.add_function(wrap_pyfunction!(decoupling::saha_ionized_fraction_map, m)?)?;
     m.add_class::<decoupling::PyThermalHistory>()?;
-    m.add_class::<decoupling::HistoryMethod>()?;
-    m.add_function(wrap_pyfunction!(decoupling::history_method, m)?)?;
-    m.add_function(wrap_pyfunction!(decoupling::history_method_signatures, m)?)?;
     m.add_function(wrap_pyfunction!(decoupling::history_defaults, m)?)?;
     m.add_function(wrap_pyfunction!(decoupling::decoupling_constants, m)?)?;
     m.add("CONSTANTS", constants_dict(py)?)?;

@@ -1,4 +1,4 @@
-"""Type stubs for the relicore package (hand-kept; tests/python/test_stubs.py checks them)."""
+"""Type stubs for the relicore package (hand-kept; tests/python/test_faces.py checks them)."""
 
 from typing import Final
 

@@ -1,11 +1,15 @@
-"""Shared by the element-wise wrappers of relicore.blackbody and relicore.cosmology: what counts
-as a scalar, and how one input becomes the contiguous 1-D float64 operand of a native loop."""
+"""Shared by the element-wise wrappers of relicore: what counts as a scalar, how one input
+becomes the contiguous 1-D float64 operand of a native loop, and the one call of a regular
+function (`apply`) that the generated wrappers (_blackbody.py, _cosmology.py, _decoupling.py)
+make."""
 
 from __future__ import annotations
 
 from typing import Any
 
 import numpy as np
+
+from relicore import _native
 
 SCALAR_TYPES = (float, int, np.floating, np.integer)
 
@@ -67,3 +71,30 @@ def float_arrays(
                 name,
             ) from None
     return arrays, shape
+
+
+#: every regular function of the core by name (relicore._native.Function)
+FUNCTIONS: dict[str, Any] = {f.name: f for f in _native.functions()}
+
+
+def apply(function: Any, receiver: Any, args: tuple[Any, ...], nan_on_error: bool, label: str | None = None) -> Any:
+    """Calls a regular function on `receiver` (None, a universe or a history): a float when every
+    argument is a scalar, else the ndarray of the broadcast shape. `label` names the function
+    in the dtype and shape errors raised here (its `label` by default)."""
+    if all(isinstance(a, SCALAR_TYPES) for a in args):
+        return function.call(receiver, args, nan_on_error)
+    arrays, shape = float_arrays(label or function.label, function.arguments, args)
+    out = np.empty(shape, dtype=np.float64)
+    function.map(receiver, [operand(a, shape) for a in arrays], out.reshape(-1), shape, nan_on_error)
+    return out
+
+
+def publish(members: Any, module: str, owner: str | None = None) -> None:
+    """Gives generated functions (a list) or the members of a generated mixin class the
+    `__module__` and `__qualname__` of the public module and class they belong to."""
+    items = members if isinstance(members, list) else list(vars(members).values())
+    for item in items:
+        function = item.fget if isinstance(item, property) else item
+        if callable(function) and hasattr(function, "__qualname__"):
+            function.__module__ = module
+            function.__qualname__ = f"{owner}.{function.__name__}" if owner else function.__name__

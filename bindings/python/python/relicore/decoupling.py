@@ -4,7 +4,9 @@ drag epochs, the sound horizon, and the published fits of the last-scattering an
 redshifts.
 
 Every function and method is the Rust core's of the same name with the same arguments in the
-same order (``src/decoupling/``); this module only converts, broadcasts and loops (the loops,
+same order (``src/decoupling/``), and its docstring is the core's documentation of it (errors
+in the core's terms: ``OutOfDomain(i)``, ``i`` the argument position from 0, the history
+excluded, the universe of a function counted); this module only converts, broadcasts and loops (the loops,
 and the computation of a history, run in Rust with the GIL released). The model, its
 equations and references are in the core's module documentation: hydrogen by the Peebles
 three-level atom (case-B coefficient of Pequignot et al. 1991 with the factor 1.14 of Seager,
@@ -46,10 +48,9 @@ from __future__ import annotations
 
 from typing import Any
 
-import numpy as np
-
 from relicore import _native
-from relicore._elementwise import SCALAR_TYPES, float_arrays, operand
+from relicore._decoupling import ThermalHistoryFunctions, drag_redshift_fit, last_scattering_redshift_fit
+from relicore._decoupling import saha_ionized_fraction
 
 __all__ = [
     "DEFAULT_HIGHEST_REDSHIFT",
@@ -76,76 +77,7 @@ HIGHEST_REIONIZATION_REDSHIFT: float = _CONSTANTS["HIGHEST_REIONIZATION_REDSHIFT
 SAHA_HIGHEST_REDSHIFT: float = _CONSTANTS["SAHA_HIGHEST_REDSHIFT"]
 """Highest redshift of :func:`saha_ionized_fraction`."""
 
-_FITS = {name: _native.fit_kernel(name) for name, _ in _native.fit_signatures()}
-_FIT_ARGS = dict(_native.fit_signatures())
-_Q = {name: _native.history_method(name) for name, _ in _native.history_method_signatures()}
-_Q_ARGS = dict(_native.history_method_signatures())
 _D: dict[str, Any] = dict(_native.history_defaults())
-
-
-def _fit(kernel: Any, args: tuple[Any, ...], nan_on_error: bool) -> Any:
-    if all(isinstance(a, SCALAR_TYPES) for a in args):
-        return kernel.call(args, nan_on_error)
-    arrays, shape = float_arrays(kernel.name, _FIT_ARGS[kernel.name], args)
-    out = np.empty(shape, dtype=np.float64)
-    kernel.map([operand(a, shape) for a in arrays], out.reshape(-1), shape, nan_on_error)
-    return out
-
-
-def _query(history: Any, method: Any, z: Any, nan_on_error: bool) -> Any:
-    if isinstance(z, SCALAR_TYPES):
-        return method.call(history, z, nan_on_error)
-    function = f"ThermalHistory.{method.name}"
-    arrays, shape = float_arrays(function, _Q_ARGS[method.name], (z,))
-    out = np.empty(shape, dtype=np.float64)
-    method.map(history, [operand(a, shape) for a in arrays], out.reshape(-1), shape, nan_on_error)
-    return out
-
-
-# --- Saha equilibrium ----------------------------------------------------------------------
-
-
-def saha_ionized_fraction(universe: Any, z: Any, *, nan_on_error: bool = False) -> Any:
-    """Ionised fraction x_e = n_e/n_H in Saha equilibrium at redshift z: hydrogen and both
-    helium stages in equilibrium with the radiation at T_r = T0 (1+z), coupled through the
-    electron density (Saha 1920). Exceeds 1 while helium is ionised, up to 1 + 2 n_He/n_H;
-    0 where the equilibrium value is below the smallest positive double (as at z = 0).
-
-    universe: a :class:`relicore.Universe` with baryons and radiation (its omega_baryon,
-    helium_mass_fraction, cmb_temperature_k and h0_km_s_mpc set the densities).
-    z: redshift, finite, 0 <= z <= 1e8. Accuracy: 1e-13 relative against mpmath.
-    """
-    if isinstance(z, SCALAR_TYPES):
-        return _native.saha_ionized_fraction(universe, z, nan_on_error)
-    arrays, shape = float_arrays("saha_ionized_fraction", ("z",), (z,))
-    out = np.empty(shape, dtype=np.float64)
-    _native.saha_ionized_fraction_map(universe, [operand(a, shape) for a in arrays], out.reshape(-1), shape, nan_on_error)
-    return out
-
-
-# --- the published fits --------------------------------------------------------------------
-
-
-def last_scattering_redshift_fit(omega_baryon_h2: Any, omega_matter_h2: Any, *, nan_on_error: bool = False) -> Any:
-    """Redshift of last scattering z* by the fit of Hu & Sugiyama 1996 (ApJ 471, 542).
-
-    omega_baryon_h2: Omega_b h^2, > 0. omega_matter_h2: Omega_m h^2, > 0. Accuracy: the fit's
-    own, about 1 % against full recombination calculations; the formula itself to a few ulp.
-    """
-    return _fit(_FITS["last_scattering_redshift_fit"], (omega_baryon_h2, omega_matter_h2), nan_on_error)
-
-
-def drag_redshift_fit(omega_baryon_h2: Any, omega_matter_h2: Any, *, nan_on_error: bool = False) -> Any:
-    """Redshift of the drag epoch z_d by the fit of Eisenstein & Hu 1998 (ApJ 496, 605).
-
-    omega_baryon_h2: Omega_b h^2, > 0. omega_matter_h2: Omega_m h^2, > 0. Accuracy: the fit's
-    own, a few per cent or better over the usual parameter range; the formula itself to a few
-    ulp.
-    """
-    return _fit(_FITS["drag_redshift_fit"], (omega_baryon_h2, omega_matter_h2), nan_on_error)
-
-
-# --- the history ---------------------------------------------------------------------------
 
 
 def _rebuild(cls: type, universe: Any, reionization_redshift: Any, highest_redshift: float) -> Any:
@@ -153,7 +85,7 @@ def _rebuild(cls: type, universe: Any, reionization_redshift: Any, highest_redsh
     return cls(universe, reionization_redshift=reionization_redshift, highest_redshift=highest_redshift)
 
 
-class ThermalHistory(_native.ThermalHistoryBase):
+class ThermalHistory(ThermalHistoryFunctions, _native.ThermalHistoryBase):
     """The recombination and thermal history of a universe, computed once (a few milliseconds, with
     the GIL released) onto a table of HISTORY_NODES nodes in ln(1+z) from z = 0 to
     ``highest_redshift``, then queried at any redshift of the table.
@@ -207,32 +139,6 @@ class ThermalHistory(_native.ThermalHistoryBase):
         """dask's name for this value: equal universe and options, equal token (no pickling)."""
         return ("relicore.ThermalHistory", self.universe.__dask_tokenize__(), self.reionization_redshift,
                 self.highest_redshift)
-
-    def ionized_fraction(self, z: Any, *, nan_on_error: bool = False) -> Any:
-        """Ionised fraction x_e = n_e/n_H at redshift z (reionisation included when requested;
-        above 1 while helium is ionised). z: 0 <= z <= highest_redshift. Accuracy: 1e-5
-        relative from z = 1600 to 50 against an independent scipy integration."""
-        return _query(self, _Q["ionized_fraction"], z, nan_on_error)
-
-    def matter_temperature_k(self, z: Any, *, nan_on_error: bool = False) -> Any:
-        """Matter (gas) temperature T_m at redshift z, K (reionisation heating is not
-        modelled). z: 0 <= z <= highest_redshift. Accuracy as ionized_fraction."""
-        return _query(self, _Q["matter_temperature_k"], z, nan_on_error)
-
-    def optical_depth(self, z: Any, *, nan_on_error: bool = False) -> Any:
-        """Thomson optical depth from today to redshift z (reionisation included when
-        requested). z: 0 <= z <= highest_redshift. Accuracy: 1e-5 relative."""
-        return _query(self, _Q["optical_depth"], z, nan_on_error)
-
-    def visibility(self, z: Any, *, nan_on_error: bool = False) -> Any:
-        """Visibility function g = -dtau/deta e^-tau per Mpc of conformal distance, Mpc^-1 (its
-        integral over conformal distance is 1 - e^-tau). z: 0 <= z <= highest_redshift."""
-        return _query(self, _Q["visibility"], z, nan_on_error)
-
-    def sound_horizon_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
-        """Comoving sound horizon r_s(z) = int_z^inf c_s dz'/H, c_s = c/sqrt(3(1+R)), Mpc.
-        z: any finite z >= 0 (it needs the background only). Accuracy: 1e-12 relative."""
-        return _query(self, _Q["sound_horizon_mpc"], z, nan_on_error)
 
 
 ThermalHistory.__module__ = "relicore.decoupling"

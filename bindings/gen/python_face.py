@@ -1,0 +1,399 @@
+"""The Python face's per-function parts, from the table and the core's rustdoc:
+
+* bindings/python/src/generated.rs: the native tables of the regular functions (one per
+  receiver) and the SIMD array wrappers, read by the hand-kept `functions.rs`;
+* bindings/python/python/relicore/_blackbody.py, _cosmology.py, _decoupling.py: the wrappers
+  (functions, and the methods and properties of the mixins `UniverseFunctions` and
+  `ThermalHistoryFunctions`) with the core's rustdoc as docstrings, imported by the hand-kept
+  public modules;
+* bindings/python/python/relicore/blackbody.pyi, cosmology.pyi, decoupling.pyi: the stubs, the
+  irregular parts (classes, constructors, response and calibration functions) from the
+  templates below.
+"""
+
+from __future__ import annotations
+
+from .common import banner
+from .rustdoc import find
+from .table import ROOT, Function
+
+PY = ROOT / "bindings" / "python"
+PACKAGE = PY / "python" / "relicore"
+
+# the Python class of each receiver, where it lives, and its core type in generated.rs
+CLASSES = {"universe": ("Universe", "relicore.cosmology", "U"), "history": ("ThermalHistory", "relicore.decoupling", "H")}
+CORE_PATH = {"blackbody": "relicore::blackbody", "cosmology": "relicore::cosmology", "decoupling": "relicore::decoupling"}
+
+
+def label(fn: Function) -> str:
+    """How the messages name the function."""
+    if fn.python == "function":
+        return fn.name
+    return f"{CLASSES[fn.receiver][0]}.{fn.name}"
+
+
+def python_args(fn: Function) -> list[str]:
+    """The Python parameters before the keyword nan_on_error (self excluded)."""
+    lead = [fn.receiver] if fn.python == "function" and fn.receiver != "none" else []
+    return [*lead, *fn.arg_names]
+
+
+# --------------------------------------------------------------------------------- Rust
+
+
+def _rust_body(fn: Function) -> str:
+    n = len(fn.args)
+    r = {"none": "_", "universe": "u", "history": "h"}[fn.receiver]
+    params = ", ".join([r, *fn.arg_names])
+    if fn.receiver == "none":
+        call = f"{CORE_PATH[fn.topic]}::{fn.name}({', '.join(fn.arg_names)})"
+    elif fn.core:
+        topic, _, name = fn.core.partition("::")
+        call = f"{CORE_PATH[topic]}::{name}({', '.join([r, *fn.arg_names])})"
+    else:
+        call = f"{r}.{fn.name}({', '.join(fn.arg_names)})"
+    return f"Body::A{n}(|{params}| {call}.lift())"
+
+
+def _rust_array(fn: Function) -> str:
+    """The SIMD array wrapper of `fn` (its first argument an array, the others single values)."""
+    assert fn.array and fn.array.index(fn) == 0, f"{fn.name}: the SIMD array argument must come first"
+    core = {"none": "()", "universe": "U", "history": "H"}[fn.receiver]
+    others = fn.arg_names[1:]
+    lines = [f"fn {fn.name}_array(r: &{core}, x: &[f64], rest: &[f64], out: &mut [f64]) -> ArrayResult {{"]
+    if others:
+        lines.append("    let mut rest = rest.iter().copied();")
+        for a in others:
+            lines.append(f"    let {a} = rest.next().unwrap_or(f64::NAN);")
+    else:
+        lines.append("    let _ = rest;")
+    sig = [f"r: &{core}", "x: &[f64]", *[f"{a}: f64" for a in others], "out: &mut [f64]"]
+    if fn.receiver == "none":
+        lines.append("    let _ = r;")
+        sig.pop(0)
+        call = f"{CORE_PATH[fn.topic]}::{fn.name}_array(x, {''.join(a + ', ' for a in others)}out)"
+    else:
+        call = f"r.{fn.name}_array(x, {''.join(a + ', ' for a in others)}out)"
+    lines.append(f"    widest!(|{', '.join(sig)}| -> ArrayResult {{ {call} }})")
+    lines.append("}")
+    return "\n".join(lines)
+
+
+def _rust_spec(fn: Function) -> str:
+    args = ", ".join(f'"{a}"' for a in fn.arg_names)
+    array = f"Some({fn.name}_array)" if fn.array and fn.array.simd else "None"
+    return (
+        "    Spec {\n"
+        f'        name: "{fn.name}",\n'
+        f'        topic: "{fn.topic}",\n'
+        f'        label: "{label(fn)}",\n'
+        f"        args: &[{args}],\n"
+        f"        free: {'true' if fn.core else 'false'},\n"
+        f"        body: {_rust_body(fn)},\n"
+        f"        array: {array},\n"
+        "    },"
+    )
+
+
+def rust(fns: list[Function]) -> str:
+    out = [
+        banner("//", "the native tables of the regular functions of the Python face, one per receiver"),
+        "//! The regular functions as `functions.rs` calls them: name, topic, how messages name them,",
+        "//! element-wise parameters, the core call and the SIMD array form where there is one.",
+        "",
+        "use relicore::ArrayResult;",
+        "use relicore_dispatch::widest;",
+        "",
+        "use crate::functions::{Body, H, Lift, Spec, U};",
+    ]
+    for receiver, static, core in (("none", "PLAIN", "()"), ("universe", "UNIVERSE", "U"), ("history", "HISTORY", "H")):
+        group = [f for f in fns if f.receiver == receiver]
+        out += ["", f"/// The regular functions called on {'nothing' if receiver == 'none' else 'a ' + receiver}.",
+                f"pub(crate) static {static}: &[Spec<{core}>] = &["]
+        out += [_rust_spec(f) for f in group]
+        out.append("];")
+    for f in fns:
+        if f.array and f.array.simd:
+            out += ["", f"/// `{f.name}_array` of the core, compiled for each SIMD level and chosen at run time.",
+                    _rust_array(f)]
+    return "\n".join(out) + "\n"
+
+
+# ------------------------------------------------------------------------------- Python
+
+
+def _docstring(fn: Function, indent: str) -> str:
+    _, doc = find(fn)
+    text = "\n".join(doc).strip().replace("\\", "\\\\")
+    assert '"""' not in text, fn.name
+    lines = text.split("\n")
+    body = "\n".join((indent + line) if line.strip() else "" for line in lines[1:])
+    if len(lines) == 1:
+        return f'{indent}"""{lines[0]}"""'
+    return f'{indent}"""{lines[0]}\n{body}\n{indent}"""'
+
+
+def _py_function(fn: Function) -> str:
+    params = ", ".join(f"{a}: Any" for a in python_args(fn))
+    receiver = fn.receiver if fn.receiver != "none" else "None"
+    values = "".join(f"{a}, " for a in fn.arg_names)
+    return (
+        f"def {fn.name}({params}, *, nan_on_error: bool = False) -> Any:\n"
+        f"{_docstring(fn, '    ')}\n"
+        f'    return _apply(_F["{fn.name}"], {receiver}, ({values}), nan_on_error)\n'
+    )
+
+
+def _py_member(fn: Function) -> str:
+    if fn.python == "property":
+        return (
+            "    @property\n"
+            f"    def {fn.name}(self) -> float:\n"
+            f"{_docstring(fn, '        ')}\n"
+            f'        return _F["{fn.name}"].call(self, ())\n'
+        )
+    params = ", ".join(f"{a}: Any" for a in fn.arg_names)
+    values = "".join(f"{a}, " for a in fn.arg_names)
+    # the dtype and shape errors of the universe's methods have always named the bare method
+    bare = f', "{fn.name}"' if fn.receiver == "universe" else ""
+    return (
+        f"    def {fn.name}(self, {params}, *, nan_on_error: bool = False) -> Any:\n"
+        f"{_docstring(fn, '        ')}\n"
+        f'        return _apply(_F["{fn.name}"], self, ({values}), nan_on_error{bare})\n'
+    )
+
+
+MODULE_DOC = {
+    "blackbody": "The regular functions of relicore.blackbody",
+    "cosmology": "The methods and properties of relicore.Universe (the mixin UniverseFunctions)",
+    "decoupling": "The regular functions of relicore.decoupling and the methods and properties of "
+    "relicore.decoupling.ThermalHistory (the mixin ThermalHistoryFunctions)",
+}
+
+
+def python_module(topic: str, fns: list[Function]) -> str:
+    public = f"relicore.{topic}"
+    functions = [f for f in fns if f.topic == topic and f.python == "function"]
+    members: dict[str, list[Function]] = {}
+    for f in fns:
+        if f.topic == topic and f.python != "function":
+            members.setdefault(f.receiver, []).append(f)
+    out = [
+        banner("#", f"the regular functions of {public}"),
+        f'"""{MODULE_DOC[topic]}, imported by {public}; their conventions are in its docstring."""',
+        "",
+        "from __future__ import annotations",
+        "",
+        "from typing import Any",
+        "",
+        "from relicore._elementwise import FUNCTIONS as _F",
+        "from relicore._elementwise import apply as _apply",
+        "from relicore._elementwise import publish as _publish",
+        "",
+        f"__all__ = {[f.name for f in functions] + [CLASSES[r][0] + 'Functions' for r in members]!r}",
+    ]
+    for f in functions:
+        out += ["", "", _py_function(f).rstrip("\n")]
+    for receiver, group in members.items():
+        cls = CLASSES[receiver][0]
+        out += [
+            "",
+            "",
+            f"class {cls}Functions:",
+            f'    """The regular methods and properties of {cls}."""',
+            "",
+            "    __slots__ = ()",
+        ]
+        for f in group:
+            out += ["", _py_member(f).rstrip("\n")]
+    out += ["", ""]
+    names = [f.name for f in functions]
+    if names:
+        out.append(f"_publish([{', '.join(names)}], {public!r})")
+    for receiver in members:
+        cls = CLASSES[receiver][0]
+        out.append(f"_publish({cls}Functions, {public!r}, {cls!r})")
+    return "\n".join(out) + "\n"
+
+
+# -------------------------------------------------------------------------------- stubs
+
+STUB_HEAD = '''"""Type stubs for relicore.{topic} (tests/python/{test} checks them against the module).
+Element-wise arguments take scalars, sequences or arrays: all scalars give a float, anything
+else a float64 ndarray of the (broadcast) shape."""
+
+from typing import Any, Final, TypeAlias, {typing}
+
+import numpy as np
+from numpy.typing import ArrayLike, NDArray
+{imports}
+_Scalar: TypeAlias = float | int | np.floating[Any] | np.integer[Any]
+_Array: TypeAlias = NDArray[np.float64]
+'''
+
+BLACKBODY_STUB = '''
+@final
+class TwoLoadCalibration:
+    """Gain and offset of a two-load radiometer calibration: reading = gain * J + offset."""
+
+    def __new__(cls, frequency_hz: float, gain: float, offset: float) -> TwoLoadCalibration: ...
+    @property
+    def frequency_hz(self) -> float: ...
+    @property
+    def gain(self) -> float: ...
+    @property
+    def offset(self) -> float: ...
+    def __eq__(self, other: object) -> bool: ...
+    def __ne__(self, other: object) -> bool: ...
+    def __reduce__(self) -> tuple[type[TwoLoadCalibration], tuple[float, float, float]]: ...
+
+def two_load_calibration(
+    frequency_hz: float,
+    reading_hot: float,
+    temperature_hot_k: float,
+    reading_cold: float,
+    temperature_cold_k: float,
+) -> TwoLoadCalibration: ...
+@overload
+def calibrated_brightness_temperature(calibration: TwoLoadCalibration, reading: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def calibrated_brightness_temperature(calibration: TwoLoadCalibration, reading: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+@overload
+def calibrated_temperature(calibration: TwoLoadCalibration, reading: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def calibrated_temperature(calibration: TwoLoadCalibration, reading: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+@overload
+def response_weighted_radiance(wavelengths_m: ArrayLike, response: ArrayLike, temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def response_weighted_radiance(wavelengths_m: ArrayLike, response: ArrayLike, temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+@overload
+def temperature_from_response_weighted_radiance(wavelengths_m: ArrayLike, response: ArrayLike, radiance: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def temperature_from_response_weighted_radiance(wavelengths_m: ArrayLike, response: ArrayLike, radiance: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+'''
+
+UNIVERSE_STUB = '''
+class Universe:
+    """A homogeneous universe: validated parameters, derived constants and a distance table."""
+
+    def __new__(
+        cls,
+        h0_km_s_mpc: float,
+        omega_matter: float,
+        *,
+        omega_baryon: float = 0.0,
+        omega_curvature: float = 0.0,
+        cmb_temperature_k: float = 2.7255,
+        n_eff: float = 3.044,
+        neutrino_masses_ev: ArrayLike = (0.0, 0.0, 0.0),
+        w0: float = -1.0,
+        wa: float = 0.0,
+        helium_mass_fraction: float = 0.245,
+    ) -> Universe: ...
+    @property
+    def h0_km_s_mpc(self) -> float: ...
+    @property
+    def omega_matter(self) -> float: ...
+    @property
+    def omega_baryon(self) -> float: ...
+    @property
+    def omega_curvature(self) -> float: ...
+    @property
+    def cmb_temperature_k(self) -> float: ...
+    @property
+    def n_eff(self) -> float: ...
+    @property
+    def neutrino_masses_ev(self) -> tuple[float, float, float]: ...
+    @property
+    def w0(self) -> float: ...
+    @property
+    def wa(self) -> float: ...
+    @property
+    def helium_mass_fraction(self) -> float: ...
+    @property
+    def parameters(self) -> dict[str, Any]: ...
+    def __eq__(self, other: object) -> bool: ...
+    def __ne__(self, other: object) -> bool: ...
+    def __hash__(self) -> int: ...
+    def __reduce__(self) -> tuple[Any, tuple[type[Universe], dict[str, Any]]]: ...
+    def __copy__(self) -> Universe: ...
+    def __dask_tokenize__(self) -> tuple[str, tuple[tuple[str, Any], ...]]: ...
+    def __deepcopy__(self, memo: dict[int, Any]) -> Universe: ...
+'''
+
+HISTORY_STUB = '''
+HISTORY_NODES: Final[int]
+DEFAULT_HIGHEST_REDSHIFT: Final[float]
+LOWEST_HIGHEST_REDSHIFT: Final[float]
+HIGHEST_REIONIZATION_REDSHIFT: Final[float]
+SAHA_HIGHEST_REDSHIFT: Final[float]
+
+class ThermalHistory:
+    """The recombination and thermal history of a universe, computed once onto a fixed table."""
+
+    def __new__(
+        cls,
+        universe: Universe,
+        *,
+        reionization_redshift: float | None = None,
+        highest_redshift: float = 10000.0,
+    ) -> ThermalHistory: ...
+    @property
+    def universe(self) -> Universe: ...
+    @property
+    def reionization_redshift(self) -> float | None: ...
+    @property
+    def highest_redshift(self) -> float: ...
+    def __eq__(self, other: object) -> bool: ...
+    def __ne__(self, other: object) -> bool: ...
+    def __hash__(self) -> int: ...
+    def __reduce__(self) -> tuple[Any, tuple[type[ThermalHistory], Universe, float | None, float]]: ...
+    def __copy__(self) -> ThermalHistory: ...
+    def __deepcopy__(self, memo: dict[int, Any]) -> ThermalHistory: ...
+    def __dask_tokenize__(self) -> tuple[str, Any, float | None, float]: ...
+'''
+
+
+def _stub_overloads(fn: Function, indent: str) -> list[str]:
+    if fn.python == "property":
+        return [f"{indent}@property", f"{indent}def {fn.name}(self) -> float: ..."]
+    out = []
+    for kind, result, note in (("_Scalar", "float", "  # type: ignore[overload-overlap]"), ("ArrayLike", "_Array", "")):
+        params = ["self"] if fn.python == "method" else []
+        if fn.python == "function" and fn.receiver != "none":
+            params.append(f"{fn.receiver}: {CLASSES[fn.receiver][0]}")
+        params += [f"{a}: {kind}" for a in fn.arg_names]
+        out += [f"{indent}@overload",
+                f"{indent}def {fn.name}({', '.join(params)}, *, nan_on_error: bool = False) -> {result}: ...{note}"]
+    return out
+
+
+def stub(topic: str, fns: list[Function]) -> str:
+    test = {"blackbody": "test_faces.py", "cosmology": "test_cosmology_faces.py",
+            "decoupling": "test_decoupling_faces.py"}[topic]
+    typing = "final, overload" if topic == "blackbody" else "overload"
+    imports = "\nfrom relicore.cosmology import Universe\n" if topic == "decoupling" else ""
+    head = STUB_HEAD.format(topic=topic, test=test, typing=typing, imports=imports)
+    mine = [f for f in fns if f.topic == topic]
+    out = [banner("#", f"the type stubs of relicore.{topic}"), head.rstrip("\n")]
+    if topic == "blackbody":
+        out.append(BLACKBODY_STUB.rstrip("\n"))
+    for f in mine:
+        if f.python == "function":
+            out += _stub_overloads(f, "")
+    template = {"cosmology": UNIVERSE_STUB, "decoupling": HISTORY_STUB}.get(topic)
+    if template:
+        out.append(template.rstrip("\n"))
+        for f in mine:
+            if f.python != "function":
+                out += _stub_overloads(f, "    ")
+    out += ["", "__all__: Final[list[str]]"]
+    return "\n".join(out) + "\n"
+
+
+def outputs(fns: list[Function]) -> dict:
+    files = {PY / "src" / "generated.rs": rust(fns)}
+    for topic in ("blackbody", "cosmology", "decoupling"):
+        files[PACKAGE / f"_{topic}.py"] = python_module(topic, fns)
+        files[PACKAGE / f"{topic}.pyi"] = stub(topic, fns)
+    return files
