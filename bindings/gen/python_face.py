@@ -15,13 +15,16 @@ from __future__ import annotations
 
 from .common import banner
 from .rustdoc import find
-from .table import ROOT, Function
+from .table import RECEIVERS, ROOT, Function
 
 PY = ROOT / "bindings" / "python"
 PACKAGE = PY / "python" / "relicore"
 
-# the Python class of each receiver, where it lives, and its core type in generated.rs
-CLASSES = {"universe": ("Universe", "relicore.cosmology", "U"), "history": ("ThermalHistory", "relicore.decoupling", "H")}
+
+def python_class(receiver: str) -> str:
+    """The Python class of a receiver (the table's `python_class`)."""
+    return RECEIVERS[receiver].python_class
+
 CORE_PATH = {"blackbody": "relicore::blackbody", "cosmology": "relicore::cosmology", "decoupling": "relicore::decoupling"}
 
 
@@ -29,7 +32,7 @@ def label(fn: Function) -> str:
     """How the messages name the function."""
     if fn.python == "function":
         return fn.name
-    return f"{CLASSES[fn.receiver][0]}.{fn.name}"
+    return f"{python_class(fn.receiver)}.{fn.name}"
 
 
 def python_args(fn: Function) -> list[str]:
@@ -190,12 +193,12 @@ def python_module(topic: str, fns: list[Function]) -> str:
         "from relicore._elementwise import apply as _apply",
         "from relicore._elementwise import publish as _publish",
         "",
-        f"__all__ = {[f.name for f in functions] + [CLASSES[r][0] + 'Functions' for r in members]!r}",
+        f"__all__ = {[f.name for f in functions] + [python_class(r) + 'Functions' for r in members]!r}",
     ]
     for f in functions:
         out += ["", "", _py_function(f).rstrip("\n")]
     for receiver, group in members.items():
-        cls = CLASSES[receiver][0]
+        cls = python_class(receiver)
         out += [
             "",
             "",
@@ -211,7 +214,7 @@ def python_module(topic: str, fns: list[Function]) -> str:
     if names:
         out.append(f"_publish([{', '.join(names)}], {public!r})")
     for receiver in members:
-        cls = CLASSES[receiver][0]
+        cls = python_class(receiver)
         out.append(f"_publish({cls}Functions, {public!r}, {cls!r})")
     return "\n".join(out) + "\n"
 
@@ -361,7 +364,7 @@ def _stub_overloads(fn: Function, indent: str) -> list[str]:
     for kind, result, note in (("_Scalar", "float", "  # type: ignore[overload-overlap]"), ("ArrayLike", "_Array", "")):
         params = ["self"] if fn.python == "method" else []
         if fn.python == "function" and fn.receiver != "none":
-            params.append(f"{fn.receiver}: {CLASSES[fn.receiver][0]}")
+            params.append(f"{fn.receiver}: {python_class(fn.receiver)}")
         params += [f"{a}: {kind}" for a in fn.arg_names]
         out += [f"{indent}@overload",
                 f"{indent}def {fn.name}({', '.join(params)}, *, nan_on_error: bool = False) -> {result}: ...{note}"]
