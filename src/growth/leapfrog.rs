@@ -34,7 +34,11 @@ impl<T: Real> Universe<T> {
         }
         let mut in_a = |a: T| {
             let q = self.q_squared(a).sqrt();
-            if drift { T::one() / (a * q) } else { T::one() / q }
+            if drift {
+                T::one() / (a * q)
+            } else {
+                T::one() / q
+            }
         };
         let (v, err) = gauss_kronrod_15(&mut in_a, a1, a2);
         let value = if v.is_finite() && err <= T::c(1e-14).max(T::epsilon() * T::c(16.0)) * v.abs()
@@ -67,7 +71,11 @@ impl<T: Real> Universe<T> {
     /// Errors: `NonFinite(i)`, `NonPositive(i)`, `OutOfDomain(i)` above 1 (the universe is
     /// validated up to today only); `OutOfDomain(0)` when the integral is not representable.
     /// Accuracy: within 1e-12 relative (`f64`) of an mpmath quadrature (`tests/data/growth.txt`).
-    pub fn leapfrog_drift_factor_gyr(&self, start_scale_factor: T, end_scale_factor: T) -> Result<T> {
+    pub fn leapfrog_drift_factor_gyr(
+        &self,
+        start_scale_factor: T,
+        end_scale_factor: T,
+    ) -> Result<T> {
         let a1 = scale_factor(start_scale_factor, 0)?;
         let a2 = scale_factor(end_scale_factor, 1)?;
         self.leapfrog_integral(a1, a2, true)
@@ -76,7 +84,11 @@ impl<T: Real> Universe<T> {
     /// Kick factor of a comoving leapfrog step, ∫_{a1}^{a2} da/(a²H), Gyr (Quinn, Katz, Stadel
     /// & Lake 1997): the time a kick multiplies the comoving force by. Arguments, errors and
     /// accuracy as [`leapfrog_drift_factor_gyr`](Self::leapfrog_drift_factor_gyr).
-    pub fn leapfrog_kick_factor_gyr(&self, start_scale_factor: T, end_scale_factor: T) -> Result<T> {
+    pub fn leapfrog_kick_factor_gyr(
+        &self,
+        start_scale_factor: T,
+        end_scale_factor: T,
+    ) -> Result<T> {
         let a1 = scale_factor(start_scale_factor, 0)?;
         let a2 = scale_factor(end_scale_factor, 1)?;
         self.leapfrog_integral(a1, a2, false)

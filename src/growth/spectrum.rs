@@ -192,8 +192,8 @@ impl<T: Real> LinearPowerSpectrum<T> {
         }
         let wm = p.omega_matter * h2;
         let wb = p.omega_baryon * h2;
-        let transfer = EisensteinHu::new(wm, wb, p.cmb_temperature_k, 0)
-            .map_err(|_| Error::OutOfDomain(0))?;
+        let transfer =
+            EisensteinHu::new(wm, wb, p.cmb_temperature_k, 0).map_err(|_| Error::OutOfDomain(0))?;
         self.growth.clone_from(growth);
         self.transfer = transfer;
         self.form = match form {
@@ -415,7 +415,10 @@ impl<T: Real> LinearPowerSpectrum<T> {
     pub fn density_rms_in_sphere(&self, radius_mpc: T, z: T) -> Result<T> {
         let r = positive(radius_mpc, 0)?;
         let z = crate::check::non_negative(z, 1)?;
-        let d = self.growth.growth_factor(z).map_err(|_| Error::OutOfDomain(1))?;
+        let d = self
+            .growth
+            .growth_factor(z)
+            .map_err(|_| Error::OutOfDomain(1))?;
         let s = self.sigma_today(r).map_err(|e| match e {
             Error::NoConvergence => Error::NoConvergence,
             _ => Error::OutOfDomain(0),

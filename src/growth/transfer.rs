@@ -107,8 +107,7 @@ impl<T: Real> EisensteinHu<T> {
             // eq. 6: sound horizon
             e.s = c(2.0) / (c(3.0) * k_eq)
                 * (c(6.0) / r_eq).sqrt()
-                * (((T::one() + r_d).sqrt() + (r_d + r_eq).sqrt()) / (T::one() + r_eq.sqrt()))
-                    .ln();
+                * (((T::one() + r_d).sqrt() + (r_d + r_eq).sqrt()) / (T::one() + r_eq.sqrt())).ln();
             // eq. 7: Silk damping
             e.k_silk = c(1.6)
                 * pow(wb, c(0.52))
@@ -121,7 +120,8 @@ impl<T: Real> EisensteinHu<T> {
                 * (c(-6.0) * sy + (c(2.0) + c(3.0) * y) * ((sy + T::one()) / (sy - T::one())).ln());
             e.alpha_b = c(2.07) * k_eq * e.s * pow(T::one() + r_d, c(-0.75)) * g;
             // eq. 24: baryon shift; eq. 23: node shift
-            e.beta_b = c(0.5) + fb + (c(3.0) - c(2.0) * fb) * ((c(17.2) * wm).powi(2) + T::one()).sqrt();
+            e.beta_b =
+                c(0.5) + fb + (c(3.0) - c(2.0) * fb) * ((c(17.2) * wm).powi(2) + T::one()).sqrt();
             e.beta_node = c(8.41) * pow(wm, c(0.435));
         }
         for v in [
