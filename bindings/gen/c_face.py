@@ -98,11 +98,11 @@ def scalar_export(fn: Function, ty: str) -> str:
     if not fn.recv:
         body = f"scalar(out, || {call})"
     elif fn.infallible and fn.recv.summary:
-        body = f"{r}_summary({r}, out, |r| {call})"
+        body = f"stored_summary({r}, out, |r| {call})"
     elif fn.infallible:
-        body = f"{r}_scalar({r}, out, |r| Ok({call}))"
+        body = f"stored_scalar({r}, out, |r| Ok({call}))"
     else:
-        body = f"{r}_scalar({r}, out, |r| {call})"
+        body = f"stored_scalar({r}, out, |r| {call})"
     return "\n".join(
         _doc(lines)
         + [
@@ -177,7 +177,7 @@ def array_export(fn: Function, ty: str) -> str:
                 f"through_array({arr.name}, n, out, |x, out| {{ widest!(|{sig}| -> ArrayResult {{ {call} }}) }})"
             )
         else:
-            helper = f"{fn.receiver}_through_array"
+            helper = "stored_through_array"
             core_ty = f"{fn.recv.core_type}<{ty}>"
             sig = ", ".join([f"r: &{core_ty}", f"x: &[{ty}]"] + [f"{s}: {ty}" for s in shared] + [f"out: &mut [{ty}]"])
             call = _core_call(fn, ["x"] + shared + ["out"], "_array")
@@ -190,7 +190,7 @@ def array_export(fn: Function, ty: str) -> str:
         if fn.receiver == "none":
             body = f"elementwise({arr.name}, n, out, |x| {call})"
         else:
-            body = f"{fn.receiver}_array({fn.receiver}, {arr.name}, n, out, |r, x| {call})"
+            body = f"stored_array({fn.receiver}, {arr.name}, n, out, |r, x| {call})"
     del k
     return "\n".join(
         _doc(lines)
@@ -210,11 +210,11 @@ def _uses(fns: list[Function]) -> list[str]:
         "use crate::boundary::{elementwise, scalar, through_array};",
         "use relicore::ArrayResult;",
         "use relicore_dispatch::widest;",
+        "use crate::stored::{stored_array, stored_scalar, stored_summary, stored_through_array};",
     ]
     for rname in dict.fromkeys(f.receiver for f in fns if f.recv):
         r = next(f.recv for f in fns if f.receiver == rname)
-        helpers = ", ".join(f"{rname}_{h}" for h in ("scalar", "array", "through_array", "summary"))
-        out.append(f"use crate::{r.c_module}::{{{r.c_struct}, {helpers}}};")
+        out.append(f"use crate::{r.c_module}::{r.c_struct};")
         out.append(f"use {r.core_path};")
     return out
 

@@ -2,44 +2,22 @@
 //! last-scattering and drag redshifts, and the thermal history — the caller-owned
 //! `struct relicore_thermal_history` that holds a computed core `ThermalHistory<f64>`, its
 //! options struct, the function that computes it, its queries at a redshift and its summary.
-//! Array forms are in `decoupling_array`. The model and its references: the module doc of
-//! `relicore::decoupling`.
+//! The functions of a history are generated (`gen_decoupling`). The model and its references:
+//! the module doc of `relicore::decoupling`.
 //!
-//! Storage: `struct relicore_thermal_history` is a validity tag and
-//! `RELICORE_THERMAL_HISTORY_STORAGE_WORDS` 8-byte words, as `struct relicore_universe`.
-//! `relicore_thermal_history_compute` zeroes the words, computes the core value in place in them
-//! (`ThermalHistory::compute_in_place`: no large temporary on the stack) and then sets the tag;
-//! every other function refuses a struct whose tag is not the one compute writes. The core
-//! `ThermalHistory<f64>` is plain old data (`f64`, `u8` and `u32` fields and arrays, and a
-//! `Universe<f64>`, itself plain old data): every bit pattern, the all-zero one included, is a
-//! valid value, and it owns no resource. Compile-time assertions below check that it fits the
-//! words and needs no alignment above 8.
+//! Storage: tagged words (see `stored`); `relicore_thermal_history_compute` computes the core
+//! value in place in them (`ThermalHistory::compute_in_place`: no large temporary on the stack).
 
-use crate::boundary::{Failure, boundary, each, non_null, put, put_nan_n};
-use crate::status::{RELICORE_ERROR_INVALID_STRUCT, RELICORE_ERROR_OUT_OF_DOMAIN};
-use crate::universe::{relicore_universe, universe_ref};
-use core::mem::{align_of, size_of};
-use core::ptr::{addr_of, addr_of_mut};
+use crate::boundary::{Failure, boundary, non_null};
+use crate::status::RELICORE_ERROR_OUT_OF_DOMAIN;
+use crate::stored::{stored, stored_clear, stored_place, stored_ref, stored_seal};
+use crate::universe::relicore_universe;
 use relicore::decoupling::{DEFAULT_HIGHEST_REDSHIFT, HistoryOptions, ThermalHistory};
 
 /// Number of 8-byte words of storage in `struct relicore_thermal_history` (163840 bytes; the
 /// core history, 2048 table nodes of eight columns and a copy of the universe, takes about
 /// 144 KB of them, the rest is room to grow without changing the size of the struct).
 pub const RELICORE_THERMAL_HISTORY_STORAGE_WORDS: usize = 20480;
-
-const _: () = assert!(
-    size_of::<ThermalHistory<f64>>() <= RELICORE_THERMAL_HISTORY_STORAGE_WORDS * size_of::<u64>(),
-    "the core ThermalHistory<f64> no longer fits RELICORE_THERMAL_HISTORY_STORAGE_WORDS"
-);
-const _: () = assert!(
-    align_of::<ThermalHistory<f64>>() <= align_of::<u64>(),
-    "the core ThermalHistory<f64> needs an alignment above 8"
-);
-
-/// The tag of a computed history: "RELIHIST" in ASCII, mixed with the size of the core value,
-/// so that a struct written by a library with another layout is refused too.
-const HISTORY_TAG: u64 =
-    u64::from_be_bytes(*b"RELIHIST") ^ (size_of::<ThermalHistory<f64>>() as u64);
 
 /// The options of a thermal history, as `relicore_thermal_history_compute` takes them. Fill it
 /// with `relicore_thermal_history_options_default`, change what differs, then compute. A plain
@@ -104,130 +82,12 @@ pub struct relicore_thermal_history {
     pub storage: [u64; RELICORE_THERMAL_HISTORY_STORAGE_WORDS],
 }
 
-/// The core history inside `*p`, after the NULL and tag checks.
-///
-/// # Safety
-/// `p` is NULL or points to a readable `struct relicore_thermal_history` that nothing writes
-/// while the returned reference lives (in particular no output of the same call).
-#[inline(always)]
-pub(crate) unsafe fn history_ref<'a>(
-    p: *const relicore_thermal_history,
-) -> Result<&'a ThermalHistory<f64>, Failure> {
-    non_null(p)?;
-    // SAFETY: p is non-NULL and points to a readable struct (caller's contract).
-    let tag = unsafe { addr_of!((*p).tag).read() };
-    if tag != HISTORY_TAG {
-        return Err(Failure::Call(RELICORE_ERROR_INVALID_STRUCT));
-    }
-    // SAFETY: the tag says relicore_thermal_history_compute wrote a ThermalHistory<f64> at the
-    // start of the storage (possibly copied since, which keeps it valid: every field is plain
-    // old data, so any bit pattern is a valid value); the storage is aligned to 8 ≥ its
-    // alignment and large enough (compile-time assertions above); nothing writes it while the
-    // reference lives.
-    Ok(unsafe { &*addr_of!((*p).storage).cast::<ThermalHistory<f64>>() })
-}
-
-/// A query of a history with one `double` result: checks `history` and `out`, runs `f` and
-/// writes its value to `*out` (NaN on failure).
-///
-/// # Safety
-/// `history` is NULL or points to a readable `struct relicore_thermal_history`; `out` is NULL
-/// or valid for one write and does not point into `*history`.
-#[inline(always)]
-pub(crate) unsafe fn history_scalar(
-    history: *const relicore_thermal_history,
-    out: *mut f64,
-    f: impl FnOnce(&ThermalHistory<f64>) -> relicore::Result<f64>,
-) -> i32 {
-    boundary(
-        || {
-            non_null(out)?;
-            // SAFETY: NULL or readable, not written during the call (caller's contract).
-            let h = unsafe { history_ref(history) }?;
-            let v = f(h)?;
-            // SAFETY: out is non-NULL and writable (caller's contract).
-            unsafe { out.write(v) };
-            Ok(())
-        },
-        // SAFETY: out is NULL or writable (caller's contract).
-        || unsafe { put(out, f64::NAN) },
-    )
-}
-
-/// A summary value of a history (computed once by `relicore_thermal_history_compute`): written
-/// to `*out` when finite. A computed history holds finite summary values only, so a non-finite
-/// one means storage overwritten behind an intact tag: `RELICORE_ERROR_INVALID_STRUCT`.
-///
-/// # Safety
-/// As [`history_scalar`].
-#[inline(always)]
-pub(crate) unsafe fn history_summary(
-    history: *const relicore_thermal_history,
-    out: *mut f64,
-    f: impl FnOnce(&ThermalHistory<f64>) -> f64,
-) -> i32 {
-    boundary(
-        || {
-            non_null(out)?;
-            // SAFETY: NULL or readable, not written during the call (caller's contract).
-            let h = unsafe { history_ref(history) }?;
-            let v = f(h);
-            if !v.is_finite() {
-                return Err(Failure::Call(RELICORE_ERROR_INVALID_STRUCT));
-            }
-            // SAFETY: out is non-NULL and writable (caller's contract).
-            unsafe { out.write(v) };
-            Ok(())
-        },
-        // SAFETY: out is NULL or writable (caller's contract).
-        || unsafe { put(out, f64::NAN) },
-    )
-}
-
-/// The array form of a query of a history: `out[i] = f(history, x[i])` for i < n, element by
-/// element as [`crate::boundary::elementwise`] (failing elements NaN, first code returned); a
-/// NULL pointer or an invalid history fails the whole call (NaN to every element of a non-NULL
-/// `out`).
-///
-/// # Safety
-/// `history` is NULL or points to a readable `struct relicore_thermal_history`; `x` is NULL or
-/// valid for n reads, `out` NULL or valid for n writes (it may be `x`, it must not overlap
-/// `*history`).
-#[inline(always)]
-pub(crate) unsafe fn history_array(
-    history: *const relicore_thermal_history,
-    x: *const f64,
-    n: usize,
-    out: *mut f64,
-    f: impl Fn(&ThermalHistory<f64>, f64) -> relicore::Result<f64>,
-) -> i32 {
-    boundary(
-        || {
-            non_null(x)?;
-            non_null(out)?;
-            // SAFETY: NULL or readable, not written during the call (caller's contract).
-            let h = unsafe { history_ref(history) }?;
-            // SAFETY: x and out are non-NULL and valid for n elements (caller's contract).
-            unsafe { each(x, n, out, |xi| f(h, xi)) }
-        },
-        // SAFETY: out is NULL or valid for n writes (caller's contract).
-        || unsafe { put_nan_n(out, n) },
-    )
-}
-
-/// Clears `*out`: tag 0, every storage word 0.
-///
-/// # Safety
-/// `out` is NULL or valid for one write of `struct relicore_thermal_history`.
-unsafe fn clear(out: *mut relicore_thermal_history) {
-    if !out.is_null() {
-        // SAFETY: non-NULL and writable (caller's contract); u64 fields take any bits.
-        unsafe {
-            addr_of_mut!((*out).tag).write(0);
-            addr_of_mut!((*out).storage).write_bytes(0, 1);
-        }
-    }
-}
+stored!(
+    relicore_thermal_history,
+    ThermalHistory<f64>,
+    RELICORE_THERMAL_HISTORY_STORAGE_WORDS,
+    b"RELIHIST"
+);
 
 // ------------------------------------------------------------------------------------- Saha
 
@@ -321,24 +181,21 @@ pub unsafe extern "C" fn relicore_thermal_history_compute(
         || {
             non_null(out)?;
             // SAFETY: out is non-NULL and writable (this function's contract).
-            unsafe { clear(out) };
+            unsafe { stored_clear(out) };
             non_null(options)?;
             // the universe struct is checked before the options (as in every function)
             // SAFETY: NULL or readable, and not overlapping `out` (this function's contract).
-            let u = unsafe { universe_ref(universe) }?;
+            let u = unsafe { stored_ref(universe) }?;
             // SAFETY: non-NULL and readable (this function's contract).
             let opts = unsafe { options.read() }.to_core()?;
-            // SAFETY: the storage is now all zero bits, a valid ThermalHistory<f64> (plain old
-            // data: any bit pattern is a value), aligned and large enough (compile-time
-            // assertions); `out` is writable and nothing else refers to it during the call.
-            let h = unsafe { &mut *addr_of_mut!((*out).storage).cast::<ThermalHistory<f64>>() };
-            h.compute_in_place(u, opts)?;
+            // SAFETY: `out` is cleared, writable and nothing else refers to it during the call.
+            unsafe { stored_place(out) }.compute_in_place(u, opts)?;
             // SAFETY: out is non-NULL and writable. The tag is written last.
-            unsafe { addr_of_mut!((*out).tag).write(HISTORY_TAG) };
+            unsafe { stored_seal(out) };
             Ok(())
         },
         // SAFETY: out is NULL or writable (this function's contract).
-        || unsafe { clear(out) },
+        || unsafe { stored_clear(out) },
     )
 }
 
@@ -460,7 +317,7 @@ mod tests {
     fn compute_stores_the_core_history() {
         let u = universe(0.0493);
         // SAFETY: u was initialised.
-        let core_u: &Universe<f64> = unsafe { universe_ref(&*u) }.unwrap_or_else(|_| panic!());
+        let core_u: &Universe<f64> = unsafe { stored_ref(&*u) }.unwrap_or_else(|_| panic!());
         for reion in [None, Some(7.7)] {
             let mut o = options();
             if let Some(z) = reion {
@@ -594,7 +451,10 @@ mod tests {
             unsafe { relicore_thermal_history_compute(&*u, &good, &mut *h) },
             RELICORE_OK
         );
-        assert_eq!(h.tag, HISTORY_TAG);
+        assert_eq!(
+            h.tag,
+            <relicore_thermal_history as crate::stored::Stored>::TAG
+        );
         let no_baryons = universe(0.0);
         let cases: [(relicore_thermal_history_options, &relicore_universe, i32); 9] = [
             (
@@ -707,7 +567,7 @@ mod tests {
             RELICORE_ERROR_INVALID_STRUCT
         );
         assert!(v.is_nan());
-        h.tag = HISTORY_TAG ^ 1;
+        h.tag = <relicore_thermal_history as crate::stored::Stored>::TAG ^ 1;
         v = 1.0;
         // SAFETY: valid pointers.
         assert_eq!(
@@ -717,7 +577,7 @@ mod tests {
         assert!(v.is_nan());
         // a zeroed storage behind a valid tag: the summary values are 0, finite; a NaN one is
         // refused as overwritten storage
-        h.tag = HISTORY_TAG;
+        h.tag = <relicore_thermal_history as crate::stored::Stored>::TAG;
         // SAFETY: valid pointers.
         assert_eq!(unsafe { relicore_drag_redshift(&*h, &mut v) }, RELICORE_OK);
         h.storage.iter_mut().for_each(|w| *w = f64::NAN.to_bits());
@@ -740,7 +600,7 @@ mod tests {
     fn saha_and_fits_are_the_core_functions() {
         let u = universe(0.05);
         // SAFETY: u was initialised.
-        let core_u: &Universe<f64> = unsafe { universe_ref(&*u) }.unwrap_or_else(|_| panic!());
+        let core_u: &Universe<f64> = unsafe { stored_ref(&*u) }.unwrap_or_else(|_| panic!());
         for z in [0.0, 1000.0, 1500.0, 6000.0, 1e8, 1.1e8, -1.0, f64::NAN] {
             let mut v = 0.5;
             // SAFETY: valid pointers.

@@ -4,7 +4,8 @@
 
 //! The C exports of the regular cosmology functions: for each function of the table its `double` form, its `float` twin (`_f32`) and its array forms (`_array`, `_array_f32`) where the table lists them.
 
-use crate::universe::{relicore_universe, universe_array, universe_scalar, universe_through_array};
+use crate::stored::{stored_array, stored_scalar, stored_through_array};
+use crate::universe::relicore_universe;
 use relicore::ArrayResult;
 use relicore::cosmology::Universe;
 use relicore_dispatch::widest;
@@ -29,7 +30,7 @@ pub unsafe extern "C" fn relicore_hubble_distance_mpc(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| Ok(r.hubble_distance_mpc())) }
+    unsafe { stored_scalar(universe, out, |r| Ok(r.hubble_distance_mpc())) }
 }
 
 /// Hubble time 1/H0, Gyr (Julian years of 365.25 days; 13.97 Gyr for H0 = 70).
@@ -52,7 +53,7 @@ pub unsafe extern "C" fn relicore_hubble_time_gyr(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| Ok(r.hubble_time_gyr())) }
+    unsafe { stored_scalar(universe, out, |r| Ok(r.hubble_time_gyr())) }
 }
 
 /// Radiation density parameter today: photons plus massless neutrino species (massive
@@ -76,7 +77,7 @@ pub unsafe extern "C" fn relicore_omega_radiation(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| Ok(r.omega_radiation())) }
+    unsafe { stored_scalar(universe, out, |r| Ok(r.omega_radiation())) }
 }
 
 /// Dark-energy density parameter today, 1 − Ω_m − Ω_r − Ω_k.
@@ -99,7 +100,7 @@ pub unsafe extern "C" fn relicore_omega_dark_energy(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| Ok(r.omega_dark_energy())) }
+    unsafe { stored_scalar(universe, out, |r| Ok(r.omega_dark_energy())) }
 }
 
 /// Redshift of matter-radiation equality, Ω_cb/Ω_r − 1, with Ω_cb = cold dark matter plus
@@ -126,7 +127,7 @@ pub unsafe extern "C" fn relicore_matter_radiation_equality_redshift(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.matter_radiation_equality_redshift()) }
+    unsafe { stored_scalar(universe, out, |r| r.matter_radiation_equality_redshift()) }
 }
 
 /// Dimensionless Hubble rate E(z) = H(z)/H0, from the Friedmann equation
@@ -158,7 +159,7 @@ pub unsafe extern "C" fn relicore_dimensionless_hubble(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.dimensionless_hubble(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.dimensionless_hubble(z)) }
 }
 
 /// Array form of `relicore_dimensionless_hubble`: out[i] = dimensionless_hubble(universe,
@@ -193,7 +194,7 @@ pub unsafe extern "C" fn relicore_dimensionless_hubble_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_array(universe, redshifts, n, out, |r, x| {
+        stored_array(universe, redshifts, n, out, |r, x| {
             r.dimensionless_hubble(x)
         })
     }
@@ -222,7 +223,7 @@ pub unsafe extern "C" fn relicore_hubble_parameter_km_s_mpc(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.hubble_parameter_km_s_mpc(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.hubble_parameter_km_s_mpc(z)) }
 }
 
 /// Array form of `relicore_hubble_parameter_km_s_mpc`: out[i] = hubble_parameter_km_s_mpc(universe,
@@ -257,7 +258,7 @@ pub unsafe extern "C" fn relicore_hubble_parameter_km_s_mpc_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_array(universe, redshifts, n, out, |r, x| {
+        stored_array(universe, redshifts, n, out, |r, x| {
             r.hubble_parameter_km_s_mpc(x)
         })
     }
@@ -287,7 +288,7 @@ pub unsafe extern "C" fn relicore_omega_matter_at(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.omega_matter_at(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.omega_matter_at(z)) }
 }
 
 /// Array form of `relicore_omega_matter_at`: out[i] = omega_matter_at(universe, redshifts[i]) for i
@@ -321,7 +322,7 @@ pub unsafe extern "C" fn relicore_omega_matter_at_array(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
-    unsafe { universe_array(universe, redshifts, n, out, |r, x| r.omega_matter_at(x)) }
+    unsafe { stored_array(universe, redshifts, n, out, |r, x| r.omega_matter_at(x)) }
 }
 
 /// Radiation density parameter at z (photons and massless neutrino species). Errors as
@@ -347,7 +348,7 @@ pub unsafe extern "C" fn relicore_omega_radiation_at(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.omega_radiation_at(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.omega_radiation_at(z)) }
 }
 
 /// Array form of `relicore_omega_radiation_at`: out[i] = omega_radiation_at(universe, redshifts[i])
@@ -381,7 +382,7 @@ pub unsafe extern "C" fn relicore_omega_radiation_at_array(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
-    unsafe { universe_array(universe, redshifts, n, out, |r, x| r.omega_radiation_at(x)) }
+    unsafe { stored_array(universe, redshifts, n, out, |r, x| r.omega_radiation_at(x)) }
 }
 
 /// Dark-energy density parameter at z. Errors as
@@ -407,7 +408,7 @@ pub unsafe extern "C" fn relicore_omega_dark_energy_at(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.omega_dark_energy_at(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.omega_dark_energy_at(z)) }
 }
 
 /// Array form of `relicore_omega_dark_energy_at`: out[i] = omega_dark_energy_at(universe,
@@ -442,7 +443,7 @@ pub unsafe extern "C" fn relicore_omega_dark_energy_at_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_array(universe, redshifts, n, out, |r, x| {
+        stored_array(universe, redshifts, n, out, |r, x| {
             r.omega_dark_energy_at(x)
         })
     }
@@ -471,7 +472,7 @@ pub unsafe extern "C" fn relicore_omega_curvature_at(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.omega_curvature_at(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.omega_curvature_at(z)) }
 }
 
 /// Array form of `relicore_omega_curvature_at`: out[i] = omega_curvature_at(universe, redshifts[i])
@@ -505,7 +506,7 @@ pub unsafe extern "C" fn relicore_omega_curvature_at_array(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
-    unsafe { universe_array(universe, redshifts, n, out, |r, x| r.omega_curvature_at(x)) }
+    unsafe { stored_array(universe, redshifts, n, out, |r, x| r.omega_curvature_at(x)) }
 }
 
 /// Critical density at z, ρ_c(z) = 3H(z)²/(8πG), kg m⁻³ (G from CODATA 2022). Errors as
@@ -531,7 +532,7 @@ pub unsafe extern "C" fn relicore_critical_density_kg_m3(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.critical_density_kg_m3(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.critical_density_kg_m3(z)) }
 }
 
 /// Array form of `relicore_critical_density_kg_m3`: out[i] = critical_density_kg_m3(universe,
@@ -566,7 +567,7 @@ pub unsafe extern "C" fn relicore_critical_density_kg_m3_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_array(universe, redshifts, n, out, |r, x| {
+        stored_array(universe, redshifts, n, out, |r, x| {
             r.critical_density_kg_m3(x)
         })
     }
@@ -595,7 +596,7 @@ pub unsafe extern "C" fn relicore_cmb_temperature_at_k(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.cmb_temperature_at_k(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.cmb_temperature_at_k(z)) }
 }
 
 /// Array form of `relicore_cmb_temperature_at_k`: out[i] = cmb_temperature_at_k(universe,
@@ -630,7 +631,7 @@ pub unsafe extern "C" fn relicore_cmb_temperature_at_k_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_array(universe, redshifts, n, out, |r, x| {
+        stored_array(universe, redshifts, n, out, |r, x| {
             r.cmb_temperature_at_k(x)
         })
     }
@@ -666,7 +667,7 @@ pub unsafe extern "C" fn relicore_comoving_distance_mpc(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.comoving_distance_mpc(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.comoving_distance_mpc(z)) }
 }
 
 /// Array form of `relicore_comoving_distance_mpc`: out[i] = comoving_distance_mpc(universe,
@@ -701,7 +702,7 @@ pub unsafe extern "C" fn relicore_comoving_distance_mpc_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_through_array(universe, redshifts, n, out, |r, x, out| {
+        stored_through_array(universe, redshifts, n, out, |r, x, out| {
             widest!(
                 |r: &Universe<f64>, x: &[f64], out: &mut [f64]| -> ArrayResult {
                     r.comoving_distance_mpc_array(x, out)
@@ -736,7 +737,7 @@ pub unsafe extern "C" fn relicore_transverse_comoving_distance_mpc(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.transverse_comoving_distance_mpc(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.transverse_comoving_distance_mpc(z)) }
 }
 
 /// Array form of `relicore_transverse_comoving_distance_mpc`: out[i] =
@@ -771,7 +772,7 @@ pub unsafe extern "C" fn relicore_transverse_comoving_distance_mpc_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_through_array(universe, redshifts, n, out, |r, x, out| {
+        stored_through_array(universe, redshifts, n, out, |r, x, out| {
             widest!(
                 |r: &Universe<f64>, x: &[f64], out: &mut [f64]| -> ArrayResult {
                     r.transverse_comoving_distance_mpc_array(x, out)
@@ -804,7 +805,7 @@ pub unsafe extern "C" fn relicore_angular_diameter_distance_mpc(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.angular_diameter_distance_mpc(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.angular_diameter_distance_mpc(z)) }
 }
 
 /// Array form of `relicore_angular_diameter_distance_mpc`: out[i] =
@@ -839,7 +840,7 @@ pub unsafe extern "C" fn relicore_angular_diameter_distance_mpc_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_through_array(universe, redshifts, n, out, |r, x, out| {
+        stored_through_array(universe, redshifts, n, out, |r, x, out| {
             widest!(
                 |r: &Universe<f64>, x: &[f64], out: &mut [f64]| -> ArrayResult {
                     r.angular_diameter_distance_mpc_array(x, out)
@@ -872,7 +873,7 @@ pub unsafe extern "C" fn relicore_luminosity_distance_mpc(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.luminosity_distance_mpc(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.luminosity_distance_mpc(z)) }
 }
 
 /// Array form of `relicore_luminosity_distance_mpc`: out[i] = luminosity_distance_mpc(universe,
@@ -907,7 +908,7 @@ pub unsafe extern "C" fn relicore_luminosity_distance_mpc_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_through_array(universe, redshifts, n, out, |r, x, out| {
+        stored_through_array(universe, redshifts, n, out, |r, x, out| {
             widest!(
                 |r: &Universe<f64>, x: &[f64], out: &mut [f64]| -> ArrayResult {
                     r.luminosity_distance_mpc_array(x, out)
@@ -942,7 +943,7 @@ pub unsafe extern "C" fn relicore_distance_modulus(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.distance_modulus(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.distance_modulus(z)) }
 }
 
 /// Array form of `relicore_distance_modulus`: out[i] = distance_modulus(universe, redshifts[i]) for
@@ -976,7 +977,7 @@ pub unsafe extern "C" fn relicore_distance_modulus_array(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
-    unsafe { universe_array(universe, redshifts, n, out, |r, x| r.distance_modulus(x)) }
+    unsafe { stored_array(universe, redshifts, n, out, |r, x| r.distance_modulus(x)) }
 }
 
 /// Comoving volume inside redshift z over the whole sky, Gpc³ (Hogg 1999 eq. 29), written
@@ -1006,7 +1007,7 @@ pub unsafe extern "C" fn relicore_comoving_volume_gpc3(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.comoving_volume_gpc3(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.comoving_volume_gpc3(z)) }
 }
 
 /// Array form of `relicore_comoving_volume_gpc3`: out[i] = comoving_volume_gpc3(universe,
@@ -1041,7 +1042,7 @@ pub unsafe extern "C" fn relicore_comoving_volume_gpc3_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_array(universe, redshifts, n, out, |r, x| {
+        stored_array(universe, redshifts, n, out, |r, x| {
             r.comoving_volume_gpc3(x)
         })
     }
@@ -1070,7 +1071,7 @@ pub unsafe extern "C" fn relicore_differential_comoving_volume_mpc3_sr(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.differential_comoving_volume_mpc3_sr(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.differential_comoving_volume_mpc3_sr(z)) }
 }
 
 /// Array form of `relicore_differential_comoving_volume_mpc3_sr`: out[i] =
@@ -1105,7 +1106,7 @@ pub unsafe extern "C" fn relicore_differential_comoving_volume_mpc3_sr_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_array(universe, redshifts, n, out, |r, x| {
+        stored_array(universe, redshifts, n, out, |r, x| {
             r.differential_comoving_volume_mpc3_sr(x)
         })
     }
@@ -1134,7 +1135,7 @@ pub unsafe extern "C" fn relicore_transverse_scale_kpc_per_arcsec(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.transverse_scale_kpc_per_arcsec(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.transverse_scale_kpc_per_arcsec(z)) }
 }
 
 /// Array form of `relicore_transverse_scale_kpc_per_arcsec`: out[i] =
@@ -1169,7 +1170,7 @@ pub unsafe extern "C" fn relicore_transverse_scale_kpc_per_arcsec_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_array(universe, redshifts, n, out, |r, x| {
+        stored_array(universe, redshifts, n, out, |r, x| {
             r.transverse_scale_kpc_per_arcsec(x)
         })
     }
@@ -1202,7 +1203,7 @@ pub unsafe extern "C" fn relicore_lookback_time_gyr(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.lookback_time_gyr(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.lookback_time_gyr(z)) }
 }
 
 /// Array form of `relicore_lookback_time_gyr`: out[i] = lookback_time_gyr(universe, redshifts[i])
@@ -1236,7 +1237,7 @@ pub unsafe extern "C" fn relicore_lookback_time_gyr_array(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
-    unsafe { universe_array(universe, redshifts, n, out, |r, x| r.lookback_time_gyr(x)) }
+    unsafe { stored_array(universe, redshifts, n, out, |r, x| r.lookback_time_gyr(x)) }
 }
 
 /// Age of the universe at redshift z, (1/H0) ∫_z^∞ dz'/((1+z')E(z')), Gyr.
@@ -1268,7 +1269,7 @@ pub unsafe extern "C" fn relicore_age_gyr(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.age_gyr(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.age_gyr(z)) }
 }
 
 /// Array form of `relicore_age_gyr`: out[i] = age_gyr(universe, redshifts[i]) for i < n.
@@ -1301,7 +1302,7 @@ pub unsafe extern "C" fn relicore_age_gyr_array(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
-    unsafe { universe_array(universe, redshifts, n, out, |r, x| r.age_gyr(x)) }
+    unsafe { stored_array(universe, redshifts, n, out, |r, x| r.age_gyr(x)) }
 }
 
 /// Conformal time at z times c, c·η(z) = (c/H0) ∫_z^∞ dz'/E(z'), Mpc: the comoving horizon.
@@ -1332,7 +1333,7 @@ pub unsafe extern "C" fn relicore_conformal_time_mpc(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.conformal_time_mpc(z)) }
+    unsafe { stored_scalar(universe, out, |r| r.conformal_time_mpc(z)) }
 }
 
 /// Array form of `relicore_conformal_time_mpc`: out[i] = conformal_time_mpc(universe, redshifts[i])
@@ -1366,7 +1367,7 @@ pub unsafe extern "C" fn relicore_conformal_time_mpc_array(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
-    unsafe { universe_array(universe, redshifts, n, out, |r, x| r.conformal_time_mpc(x)) }
+    unsafe { stored_array(universe, redshifts, n, out, |r, x| r.conformal_time_mpc(x)) }
 }
 
 /// Angular-diameter distance of an object at z2 seen from z1 ≤ z2, D_M(χ2 − χ1)/(1 + z2),
@@ -1398,7 +1399,7 @@ pub unsafe extern "C" fn relicore_angular_diameter_distance_between_mpc(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
-        universe_scalar(universe, out, |r| {
+        stored_scalar(universe, out, |r| {
             r.angular_diameter_distance_between_mpc(z1, z2)
         })
     }
@@ -1431,7 +1432,7 @@ pub unsafe extern "C" fn relicore_redshift_at_age_gyr(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { universe_scalar(universe, out, |r| r.redshift_at_age_gyr(age_gyr)) }
+    unsafe { stored_scalar(universe, out, |r| r.redshift_at_age_gyr(age_gyr)) }
 }
 
 /// Array form of `relicore_redshift_at_age_gyr`: out[i] = redshift_at_age_gyr(universe,
@@ -1465,7 +1466,7 @@ pub unsafe extern "C" fn relicore_redshift_at_age_gyr_array(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
-    unsafe { universe_array(universe, ages_gyr, n, out, |r, x| r.redshift_at_age_gyr(x)) }
+    unsafe { stored_array(universe, ages_gyr, n, out, |r, x| r.redshift_at_age_gyr(x)) }
 }
 
 /// Redshift at which the lookback time equals `lookback_gyr`.
@@ -1496,7 +1497,7 @@ pub unsafe extern "C" fn relicore_redshift_at_lookback_time_gyr(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
-        universe_scalar(universe, out, |r| {
+        stored_scalar(universe, out, |r| {
             r.redshift_at_lookback_time_gyr(lookback_gyr)
         })
     }
@@ -1535,7 +1536,7 @@ pub unsafe extern "C" fn relicore_redshift_at_lookback_time_gyr_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_array(universe, lookback_times_gyr, n, out, |r, x| {
+        stored_array(universe, lookback_times_gyr, n, out, |r, x| {
             r.redshift_at_lookback_time_gyr(x)
         })
     }
@@ -1569,7 +1570,7 @@ pub unsafe extern "C" fn relicore_redshift_at_comoving_distance_mpc(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
-        universe_scalar(universe, out, |r| {
+        stored_scalar(universe, out, |r| {
             r.redshift_at_comoving_distance_mpc(distance_mpc)
         })
     }
@@ -1607,7 +1608,7 @@ pub unsafe extern "C" fn relicore_redshift_at_comoving_distance_mpc_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_array(universe, distances_mpc, n, out, |r, x| {
+        stored_array(universe, distances_mpc, n, out, |r, x| {
             r.redshift_at_comoving_distance_mpc(x)
         })
     }
@@ -1642,7 +1643,7 @@ pub unsafe extern "C" fn relicore_redshift_at_luminosity_distance_mpc(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
-        universe_scalar(universe, out, |r| {
+        stored_scalar(universe, out, |r| {
             r.redshift_at_luminosity_distance_mpc(distance_mpc)
         })
     }
@@ -1680,7 +1681,7 @@ pub unsafe extern "C" fn relicore_redshift_at_luminosity_distance_mpc_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_array(universe, distances_mpc, n, out, |r, x| {
+        stored_array(universe, distances_mpc, n, out, |r, x| {
             r.redshift_at_luminosity_distance_mpc(x)
         })
     }

@@ -5,8 +5,9 @@
 //! The C exports of the regular decoupling functions: for each function of the table its `double` form, its `float` twin (`_f32`) and its array forms (`_array`, `_array_f32`) where the table lists them.
 
 use crate::boundary::{elementwise, scalar};
-use crate::decoupling::{history_array, history_scalar, history_summary, relicore_thermal_history};
-use crate::universe::{relicore_universe, universe_array, universe_scalar};
+use crate::decoupling::relicore_thermal_history;
+use crate::stored::{stored_array, stored_scalar, stored_summary};
+use crate::universe::relicore_universe;
 
 /// Ionised fraction x_e = n_e/n_H in Saha equilibrium at redshift z: hydrogen and both helium
 /// stages (He I → He II → He III) in equilibrium with the radiation at T_r = T0 (1+z), coupled
@@ -48,7 +49,7 @@ pub unsafe extern "C" fn relicore_saha_ionized_fraction(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
     unsafe {
-        universe_scalar(universe, out, |r| {
+        stored_scalar(universe, out, |r| {
             relicore::decoupling::saha_ionized_fraction(r, z)
         })
     }
@@ -86,7 +87,7 @@ pub unsafe extern "C" fn relicore_saha_ionized_fraction_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        universe_array(universe, redshifts, n, out, |r, x| {
+        stored_array(universe, redshifts, n, out, |r, x| {
             relicore::decoupling::saha_ionized_fraction(r, x)
         })
     }
@@ -267,7 +268,7 @@ pub unsafe extern "C" fn relicore_ionized_fraction(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { history_scalar(history, out, |r| r.ionized_fraction(z)) }
+    unsafe { stored_scalar(history, out, |r| r.ionized_fraction(z)) }
 }
 
 /// Array form of `relicore_ionized_fraction`: out[i] = ionized_fraction(history, redshifts[i]) for
@@ -301,7 +302,7 @@ pub unsafe extern "C" fn relicore_ionized_fraction_array(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
-    unsafe { history_array(history, redshifts, n, out, |r, x| r.ionized_fraction(x)) }
+    unsafe { stored_array(history, redshifts, n, out, |r, x| r.ionized_fraction(x)) }
 }
 
 /// Matter (gas) temperature T_m at redshift z, K (reionisation heating is not modelled).
@@ -328,7 +329,7 @@ pub unsafe extern "C" fn relicore_matter_temperature_k(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { history_scalar(history, out, |r| r.matter_temperature_k(z)) }
+    unsafe { stored_scalar(history, out, |r| r.matter_temperature_k(z)) }
 }
 
 /// Array form of `relicore_matter_temperature_k`: out[i] = matter_temperature_k(history,
@@ -362,7 +363,7 @@ pub unsafe extern "C" fn relicore_matter_temperature_k_array(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
-    unsafe { history_array(history, redshifts, n, out, |r, x| r.matter_temperature_k(x)) }
+    unsafe { stored_array(history, redshifts, n, out, |r, x| r.matter_temperature_k(x)) }
 }
 
 /// Thomson optical depth from today to redshift z, τ = ∫₀^z n_e σ_T c dz'/((1+z')H),
@@ -391,7 +392,7 @@ pub unsafe extern "C" fn relicore_optical_depth(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { history_scalar(history, out, |r| r.optical_depth(z)) }
+    unsafe { stored_scalar(history, out, |r| r.optical_depth(z)) }
 }
 
 /// Array form of `relicore_optical_depth`: out[i] = optical_depth(history, redshifts[i]) for i < n.
@@ -424,7 +425,7 @@ pub unsafe extern "C" fn relicore_optical_depth_array(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
-    unsafe { history_array(history, redshifts, n, out, |r, x| r.optical_depth(x)) }
+    unsafe { stored_array(history, redshifts, n, out, |r, x| r.optical_depth(x)) }
 }
 
 /// Visibility function per unit conformal distance, g = −dτ/dη e^{−τ} = n_e σ_T a e^{−τ},
@@ -453,7 +454,7 @@ pub unsafe extern "C" fn relicore_visibility(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { history_scalar(history, out, |r| r.visibility(z)) }
+    unsafe { stored_scalar(history, out, |r| r.visibility(z)) }
 }
 
 /// Array form of `relicore_visibility`: out[i] = visibility(history, redshifts[i]) for i < n.
@@ -486,7 +487,7 @@ pub unsafe extern "C" fn relicore_visibility_array(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
-    unsafe { history_array(history, redshifts, n, out, |r, x| r.visibility(x)) }
+    unsafe { stored_array(history, redshifts, n, out, |r, x| r.visibility(x)) }
 }
 
 /// Comoving sound horizon r_s(z) = ∫_z^∞ c_s dz'/H(z'), c_s = c/√(3(1+R)),
@@ -516,7 +517,7 @@ pub unsafe extern "C" fn relicore_sound_horizon_mpc(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { history_scalar(history, out, |r| r.sound_horizon_mpc(z)) }
+    unsafe { stored_scalar(history, out, |r| r.sound_horizon_mpc(z)) }
 }
 
 /// Array form of `relicore_sound_horizon_mpc`: out[i] = sound_horizon_mpc(history, redshifts[i])
@@ -550,7 +551,7 @@ pub unsafe extern "C" fn relicore_sound_horizon_mpc_array(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
-    unsafe { history_array(history, redshifts, n, out, |r, x| r.sound_horizon_mpc(x)) }
+    unsafe { stored_array(history, redshifts, n, out, |r, x| r.sound_horizon_mpc(x)) }
 }
 
 /// Redshift of last scattering z*, where the Thomson optical depth (reionisation excluded)
@@ -574,7 +575,7 @@ pub unsafe extern "C" fn relicore_last_scattering_redshift(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { history_summary(history, out, |r| r.last_scattering_redshift()) }
+    unsafe { stored_summary(history, out, |r| r.last_scattering_redshift()) }
 }
 
 /// Redshift of the drag epoch, where the baryon-drag optical depth reaches 1.
@@ -597,7 +598,7 @@ pub unsafe extern "C" fn relicore_drag_redshift(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { history_summary(history, out, |r| r.drag_redshift()) }
+    unsafe { stored_summary(history, out, |r| r.drag_redshift()) }
 }
 
 /// Comoving sound horizon at last scattering r_s(z*), Mpc.
@@ -620,7 +621,7 @@ pub unsafe extern "C" fn relicore_sound_horizon_last_scattering_mpc(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { history_summary(history, out, |r| r.sound_horizon_last_scattering_mpc()) }
+    unsafe { stored_summary(history, out, |r| r.sound_horizon_last_scattering_mpc()) }
 }
 
 /// Comoving sound horizon at the drag epoch r_s(z_drag), Mpc.
@@ -643,7 +644,7 @@ pub unsafe extern "C" fn relicore_sound_horizon_drag_mpc(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { history_summary(history, out, |r| r.sound_horizon_drag_mpc()) }
+    unsafe { stored_summary(history, out, |r| r.sound_horizon_drag_mpc()) }
 }
 
 /// Angular scale of the sound horizon at last scattering θ* = r_s(z*)/D_M(z*), radians.
@@ -666,7 +667,7 @@ pub unsafe extern "C" fn relicore_angular_scale_last_scattering(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { history_summary(history, out, |r| r.angular_scale_last_scattering()) }
+    unsafe { stored_summary(history, out, |r| r.angular_scale_last_scattering()) }
 }
 
 /// Age of the universe at last scattering, years (Julian).
@@ -689,7 +690,7 @@ pub unsafe extern "C" fn relicore_age_at_last_scattering_yr(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { history_summary(history, out, |r| r.age_at_last_scattering_yr()) }
+    unsafe { stored_summary(history, out, |r| r.age_at_last_scattering_yr()) }
 }
 
 /// Radiation temperature at last scattering T0 (1 + z*), K.
@@ -712,7 +713,7 @@ pub unsafe extern "C" fn relicore_temperature_at_last_scattering_k(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { history_summary(history, out, |r| r.temperature_at_last_scattering_k()) }
+    unsafe { stored_summary(history, out, |r| r.temperature_at_last_scattering_k()) }
 }
 
 /// Redshift of the peak of the visibility function (per conformal time) at recombination.
@@ -735,7 +736,7 @@ pub unsafe extern "C" fn relicore_visibility_peak_redshift(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { history_summary(history, out, |r| r.visibility_peak_redshift()) }
+    unsafe { stored_summary(history, out, |r| r.visibility_peak_redshift()) }
 }
 
 /// Thermal decoupling: the highest redshift at which the matter temperature has fallen 1 %
@@ -759,7 +760,7 @@ pub unsafe extern "C" fn relicore_thermal_decoupling_redshift(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { history_summary(history, out, |r| r.thermal_decoupling_redshift()) }
+    unsafe { stored_summary(history, out, |r| r.thermal_decoupling_redshift()) }
 }
 
 /// Thomson optical depth of reionisation (0 without reionisation).
@@ -782,5 +783,5 @@ pub unsafe extern "C" fn relicore_reionization_optical_depth(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { history_summary(history, out, |r| r.reionization_optical_depth()) }
+    unsafe { stored_summary(history, out, |r| r.reionization_optical_depth()) }
 }

@@ -16,7 +16,8 @@
 //!   artefacts are built with panic = "abort");
 //! * nothing allocates, nothing keeps global state: every function is thread-safe.
 //!
-//! Module map: `status` (codes, messages, version), `constants` (physical constants),
+//! Module map: `status` (codes, messages, version), the generated `gen_constants` (physical
+//! constants, from `src/constants.rs`),
 //! `boundary` (plumbing), `calibration` (two-load calibration), `response` (response-weighted
 //! radiance), `universe` (the universe struct, its init function and parameters),
 //! `decoupling` (the thermal-history struct and its compute function), and the generated
@@ -39,9 +40,11 @@
 // kept apart so rustfmt does not sort them.
 pub mod status;
 
-pub mod constants;
+pub mod gen_constants;
 
 mod boundary;
+
+mod stored;
 
 pub mod gen_blackbody;
 

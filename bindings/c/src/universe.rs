@@ -1,19 +1,10 @@
 //! The universe: its parameter struct, the caller-owned `struct relicore_universe` that holds a
-//! validated core `Universe<f64>`, its init function, the parameter check and the constants of
-//! a universe. The redshift functions are in `cosmology`, their array forms in
-//! `cosmology_array`; both reach the universe through [`universe_ref`].
-//!
-//! Storage: `struct relicore_universe` is a validity tag and `RELICORE_UNIVERSE_STORAGE_WORDS`
-//! 8-byte words. `relicore_universe_init` writes the core value into the words (the core
-//! `Universe<f64>` is plain old data: `f64`, `usize` and `u8` fields only, so every bit pattern
-//! is a valid value, and it owns no resource) and then sets the tag; every other function
-//! refuses a struct whose tag is not the one init writes. Compile-time assertions below check
-//! that the core value fits the words and needs no alignment above 8.
+//! validated core `Universe<f64>` (tagged storage words, see `stored`), its init function and
+//! the parameter check. The functions of a universe are generated (`gen_cosmology`).
 
 use crate::boundary::{Failure, NotANumber, boundary, non_null, put};
-use crate::status::{RELICORE_ERROR_INVALID_STRUCT, status_of};
-use core::mem::{align_of, size_of};
-use core::ptr::{addr_of, addr_of_mut};
+use crate::status::status_of;
+use crate::stored::{stored, stored_clear, stored_place, stored_ref, stored_seal};
 use relicore::Error;
 use relicore::cosmology::{Universe, UniverseParameters};
 
@@ -21,19 +12,6 @@ use relicore::cosmology::{Universe, UniverseParameters};
 /// universe, a fixed-size distance table included, takes about 12.8 KB of them, the rest is
 /// room to grow without changing the size of the struct).
 pub const RELICORE_UNIVERSE_STORAGE_WORDS: usize = 1920;
-
-const _: () = assert!(
-    size_of::<Universe<f64>>() <= RELICORE_UNIVERSE_STORAGE_WORDS * size_of::<u64>(),
-    "the core Universe<f64> no longer fits RELICORE_UNIVERSE_STORAGE_WORDS"
-);
-const _: () = assert!(
-    align_of::<Universe<f64>>() <= align_of::<u64>(),
-    "the core Universe<f64> needs an alignment above 8"
-);
-
-/// The tag of an initialised universe: "RELIUNIV" in ASCII, mixed with the size of the core
-/// value, so that a struct written by a library with another layout is refused too.
-const UNIVERSE_TAG: u64 = u64::from_be_bytes(*b"RELIUNIV") ^ (size_of::<Universe<f64>>() as u64);
 
 /// The parameters of a universe, as `relicore_universe_init` takes them. Fill it with
 /// `relicore_universe_parameters_default` (common-practice defaults for everything but H0 and
@@ -141,126 +119,12 @@ pub struct relicore_universe {
     pub storage: [u64; RELICORE_UNIVERSE_STORAGE_WORDS],
 }
 
-/// The core universe inside `*p`, after the NULL and tag checks.
-///
-/// # Safety
-/// `p` is NULL or points to a readable `struct relicore_universe` that nothing writes while
-/// the returned reference lives (in particular no output of the same call).
-#[inline(always)]
-pub(crate) unsafe fn universe_ref<'a>(
-    p: *const relicore_universe,
-) -> Result<&'a Universe<f64>, Failure> {
-    non_null(p)?;
-    // SAFETY: p is non-NULL and points to a readable struct (caller's contract).
-    let tag = unsafe { addr_of!((*p).tag).read() };
-    if tag != UNIVERSE_TAG {
-        return Err(Failure::Call(RELICORE_ERROR_INVALID_STRUCT));
-    }
-    // SAFETY: the tag says relicore_universe_init wrote a Universe<f64> at the start of the
-    // storage (possibly copied since, which keeps it valid: every field is plain old data, so
-    // any bit pattern is a valid value); the storage is aligned to 8 ≥ its alignment and large
-    // enough (compile-time assertions above); nothing writes it while the reference lives.
-    Ok(unsafe { &*addr_of!((*p).storage).cast::<Universe<f64>>() })
-}
-
-/// A call on a universe with one `double` result: checks `universe` and `out`, runs `f` and
-/// writes its value to `*out` (NaN on failure).
-///
-/// # Safety
-/// `universe` is NULL or points to a readable `struct relicore_universe`; `out` is NULL or
-/// valid for one write and does not point into `*universe`.
-#[inline(always)]
-pub(crate) unsafe fn universe_scalar(
-    universe: *const relicore_universe,
-    out: *mut f64,
-    f: impl FnOnce(&Universe<f64>) -> relicore::Result<f64>,
-) -> i32 {
-    boundary(
-        || {
-            non_null(out)?;
-            // SAFETY: NULL or readable, not written during the call (caller's contract).
-            let u = unsafe { universe_ref(universe) }?;
-            let v = f(u)?;
-            // SAFETY: out is non-NULL and writable (caller's contract).
-            unsafe { out.write(v) };
-            Ok(())
-        },
-        // SAFETY: out is NULL or writable (caller's contract).
-        || unsafe { put(out, f64::NAN) },
-    )
-}
-
-/// The array form of a one-argument universe call: `out[i] = f(universe, x[i])` for i < n,
-/// element by element as [`crate::boundary::elementwise`] (failing elements NaN, first code
-/// returned); a NULL pointer or an invalid universe fails the whole call (NaN to every element
-/// of a non-NULL `out`).
-///
-/// # Safety
-/// `universe` is NULL or points to a readable `struct relicore_universe`; `x` is NULL or valid
-/// for n reads, `out` NULL or valid for n writes (it may be `x`, it must not overlap
-/// `*universe`).
-#[inline(always)]
-pub(crate) unsafe fn universe_array(
-    universe: *const relicore_universe,
-    x: *const f64,
-    n: usize,
-    out: *mut f64,
-    f: impl Fn(&Universe<f64>, f64) -> relicore::Result<f64>,
-) -> i32 {
-    boundary(
-        || {
-            non_null(x)?;
-            non_null(out)?;
-            // SAFETY: NULL or readable, not written during the call (caller's contract).
-            let u = unsafe { universe_ref(universe) }?;
-            // SAFETY: x and out are non-NULL and valid for n elements (caller's contract).
-            unsafe { crate::boundary::each(x, n, out, |xi| f(u, xi)) }
-        },
-        // SAFETY: out is NULL or valid for n writes (caller's contract).
-        || unsafe { crate::boundary::put_nan_n(out, n) },
-    )
-}
-
-/// [`universe_array`] through one of the core's array functions `f(u, x, out)` (see
-/// [`crate::boundary::through_array`]): the same semantics, the scalar function's bits.
-///
-/// # Safety
-/// As [`universe_array`].
-#[inline(always)]
-pub(crate) unsafe fn universe_through_array(
-    universe: *const relicore_universe,
-    x: *const f64,
-    n: usize,
-    out: *mut f64,
-    f: impl Fn(&Universe<f64>, &[f64], &mut [f64]) -> relicore::ArrayResult,
-) -> i32 {
-    boundary(
-        || {
-            non_null(x)?;
-            non_null(out)?;
-            // SAFETY: NULL or readable, not written during the call (caller's contract).
-            let u = unsafe { universe_ref(universe) }?;
-            // SAFETY: x and out are non-NULL and valid for n elements (caller's contract).
-            unsafe { crate::boundary::array_body(x, n, out, |xs, os| f(u, xs, os)) }
-        },
-        // SAFETY: out is NULL or valid for n writes (caller's contract).
-        || unsafe { crate::boundary::put_nan_n(out, n) },
-    )
-}
-
-/// Clears `*out`: tag 0, every storage word 0.
-///
-/// # Safety
-/// `out` is NULL or valid for one write of `struct relicore_universe`.
-unsafe fn clear(out: *mut relicore_universe) {
-    if !out.is_null() {
-        // SAFETY: non-NULL and writable (caller's contract); u64 fields take any bits.
-        unsafe {
-            addr_of_mut!((*out).tag).write(0);
-            addr_of_mut!((*out).storage).write_bytes(0, 1);
-        }
-    }
-}
+stored!(
+    relicore_universe,
+    Universe<f64>,
+    RELICORE_UNIVERSE_STORAGE_WORDS,
+    b"RELIUNIV"
+);
 
 /// Fills `*out` with the common-practice defaults and the given H0 and Ω_m: Ω_b = 0, Ω_k = 0
 /// (flat), T0 = 2.7255 K (Fixsen 2009, ApJ 707, 916, rounded), N_eff = 3.044 (standard-model
@@ -339,20 +203,17 @@ pub unsafe extern "C" fn relicore_universe_init(
             // is written.
             let p = unsafe { params.read() };
             let u = Universe::new(p.into())?;
-            // SAFETY: out is non-NULL and writable; the storage is large and aligned enough
-            // for a Universe<f64> (compile-time assertions); the old value holds no resource,
-            // so overwriting it without dropping is right. The tag is written last.
+            // SAFETY: out is non-NULL and writable and nothing else refers to it; the old value
+            // holds no resource, so overwriting it without dropping is right. Sealed last.
             unsafe {
-                addr_of_mut!((*out).tag).write(0);
-                addr_of_mut!((*out).storage)
-                    .cast::<Universe<f64>>()
-                    .write(u);
-                addr_of_mut!((*out).tag).write(UNIVERSE_TAG);
+                stored_clear(out);
+                *stored_place(out) = u;
+                stored_seal(out);
             }
             Ok(())
         },
         // SAFETY: out is NULL or writable (this function's contract).
-        || unsafe { clear(out) },
+        || unsafe { stored_clear(out) },
     )
 }
 
@@ -424,7 +285,7 @@ pub unsafe extern "C" fn relicore_universe_get_parameters(
         || {
             non_null(out)?;
             // SAFETY: NULL or readable (this function's contract).
-            let u = unsafe { universe_ref(universe) }?;
+            let u = unsafe { stored_ref(universe) }?;
             let p = relicore_universe_parameters::from(*u.parameters());
             // SAFETY: out is non-NULL and writable (this function's contract).
             unsafe { out.write(p) };
@@ -478,7 +339,7 @@ mod tests {
         // SAFETY: valid pointers.
         assert_eq!(unsafe { relicore_universe_init(&p, &mut *u) }, RELICORE_OK);
         // SAFETY: u was initialised.
-        let stored = unsafe { universe_ref(&*u) }.unwrap_or_else(|_| panic!("refused"));
+        let stored = unsafe { stored_ref(&*u) }.unwrap_or_else(|_| panic!("refused"));
         assert_eq!(stored, &core);
         let mut v = 0.0;
         let cases: [(
