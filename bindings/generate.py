@@ -19,9 +19,9 @@ from pathlib import Path
 
 sys.path.insert(0, str(Path(__file__).resolve().parent))
 
-from gen import c_face, fortran_face, harness, python_face, rust_tests, table  # noqa: E402
+from gen import c_face, constants_face, fortran_face, harness, python_face, rust_tests, table  # noqa: E402
 
-EMITTERS = (c_face, fortran_face, python_face, harness, rust_tests)
+EMITTERS = (c_face, fortran_face, python_face, harness, rust_tests, constants_face)
 
 
 def generated() -> dict[Path, str]:

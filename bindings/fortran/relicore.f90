@@ -254,67 +254,105 @@ module relicore
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_MAJOR = 0_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_MINOR = 1_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_PATCH = 0_c_int32_t
+  ! The physical constants of src/constants.rs (generated).
+  ! Speed of light in vacuum, m s^-1 (SI 2019, exact).
   real(c_double), parameter, public :: RELICORE_SPEED_OF_LIGHT = 299792458.0e0_c_double
+  ! Planck constant, J s (SI 2019, exact).
   real(c_double), parameter, public :: RELICORE_PLANCK = 6.62607015e-34_c_double
+  ! Boltzmann constant, J K^-1 (SI 2019, exact).
   real(c_double), parameter, public :: RELICORE_BOLTZMANN = 1.380649e-23_c_double
+  ! Elementary charge, C (SI 2019, exact).
   real(c_double), parameter, public :: RELICORE_ELEMENTARY_CHARGE = 1.602176634e-19_c_double
+  ! Avogadro constant, mol^-1 (SI 2019, exact).
   real(c_double), parameter, public :: RELICORE_AVOGADRO = 6.02214076e23_c_double
+  ! Reduced Planck constant h/2 pi, J s (derived from the exact h).
   real(c_double), parameter, public :: RELICORE_REDUCED_PLANCK = 1.0545718176461565e-34_c_double
+  ! Electron mass, kg (CODATA 2022).
   real(c_double), parameter, public :: RELICORE_ELECTRON_MASS = 9.1093837139e-31_c_double
+  ! Proton mass, kg (CODATA 2022).
   real(c_double), parameter, public :: RELICORE_PROTON_MASS = 1.67262192595e-27_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_THOMSON_CROSS_SECTION = 6.6524587051e-29_c_double
+  ! Thomson cross-section, m^2 (CODATA 2022).
+  real(c_double), parameter, public :: RELICORE_THOMSON_CROSS_SECTION = 6.6524587051e-29_c_double
+  ! Newtonian constant of gravitation, m^3 kg^-1 s^-2 (CODATA 2022).
   real(c_double), parameter, public :: RELICORE_GRAVITATIONAL_CONSTANT = 6.67430e-11_c_double
+  ! Fine-structure constant, dimensionless (CODATA 2022).
   real(c_double), parameter, public :: RELICORE_FINE_STRUCTURE = 7.2973525643e-3_c_double
+  ! Rydberg energy R Inf hc, J (CODATA 2022).
   real(c_double), parameter, public :: RELICORE_RYDBERG_ENERGY = 2.1798723611030e-18_c_double
+  ! Atomic mass constant u, kg (CODATA 2022).
   real(c_double), parameter, public :: RELICORE_ATOMIC_MASS_UNIT = 1.66053906892e-27_c_double
+  ! Mass of the hydrogen-1 atom, in u (AME 2020, Wang et al. 2021, Chinese Phys. C 45, 030003; value
+  ! from memory).
   real(c_double), parameter, public :: RELICORE_HYDROGEN_ATOM_MASS_U = 1.007825031898e0_c_double
+  ! Mass of the helium-4 atom, in u (AME 2020; value from memory).
   real(c_double), parameter, public :: RELICORE_HELIUM_ATOM_MASS_U = 4.002603254130e0_c_double
+  ! Ionisation energy of hydrogen (1s), eV (NIST Atomic Spectra Database; value from memory).
   real(c_double), parameter, public :: RELICORE_HYDROGEN_IONIZATION_EV = 13.598434599702e0_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_HELIUM_FIRST_IONIZATION_EV = 24.587389011e0_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_HELIUM_SECOND_IONIZATION_EV = 54.4177655e0_c_double
+  ! First ionisation energy of helium (He I -> He II), eV (NIST Atomic Spectra Database; value from
+  ! memory).
+  real(c_double), parameter, public :: RELICORE_HELIUM_FIRST_IONIZATION_EV = 24.587389011e0_c_double
+  ! Second ionisation energy of helium (He II -> He III), eV (NIST Atomic Spectra Database; value
+  ! from memory).
+  real(c_double), parameter, public :: RELICORE_HELIUM_SECOND_IONIZATION_EV = 54.4177655e0_c_double
+  ! First radiation constant c1 = 2 pi hc^2, W m^2 (derived from the exact h and c).
   real(c_double), parameter, public :: RELICORE_FIRST_RADIATION = 3.741771852192758e-16_c_double
+  ! First radiation constant for spectral radiance c1L = 2hc^2, W m^2 sr^-1 (derived).
   real(c_double), parameter, public :: &
       RELICORE_FIRST_RADIATION_RADIANCE = 1.1910429723971884e-16_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_SECOND_RADIATION = 1.4387768775039339e-2_c_double
+  ! Second radiation constant c2 = hc/k, m K (derived from the exact h, c and k).
+  real(c_double), parameter, public :: RELICORE_SECOND_RADIATION = 1.4387768775039339e-2_c_double
+  ! Low part of c2: `SECOND_RADIATION + SECOND_RADIATION_LO` equals hc/k to about 1e-34 m K.
   real(c_double), parameter, public :: &
       RELICORE_SECOND_RADIATION_LO = -6.735986446804958e-19_c_double
+  ! h/k, s K (derived).
   real(c_double), parameter, public :: &
       RELICORE_PLANCK_OVER_BOLTZMANN = 4.799243073366221e-11_c_double
+  ! Low part of h/k: `PLANCK_OVER_BOLTZMANN + PLANCK_OVER_BOLTZMANN_LO` equals h/k to ~1e-43.
   real(c_double), parameter, public :: &
       RELICORE_PLANCK_OVER_BOLTZMANN_LO = 2.4295941674596896e-27_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_STEFAN_BOLTZMANN = 5.6703744191844294e-8_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_RADIATION_DENSITY = 7.565733250280005e-16_c_double
+  ! Stefan-Boltzmann constant sigma = 2 pi^5k^4/(15h^3c^2), W m^-2 K^-4 (derived).
+  real(c_double), parameter, public :: RELICORE_STEFAN_BOLTZMANN = 5.6703744191844294e-8_c_double
+  ! Radiation density constant a = 4 sigma/c, J m^-3 K^-4 (derived).
+  real(c_double), parameter, public :: RELICORE_RADIATION_DENSITY = 7.565733250280005e-16_c_double
+  ! Photon analogue of sigma: photon exitance per T^3, 4 pi zeta(3)k^3/(h^3c^2), photons s^-1 m^-2
+  ! K^-3 (derived).
   real(c_double), parameter, public :: &
       RELICORE_PHOTON_STEFAN_BOLTZMANN = 1.5204608593931362e15_c_double
+  ! Wien wavelength displacement constant b = c2/x5, m K, with x5 = 5(1 - e^-x5) (derived).
   real(c_double), parameter, public :: RELICORE_WIEN_WAVELENGTH = 2.8977719551851727e-3_c_double
+  ! Wien frequency displacement constant x3k/h, Hz K^-1, with x3 = 3(1 - e^-x3) (derived).
   real(c_double), parameter, public :: RELICORE_WIEN_FREQUENCY = 5.878925757646825e10_c_double
+  ! Wien wavenumber displacement constant x3/c2, m^-1 K^-1 (derived).
   real(c_double), parameter, public :: RELICORE_WIEN_WAVENUMBER = 1.9609985510865738e2_c_double
+  ! Photon (N_lambda) peak constant c2/x4, m K, with x4 = 4(1 - e^-x4) (derived).
   real(c_double), parameter, public :: &
       RELICORE_WIEN_PHOTON_WAVELENGTH = 3.669702865050074e-3_c_double
+  ! Photon (N_nu) peak constant x2k/h, Hz K^-1, with x2 = 2(1 - e^-x2) (derived).
   real(c_double), parameter, public :: &
       RELICORE_WIEN_PHOTON_FREQUENCY = 3.320574173214905e10_c_double
+  ! h/(x3k), K Hz^-1: temperature per hertz of the B_nu peak (derived).
   real(c_double), parameter, public :: &
       RELICORE_WIEN_FREQUENCY_INVERSE = 1.7009910334371582e-11_c_double
+  ! Astronomical unit, m (IAU 2012 Resolution B2, exact).
   real(c_double), parameter, public :: RELICORE_ASTRONOMICAL_UNIT = 149597870700.0e0_c_double
+  ! Parsec, m: au x 648000/pi (IAU 2015 Resolution B2).
   real(c_double), parameter, public :: RELICORE_PARSEC = 3.085677581491367e16_c_double
+  ! Megaparsec, m.
   real(c_double), parameter, public :: RELICORE_MEGAPARSEC = 3.085677581491367e22_c_double
+  ! Julian year, s (365.25 days of 86400 s; IAU).
   real(c_double), parameter, public :: RELICORE_JULIAN_YEAR = 31557600.0e0_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_ROOT_WAVELENGTH_PEAK = 4.965114231744276e0_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_ROOT_FREQUENCY_PEAK = 2.8214393721220787e0_c_double
+  ! Root of x = 5(1 - e^-x): peak of B_lambda.
+  real(c_double), parameter, public :: RELICORE_ROOT_WAVELENGTH_PEAK = 4.965114231744276e0_c_double
+  ! Root of x = 3(1 - e^-x): peak of B_nu (and of the wavenumber form).
+  real(c_double), parameter, public :: RELICORE_ROOT_FREQUENCY_PEAK = 2.8214393721220787e0_c_double
+  ! Root of x = 4(1 - e^-x): peak of N_lambda (and of lambda B_lambda).
   real(c_double), parameter, public :: &
       RELICORE_ROOT_PHOTON_WAVELENGTH_PEAK = 3.9206903948728864e0_c_double
+  ! Root of x = 2(1 - e^-x): peak of N_nu.
   real(c_double), parameter, public :: &
       RELICORE_ROOT_PHOTON_FREQUENCY_PEAK = 1.59362426004004e0_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_ROOT_THERMAL_SZ_NULL = 3.830016096309075e0_c_double
+  ! Root of x coth(x/2) = 4: null of the thermal Sunyaev-Zeldovich spectral distortion.
+  real(c_double), parameter, public :: RELICORE_ROOT_THERMAL_SZ_NULL = 3.830016096309075e0_c_double
 
   ! ---------------------------------------------------------------- public procedures
   ! Those written here; the table's functions follow (generated).

@@ -1,11 +1,11 @@
 !! Template of bindings/fortran/relicore.f90, kept by hand. `python3 bindings/generate.py --write`
 !! copies it and replaces each `!@ <marker>` line with what bindings/gen/fortran_face.py builds
-!! from bindings/functions.toml and the core's rustdoc: the coverage rows of the table's
-!! functions, their public statement, their bind(C) interfaces and their wrappers. What stays
-!! here is what the table cannot describe: the module header, kinds, constants, types, the status
-!! message and version, the report and NaN helpers, the calibration and response-table
-!! procedures, and the construction of universes and thermal histories. Lines starting with `!!`
-!! are not copied.
+!! from bindings/functions.toml and the core's rustdoc: the physical constants of src/constants.rs,
+!! the coverage rows of the table's functions, their public statement, their bind(C) interfaces
+!! and their wrappers. What stays here is what the table cannot describe: the module header,
+!! kinds, the status codes and storage sizes, types, the status message and version, the report
+!! and NaN helpers, the calibration and response-table procedures, and the construction of
+!! universes and thermal histories. Lines starting with `!!` are not copied.
 ! relicore: the Fortran face of relicore (blackbody radiometry, the cosmological background and
 ! decoupling), a thin binding of the C ABI declared in include/relicore.h. Physics lives only in
 ! the Rust core; this module binds the C functions, converts, checks sizes and turns status
@@ -128,67 +128,8 @@ module relicore
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_MAJOR = 0_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_MINOR = 1_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_PATCH = 0_c_int32_t
-  real(c_double), parameter, public :: RELICORE_SPEED_OF_LIGHT = 299792458.0e0_c_double
-  real(c_double), parameter, public :: RELICORE_PLANCK = 6.62607015e-34_c_double
-  real(c_double), parameter, public :: RELICORE_BOLTZMANN = 1.380649e-23_c_double
-  real(c_double), parameter, public :: RELICORE_ELEMENTARY_CHARGE = 1.602176634e-19_c_double
-  real(c_double), parameter, public :: RELICORE_AVOGADRO = 6.02214076e23_c_double
-  real(c_double), parameter, public :: RELICORE_REDUCED_PLANCK = 1.0545718176461565e-34_c_double
-  real(c_double), parameter, public :: RELICORE_ELECTRON_MASS = 9.1093837139e-31_c_double
-  real(c_double), parameter, public :: RELICORE_PROTON_MASS = 1.67262192595e-27_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_THOMSON_CROSS_SECTION = 6.6524587051e-29_c_double
-  real(c_double), parameter, public :: RELICORE_GRAVITATIONAL_CONSTANT = 6.67430e-11_c_double
-  real(c_double), parameter, public :: RELICORE_FINE_STRUCTURE = 7.2973525643e-3_c_double
-  real(c_double), parameter, public :: RELICORE_RYDBERG_ENERGY = 2.1798723611030e-18_c_double
-  real(c_double), parameter, public :: RELICORE_ATOMIC_MASS_UNIT = 1.66053906892e-27_c_double
-  real(c_double), parameter, public :: RELICORE_HYDROGEN_ATOM_MASS_U = 1.007825031898e0_c_double
-  real(c_double), parameter, public :: RELICORE_HELIUM_ATOM_MASS_U = 4.002603254130e0_c_double
-  real(c_double), parameter, public :: RELICORE_HYDROGEN_IONIZATION_EV = 13.598434599702e0_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_HELIUM_FIRST_IONIZATION_EV = 24.587389011e0_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_HELIUM_SECOND_IONIZATION_EV = 54.4177655e0_c_double
-  real(c_double), parameter, public :: RELICORE_FIRST_RADIATION = 3.741771852192758e-16_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_FIRST_RADIATION_RADIANCE = 1.1910429723971884e-16_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_SECOND_RADIATION = 1.4387768775039339e-2_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_SECOND_RADIATION_LO = -6.735986446804958e-19_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_PLANCK_OVER_BOLTZMANN = 4.799243073366221e-11_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_PLANCK_OVER_BOLTZMANN_LO = 2.4295941674596896e-27_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_STEFAN_BOLTZMANN = 5.6703744191844294e-8_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_RADIATION_DENSITY = 7.565733250280005e-16_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_PHOTON_STEFAN_BOLTZMANN = 1.5204608593931362e15_c_double
-  real(c_double), parameter, public :: RELICORE_WIEN_WAVELENGTH = 2.8977719551851727e-3_c_double
-  real(c_double), parameter, public :: RELICORE_WIEN_FREQUENCY = 5.878925757646825e10_c_double
-  real(c_double), parameter, public :: RELICORE_WIEN_WAVENUMBER = 1.9609985510865738e2_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_WIEN_PHOTON_WAVELENGTH = 3.669702865050074e-3_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_WIEN_PHOTON_FREQUENCY = 3.320574173214905e10_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_WIEN_FREQUENCY_INVERSE = 1.7009910334371582e-11_c_double
-  real(c_double), parameter, public :: RELICORE_ASTRONOMICAL_UNIT = 149597870700.0e0_c_double
-  real(c_double), parameter, public :: RELICORE_PARSEC = 3.085677581491367e16_c_double
-  real(c_double), parameter, public :: RELICORE_MEGAPARSEC = 3.085677581491367e22_c_double
-  real(c_double), parameter, public :: RELICORE_JULIAN_YEAR = 31557600.0e0_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_ROOT_WAVELENGTH_PEAK = 4.965114231744276e0_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_ROOT_FREQUENCY_PEAK = 2.8214393721220787e0_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_ROOT_PHOTON_WAVELENGTH_PEAK = 3.9206903948728864e0_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_ROOT_PHOTON_FREQUENCY_PEAK = 1.59362426004004e0_c_double
-  real(c_double), parameter, public :: &
-      RELICORE_ROOT_THERMAL_SZ_NULL = 3.830016096309075e0_c_double
+  ! The physical constants of src/constants.rs (generated).
+!@ constants
 
   ! ---------------------------------------------------------------- public procedures
   ! Those written here; the table's functions follow (generated).

@@ -3,6 +3,7 @@ bindings/fortran/relicore.in.f90 (module header, kinds, types, constants, status
 version, the calibration, response-table, universe and thermal-history procedures) and the
 table. The template's marker lines are replaced:
 
+    !@ constants    the physical constants of src/constants.rs (bindings/gen/constants_face.py)
     !@ coverage     rows of the coverage table (C function, Fortran procedures), in a comment
     !@ public       the public statement of the table's procedures
     !@ interfaces   one bind(C) interface per C symbol of the table, its prototype above it
@@ -27,14 +28,14 @@ import textwrap
 from dataclasses import dataclass
 from pathlib import Path
 
-from . import rustdoc
+from . import constants_face, rustdoc
 from .common import banner
 from .table import ROOT, Function
 
 TEMPLATE = ROOT / "bindings" / "fortran" / "relicore.in.f90"
 MODULE = ROOT / "bindings" / "fortran" / "relicore.f90"
 TESTS = ROOT / "tests" / "fortran" / "generated"
-MARKERS = ("coverage", "public", "interfaces", "procedures")
+MARKERS = ("constants", "coverage", "public", "interfaces", "procedures")
 WIDTH = 100
 
 # the value passed first: (dummy name, Fortran type, C struct, where it comes from)
@@ -348,7 +349,7 @@ def module_text(fns: list[Function]) -> str:
             procs += array_procedure(form) if form.array else scalar_procedures(form)
 
     inserts = {"coverage": coverage, "public": public, "interfaces": interfaces,
-               "procedures": procs}
+               "procedures": procs, "constants": constants_face.fortran_lines(WIDTH, ascii_text)}
     out: list[str] = []
     seen = set()
     for line in template:

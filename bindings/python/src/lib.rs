@@ -11,8 +11,8 @@
 //! * [`cosmology`]: the native base of `relicore.Universe`.
 //! * [`decoupling`]: the native base of `relicore.decoupling.ThermalHistory`.
 //! * [`errors`]: the one mapping from a core error to `relicore.RelicoreError`.
-//! * the constants of `relicore::constants`, as the dicts `CONSTANTS` and `ROOTS`, and the
-//!   core's `VERSION`.
+//! * the constants of `relicore::constants`, as the dicts `CONSTANTS` and `ROOTS` (their names
+//!   generated into [`gen_constants`] from `src/constants.rs`), and the core's `VERSION`.
 
 // No panic may unwind into the interpreter: no unwrap, expect, panic or fallible indexing.
 #![cfg_attr(
@@ -35,40 +35,18 @@ mod cosmology;
 mod decoupling;
 mod errors;
 mod functions;
+mod gen_constants;
 // written by bindings/generate.py, which keeps its own layout
 #[rustfmt::skip]
 mod generated;
 mod kernels;
 
-macro_rules! constants {
-    ($dict:expr, $module:path : [$($name:ident),+ $(,)?]) => {{
-        use $module as m;
-        $( $dict.set_item(stringify!($name), m::$name)?; )+
-    }};
-}
-
-fn constants_dict(py: Python<'_>) -> PyResult<Bound<'_, PyDict>> {
+/// A dict of (name, value) pairs: the constants of `gen_constants`.
+fn constants_dict<'py>(py: Python<'py>, items: &[(&str, f64)]) -> PyResult<Bound<'py, PyDict>> {
     let d = PyDict::new(py);
-    constants!(d, relicore::constants: [
-        SPEED_OF_LIGHT, PLANCK, BOLTZMANN, ELEMENTARY_CHARGE, AVOGADRO, REDUCED_PLANCK,
-        ELECTRON_MASS, PROTON_MASS, THOMSON_CROSS_SECTION, GRAVITATIONAL_CONSTANT,
-        FINE_STRUCTURE, RYDBERG_ENERGY, ATOMIC_MASS_UNIT, HYDROGEN_ATOM_MASS_U,
-        HELIUM_ATOM_MASS_U, HYDROGEN_IONIZATION_EV, HELIUM_FIRST_IONIZATION_EV,
-        HELIUM_SECOND_IONIZATION_EV, FIRST_RADIATION, FIRST_RADIATION_RADIANCE,
-        SECOND_RADIATION, SECOND_RADIATION_LO, PLANCK_OVER_BOLTZMANN, PLANCK_OVER_BOLTZMANN_LO,
-        STEFAN_BOLTZMANN, RADIATION_DENSITY, PHOTON_STEFAN_BOLTZMANN, WIEN_WAVELENGTH,
-        WIEN_FREQUENCY, WIEN_WAVENUMBER, WIEN_PHOTON_WAVELENGTH, WIEN_PHOTON_FREQUENCY,
-        WIEN_FREQUENCY_INVERSE, ASTRONOMICAL_UNIT, PARSEC, MEGAPARSEC, JULIAN_YEAR,
-    ]);
-    Ok(d)
-}
-
-fn roots_dict(py: Python<'_>) -> PyResult<Bound<'_, PyDict>> {
-    let d = PyDict::new(py);
-    constants!(d, relicore::constants::roots: [
-        WAVELENGTH_PEAK, FREQUENCY_PEAK, PHOTON_WAVELENGTH_PEAK, PHOTON_FREQUENCY_PEAK,
-        THERMAL_SZ_NULL,
-    ]);
+    for &(name, value) in items {
+        d.set_item(name, value)?;
+    }
     Ok(d)
 }
 
@@ -105,8 +83,8 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_class::<decoupling::PyThermalHistory>()?;
     m.add_function(wrap_pyfunction!(decoupling::history_defaults, m)?)?;
     m.add_function(wrap_pyfunction!(decoupling::decoupling_constants, m)?)?;
-    m.add("CONSTANTS", constants_dict(py)?)?;
-    m.add("ROOTS", roots_dict(py)?)?;
+    m.add("CONSTANTS", constants_dict(py, gen_constants::CONSTANTS)?)?;
+    m.add("ROOTS", constants_dict(py, gen_constants::ROOTS)?)?;
     m.add_function(wrap_pyfunction!(simd_level, m)?)?;
     m.add_function(wrap_pyfunction!(cap_simd_level, m)?)?;
     m.add("VERSION", relicore::VERSION)?;
