@@ -16,7 +16,7 @@ fn regular(c: &mut Criterion) {
         ..UniverseParameters::new(67.36, 0.3153)
     })
     .expect("universe");
-    let h = Box::new(ThermalHistory::new(&u, HistoryOptions::default()).expect("history"));
+    let h = Box::new(ThermalHistory::<f64>::new(&u, HistoryOptions::default()).expect("history"));
     let mut g = c.benchmark_group("regular");
     g.bench_function("spectral_radiance_wavelength", |b| {
         b.iter(|| {

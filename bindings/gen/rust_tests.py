@@ -106,7 +106,7 @@ RECEIVERS_SETUP = """    let u = Universe::new(UniverseParameters {
         ..UniverseParameters::new(67.36, 0.3153)
     })
     .expect("universe");
-    let h = Box::new(ThermalHistory::new(&u, HistoryOptions::default()).expect("history"));
+    let h = Box::new(ThermalHistory::<f64>::new(&u, HistoryOptions::default()).expect("history"));
 """
 
 
