@@ -254,5 +254,113 @@ fn pieces(c: &mut Criterion) {
     g.finish();
 }
 
-criterion_group!(benches, scalar, frames, pieces);
+/// The forms the faces add: a 64 × 64 frame at one frequency and in a band, with and without
+/// uncertainty; the response-table forms; the correlated combination of five inputs.
+fn face_forms(c: &mut Criterion) {
+    let mut g = c.benchmark_group("thermometry_forms");
+    let l = bb::spectral_radiance_frequency(3e13, 300.0).unwrap_or(f64::NAN);
+    let lb = bb::band_radiance_wavelength(8e-6, 14e-6, 300.0).unwrap_or(f64::NAN);
+    let sig: Vec<f64> = (0..4096).map(|i| l * (0.9 + 1e-4 * f64::from(i))).collect();
+    let sigb: Vec<f64> = (0..4096)
+        .map(|i| lb * (0.9 + 1e-4 * f64::from(i)))
+        .collect();
+    let (mut t, mut u) = (vec![0.0; 4096], vec![0.0; 4096]);
+    let one = |x: f64| [x];
+    g.bench_function("object_temperature_frequency_array_64x64", |b| {
+        b.iter(|| {
+            bb::object_temperature_frequency_array(
+                3e13,
+                black_box(&sig),
+                &[0.9],
+                &[293.0],
+                &[0.95],
+                &[280.0],
+                &mut t,
+            )
+        })
+    });
+    g.bench_function("object_temperature_band_array_64x64", |b| {
+        b.iter(|| {
+            bb::object_temperature_band_array(
+                8e-6,
+                14e-6,
+                black_box(&sigb),
+                &[0.9],
+                &[293.0],
+                &[0.95],
+                &[280.0],
+                &mut t,
+            )
+        })
+    });
+    g.bench_function(
+        "object_temperature_frequency_with_uncertainty_array_64x64",
+        |b| {
+            b.iter(|| {
+                bb::object_temperature_frequency_with_uncertainty_array(
+                    3e13,
+                    black_box(&sig),
+                    &[0.9],
+                    &[293.0],
+                    &[0.95],
+                    &[280.0],
+                    &one(1e-14),
+                    &one(0.01),
+                    &one(1.0),
+                    &one(0.01),
+                    &one(1.0),
+                    &mut t,
+                    &mut u,
+                )
+            })
+        },
+    );
+    g.bench_function(
+        "object_temperature_band_with_uncertainty_array_64x64",
+        |b| {
+            b.iter(|| {
+                bb::object_temperature_band_with_uncertainty_array(
+                    8e-6,
+                    14e-6,
+                    black_box(&sigb),
+                    &[0.9],
+                    &[293.0],
+                    &[0.95],
+                    &[280.0],
+                    &one(0.1),
+                    &one(0.01),
+                    &one(1.0),
+                    &one(0.01),
+                    &one(1.0),
+                    &mut t,
+                    &mut u,
+                )
+            })
+        },
+    );
+    let w = [8e-6, 9e-6, 11e-6, 13e-6, 14e-6];
+    let r = [0.1, 0.9, 1.0, 0.8, 0.1];
+    let m = bb::measured_response_weighted_radiance(&w, &r, 300.0, 0.9, 293.0, 0.95, 280.0)
+        .unwrap_or(f64::NAN);
+    g.bench_function("object_temperature_response", |b| {
+        b.iter(|| bb::object_temperature_response(&w, &r, black_box(m), 0.9, 293.0, 0.95, 280.0))
+    });
+    g.bench_function("response_weighted_radiance_temperature_derivative", |b| {
+        b.iter(|| bb::response_weighted_radiance_temperature_derivative(&w, &r, black_box(300.0)))
+    });
+    let cs = [0.1, -20.0, 0.05, -15.0, 0.01];
+    let us = [1.0, 0.01, 1.0, 0.01, 1.0];
+    let mut corr = [0.0; 25];
+    for i in 0..5 {
+        corr[6 * i] = 1.0;
+    }
+    corr[1] = 0.3;
+    corr[5] = 0.3;
+    g.bench_function("combined_standard_uncertainty_correlated_5", |b| {
+        b.iter(|| bb::combined_standard_uncertainty_correlated(black_box(&cs), &us, &corr))
+    });
+    g.finish();
+}
+
+criterion_group!(benches, scalar, frames, pieces, face_forms);
 criterion_main!(benches);

@@ -370,6 +370,58 @@
 #define RELICORE_THERMAL_HISTORY_STORAGE_WORDS 20480
 
 /**
+ * An inferred temperature with its combined standard uncertainty and sensitivity coefficients
+ * (the core's `TemperatureUncertainty<f64>`), written by every `_with_uncertainty` function.
+ *
+ * `sensitivity_coefficients[i]` is dT/dx_i for the i-th uncertain input of the function, in
+ * the order its documentation gives (measurement equation: signal, emissivity, reflected
+ * temperature, transmittance, path temperature), in K per unit of that input; the first
+ * `inputs` entries are used, the others are 0. On failure every real field is NaN and
+ * `inputs` is 0.
+ */
+struct relicore_temperature_uncertainty {
+    /**
+     * The inferred temperature, K.
+     */
+    double temperature_k;
+    /**
+     * Combined standard uncertainty u_c in K (JCGM 100:2008 eq. 10, uncorrelated inputs).
+     */
+    double combined_standard_uncertainty_k;
+    /**
+     * dT/dx_i, K per unit of input i; entries at and beyond `inputs` are 0.
+     */
+    double sensitivity_coefficients[5];
+    /**
+     * Number of inputs used (1 to 5; 0 after a failure).
+     */
+    uint32_t inputs;
+};
+
+/**
+ * `float` twin of `relicore_temperature_uncertainty` (the core's
+ * `TemperatureUncertainty<f32>`), written by the `_f32` forms.
+ */
+struct relicore_temperature_uncertainty_f32 {
+    /**
+     * The inferred temperature, K.
+     */
+    float temperature_k;
+    /**
+     * Combined standard uncertainty u_c in K.
+     */
+    float combined_standard_uncertainty_k;
+    /**
+     * dT/dx_i, K per unit of input i; entries at and beyond `inputs` are 0.
+     */
+    float sensitivity_coefficients[5];
+    /**
+     * Number of inputs used (1 to 5; 0 after a failure).
+     */
+    uint32_t inputs;
+};
+
+/**
  * The gain and offset of a two-load calibration at one frequency, filled in by
  * `relicore_two_load_calibration`; a plain value the caller owns (no allocation, no
  * cleanup). `reading = gain · J + offset`, J the Rayleigh-Jeans brightness temperature in K.
@@ -1991,6 +2043,852 @@ int32_t relicore_thermal_sz_null_frequency(double cmb_temperature_k,
                                            double *out);
 
 /**
+ * Measured spectral radiance at one wavelength of a scene (the forward measurement equation):
+ * L_meas = τ[ε B_λ(T_obj) + (1 − ε) B_λ(T_refl)] + (1 − τ) B_λ(T_path).
+ *
+ * * `wavelength_m`: λ in m, finite and > 0.
+ * * `object_temperature_k`: T_obj in K, finite and > 0.
+ * * `emissivity`: ε of the surface, finite, 0 < ε ≤ 1.
+ * * `reflected_temperature_k`: T_refl of the reflected surroundings in K, finite and ≥ 0.
+ * * `transmittance`: τ of the path, finite, 0 < τ ≤ 1.
+ * * `path_temperature_k`: T_path in K, finite and ≥ 0.
+ *
+ * Returns W m⁻² sr⁻¹ m⁻¹, ≥ 0. Errors: `NonFinite(i)`; `NonPositive(0|1|2|4)`;
+ * `Negative(3|5)`; `OutOfDomain(2|4)` for ε or τ above 1; `OutOfDomain(i)` when a radiance
+ * overflows. Domain and conventions: module documentation.
+ *
+ * Accuracy: within 1e-14 relative (`f64`) against mpmath (a sum of non-negative terms, each
+ * within 4 ulp). Reference: the measurement equation of radiation thermometry (module docs).
+ *
+ * Arguments of the C function:
+ * * `wavelength_m`: wavelength in m, > 0.
+ * * `object_temperature_k`: object temperature in K, > 0.
+ * * `emissivity`: surface emissivity, > 0, <= 1.
+ * * `reflected_temperature_k`: temperature of the reflected surroundings in K, >= 0.
+ * * `transmittance`: path transmittance, > 0, <= 1.
+ * * `path_temperature_k`: path temperature in K, >= 0.
+ * * `out`: where the result is written: L_meas in W m-2 sr-1 m-1, >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_measured_spectral_radiance_wavelength(double wavelength_m,
+                                                       double object_temperature_k,
+                                                       double emissivity,
+                                                       double reflected_temperature_k,
+                                                       double transmittance,
+                                                       double path_temperature_k,
+                                                       double *out);
+
+/**
+ * Single-precision twin of `relicore_measured_spectral_radiance_wavelength`: the same core
+ * function computed in `float`.
+ *
+ * Measured spectral radiance at one wavelength of a scene (the forward measurement equation):
+ * L_meas = τ[ε B_λ(T_obj) + (1 − ε) B_λ(T_refl)] + (1 − τ) B_λ(T_path).
+ *
+ * * `wavelength_m`: λ in m, finite and > 0.
+ * * `object_temperature_k`: T_obj in K, finite and > 0.
+ * * `emissivity`: ε of the surface, finite, 0 < ε ≤ 1.
+ * * `reflected_temperature_k`: T_refl of the reflected surroundings in K, finite and ≥ 0.
+ * * `transmittance`: τ of the path, finite, 0 < τ ≤ 1.
+ * * `path_temperature_k`: T_path in K, finite and ≥ 0.
+ *
+ * Returns W m⁻² sr⁻¹ m⁻¹, ≥ 0. Errors: `NonFinite(i)`; `NonPositive(0|1|2|4)`;
+ * `Negative(3|5)`; `OutOfDomain(2|4)` for ε or τ above 1; `OutOfDomain(i)` when a radiance
+ * overflows. Domain and conventions: module documentation.
+ *
+ * Accuracy: within 1e-14 relative (`f64`) against mpmath (a sum of non-negative terms, each
+ * within 4 ulp). Reference: the measurement equation of radiation thermometry (module docs).
+ *
+ * Arguments of the C function:
+ * * `wavelength_m`: wavelength in m, > 0.
+ * * `object_temperature_k`: object temperature in K, > 0.
+ * * `emissivity`: surface emissivity, > 0, <= 1.
+ * * `reflected_temperature_k`: temperature of the reflected surroundings in K, >= 0.
+ * * `transmittance`: path transmittance, > 0, <= 1.
+ * * `path_temperature_k`: path temperature in K, >= 0.
+ * * `out`: where the result is written: L_meas in W m-2 sr-1 m-1, >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `float`.
+ */
+int32_t relicore_measured_spectral_radiance_wavelength_f32(float wavelength_m,
+                                                           float object_temperature_k,
+                                                           float emissivity,
+                                                           float reflected_temperature_k,
+                                                           float transmittance,
+                                                           float path_temperature_k,
+                                                           float *out);
+
+/**
+ * Measured spectral radiance at one frequency of a scene:
+ * L_meas = τ[ε B_ν(T_obj) + (1 − ε) B_ν(T_refl)] + (1 − τ) B_ν(T_path).
+ *
+ * * `frequency_hz`: ν in Hz, finite and > 0.
+ * * the scene arguments as `measured_spectral_radiance_wavelength`.
+ *
+ * Returns W m⁻² sr⁻¹ Hz⁻¹, ≥ 0. Errors as `measured_spectral_radiance_wavelength`.
+ * Accuracy: within 1e-14 relative (`f64`) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `object_temperature_k`: object temperature in K, > 0.
+ * * `emissivity`: surface emissivity, > 0, <= 1.
+ * * `reflected_temperature_k`: temperature of the reflected surroundings in K, >= 0.
+ * * `transmittance`: path transmittance, > 0, <= 1.
+ * * `path_temperature_k`: path temperature in K, >= 0.
+ * * `out`: where the result is written: L_meas in W m-2 sr-1 Hz-1, >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_measured_spectral_radiance_frequency(double frequency_hz,
+                                                      double object_temperature_k,
+                                                      double emissivity,
+                                                      double reflected_temperature_k,
+                                                      double transmittance,
+                                                      double path_temperature_k,
+                                                      double *out);
+
+/**
+ * Single-precision twin of `relicore_measured_spectral_radiance_frequency`: the same core function
+ * computed in `float`.
+ *
+ * Measured spectral radiance at one frequency of a scene:
+ * L_meas = τ[ε B_ν(T_obj) + (1 − ε) B_ν(T_refl)] + (1 − τ) B_ν(T_path).
+ *
+ * * `frequency_hz`: ν in Hz, finite and > 0.
+ * * the scene arguments as `measured_spectral_radiance_wavelength`.
+ *
+ * Returns W m⁻² sr⁻¹ Hz⁻¹, ≥ 0. Errors as `measured_spectral_radiance_wavelength`.
+ * Accuracy: within 1e-14 relative (`f64`) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `object_temperature_k`: object temperature in K, > 0.
+ * * `emissivity`: surface emissivity, > 0, <= 1.
+ * * `reflected_temperature_k`: temperature of the reflected surroundings in K, >= 0.
+ * * `transmittance`: path transmittance, > 0, <= 1.
+ * * `path_temperature_k`: path temperature in K, >= 0.
+ * * `out`: where the result is written: L_meas in W m-2 sr-1 Hz-1, >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `float`.
+ */
+int32_t relicore_measured_spectral_radiance_frequency_f32(float frequency_hz,
+                                                          float object_temperature_k,
+                                                          float emissivity,
+                                                          float reflected_temperature_k,
+                                                          float transmittance,
+                                                          float path_temperature_k,
+                                                          float *out);
+
+/**
+ * Measured band radiance between two wavelengths of a scene: the measurement equation with
+ * L = `band_radiance_wavelength`.
+ *
+ * * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
+ * * `object_temperature_k` (argument 2), `emissivity`, `reflected_temperature_k`,
+ *   `transmittance`, `path_temperature_k` (arguments 3 to 6): as
+ *   `measured_spectral_radiance_wavelength`.
+ *
+ * Returns W m⁻² sr⁻¹. Errors: those of `band_radiance_wavelength` for the band; the scene
+ * errors of `measured_spectral_radiance_wavelength` at positions 2 to 6.
+ * Accuracy: within 1e-14 relative (`f64`) against mpmath quadrature.
+ *
+ * Arguments of the C function:
+ * * `lower_m`: lower band edge in m, >= 0.
+ * * `upper_m`: upper band edge in m, > lower_m, may be +Inf.
+ * * `object_temperature_k`: object temperature in K, > 0.
+ * * `emissivity`: surface emissivity, > 0, <= 1.
+ * * `reflected_temperature_k`: temperature of the reflected surroundings in K, >= 0.
+ * * `transmittance`: path transmittance, > 0, <= 1.
+ * * `path_temperature_k`: path temperature in K, >= 0.
+ * * `out`: where the result is written: L_meas in W m-2 sr-1, >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_measured_band_radiance_wavelength(double lower_m,
+                                                   double upper_m,
+                                                   double object_temperature_k,
+                                                   double emissivity,
+                                                   double reflected_temperature_k,
+                                                   double transmittance,
+                                                   double path_temperature_k,
+                                                   double *out);
+
+/**
+ * Object temperature from the spectral radiance measured at one wavelength (the inverse
+ * measurement equation): the brightness temperature of the corrected object radiance
+ * L_obj = ([L_meas − (1 − τ)B_λ(T_path)]/τ − (1 − ε)B_λ(T_refl))/ε.
+ *
+ * * `wavelength_m`: λ in m, finite and > 0.
+ * * `signal`: L_meas in W m⁻² sr⁻¹ m⁻¹, finite.
+ * * `emissivity`: ε, 0 < ε ≤ 1. `reflected_temperature_k`: T_refl ≥ 0 K.
+ * * `transmittance`: τ, 0 < τ ≤ 1. `path_temperature_k`: T_path ≥ 0 K.
+ *
+ * Returns T_obj in K, > 0. Errors: `NonFinite(i)`; `NonPositive(0|2|4)`; `Negative(3|5)`;
+ * `OutOfDomain(2|4)` for ε or τ above 1; `OutOfDomain(1)` when L_obj ≤ 0 (the signal is at or
+ * below what the surroundings and the path alone give: no object temperature exists) or
+ * when no temperature can be formed; `OutOfDomain(3|5)` when a radiance of the surroundings
+ * overflows.
+ *
+ * Accuracy: within 1e-13 relative (`f64`) against mpmath for a correction condition number
+ * κ ≤ 20 (module docs); ε = τ = 1 gives `brightness_temperature_wavelength` bit for bit.
+ * Reference: the measurement equation (module docs), Planck's law solved for T.
+ *
+ * Arguments of the C function:
+ * * `wavelength_m`: wavelength in m, > 0.
+ * * `signal`: measured spectral radiance L_meas in W m-2 sr-1 m-1, finite.
+ * * `emissivity`: surface emissivity, > 0, <= 1.
+ * * `reflected_temperature_k`: temperature of the reflected surroundings in K, >= 0.
+ * * `transmittance`: path transmittance, > 0, <= 1.
+ * * `path_temperature_k`: path temperature in K, >= 0.
+ * * `out`: where the result is written: T_obj in K, > 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_object_temperature_wavelength(double wavelength_m,
+                                               double signal,
+                                               double emissivity,
+                                               double reflected_temperature_k,
+                                               double transmittance,
+                                               double path_temperature_k,
+                                               double *out);
+
+/**
+ * Single-precision twin of `relicore_object_temperature_wavelength`: the same core function
+ * computed in `float`.
+ *
+ * Object temperature from the spectral radiance measured at one wavelength (the inverse
+ * measurement equation): the brightness temperature of the corrected object radiance
+ * L_obj = ([L_meas − (1 − τ)B_λ(T_path)]/τ − (1 − ε)B_λ(T_refl))/ε.
+ *
+ * * `wavelength_m`: λ in m, finite and > 0.
+ * * `signal`: L_meas in W m⁻² sr⁻¹ m⁻¹, finite.
+ * * `emissivity`: ε, 0 < ε ≤ 1. `reflected_temperature_k`: T_refl ≥ 0 K.
+ * * `transmittance`: τ, 0 < τ ≤ 1. `path_temperature_k`: T_path ≥ 0 K.
+ *
+ * Returns T_obj in K, > 0. Errors: `NonFinite(i)`; `NonPositive(0|2|4)`; `Negative(3|5)`;
+ * `OutOfDomain(2|4)` for ε or τ above 1; `OutOfDomain(1)` when L_obj ≤ 0 (the signal is at or
+ * below what the surroundings and the path alone give: no object temperature exists) or
+ * when no temperature can be formed; `OutOfDomain(3|5)` when a radiance of the surroundings
+ * overflows.
+ *
+ * Accuracy: within 1e-13 relative (`f64`) against mpmath for a correction condition number
+ * κ ≤ 20 (module docs); ε = τ = 1 gives `brightness_temperature_wavelength` bit for bit.
+ * Reference: the measurement equation (module docs), Planck's law solved for T.
+ *
+ * Arguments of the C function:
+ * * `wavelength_m`: wavelength in m, > 0.
+ * * `signal`: measured spectral radiance L_meas in W m-2 sr-1 m-1, finite.
+ * * `emissivity`: surface emissivity, > 0, <= 1.
+ * * `reflected_temperature_k`: temperature of the reflected surroundings in K, >= 0.
+ * * `transmittance`: path transmittance, > 0, <= 1.
+ * * `path_temperature_k`: path temperature in K, >= 0.
+ * * `out`: where the result is written: T_obj in K, > 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `float`.
+ */
+int32_t relicore_object_temperature_wavelength_f32(float wavelength_m,
+                                                   float signal,
+                                                   float emissivity,
+                                                   float reflected_temperature_k,
+                                                   float transmittance,
+                                                   float path_temperature_k,
+                                                   float *out);
+
+/**
+ * Object temperature from the spectral radiance measured at one frequency: the brightness
+ * temperature (`brightness_temperature_frequency`) of the corrected object radiance.
+ *
+ * * `frequency_hz`: ν in Hz, finite and > 0.
+ * * `signal`: L_meas in W m⁻² sr⁻¹ Hz⁻¹, finite; the scene as
+ *   `object_temperature_wavelength`.
+ *
+ * Returns T_obj in K. Errors as `object_temperature_wavelength`. Accuracy: within 1e-13
+ * relative (`f64`) against mpmath for κ ≤ 20.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `signal`: measured spectral radiance L_meas in W m-2 sr-1 Hz-1, finite.
+ * * `emissivity`: surface emissivity, > 0, <= 1.
+ * * `reflected_temperature_k`: temperature of the reflected surroundings in K, >= 0.
+ * * `transmittance`: path transmittance, > 0, <= 1.
+ * * `path_temperature_k`: path temperature in K, >= 0.
+ * * `out`: where the result is written: T_obj in K, > 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_object_temperature_frequency(double frequency_hz,
+                                              double signal,
+                                              double emissivity,
+                                              double reflected_temperature_k,
+                                              double transmittance,
+                                              double path_temperature_k,
+                                              double *out);
+
+/**
+ * Single-precision twin of `relicore_object_temperature_frequency`: the same core function
+ * computed in `float`.
+ *
+ * Object temperature from the spectral radiance measured at one frequency: the brightness
+ * temperature (`brightness_temperature_frequency`) of the corrected object radiance.
+ *
+ * * `frequency_hz`: ν in Hz, finite and > 0.
+ * * `signal`: L_meas in W m⁻² sr⁻¹ Hz⁻¹, finite; the scene as
+ *   `object_temperature_wavelength`.
+ *
+ * Returns T_obj in K. Errors as `object_temperature_wavelength`. Accuracy: within 1e-13
+ * relative (`f64`) against mpmath for κ ≤ 20.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `signal`: measured spectral radiance L_meas in W m-2 sr-1 Hz-1, finite.
+ * * `emissivity`: surface emissivity, > 0, <= 1.
+ * * `reflected_temperature_k`: temperature of the reflected surroundings in K, >= 0.
+ * * `transmittance`: path transmittance, > 0, <= 1.
+ * * `path_temperature_k`: path temperature in K, >= 0.
+ * * `out`: where the result is written: T_obj in K, > 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `float`.
+ */
+int32_t relicore_object_temperature_frequency_f32(float frequency_hz,
+                                                  float signal,
+                                                  float emissivity,
+                                                  float reflected_temperature_k,
+                                                  float transmittance,
+                                                  float path_temperature_k,
+                                                  float *out);
+
+/**
+ * Object temperature from the band radiance measured between two wavelengths: the
+ * temperature (`temperature_from_band_radiance_wavelength`, the shared root finder) of the
+ * corrected object band radiance.
+ *
+ * * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
+ * * `signal` (argument 2): band radiance in W m⁻² sr⁻¹, finite.
+ * * `emissivity`, `reflected_temperature_k`, `transmittance`, `path_temperature_k`
+ *   (arguments 3 to 6): as `object_temperature_wavelength`.
+ *
+ * Returns T_obj in K. Errors: the band errors of `band_radiance_wavelength`; the scene errors
+ * of `object_temperature_wavelength` at positions 2 to 6 (`OutOfDomain(2)` for L_obj ≤ 0);
+ * `NoConvergence` (seen only far outside physical arguments).
+ * Accuracy: within 1e-13 relative (`f64`) against mpmath for κ ≤ 20.
+ *
+ * Arguments of the C function:
+ * * `lower_m`: lower band edge in m, >= 0.
+ * * `upper_m`: upper band edge in m, > lower_m, may be +Inf.
+ * * `signal`: measured band radiance L_meas in W m-2 sr-1, finite.
+ * * `emissivity`: surface emissivity, > 0, <= 1.
+ * * `reflected_temperature_k`: temperature of the reflected surroundings in K, >= 0.
+ * * `transmittance`: path transmittance, > 0, <= 1.
+ * * `path_temperature_k`: path temperature in K, >= 0.
+ * * `out`: where the result is written: T_obj in K, > 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_object_temperature_band(double lower_m,
+                                         double upper_m,
+                                         double signal,
+                                         double emissivity,
+                                         double reflected_temperature_k,
+                                         double transmittance,
+                                         double path_temperature_k,
+                                         double *out);
+
+/**
+ * Temperature derivative of the band radiance between two wavelengths, dL/dT with
+ * L = `band_radiance_wavelength`: dL/dT = (4L + K T⁴ (x₁ f(x₁) − x₂ f(x₂)))/T,
+ * f(t) = t³/(eᵗ − 1), x = c₂/(λT) at the band edges, K = 2k⁴/(h³c²) (the derivative of
+ * K T⁴ ∫ f(t) dt under the change of variables t = c₂/(λT)).
+ *
+ * * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
+ * * `temperature_k`: K, finite and > 0.
+ *
+ * Returns W m⁻² sr⁻¹ K⁻¹, ≥ 0. Errors as `band_radiance_wavelength`.
+ * Accuracy: within 1e-13 relative (`f64`) against mpmath quadrature of ∂B_λ/∂T over the band
+ * for x at the long-wave edge ≥ 0.05 (below, 4L and the edge terms cancel as 4/x).
+ *
+ * Arguments of the C function:
+ * * `lower_m`: lower band edge in m, >= 0.
+ * * `upper_m`: upper band edge in m, > lower_m, may be +Inf.
+ * * `temperature_k`: temperature in K, > 0.
+ * * `out`: where the result is written: dL/dT in W m-2 sr-1 K-1, >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_band_radiance_temperature_derivative_wavelength(double lower_m,
+                                                                 double upper_m,
+                                                                 double temperature_k,
+                                                                 double *out);
+
+/**
+ * Brightness temperature at a wavelength with its uncertainty: T from
+ * `brightness_temperature_wavelength` (the same bits) and the sensitivity coefficient
+ * ∂T/∂L = 1/(∂B_λ/∂T) (Planck's law differentiated implicitly, with
+ * `radiance_temperature_derivative_wavelength`).
+ *
+ * * `wavelength_m`: m, finite and > 0.
+ * * `spectral_radiance`: L in W m⁻² sr⁻¹ m⁻¹, finite and > 0.
+ * * `spectral_radiance_uncertainty`: standard uncertainty u(L), same unit, finite and ≥ 0.
+ *
+ * Returns a `TemperatureUncertainty` with `inputs` = 1, coefficient 0 = ∂T/∂L in
+ * K per (W m⁻² sr⁻¹ m⁻¹), u_c = |∂T/∂L| u(L). Errors: those of
+ * `brightness_temperature_wavelength`; `NonFinite(2)`, `Negative(2)`; `OutOfDomain(1)` when
+ * dB/dT at T is not a positive normal number (radiances far outside thermal ones).
+ *
+ * Accuracy: temperature as `brightness_temperature_wavelength`; coefficient within 1e-12
+ * relative (`f64`) against mpmath (`tests/data/thermometry.txt`). Reference: JCGM 100:2008
+ * eq. 10 with the implicit derivative of Planck's law.
+ *
+ * Arguments of the C function:
+ * * `wavelength_m`: wavelength in m, > 0.
+ * * `spectral_radiance`: B_lambda in W m-2 sr-1 m-1, > 0.
+ * * `spectral_radiance_uncertainty`: standard uncertainty of the radiance, same unit, >= 0.
+ * * `out`: where the result is written, a `struct relicore_temperature_uncertainty`
+ *   (`temperature_k`, `combined_standard_uncertainty_k`, `sensitivity_coefficients`[5], `inputs`):
+ *   T in K with u_c and dT/dL (1 input). On failure every real field is NaN and the count `inputs`
+ *   is 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `struct relicore_temperature_uncertainty`.
+ */
+int32_t relicore_brightness_temperature_wavelength_with_uncertainty(double wavelength_m,
+                                                                    double spectral_radiance,
+                                                                    double spectral_radiance_uncertainty,
+                                                                    struct relicore_temperature_uncertainty *out);
+
+/**
+ * Brightness temperature at a frequency with its uncertainty: T from
+ * `brightness_temperature_frequency` (the same bits) and ∂T/∂L = 1/(∂B_ν/∂T)
+ * (`radiance_temperature_derivative_frequency`).
+ *
+ * * `frequency_hz`: Hz, finite and > 0.
+ * * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
+ * * `spectral_radiance_uncertainty`: u(L), same unit, finite and ≥ 0.
+ *
+ * Returns a `TemperatureUncertainty` with `inputs` = 1 (coefficient 0 = ∂T/∂L in
+ * K per W m⁻² sr⁻¹ Hz⁻¹). Errors as `brightness_temperature_wavelength_with_uncertainty`.
+ * Accuracy: coefficient within 1e-12 relative (`f64`) against mpmath. Reference: JCGM 100:2008
+ * eq. 10.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `spectral_radiance`: B_nu in W m-2 sr-1 Hz-1, > 0.
+ * * `spectral_radiance_uncertainty`: standard uncertainty of the radiance, same unit, >= 0.
+ * * `out`: where the result is written, a `struct relicore_temperature_uncertainty`
+ *   (`temperature_k`, `combined_standard_uncertainty_k`, `sensitivity_coefficients`[5], `inputs`):
+ *   T in K with u_c and dT/dL (1 input). On failure every real field is NaN and the count `inputs`
+ *   is 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `struct relicore_temperature_uncertainty`.
+ */
+int32_t relicore_brightness_temperature_frequency_with_uncertainty(double frequency_hz,
+                                                                   double spectral_radiance,
+                                                                   double spectral_radiance_uncertainty,
+                                                                   struct relicore_temperature_uncertainty *out);
+
+/**
+ * `object_temperature_wavelength` with its sensitivity coefficients and combined standard
+ * uncertainty.
+ *
+ * * `wavelength_m`, `signal`, `emissivity`, `reflected_temperature_k`, `transmittance`,
+ *   `path_temperature_k` (arguments 0 to 5): as `object_temperature_wavelength`.
+ * * `signal_uncertainty`, `emissivity_uncertainty`, `reflected_temperature_uncertainty_k`,
+ *   `transmittance_uncertainty`, `path_temperature_uncertainty_k` (arguments 6 to 10): the
+ *   standard uncertainties of the five inputs, finite and ≥ 0, in their units.
+ *
+ * Returns a `TemperatureUncertainty`: the temperature (the bits of
+ * `object_temperature_wavelength`), u_c in K (JCGM 100:2008 eq. 10, uncorrelated inputs),
+ * `inputs` = 5 and the coefficients ∂T/∂(L_meas, ε, T_refl, τ, T_path) of the module
+ * documentation, in K per W m⁻² sr⁻¹ m⁻¹, K, K/K, K, K/K. Errors: as
+ * `object_temperature_wavelength` (where a term of weight 0 is evaluated here too, its
+ * overflow is `OutOfDomain(3|5)`); `NonFinite(i)`, `Negative(i)` for i = 6…10;
+ * `OutOfDomain(1)` when dB/dT at T_obj is not a positive normal number.
+ *
+ * Accuracy: coefficients within 1e-12 relative (`f64`) against mpmath (module docs for those
+ * of ε and τ), u_c within 1e-12 relative. Reference: JCGM 100:2008 eq. 10; implicit
+ * differentiation of the measurement equation.
+ *
+ * Arguments of the C function:
+ * * `wavelength_m`: wavelength in m, > 0.
+ * * `signal`: measured spectral radiance L_meas in W m-2 sr-1 m-1, finite.
+ * * `emissivity`: surface emissivity, > 0, <= 1.
+ * * `reflected_temperature_k`: temperature of the reflected surroundings in K, >= 0.
+ * * `transmittance`: path transmittance, > 0, <= 1.
+ * * `path_temperature_k`: path temperature in K, >= 0.
+ * * `signal_uncertainty`: standard uncertainty of the signal, same unit, >= 0.
+ * * `emissivity_uncertainty`: standard uncertainty of the emissivity, >= 0.
+ * * `reflected_temperature_uncertainty_k`: standard uncertainty of the reflected temperature in K,
+ *   >= 0.
+ * * `transmittance_uncertainty`: standard uncertainty of the transmittance, >= 0.
+ * * `path_temperature_uncertainty_k`: standard uncertainty of the path temperature in K, >= 0.
+ * * `out`: where the result is written, a `struct relicore_temperature_uncertainty`
+ *   (`temperature_k`, `combined_standard_uncertainty_k`, `sensitivity_coefficients`[5], `inputs`):
+ *   T_obj in K with u_c and the 5 coefficients. On failure every real field is NaN and the count
+ *   `inputs` is 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `struct relicore_temperature_uncertainty`.
+ */
+int32_t relicore_object_temperature_wavelength_with_uncertainty(double wavelength_m,
+                                                                double signal,
+                                                                double emissivity,
+                                                                double reflected_temperature_k,
+                                                                double transmittance,
+                                                                double path_temperature_k,
+                                                                double signal_uncertainty,
+                                                                double emissivity_uncertainty,
+                                                                double reflected_temperature_uncertainty_k,
+                                                                double transmittance_uncertainty,
+                                                                double path_temperature_uncertainty_k,
+                                                                struct relicore_temperature_uncertainty *out);
+
+/**
+ * Single-precision twin of `relicore_object_temperature_wavelength_with_uncertainty`: the same
+ * core function computed in `float`.
+ *
+ * `object_temperature_wavelength` with its sensitivity coefficients and combined standard
+ * uncertainty.
+ *
+ * * `wavelength_m`, `signal`, `emissivity`, `reflected_temperature_k`, `transmittance`,
+ *   `path_temperature_k` (arguments 0 to 5): as `object_temperature_wavelength`.
+ * * `signal_uncertainty`, `emissivity_uncertainty`, `reflected_temperature_uncertainty_k`,
+ *   `transmittance_uncertainty`, `path_temperature_uncertainty_k` (arguments 6 to 10): the
+ *   standard uncertainties of the five inputs, finite and ≥ 0, in their units.
+ *
+ * Returns a `TemperatureUncertainty`: the temperature (the bits of
+ * `object_temperature_wavelength`), u_c in K (JCGM 100:2008 eq. 10, uncorrelated inputs),
+ * `inputs` = 5 and the coefficients ∂T/∂(L_meas, ε, T_refl, τ, T_path) of the module
+ * documentation, in K per W m⁻² sr⁻¹ m⁻¹, K, K/K, K, K/K. Errors: as
+ * `object_temperature_wavelength` (where a term of weight 0 is evaluated here too, its
+ * overflow is `OutOfDomain(3|5)`); `NonFinite(i)`, `Negative(i)` for i = 6…10;
+ * `OutOfDomain(1)` when dB/dT at T_obj is not a positive normal number.
+ *
+ * Accuracy: coefficients within 1e-12 relative (`f64`) against mpmath (module docs for those
+ * of ε and τ), u_c within 1e-12 relative. Reference: JCGM 100:2008 eq. 10; implicit
+ * differentiation of the measurement equation.
+ *
+ * Arguments of the C function:
+ * * `wavelength_m`: wavelength in m, > 0.
+ * * `signal`: measured spectral radiance L_meas in W m-2 sr-1 m-1, finite.
+ * * `emissivity`: surface emissivity, > 0, <= 1.
+ * * `reflected_temperature_k`: temperature of the reflected surroundings in K, >= 0.
+ * * `transmittance`: path transmittance, > 0, <= 1.
+ * * `path_temperature_k`: path temperature in K, >= 0.
+ * * `signal_uncertainty`: standard uncertainty of the signal, same unit, >= 0.
+ * * `emissivity_uncertainty`: standard uncertainty of the emissivity, >= 0.
+ * * `reflected_temperature_uncertainty_k`: standard uncertainty of the reflected temperature in K,
+ *   >= 0.
+ * * `transmittance_uncertainty`: standard uncertainty of the transmittance, >= 0.
+ * * `path_temperature_uncertainty_k`: standard uncertainty of the path temperature in K, >= 0.
+ * * `out`: where the result is written, a `struct relicore_temperature_uncertainty_f32`
+ *   (`temperature_k`, `combined_standard_uncertainty_k`, `sensitivity_coefficients`[5], `inputs`):
+ *   T_obj in K with u_c and the 5 coefficients. On failure every real field is NaN and the count
+ *   `inputs` is 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `struct relicore_temperature_uncertainty_f32`.
+ */
+int32_t relicore_object_temperature_wavelength_with_uncertainty_f32(float wavelength_m,
+                                                                    float signal,
+                                                                    float emissivity,
+                                                                    float reflected_temperature_k,
+                                                                    float transmittance,
+                                                                    float path_temperature_k,
+                                                                    float signal_uncertainty,
+                                                                    float emissivity_uncertainty,
+                                                                    float reflected_temperature_uncertainty_k,
+                                                                    float transmittance_uncertainty,
+                                                                    float path_temperature_uncertainty_k,
+                                                                    struct relicore_temperature_uncertainty_f32 *out);
+
+/**
+ * `object_temperature_frequency` with its sensitivity coefficients and combined standard
+ * uncertainty; arguments, result and errors as
+ * `object_temperature_wavelength_with_uncertainty` with the frequency ν in Hz first and the
+ * signal in W m⁻² sr⁻¹ Hz⁻¹.
+ *
+ * Accuracy: coefficients and u_c within 1e-12 relative (`f64`) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `signal`: measured spectral radiance L_meas in W m-2 sr-1 Hz-1, finite.
+ * * `emissivity`: surface emissivity, > 0, <= 1.
+ * * `reflected_temperature_k`: temperature of the reflected surroundings in K, >= 0.
+ * * `transmittance`: path transmittance, > 0, <= 1.
+ * * `path_temperature_k`: path temperature in K, >= 0.
+ * * `signal_uncertainty`: standard uncertainty of the signal, same unit, >= 0.
+ * * `emissivity_uncertainty`: standard uncertainty of the emissivity, >= 0.
+ * * `reflected_temperature_uncertainty_k`: standard uncertainty of the reflected temperature in K,
+ *   >= 0.
+ * * `transmittance_uncertainty`: standard uncertainty of the transmittance, >= 0.
+ * * `path_temperature_uncertainty_k`: standard uncertainty of the path temperature in K, >= 0.
+ * * `out`: where the result is written, a `struct relicore_temperature_uncertainty`
+ *   (`temperature_k`, `combined_standard_uncertainty_k`, `sensitivity_coefficients`[5], `inputs`):
+ *   T_obj in K with u_c and the 5 coefficients. On failure every real field is NaN and the count
+ *   `inputs` is 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `struct relicore_temperature_uncertainty`.
+ */
+int32_t relicore_object_temperature_frequency_with_uncertainty(double frequency_hz,
+                                                               double signal,
+                                                               double emissivity,
+                                                               double reflected_temperature_k,
+                                                               double transmittance,
+                                                               double path_temperature_k,
+                                                               double signal_uncertainty,
+                                                               double emissivity_uncertainty,
+                                                               double reflected_temperature_uncertainty_k,
+                                                               double transmittance_uncertainty,
+                                                               double path_temperature_uncertainty_k,
+                                                               struct relicore_temperature_uncertainty *out);
+
+/**
+ * Single-precision twin of `relicore_object_temperature_frequency_with_uncertainty`: the same core
+ * function computed in `float`.
+ *
+ * `object_temperature_frequency` with its sensitivity coefficients and combined standard
+ * uncertainty; arguments, result and errors as
+ * `object_temperature_wavelength_with_uncertainty` with the frequency ν in Hz first and the
+ * signal in W m⁻² sr⁻¹ Hz⁻¹.
+ *
+ * Accuracy: coefficients and u_c within 1e-12 relative (`f64`) against mpmath.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `signal`: measured spectral radiance L_meas in W m-2 sr-1 Hz-1, finite.
+ * * `emissivity`: surface emissivity, > 0, <= 1.
+ * * `reflected_temperature_k`: temperature of the reflected surroundings in K, >= 0.
+ * * `transmittance`: path transmittance, > 0, <= 1.
+ * * `path_temperature_k`: path temperature in K, >= 0.
+ * * `signal_uncertainty`: standard uncertainty of the signal, same unit, >= 0.
+ * * `emissivity_uncertainty`: standard uncertainty of the emissivity, >= 0.
+ * * `reflected_temperature_uncertainty_k`: standard uncertainty of the reflected temperature in K,
+ *   >= 0.
+ * * `transmittance_uncertainty`: standard uncertainty of the transmittance, >= 0.
+ * * `path_temperature_uncertainty_k`: standard uncertainty of the path temperature in K, >= 0.
+ * * `out`: where the result is written, a `struct relicore_temperature_uncertainty_f32`
+ *   (`temperature_k`, `combined_standard_uncertainty_k`, `sensitivity_coefficients`[5], `inputs`):
+ *   T_obj in K with u_c and the 5 coefficients. On failure every real field is NaN and the count
+ *   `inputs` is 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `struct relicore_temperature_uncertainty_f32`.
+ */
+int32_t relicore_object_temperature_frequency_with_uncertainty_f32(float frequency_hz,
+                                                                   float signal,
+                                                                   float emissivity,
+                                                                   float reflected_temperature_k,
+                                                                   float transmittance,
+                                                                   float path_temperature_k,
+                                                                   float signal_uncertainty,
+                                                                   float emissivity_uncertainty,
+                                                                   float reflected_temperature_uncertainty_k,
+                                                                   float transmittance_uncertainty,
+                                                                   float path_temperature_uncertainty_k,
+                                                                   struct relicore_temperature_uncertainty_f32 *out);
+
+/**
+ * `object_temperature_band` with its sensitivity coefficients and combined standard
+ * uncertainty. The band derivative is `band_radiance_temperature_derivative_wavelength`.
+ *
+ * * `lower_m`, `upper_m`, `signal`, the scene (arguments 0 to 6): as
+ *   `object_temperature_band`.
+ * * the five standard uncertainties (arguments 7 to 11), as
+ *   `object_temperature_wavelength_with_uncertainty`.
+ *
+ * Returns a `TemperatureUncertainty` (coefficients in K per W m⁻² sr⁻¹, K, K/K, K, K/K).
+ * Errors: as `object_temperature_band`; `NonFinite(i)`, `Negative(i)` for i = 7…11.
+ * Accuracy: coefficients and u_c within 1e-12 relative (`f64`) against mpmath quadrature.
+ *
+ * Arguments of the C function:
+ * * `lower_m`: lower band edge in m, >= 0.
+ * * `upper_m`: upper band edge in m, > lower_m, may be +Inf.
+ * * `signal`: measured band radiance L_meas in W m-2 sr-1, finite.
+ * * `emissivity`: surface emissivity, > 0, <= 1.
+ * * `reflected_temperature_k`: temperature of the reflected surroundings in K, >= 0.
+ * * `transmittance`: path transmittance, > 0, <= 1.
+ * * `path_temperature_k`: path temperature in K, >= 0.
+ * * `signal_uncertainty`: standard uncertainty of the signal, same unit, >= 0.
+ * * `emissivity_uncertainty`: standard uncertainty of the emissivity, >= 0.
+ * * `reflected_temperature_uncertainty_k`: standard uncertainty of the reflected temperature in K,
+ *   >= 0.
+ * * `transmittance_uncertainty`: standard uncertainty of the transmittance, >= 0.
+ * * `path_temperature_uncertainty_k`: standard uncertainty of the path temperature in K, >= 0.
+ * * `out`: where the result is written, a `struct relicore_temperature_uncertainty`
+ *   (`temperature_k`, `combined_standard_uncertainty_k`, `sensitivity_coefficients`[5], `inputs`):
+ *   T_obj in K with u_c and the 5 coefficients. On failure every real field is NaN and the count
+ *   `inputs` is 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `struct relicore_temperature_uncertainty`.
+ */
+int32_t relicore_object_temperature_band_with_uncertainty(double lower_m,
+                                                          double upper_m,
+                                                          double signal,
+                                                          double emissivity,
+                                                          double reflected_temperature_k,
+                                                          double transmittance,
+                                                          double path_temperature_k,
+                                                          double signal_uncertainty,
+                                                          double emissivity_uncertainty,
+                                                          double reflected_temperature_uncertainty_k,
+                                                          double transmittance_uncertainty,
+                                                          double path_temperature_uncertainty_k,
+                                                          struct relicore_temperature_uncertainty *out);
+
+/**
+ * Two-load calibrated temperature with its uncertainty: T from `two_load_calibration` and
+ * `calibrated_temperature` (the same bits), and its sensitivity to the three readings and
+ * the two load temperatures.
+ *
+ * With J(T) the Rayleigh-Jeans brightness temperature (hν/k)/(e^(hν/kT) − 1),
+ * w = (r − r_c)/(r_h − r_c) and the scene J = J(T_c) + w (J(T_h) − J(T_c)), implicit
+ * differentiation of J(T) = J gives, with J′ = dJ/dT = x²eˣ/(eˣ − 1)²
+ * (`thermodynamic_to_rayleigh_jeans_factor`) and g the gain:
+ * ∂T/∂r_h = −w/(g J′(T)), ∂T/∂T_h = w J′(T_h)/J′(T), ∂T/∂r_c = −(1 − w)/(g J′(T)),
+ * ∂T/∂T_c = (1 − w) J′(T_c)/J′(T), ∂T/∂r = 1/(g J′(T)).
+ *
+ * * `frequency_hz`, `reading_hot`, `temperature_hot_k`, `reading_cold`, `temperature_cold_k`:
+ *   as `two_load_calibration` (arguments 0 to 4).
+ * * `reading`: the scene reading, as `calibrated_temperature` (argument 5).
+ * * `reading_hot_uncertainty`, `temperature_hot_uncertainty_k`, `reading_cold_uncertainty`,
+ *   `temperature_cold_uncertainty_k`, `reading_uncertainty`: standard uncertainties of the
+ *   five inputs, finite and ≥ 0 (arguments 6 to 10), in reading units or K.
+ *
+ * Returns a `TemperatureUncertainty` with `inputs` = 5 and the coefficients in the order
+ * (reading_hot, temperature_hot, reading_cold, temperature_cold, reading), in K per reading
+ * unit or K/K. Errors: those of `two_load_calibration` and `calibrated_temperature`
+ * (`OutOfDomain(5)` for a reading no blackbody gives); `NonFinite(i)`, `Negative(i)` for
+ * i = 6…10; `OutOfDomain(5)` when J′(T) is not a positive normal number.
+ *
+ * Accuracy: temperature as `calibrated_temperature`; coefficients within 1e-12 relative
+ * (`f64`) against mpmath (`tests/data/thermometry.txt`). Reference: JCGM 100:2008 eq. 10;
+ * the calibration line as in `two_load_calibration`.
+ *
+ * Arguments of the C function:
+ * * `frequency_hz`: frequency in Hz, > 0.
+ * * `reading_hot`: reading of the hot load, finite.
+ * * `temperature_hot_k`: hot load temperature in K, > 0.
+ * * `reading_cold`: reading of the cold load, finite.
+ * * `temperature_cold_k`: cold load temperature in K, > 0.
+ * * `reading`: reading of the scene, finite.
+ * * `reading_hot_uncertainty`: standard uncertainty of reading_hot, >= 0.
+ * * `temperature_hot_uncertainty_k`: standard uncertainty of the hot load temperature in K, >= 0.
+ * * `reading_cold_uncertainty`: standard uncertainty of reading_cold, >= 0.
+ * * `temperature_cold_uncertainty_k`: standard uncertainty of the cold load temperature in K, >=
+ *   0.
+ * * `reading_uncertainty`: standard uncertainty of the scene reading, >= 0.
+ * * `out`: where the result is written, a `struct relicore_temperature_uncertainty`
+ *   (`temperature_k`, `combined_standard_uncertainty_k`, `sensitivity_coefficients`[5], `inputs`):
+ *   T in K with u_c and the 5 coefficients (reading_hot, T_hot, reading_cold, T_cold, reading). On
+ *   failure every real field is NaN and the count `inputs` is 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
+ * errors named above as status codes (`relicore_status_message` gives the text);
+ * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL.
+ *
+ * # Safety
+ * `out` is NULL or points to a writable `struct relicore_temperature_uncertainty`.
+ */
+int32_t relicore_calibrated_temperature_with_uncertainty(double frequency_hz,
+                                                         double reading_hot,
+                                                         double temperature_hot_k,
+                                                         double reading_cold,
+                                                         double temperature_cold_k,
+                                                         double reading,
+                                                         double reading_hot_uncertainty,
+                                                         double temperature_hot_uncertainty_k,
+                                                         double reading_cold_uncertainty,
+                                                         double temperature_cold_uncertainty_k,
+                                                         double reading_uncertainty,
+                                                         struct relicore_temperature_uncertainty *out);
+
+/**
  * Calibrates a radiometer channel from two blackbody loads: fits `reading = gain · J +
  * offset`, J the Rayleigh-Jeans brightness temperature of each load at the channel frequency.
  *
@@ -2243,6 +3141,922 @@ int32_t relicore_temperature_from_response_weighted_radiance_f32(const float *wa
                                                                  size_t n_response,
                                                                  float radiance,
                                                                  float *out);
+
+/**
+ * Measured response-weighted radiance of a scene (the forward measurement equation with the
+ * response-weighted radiance of a tabulated spectral response): L_meas = t[e L_r(T_obj) + (1 -
+ * e) L_r(T_refl)] + (1 - t) L_r(T_path).
+ *
+ * * `wavelengths_m`, `n_wavelengths`, `response_table`, `n_response_table`: the response table, as for
+ *   `relicore_response_weighted_radiance` (strictly increasing wavelengths in m, > 0, at least
+ *   2; response finite and >= 0, same length).
+ * * `object_temperature_k`: object temperature in K, finite and > 0.
+ * * `emissivity`: surface emissivity, 0 < e <= 1. `reflected_temperature_k`: temperature of the
+ *   reflected surroundings in K, >= 0. `transmittance`: path transmittance, 0 < t <= 1.
+ *   `path_temperature_k`: path temperature in K, >= 0.
+ * * `out`: L_meas in W m⁻² sr⁻¹ (times the unit of the response), >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the
+ * table errors of `relicore_response_weighted_radiance` (`RELICORE_ERROR_NULL_POINTER` for a
+ * NULL table even of length 0, `ARRAY_TOO_SHORT`, `LENGTH_MISMATCH`, `NOT_INCREASING`,
+ * `NON_FINITE`, `NON_POSITIVE`, `NEGATIVE`); `RELICORE_ERROR_NON_POSITIVE` (T_obj, e or t <=
+ * 0), `RELICORE_ERROR_NEGATIVE` (T_refl or T_path < 0), `RELICORE_ERROR_OUT_OF_DOMAIN` (e or t
+ * above 1, a radiance that overflows), `RELICORE_ERROR_NO_CONVERGENCE` if a quadrature cannot
+ * meet its tolerance. `RELICORE_ERROR_NULL_POINTER` when `out` is NULL.
+ *
+ * Accuracy: within 1e-13 relative against mpmath quadrature
+ * (`tests/data/thermometry_response.txt`). Allocates nothing.
+ *
+ * # Safety
+ * `wavelengths_m` is NULL or points to `n_wavelengths` readable `double`, `response_table` NULL or
+ * to `n_response_table` readable `double`; `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_measured_response_weighted_radiance(const double *wavelengths_m,
+                                                     size_t n_wavelengths,
+                                                     const double *response_table,
+                                                     size_t n_response_table,
+                                                     double object_temperature_k,
+                                                     double emissivity,
+                                                     double reflected_temperature_k,
+                                                     double transmittance,
+                                                     double path_temperature_k,
+                                                     double *out);
+
+/**
+ * `float` twin of `relicore_measured_response_weighted_radiance` for firmware: the same core
+ * function computed in single precision (table, arguments and result `float`).
+ *
+ * * `wavelengths_m`, `n_wavelengths`, `response_table`, `n_response_table`: the response table, as for
+ *   `relicore_response_weighted_radiance` (strictly increasing wavelengths in m, > 0, at least
+ *   2; response finite and >= 0, same length).
+ * * `object_temperature_k`: object temperature in K, finite and > 0.
+ * * `emissivity`: surface emissivity, 0 < e <= 1. `reflected_temperature_k`: temperature of the
+ *   reflected surroundings in K, >= 0. `transmittance`: path transmittance, 0 < t <= 1.
+ *   `path_temperature_k`: path temperature in K, >= 0.
+ * * `out`: L_meas in W m⁻² sr⁻¹ (times the unit of the response), >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the
+ * table errors of `relicore_response_weighted_radiance` (`RELICORE_ERROR_NULL_POINTER` for a
+ * NULL table even of length 0, `ARRAY_TOO_SHORT`, `LENGTH_MISMATCH`, `NOT_INCREASING`,
+ * `NON_FINITE`, `NON_POSITIVE`, `NEGATIVE`); `RELICORE_ERROR_NON_POSITIVE` (T_obj, e or t <=
+ * 0), `RELICORE_ERROR_NEGATIVE` (T_refl or T_path < 0), `RELICORE_ERROR_OUT_OF_DOMAIN` (e or t
+ * above 1, a radiance that overflows), `RELICORE_ERROR_NO_CONVERGENCE` if a quadrature cannot
+ * meet its tolerance. `RELICORE_ERROR_NULL_POINTER` when `out` is NULL.
+ *
+ * Accuracy: that of the core function in f32 (a few f32 ulp of the f64 result where the inputs
+ * are representable). Allocates nothing.
+ *
+ * # Safety
+ * `wavelengths_m` is NULL or points to `n_wavelengths` readable `float`, `response_table` NULL or to
+ * `n_response_table` readable `float`; `out` is NULL or points to a writable `float`.
+ */
+int32_t relicore_measured_response_weighted_radiance_f32(const float *wavelengths_m,
+                                                         size_t n_wavelengths,
+                                                         const float *response_table,
+                                                         size_t n_response_table,
+                                                         float object_temperature_k,
+                                                         float emissivity,
+                                                         float reflected_temperature_k,
+                                                         float transmittance,
+                                                         float path_temperature_k,
+                                                         float *out);
+
+/**
+ * Object temperature from a response-weighted signal (the inverse measurement equation): the
+ * temperature whose response-weighted radiance equals the corrected object radiance L_obj =
+ * ([L_meas - (1 - t) L_r(T_path)]/t - (1 - e) L_r(T_refl))/e, by the shared root finder.
+ *
+ * * `wavelengths_m`, `n_wavelengths`, `response_table`, `n_response_table`: the response table, as for
+ *   `relicore_response_weighted_radiance` (strictly increasing wavelengths in m, > 0, at least
+ *   2; response finite and >= 0, same length).
+ * * `signal`: L_meas in W m⁻² sr⁻¹ (times the unit of the response), finite.
+ * * `emissivity`: surface emissivity, 0 < e <= 1. `reflected_temperature_k`: temperature of the
+ *   reflected surroundings in K, >= 0. `transmittance`: path transmittance, 0 < t <= 1.
+ *   `path_temperature_k`: path temperature in K, >= 0.
+ * * `out`: T_obj in K, > 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the
+ * table errors of `relicore_response_weighted_radiance` (`RELICORE_ERROR_NULL_POINTER` for a
+ * NULL table even of length 0, `ARRAY_TOO_SHORT`, `LENGTH_MISMATCH`, `NOT_INCREASING`,
+ * `NON_FINITE`, `NON_POSITIVE`, `NEGATIVE`); the scene errors of
+ * `relicore_measured_response_weighted_radiance`; `RELICORE_ERROR_OUT_OF_DOMAIN` when L_obj <=
+ * 0 (the signal is at or below what the surroundings and the path alone give: no object
+ * temperature exists) or the response is zero everywhere; `RELICORE_ERROR_NO_CONVERGENCE`.
+ * `RELICORE_ERROR_NULL_POINTER` when `out` is NULL.
+ *
+ * Accuracy: within 1e-13 relative against mpmath for a correction condition number of at most
+ * 20 (see the core's module documentation). Allocates nothing.
+ *
+ * # Safety
+ * `wavelengths_m` is NULL or points to `n_wavelengths` readable `double`, `response_table` NULL or
+ * to `n_response_table` readable `double`; `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_object_temperature_response(const double *wavelengths_m,
+                                             size_t n_wavelengths,
+                                             const double *response_table,
+                                             size_t n_response_table,
+                                             double signal,
+                                             double emissivity,
+                                             double reflected_temperature_k,
+                                             double transmittance,
+                                             double path_temperature_k,
+                                             double *out);
+
+/**
+ * `float` twin of `relicore_object_temperature_response` for firmware: the same core function
+ * computed in single precision (table, arguments and result `float`).
+ *
+ * * `wavelengths_m`, `n_wavelengths`, `response_table`, `n_response_table`: the response table, as for
+ *   `relicore_response_weighted_radiance` (strictly increasing wavelengths in m, > 0, at least
+ *   2; response finite and >= 0, same length).
+ * * `signal`: L_meas in W m⁻² sr⁻¹ (times the unit of the response), finite.
+ * * `emissivity`: surface emissivity, 0 < e <= 1. `reflected_temperature_k`: temperature of the
+ *   reflected surroundings in K, >= 0. `transmittance`: path transmittance, 0 < t <= 1.
+ *   `path_temperature_k`: path temperature in K, >= 0.
+ * * `out`: T_obj in K, > 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the
+ * table errors of `relicore_response_weighted_radiance` (`RELICORE_ERROR_NULL_POINTER` for a
+ * NULL table even of length 0, `ARRAY_TOO_SHORT`, `LENGTH_MISMATCH`, `NOT_INCREASING`,
+ * `NON_FINITE`, `NON_POSITIVE`, `NEGATIVE`); the scene errors of
+ * `relicore_measured_response_weighted_radiance`; `RELICORE_ERROR_OUT_OF_DOMAIN` when L_obj <=
+ * 0 (the signal is at or below what the surroundings and the path alone give: no object
+ * temperature exists) or the response is zero everywhere; `RELICORE_ERROR_NO_CONVERGENCE`.
+ * `RELICORE_ERROR_NULL_POINTER` when `out` is NULL.
+ *
+ * Accuracy: that of the core function in f32 (a few f32 ulp of the f64 result where the inputs
+ * are representable). Allocates nothing.
+ *
+ * # Safety
+ * `wavelengths_m` is NULL or points to `n_wavelengths` readable `float`, `response_table` NULL or to
+ * `n_response_table` readable `float`; `out` is NULL or points to a writable `float`.
+ */
+int32_t relicore_object_temperature_response_f32(const float *wavelengths_m,
+                                                 size_t n_wavelengths,
+                                                 const float *response_table,
+                                                 size_t n_response_table,
+                                                 float signal,
+                                                 float emissivity,
+                                                 float reflected_temperature_k,
+                                                 float transmittance,
+                                                 float path_temperature_k,
+                                                 float *out);
+
+/**
+ * `relicore_object_temperature_response` with its sensitivity coefficients (implicit
+ * differentiation with the library's dT derivative of the response-weighted radiance) and its
+ * combined standard uncertainty (JCGM 100:2008 eq. 10, uncorrelated inputs).
+ *
+ * * `wavelengths_m`, `n_wavelengths`, `response_table`, `n_response_table`: the response table, as for
+ *   `relicore_response_weighted_radiance` (strictly increasing wavelengths in m, > 0, at least
+ *   2; response finite and >= 0, same length).
+ * * `signal`: L_meas in W m⁻² sr⁻¹, finite.
+ * * `emissivity`: surface emissivity, 0 < e <= 1. `reflected_temperature_k`: temperature of the
+ *   reflected surroundings in K, >= 0. `transmittance`: path transmittance, 0 < t <= 1.
+ *   `path_temperature_k`: path temperature in K, >= 0.
+ * * `signal_uncertainty`, `emissivity_uncertainty`, `reflected_temperature_uncertainty_k`,
+ *   `transmittance_uncertainty`, `path_temperature_uncertainty_k`: the standard uncertainties
+ *   of the five inputs, finite and >= 0, in their units.
+ * * `out`: a `struct relicore_temperature_uncertainty` (`_f32` for the twin): T_obj in K (the
+ *   bits of `relicore_object_temperature_response`), u_c in K, `inputs` = 5 and the
+ *   coefficients dT/d(L_meas, e, T_refl, t, T_path).
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN in every
+ * real field (and inputs 0): the table errors of `relicore_response_weighted_radiance`
+ * (`RELICORE_ERROR_NULL_POINTER` for a NULL table even of length 0, `ARRAY_TOO_SHORT`,
+ * `LENGTH_MISMATCH`, `NOT_INCREASING`, `NON_FINITE`, `NON_POSITIVE`, `NEGATIVE`); those of
+ * `relicore_object_temperature_response`; `RELICORE_ERROR_NON_FINITE` or
+ * `RELICORE_ERROR_NEGATIVE` for an uncertainty. `RELICORE_ERROR_NULL_POINTER` when `out` is
+ * NULL.
+ *
+ * Accuracy: coefficients and u_c within 1e-12 relative against mpmath quadrature. Allocates
+ * nothing.
+ *
+ * # Safety
+ * `wavelengths_m` is NULL or points to `n_wavelengths` readable `double`, `response_table` NULL or
+ * to `n_response_table` readable `double`; `out` is NULL or points to a writable `struct
+ * relicore_temperature_uncertainty`.
+ */
+int32_t relicore_object_temperature_response_with_uncertainty(const double *wavelengths_m,
+                                                              size_t n_wavelengths,
+                                                              const double *response_table,
+                                                              size_t n_response_table,
+                                                              double signal,
+                                                              double emissivity,
+                                                              double reflected_temperature_k,
+                                                              double transmittance,
+                                                              double path_temperature_k,
+                                                              double signal_uncertainty,
+                                                              double emissivity_uncertainty,
+                                                              double reflected_temperature_uncertainty_k,
+                                                              double transmittance_uncertainty,
+                                                              double path_temperature_uncertainty_k,
+                                                              struct relicore_temperature_uncertainty *out);
+
+/**
+ * `float` twin of `relicore_object_temperature_response_with_uncertainty` for firmware: the
+ * same core function computed in single precision (table, arguments and result `float`).
+ *
+ * * `wavelengths_m`, `n_wavelengths`, `response_table`, `n_response_table`: the response table, as for
+ *   `relicore_response_weighted_radiance` (strictly increasing wavelengths in m, > 0, at least
+ *   2; response finite and >= 0, same length).
+ * * `signal`: L_meas in W m⁻² sr⁻¹, finite.
+ * * `emissivity`: surface emissivity, 0 < e <= 1. `reflected_temperature_k`: temperature of the
+ *   reflected surroundings in K, >= 0. `transmittance`: path transmittance, 0 < t <= 1.
+ *   `path_temperature_k`: path temperature in K, >= 0.
+ * * `signal_uncertainty`, `emissivity_uncertainty`, `reflected_temperature_uncertainty_k`,
+ *   `transmittance_uncertainty`, `path_temperature_uncertainty_k`: the standard uncertainties
+ *   of the five inputs, finite and >= 0, in their units.
+ * * `out`: a `struct relicore_temperature_uncertainty` (`_f32` for the twin): T_obj in K (the
+ *   bits of `relicore_object_temperature_response`), u_c in K, `inputs` = 5 and the
+ *   coefficients dT/d(L_meas, e, T_refl, t, T_path).
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN in every
+ * real field (and inputs 0): the table errors of `relicore_response_weighted_radiance`
+ * (`RELICORE_ERROR_NULL_POINTER` for a NULL table even of length 0, `ARRAY_TOO_SHORT`,
+ * `LENGTH_MISMATCH`, `NOT_INCREASING`, `NON_FINITE`, `NON_POSITIVE`, `NEGATIVE`); those of
+ * `relicore_object_temperature_response`; `RELICORE_ERROR_NON_FINITE` or
+ * `RELICORE_ERROR_NEGATIVE` for an uncertainty. `RELICORE_ERROR_NULL_POINTER` when `out` is
+ * NULL.
+ *
+ * Accuracy: that of the core function in f32 (a few f32 ulp of the f64 result where the inputs
+ * are representable). Allocates nothing.
+ *
+ * # Safety
+ * `wavelengths_m` is NULL or points to `n_wavelengths` readable `float`, `response_table` NULL or to
+ * `n_response_table` readable `float`; `out` is NULL or points to a writable `struct
+ * relicore_temperature_uncertainty_f32`.
+ */
+int32_t relicore_object_temperature_response_with_uncertainty_f32(const float *wavelengths_m,
+                                                                  size_t n_wavelengths,
+                                                                  const float *response_table,
+                                                                  size_t n_response_table,
+                                                                  float signal,
+                                                                  float emissivity,
+                                                                  float reflected_temperature_k,
+                                                                  float transmittance,
+                                                                  float path_temperature_k,
+                                                                  float signal_uncertainty,
+                                                                  float emissivity_uncertainty,
+                                                                  float reflected_temperature_uncertainty_k,
+                                                                  float transmittance_uncertainty,
+                                                                  float path_temperature_uncertainty_k,
+                                                                  struct relicore_temperature_uncertainty_f32 *out);
+
+/**
+ * Temperature derivative of the response-weighted radiance, the integral of r(lambda)
+ * dB_lambda/dT over the table (the shared quadrature).
+ *
+ * * `wavelengths_m`, `n_wavelengths`, `response_table`, `n_response_table`: the response table, as for
+ *   `relicore_response_weighted_radiance` (strictly increasing wavelengths in m, > 0, at least
+ *   2; response finite and >= 0, same length).
+ * * `temperature_k`: T in K, finite and > 0.
+ * * `out`: dL_r/dT in W m⁻² sr⁻¹ K⁻¹ (times the unit of the response), >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the
+ * table errors of `relicore_response_weighted_radiance` (`RELICORE_ERROR_NULL_POINTER` for a
+ * NULL table even of length 0, `ARRAY_TOO_SHORT`, `LENGTH_MISMATCH`, `NOT_INCREASING`,
+ * `NON_FINITE`, `NON_POSITIVE`, `NEGATIVE`); `RELICORE_ERROR_NON_POSITIVE` for T <= 0;
+ * `RELICORE_ERROR_NO_CONVERGENCE`. `RELICORE_ERROR_NULL_POINTER` when `out` is NULL.
+ *
+ * Accuracy: within 1e-13 relative against mpmath quadrature. Allocates nothing.
+ *
+ * # Safety
+ * `wavelengths_m` is NULL or points to `n_wavelengths` readable `double`, `response_table` NULL or
+ * to `n_response_table` readable `double`; `out` is NULL or points to a writable `double`.
+ */
+int32_t relicore_response_weighted_radiance_temperature_derivative(const double *wavelengths_m,
+                                                                   size_t n_wavelengths,
+                                                                   const double *response_table,
+                                                                   size_t n_response_table,
+                                                                   double temperature_k,
+                                                                   double *out);
+
+/**
+ * `float` twin of `relicore_response_weighted_radiance_temperature_derivative` for firmware:
+ * the same core function computed in single precision (table, arguments and result `float`).
+ *
+ * * `wavelengths_m`, `n_wavelengths`, `response_table`, `n_response_table`: the response table, as for
+ *   `relicore_response_weighted_radiance` (strictly increasing wavelengths in m, > 0, at least
+ *   2; response finite and >= 0, same length).
+ * * `temperature_k`: T in K, finite and > 0.
+ * * `out`: dL_r/dT in W m⁻² sr⁻¹ K⁻¹ (times the unit of the response), >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the
+ * table errors of `relicore_response_weighted_radiance` (`RELICORE_ERROR_NULL_POINTER` for a
+ * NULL table even of length 0, `ARRAY_TOO_SHORT`, `LENGTH_MISMATCH`, `NOT_INCREASING`,
+ * `NON_FINITE`, `NON_POSITIVE`, `NEGATIVE`); `RELICORE_ERROR_NON_POSITIVE` for T <= 0;
+ * `RELICORE_ERROR_NO_CONVERGENCE`. `RELICORE_ERROR_NULL_POINTER` when `out` is NULL.
+ *
+ * Accuracy: that of the core function in f32 (a few f32 ulp of the f64 result where the inputs
+ * are representable). Allocates nothing.
+ *
+ * # Safety
+ * `wavelengths_m` is NULL or points to `n_wavelengths` readable `float`, `response_table` NULL or to
+ * `n_response_table` readable `float`; `out` is NULL or points to a writable `float`.
+ */
+int32_t relicore_response_weighted_radiance_temperature_derivative_f32(const float *wavelengths_m,
+                                                                       size_t n_wavelengths,
+                                                                       const float *response_table,
+                                                                       size_t n_response_table,
+                                                                       float temperature_k,
+                                                                       float *out);
+
+/**
+ * Combined standard uncertainty of uncorrelated inputs, u_c = (sum of c_i² u(x_i)²)^½
+ * (JCGM 100:2008 eq. 10), for any number of inputs given as caller arrays.
+ *
+ * * `sensitivity_coefficients`, `n_coefficients`: the c_i, finite (for example the first
+ *   `inputs` entries of a `relicore_temperature_uncertainty`), in K per unit of input i.
+ * * `standard_uncertainties`, `n_uncertainties`: the u(x_i), finite and >= 0; same length.
+ * * `out`: u_c in K, >= 0 (0 for n = 0).
+ *
+ * Returns `RELICORE_OK`, or a negative code with `*out` set to NaN: `RELICORE_ERROR_NULL_POINTER`
+ * (a NULL pointer, also for length 0), `RELICORE_ERROR_LENGTH_MISMATCH` when the lengths
+ * differ, `RELICORE_ERROR_NON_FINITE`, `RELICORE_ERROR_NEGATIVE` (an uncertainty < 0),
+ * `RELICORE_ERROR_OUT_OF_DOMAIN` when a product or the result overflows.
+ *
+ * Accuracy: within 2(n + 2) epsilon relative (a scaled sum of squares and one square root).
+ * Allocates nothing.
+ *
+ * # Safety
+ * Each pointer is NULL or points to its length of readable `double`; `out` is NULL or points
+ * to a writable `double`.
+ */
+int32_t relicore_combined_standard_uncertainty(const double *sensitivity_coefficients,
+                                               size_t n_coefficients,
+                                               const double *standard_uncertainties,
+                                               size_t n_uncertainties,
+                                               double *out);
+
+/**
+ * Combined standard uncertainty of correlated inputs, u_c² = sum over i, j of
+ * c_i c_j u(x_i) u(x_j) r(x_i, x_j) (JCGM 100:2008 eqs. 13 and 14).
+ *
+ * * `sensitivity_coefficients`, `n_coefficients`, `standard_uncertainties`, `n_uncertainties`:
+ *   as `relicore_combined_standard_uncertainty` (n values each).
+ * * `correlation`, `n_correlation`: the n × n correlation matrix r, row-major
+ *   (r[i·n + j] = r(x_i, x_j)): finite, |r_ij| <= 1, r_ii = 1, symmetric; n_correlation = n².
+ * * `out`: u_c in K, >= 0.
+ *
+ * Returns `RELICORE_OK`, or a negative code with `*out` set to NaN: the errors of
+ * `relicore_combined_standard_uncertainty`; `RELICORE_ERROR_LENGTH_MISMATCH` when the matrix
+ * does not hold n² values; `RELICORE_ERROR_OUT_OF_DOMAIN` when it is not a correlation matrix
+ * or the quadratic form is negative beyond its rounding error (not positive semi-definite).
+ *
+ * Accuracy: within (4n² + 4) epsilon of the sum of the absolute values of the terms, relative
+ * to u_c². Allocates nothing.
+ *
+ * # Safety
+ * Each pointer is NULL or points to its length of readable `double`; `out` is NULL or points
+ * to a writable `double`.
+ */
+int32_t relicore_combined_standard_uncertainty_correlated(const double *sensitivity_coefficients,
+                                                          size_t n_coefficients,
+                                                          const double *standard_uncertainties,
+                                                          size_t n_uncertainties,
+                                                          const double *correlation,
+                                                          size_t n_correlation,
+                                                          double *out);
+
+/**
+ * `relicore_object_temperature_wavelength` over a frame of signals (an image): out[i] = the
+ * object temperature of signals[i], bit for bit that of the scalar function, with per-pixel or
+ * shared scene parameters.
+ *
+ * * `wavelength_m`: wavelength in m, finite and > 0 (when it is not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹ m⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * `out`: n values of T_obj in K.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN, the others are computed, and the
+ * code of the first failing pixel is returned (the errors of the scalar function).
+ * `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1 values (every output
+ * NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a length 0; every
+ * non-NULL output NaN). The radiances of the surroundings and the path are computed once for
+ * shared parameters (and reused while per-pixel parameters repeat). Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `double`; each output is NULL
+ * or points to n writable `double` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_wavelength_array(double wavelength_m,
+                                                     const double *signals,
+                                                     size_t n,
+                                                     const double *emissivity,
+                                                     size_t n_emissivity,
+                                                     const double *reflected_temperature_k,
+                                                     size_t n_reflected_temperature_k,
+                                                     const double *transmittance,
+                                                     size_t n_transmittance,
+                                                     const double *path_temperature_k,
+                                                     size_t n_path_temperature_k,
+                                                     double *out);
+
+/**
+ * `float` twin of `relicore_object_temperature_wavelength_array` for firmware and
+ * single-precision frames: the same core function in `float`.
+ *
+ * * `wavelength_m`: wavelength in m, finite and > 0 (when it is not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹ m⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * `out`: n values of T_obj in K.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN, the others are computed, and the
+ * code of the first failing pixel is returned (the errors of the scalar function).
+ * `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1 values (every output
+ * NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a length 0; every
+ * non-NULL output NaN). The radiances of the surroundings and the path are computed once for
+ * shared parameters (and reused while per-pixel parameters repeat). Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `float`; each output is NULL
+ * or points to n writable `float` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_wavelength_array_f32(float wavelength_m,
+                                                         const float *signals,
+                                                         size_t n,
+                                                         const float *emissivity,
+                                                         size_t n_emissivity,
+                                                         const float *reflected_temperature_k,
+                                                         size_t n_reflected_temperature_k,
+                                                         const float *transmittance,
+                                                         size_t n_transmittance,
+                                                         const float *path_temperature_k,
+                                                         size_t n_path_temperature_k,
+                                                         float *out);
+
+/**
+ * `relicore_object_temperature_wavelength_with_uncertainty` over a frame of signals (an
+ * image): the object temperature and its combined standard uncertainty per pixel, bit for bit
+ * those of the scalar function, with per-pixel or shared scene parameters and standard
+ * uncertainties.
+ *
+ * * `wavelength_m`: wavelength in m, finite and > 0 (when it is not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹ m⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+ *   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+ *   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+ * * `out_temperature`: n values of T_obj in K; `out_uncertainty`: n values of u_c in K.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN, the others are computed, and the
+ * code of the first failing pixel is returned (the errors of the scalar function).
+ * `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1 values (every output
+ * NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a length 0; every
+ * non-NULL output NaN). The radiances of the surroundings and the path are computed once for
+ * shared parameters (and reused while per-pixel parameters repeat). Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `double`; each output is NULL
+ * or points to n writable `double` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_wavelength_with_uncertainty_array(double wavelength_m,
+                                                                      const double *signals,
+                                                                      size_t n,
+                                                                      const double *emissivity,
+                                                                      size_t n_emissivity,
+                                                                      const double *reflected_temperature_k,
+                                                                      size_t n_reflected_temperature_k,
+                                                                      const double *transmittance,
+                                                                      size_t n_transmittance,
+                                                                      const double *path_temperature_k,
+                                                                      size_t n_path_temperature_k,
+                                                                      const double *signal_uncertainty,
+                                                                      size_t n_signal_uncertainty,
+                                                                      const double *emissivity_uncertainty,
+                                                                      size_t n_emissivity_uncertainty,
+                                                                      const double *reflected_temperature_uncertainty_k,
+                                                                      size_t n_reflected_temperature_uncertainty_k,
+                                                                      const double *transmittance_uncertainty,
+                                                                      size_t n_transmittance_uncertainty,
+                                                                      const double *path_temperature_uncertainty_k,
+                                                                      size_t n_path_temperature_uncertainty_k,
+                                                                      double *out_temperature,
+                                                                      double *out_uncertainty);
+
+/**
+ * `float` twin of `relicore_object_temperature_wavelength_with_uncertainty_array` for firmware
+ * and single-precision frames: the same core function in `float`.
+ *
+ * * `wavelength_m`: wavelength in m, finite and > 0 (when it is not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹ m⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+ *   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+ *   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+ * * `out_temperature`: n values of T_obj in K; `out_uncertainty`: n values of u_c in K.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN, the others are computed, and the
+ * code of the first failing pixel is returned (the errors of the scalar function).
+ * `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1 values (every output
+ * NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a length 0; every
+ * non-NULL output NaN). The radiances of the surroundings and the path are computed once for
+ * shared parameters (and reused while per-pixel parameters repeat). Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `float`; each output is NULL
+ * or points to n writable `float` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_wavelength_with_uncertainty_array_f32(float wavelength_m,
+                                                                          const float *signals,
+                                                                          size_t n,
+                                                                          const float *emissivity,
+                                                                          size_t n_emissivity,
+                                                                          const float *reflected_temperature_k,
+                                                                          size_t n_reflected_temperature_k,
+                                                                          const float *transmittance,
+                                                                          size_t n_transmittance,
+                                                                          const float *path_temperature_k,
+                                                                          size_t n_path_temperature_k,
+                                                                          const float *signal_uncertainty,
+                                                                          size_t n_signal_uncertainty,
+                                                                          const float *emissivity_uncertainty,
+                                                                          size_t n_emissivity_uncertainty,
+                                                                          const float *reflected_temperature_uncertainty_k,
+                                                                          size_t n_reflected_temperature_uncertainty_k,
+                                                                          const float *transmittance_uncertainty,
+                                                                          size_t n_transmittance_uncertainty,
+                                                                          const float *path_temperature_uncertainty_k,
+                                                                          size_t n_path_temperature_uncertainty_k,
+                                                                          float *out_temperature,
+                                                                          float *out_uncertainty);
+
+/**
+ * `relicore_object_temperature_frequency` over a frame of signals (an image): out[i] = the
+ * object temperature of signals[i], bit for bit that of the scalar function, with per-pixel or
+ * shared scene parameters.
+ *
+ * * `frequency_hz`: frequency in Hz, finite and > 0 (when it is not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹ Hz⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * `out`: n values of T_obj in K.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN, the others are computed, and the
+ * code of the first failing pixel is returned (the errors of the scalar function).
+ * `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1 values (every output
+ * NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a length 0; every
+ * non-NULL output NaN). The radiances of the surroundings and the path are computed once for
+ * shared parameters (and reused while per-pixel parameters repeat). Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `double`; each output is NULL
+ * or points to n writable `double` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_frequency_array(double frequency_hz,
+                                                    const double *signals,
+                                                    size_t n,
+                                                    const double *emissivity,
+                                                    size_t n_emissivity,
+                                                    const double *reflected_temperature_k,
+                                                    size_t n_reflected_temperature_k,
+                                                    const double *transmittance,
+                                                    size_t n_transmittance,
+                                                    const double *path_temperature_k,
+                                                    size_t n_path_temperature_k,
+                                                    double *out);
+
+/**
+ * `float` twin of `relicore_object_temperature_frequency_array` for firmware and
+ * single-precision frames: the same core function in `float`.
+ *
+ * * `frequency_hz`: frequency in Hz, finite and > 0 (when it is not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹ Hz⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * `out`: n values of T_obj in K.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN, the others are computed, and the
+ * code of the first failing pixel is returned (the errors of the scalar function).
+ * `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1 values (every output
+ * NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a length 0; every
+ * non-NULL output NaN). The radiances of the surroundings and the path are computed once for
+ * shared parameters (and reused while per-pixel parameters repeat). Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `float`; each output is NULL
+ * or points to n writable `float` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_frequency_array_f32(float frequency_hz,
+                                                        const float *signals,
+                                                        size_t n,
+                                                        const float *emissivity,
+                                                        size_t n_emissivity,
+                                                        const float *reflected_temperature_k,
+                                                        size_t n_reflected_temperature_k,
+                                                        const float *transmittance,
+                                                        size_t n_transmittance,
+                                                        const float *path_temperature_k,
+                                                        size_t n_path_temperature_k,
+                                                        float *out);
+
+/**
+ * `relicore_object_temperature_frequency_with_uncertainty` over a frame of signals (an image):
+ * the object temperature and its combined standard uncertainty per pixel, bit for bit those of
+ * the scalar function, with per-pixel or shared scene parameters and standard uncertainties.
+ *
+ * * `frequency_hz`: frequency in Hz, finite and > 0 (when it is not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹ Hz⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+ *   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+ *   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+ * * `out_temperature`: n values of T_obj in K; `out_uncertainty`: n values of u_c in K.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN, the others are computed, and the
+ * code of the first failing pixel is returned (the errors of the scalar function).
+ * `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1 values (every output
+ * NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a length 0; every
+ * non-NULL output NaN). The radiances of the surroundings and the path are computed once for
+ * shared parameters (and reused while per-pixel parameters repeat). Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `double`; each output is NULL
+ * or points to n writable `double` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_frequency_with_uncertainty_array(double frequency_hz,
+                                                                     const double *signals,
+                                                                     size_t n,
+                                                                     const double *emissivity,
+                                                                     size_t n_emissivity,
+                                                                     const double *reflected_temperature_k,
+                                                                     size_t n_reflected_temperature_k,
+                                                                     const double *transmittance,
+                                                                     size_t n_transmittance,
+                                                                     const double *path_temperature_k,
+                                                                     size_t n_path_temperature_k,
+                                                                     const double *signal_uncertainty,
+                                                                     size_t n_signal_uncertainty,
+                                                                     const double *emissivity_uncertainty,
+                                                                     size_t n_emissivity_uncertainty,
+                                                                     const double *reflected_temperature_uncertainty_k,
+                                                                     size_t n_reflected_temperature_uncertainty_k,
+                                                                     const double *transmittance_uncertainty,
+                                                                     size_t n_transmittance_uncertainty,
+                                                                     const double *path_temperature_uncertainty_k,
+                                                                     size_t n_path_temperature_uncertainty_k,
+                                                                     double *out_temperature,
+                                                                     double *out_uncertainty);
+
+/**
+ * `float` twin of `relicore_object_temperature_frequency_with_uncertainty_array` for firmware
+ * and single-precision frames: the same core function in `float`.
+ *
+ * * `frequency_hz`: frequency in Hz, finite and > 0 (when it is not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹ Hz⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+ *   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+ *   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+ * * `out_temperature`: n values of T_obj in K; `out_uncertainty`: n values of u_c in K.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN, the others are computed, and the
+ * code of the first failing pixel is returned (the errors of the scalar function).
+ * `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1 values (every output
+ * NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a length 0; every
+ * non-NULL output NaN). The radiances of the surroundings and the path are computed once for
+ * shared parameters (and reused while per-pixel parameters repeat). Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `float`; each output is NULL
+ * or points to n writable `float` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_frequency_with_uncertainty_array_f32(float frequency_hz,
+                                                                         const float *signals,
+                                                                         size_t n,
+                                                                         const float *emissivity,
+                                                                         size_t n_emissivity,
+                                                                         const float *reflected_temperature_k,
+                                                                         size_t n_reflected_temperature_k,
+                                                                         const float *transmittance,
+                                                                         size_t n_transmittance,
+                                                                         const float *path_temperature_k,
+                                                                         size_t n_path_temperature_k,
+                                                                         const float *signal_uncertainty,
+                                                                         size_t n_signal_uncertainty,
+                                                                         const float *emissivity_uncertainty,
+                                                                         size_t n_emissivity_uncertainty,
+                                                                         const float *reflected_temperature_uncertainty_k,
+                                                                         size_t n_reflected_temperature_uncertainty_k,
+                                                                         const float *transmittance_uncertainty,
+                                                                         size_t n_transmittance_uncertainty,
+                                                                         const float *path_temperature_uncertainty_k,
+                                                                         size_t n_path_temperature_uncertainty_k,
+                                                                         float *out_temperature,
+                                                                         float *out_uncertainty);
+
+/**
+ * `relicore_object_temperature_band` over a frame of signals (an image): out[i] = the object
+ * temperature of signals[i], bit for bit that of the scalar function, with per-pixel or shared
+ * scene parameters.
+ *
+ * * `lower_m`, `upper_m`: band edges in m, 0 <= lower < upper <= +Inf (when they are not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * `out`: n values of T_obj in K.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN, the others are computed, and the
+ * code of the first failing pixel is returned (the errors of the scalar function).
+ * `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1 values (every output
+ * NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a length 0; every
+ * non-NULL output NaN). The radiances of the surroundings and the path are computed once for
+ * shared parameters (and reused while per-pixel parameters repeat). Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `double`; each output is NULL
+ * or points to n writable `double` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_band_array(double lower_m,
+                                               double upper_m,
+                                               const double *signals,
+                                               size_t n,
+                                               const double *emissivity,
+                                               size_t n_emissivity,
+                                               const double *reflected_temperature_k,
+                                               size_t n_reflected_temperature_k,
+                                               const double *transmittance,
+                                               size_t n_transmittance,
+                                               const double *path_temperature_k,
+                                               size_t n_path_temperature_k,
+                                               double *out);
+
+/**
+ * `float` twin of `relicore_object_temperature_band_array` for firmware and single-precision
+ * frames: the same core function in `float`.
+ *
+ * * `lower_m`, `upper_m`: band edges in m, 0 <= lower < upper <= +Inf (when they are not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * `out`: n values of T_obj in K.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN, the others are computed, and the
+ * code of the first failing pixel is returned (the errors of the scalar function).
+ * `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1 values (every output
+ * NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a length 0; every
+ * non-NULL output NaN). The radiances of the surroundings and the path are computed once for
+ * shared parameters (and reused while per-pixel parameters repeat). Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `float`; each output is NULL
+ * or points to n writable `float` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_band_array_f32(float lower_m,
+                                                   float upper_m,
+                                                   const float *signals,
+                                                   size_t n,
+                                                   const float *emissivity,
+                                                   size_t n_emissivity,
+                                                   const float *reflected_temperature_k,
+                                                   size_t n_reflected_temperature_k,
+                                                   const float *transmittance,
+                                                   size_t n_transmittance,
+                                                   const float *path_temperature_k,
+                                                   size_t n_path_temperature_k,
+                                                   float *out);
+
+/**
+ * `relicore_object_temperature_band_with_uncertainty` over a frame of signals (an image): the
+ * object temperature and its combined standard uncertainty per pixel, bit for bit those of the
+ * scalar function, with per-pixel or shared scene parameters and standard uncertainties.
+ *
+ * * `lower_m`, `upper_m`: band edges in m, 0 <= lower < upper <= +Inf (when they are not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+ *   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+ *   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+ * * `out_temperature`: n values of T_obj in K; `out_uncertainty`: n values of u_c in K.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN, the others are computed, and the
+ * code of the first failing pixel is returned (the errors of the scalar function).
+ * `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1 values (every output
+ * NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a length 0; every
+ * non-NULL output NaN). The radiances of the surroundings and the path are computed once for
+ * shared parameters (and reused while per-pixel parameters repeat). Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `double`; each output is NULL
+ * or points to n writable `double` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_band_with_uncertainty_array(double lower_m,
+                                                                double upper_m,
+                                                                const double *signals,
+                                                                size_t n,
+                                                                const double *emissivity,
+                                                                size_t n_emissivity,
+                                                                const double *reflected_temperature_k,
+                                                                size_t n_reflected_temperature_k,
+                                                                const double *transmittance,
+                                                                size_t n_transmittance,
+                                                                const double *path_temperature_k,
+                                                                size_t n_path_temperature_k,
+                                                                const double *signal_uncertainty,
+                                                                size_t n_signal_uncertainty,
+                                                                const double *emissivity_uncertainty,
+                                                                size_t n_emissivity_uncertainty,
+                                                                const double *reflected_temperature_uncertainty_k,
+                                                                size_t n_reflected_temperature_uncertainty_k,
+                                                                const double *transmittance_uncertainty,
+                                                                size_t n_transmittance_uncertainty,
+                                                                const double *path_temperature_uncertainty_k,
+                                                                size_t n_path_temperature_uncertainty_k,
+                                                                double *out_temperature,
+                                                                double *out_uncertainty);
+
+/**
+ * `float` twin of `relicore_object_temperature_band_with_uncertainty_array` for firmware and
+ * single-precision frames: the same core function in `float`.
+ *
+ * * `lower_m`, `upper_m`: band edges in m, 0 <= lower < upper <= +Inf (when they are not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+ *   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+ *   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+ * * `out_temperature`: n values of T_obj in K; `out_uncertainty`: n values of u_c in K.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN, the others are computed, and the
+ * code of the first failing pixel is returned (the errors of the scalar function).
+ * `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1 values (every output
+ * NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a length 0; every
+ * non-NULL output NaN). The radiances of the surroundings and the path are computed once for
+ * shared parameters (and reused while per-pixel parameters repeat). Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `float`; each output is NULL
+ * or points to n writable `float` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_band_with_uncertainty_array_f32(float lower_m,
+                                                                    float upper_m,
+                                                                    const float *signals,
+                                                                    size_t n,
+                                                                    const float *emissivity,
+                                                                    size_t n_emissivity,
+                                                                    const float *reflected_temperature_k,
+                                                                    size_t n_reflected_temperature_k,
+                                                                    const float *transmittance,
+                                                                    size_t n_transmittance,
+                                                                    const float *path_temperature_k,
+                                                                    size_t n_path_temperature_k,
+                                                                    const float *signal_uncertainty,
+                                                                    size_t n_signal_uncertainty,
+                                                                    const float *emissivity_uncertainty,
+                                                                    size_t n_emissivity_uncertainty,
+                                                                    const float *reflected_temperature_uncertainty_k,
+                                                                    size_t n_reflected_temperature_uncertainty_k,
+                                                                    const float *transmittance_uncertainty,
+                                                                    size_t n_transmittance_uncertainty,
+                                                                    const float *path_temperature_uncertainty_k,
+                                                                    size_t n_path_temperature_uncertainty_k,
+                                                                    float *out_temperature,
+                                                                    float *out_uncertainty);
 
 /**
  * Fills `*out` with the common-practice defaults and the given H0 and Ω_m: Ω_b = 0, Ω_k = 0

@@ -370,3 +370,47 @@ proptest! {
         close("full correlation", full, sum.abs(), tol)?;
     }
 }
+
+proptest! {
+    // the faces' forms not reached above: the response-weighted forward equation and the
+    // frequency and band frames (every element the scalar function's bits)
+    #![proptest_config(cases(100))]
+
+    #[test]
+    fn robust_response_forward_and_frames(t in any64(), s in any64(), e in scene64(), tr in scene64(),
+            tau in scene64(), tp in scene64(), u in scene64()) {
+        let w = [8e-6, 10e-6, 12e-6, 14e-6];
+        let r = [0.0, 1.0, 0.8, 0.0];
+        contract("measured_response_weighted_radiance", &[0.0, 0.0, t, e, tr, tau, tp], 7,
+            bb::measured_response_weighted_radiance(&w, &r, t, e, tr, tau, tp))?;
+        let signals = [s, 2.0 * s, 0.5 * s];
+        let mut out = [0.0; 3];
+        let (mut ot, mut ou) = ([0.0; 3], [0.0; 3]);
+        let _ = bb::object_temperature_frequency_array(3e13, &signals, &[e], &[tr], &[tau], &[tp], &mut out);
+        for (k, &x) in signals.iter().enumerate() {
+            let want = bb::object_temperature_frequency(3e13, x, e, tr, tau, tp);
+            prop_assert!(want.map_or(out[k].is_nan(), |v| v.to_bits() == out[k].to_bits()));
+        }
+        let _ = bb::object_temperature_band_array(8e-6, 1.4e-5, &signals, &[e], &[tr], &[tau], &[tp], &mut out);
+        for (k, &x) in signals.iter().enumerate() {
+            let want = bb::object_temperature_band(8e-6, 1.4e-5, x, e, tr, tau, tp);
+            prop_assert!(want.map_or(out[k].is_nan(), |v| v.to_bits() == out[k].to_bits()));
+        }
+        let _ = bb::object_temperature_frequency_with_uncertainty_array(3e13, &signals, &[e], &[tr], &[tau], &[tp],
+            &[u], &[u], &[u], &[u], &[u], &mut ot, &mut ou);
+        for (k, &x) in signals.iter().enumerate() {
+            let want = bb::object_temperature_frequency_with_uncertainty(3e13, x, e, tr, tau, tp, u, u, u, u, u);
+            prop_assert!(want.map_or(ot[k].is_nan() && ou[k].is_nan(),
+                |v| v.temperature_k.to_bits() == ot[k].to_bits()
+                    && v.combined_standard_uncertainty_k.to_bits() == ou[k].to_bits()));
+        }
+        let _ = bb::object_temperature_band_with_uncertainty_array(8e-6, 1.4e-5, &signals, &[e], &[tr], &[tau],
+            &[tp], &[u], &[u], &[u], &[u], &[u], &mut ot, &mut ou);
+        for (k, &x) in signals.iter().enumerate() {
+            let want = bb::object_temperature_band_with_uncertainty(8e-6, 1.4e-5, x, e, tr, tau, tp, u, u, u, u, u);
+            prop_assert!(want.map_or(ot[k].is_nan() && ou[k].is_nan(),
+                |v| v.temperature_k.to_bits() == ot[k].to_bits()
+                    && v.combined_standard_uncertainty_k.to_bits() == ou[k].to_bits()));
+        }
+    }
+}

@@ -444,3 +444,165 @@ fn histories_computed_concurrently_are_identical() {
         );
     }
 }
+
+/// The thermometry frame (image) forms on a small frame of signals with per-pixel and shared
+/// parameters, from several threads at once: the serial bits.
+fn thermometry_frame_calls() -> Vec<Box<dyn Fn() -> Outcome + Send + Sync>> {
+    let mut calls: Vec<Box<dyn Fn() -> Outcome + Send + Sync>> = Vec::new();
+    for &scale in &[0.5, 1.0, 2.0, -1.0] {
+        let l = bb::spectral_radiance_wavelength(1e-5, 300.0).unwrap_or(f64::NAN) * scale;
+        let signals: Vec<f64> = (0..64).map(|i| l * (0.9 + 0.01 * f64::from(i))).collect();
+        let e: Vec<f64> = (0..64).map(|i| 0.6 + 0.005 * f64::from(i)).collect();
+        let s1 = signals.clone();
+        let e1 = e.clone();
+        calls.push(Box::new(move || {
+            let mut out = vec![0.0; 64];
+            let r = bb::object_temperature_wavelength_array(
+                1e-5,
+                &s1,
+                &e1,
+                &[293.0],
+                &[0.9],
+                &[280.0],
+                &mut out,
+            );
+            array_outcome(r, &out)
+        }));
+        let s2 = signals.clone();
+        calls.push(Box::new(move || {
+            let mut out = vec![0.0; 64];
+            let s: Vec<f64> = s2.iter().map(|x| x * 3e-6).collect();
+            let r = bb::object_temperature_frequency_array(
+                1e8,
+                &s,
+                &[0.9],
+                &[293.0],
+                &[0.9],
+                &[280.0],
+                &mut out,
+            );
+            array_outcome(r, &out)
+        }));
+        let s3 = signals.clone();
+        calls.push(Box::new(move || {
+            let mut out = vec![0.0; 64];
+            let r = bb::object_temperature_band_array(
+                8e-6,
+                1.4e-5,
+                &s3,
+                &[0.9],
+                &[293.0],
+                &[0.9],
+                &[280.0],
+                &mut out,
+            );
+            array_outcome(r, &out)
+        }));
+        for kind in 0..3 {
+            let s = signals.clone();
+            let e = e.clone();
+            calls.push(Box::new(move || {
+                let (mut t, mut u) = (vec![0.0; 64], vec![0.0; 64]);
+                let us: [&[f64]; 5] = [&[1e4], &[0.01], &[1.0], &[0.01], &[1.0]];
+                let r = match kind {
+                    0 => bb::object_temperature_wavelength_with_uncertainty_array(
+                        1e-5,
+                        &s,
+                        &e,
+                        &[293.0],
+                        &[0.9],
+                        &[280.0],
+                        us[0],
+                        us[1],
+                        us[2],
+                        us[3],
+                        us[4],
+                        &mut t,
+                        &mut u,
+                    ),
+                    1 => bb::object_temperature_frequency_with_uncertainty_array(
+                        3e13,
+                        &s,
+                        &e,
+                        &[293.0],
+                        &[0.9],
+                        &[280.0],
+                        us[0],
+                        us[1],
+                        us[2],
+                        us[3],
+                        us[4],
+                        &mut t,
+                        &mut u,
+                    ),
+                    _ => bb::object_temperature_band_with_uncertainty_array(
+                        8e-6,
+                        1.4e-5,
+                        &s,
+                        &e,
+                        &[293.0],
+                        &[0.9],
+                        &[280.0],
+                        us[0],
+                        us[1],
+                        us[2],
+                        us[3],
+                        us[4],
+                        &mut t,
+                        &mut u,
+                    ),
+                };
+                t.extend_from_slice(&u);
+                array_outcome(r, &t)
+            }));
+        }
+    }
+    // the response-table forms and the combined standard uncertainty
+    let w = [8e-6, 9e-6, 11e-6, 13e-6, 14e-6];
+    let r = [0.1, 0.9, 1.0, 0.8, 0.1];
+    for &x in &ARGS {
+        calls.push(Box::new(move || {
+            outcome(bb::measured_response_weighted_radiance(
+                &w, &r, x, 0.9, 293.0, 0.95, 280.0,
+            ))
+        }));
+        calls.push(Box::new(move || {
+            outcome(bb::object_temperature_response(
+                &w, &r, x, 0.9, 293.0, 0.95, 280.0,
+            ))
+        }));
+        calls.push(Box::new(move || {
+            outcome(
+                bb::object_temperature_response_with_uncertainty(
+                    &w, &r, x, 0.9, 293.0, 0.95, 280.0, 1.0, 0.01, 1.0, 0.01, 1.0,
+                )
+                .map(|v| v.combined_standard_uncertainty_k),
+            )
+        }));
+        calls.push(Box::new(move || {
+            outcome(bb::response_weighted_radiance_temperature_derivative(
+                &w, &r, x,
+            ))
+        }));
+        calls.push(Box::new(move || {
+            outcome(bb::combined_standard_uncertainty(
+                &[x, 2.0, -3.0],
+                &[1.0, 0.5, 0.1],
+            ))
+        }));
+        calls.push(Box::new(move || {
+            let corr = [1.0, 0.3, 0.0, 0.3, 1.0, 0.0, 0.0, 0.0, 1.0];
+            outcome(bb::combined_standard_uncertainty_correlated(
+                &[x, 2.0, -3.0],
+                &[1.0, 0.5, 0.1],
+                &corr,
+            ))
+        }));
+    }
+    calls
+}
+
+#[test]
+fn thermometry_frames_from_many_threads_equal_serial() {
+    compare_threads("thermometry frames", &thermometry_frame_calls());
+}

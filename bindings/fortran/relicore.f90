@@ -143,6 +143,25 @@
 !   relicore_thermal_sz_spectral_shape                            function, _s
 !   relicore_thermal_sz_temperature_shape                         function, _s
 !   relicore_thermal_sz_null_frequency                            function, _s
+!   relicore_measured_spectral_radiance_wavelength                function, _s
+!   relicore_measured_spectral_radiance_wavelength_f32            function, _s
+!   relicore_measured_spectral_radiance_frequency                 function, _s
+!   relicore_measured_spectral_radiance_frequency_f32             function, _s
+!   relicore_measured_band_radiance_wavelength                    function, _s
+!   relicore_object_temperature_wavelength                        function, _s
+!   relicore_object_temperature_wavelength_f32                    function, _s
+!   relicore_object_temperature_frequency                         function, _s
+!   relicore_object_temperature_frequency_f32                     function, _s
+!   relicore_object_temperature_band                              function, _s
+!   relicore_band_radiance_temperature_derivative_wavelength      function, _s
+!   relicore_brightness_temperature_wavelength_with_uncertainty   function, _s
+!   relicore_brightness_temperature_frequency_with_uncertainty    function, _s
+!   relicore_object_temperature_wavelength_with_uncertainty       function, _s
+!   relicore_object_temperature_wavelength_with_uncertainty_f32   function, _s
+!   relicore_object_temperature_frequency_with_uncertainty        function, _s
+!   relicore_object_temperature_frequency_with_uncertainty_f32    function, _s
+!   relicore_object_temperature_band_with_uncertainty             function, _s
+!   relicore_calibrated_temperature_with_uncertainty              function, _s
 !   relicore_hubble_distance_mpc                                  function, _s
 !   relicore_hubble_time_gyr                                      function, _s
 !   relicore_omega_radiation                                      function, _s
@@ -424,7 +443,38 @@ module relicore
       relicore_kcmb_to_mjy_per_sr_s, relicore_thermal_sz_spectral_shape, &
       relicore_thermal_sz_spectral_shape_s, relicore_thermal_sz_temperature_shape, &
       relicore_thermal_sz_temperature_shape_s, relicore_thermal_sz_null_frequency, &
-      relicore_thermal_sz_null_frequency_s, relicore_hubble_distance_mpc, &
+      relicore_thermal_sz_null_frequency_s, relicore_measured_spectral_radiance_wavelength, &
+      relicore_measured_spectral_radiance_wavelength_s, &
+      relicore_measured_spectral_radiance_wavelength_f32, &
+      relicore_measured_spectral_radiance_wavelength_f32_s, &
+      relicore_measured_spectral_radiance_frequency, &
+      relicore_measured_spectral_radiance_frequency_s, &
+      relicore_measured_spectral_radiance_frequency_f32, &
+      relicore_measured_spectral_radiance_frequency_f32_s, &
+      relicore_measured_band_radiance_wavelength, relicore_measured_band_radiance_wavelength_s, &
+      relicore_object_temperature_wavelength, relicore_object_temperature_wavelength_s, &
+      relicore_object_temperature_wavelength_f32, relicore_object_temperature_wavelength_f32_s, &
+      relicore_object_temperature_frequency, relicore_object_temperature_frequency_s, &
+      relicore_object_temperature_frequency_f32, relicore_object_temperature_frequency_f32_s, &
+      relicore_object_temperature_band, relicore_object_temperature_band_s, &
+      relicore_band_radiance_temperature_derivative_wavelength, &
+      relicore_band_radiance_temperature_derivative_wavelength_s, &
+      relicore_brightness_temperature_wavelength_with_uncertainty, &
+      relicore_brightness_temperature_wavelength_with_uncertainty_s, &
+      relicore_brightness_temperature_frequency_with_uncertainty, &
+      relicore_brightness_temperature_frequency_with_uncertainty_s, &
+      relicore_object_temperature_wavelength_with_uncertainty, &
+      relicore_object_temperature_wavelength_with_uncertainty_s, &
+      relicore_object_temperature_wavelength_with_uncertainty_f32, &
+      relicore_object_temperature_wavelength_with_uncertainty_f32_s, &
+      relicore_object_temperature_frequency_with_uncertainty, &
+      relicore_object_temperature_frequency_with_uncertainty_s, &
+      relicore_object_temperature_frequency_with_uncertainty_f32, &
+      relicore_object_temperature_frequency_with_uncertainty_f32_s, &
+      relicore_object_temperature_band_with_uncertainty, &
+      relicore_object_temperature_band_with_uncertainty_s, &
+      relicore_calibrated_temperature_with_uncertainty, &
+      relicore_calibrated_temperature_with_uncertainty_s, relicore_hubble_distance_mpc, &
       relicore_hubble_distance_mpc_s, relicore_hubble_time_gyr, relicore_hubble_time_gyr_s, &
       relicore_omega_radiation, relicore_omega_radiation_s, relicore_omega_dark_energy, &
       relicore_omega_dark_energy_s, relicore_matter_radiation_equality_redshift, &
@@ -484,6 +534,49 @@ module relicore
       relicore_visibility_peak_redshift_s, relicore_thermal_decoupling_redshift, &
       relicore_thermal_decoupling_redshift_s, relicore_reionization_optical_depth, &
       relicore_reionization_optical_depth_s
+  ! The hand-kept parts (bindings/fortran/parts/*.f90).
+  public :: relicore_measured_response_weighted_radiance, &
+      relicore_measured_response_weighted_radiance_s, &
+      relicore_measured_response_weighted_radiance_f32, &
+      relicore_measured_response_weighted_radiance_f32_s, relicore_object_temperature_response, &
+      relicore_object_temperature_response_s, relicore_object_temperature_response_f32, &
+      relicore_object_temperature_response_f32_s, &
+      relicore_object_temperature_response_with_uncertainty, &
+      relicore_object_temperature_response_with_uncertainty_s, &
+      relicore_object_temperature_response_with_uncertainty_f32, &
+      relicore_object_temperature_response_with_uncertainty_f32_s, &
+      relicore_response_weighted_radiance_temperature_derivative, &
+      relicore_response_weighted_radiance_temperature_derivative_s, &
+      relicore_response_weighted_radiance_temperature_derivative_f32, &
+           relicore_combined_standard_uncertainty, relicore_combined_standard_uncertainty_s, &
+      relicore_combined_standard_uncertainty_correlated, &
+      relicore_combined_standard_uncertainty_correlated_s, &
+      relicore_object_temperature_wavelength_array, &
+      relicore_object_temperature_wavelength_array_f32, &
+      relicore_object_temperature_wavelength_with_uncertainty_array, &
+           relicore_object_temperature_frequency_array, relicore_object_temperature_frequency_array_f32, &
+      relicore_object_temperature_frequency_with_uncertainty_array, &
+           relicore_object_temperature_band_array, relicore_object_temperature_band_array_f32, &
+      relicore_object_temperature_band_with_uncertainty_array, &
+      relicore_object_temperature_band_with_uncertainty_array_f32
+  ! relicore_object_temperature_frequency_with_uncertainty_array_f32 (more than 63 characters)
+  ! is the real(c_float) form of the generic name
+  ! relicore_object_temperature_frequency_with_uncertainty_array
+  interface relicore_object_temperature_frequency_with_uncertainty_array
+    module procedure relicore_object_temperature_frequency_with_uncertainty_array, thermometry_f32_1
+  end interface relicore_object_temperature_frequency_with_uncertainty_array
+  ! relicore_response_weighted_radiance_temperature_derivative_f32_s (more than 63 characters)
+  ! is the real(c_float) form of the generic name
+  ! relicore_response_weighted_radiance_temperature_derivative_s
+  interface relicore_response_weighted_radiance_temperature_derivative_s
+    module procedure relicore_response_weighted_radiance_temperature_derivative_s, thermometry_f32_2
+  end interface relicore_response_weighted_radiance_temperature_derivative_s
+  ! relicore_object_temperature_wavelength_with_uncertainty_array_f32 (more than 63 characters)
+  ! is the real(c_float) form of the generic name
+  ! relicore_object_temperature_wavelength_with_uncertainty_array
+  interface relicore_object_temperature_wavelength_with_uncertainty_array
+    module procedure relicore_object_temperature_wavelength_with_uncertainty_array, thermometry_f32_3
+  end interface relicore_object_temperature_wavelength_with_uncertainty_array
   ! ---------------------------------------------------------------- types
   ! struct relicore_two_load_calibration { double frequency_hz; double gain; double offset; };
   ! The gain and offset of a two-load calibration at one frequency: reading = gain * J +
@@ -563,6 +656,38 @@ module relicore
     integer(c_int64_t) :: tag = 0_c_int64_t                                 ! private
     integer(c_int64_t) :: storage(RELICORE_THERMAL_HISTORY_STORAGE_WORDS)   ! private
   end type relicore_thermal_history
+
+  ! The result types of the table (generated).
+  ! struct relicore_temperature_uncertainty { double temperature_k; double
+  ! combined_standard_uncertainty_k; double sensitivity_coefficients[5]; uint32_t inputs; };
+  ! The result of the temperature uncertainty functions (the core's TemperatureUncertainty); a count
+  ! is integer(c_int32_t) (C uint32_t, values 0 to 5).
+  type, bind(C), public :: relicore_temperature_uncertainty
+    real(c_double) :: temperature_k
+      ! the inferred temperature in K
+    real(c_double) :: combined_standard_uncertainty_k
+      ! combined standard uncertainty u_c in K (JCGM 100:2008 eq. 10)
+    real(c_double) :: sensitivity_coefficients(5)
+      ! dT/dx_i in K per unit of input i; entries at and beyond inputs are 0
+    integer(c_int32_t) :: inputs
+      ! number of inputs used (1 to 5)
+  end type relicore_temperature_uncertainty
+
+  ! struct relicore_temperature_uncertainty_f32 { float temperature_k; float
+  ! combined_standard_uncertainty_k; float sensitivity_coefficients[5]; uint32_t inputs; };
+  ! The result of the temperature uncertainty functions (the core's TemperatureUncertainty); a count
+  ! is integer(c_int32_t) (C uint32_t, values 0 to 5).
+  type, bind(C), public :: relicore_temperature_uncertainty_f32
+    real(c_float) :: temperature_k
+      ! the inferred temperature in K
+    real(c_float) :: combined_standard_uncertainty_k
+      ! combined standard uncertainty u_c in K (JCGM 100:2008 eq. 10)
+    real(c_float) :: sensitivity_coefficients(5)
+      ! dT/dx_i in K per unit of input i; entries at and beyond inputs are 0
+    integer(c_int32_t) :: inputs
+      ! number of inputs used (1 to 5)
+  end type relicore_temperature_uncertainty_f32
+
 
   ! The calibration from two loads, under the name of its type (see the conventions above).
   interface relicore_two_load_calibration
@@ -1314,6 +1439,357 @@ module relicore
       real(c_double), intent(out) :: out
       integer(c_int32_t) :: status
     end function c_thermal_sz_null_frequency
+    ! int32_t relicore_measured_spectral_radiance_wavelength(double wavelength_m, double
+    !     object_temperature_k, double emissivity, double reflected_temperature_k, double
+    !     transmittance, double path_temperature_k, double *out);
+    function c_measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, &
+        emissivity, reflected_temperature_k, transmittance, path_temperature_k, out) &
+        bind(C, name='relicore_measured_spectral_radiance_wavelength') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: wavelength_m
+      real(c_double), value :: object_temperature_k
+      real(c_double), value :: emissivity
+      real(c_double), value :: reflected_temperature_k
+      real(c_double), value :: transmittance
+      real(c_double), value :: path_temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_measured_spectral_radiance_wavelength
+    ! int32_t relicore_measured_spectral_radiance_wavelength_f32(float wavelength_m, float
+    !     object_temperature_k, float emissivity, float reflected_temperature_k, float
+    !     transmittance, float path_temperature_k, float *out);
+    function c_measured_spectral_radiance_wavelength_f32(wavelength_m, object_temperature_k, &
+        emissivity, reflected_temperature_k, transmittance, path_temperature_k, out) &
+        bind(C, name='relicore_measured_spectral_radiance_wavelength_f32') result(status)
+      import :: c_float, c_int32_t
+      real(c_float), value :: wavelength_m
+      real(c_float), value :: object_temperature_k
+      real(c_float), value :: emissivity
+      real(c_float), value :: reflected_temperature_k
+      real(c_float), value :: transmittance
+      real(c_float), value :: path_temperature_k
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_measured_spectral_radiance_wavelength_f32
+    ! int32_t relicore_measured_spectral_radiance_frequency(double frequency_hz, double
+    !     object_temperature_k, double emissivity, double reflected_temperature_k, double
+    !     transmittance, double path_temperature_k, double *out);
+    function c_measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out) &
+        bind(C, name='relicore_measured_spectral_radiance_frequency') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: frequency_hz
+      real(c_double), value :: object_temperature_k
+      real(c_double), value :: emissivity
+      real(c_double), value :: reflected_temperature_k
+      real(c_double), value :: transmittance
+      real(c_double), value :: path_temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_measured_spectral_radiance_frequency
+    ! int32_t relicore_measured_spectral_radiance_frequency_f32(float frequency_hz, float
+    !     object_temperature_k, float emissivity, float reflected_temperature_k, float
+    !     transmittance, float path_temperature_k, float *out);
+    function c_measured_spectral_radiance_frequency_f32(frequency_hz, object_temperature_k, &
+        emissivity, reflected_temperature_k, transmittance, path_temperature_k, out) &
+        bind(C, name='relicore_measured_spectral_radiance_frequency_f32') result(status)
+      import :: c_float, c_int32_t
+      real(c_float), value :: frequency_hz
+      real(c_float), value :: object_temperature_k
+      real(c_float), value :: emissivity
+      real(c_float), value :: reflected_temperature_k
+      real(c_float), value :: transmittance
+      real(c_float), value :: path_temperature_k
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_measured_spectral_radiance_frequency_f32
+    ! int32_t relicore_measured_band_radiance_wavelength(double lower_m, double upper_m, double
+    !     object_temperature_k, double emissivity, double reflected_temperature_k, double
+    !     transmittance, double path_temperature_k, double *out);
+    function c_measured_band_radiance_wavelength(lower_m, upper_m, object_temperature_k, &
+        emissivity, reflected_temperature_k, transmittance, path_temperature_k, out) &
+        bind(C, name='relicore_measured_band_radiance_wavelength') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: lower_m
+      real(c_double), value :: upper_m
+      real(c_double), value :: object_temperature_k
+      real(c_double), value :: emissivity
+      real(c_double), value :: reflected_temperature_k
+      real(c_double), value :: transmittance
+      real(c_double), value :: path_temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_measured_band_radiance_wavelength
+    ! int32_t relicore_object_temperature_wavelength(double wavelength_m, double signal, double
+    !     emissivity, double reflected_temperature_k, double transmittance, double
+    !     path_temperature_k, double *out);
+    function c_object_temperature_wavelength(wavelength_m, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out) &
+        bind(C, name='relicore_object_temperature_wavelength') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: wavelength_m
+      real(c_double), value :: signal
+      real(c_double), value :: emissivity
+      real(c_double), value :: reflected_temperature_k
+      real(c_double), value :: transmittance
+      real(c_double), value :: path_temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_object_temperature_wavelength
+    ! int32_t relicore_object_temperature_wavelength_f32(float wavelength_m, float signal, float
+    !     emissivity, float reflected_temperature_k, float transmittance, float path_temperature_k,
+    !     float *out);
+    function c_object_temperature_wavelength_f32(wavelength_m, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out) &
+        bind(C, name='relicore_object_temperature_wavelength_f32') result(status)
+      import :: c_float, c_int32_t
+      real(c_float), value :: wavelength_m
+      real(c_float), value :: signal
+      real(c_float), value :: emissivity
+      real(c_float), value :: reflected_temperature_k
+      real(c_float), value :: transmittance
+      real(c_float), value :: path_temperature_k
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_object_temperature_wavelength_f32
+    ! int32_t relicore_object_temperature_frequency(double frequency_hz, double signal, double
+    !     emissivity, double reflected_temperature_k, double transmittance, double
+    !     path_temperature_k, double *out);
+    function c_object_temperature_frequency(frequency_hz, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out) &
+        bind(C, name='relicore_object_temperature_frequency') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: frequency_hz
+      real(c_double), value :: signal
+      real(c_double), value :: emissivity
+      real(c_double), value :: reflected_temperature_k
+      real(c_double), value :: transmittance
+      real(c_double), value :: path_temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_object_temperature_frequency
+    ! int32_t relicore_object_temperature_frequency_f32(float frequency_hz, float signal, float
+    !     emissivity, float reflected_temperature_k, float transmittance, float path_temperature_k,
+    !     float *out);
+    function c_object_temperature_frequency_f32(frequency_hz, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out) &
+        bind(C, name='relicore_object_temperature_frequency_f32') result(status)
+      import :: c_float, c_int32_t
+      real(c_float), value :: frequency_hz
+      real(c_float), value :: signal
+      real(c_float), value :: emissivity
+      real(c_float), value :: reflected_temperature_k
+      real(c_float), value :: transmittance
+      real(c_float), value :: path_temperature_k
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_object_temperature_frequency_f32
+    ! int32_t relicore_object_temperature_band(double lower_m, double upper_m, double signal, double
+    !     emissivity, double reflected_temperature_k, double transmittance, double
+    !     path_temperature_k, double *out);
+    function c_object_temperature_band(lower_m, upper_m, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out) &
+        bind(C, name='relicore_object_temperature_band') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: lower_m
+      real(c_double), value :: upper_m
+      real(c_double), value :: signal
+      real(c_double), value :: emissivity
+      real(c_double), value :: reflected_temperature_k
+      real(c_double), value :: transmittance
+      real(c_double), value :: path_temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_object_temperature_band
+    ! int32_t relicore_band_radiance_temperature_derivative_wavelength(double lower_m, double
+    !     upper_m, double temperature_k, double *out);
+    function c_band_radiance_temperature_derivative_wavelength(lower_m, upper_m, temperature_k, &
+        out) &
+        bind(C, name='relicore_band_radiance_temperature_derivative_wavelength') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: lower_m
+      real(c_double), value :: upper_m
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_band_radiance_temperature_derivative_wavelength
+    ! int32_t relicore_brightness_temperature_wavelength_with_uncertainty(double wavelength_m,
+    !     double spectral_radiance, double spectral_radiance_uncertainty, struct
+    !     relicore_temperature_uncertainty *out);
+    function c_brightness_temperature_wavelength_with_uncertainty(wavelength_m, spectral_radiance, &
+        spectral_radiance_uncertainty, out) &
+        bind(C, name='relicore_brightness_temperature_wavelength_with_uncertainty') result(status)
+      import :: c_double, c_int32_t, relicore_temperature_uncertainty
+      real(c_double), value :: wavelength_m
+      real(c_double), value :: spectral_radiance
+      real(c_double), value :: spectral_radiance_uncertainty
+      type(relicore_temperature_uncertainty), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_brightness_temperature_wavelength_with_uncertainty
+    ! int32_t relicore_brightness_temperature_frequency_with_uncertainty(double frequency_hz, double
+    !     spectral_radiance, double spectral_radiance_uncertainty, struct
+    !     relicore_temperature_uncertainty *out);
+    function c_brightness_temperature_frequency_with_uncertainty(frequency_hz, spectral_radiance, &
+        spectral_radiance_uncertainty, out) &
+        bind(C, name='relicore_brightness_temperature_frequency_with_uncertainty') result(status)
+      import :: c_double, c_int32_t, relicore_temperature_uncertainty
+      real(c_double), value :: frequency_hz
+      real(c_double), value :: spectral_radiance
+      real(c_double), value :: spectral_radiance_uncertainty
+      type(relicore_temperature_uncertainty), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_brightness_temperature_frequency_with_uncertainty
+    ! int32_t relicore_object_temperature_wavelength_with_uncertainty(double wavelength_m, double
+    !     signal, double emissivity, double reflected_temperature_k, double transmittance, double
+    !     path_temperature_k, double signal_uncertainty, double emissivity_uncertainty, double
+    !     reflected_temperature_uncertainty_k, double transmittance_uncertainty, double
+    !     path_temperature_uncertainty_k, struct relicore_temperature_uncertainty *out);
+    function c_object_temperature_wavelength_with_uncertainty(wavelength_m, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+        emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, out) &
+        bind(C, name='relicore_object_temperature_wavelength_with_uncertainty') result(status)
+      import :: c_double, c_int32_t, relicore_temperature_uncertainty
+      real(c_double), value :: wavelength_m
+      real(c_double), value :: signal
+      real(c_double), value :: emissivity
+      real(c_double), value :: reflected_temperature_k
+      real(c_double), value :: transmittance
+      real(c_double), value :: path_temperature_k
+      real(c_double), value :: signal_uncertainty
+      real(c_double), value :: emissivity_uncertainty
+      real(c_double), value :: reflected_temperature_uncertainty_k
+      real(c_double), value :: transmittance_uncertainty
+      real(c_double), value :: path_temperature_uncertainty_k
+      type(relicore_temperature_uncertainty), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_object_temperature_wavelength_with_uncertainty
+    ! int32_t relicore_object_temperature_wavelength_with_uncertainty_f32(float wavelength_m, float
+    !     signal, float emissivity, float reflected_temperature_k, float transmittance, float
+    !     path_temperature_k, float signal_uncertainty, float emissivity_uncertainty, float
+    !     reflected_temperature_uncertainty_k, float transmittance_uncertainty, float
+    !     path_temperature_uncertainty_k, struct relicore_temperature_uncertainty_f32 *out);
+    function c_object_temperature_wavelength_with_uncertainty_f32(wavelength_m, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+        emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, out) &
+        bind(C, name='relicore_object_temperature_wavelength_with_uncertainty_f32') result(status)
+      import :: c_float, c_int32_t, relicore_temperature_uncertainty_f32
+      real(c_float), value :: wavelength_m
+      real(c_float), value :: signal
+      real(c_float), value :: emissivity
+      real(c_float), value :: reflected_temperature_k
+      real(c_float), value :: transmittance
+      real(c_float), value :: path_temperature_k
+      real(c_float), value :: signal_uncertainty
+      real(c_float), value :: emissivity_uncertainty
+      real(c_float), value :: reflected_temperature_uncertainty_k
+      real(c_float), value :: transmittance_uncertainty
+      real(c_float), value :: path_temperature_uncertainty_k
+      type(relicore_temperature_uncertainty_f32), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_object_temperature_wavelength_with_uncertainty_f32
+    ! int32_t relicore_object_temperature_frequency_with_uncertainty(double frequency_hz, double
+    !     signal, double emissivity, double reflected_temperature_k, double transmittance, double
+    !     path_temperature_k, double signal_uncertainty, double emissivity_uncertainty, double
+    !     reflected_temperature_uncertainty_k, double transmittance_uncertainty, double
+    !     path_temperature_uncertainty_k, struct relicore_temperature_uncertainty *out);
+    function c_object_temperature_frequency_with_uncertainty(frequency_hz, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+        emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, out) &
+        bind(C, name='relicore_object_temperature_frequency_with_uncertainty') result(status)
+      import :: c_double, c_int32_t, relicore_temperature_uncertainty
+      real(c_double), value :: frequency_hz
+      real(c_double), value :: signal
+      real(c_double), value :: emissivity
+      real(c_double), value :: reflected_temperature_k
+      real(c_double), value :: transmittance
+      real(c_double), value :: path_temperature_k
+      real(c_double), value :: signal_uncertainty
+      real(c_double), value :: emissivity_uncertainty
+      real(c_double), value :: reflected_temperature_uncertainty_k
+      real(c_double), value :: transmittance_uncertainty
+      real(c_double), value :: path_temperature_uncertainty_k
+      type(relicore_temperature_uncertainty), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_object_temperature_frequency_with_uncertainty
+    ! int32_t relicore_object_temperature_frequency_with_uncertainty_f32(float frequency_hz, float
+    !     signal, float emissivity, float reflected_temperature_k, float transmittance, float
+    !     path_temperature_k, float signal_uncertainty, float emissivity_uncertainty, float
+    !     reflected_temperature_uncertainty_k, float transmittance_uncertainty, float
+    !     path_temperature_uncertainty_k, struct relicore_temperature_uncertainty_f32 *out);
+    function c_object_temperature_frequency_with_uncertainty_f32(frequency_hz, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+        emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, out) &
+        bind(C, name='relicore_object_temperature_frequency_with_uncertainty_f32') result(status)
+      import :: c_float, c_int32_t, relicore_temperature_uncertainty_f32
+      real(c_float), value :: frequency_hz
+      real(c_float), value :: signal
+      real(c_float), value :: emissivity
+      real(c_float), value :: reflected_temperature_k
+      real(c_float), value :: transmittance
+      real(c_float), value :: path_temperature_k
+      real(c_float), value :: signal_uncertainty
+      real(c_float), value :: emissivity_uncertainty
+      real(c_float), value :: reflected_temperature_uncertainty_k
+      real(c_float), value :: transmittance_uncertainty
+      real(c_float), value :: path_temperature_uncertainty_k
+      type(relicore_temperature_uncertainty_f32), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_object_temperature_frequency_with_uncertainty_f32
+    ! int32_t relicore_object_temperature_band_with_uncertainty(double lower_m, double upper_m,
+    !     double signal, double emissivity, double reflected_temperature_k, double transmittance,
+    !     double path_temperature_k, double signal_uncertainty, double emissivity_uncertainty,
+    !     double reflected_temperature_uncertainty_k, double transmittance_uncertainty, double
+    !     path_temperature_uncertainty_k, struct relicore_temperature_uncertainty *out);
+    function c_object_temperature_band_with_uncertainty(lower_m, upper_m, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+        emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, out) &
+        bind(C, name='relicore_object_temperature_band_with_uncertainty') result(status)
+      import :: c_double, c_int32_t, relicore_temperature_uncertainty
+      real(c_double), value :: lower_m
+      real(c_double), value :: upper_m
+      real(c_double), value :: signal
+      real(c_double), value :: emissivity
+      real(c_double), value :: reflected_temperature_k
+      real(c_double), value :: transmittance
+      real(c_double), value :: path_temperature_k
+      real(c_double), value :: signal_uncertainty
+      real(c_double), value :: emissivity_uncertainty
+      real(c_double), value :: reflected_temperature_uncertainty_k
+      real(c_double), value :: transmittance_uncertainty
+      real(c_double), value :: path_temperature_uncertainty_k
+      type(relicore_temperature_uncertainty), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_object_temperature_band_with_uncertainty
+    ! int32_t relicore_calibrated_temperature_with_uncertainty(double frequency_hz, double
+    !     reading_hot, double temperature_hot_k, double reading_cold, double temperature_cold_k,
+    !     double reading, double reading_hot_uncertainty, double temperature_hot_uncertainty_k,
+    !     double reading_cold_uncertainty, double temperature_cold_uncertainty_k, double
+    !     reading_uncertainty, struct relicore_temperature_uncertainty *out);
+    function c_calibrated_temperature_with_uncertainty(frequency_hz, reading_hot, &
+        temperature_hot_k, reading_cold, temperature_cold_k, reading, reading_hot_uncertainty, &
+        temperature_hot_uncertainty_k, reading_cold_uncertainty, temperature_cold_uncertainty_k, &
+        reading_uncertainty, out) &
+        bind(C, name='relicore_calibrated_temperature_with_uncertainty') result(status)
+      import :: c_double, c_int32_t, relicore_temperature_uncertainty
+      real(c_double), value :: frequency_hz
+      real(c_double), value :: reading_hot
+      real(c_double), value :: temperature_hot_k
+      real(c_double), value :: reading_cold
+      real(c_double), value :: temperature_cold_k
+      real(c_double), value :: reading
+      real(c_double), value :: reading_hot_uncertainty
+      real(c_double), value :: temperature_hot_uncertainty_k
+      real(c_double), value :: reading_cold_uncertainty
+      real(c_double), value :: temperature_cold_uncertainty_k
+      real(c_double), value :: reading_uncertainty
+      type(relicore_temperature_uncertainty), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_calibrated_temperature_with_uncertainty
     ! int32_t relicore_hubble_distance_mpc(const struct relicore_universe *universe, double *out);
     function c_hubble_distance_mpc(universe, out) &
         bind(C, name='relicore_hubble_distance_mpc') result(status)
@@ -2105,6 +2581,478 @@ module relicore
       real(c_double), intent(out) :: out
       integer(c_int32_t) :: status
     end function c_reionization_optical_depth
+
+    ! The hand-kept parts (bindings/fortran/parts/*.f90):
+    ! int32_t relicore_measured_response_weighted_radiance(const double *wavelengths_m, size_t
+    !     n_wavelengths, const double *response_table, size_t n_response_table, double
+    !     object_temperature_k, double emissivity, double reflected_temperature_k, double
+    !     transmittance, double path_temperature_k, double *out);
+    function c_measured_response_weighted_radiance(wavelengths_m, n_wavelengths, response_table, &
+        n_response_table, object_temperature_k, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k, out) &
+        bind(C, name='relicore_measured_response_weighted_radiance') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: wavelengths_m(*)
+      integer(c_size_t), value :: n_wavelengths
+      real(c_double), intent(in) :: response_table(*)
+      integer(c_size_t), value :: n_response_table
+      real(c_double), value :: object_temperature_k, emissivity, reflected_temperature_k, &
+          transmittance, path_temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_measured_response_weighted_radiance
+    ! int32_t relicore_measured_response_weighted_radiance_f32(const float *wavelengths_m, size_t
+    !     n_wavelengths, const float *response_table, size_t n_response_table, float
+    !     object_temperature_k, float emissivity, float reflected_temperature_k, float
+    !     transmittance, float path_temperature_k, float *out);
+    function c_measured_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, &
+        response_table, n_response_table, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out) &
+        bind(C, name='relicore_measured_response_weighted_radiance_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t
+      real(c_float), intent(in) :: wavelengths_m(*)
+      integer(c_size_t), value :: n_wavelengths
+      real(c_float), intent(in) :: response_table(*)
+      integer(c_size_t), value :: n_response_table
+      real(c_float), value :: object_temperature_k, emissivity, reflected_temperature_k, &
+          transmittance, path_temperature_k
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_measured_response_weighted_radiance_f32
+    ! int32_t relicore_object_temperature_response(const double *wavelengths_m, size_t
+    !     n_wavelengths, const double *response_table, size_t n_response_table, double signal,
+    !     double emissivity, double reflected_temperature_k, double transmittance, double
+    !     path_temperature_k, double *out);
+    function c_object_temperature_response(wavelengths_m, n_wavelengths, response_table, &
+        n_response_table, signal, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k, out) &
+        bind(C, name='relicore_object_temperature_response') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: wavelengths_m(*)
+      integer(c_size_t), value :: n_wavelengths
+      real(c_double), intent(in) :: response_table(*)
+      integer(c_size_t), value :: n_response_table
+      real(c_double), value :: signal, emissivity, reflected_temperature_k, transmittance, &
+          path_temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_object_temperature_response
+    ! int32_t relicore_object_temperature_response_f32(const float *wavelengths_m, size_t
+    !     n_wavelengths, const float *response_table, size_t n_response_table, float signal, float
+    !     emissivity, float reflected_temperature_k, float transmittance, float path_temperature_k,
+    !     float *out);
+    function c_object_temperature_response_f32(wavelengths_m, n_wavelengths, response_table, &
+        n_response_table, signal, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k, out) &
+        bind(C, name='relicore_object_temperature_response_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t
+      real(c_float), intent(in) :: wavelengths_m(*)
+      integer(c_size_t), value :: n_wavelengths
+      real(c_float), intent(in) :: response_table(*)
+      integer(c_size_t), value :: n_response_table
+      real(c_float), value :: signal, emissivity, reflected_temperature_k, transmittance, &
+          path_temperature_k
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_object_temperature_response_f32
+    ! int32_t relicore_object_temperature_response_with_uncertainty(const double *wavelengths_m,
+    !     size_t n_wavelengths, const double *response_table, size_t n_response_table, double
+    !     signal, double emissivity, double reflected_temperature_k, double transmittance, double
+    !     path_temperature_k, double signal_uncertainty, double emissivity_uncertainty, double
+    !     reflected_temperature_uncertainty_k, double transmittance_uncertainty, double
+    !     path_temperature_uncertainty_k, struct relicore_temperature_uncertainty *out);
+    function c_object_temperature_response_with_uncertainty(wavelengths_m, n_wavelengths, &
+        response_table, n_response_table, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, out) &
+        bind(C, name='relicore_object_temperature_response_with_uncertainty') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_temperature_uncertainty
+      real(c_double), intent(in) :: wavelengths_m(*)
+      integer(c_size_t), value :: n_wavelengths
+      real(c_double), intent(in) :: response_table(*)
+      integer(c_size_t), value :: n_response_table
+      real(c_double), value :: signal, emissivity, reflected_temperature_k, transmittance, &
+          path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+          reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+          path_temperature_uncertainty_k
+      type(relicore_temperature_uncertainty), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_object_temperature_response_with_uncertainty
+    ! int32_t relicore_object_temperature_response_with_uncertainty_f32(const float *wavelengths_m,
+    !     size_t n_wavelengths, const float *response_table, size_t n_response_table, float signal,
+    !     float emissivity, float reflected_temperature_k, float transmittance, float
+    !     path_temperature_k, float signal_uncertainty, float emissivity_uncertainty, float
+    !     reflected_temperature_uncertainty_k, float transmittance_uncertainty, float
+    !     path_temperature_uncertainty_k, struct relicore_temperature_uncertainty_f32 *out);
+    function c_object_temperature_response_with_uncertainty_f32(wavelengths_m, n_wavelengths, &
+        response_table, n_response_table, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, out) &
+        bind(C, name='relicore_object_temperature_response_with_uncertainty_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t, relicore_temperature_uncertainty_f32
+      real(c_float), intent(in) :: wavelengths_m(*)
+      integer(c_size_t), value :: n_wavelengths
+      real(c_float), intent(in) :: response_table(*)
+      integer(c_size_t), value :: n_response_table
+      real(c_float), value :: signal, emissivity, reflected_temperature_k, transmittance, &
+          path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+          reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+          path_temperature_uncertainty_k
+      type(relicore_temperature_uncertainty_f32), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_object_temperature_response_with_uncertainty_f32
+    ! int32_t relicore_response_weighted_radiance_temperature_derivative(const double
+    !     *wavelengths_m, size_t n_wavelengths, const double *response_table, size_t
+    !     n_response_table, double temperature_k, double *out);
+    function c_response_weighted_radiance_temperature_derivative(wavelengths_m, n_wavelengths, &
+        response_table, n_response_table, temperature_k, out) &
+        bind(C, name='relicore_response_weighted_radiance_temperature_derivative') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: wavelengths_m(*)
+      integer(c_size_t), value :: n_wavelengths
+      real(c_double), intent(in) :: response_table(*)
+      integer(c_size_t), value :: n_response_table
+      real(c_double), value :: temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_response_weighted_radiance_temperature_derivative
+    ! int32_t relicore_response_weighted_radiance_temperature_derivative_f32(const float
+    !     *wavelengths_m, size_t n_wavelengths, const float *response_table, size_t
+    !     n_response_table, float temperature_k, float *out);
+    function c_response_weighted_radiance_temperature_derivative_f32(wavelengths_m, n_wavelengths, &
+        response_table, n_response_table, temperature_k, out) &
+        bind(C, name='relicore_response_weighted_radiance_temperature_derivative_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t
+      real(c_float), intent(in) :: wavelengths_m(*)
+      integer(c_size_t), value :: n_wavelengths
+      real(c_float), intent(in) :: response_table(*)
+      integer(c_size_t), value :: n_response_table
+      real(c_float), value :: temperature_k
+      real(c_float), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_response_weighted_radiance_temperature_derivative_f32
+    ! int32_t relicore_combined_standard_uncertainty(const double *sensitivity_coefficients, size_t
+    !     n_coefficients, const double *standard_uncertainties, size_t n_uncertainties, double
+    !     *out);
+    function c_combined_standard_uncertainty(sensitivity_coefficients, n_coefficients, &
+        standard_uncertainties, n_uncertainties, out) &
+        bind(C, name='relicore_combined_standard_uncertainty') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: sensitivity_coefficients(*), standard_uncertainties(*)
+      integer(c_size_t), value :: n_coefficients, n_uncertainties
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_combined_standard_uncertainty
+    ! int32_t relicore_combined_standard_uncertainty_correlated(const double
+    !     *sensitivity_coefficients, size_t n_coefficients, const double *standard_uncertainties,
+    !     size_t n_uncertainties, const double *correlation, size_t n_correlation, double *out);
+    function c_combined_standard_uncertainty_correlated(sensitivity_coefficients, n_coefficients, &
+        standard_uncertainties, n_uncertainties, correlation, n_correlation, out) &
+        bind(C, name='relicore_combined_standard_uncertainty_correlated') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), intent(in) :: sensitivity_coefficients(*), standard_uncertainties(*)
+      integer(c_size_t), value :: n_coefficients, n_uncertainties
+      real(c_double), intent(in) :: correlation(*)
+      integer(c_size_t), value :: n_correlation
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_combined_standard_uncertainty_correlated
+    ! int32_t relicore_object_temperature_wavelength_array(double wavelength_m, const double
+    !     *signals, size_t n, const double *emissivity, size_t n_emissivity, const double
+    !     *reflected_temperature_k, size_t n_reflected_temperature_k, const double *transmittance,
+    !     size_t n_transmittance, const double *path_temperature_k, size_t n_path_temperature_k,
+    !     double *out);
+    function c_object_temperature_wavelength_array(wavelength_m, signals, n, emissivity, &
+        n_emissivity, reflected_temperature_k, n_reflected_temperature_k, transmittance, &
+        n_transmittance, path_temperature_k, n_path_temperature_k, out) &
+        bind(C, name='relicore_object_temperature_wavelength_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), value :: wavelength_m
+      real(c_double), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_wavelength_array
+    ! int32_t relicore_object_temperature_wavelength_array_f32(float wavelength_m, const float
+    !     *signals, size_t n, const float *emissivity, size_t n_emissivity, const float
+    !     *reflected_temperature_k, size_t n_reflected_temperature_k, const float *transmittance,
+    !     size_t n_transmittance, const float *path_temperature_k, size_t n_path_temperature_k,
+    !     float *out);
+    function c_object_temperature_wavelength_array_f32(wavelength_m, signals, n, emissivity, &
+        n_emissivity, reflected_temperature_k, n_reflected_temperature_k, transmittance, &
+        n_transmittance, path_temperature_k, n_path_temperature_k, out) &
+        bind(C, name='relicore_object_temperature_wavelength_array_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t
+      real(c_float), value :: wavelength_m
+      real(c_float), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k
+      real(c_float), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_wavelength_array_f32
+    ! int32_t relicore_object_temperature_wavelength_with_uncertainty_array(double wavelength_m,
+    !     const double *signals, size_t n, const double *emissivity, size_t n_emissivity, const
+    !     double *reflected_temperature_k, size_t n_reflected_temperature_k, const double
+    !     *transmittance, size_t n_transmittance, const double *path_temperature_k, size_t
+    !     n_path_temperature_k, const double *signal_uncertainty, size_t n_signal_uncertainty, const
+    !     double *emissivity_uncertainty, size_t n_emissivity_uncertainty, const double
+    !     *reflected_temperature_uncertainty_k, size_t n_reflected_temperature_uncertainty_k, const
+    !     double *transmittance_uncertainty, size_t n_transmittance_uncertainty, const double
+    !     *path_temperature_uncertainty_k, size_t n_path_temperature_uncertainty_k, double
+    !     *out_temperature, double *out_uncertainty);
+    function c_object_temperature_wavelength_with_uncertainty_array(wavelength_m, signals, n, &
+        emissivity, n_emissivity, reflected_temperature_k, n_reflected_temperature_k, &
+        transmittance, n_transmittance, path_temperature_k, n_path_temperature_k, &
+        signal_uncertainty, n_signal_uncertainty, emissivity_uncertainty, n_emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, n_reflected_temperature_uncertainty_k, &
+        transmittance_uncertainty, n_transmittance_uncertainty, path_temperature_uncertainty_k, &
+        n_path_temperature_uncertainty_k, out_temperature, out_uncertainty) &
+        bind(C, name='relicore_object_temperature_wavelength_with_uncertainty_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), value :: wavelength_m
+      real(c_double), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*), signal_uncertainty(*), &
+          emissivity_uncertainty(*), reflected_temperature_uncertainty_k(*), &
+          transmittance_uncertainty(*), path_temperature_uncertainty_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k, n_signal_uncertainty, n_emissivity_uncertainty, &
+          n_reflected_temperature_uncertainty_k, n_transmittance_uncertainty, &
+          n_path_temperature_uncertainty_k
+      real(c_double), intent(out) :: out_temperature(*), out_uncertainty(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_wavelength_with_uncertainty_array
+    ! int32_t relicore_object_temperature_wavelength_with_uncertainty_array_f32(float wavelength_m,
+    !     const float *signals, size_t n, const float *emissivity, size_t n_emissivity, const float
+    !     *reflected_temperature_k, size_t n_reflected_temperature_k, const float *transmittance,
+    !     size_t n_transmittance, const float *path_temperature_k, size_t n_path_temperature_k,
+    !     const float *signal_uncertainty, size_t n_signal_uncertainty, const float
+    !     *emissivity_uncertainty, size_t n_emissivity_uncertainty, const float
+    !     *reflected_temperature_uncertainty_k, size_t n_reflected_temperature_uncertainty_k, const
+    !     float *transmittance_uncertainty, size_t n_transmittance_uncertainty, const float
+    !     *path_temperature_uncertainty_k, size_t n_path_temperature_uncertainty_k, float
+    !     *out_temperature, float *out_uncertainty);
+    function c_object_temperature_wavelength_with_uncertainty_array_f32(wavelength_m, signals, n, &
+        emissivity, n_emissivity, reflected_temperature_k, n_reflected_temperature_k, &
+        transmittance, n_transmittance, path_temperature_k, n_path_temperature_k, &
+        signal_uncertainty, n_signal_uncertainty, emissivity_uncertainty, n_emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, n_reflected_temperature_uncertainty_k, &
+        transmittance_uncertainty, n_transmittance_uncertainty, path_temperature_uncertainty_k, &
+        n_path_temperature_uncertainty_k, out_temperature, out_uncertainty) &
+        bind(C, name='relicore_object_temperature_wavelength_with_uncertainty_array_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t
+      real(c_float), value :: wavelength_m
+      real(c_float), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*), signal_uncertainty(*), &
+          emissivity_uncertainty(*), reflected_temperature_uncertainty_k(*), &
+          transmittance_uncertainty(*), path_temperature_uncertainty_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k, n_signal_uncertainty, n_emissivity_uncertainty, &
+          n_reflected_temperature_uncertainty_k, n_transmittance_uncertainty, &
+          n_path_temperature_uncertainty_k
+      real(c_float), intent(out) :: out_temperature(*), out_uncertainty(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_wavelength_with_uncertainty_array_f32
+    ! int32_t relicore_object_temperature_frequency_array(double frequency_hz, const double
+    !     *signals, size_t n, const double *emissivity, size_t n_emissivity, const double
+    !     *reflected_temperature_k, size_t n_reflected_temperature_k, const double *transmittance,
+    !     size_t n_transmittance, const double *path_temperature_k, size_t n_path_temperature_k,
+    !     double *out);
+    function c_object_temperature_frequency_array(frequency_hz, signals, n, emissivity, &
+        n_emissivity, reflected_temperature_k, n_reflected_temperature_k, transmittance, &
+        n_transmittance, path_temperature_k, n_path_temperature_k, out) &
+        bind(C, name='relicore_object_temperature_frequency_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), value :: frequency_hz
+      real(c_double), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_frequency_array
+    ! int32_t relicore_object_temperature_frequency_array_f32(float frequency_hz, const float
+    !     *signals, size_t n, const float *emissivity, size_t n_emissivity, const float
+    !     *reflected_temperature_k, size_t n_reflected_temperature_k, const float *transmittance,
+    !     size_t n_transmittance, const float *path_temperature_k, size_t n_path_temperature_k,
+    !     float *out);
+    function c_object_temperature_frequency_array_f32(frequency_hz, signals, n, emissivity, &
+        n_emissivity, reflected_temperature_k, n_reflected_temperature_k, transmittance, &
+        n_transmittance, path_temperature_k, n_path_temperature_k, out) &
+        bind(C, name='relicore_object_temperature_frequency_array_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t
+      real(c_float), value :: frequency_hz
+      real(c_float), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k
+      real(c_float), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_frequency_array_f32
+    ! int32_t relicore_object_temperature_frequency_with_uncertainty_array(double frequency_hz,
+    !     const double *signals, size_t n, const double *emissivity, size_t n_emissivity, const
+    !     double *reflected_temperature_k, size_t n_reflected_temperature_k, const double
+    !     *transmittance, size_t n_transmittance, const double *path_temperature_k, size_t
+    !     n_path_temperature_k, const double *signal_uncertainty, size_t n_signal_uncertainty, const
+    !     double *emissivity_uncertainty, size_t n_emissivity_uncertainty, const double
+    !     *reflected_temperature_uncertainty_k, size_t n_reflected_temperature_uncertainty_k, const
+    !     double *transmittance_uncertainty, size_t n_transmittance_uncertainty, const double
+    !     *path_temperature_uncertainty_k, size_t n_path_temperature_uncertainty_k, double
+    !     *out_temperature, double *out_uncertainty);
+    function c_object_temperature_frequency_with_uncertainty_array(frequency_hz, signals, n, &
+        emissivity, n_emissivity, reflected_temperature_k, n_reflected_temperature_k, &
+        transmittance, n_transmittance, path_temperature_k, n_path_temperature_k, &
+        signal_uncertainty, n_signal_uncertainty, emissivity_uncertainty, n_emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, n_reflected_temperature_uncertainty_k, &
+        transmittance_uncertainty, n_transmittance_uncertainty, path_temperature_uncertainty_k, &
+        n_path_temperature_uncertainty_k, out_temperature, out_uncertainty) &
+        bind(C, name='relicore_object_temperature_frequency_with_uncertainty_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), value :: frequency_hz
+      real(c_double), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*), signal_uncertainty(*), &
+          emissivity_uncertainty(*), reflected_temperature_uncertainty_k(*), &
+          transmittance_uncertainty(*), path_temperature_uncertainty_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k, n_signal_uncertainty, n_emissivity_uncertainty, &
+          n_reflected_temperature_uncertainty_k, n_transmittance_uncertainty, &
+          n_path_temperature_uncertainty_k
+      real(c_double), intent(out) :: out_temperature(*), out_uncertainty(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_frequency_with_uncertainty_array
+    ! int32_t relicore_object_temperature_frequency_with_uncertainty_array_f32(float frequency_hz,
+    !     const float *signals, size_t n, const float *emissivity, size_t n_emissivity, const float
+    !     *reflected_temperature_k, size_t n_reflected_temperature_k, const float *transmittance,
+    !     size_t n_transmittance, const float *path_temperature_k, size_t n_path_temperature_k,
+    !     const float *signal_uncertainty, size_t n_signal_uncertainty, const float
+    !     *emissivity_uncertainty, size_t n_emissivity_uncertainty, const float
+    !     *reflected_temperature_uncertainty_k, size_t n_reflected_temperature_uncertainty_k, const
+    !     float *transmittance_uncertainty, size_t n_transmittance_uncertainty, const float
+    !     *path_temperature_uncertainty_k, size_t n_path_temperature_uncertainty_k, float
+    !     *out_temperature, float *out_uncertainty);
+    function c_object_temperature_frequency_with_uncertainty_array_f32(frequency_hz, signals, n, &
+        emissivity, n_emissivity, reflected_temperature_k, n_reflected_temperature_k, &
+        transmittance, n_transmittance, path_temperature_k, n_path_temperature_k, &
+        signal_uncertainty, n_signal_uncertainty, emissivity_uncertainty, n_emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, n_reflected_temperature_uncertainty_k, &
+        transmittance_uncertainty, n_transmittance_uncertainty, path_temperature_uncertainty_k, &
+        n_path_temperature_uncertainty_k, out_temperature, out_uncertainty) &
+        bind(C, name='relicore_object_temperature_frequency_with_uncertainty_array_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t
+      real(c_float), value :: frequency_hz
+      real(c_float), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*), signal_uncertainty(*), &
+          emissivity_uncertainty(*), reflected_temperature_uncertainty_k(*), &
+          transmittance_uncertainty(*), path_temperature_uncertainty_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k, n_signal_uncertainty, n_emissivity_uncertainty, &
+          n_reflected_temperature_uncertainty_k, n_transmittance_uncertainty, &
+          n_path_temperature_uncertainty_k
+      real(c_float), intent(out) :: out_temperature(*), out_uncertainty(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_frequency_with_uncertainty_array_f32
+    ! int32_t relicore_object_temperature_band_array(double lower_m, double upper_m, const double
+    !     *signals, size_t n, const double *emissivity, size_t n_emissivity, const double
+    !     *reflected_temperature_k, size_t n_reflected_temperature_k, const double *transmittance,
+    !     size_t n_transmittance, const double *path_temperature_k, size_t n_path_temperature_k,
+    !     double *out);
+    function c_object_temperature_band_array(lower_m, upper_m, signals, n, emissivity, &
+        n_emissivity, reflected_temperature_k, n_reflected_temperature_k, transmittance, &
+        n_transmittance, path_temperature_k, n_path_temperature_k, out) &
+        bind(C, name='relicore_object_temperature_band_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), value :: lower_m, upper_m
+      real(c_double), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_band_array
+    ! int32_t relicore_object_temperature_band_array_f32(float lower_m, float upper_m, const float
+    !     *signals, size_t n, const float *emissivity, size_t n_emissivity, const float
+    !     *reflected_temperature_k, size_t n_reflected_temperature_k, const float *transmittance,
+    !     size_t n_transmittance, const float *path_temperature_k, size_t n_path_temperature_k,
+    !     float *out);
+    function c_object_temperature_band_array_f32(lower_m, upper_m, signals, n, emissivity, &
+        n_emissivity, reflected_temperature_k, n_reflected_temperature_k, transmittance, &
+        n_transmittance, path_temperature_k, n_path_temperature_k, out) &
+        bind(C, name='relicore_object_temperature_band_array_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t
+      real(c_float), value :: lower_m, upper_m
+      real(c_float), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k
+      real(c_float), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_band_array_f32
+    ! int32_t relicore_object_temperature_band_with_uncertainty_array(double lower_m, double
+    !     upper_m, const double *signals, size_t n, const double *emissivity, size_t n_emissivity,
+    !     const double *reflected_temperature_k, size_t n_reflected_temperature_k, const double
+    !     *transmittance, size_t n_transmittance, const double *path_temperature_k, size_t
+    !     n_path_temperature_k, const double *signal_uncertainty, size_t n_signal_uncertainty, const
+    !     double *emissivity_uncertainty, size_t n_emissivity_uncertainty, const double
+    !     *reflected_temperature_uncertainty_k, size_t n_reflected_temperature_uncertainty_k, const
+    !     double *transmittance_uncertainty, size_t n_transmittance_uncertainty, const double
+    !     *path_temperature_uncertainty_k, size_t n_path_temperature_uncertainty_k, double
+    !     *out_temperature, double *out_uncertainty);
+    function c_object_temperature_band_with_uncertainty_array(lower_m, upper_m, signals, n, &
+        emissivity, n_emissivity, reflected_temperature_k, n_reflected_temperature_k, &
+        transmittance, n_transmittance, path_temperature_k, n_path_temperature_k, &
+        signal_uncertainty, n_signal_uncertainty, emissivity_uncertainty, n_emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, n_reflected_temperature_uncertainty_k, &
+        transmittance_uncertainty, n_transmittance_uncertainty, path_temperature_uncertainty_k, &
+        n_path_temperature_uncertainty_k, out_temperature, out_uncertainty) &
+        bind(C, name='relicore_object_temperature_band_with_uncertainty_array') result(status)
+      import :: c_double, c_int32_t, c_size_t
+      real(c_double), value :: lower_m, upper_m
+      real(c_double), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*), signal_uncertainty(*), &
+          emissivity_uncertainty(*), reflected_temperature_uncertainty_k(*), &
+          transmittance_uncertainty(*), path_temperature_uncertainty_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k, n_signal_uncertainty, n_emissivity_uncertainty, &
+          n_reflected_temperature_uncertainty_k, n_transmittance_uncertainty, &
+          n_path_temperature_uncertainty_k
+      real(c_double), intent(out) :: out_temperature(*), out_uncertainty(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_band_with_uncertainty_array
+    ! int32_t relicore_object_temperature_band_with_uncertainty_array_f32(float lower_m, float
+    !     upper_m, const float *signals, size_t n, const float *emissivity, size_t n_emissivity,
+    !     const float *reflected_temperature_k, size_t n_reflected_temperature_k, const float
+    !     *transmittance, size_t n_transmittance, const float *path_temperature_k, size_t
+    !     n_path_temperature_k, const float *signal_uncertainty, size_t n_signal_uncertainty, const
+    !     float *emissivity_uncertainty, size_t n_emissivity_uncertainty, const float
+    !     *reflected_temperature_uncertainty_k, size_t n_reflected_temperature_uncertainty_k, const
+    !     float *transmittance_uncertainty, size_t n_transmittance_uncertainty, const float
+    !     *path_temperature_uncertainty_k, size_t n_path_temperature_uncertainty_k, float
+    !     *out_temperature, float *out_uncertainty);
+    function c_object_temperature_band_with_uncertainty_array_f32(lower_m, upper_m, signals, n, &
+        emissivity, n_emissivity, reflected_temperature_k, n_reflected_temperature_k, &
+        transmittance, n_transmittance, path_temperature_k, n_path_temperature_k, &
+        signal_uncertainty, n_signal_uncertainty, emissivity_uncertainty, n_emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, n_reflected_temperature_uncertainty_k, &
+        transmittance_uncertainty, n_transmittance_uncertainty, path_temperature_uncertainty_k, &
+        n_path_temperature_uncertainty_k, out_temperature, out_uncertainty) &
+        bind(C, name='relicore_object_temperature_band_with_uncertainty_array_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t
+      real(c_float), value :: lower_m, upper_m
+      real(c_float), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*), signal_uncertainty(*), &
+          emissivity_uncertainty(*), reflected_temperature_uncertainty_k(*), &
+          transmittance_uncertainty(*), path_temperature_uncertainty_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k, n_signal_uncertainty, n_emissivity_uncertainty, &
+          n_reflected_temperature_uncertainty_k, n_transmittance_uncertainty, &
+          n_path_temperature_uncertainty_k
+      real(c_float), intent(out) :: out_temperature(*), out_uncertainty(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_band_with_uncertainty_array_f32
   end interface
 
 contains
@@ -2726,6 +3674,24 @@ contains
   end subroutine relicore_thermal_history_compute
 
   ! ================================================================ the table's functions
+
+  ! A relicore_temperature_uncertainty with every real field NaN and every count 0 (a failed call).
+  elemental function nan_relicore_temperature_uncertainty() result(x)
+    type(relicore_temperature_uncertainty) :: x
+    x%temperature_k = nan64()
+    x%combined_standard_uncertainty_k = nan64()
+    x%sensitivity_coefficients = nan64()
+    x%inputs = 0
+  end function nan_relicore_temperature_uncertainty
+
+  ! A relicore_temperature_uncertainty_f32 with every real field NaN and every count 0 (a failed call).
+  elemental function nan_relicore_temperature_uncertainty_f32() result(x)
+    type(relicore_temperature_uncertainty_f32) :: x
+    x%temperature_k = nan32()
+    x%combined_standard_uncertainty_k = nan32()
+    x%sensitivity_coefficients = nan32()
+    x%inputs = 0
+  end function nan_relicore_temperature_uncertainty_f32
 
   ! Planck spectral radiance per unit wavelength, B_lambda = 2hc^2/lambda^5 / (e^(hc/lambda kT) -
   ! 1).
@@ -3915,6 +4881,701 @@ contains
     if (code /= RELICORE_OK) out = nan64()
     call report(code, 'relicore_thermal_sz_null_frequency', stat)
   end subroutine relicore_thermal_sz_null_frequency_s
+
+  ! Measured spectral radiance at one wavelength of a scene (the forward measurement equation):
+  ! L_meas = tau[epsilon B_lambda(T_obj) + (1 - epsilon) B_lambda(T_refl)] + (1 - tau)
+  ! B_lambda(T_path).
+  !   wavelength_m: wavelength in m, > 0
+  !   object_temperature_k: object temperature in K, > 0
+  !   emissivity: surface emissivity, > 0, <= 1
+  !   reflected_temperature_k: temperature of the reflected surroundings in K, >= 0
+  !   transmittance: path transmittance, > 0, <= 1
+  !   path_temperature_k: path temperature in K, >= 0
+  ! Result: L_meas in W m-2 sr-1 m-1, >= 0.
+  ! Forms: relicore_measured_spectral_radiance_wavelength,
+  !   relicore_measured_spectral_radiance_wavelength_s; real(c_float) twins
+  !   relicore_measured_spectral_radiance_wavelength_f32,
+  !   relicore_measured_spectral_radiance_wavelength_f32_s.
+  impure elemental function relicore_measured_spectral_radiance_wavelength(wavelength_m, &
+      object_temperature_k, emissivity, reflected_temperature_k, transmittance, &
+      path_temperature_k) result(res)
+    real(c_double), intent(in) :: wavelength_m, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k
+    real(c_double) :: res
+    if (c_measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_measured_spectral_radiance_wavelength
+
+  impure elemental subroutine relicore_measured_spectral_radiance_wavelength_s(wavelength_m, &
+      object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      out, stat)
+    real(c_double), intent(in) :: wavelength_m, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_measured_spectral_radiance_wavelength', stat)
+  end subroutine relicore_measured_spectral_radiance_wavelength_s
+
+  impure elemental function relicore_measured_spectral_radiance_wavelength_f32(wavelength_m, &
+      object_temperature_k, emissivity, reflected_temperature_k, transmittance, &
+      path_temperature_k) result(res)
+    real(c_float), intent(in) :: wavelength_m, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k
+    real(c_float) :: res
+    if (c_measured_spectral_radiance_wavelength_f32(wavelength_m, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, &
+        res) /= RELICORE_OK) res = nan32()
+  end function relicore_measured_spectral_radiance_wavelength_f32
+
+  impure elemental subroutine relicore_measured_spectral_radiance_wavelength_f32_s(wavelength_m, &
+      object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      out, stat)
+    real(c_float), intent(in) :: wavelength_m, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_measured_spectral_radiance_wavelength_f32(wavelength_m, object_temperature_k, &
+        emissivity, reflected_temperature_k, transmittance, path_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_measured_spectral_radiance_wavelength_f32', stat)
+  end subroutine relicore_measured_spectral_radiance_wavelength_f32_s
+
+  ! Measured spectral radiance at one frequency of a scene: L_meas = tau[epsilon B_nu(T_obj) + (1 -
+  ! epsilon) B_nu(T_refl)] + (1 - tau) B_nu(T_path).
+  !   frequency_hz: frequency in Hz, > 0
+  !   object_temperature_k: object temperature in K, > 0
+  !   emissivity: surface emissivity, > 0, <= 1
+  !   reflected_temperature_k: temperature of the reflected surroundings in K, >= 0
+  !   transmittance: path transmittance, > 0, <= 1
+  !   path_temperature_k: path temperature in K, >= 0
+  ! Result: L_meas in W m-2 sr-1 Hz-1, >= 0.
+  ! Forms: relicore_measured_spectral_radiance_frequency,
+  !   relicore_measured_spectral_radiance_frequency_s; real(c_float) twins
+  !   relicore_measured_spectral_radiance_frequency_f32,
+  !   relicore_measured_spectral_radiance_frequency_f32_s.
+  impure elemental function relicore_measured_spectral_radiance_frequency(frequency_hz, &
+      object_temperature_k, emissivity, reflected_temperature_k, transmittance, &
+      path_temperature_k) result(res)
+    real(c_double), intent(in) :: frequency_hz, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k
+    real(c_double) :: res
+    if (c_measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_measured_spectral_radiance_frequency
+
+  impure elemental subroutine relicore_measured_spectral_radiance_frequency_s(frequency_hz, &
+      object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      out, stat)
+    real(c_double), intent(in) :: frequency_hz, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_measured_spectral_radiance_frequency', stat)
+  end subroutine relicore_measured_spectral_radiance_frequency_s
+
+  impure elemental function relicore_measured_spectral_radiance_frequency_f32(frequency_hz, &
+      object_temperature_k, emissivity, reflected_temperature_k, transmittance, &
+      path_temperature_k) result(res)
+    real(c_float), intent(in) :: frequency_hz, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k
+    real(c_float) :: res
+    if (c_measured_spectral_radiance_frequency_f32(frequency_hz, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, &
+        res) /= RELICORE_OK) res = nan32()
+  end function relicore_measured_spectral_radiance_frequency_f32
+
+  impure elemental subroutine relicore_measured_spectral_radiance_frequency_f32_s(frequency_hz, &
+      object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      out, stat)
+    real(c_float), intent(in) :: frequency_hz, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_measured_spectral_radiance_frequency_f32(frequency_hz, object_temperature_k, &
+        emissivity, reflected_temperature_k, transmittance, path_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_measured_spectral_radiance_frequency_f32', stat)
+  end subroutine relicore_measured_spectral_radiance_frequency_f32_s
+
+  ! Measured band radiance between two wavelengths of a scene: the measurement equation with L =
+  ! `band_radiance_wavelength`.
+  !   lower_m: lower band edge in m, >= 0
+  !   upper_m: upper band edge in m, > lower_m, may be +Inf
+  !   object_temperature_k: object temperature in K, > 0
+  !   emissivity: surface emissivity, > 0, <= 1
+  !   reflected_temperature_k: temperature of the reflected surroundings in K, >= 0
+  !   transmittance: path transmittance, > 0, <= 1
+  !   path_temperature_k: path temperature in K, >= 0
+  ! Result: L_meas in W m-2 sr-1, >= 0.
+  ! Forms: relicore_measured_band_radiance_wavelength, relicore_measured_band_radiance_wavelength_s.
+  impure elemental function relicore_measured_band_radiance_wavelength(lower_m, upper_m, &
+      object_temperature_k, emissivity, reflected_temperature_k, transmittance, &
+      path_temperature_k) result(res)
+    real(c_double), intent(in) :: lower_m, upper_m, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k
+    real(c_double) :: res
+    if (c_measured_band_radiance_wavelength(lower_m, upper_m, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_measured_band_radiance_wavelength
+
+  impure elemental subroutine relicore_measured_band_radiance_wavelength_s(lower_m, upper_m, &
+      object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      out, stat)
+    real(c_double), intent(in) :: lower_m, upper_m, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_measured_band_radiance_wavelength(lower_m, upper_m, object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_measured_band_radiance_wavelength', stat)
+  end subroutine relicore_measured_band_radiance_wavelength_s
+
+  ! Object temperature from the spectral radiance measured at one wavelength (the inverse
+  ! measurement equation): the brightness temperature of the corrected object radiance L_obj =
+  ! ([L_meas - (1 - tau)B_lambda(T_path)]/tau - (1 - epsilon)B_lambda(T_refl))/epsilon.
+  !   wavelength_m: wavelength in m, > 0
+  !   signal: measured spectral radiance L_meas in W m-2 sr-1 m-1, finite
+  !   emissivity: surface emissivity, > 0, <= 1
+  !   reflected_temperature_k: temperature of the reflected surroundings in K, >= 0
+  !   transmittance: path transmittance, > 0, <= 1
+  !   path_temperature_k: path temperature in K, >= 0
+  ! Result: T_obj in K, > 0.
+  ! Forms: relicore_object_temperature_wavelength, relicore_object_temperature_wavelength_s;
+  !   real(c_float) twins relicore_object_temperature_wavelength_f32,
+  !   relicore_object_temperature_wavelength_f32_s.
+  impure elemental function relicore_object_temperature_wavelength(wavelength_m, signal, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k) result(res)
+    real(c_double), intent(in) :: wavelength_m, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k
+    real(c_double) :: res
+    if (c_object_temperature_wavelength(wavelength_m, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, res) /= RELICORE_OK) res = nan64()
+  end function relicore_object_temperature_wavelength
+
+  impure elemental subroutine relicore_object_temperature_wavelength_s(wavelength_m, signal, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k, out, stat)
+    real(c_double), intent(in) :: wavelength_m, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_object_temperature_wavelength(wavelength_m, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_object_temperature_wavelength', stat)
+  end subroutine relicore_object_temperature_wavelength_s
+
+  impure elemental function relicore_object_temperature_wavelength_f32(wavelength_m, signal, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k) result(res)
+    real(c_float), intent(in) :: wavelength_m, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k
+    real(c_float) :: res
+    if (c_object_temperature_wavelength_f32(wavelength_m, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, &
+        res) /= RELICORE_OK) res = nan32()
+  end function relicore_object_temperature_wavelength_f32
+
+  impure elemental subroutine relicore_object_temperature_wavelength_f32_s(wavelength_m, signal, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k, out, stat)
+    real(c_float), intent(in) :: wavelength_m, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_object_temperature_wavelength_f32(wavelength_m, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_object_temperature_wavelength_f32', stat)
+  end subroutine relicore_object_temperature_wavelength_f32_s
+
+  ! Object temperature from the spectral radiance measured at one frequency: the brightness
+  ! temperature (`brightness_temperature_frequency`) of the corrected object radiance.
+  !   frequency_hz: frequency in Hz, > 0
+  !   signal: measured spectral radiance L_meas in W m-2 sr-1 Hz-1, finite
+  !   emissivity: surface emissivity, > 0, <= 1
+  !   reflected_temperature_k: temperature of the reflected surroundings in K, >= 0
+  !   transmittance: path transmittance, > 0, <= 1
+  !   path_temperature_k: path temperature in K, >= 0
+  ! Result: T_obj in K, > 0.
+  ! Forms: relicore_object_temperature_frequency, relicore_object_temperature_frequency_s;
+  !   real(c_float) twins relicore_object_temperature_frequency_f32,
+  !   relicore_object_temperature_frequency_f32_s.
+  impure elemental function relicore_object_temperature_frequency(frequency_hz, signal, emissivity, &
+      reflected_temperature_k, transmittance, path_temperature_k) result(res)
+    real(c_double), intent(in) :: frequency_hz, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k
+    real(c_double) :: res
+    if (c_object_temperature_frequency(frequency_hz, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, res) /= RELICORE_OK) res = nan64()
+  end function relicore_object_temperature_frequency
+
+  impure elemental subroutine relicore_object_temperature_frequency_s(frequency_hz, signal, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k, out, stat)
+    real(c_double), intent(in) :: frequency_hz, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_object_temperature_frequency(frequency_hz, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_object_temperature_frequency', stat)
+  end subroutine relicore_object_temperature_frequency_s
+
+  impure elemental function relicore_object_temperature_frequency_f32(frequency_hz, signal, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k) result(res)
+    real(c_float), intent(in) :: frequency_hz, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k
+    real(c_float) :: res
+    if (c_object_temperature_frequency_f32(frequency_hz, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, &
+        res) /= RELICORE_OK) res = nan32()
+  end function relicore_object_temperature_frequency_f32
+
+  impure elemental subroutine relicore_object_temperature_frequency_f32_s(frequency_hz, signal, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k, out, stat)
+    real(c_float), intent(in) :: frequency_hz, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_object_temperature_frequency_f32(frequency_hz, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_object_temperature_frequency_f32', stat)
+  end subroutine relicore_object_temperature_frequency_f32_s
+
+  ! Object temperature from the band radiance measured between two wavelengths: the temperature
+  ! (`temperature_from_band_radiance_wavelength`, the shared root finder) of the corrected object
+  ! band radiance.
+  !   lower_m: lower band edge in m, >= 0
+  !   upper_m: upper band edge in m, > lower_m, may be +Inf
+  !   signal: measured band radiance L_meas in W m-2 sr-1, finite
+  !   emissivity: surface emissivity, > 0, <= 1
+  !   reflected_temperature_k: temperature of the reflected surroundings in K, >= 0
+  !   transmittance: path transmittance, > 0, <= 1
+  !   path_temperature_k: path temperature in K, >= 0
+  ! Result: T_obj in K, > 0.
+  ! Forms: relicore_object_temperature_band, relicore_object_temperature_band_s.
+  impure elemental function relicore_object_temperature_band(lower_m, upper_m, signal, emissivity, &
+      reflected_temperature_k, transmittance, path_temperature_k) result(res)
+    real(c_double), intent(in) :: lower_m, upper_m, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k
+    real(c_double) :: res
+    if (c_object_temperature_band(lower_m, upper_m, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, res) /= RELICORE_OK) res = nan64()
+  end function relicore_object_temperature_band
+
+  impure elemental subroutine relicore_object_temperature_band_s(lower_m, upper_m, signal, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k, out, stat)
+    real(c_double), intent(in) :: lower_m, upper_m, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_object_temperature_band(lower_m, upper_m, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_object_temperature_band', stat)
+  end subroutine relicore_object_temperature_band_s
+
+  ! Temperature derivative of the band radiance between two wavelengths, dL/dT with L =
+  ! `band_radiance_wavelength`: dL/dT = (4L + K T^4 (x1 f(x1) - x2 f(x2)))/T, f(t) = t^3/(e^t - 1),
+  ! x = c2/(lambda T) at the band edges, K = 2k^4/(h^3c^2) (the derivative of K T^4 int f(t) dt
+  ! under the change of variables t = c2/(lambda T)).
+  !   lower_m: lower band edge in m, >= 0
+  !   upper_m: upper band edge in m, > lower_m, may be +Inf
+  !   temperature_k: temperature in K, > 0
+  ! Result: dL/dT in W m-2 sr-1 K-1, >= 0.
+  ! Forms: relicore_band_radiance_temperature_derivative_wavelength,
+  !   relicore_band_radiance_temperature_derivative_wavelength_s.
+  impure elemental function relicore_band_radiance_temperature_derivative_wavelength(lower_m, &
+      upper_m, temperature_k) result(res)
+    real(c_double), intent(in) :: lower_m, upper_m, temperature_k
+    real(c_double) :: res
+    if (c_band_radiance_temperature_derivative_wavelength(lower_m, upper_m, temperature_k, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_band_radiance_temperature_derivative_wavelength
+
+  impure elemental subroutine relicore_band_radiance_temperature_derivative_wavelength_s(lower_m, &
+      upper_m, temperature_k, out, stat)
+    real(c_double), intent(in) :: lower_m, upper_m, temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_band_radiance_temperature_derivative_wavelength(lower_m, upper_m, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_band_radiance_temperature_derivative_wavelength', stat)
+  end subroutine relicore_band_radiance_temperature_derivative_wavelength_s
+
+  ! Brightness temperature at a wavelength with its uncertainty: T from
+  ! `brightness_temperature_wavelength` (the same bits) and the sensitivity coefficient d T/d L =
+  ! 1/(d B_lambda/d T) (Planck's law differentiated implicitly, with
+  ! `radiance_temperature_derivative_wavelength`).
+  !   wavelength_m: wavelength in m, > 0
+  !   spectral_radiance: B_lambda in W m-2 sr-1 m-1, > 0
+  !   spectral_radiance_uncertainty: standard uncertainty of the radiance, same unit, >= 0
+  ! Result: type(relicore_temperature_uncertainty) (type(relicore_temperature_uncertainty_f32) for
+  !   the _f32 twins): T in K with u_c and dT/dL (1 input); every real field NaN and inputs 0 on
+  !   failure.
+  ! Forms: relicore_brightness_temperature_wavelength_with_uncertainty,
+  !   relicore_brightness_temperature_wavelength_with_uncertainty_s.
+  impure elemental function relicore_brightness_temperature_wavelength_with_uncertainty(wavelength_m, &
+      spectral_radiance, spectral_radiance_uncertainty) result(res)
+    real(c_double), intent(in) :: wavelength_m, spectral_radiance, spectral_radiance_uncertainty
+    type(relicore_temperature_uncertainty) :: res
+    if (c_brightness_temperature_wavelength_with_uncertainty(wavelength_m, spectral_radiance, &
+        spectral_radiance_uncertainty, &
+        res) /= RELICORE_OK) res = nan_relicore_temperature_uncertainty()
+  end function relicore_brightness_temperature_wavelength_with_uncertainty
+
+  impure elemental subroutine relicore_brightness_temperature_wavelength_with_uncertainty_s(wavelength_m, &
+      spectral_radiance, spectral_radiance_uncertainty, out, stat)
+    real(c_double), intent(in) :: wavelength_m, spectral_radiance, spectral_radiance_uncertainty
+    type(relicore_temperature_uncertainty), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_brightness_temperature_wavelength_with_uncertainty(wavelength_m, spectral_radiance, &
+        spectral_radiance_uncertainty, out)
+    if (code /= RELICORE_OK) out = nan_relicore_temperature_uncertainty()
+    call report(code, 'relicore_brightness_temperature_wavelength_with_uncertainty', stat)
+  end subroutine relicore_brightness_temperature_wavelength_with_uncertainty_s
+
+  ! Brightness temperature at a frequency with its uncertainty: T from
+  ! `brightness_temperature_frequency` (the same bits) and d T/d L = 1/(d B_nu/d T)
+  ! (`radiance_temperature_derivative_frequency`).
+  !   frequency_hz: frequency in Hz, > 0
+  !   spectral_radiance: B_nu in W m-2 sr-1 Hz-1, > 0
+  !   spectral_radiance_uncertainty: standard uncertainty of the radiance, same unit, >= 0
+  ! Result: type(relicore_temperature_uncertainty) (type(relicore_temperature_uncertainty_f32) for
+  !   the _f32 twins): T in K with u_c and dT/dL (1 input); every real field NaN and inputs 0 on
+  !   failure.
+  ! Forms: relicore_brightness_temperature_frequency_with_uncertainty,
+  !   relicore_brightness_temperature_frequency_with_uncertainty_s.
+  impure elemental function relicore_brightness_temperature_frequency_with_uncertainty(frequency_hz, &
+      spectral_radiance, spectral_radiance_uncertainty) result(res)
+    real(c_double), intent(in) :: frequency_hz, spectral_radiance, spectral_radiance_uncertainty
+    type(relicore_temperature_uncertainty) :: res
+    if (c_brightness_temperature_frequency_with_uncertainty(frequency_hz, spectral_radiance, &
+        spectral_radiance_uncertainty, &
+        res) /= RELICORE_OK) res = nan_relicore_temperature_uncertainty()
+  end function relicore_brightness_temperature_frequency_with_uncertainty
+
+  impure elemental subroutine relicore_brightness_temperature_frequency_with_uncertainty_s(frequency_hz, &
+      spectral_radiance, spectral_radiance_uncertainty, out, stat)
+    real(c_double), intent(in) :: frequency_hz, spectral_radiance, spectral_radiance_uncertainty
+    type(relicore_temperature_uncertainty), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_brightness_temperature_frequency_with_uncertainty(frequency_hz, spectral_radiance, &
+        spectral_radiance_uncertainty, out)
+    if (code /= RELICORE_OK) out = nan_relicore_temperature_uncertainty()
+    call report(code, 'relicore_brightness_temperature_frequency_with_uncertainty', stat)
+  end subroutine relicore_brightness_temperature_frequency_with_uncertainty_s
+
+  ! `object_temperature_wavelength` with its sensitivity coefficients and combined standard
+  ! uncertainty.
+  !   wavelength_m: wavelength in m, > 0
+  !   signal: measured spectral radiance L_meas in W m-2 sr-1 m-1, finite
+  !   emissivity: surface emissivity, > 0, <= 1
+  !   reflected_temperature_k: temperature of the reflected surroundings in K, >= 0
+  !   transmittance: path transmittance, > 0, <= 1
+  !   path_temperature_k: path temperature in K, >= 0
+  !   signal_uncertainty: standard uncertainty of the signal, same unit, >= 0
+  !   emissivity_uncertainty: standard uncertainty of the emissivity, >= 0
+  !   reflected_temperature_uncertainty_k: standard uncertainty of the reflected temperature in K,
+  !       >= 0
+  !   transmittance_uncertainty: standard uncertainty of the transmittance, >= 0
+  !   path_temperature_uncertainty_k: standard uncertainty of the path temperature in K, >= 0
+  ! Result: type(relicore_temperature_uncertainty) (type(relicore_temperature_uncertainty_f32) for
+  !   the _f32 twins): T_obj in K with u_c and the 5 coefficients; every real field NaN and inputs 0
+  !   on failure.
+  ! Forms: relicore_object_temperature_wavelength_with_uncertainty,
+  !   relicore_object_temperature_wavelength_with_uncertainty_s; real(c_float) twins
+  !   relicore_object_temperature_wavelength_with_uncertainty_f32,
+  !   relicore_object_temperature_wavelength_with_uncertainty_f32_s.
+  impure elemental function relicore_object_temperature_wavelength_with_uncertainty(wavelength_m, &
+      signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k) result(res)
+    real(c_double), intent(in) :: wavelength_m, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k
+    type(relicore_temperature_uncertainty) :: res
+    if (c_object_temperature_wavelength_with_uncertainty(wavelength_m, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+        emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, &
+        res) /= RELICORE_OK) res = nan_relicore_temperature_uncertainty()
+  end function relicore_object_temperature_wavelength_with_uncertainty
+
+  impure elemental subroutine relicore_object_temperature_wavelength_with_uncertainty_s(wavelength_m, &
+      signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k, out, stat)
+    real(c_double), intent(in) :: wavelength_m, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k
+    type(relicore_temperature_uncertainty), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_object_temperature_wavelength_with_uncertainty(wavelength_m, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+        emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, out)
+    if (code /= RELICORE_OK) out = nan_relicore_temperature_uncertainty()
+    call report(code, 'relicore_object_temperature_wavelength_with_uncertainty', stat)
+  end subroutine relicore_object_temperature_wavelength_with_uncertainty_s
+
+  impure elemental function relicore_object_temperature_wavelength_with_uncertainty_f32(wavelength_m, &
+      signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k) result(res)
+    real(c_float), intent(in) :: wavelength_m, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k
+    type(relicore_temperature_uncertainty_f32) :: res
+    if (c_object_temperature_wavelength_with_uncertainty_f32(wavelength_m, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+        emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, &
+        res) /= RELICORE_OK) res = nan_relicore_temperature_uncertainty_f32()
+  end function relicore_object_temperature_wavelength_with_uncertainty_f32
+
+  impure elemental subroutine relicore_object_temperature_wavelength_with_uncertainty_f32_s(wavelength_m, &
+      signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k, out, stat)
+    real(c_float), intent(in) :: wavelength_m, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k
+    type(relicore_temperature_uncertainty_f32), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_object_temperature_wavelength_with_uncertainty_f32(wavelength_m, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+        emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, out)
+    if (code /= RELICORE_OK) out = nan_relicore_temperature_uncertainty_f32()
+    call report(code, 'relicore_object_temperature_wavelength_with_uncertainty_f32', stat)
+  end subroutine relicore_object_temperature_wavelength_with_uncertainty_f32_s
+
+  ! `object_temperature_frequency` with its sensitivity coefficients and combined standard
+  ! uncertainty; arguments, result and errors as `object_temperature_wavelength_with_uncertainty`
+  ! with the frequency nu in Hz first and the signal in W m^-2 sr^-1 Hz^-1.
+  !   frequency_hz: frequency in Hz, > 0
+  !   signal: measured spectral radiance L_meas in W m-2 sr-1 Hz-1, finite
+  !   emissivity: surface emissivity, > 0, <= 1
+  !   reflected_temperature_k: temperature of the reflected surroundings in K, >= 0
+  !   transmittance: path transmittance, > 0, <= 1
+  !   path_temperature_k: path temperature in K, >= 0
+  !   signal_uncertainty: standard uncertainty of the signal, same unit, >= 0
+  !   emissivity_uncertainty: standard uncertainty of the emissivity, >= 0
+  !   reflected_temperature_uncertainty_k: standard uncertainty of the reflected temperature in K,
+  !       >= 0
+  !   transmittance_uncertainty: standard uncertainty of the transmittance, >= 0
+  !   path_temperature_uncertainty_k: standard uncertainty of the path temperature in K, >= 0
+  ! Result: type(relicore_temperature_uncertainty) (type(relicore_temperature_uncertainty_f32) for
+  !   the _f32 twins): T_obj in K with u_c and the 5 coefficients; every real field NaN and inputs 0
+  !   on failure.
+  ! Forms: relicore_object_temperature_frequency_with_uncertainty,
+  !   relicore_object_temperature_frequency_with_uncertainty_s; real(c_float) twins
+  !   relicore_object_temperature_frequency_with_uncertainty_f32,
+  !   relicore_object_temperature_frequency_with_uncertainty_f32_s.
+  impure elemental function relicore_object_temperature_frequency_with_uncertainty(frequency_hz, &
+      signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k) result(res)
+    real(c_double), intent(in) :: frequency_hz, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k
+    type(relicore_temperature_uncertainty) :: res
+    if (c_object_temperature_frequency_with_uncertainty(frequency_hz, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+        emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, &
+        res) /= RELICORE_OK) res = nan_relicore_temperature_uncertainty()
+  end function relicore_object_temperature_frequency_with_uncertainty
+
+  impure elemental subroutine relicore_object_temperature_frequency_with_uncertainty_s(frequency_hz, &
+      signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k, out, stat)
+    real(c_double), intent(in) :: frequency_hz, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k
+    type(relicore_temperature_uncertainty), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_object_temperature_frequency_with_uncertainty(frequency_hz, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+        emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, out)
+    if (code /= RELICORE_OK) out = nan_relicore_temperature_uncertainty()
+    call report(code, 'relicore_object_temperature_frequency_with_uncertainty', stat)
+  end subroutine relicore_object_temperature_frequency_with_uncertainty_s
+
+  impure elemental function relicore_object_temperature_frequency_with_uncertainty_f32(frequency_hz, &
+      signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k) result(res)
+    real(c_float), intent(in) :: frequency_hz, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k
+    type(relicore_temperature_uncertainty_f32) :: res
+    if (c_object_temperature_frequency_with_uncertainty_f32(frequency_hz, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+        emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, &
+        res) /= RELICORE_OK) res = nan_relicore_temperature_uncertainty_f32()
+  end function relicore_object_temperature_frequency_with_uncertainty_f32
+
+  impure elemental subroutine relicore_object_temperature_frequency_with_uncertainty_f32_s(frequency_hz, &
+      signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k, out, stat)
+    real(c_float), intent(in) :: frequency_hz, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k
+    type(relicore_temperature_uncertainty_f32), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_object_temperature_frequency_with_uncertainty_f32(frequency_hz, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+        emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, out)
+    if (code /= RELICORE_OK) out = nan_relicore_temperature_uncertainty_f32()
+    call report(code, 'relicore_object_temperature_frequency_with_uncertainty_f32', stat)
+  end subroutine relicore_object_temperature_frequency_with_uncertainty_f32_s
+
+  ! `object_temperature_band` with its sensitivity coefficients and combined standard uncertainty.
+  ! The band derivative is `band_radiance_temperature_derivative_wavelength`.
+  !   lower_m: lower band edge in m, >= 0
+  !   upper_m: upper band edge in m, > lower_m, may be +Inf
+  !   signal: measured band radiance L_meas in W m-2 sr-1, finite
+  !   emissivity: surface emissivity, > 0, <= 1
+  !   reflected_temperature_k: temperature of the reflected surroundings in K, >= 0
+  !   transmittance: path transmittance, > 0, <= 1
+  !   path_temperature_k: path temperature in K, >= 0
+  !   signal_uncertainty: standard uncertainty of the signal, same unit, >= 0
+  !   emissivity_uncertainty: standard uncertainty of the emissivity, >= 0
+  !   reflected_temperature_uncertainty_k: standard uncertainty of the reflected temperature in K,
+  !       >= 0
+  !   transmittance_uncertainty: standard uncertainty of the transmittance, >= 0
+  !   path_temperature_uncertainty_k: standard uncertainty of the path temperature in K, >= 0
+  ! Result: type(relicore_temperature_uncertainty) (type(relicore_temperature_uncertainty_f32) for
+  !   the _f32 twins): T_obj in K with u_c and the 5 coefficients; every real field NaN and inputs 0
+  !   on failure.
+  ! Forms: relicore_object_temperature_band_with_uncertainty,
+  !   relicore_object_temperature_band_with_uncertainty_s.
+  impure elemental function relicore_object_temperature_band_with_uncertainty(lower_m, upper_m, &
+      signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k) result(res)
+    real(c_double), intent(in) :: lower_m, upper_m, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k
+    type(relicore_temperature_uncertainty) :: res
+    if (c_object_temperature_band_with_uncertainty(lower_m, upper_m, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+        emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, &
+        res) /= RELICORE_OK) res = nan_relicore_temperature_uncertainty()
+  end function relicore_object_temperature_band_with_uncertainty
+
+  impure elemental subroutine relicore_object_temperature_band_with_uncertainty_s(lower_m, upper_m, &
+      signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k, out, stat)
+    real(c_double), intent(in) :: lower_m, upper_m, signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k
+    type(relicore_temperature_uncertainty), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_object_temperature_band_with_uncertainty(lower_m, upper_m, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+        emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, out)
+    if (code /= RELICORE_OK) out = nan_relicore_temperature_uncertainty()
+    call report(code, 'relicore_object_temperature_band_with_uncertainty', stat)
+  end subroutine relicore_object_temperature_band_with_uncertainty_s
+
+  ! Two-load calibrated temperature with its uncertainty: T from `two_load_calibration` and
+  ! `calibrated_temperature` (the same bits), and its sensitivity to the three readings and the two
+  ! load temperatures.
+  !   frequency_hz: frequency in Hz, > 0
+  !   reading_hot: reading of the hot load, finite
+  !   temperature_hot_k: hot load temperature in K, > 0
+  !   reading_cold: reading of the cold load, finite
+  !   temperature_cold_k: cold load temperature in K, > 0
+  !   reading: reading of the scene, finite
+  !   reading_hot_uncertainty: standard uncertainty of reading_hot, >= 0
+  !   temperature_hot_uncertainty_k: standard uncertainty of the hot load temperature in K, >= 0
+  !   reading_cold_uncertainty: standard uncertainty of reading_cold, >= 0
+  !   temperature_cold_uncertainty_k: standard uncertainty of the cold load temperature in K, >= 0
+  !   reading_uncertainty: standard uncertainty of the scene reading, >= 0
+  ! Result: type(relicore_temperature_uncertainty) (type(relicore_temperature_uncertainty_f32) for
+  !   the _f32 twins): T in K with u_c and the 5 coefficients (reading_hot, T_hot, reading_cold,
+  !   T_cold, reading); every real field NaN and inputs 0 on failure.
+  ! Forms: relicore_calibrated_temperature_with_uncertainty,
+  !   relicore_calibrated_temperature_with_uncertainty_s.
+  impure elemental function relicore_calibrated_temperature_with_uncertainty(frequency_hz, &
+      reading_hot, temperature_hot_k, reading_cold, temperature_cold_k, reading, &
+      reading_hot_uncertainty, temperature_hot_uncertainty_k, reading_cold_uncertainty, &
+      temperature_cold_uncertainty_k, reading_uncertainty) result(res)
+    real(c_double), intent(in) :: frequency_hz, reading_hot, temperature_hot_k, reading_cold, &
+        temperature_cold_k, reading, reading_hot_uncertainty, temperature_hot_uncertainty_k, &
+        reading_cold_uncertainty, temperature_cold_uncertainty_k, reading_uncertainty
+    type(relicore_temperature_uncertainty) :: res
+    if (c_calibrated_temperature_with_uncertainty(frequency_hz, reading_hot, temperature_hot_k, &
+        reading_cold, temperature_cold_k, reading, reading_hot_uncertainty, &
+        temperature_hot_uncertainty_k, reading_cold_uncertainty, temperature_cold_uncertainty_k, &
+        reading_uncertainty, res) /= RELICORE_OK) res = nan_relicore_temperature_uncertainty()
+  end function relicore_calibrated_temperature_with_uncertainty
+
+  impure elemental subroutine relicore_calibrated_temperature_with_uncertainty_s(frequency_hz, &
+      reading_hot, temperature_hot_k, reading_cold, temperature_cold_k, reading, &
+      reading_hot_uncertainty, temperature_hot_uncertainty_k, reading_cold_uncertainty, &
+      temperature_cold_uncertainty_k, reading_uncertainty, out, stat)
+    real(c_double), intent(in) :: frequency_hz, reading_hot, temperature_hot_k, reading_cold, &
+        temperature_cold_k, reading, reading_hot_uncertainty, temperature_hot_uncertainty_k, &
+        reading_cold_uncertainty, temperature_cold_uncertainty_k, reading_uncertainty
+    type(relicore_temperature_uncertainty), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_calibrated_temperature_with_uncertainty(frequency_hz, reading_hot, temperature_hot_k, &
+        reading_cold, temperature_cold_k, reading, reading_hot_uncertainty, &
+        temperature_hot_uncertainty_k, reading_cold_uncertainty, temperature_cold_uncertainty_k, &
+        reading_uncertainty, out)
+    if (code /= RELICORE_OK) out = nan_relicore_temperature_uncertainty()
+    call report(code, 'relicore_calibrated_temperature_with_uncertainty', stat)
+  end subroutine relicore_calibrated_temperature_with_uncertainty_s
 
   ! Hubble distance c/H0, Mpc.
   !   universe: from relicore_universe_init
@@ -5655,4 +7316,1127 @@ contains
     if (code /= RELICORE_OK) out = nan64()
     call report(code, 'relicore_reionization_optical_depth', stat)
   end subroutine relicore_reionization_optical_depth_s
+
+  ! ================================================================ the hand-kept parts
+
+  ! ---------------------------------------------------------------- radiation thermometry
+  ! Radiation thermometry (the measurement equation, object temperatures with their uncertainty):
+  ! the forms the table cannot describe, over include/relicore.h. Emissivity and reflections
+  ! dominate real errors; the uncertainty covers only the inputs given; fever screening, furnaces,
+  ! molten metal and fire safety follow the applicable standards, local codes and licensed practice.
+
+  ! Measured response-weighted radiance of a scene (the measurement equation with the
+  ! response-weighted radiance of the table): L_meas = tau [epsilon L_r(T_obj) + (1 - epsilon)
+  ! L_r(T_refl)] + (1 - tau) L_r(T_path).
+  ! wavelengths_m(:), response_table(:): the response table (as relicore_response_weighted_radiance)
+  ! object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k:
+  !     scalars
+  ! Result: W m-2 sr-1 (times the unit of the response). Forms:
+  !   relicore_measured_response_weighted_radiance, _s, and the real(c_float) twins _f32, _f32_s.
+
+  function relicore_measured_response_weighted_radiance(wavelengths_m, response_table, &
+      object_temperature_k, emissivity, reflected_temperature_k, transmittance, &
+      path_temperature_k) result(res)
+    real(c_double), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_double), intent(in) :: object_temperature_k, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k
+    real(c_double) :: res
+    integer(c_int32_t) :: code
+    code = table_measured_response_weighted_radiance(wavelengths_m, response_table, &
+        object_temperature_k, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k, res)
+    if (code /= RELICORE_OK) res = nan64()
+  end function relicore_measured_response_weighted_radiance
+
+  subroutine relicore_measured_response_weighted_radiance_s(wavelengths_m, response_table, &
+      object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      out, stat)
+    real(c_double), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_double), intent(in) :: object_temperature_k, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = table_measured_response_weighted_radiance(wavelengths_m, response_table, &
+        object_temperature_k, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_measured_response_weighted_radiance', stat)
+  end subroutine relicore_measured_response_weighted_radiance_s
+
+  ! Calls relicore_measured_response_weighted_radiance with the table copied to buffers of at least
+  ! one element, so that a zero-size table reaches the C library as a valid buffer of length 0
+  ! (which it judges: RELICORE_ERROR_ARRAY_TOO_SHORT), never as a NULL pointer.
+  function table_measured_response_weighted_radiance(wavelengths_m, response_table, &
+      object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      out) result(code)
+    real(c_double), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_double), intent(in) :: object_temperature_k, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t) :: code
+    real(c_double) :: w(max(1, size(wavelengths_m))), r(max(1, size(response_table)))
+    w = 0
+    r = 0
+    w(1:size(wavelengths_m)) = wavelengths_m
+    r(1:size(response_table)) = response_table
+    code = c_measured_response_weighted_radiance(w, size(wavelengths_m, kind=c_size_t), r, &
+        size(response_table, kind=c_size_t), object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out)
+  end function table_measured_response_weighted_radiance
+
+  function relicore_measured_response_weighted_radiance_f32(wavelengths_m, response_table, &
+      object_temperature_k, emissivity, reflected_temperature_k, transmittance, &
+      path_temperature_k) result(res)
+    real(c_float), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_float), intent(in) :: object_temperature_k, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k
+    real(c_float) :: res
+    integer(c_int32_t) :: code
+    code = table_measured_response_weighted_radiance_f32(wavelengths_m, response_table, &
+        object_temperature_k, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k, res)
+    if (code /= RELICORE_OK) res = nan32()
+  end function relicore_measured_response_weighted_radiance_f32
+
+  subroutine relicore_measured_response_weighted_radiance_f32_s(wavelengths_m, response_table, &
+      object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      out, stat)
+    real(c_float), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_float), intent(in) :: object_temperature_k, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = table_measured_response_weighted_radiance_f32(wavelengths_m, response_table, &
+        object_temperature_k, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_measured_response_weighted_radiance_f32', stat)
+  end subroutine relicore_measured_response_weighted_radiance_f32_s
+
+  ! Calls relicore_measured_response_weighted_radiance_f32 with the table copied to buffers of at
+  ! least one element, so that a zero-size table reaches the C library as a valid buffer of length 0
+  ! (which it judges: RELICORE_ERROR_ARRAY_TOO_SHORT), never as a NULL pointer.
+  function table_measured_response_weighted_radiance_f32(wavelengths_m, response_table, &
+      object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      out) result(code)
+    real(c_float), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_float), intent(in) :: object_temperature_k, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k
+    real(c_float), intent(out) :: out
+    integer(c_int32_t) :: code
+    real(c_float) :: w(max(1, size(wavelengths_m))), r(max(1, size(response_table)))
+    w = 0
+    r = 0
+    w(1:size(wavelengths_m)) = wavelengths_m
+    r(1:size(response_table)) = response_table
+    code = c_measured_response_weighted_radiance_f32(w, size(wavelengths_m, kind=c_size_t), r, &
+        size(response_table, kind=c_size_t), object_temperature_k, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out)
+  end function table_measured_response_weighted_radiance_f32
+
+  ! Object temperature from a response-weighted signal (the inverse measurement equation, by the
+  ! shared root finder); OUT_OF_DOMAIN when the corrected object radiance is not positive.
+  ! wavelengths_m(:), response_table(:): the response table (as relicore_response_weighted_radiance)
+  ! signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k: scalars
+  ! Result: T_obj in K. Forms: relicore_object_temperature_response, _s, and the real(c_float) twins
+  !   _f32, _f32_s.
+
+  function relicore_object_temperature_response(wavelengths_m, response_table, signal, emissivity, &
+      reflected_temperature_k, transmittance, path_temperature_k) result(res)
+    real(c_double), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_double), intent(in) :: signal, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k
+    real(c_double) :: res
+    integer(c_int32_t) :: code
+    code = table_object_temperature_response(wavelengths_m, response_table, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, res)
+    if (code /= RELICORE_OK) res = nan64()
+  end function relicore_object_temperature_response
+
+  subroutine relicore_object_temperature_response_s(wavelengths_m, response_table, signal, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k, out, stat)
+    real(c_double), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_double), intent(in) :: signal, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = table_object_temperature_response(wavelengths_m, response_table, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_object_temperature_response', stat)
+  end subroutine relicore_object_temperature_response_s
+
+  ! Calls relicore_object_temperature_response with the table copied to buffers of at least one
+  ! element, so that a zero-size table reaches the C library as a valid buffer of length 0 (which it
+  ! judges: RELICORE_ERROR_ARRAY_TOO_SHORT), never as a NULL pointer.
+  function table_object_temperature_response(wavelengths_m, response_table, signal, emissivity, &
+      reflected_temperature_k, transmittance, path_temperature_k, out) result(code)
+    real(c_double), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_double), intent(in) :: signal, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t) :: code
+    real(c_double) :: w(max(1, size(wavelengths_m))), r(max(1, size(response_table)))
+    w = 0
+    r = 0
+    w(1:size(wavelengths_m)) = wavelengths_m
+    r(1:size(response_table)) = response_table
+    code = c_object_temperature_response(w, size(wavelengths_m, kind=c_size_t), r, &
+        size(response_table, kind=c_size_t), signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, out)
+  end function table_object_temperature_response
+
+  function relicore_object_temperature_response_f32(wavelengths_m, response_table, signal, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k) result(res)
+    real(c_float), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_float), intent(in) :: signal, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k
+    real(c_float) :: res
+    integer(c_int32_t) :: code
+    code = table_object_temperature_response_f32(wavelengths_m, response_table, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, res)
+    if (code /= RELICORE_OK) res = nan32()
+  end function relicore_object_temperature_response_f32
+
+  subroutine relicore_object_temperature_response_f32_s(wavelengths_m, response_table, signal, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k, out, stat)
+    real(c_float), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_float), intent(in) :: signal, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = table_object_temperature_response_f32(wavelengths_m, response_table, signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_object_temperature_response_f32', stat)
+  end subroutine relicore_object_temperature_response_f32_s
+
+  ! Calls relicore_object_temperature_response_f32 with the table copied to buffers of at least one
+  ! element, so that a zero-size table reaches the C library as a valid buffer of length 0 (which it
+  ! judges: RELICORE_ERROR_ARRAY_TOO_SHORT), never as a NULL pointer.
+  function table_object_temperature_response_f32(wavelengths_m, response_table, signal, emissivity, &
+      reflected_temperature_k, transmittance, path_temperature_k, out) result(code)
+    real(c_float), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_float), intent(in) :: signal, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k
+    real(c_float), intent(out) :: out
+    integer(c_int32_t) :: code
+    real(c_float) :: w(max(1, size(wavelengths_m))), r(max(1, size(response_table)))
+    w = 0
+    r = 0
+    w(1:size(wavelengths_m)) = wavelengths_m
+    r(1:size(response_table)) = response_table
+    code = c_object_temperature_response_f32(w, size(wavelengths_m, kind=c_size_t), r, &
+        size(response_table, kind=c_size_t), signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, out)
+  end function table_object_temperature_response_f32
+
+  ! object_temperature_response with its sensitivity coefficients (signal, emissivity, reflected
+  ! temperature, transmittance, path temperature) and combined standard uncertainty (JCGM 100:2008
+  ! eq. 10).
+  ! wavelengths_m(:), response_table(:): the response table (as relicore_response_weighted_radiance)
+  ! signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k,
+  !     signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k,
+  !     transmittance_uncertainty, path_temperature_uncertainty_k: scalars
+  ! Result: type(relicore_temperature_uncertainty) (_f32 twin), every real field NaN and inputs 0 on
+  !   failure. Forms: relicore_object_temperature_response_with_uncertainty, _s, and the
+  !   real(c_float) twins _f32, _f32_s.
+
+  function relicore_object_temperature_response_with_uncertainty(wavelengths_m, response_table, &
+      signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k) result(res)
+    real(c_double), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_double), intent(in) :: signal, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k
+    type(relicore_temperature_uncertainty) :: res
+    integer(c_int32_t) :: code
+    code = table_object_temperature_response_with_uncertainty(wavelengths_m, response_table, &
+        signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+        signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+        transmittance_uncertainty, path_temperature_uncertainty_k, res)
+    if (code /= RELICORE_OK) res = nan_relicore_temperature_uncertainty()
+  end function relicore_object_temperature_response_with_uncertainty
+
+  subroutine relicore_object_temperature_response_with_uncertainty_s(wavelengths_m, response_table, &
+      signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k, out, stat)
+    real(c_double), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_double), intent(in) :: signal, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k
+    type(relicore_temperature_uncertainty), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = table_object_temperature_response_with_uncertainty(wavelengths_m, response_table, &
+        signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+        signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+        transmittance_uncertainty, path_temperature_uncertainty_k, out)
+    if (code /= RELICORE_OK) out = nan_relicore_temperature_uncertainty()
+    call report(code, 'relicore_object_temperature_response_with_uncertainty', stat)
+  end subroutine relicore_object_temperature_response_with_uncertainty_s
+
+  ! Calls relicore_object_temperature_response_with_uncertainty with the table copied to buffers of
+  ! at least one element, so that a zero-size table reaches the C library as a valid buffer of
+  ! length 0 (which it judges: RELICORE_ERROR_ARRAY_TOO_SHORT), never as a NULL pointer.
+  function table_object_temperature_response_with_uncertainty(wavelengths_m, response_table, &
+      signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k, out) result(code)
+    real(c_double), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_double), intent(in) :: signal, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k
+    type(relicore_temperature_uncertainty), intent(out) :: out
+    integer(c_int32_t) :: code
+    real(c_double) :: w(max(1, size(wavelengths_m))), r(max(1, size(response_table)))
+    w = 0
+    r = 0
+    w(1:size(wavelengths_m)) = wavelengths_m
+    r(1:size(response_table)) = response_table
+    code = c_object_temperature_response_with_uncertainty(w, size(wavelengths_m, kind=c_size_t), r, &
+        size(response_table, kind=c_size_t), signal, emissivity, reflected_temperature_k, &
+        transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, out)
+  end function table_object_temperature_response_with_uncertainty
+
+  function relicore_object_temperature_response_with_uncertainty_f32(wavelengths_m, response_table, &
+      signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k) result(res)
+    real(c_float), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_float), intent(in) :: signal, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k
+    type(relicore_temperature_uncertainty_f32) :: res
+    integer(c_int32_t) :: code
+    code = table_object_temperature_response_with_uncertainty_f32(wavelengths_m, response_table, &
+        signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+        signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+        transmittance_uncertainty, path_temperature_uncertainty_k, res)
+    if (code /= RELICORE_OK) res = nan_relicore_temperature_uncertainty_f32()
+  end function relicore_object_temperature_response_with_uncertainty_f32
+
+  subroutine relicore_object_temperature_response_with_uncertainty_f32_s(wavelengths_m, &
+      response_table, signal, emissivity, reflected_temperature_k, transmittance, &
+      path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+      reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+      path_temperature_uncertainty_k, out, stat)
+    real(c_float), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_float), intent(in) :: signal, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k
+    type(relicore_temperature_uncertainty_f32), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = table_object_temperature_response_with_uncertainty_f32(wavelengths_m, response_table, &
+        signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+        signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+        transmittance_uncertainty, path_temperature_uncertainty_k, out)
+    if (code /= RELICORE_OK) out = nan_relicore_temperature_uncertainty_f32()
+    call report(code, 'relicore_object_temperature_response_with_uncertainty_f32', stat)
+  end subroutine relicore_object_temperature_response_with_uncertainty_f32_s
+
+  ! Calls relicore_object_temperature_response_with_uncertainty_f32 with the table copied to buffers
+  ! of at least one element, so that a zero-size table reaches the C library as a valid buffer of
+  ! length 0 (which it judges: RELICORE_ERROR_ARRAY_TOO_SHORT), never as a NULL pointer.
+  function table_object_temperature_response_with_uncertainty_f32(wavelengths_m, response_table, &
+      signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k, out) result(code)
+    real(c_float), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_float), intent(in) :: signal, emissivity, reflected_temperature_k, transmittance, &
+        path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k
+    type(relicore_temperature_uncertainty_f32), intent(out) :: out
+    integer(c_int32_t) :: code
+    real(c_float) :: w(max(1, size(wavelengths_m))), r(max(1, size(response_table)))
+    w = 0
+    r = 0
+    w(1:size(wavelengths_m)) = wavelengths_m
+    r(1:size(response_table)) = response_table
+    code = c_object_temperature_response_with_uncertainty_f32(w, size(wavelengths_m, &
+        kind=c_size_t), r, size(response_table, kind=c_size_t), signal, emissivity, &
+        reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+        emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+        path_temperature_uncertainty_k, out)
+  end function table_object_temperature_response_with_uncertainty_f32
+
+  ! Temperature derivative of the response-weighted radiance of the table (the shared quadrature).
+  ! wavelengths_m(:), response_table(:): the response table (as relicore_response_weighted_radiance)
+  ! temperature_k: scalars
+  ! Result: W m-2 sr-1 K-1 (times the unit of the response). Forms:
+  !   relicore_response_weighted_radiance_temperature_derivative, _s, and the real(c_float) twins
+  !   _f32, _f32_s.
+
+  function relicore_response_weighted_radiance_temperature_derivative(wavelengths_m, &
+      response_table, temperature_k) result(res)
+    real(c_double), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double) :: res
+    integer(c_int32_t) :: code
+    code = table_response_weighted_radiance_temperature_derivative(wavelengths_m, response_table, &
+        temperature_k, res)
+    if (code /= RELICORE_OK) res = nan64()
+  end function relicore_response_weighted_radiance_temperature_derivative
+
+  subroutine relicore_response_weighted_radiance_temperature_derivative_s(wavelengths_m, &
+      response_table, temperature_k, out, stat)
+    real(c_double), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = table_response_weighted_radiance_temperature_derivative(wavelengths_m, response_table, &
+        temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_response_weighted_radiance_temperature_derivative', stat)
+  end subroutine relicore_response_weighted_radiance_temperature_derivative_s
+
+  ! Calls relicore_response_weighted_radiance_temperature_derivative with the table copied to
+  ! buffers of at least one element, so that a zero-size table reaches the C library as a valid
+  ! buffer of length 0 (which it judges: RELICORE_ERROR_ARRAY_TOO_SHORT), never as a NULL pointer.
+  function table_response_weighted_radiance_temperature_derivative(wavelengths_m, response_table, &
+      temperature_k, out) result(code)
+    real(c_double), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_double), intent(in) :: temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t) :: code
+    real(c_double) :: w(max(1, size(wavelengths_m))), r(max(1, size(response_table)))
+    w = 0
+    r = 0
+    w(1:size(wavelengths_m)) = wavelengths_m
+    r(1:size(response_table)) = response_table
+    code = c_response_weighted_radiance_temperature_derivative(w, size(wavelengths_m, &
+        kind=c_size_t), r, size(response_table, kind=c_size_t), temperature_k, out)
+  end function table_response_weighted_radiance_temperature_derivative
+
+  function relicore_response_weighted_radiance_temperature_derivative_f32(wavelengths_m, &
+      response_table, temperature_k) result(res)
+    real(c_float), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_float), intent(in) :: temperature_k
+    real(c_float) :: res
+    integer(c_int32_t) :: code
+    code = table_response_weighted_radiance_temperature_derivative_f32(wavelengths_m, &
+        response_table, temperature_k, res)
+    if (code /= RELICORE_OK) res = nan32()
+  end function relicore_response_weighted_radiance_temperature_derivative_f32
+
+  subroutine thermometry_f32_2(wavelengths_m, &
+      response_table, temperature_k, out, stat)
+    real(c_float), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_float), intent(in) :: temperature_k
+    real(c_float), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = table_response_weighted_radiance_temperature_derivative_f32(wavelengths_m, &
+        response_table, temperature_k, out)
+    if (code /= RELICORE_OK) out = nan32()
+    call report(code, 'relicore_response_weighted_radiance_temperature_derivative_f32', stat)
+  end subroutine thermometry_f32_2
+
+  ! Calls relicore_response_weighted_radiance_temperature_derivative_f32 with the table copied to
+  ! buffers of at least one element, so that a zero-size table reaches the C library as a valid
+  ! buffer of length 0 (which it judges: RELICORE_ERROR_ARRAY_TOO_SHORT), never as a NULL pointer.
+  function table_response_weighted_radiance_temperature_derivative_f32(wavelengths_m, &
+      response_table, temperature_k, out) result(code)
+    real(c_float), intent(in) :: wavelengths_m(:), response_table(:)
+    real(c_float), intent(in) :: temperature_k
+    real(c_float), intent(out) :: out
+    integer(c_int32_t) :: code
+    real(c_float) :: w(max(1, size(wavelengths_m))), r(max(1, size(response_table)))
+    w = 0
+    r = 0
+    w(1:size(wavelengths_m)) = wavelengths_m
+    r(1:size(response_table)) = response_table
+    code = c_response_weighted_radiance_temperature_derivative_f32(w, size(wavelengths_m, &
+        kind=c_size_t), r, size(response_table, kind=c_size_t), temperature_k, out)
+  end function table_response_weighted_radiance_temperature_derivative_f32
+
+  ! Combined standard uncertainty of uncorrelated inputs, u_c = (sum c_i^2 u_i^2)^(1/2) (JCGM
+  ! 100:2008 eq. 10), and of correlated inputs with the n x n correlation matrix r (eq. 13):
+  ! sensitivity_coefficients(n) in K per unit of input i (finite), standard_uncertainties(n)
+  ! (finite, >= 0), correlation(n, n) (finite, |r| <= 1, unit diagonal, symmetric; being symmetric,
+  ! its column order equals the C row order). Result: u_c in K, NaN on failure. Forms: function and
+  ! _s.
+
+  function relicore_combined_standard_uncertainty(sensitivity_coefficients, &
+      standard_uncertainties) result(res)
+    real(c_double), intent(in) :: sensitivity_coefficients(:), standard_uncertainties(:)
+    real(c_double) :: res
+    if (call_combined_standard_uncertainty(sensitivity_coefficients, standard_uncertainties, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_combined_standard_uncertainty
+
+  subroutine relicore_combined_standard_uncertainty_s(sensitivity_coefficients, &
+      standard_uncertainties, out, stat)
+    real(c_double), intent(in) :: sensitivity_coefficients(:), standard_uncertainties(:)
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = call_combined_standard_uncertainty(sensitivity_coefficients, standard_uncertainties, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_combined_standard_uncertainty', stat)
+  end subroutine relicore_combined_standard_uncertainty_s
+
+  ! Calls relicore_combined_standard_uncertainty with copies in buffers of at least one element
+  ! (zero sizes reach the C library as valid buffers of length 0).
+  function call_combined_standard_uncertainty(sensitivity_coefficients, standard_uncertainties, &
+      out) result(code)
+    real(c_double), intent(in) :: sensitivity_coefficients(:), standard_uncertainties(:)
+    real(c_double), intent(out) :: out
+    integer(c_int32_t) :: code
+    real(c_double) :: c(max(1, size(sensitivity_coefficients)))
+    real(c_double) :: u(max(1, size(standard_uncertainties)))
+    c = 0
+    u = 0
+    c(1:size(sensitivity_coefficients)) = sensitivity_coefficients
+    u(1:size(standard_uncertainties)) = standard_uncertainties
+    code = c_combined_standard_uncertainty(c, size(sensitivity_coefficients, kind=c_size_t), u, &
+        size(standard_uncertainties, kind=c_size_t), out)
+  end function call_combined_standard_uncertainty
+
+  function relicore_combined_standard_uncertainty_correlated(sensitivity_coefficients, &
+      standard_uncertainties, correlation) result(res)
+    real(c_double), intent(in) :: sensitivity_coefficients(:), standard_uncertainties(:)
+    real(c_double), intent(in) :: correlation(:, :)
+    real(c_double) :: res
+    if (call_combined_standard_uncertainty_correlated(sensitivity_coefficients, &
+        standard_uncertainties, correlation, res) /= RELICORE_OK) res = nan64()
+  end function relicore_combined_standard_uncertainty_correlated
+
+  subroutine relicore_combined_standard_uncertainty_correlated_s(sensitivity_coefficients, &
+      standard_uncertainties, correlation, out, stat)
+    real(c_double), intent(in) :: sensitivity_coefficients(:), standard_uncertainties(:)
+    real(c_double), intent(in) :: correlation(:, :)
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = call_combined_standard_uncertainty_correlated(sensitivity_coefficients, &
+        standard_uncertainties, correlation, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_combined_standard_uncertainty_correlated', stat)
+  end subroutine relicore_combined_standard_uncertainty_correlated_s
+
+  ! Calls relicore_combined_standard_uncertainty_correlated with copies in buffers of at least one
+  ! element (zero sizes reach the C library as valid buffers of length 0).
+  function call_combined_standard_uncertainty_correlated(sensitivity_coefficients, &
+      standard_uncertainties, correlation, out) result(code)
+    real(c_double), intent(in) :: sensitivity_coefficients(:), standard_uncertainties(:)
+    real(c_double), intent(in) :: correlation(:, :)
+    real(c_double), intent(out) :: out
+    integer(c_int32_t) :: code
+    real(c_double) :: c(max(1, size(sensitivity_coefficients)))
+    real(c_double) :: u(max(1, size(standard_uncertainties)))
+    real(c_double) :: r(max(1, size(correlation)))
+    c = 0
+    u = 0
+    c(1:size(sensitivity_coefficients)) = sensitivity_coefficients
+    u(1:size(standard_uncertainties)) = standard_uncertainties
+    r = 0
+    r(1:size(correlation)) = reshape(correlation, [size(correlation)])
+    code = c_combined_standard_uncertainty_correlated(c, size(sensitivity_coefficients, &
+        kind=c_size_t), u, size(standard_uncertainties, kind=c_size_t), r, size(correlation, &
+        kind=c_size_t), out)
+  end function call_combined_standard_uncertainty_correlated
+
+  ! Object temperature over a frame (an image) of signals: signals(n) and the scene parameters
+  ! emissivity, reflected_temperature_k, transmittance, path_temperature_k (and, for the
+  ! _with_uncertainty forms, the five standard uncertainties), each of size n (per pixel) or 1
+  ! (shared). One C call for the whole frame; every pixel bit for bit the scalar function's. out
+  ! (out_temperature, out_uncertainty) of size n; failing pixels NaN and stat = the first failing
+  ! pixel's code; RELICORE_ERROR_LENGTH_MISMATCH (every output NaN) when a parameter has neither n
+  ! nor 1 elements or an output is not of size n. Pass an image as a rank-1 view (reshape, or
+  ! pointer remapping of a contiguous 2-D array).
+
+  subroutine relicore_object_temperature_wavelength_array(wavelength_m, signals, emissivity, &
+      reflected_temperature_k, transmittance, path_temperature_k, out, stat)
+    real(c_double), intent(in) :: wavelength_m
+    real(c_double), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(4)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_wavelength_array(wavelength_m, signals, size(signals, &
+          kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), reflected_temperature_k, &
+          size(reflected_temperature_k, kind=c_size_t), transmittance, size(transmittance, &
+          kind=c_size_t), path_temperature_k, size(path_temperature_k, kind=c_size_t), out)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out = nan64()
+    end if
+    call report(code, 'relicore_object_temperature_wavelength_array', stat)
+  end subroutine relicore_object_temperature_wavelength_array
+
+  subroutine relicore_object_temperature_wavelength_array_f32(wavelength_m, signals, emissivity, &
+      reflected_temperature_k, transmittance, path_temperature_k, out, stat)
+    real(c_float), intent(in) :: wavelength_m
+    real(c_float), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:)
+    real(c_float), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(4)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_wavelength_array_f32(wavelength_m, signals, size(signals, &
+          kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), reflected_temperature_k, &
+          size(reflected_temperature_k, kind=c_size_t), transmittance, size(transmittance, &
+          kind=c_size_t), path_temperature_k, size(path_temperature_k, kind=c_size_t), out)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out = nan32()
+    end if
+    call report(code, 'relicore_object_temperature_wavelength_array_f32', stat)
+  end subroutine relicore_object_temperature_wavelength_array_f32
+
+  subroutine relicore_object_temperature_wavelength_with_uncertainty_array(wavelength_m, signals, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+      emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+      path_temperature_uncertainty_k, out_temperature, out_uncertainty, stat)
+    real(c_double), intent(in) :: wavelength_m
+    real(c_double), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:), signal_uncertainty(:), emissivity_uncertainty(:), &
+        reflected_temperature_uncertainty_k(:), transmittance_uncertainty(:), &
+        path_temperature_uncertainty_k(:)
+    real(c_double), intent(out) :: out_temperature(:), out_uncertainty(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out_temperature) == n .and. size(out_uncertainty) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(9)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k), size(signal_uncertainty), size(emissivity_uncertainty), &
+            size(reflected_temperature_uncertainty_k), size(transmittance_uncertainty), &
+            size(path_temperature_uncertainty_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0 .or. &
+        size(signal_uncertainty) == 0 .or. &
+        size(emissivity_uncertainty) == 0 .or. &
+        size(reflected_temperature_uncertainty_k) == 0 .or. &
+        size(transmittance_uncertainty) == 0 .or. &
+        size(path_temperature_uncertainty_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_wavelength_with_uncertainty_array(wavelength_m, signals, &
+          size(signals, kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), &
+          reflected_temperature_k, size(reflected_temperature_k, kind=c_size_t), transmittance, &
+          size(transmittance, kind=c_size_t), path_temperature_k, size(path_temperature_k, &
+          kind=c_size_t), signal_uncertainty, size(signal_uncertainty, kind=c_size_t), &
+          emissivity_uncertainty, size(emissivity_uncertainty, kind=c_size_t), &
+          reflected_temperature_uncertainty_k, size(reflected_temperature_uncertainty_k, &
+          kind=c_size_t), transmittance_uncertainty, size(transmittance_uncertainty, &
+          kind=c_size_t), path_temperature_uncertainty_k, size(path_temperature_uncertainty_k, &
+          kind=c_size_t), out_temperature, out_uncertainty)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out_temperature = nan64()
+      out_uncertainty = nan64()
+    end if
+    call report(code, 'relicore_object_temperature_wavelength_with_uncertainty_array', stat)
+  end subroutine relicore_object_temperature_wavelength_with_uncertainty_array
+
+  subroutine thermometry_f32_3(wavelength_m, &
+      signals, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k, out_temperature, out_uncertainty, &
+      stat)
+    real(c_float), intent(in) :: wavelength_m
+    real(c_float), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:), signal_uncertainty(:), emissivity_uncertainty(:), &
+        reflected_temperature_uncertainty_k(:), transmittance_uncertainty(:), &
+        path_temperature_uncertainty_k(:)
+    real(c_float), intent(out) :: out_temperature(:), out_uncertainty(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out_temperature) == n .and. size(out_uncertainty) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(9)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k), size(signal_uncertainty), size(emissivity_uncertainty), &
+            size(reflected_temperature_uncertainty_k), size(transmittance_uncertainty), &
+            size(path_temperature_uncertainty_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0 .or. &
+        size(signal_uncertainty) == 0 .or. &
+        size(emissivity_uncertainty) == 0 .or. &
+        size(reflected_temperature_uncertainty_k) == 0 .or. &
+        size(transmittance_uncertainty) == 0 .or. &
+        size(path_temperature_uncertainty_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_wavelength_with_uncertainty_array_f32(wavelength_m, signals, &
+          size(signals, kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), &
+          reflected_temperature_k, size(reflected_temperature_k, kind=c_size_t), transmittance, &
+          size(transmittance, kind=c_size_t), path_temperature_k, size(path_temperature_k, &
+          kind=c_size_t), signal_uncertainty, size(signal_uncertainty, kind=c_size_t), &
+          emissivity_uncertainty, size(emissivity_uncertainty, kind=c_size_t), &
+          reflected_temperature_uncertainty_k, size(reflected_temperature_uncertainty_k, &
+          kind=c_size_t), transmittance_uncertainty, size(transmittance_uncertainty, &
+          kind=c_size_t), path_temperature_uncertainty_k, size(path_temperature_uncertainty_k, &
+          kind=c_size_t), out_temperature, out_uncertainty)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out_temperature = nan32()
+      out_uncertainty = nan32()
+    end if
+    call report(code, 'relicore_object_temperature_wavelength_with_uncertainty_array_f32', stat)
+  end subroutine thermometry_f32_3
+
+  subroutine relicore_object_temperature_frequency_array(frequency_hz, signals, emissivity, &
+      reflected_temperature_k, transmittance, path_temperature_k, out, stat)
+    real(c_double), intent(in) :: frequency_hz
+    real(c_double), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(4)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_frequency_array(frequency_hz, signals, size(signals, &
+          kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), reflected_temperature_k, &
+          size(reflected_temperature_k, kind=c_size_t), transmittance, size(transmittance, &
+          kind=c_size_t), path_temperature_k, size(path_temperature_k, kind=c_size_t), out)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out = nan64()
+    end if
+    call report(code, 'relicore_object_temperature_frequency_array', stat)
+  end subroutine relicore_object_temperature_frequency_array
+
+  subroutine relicore_object_temperature_frequency_array_f32(frequency_hz, signals, emissivity, &
+      reflected_temperature_k, transmittance, path_temperature_k, out, stat)
+    real(c_float), intent(in) :: frequency_hz
+    real(c_float), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:)
+    real(c_float), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(4)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_frequency_array_f32(frequency_hz, signals, size(signals, &
+          kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), reflected_temperature_k, &
+          size(reflected_temperature_k, kind=c_size_t), transmittance, size(transmittance, &
+          kind=c_size_t), path_temperature_k, size(path_temperature_k, kind=c_size_t), out)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out = nan32()
+    end if
+    call report(code, 'relicore_object_temperature_frequency_array_f32', stat)
+  end subroutine relicore_object_temperature_frequency_array_f32
+
+  subroutine relicore_object_temperature_frequency_with_uncertainty_array(frequency_hz, signals, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+      emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+      path_temperature_uncertainty_k, out_temperature, out_uncertainty, stat)
+    real(c_double), intent(in) :: frequency_hz
+    real(c_double), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:), signal_uncertainty(:), emissivity_uncertainty(:), &
+        reflected_temperature_uncertainty_k(:), transmittance_uncertainty(:), &
+        path_temperature_uncertainty_k(:)
+    real(c_double), intent(out) :: out_temperature(:), out_uncertainty(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out_temperature) == n .and. size(out_uncertainty) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(9)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k), size(signal_uncertainty), size(emissivity_uncertainty), &
+            size(reflected_temperature_uncertainty_k), size(transmittance_uncertainty), &
+            size(path_temperature_uncertainty_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0 .or. &
+        size(signal_uncertainty) == 0 .or. &
+        size(emissivity_uncertainty) == 0 .or. &
+        size(reflected_temperature_uncertainty_k) == 0 .or. &
+        size(transmittance_uncertainty) == 0 .or. &
+        size(path_temperature_uncertainty_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_frequency_with_uncertainty_array(frequency_hz, signals, &
+          size(signals, kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), &
+          reflected_temperature_k, size(reflected_temperature_k, kind=c_size_t), transmittance, &
+          size(transmittance, kind=c_size_t), path_temperature_k, size(path_temperature_k, &
+          kind=c_size_t), signal_uncertainty, size(signal_uncertainty, kind=c_size_t), &
+          emissivity_uncertainty, size(emissivity_uncertainty, kind=c_size_t), &
+          reflected_temperature_uncertainty_k, size(reflected_temperature_uncertainty_k, &
+          kind=c_size_t), transmittance_uncertainty, size(transmittance_uncertainty, &
+          kind=c_size_t), path_temperature_uncertainty_k, size(path_temperature_uncertainty_k, &
+          kind=c_size_t), out_temperature, out_uncertainty)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out_temperature = nan64()
+      out_uncertainty = nan64()
+    end if
+    call report(code, 'relicore_object_temperature_frequency_with_uncertainty_array', stat)
+  end subroutine relicore_object_temperature_frequency_with_uncertainty_array
+
+  subroutine thermometry_f32_1(frequency_hz, &
+      signals, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
+      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
+      transmittance_uncertainty, path_temperature_uncertainty_k, out_temperature, out_uncertainty, &
+      stat)
+    real(c_float), intent(in) :: frequency_hz
+    real(c_float), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:), signal_uncertainty(:), emissivity_uncertainty(:), &
+        reflected_temperature_uncertainty_k(:), transmittance_uncertainty(:), &
+        path_temperature_uncertainty_k(:)
+    real(c_float), intent(out) :: out_temperature(:), out_uncertainty(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out_temperature) == n .and. size(out_uncertainty) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(9)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k), size(signal_uncertainty), size(emissivity_uncertainty), &
+            size(reflected_temperature_uncertainty_k), size(transmittance_uncertainty), &
+            size(path_temperature_uncertainty_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0 .or. &
+        size(signal_uncertainty) == 0 .or. &
+        size(emissivity_uncertainty) == 0 .or. &
+        size(reflected_temperature_uncertainty_k) == 0 .or. &
+        size(transmittance_uncertainty) == 0 .or. &
+        size(path_temperature_uncertainty_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_frequency_with_uncertainty_array_f32(frequency_hz, signals, &
+          size(signals, kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), &
+          reflected_temperature_k, size(reflected_temperature_k, kind=c_size_t), transmittance, &
+          size(transmittance, kind=c_size_t), path_temperature_k, size(path_temperature_k, &
+          kind=c_size_t), signal_uncertainty, size(signal_uncertainty, kind=c_size_t), &
+          emissivity_uncertainty, size(emissivity_uncertainty, kind=c_size_t), &
+          reflected_temperature_uncertainty_k, size(reflected_temperature_uncertainty_k, &
+          kind=c_size_t), transmittance_uncertainty, size(transmittance_uncertainty, &
+          kind=c_size_t), path_temperature_uncertainty_k, size(path_temperature_uncertainty_k, &
+          kind=c_size_t), out_temperature, out_uncertainty)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out_temperature = nan32()
+      out_uncertainty = nan32()
+    end if
+    call report(code, 'relicore_object_temperature_frequency_with_uncertainty_array_f32', stat)
+  end subroutine thermometry_f32_1
+
+  subroutine relicore_object_temperature_band_array(lower_m, upper_m, signals, emissivity, &
+      reflected_temperature_k, transmittance, path_temperature_k, out, stat)
+    real(c_double), intent(in) :: lower_m, upper_m
+    real(c_double), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(4)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_band_array(lower_m, upper_m, signals, size(signals, &
+          kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), reflected_temperature_k, &
+          size(reflected_temperature_k, kind=c_size_t), transmittance, size(transmittance, &
+          kind=c_size_t), path_temperature_k, size(path_temperature_k, kind=c_size_t), out)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out = nan64()
+    end if
+    call report(code, 'relicore_object_temperature_band_array', stat)
+  end subroutine relicore_object_temperature_band_array
+
+  subroutine relicore_object_temperature_band_array_f32(lower_m, upper_m, signals, emissivity, &
+      reflected_temperature_k, transmittance, path_temperature_k, out, stat)
+    real(c_float), intent(in) :: lower_m, upper_m
+    real(c_float), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:)
+    real(c_float), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(4)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_band_array_f32(lower_m, upper_m, signals, size(signals, &
+          kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), reflected_temperature_k, &
+          size(reflected_temperature_k, kind=c_size_t), transmittance, size(transmittance, &
+          kind=c_size_t), path_temperature_k, size(path_temperature_k, kind=c_size_t), out)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out = nan32()
+    end if
+    call report(code, 'relicore_object_temperature_band_array_f32', stat)
+  end subroutine relicore_object_temperature_band_array_f32
+
+  subroutine relicore_object_temperature_band_with_uncertainty_array(lower_m, upper_m, signals, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+      emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+      path_temperature_uncertainty_k, out_temperature, out_uncertainty, stat)
+    real(c_double), intent(in) :: lower_m, upper_m
+    real(c_double), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:), signal_uncertainty(:), emissivity_uncertainty(:), &
+        reflected_temperature_uncertainty_k(:), transmittance_uncertainty(:), &
+        path_temperature_uncertainty_k(:)
+    real(c_double), intent(out) :: out_temperature(:), out_uncertainty(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out_temperature) == n .and. size(out_uncertainty) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(9)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k), size(signal_uncertainty), size(emissivity_uncertainty), &
+            size(reflected_temperature_uncertainty_k), size(transmittance_uncertainty), &
+            size(path_temperature_uncertainty_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0 .or. &
+        size(signal_uncertainty) == 0 .or. &
+        size(emissivity_uncertainty) == 0 .or. &
+        size(reflected_temperature_uncertainty_k) == 0 .or. &
+        size(transmittance_uncertainty) == 0 .or. &
+        size(path_temperature_uncertainty_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_band_with_uncertainty_array(lower_m, upper_m, signals, &
+          size(signals, kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), &
+          reflected_temperature_k, size(reflected_temperature_k, kind=c_size_t), transmittance, &
+          size(transmittance, kind=c_size_t), path_temperature_k, size(path_temperature_k, &
+          kind=c_size_t), signal_uncertainty, size(signal_uncertainty, kind=c_size_t), &
+          emissivity_uncertainty, size(emissivity_uncertainty, kind=c_size_t), &
+          reflected_temperature_uncertainty_k, size(reflected_temperature_uncertainty_k, &
+          kind=c_size_t), transmittance_uncertainty, size(transmittance_uncertainty, &
+          kind=c_size_t), path_temperature_uncertainty_k, size(path_temperature_uncertainty_k, &
+          kind=c_size_t), out_temperature, out_uncertainty)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out_temperature = nan64()
+      out_uncertainty = nan64()
+    end if
+    call report(code, 'relicore_object_temperature_band_with_uncertainty_array', stat)
+  end subroutine relicore_object_temperature_band_with_uncertainty_array
+
+  subroutine relicore_object_temperature_band_with_uncertainty_array_f32(lower_m, upper_m, signals, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+      emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+      path_temperature_uncertainty_k, out_temperature, out_uncertainty, stat)
+    real(c_float), intent(in) :: lower_m, upper_m
+    real(c_float), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:), signal_uncertainty(:), emissivity_uncertainty(:), &
+        reflected_temperature_uncertainty_k(:), transmittance_uncertainty(:), &
+        path_temperature_uncertainty_k(:)
+    real(c_float), intent(out) :: out_temperature(:), out_uncertainty(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out_temperature) == n .and. size(out_uncertainty) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(9)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k), size(signal_uncertainty), size(emissivity_uncertainty), &
+            size(reflected_temperature_uncertainty_k), size(transmittance_uncertainty), &
+            size(path_temperature_uncertainty_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0 .or. &
+        size(signal_uncertainty) == 0 .or. &
+        size(emissivity_uncertainty) == 0 .or. &
+        size(reflected_temperature_uncertainty_k) == 0 .or. &
+        size(transmittance_uncertainty) == 0 .or. &
+        size(path_temperature_uncertainty_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_band_with_uncertainty_array_f32(lower_m, upper_m, signals, &
+          size(signals, kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), &
+          reflected_temperature_k, size(reflected_temperature_k, kind=c_size_t), transmittance, &
+          size(transmittance, kind=c_size_t), path_temperature_k, size(path_temperature_k, &
+          kind=c_size_t), signal_uncertainty, size(signal_uncertainty, kind=c_size_t), &
+          emissivity_uncertainty, size(emissivity_uncertainty, kind=c_size_t), &
+          reflected_temperature_uncertainty_k, size(reflected_temperature_uncertainty_k, &
+          kind=c_size_t), transmittance_uncertainty, size(transmittance_uncertainty, &
+          kind=c_size_t), path_temperature_uncertainty_k, size(path_temperature_uncertainty_k, &
+          kind=c_size_t), out_temperature, out_uncertainty)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out_temperature = nan32()
+      out_uncertainty = nan32()
+    end if
+    call report(code, 'relicore_object_temperature_band_with_uncertainty_array_f32', stat)
+  end subroutine relicore_object_temperature_band_with_uncertainty_array_f32
 end module relicore

@@ -151,6 +151,8 @@ module relicore
       relicore_universe_get_parameters_s, relicore_thermal_history_options_default, &
       relicore_thermal_history_compute
 !@ public
+  ! The hand-kept parts (bindings/fortran/parts/*.f90).
+!@ parts public
   ! ---------------------------------------------------------------- types
   ! struct relicore_two_load_calibration { double frequency_hz; double gain; double offset; };
   ! The gain and offset of a two-load calibration at one frequency: reading = gain * J +
@@ -230,6 +232,9 @@ module relicore
     integer(c_int64_t) :: tag = 0_c_int64_t                                 ! private
     integer(c_int64_t) :: storage(RELICORE_THERMAL_HISTORY_STORAGE_WORDS)   ! private
   end type relicore_thermal_history
+
+  ! The result types of the table (generated).
+!@ result_types
 
   ! The calibration from two loads, under the name of its type (see the conventions above).
   interface relicore_two_load_calibration
@@ -446,6 +451,9 @@ module relicore
 
     ! The table's functions (generated):
 !@ interfaces
+
+    ! The hand-kept parts (bindings/fortran/parts/*.f90):
+!@ parts interfaces
   end interface
 
 contains
@@ -1068,4 +1076,7 @@ contains
 
   ! ================================================================ the table's functions
 !@ procedures
+
+  ! ================================================================ the hand-kept parts
+!@ parts procedures
 end module relicore

@@ -65,8 +65,29 @@ def _safety_receiver(fn: Function) -> str:
     return f" `{fn.receiver}` is NULL or points to a readable `struct {fn.recv.c_struct}`."
 
 
+def result_struct(fn: Function, ty: str) -> str | None:
+    """The C struct a function with a result type writes (`_f32` twin for `float`), else None."""
+    rt = fn.result_type
+    if not rt:
+        return None
+    return rt.c_struct + ("" if ty == "f64" else "_f32")
+
+
+def _result_lines(fn: Function, ty: str) -> list[str]:
+    rt = fn.result_type
+    if not rt:
+        return [f"* `out`: where the result is written: {fn.result}."]
+    fields = ", ".join(f"`{f.name}`" + (f"[{f.length}]" if f.length > 1 else "") for f in rt.fields)
+    return [
+        f"* `out`: where the result is written, a `struct {result_struct(fn, ty)}` ({fields}): "
+        f"{fn.result}. On failure every real field is NaN and the count `inputs` is 0."
+    ]
+
+
 def scalar_export(fn: Function, ty: str) -> str:
     c_ty = "double" if ty == "f64" else "float"
+    if fn.result_type:
+        c_ty = f"struct {result_struct(fn, ty)}"
     name = fn.c_name + ("" if ty == "f64" else "_f32")
     doc = rustdoc.find(fn)[1]
     lines: list[str] = []
@@ -78,7 +99,7 @@ def scalar_export(fn: Function, ty: str) -> str:
     lines += doc + [""]
     lines += ["Arguments of the C function:"] + _receiver_lines(fn)
     lines += [f"* `{a.name}`: {a.meaning}." for a in fn.args]
-    lines += [f"* `out`: where the result is written: {fn.result}.", ""]
+    lines += _result_lines(fn, ty) + [""]
     lines += [
         "Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the "
         "core's errors named above as status codes (`relicore_status_message` gives the text); "
@@ -92,10 +113,12 @@ def scalar_export(fn: Function, ty: str) -> str:
     if fn.recv:
         params.append(f"{fn.receiver}: *const {fn.recv.c_struct}")
     params += [f"{a.name}: {ty}" for a in fn.args]
-    params.append(f"out: *mut {ty}")
+    params.append(f"out: *mut {result_struct(fn, ty) or ty}")
     call = _core_call(fn, fn.arg_names)
     r = fn.receiver
-    if not fn.recv:
+    if fn.result_type:
+        body = f"scalar(out, || {call}.map({result_struct(fn, ty)}::from))"
+    elif not fn.recv:
         body = f"scalar(out, || {call})"
     elif fn.infallible and fn.recv.summary:
         body = f"stored_summary({r}, out, |r| {call})"
@@ -105,6 +128,7 @@ def scalar_export(fn: Function, ty: str) -> str:
         body = f"stored_scalar({r}, out, |r| {call})"
     return "\n".join(
         _doc(lines)
+        + (["#[allow(clippy::too_many_arguments)]"] if len(params) > 7 else [])
         + [
             "#[unsafe(no_mangle)]",
             f"pub unsafe extern \"C\" fn {name}({', '.join(params)}) -> i32 {{",
@@ -212,6 +236,8 @@ def _uses(fns: list[Function]) -> list[str]:
         "use relicore_dispatch::widest;",
         "use crate::stored::{stored_array, stored_scalar, stored_summary, stored_through_array};",
     ]
+    for rt in dict.fromkeys(f.result_type for f in fns if f.result_type):
+        out.append(f"use crate::{rt.c_module}::{{{rt.c_struct}, {rt.c_struct}_f32}};")
     for rname in dict.fromkeys(f.receiver for f in fns if f.recv):
         r = next(f.recv for f in fns if f.receiver == rname)
         out.append(f"use crate::{r.c_module}::{r.c_struct};")

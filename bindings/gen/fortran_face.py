@@ -10,6 +10,12 @@ table. The template's marker lines are replaced:
     !@ procedures   per table entry: its doc comment, then the elemental function, the `_s`
                     status subroutine, the `_array` subroutine and the `_f32`, `_f32_s`,
                     `_array_f32` twins it has
+    !@ result_types the bind(C) types of the table's result types ([result.<name>]: a
+                    temperature with its uncertainty), with their `_f32` twins
+    !@ parts <s>    section <s> (public, interfaces, procedures) of every hand-kept part
+                    bindings/fortran/parts/*.f90: procedures the table cannot describe, kept
+                    in their own files (radiation thermometry); a part's sections start with
+                    the lines `!@@ public`, `!@@ interfaces`, `!@@ procedures`
 
 Each procedure's comment is the core's rustdoc summary plus the table's argument meanings and
 result; the conventions every wrapper shares (NaN on failure, stat, the stop message) are said
@@ -30,12 +36,14 @@ from pathlib import Path
 
 from . import constants_face, rustdoc
 from .common import banner
-from .table import ROOT, Function
+from .table import ROOT, Function, thermometry_names
 
 TEMPLATE = ROOT / "bindings" / "fortran" / "relicore.in.f90"
 MODULE = ROOT / "bindings" / "fortran" / "relicore.f90"
 TESTS = ROOT / "tests" / "fortran" / "generated"
-MARKERS = ("constants", "coverage", "public", "interfaces", "procedures")
+MARKERS = ("constants", "coverage", "public", "interfaces", "procedures", "result_types",
+           "parts public", "parts interfaces", "parts procedures")
+PARTS = ROOT / "bindings" / "fortran" / "parts"
 WIDTH = 100
 
 # the value passed first: (dummy name, Fortran type, C struct, where it comes from)
@@ -51,8 +59,8 @@ class FortranFaceError(Exception):
 
 # ---------------------------------------------------------------------------- text
 # The core's docs are Unicode; the module stays ASCII (any compiler, any terminal).
-_SUPER = dict(zip("⁰¹²³⁴⁵⁶⁷⁸⁹⁻⁺ⁿˣ", "0123456789-+nx"))
-_SUB = dict(zip("₀₁₂₃₄₅₆₇₈₉ₙ", "0123456789n"))
+_SUPER = dict(zip("⁰¹²³⁴⁵⁶⁷⁸⁹⁻⁺ⁿˣᵗ", "0123456789-+nxt"))
+_SUB = dict(zip("₀₁₂₃₄₅₆₇₈₉ₙᵢⱼ", "0123456789nij"))
 _WORDS = {
     "λ": "lambda", "ν": "nu", "Ω": "Omega", "ω": "omega", "φ": "phi", "π": "pi", "ρ": "rho",
     "τ": "tau", "σ": "sigma", "χ": "chi", "ε": "epsilon", "Δ": "Delta", "Σ": "Sigma",
@@ -60,6 +68,8 @@ _WORDS = {
     "∂": "d", "∞": "Inf",
 }
 _SYMBOLS = {"−": "-", "–": "-", "·": "*", "→": "->", "…": "...", "≤": "<=", "≥": ">=", "×": "x"}
+_SYMBOLS.update({"⅓": "(1/3)", "½": "(1/2)", "¾": "(3/4)", "′": "'", "″": "''", "≈": "~", "≲": "<~", "ẋ": "dx/dt"})
+_WORDS.update({"α": "alpha", "β": "beta", "μ": "mu", "δ": "delta", "Γ": "Gamma", "Θ": "Theta"})
 
 
 def ascii_text(text: str) -> str:
@@ -159,6 +169,20 @@ class Form:
     def receiver(self) -> tuple[str, str, str] | None:
         return RECEIVERS.get(self.fn.receiver)
 
+    @property
+    def rtype(self) -> str | None:
+        """The Fortran type of the result when the function has a result type."""
+        rt = self.fn.result_type
+        return rt.fortran_type + ("_f32" if self.f32 else "") if rt else None
+
+    @property
+    def result_decl(self) -> str:
+        return f"type({self.rtype})" if self.rtype else f"real({self.kind})"
+
+    @property
+    def nan_value(self) -> str:
+        return f"nan_{self.rtype}()" if self.rtype else self.nan
+
     def args(self) -> list[str]:
         """The Fortran dummies before out/stat: receiver, arguments, the array in its place."""
         names = [self.receiver[0]] if self.receiver else []
@@ -211,7 +235,7 @@ def prototype(form: Form) -> str:
             params += [f"const {form.ctype} *{name}", "size_t n"]
         else:
             params.append(f"{form.ctype} {name}")
-    params.append(f"{form.ctype} *out")
+    params.append(f"struct {form.fn.result_type.c_struct}{'_f32' if form.f32 else ''} *out" if form.rtype else f"{form.ctype} *out")
     return f"int32_t {form.c_name}({', '.join(params)});"
 
 
@@ -222,6 +246,8 @@ def interface(form: Form) -> list[str]:
     imports = [form.kind, "c_int32_t"] + (["c_size_t"] if form.array else [])
     if form.receiver:
         imports.append(form.receiver[1])
+    if form.rtype:
+        imports.append(form.rtype)
     lines += statement("      ", f"import :: {', '.join(imports)}")
     if form.receiver:
         lines.append(f"      type({form.receiver[1]}), intent(in) :: {form.receiver[0]}")
@@ -231,7 +257,7 @@ def interface(form: Form) -> list[str]:
             lines.append("      integer(c_size_t), value :: n")
         else:
             lines.append(f"      real({form.kind}), value :: {name}")
-    lines.append(f"      real({form.kind}), intent(out) :: out{'(*)' if form.array else ''}")
+    lines.append(f"      {form.result_decl}, intent(out) :: out{'(*)' if form.array else ''}")
     lines.append("      integer(c_int32_t) :: status")
     lines.append(f"    end function {form.raw}")
     return lines
@@ -253,17 +279,17 @@ def scalar_procedures(form: Form) -> list[str]:
     call = ", ".join(args + ["res"])
     lines = statement("  ", f"impure elemental function {name}({', '.join(args)}) result(res)")
     lines += _inputs(form)
-    lines.append(f"    real({form.kind}) :: res")
-    lines += statement("    ", f"if ({form.raw}({call}) /= RELICORE_OK) res = {form.nan}")
+    lines.append(f"    {form.result_decl} :: res")
+    lines += statement("    ", f"if ({form.raw}({call}) /= RELICORE_OK) res = {form.nan_value}")
     lines.append(f"  end function {name}")
     lines.append("")
     lines += statement("  ", f"impure elemental subroutine {name}_s({', '.join(args + ['out', 'stat'])})")
     lines += _inputs(form)
-    lines.append(f"    real({form.kind}), intent(out) :: out")
+    lines.append(f"    {form.result_decl}, intent(out) :: out")
     lines.append("    integer(c_int32_t), intent(out), optional :: stat")
     lines.append("    integer(c_int32_t) :: code")
     lines += statement("    ", f"code = {form.raw}({', '.join(args + ['out'])})")
-    lines.append(f"    if (code /= RELICORE_OK) out = {form.nan}")
+    lines.append(f"    if (code /= RELICORE_OK) out = {form.nan_value}")
     lines.append(f"    call report(code, '{name}', stat)")
     lines.append(f"  end subroutine {name}_s")
     return lines
@@ -308,7 +334,13 @@ def doc_comment(fn: Function) -> list[str]:
         lines += comment(f"{receiver[0]}: {receiver[2]}", lead="  ", hang="      ")
     for a in fn.args:
         lines += comment(f"{a.name}: {ascii_text(a.meaning)}", lead="  ", hang="      ")
-    lines += comment(f"Result: {ascii_text(fn.result)}.")
+    rt = fn.result_type
+    if rt:
+        lines += comment(f"Result: type({rt.fortran_type}) (type({rt.fortran_type}_f32) for the "
+                         f"_f32 twins): {ascii_text(fn.result)}; every real field NaN and inputs 0 "
+                         "on failure.", hang="  ")
+    else:
+        lines += comment(f"Result: {ascii_text(fn.result)}.")
     base = f"relicore_{fn.name}"
     text = f"Forms: {base}, {base}_s"
     if fn.array:
@@ -348,14 +380,19 @@ def module_text(fns: list[Function]) -> str:
                 procs.append("")
             procs += array_procedure(form) if form.array else scalar_procedures(form)
 
+    types, nan_helpers = result_types(fns)
+    parts = part_sections()
+    procs = [line for _, body in nan_helpers for line in [""] + body] + procs
     inserts = {"coverage": coverage, "public": public, "interfaces": interfaces,
-               "procedures": procs, "constants": constants_face.fortran_lines(WIDTH, ascii_text)}
+               "procedures": procs, "constants": constants_face.fortran_lines(WIDTH, ascii_text),
+               "result_types": types, "parts public": parts["public"],
+               "parts interfaces": parts["interfaces"], "parts procedures": parts["procedures"]}
     out: list[str] = []
     seen = set()
     for line in template:
         if line.startswith("!!"):
             continue
-        m = re.fullmatch(r"!@ (\w+)", line.strip())
+        m = re.fullmatch(r"!@ (\w+(?: \w+)?)", line.strip())
         if m:
             key = m.group(1)
             if key not in inserts or key in seen:
@@ -372,6 +409,61 @@ def module_text(fns: list[Function]) -> str:
             raise FortranFaceError(f"relicore.f90 line {i} is longer than 132 or not ASCII: {line!r}")
     what = f"module relicore from the template {TEMPLATE.name}"
     return banner("!", what) + "\n".join(out).rstrip("\n") + "\n"
+
+
+def result_types(fns: list[Function]) -> tuple[list[str], list[tuple[str, list[str]]]]:
+    """The bind(C) types of the table's result types (and their `_f32` twins), and the
+    elemental functions giving a value with every real field NaN (name, lines)."""
+    lines: list[str] = []
+    helpers: list[tuple[str, list[str]]] = []
+    for rt in dict.fromkeys(f.result_type for f in fns if f.result_type):
+        for kind, sfx, ctype in (("c_double", "", "double"), ("c_float", "_f32", "float")):
+            name = rt.fortran_type + sfx
+            c_fields = "; ".join(
+                ("uint32_t " if f.kind == "count" else f"{ctype} ") + f.name + (f"[{f.length}]" if f.length > 1 else "")
+                for f in rt.fields)
+            lines += comment(f"struct {rt.c_struct}{sfx} {{ {c_fields}; }};")
+            lines += comment(f"The result of the {rt.name.replace('_', ' ')} functions (the core's "
+                             f"{rt.core_type}); a count is integer(c_int32_t) (C uint32_t, values 0 to 5).")
+            lines.append(f"  type, bind(C), public :: {name}")
+            for f in rt.fields:
+                decl = "integer(c_int32_t)" if f.kind == "count" else f"real({kind})"
+                dim = f"({f.length})" if f.length > 1 else ""
+                lines += [f"    {decl} :: {f.name}{dim}"]
+                lines += comment(ascii_text(f.meaning), indent="      ")
+            lines.append(f"  end type {name}")
+            lines.append("")
+            nan = "nan64()" if sfx == "" else "nan32()"
+            body = [f"  ! A {name} with every real field NaN and every count 0 (a failed call)."]
+            body.append(f"  elemental function nan_{name}() result(x)")
+            body.append(f"    type({name}) :: x")
+            for f in rt.fields:
+                body.append(f"    x%{f.name} = {'0' if f.kind == 'count' else nan}")
+            body.append(f"  end function nan_{name}")
+            helpers.append((f"nan_{name}", body))
+    return lines, helpers
+
+
+def part_sections() -> dict[str, list[str]]:
+    """The sections of the hand-kept parts (bindings/fortran/parts/*.f90), in file order."""
+    out: dict[str, list[str]] = {"public": [], "interfaces": [], "procedures": []}
+    for path in sorted(PARTS.glob("*.f90")):
+        section = None
+        for line in path.read_text().splitlines():
+            m = re.fullmatch(r"!@@ (\w+)", line.strip())
+            if m:
+                section = m.group(1)
+                if section not in out:
+                    raise FortranFaceError(f"{path.name}: unknown section {line!r}")
+                continue
+            if line.startswith("!!"):
+                continue
+            if section is None:
+                if line.strip():
+                    raise FortranFaceError(f"{path.name}: text before the first section: {line!r}")
+                continue
+            out[section].append(line)
+    return out
 
 
 # ---------------------------------------------------------------------------- test dispatch
@@ -418,7 +510,9 @@ def _array_actuals(fn: Function, x: str, prefix: str = "") -> list[str]:
 
 def test_dispatch(fns: list[Function]) -> dict[str, list[str]]:
     """{include file name: lines}."""
-    bb = [f for f in fns if f.topic == "blackbody" and f.receiver == "none"]
+    thermo = thermometry_names()
+    bb = [f for f in fns if f.topic == "blackbody" and f.receiver == "none" and not f.result_type
+          and f.name not in thermo]
     cos = [f for f in fns if f.topic == "cosmology"]
     dec = [f for f in fns if f.topic == "decoupling"]
     files: dict[str, list[str]] = {}
@@ -463,6 +557,26 @@ def test_dispatch(fns: list[Function]) -> dict[str, list[str]]:
                 f"ref = {_call(fn, _array_actuals(fn, 'x'), sfx)}",
                 f"call {_call(fn, _array_actuals(fn, 'x') + ['ref_s', 'stats'], sfx + '_s')}"]))
         files[key] = lines
+
+    # test_thermometry: every blackbody function by name (the vectors of thermometry.txt name
+    # measurement-equation and uncertainty functions and the blackbody quantities they reduce
+    # to); a function with a result type sets `structured` and writes r64/rs64 (r32/rs32)
+    lines = []
+    for f32 in (False, True):
+        for fn in [f for f in fns if f.topic == "blackbody" and f.receiver == "none"]:
+            if f32 and not fn.f32:
+                continue
+            sfx, res = ("_f32", "32") if f32 else ("", "64")
+            act = _actuals(fn, False, f32)
+            out, out_s = (f"r{res}", f"rs{res}") if fn.result_type else (f"f{res}", f"s{res}")
+            lines += _case(fn.name + sfx, _body([
+                f"nargs = {len(fn.args)}",
+                f"structured = {'.true.' if fn.result_type else '.false.'}",
+                "if (size(a) == nargs) then",
+                f"  {out} = {_call(fn, act, sfx)}",
+                f"  call {_call(fn, act + [out_s, 'stat'], sfx + '_s')}",
+                "end if"]))
+    files["thermometry_one"] = lines
 
     # test_cosmology: names, evaluate_one, evaluate_many, array_form, evaluate_constants
     files["cosmology_names"] = (

@@ -10,7 +10,7 @@ from __future__ import annotations
 import re
 
 from .common import banner
-from .table import ROOT, TOPICS, Function
+from .table import ROOT, TOPICS, Function, thermometry_names
 
 OUT = ROOT / "tests" / "c" / "gen_functions.h"
 
@@ -49,8 +49,26 @@ def domain(fn: Function) -> tuple[str, str]:
     return "".join(codes), upper
 
 
+# Functions without a receiver of more arguments, or with a result type, go to their own lists
+# (the scene functions of radiation thermometry), which tests/c/test_thermometry.c and
+# tests/c/hostile_thermometry.c expand.
+WIDE_NARGS = 12
+
+
+def _wide(fn: Function) -> bool:
+    """A function of the thermometry lists: more than 4 arguments, a result struct, or its
+    reference vectors in tests/data/thermometry*.txt."""
+    return fn.receiver == "none" and (
+        len(fn.args) > MAX_NARGS["none"] or fn.result_type is not None or fn.name in thermometry_names()
+    )
+
+
 def _check(fn: Function) -> None:
     where = f"harness.py: {fn.name}"
+    if _wide(fn):
+        if len(fn.args) > WIDE_NARGS or fn.array:
+            raise SystemExit(f"{where}: the wide lists take at most {WIDE_NARGS} arguments and no array form")
+        return
     if len(fn.args) > MAX_NARGS[fn.receiver]:
         raise SystemExit(
             f"{where}: the C harnesses call {fn.receiver!r}-receiver functions of at most "
@@ -88,7 +106,10 @@ def _header(fns: list[Function]) -> str:
         " * forms: pos is the position of the array argument among the scalar function's arguments.",
         " * Lists: RELICORE_<TOPIC>_SCALARS, _SCALARS_F32, _ARRAYS, _ARRAYS_F32 (no receiver),",
         " * _UNIVERSE, _UNIVERSE_ARRAYS (a universe first), _HISTORY, _HISTORY_ARRAYS (a thermal",
-        " * history first); a list may be empty.",
+        " * history first); _WIDE, _WIDE_F32 (no receiver, more than 4 arguments or reference vectors",
+        " * in tests/data/thermometry*.txt) and _STRUCTS,",
+        " * _STRUCTS_F32 (no receiver, a result struct: relicore_temperature_uncertainty[_f32]);",
+        " * a list may be empty.",
         " */",
         "#ifndef RELICORE_TESTS_GEN_FUNCTIONS_H",
         "#define RELICORE_TESTS_GEN_FUNCTIONS_H",
@@ -113,7 +134,9 @@ def _header(fns: list[Function]) -> str:
         def array_rows(sel):
             return [f"{f.name}, {len(f.args)}, {f.array.index(f)}" for f in sel]
 
-        none = [f for f in mine if f.receiver == "none"]
+        none = [f for f in mine if f.receiver == "none" and not _wide(f)]
+        wide = [f for f in mine if _wide(f) and not f.result_type]
+        structs = [f for f in mine if _wide(f) and f.result_type]
         lines += _list(f"RELICORE_{T}_SCALARS", "name, nargs, domain, upper, array",
                        f"{topic}: double scalar forms without a receiver", scalar_rows(none))
         lines += _list(f"RELICORE_{T}_SCALARS_F32", "name, nargs, domain, upper, array",
@@ -125,6 +148,14 @@ def _header(fns: list[Function]) -> str:
         lines += _list(f"RELICORE_{T}_ARRAYS_F32", "name, nargs, pos",
                        f"{topic}: float array forms (relicore_<name>_array_f32)",
                        array_rows([f for f in none if f.array_f32]))
+        lines += _list(f"RELICORE_{T}_WIDE", "name, nargs, domain, upper, array",
+                       f"{topic}: double scalar forms of more than 4 arguments", scalar_rows(wide))
+        lines += _list(f"RELICORE_{T}_WIDE_F32", "name, nargs, domain, upper, array",
+                       f"{topic}: their float twins", scalar_rows([f for f in wide if f.f32], f32=True))
+        lines += _list(f"RELICORE_{T}_STRUCTS", "name, nargs, domain, upper, array",
+                       f"{topic}: double forms writing a result struct", scalar_rows(structs))
+        lines += _list(f"RELICORE_{T}_STRUCTS_F32", "name, nargs, domain, upper, array",
+                       f"{topic}: their float twins", scalar_rows([f for f in structs if f.f32], f32=True))
         for receiver in ("universe", "history"):
             R = receiver.upper()
             sel = [f for f in mine if f.receiver == receiver]

@@ -44,8 +44,54 @@ def python_args(fn: Function) -> list[str]:
 # --------------------------------------------------------------------------------- Rust
 
 
+def _slice_call(fn: Function, call: str) -> str:
+    """A closure body taking the element-wise values as a slice (more than 4 arguments, or a
+    row result): the core call when the slice has the function's arity."""
+    names = ", ".join(fn.arg_names)
+    return f"match *x {{ [{names}] => {call}, _ => Err(Error::LengthMismatch(0)) }}"
+
+
+def _row_function(rt) -> str:
+    """`<result>_row`: a result value as one row of f64 (the fields in order; a count as a float)."""
+    parts = []
+    for f in rt.fields:
+        if f.kind == "count":
+            parts.append(f"[f64::from(v.{f.name})]")
+        elif f.length > 1:
+            parts.append(f"v.{f.name}")
+        else:
+            parts.append(f"[v.{f.name}]")
+    chain = parts[0] + ".into_iter()" + "".join(f".chain({p})" for p in parts[1:])
+    return (
+        f"/// A `{rt.core_type}` as one row of {rt.width} f64 (its fields in order; `inputs` as a float).\n"
+        f"fn {rt.name}_row(v: {rt.core_path}<f64>, out: &mut [f64]) {{\n"
+        f"    for (o, x) in out.iter_mut().zip({chain}) {{\n        *o = x;\n    }}\n}}"
+    )
+
+
+def _rust_frame(fn: Function) -> str:
+    """The frame wrapper of `fn`: its first `frame` arguments single values, the others slices."""
+    k = fn.frame
+    lines = [f"fn {fn.name}_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {{"]
+    lines.append(f"    let &[{', '.join(fn.arg_names)}] = x else {{")
+    lines.append("        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });")
+    lines.append("    };")
+    for a in fn.arg_names[:k]:
+        lines.append(f"    let {a} = {a}.first().copied().unwrap_or(f64::NAN);")
+    lines.append(f"    {CORE_PATH[fn.topic]}::{fn.name}_array({', '.join(fn.arg_names)}, out)")
+    lines.append("}")
+    return "\n".join(lines)
+
+
 def _rust_body(fn: Function) -> str:
     n = len(fn.args)
+    if fn.result_type:
+        call = f"{CORE_PATH[fn.topic]}::{fn.name}({', '.join(fn.arg_names)}).map(|v| {fn.result_type.name}_row(v, out))"
+        return f"Body::Row(|_, x, out| {_slice_call(fn, call)})"
+    if n > 4:
+        assert fn.receiver == "none", fn.name
+        call = f"{CORE_PATH[fn.topic]}::{fn.name}({', '.join(fn.arg_names)})"
+        return f"Body::AN(|_, x| {_slice_call(fn, call)})"
     r = {"none": "_", "universe": "u", "history": "h"}[fn.receiver]
     params = ", ".join([r, *fn.arg_names])
     if fn.receiver == "none":
@@ -85,6 +131,8 @@ def _rust_array(fn: Function) -> str:
 def _rust_spec(fn: Function) -> str:
     args = ", ".join(f'"{a}"' for a in fn.arg_names)
     array = f"Some({fn.name}_array)" if fn.array and fn.array.simd else "None"
+    frame = f"Some(({fn.frame}, {fn.name}_frame))" if fn.frame else "None"
+    width = fn.result_type.width if fn.result_type else 1
     return (
         "    Spec {\n"
         f'        name: "{fn.name}",\n'
@@ -94,6 +142,8 @@ def _rust_spec(fn: Function) -> str:
         f"        free: {'true' if fn.core else 'false'},\n"
         f"        body: {_rust_body(fn)},\n"
         f"        array: {array},\n"
+        f"        frame: {frame},\n"
+        f"        width: {width},\n"
         "    },"
     )
 
@@ -104,7 +154,7 @@ def rust(fns: list[Function]) -> str:
         "//! The regular functions as `functions.rs` calls them: name, topic, how messages name them,",
         "//! element-wise parameters, the core call and the SIMD array form where there is one.",
         "",
-        "use relicore::ArrayResult;",
+        "use relicore::{ArrayResult, ElementError, Error};",
         "use relicore_dispatch::widest;",
         "",
         "use crate::functions::{Body, H, Lift, Spec, U};",
@@ -119,6 +169,12 @@ def rust(fns: list[Function]) -> str:
         if f.array and f.array.simd:
             out += ["", f"/// `{f.name}_array` of the core, compiled for each SIMD level and chosen at run time.",
                     _rust_array(f)]
+    for f in fns:
+        if f.frame:
+            out += ["", f"/// `{f.name}_array` of the core (a frame: the first {f.frame} argument(s) single values, "
+                    "the others slices of the chunk's length or of one value).", _rust_frame(f)]
+    for rt in dict.fromkeys(f.result_type for f in fns if f.result_type):
+        out += ["", _row_function(rt)]
     return "\n".join(out) + "\n"
 
 
@@ -140,6 +196,13 @@ def _py_function(fn: Function) -> str:
     params = ", ".join(f"{a}: Any" for a in python_args(fn))
     receiver = fn.receiver if fn.receiver != "none" else "None"
     values = "".join(f"{a}, " for a in fn.arg_names)
+    if fn.result_type:
+        cls = fn.result_type.python_type
+        return (
+            f"def {fn.name}({params}, *, nan_on_error: bool = False) -> _results.{cls}:\n"
+            f"{_docstring(fn, '    ')}\n"
+            f'    return _apply_result(_F["{fn.name}"], {receiver}, ({values}), nan_on_error, _results.{cls})\n'
+        )
     return (
         f"def {fn.name}({params}, *, nan_on_error: bool = False) -> Any:\n"
         f"{_docstring(fn, '    ')}\n"
@@ -192,6 +255,8 @@ def python_module(topic: str, fns: list[Function]) -> str:
         "from relicore._elementwise import FUNCTIONS as _F",
         "from relicore._elementwise import apply as _apply",
         "from relicore._elementwise import publish as _publish",
+        *(["from relicore import _results", "from relicore._elementwise import apply_result as _apply_result"]
+          if any(f.result_type for f in functions) else []),
         "",
         f"__all__ = {[f.name for f in functions] + [python_class(r) + 'Functions' for r in members]!r}",
     ]
@@ -273,6 +338,21 @@ def response_weighted_radiance(wavelengths_m: ArrayLike, response: ArrayLike, te
 def temperature_from_response_weighted_radiance(wavelengths_m: ArrayLike, response: ArrayLike, radiance: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
 @overload
 def temperature_from_response_weighted_radiance(wavelengths_m: ArrayLike, response: ArrayLike, radiance: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+@overload
+def measured_response_weighted_radiance(wavelengths_m: ArrayLike, response_table: ArrayLike, object_temperature_k: _Scalar, emissivity: _Scalar, reflected_temperature_k: _Scalar, transmittance: _Scalar, path_temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def measured_response_weighted_radiance(wavelengths_m: ArrayLike, response_table: ArrayLike, object_temperature_k: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+@overload
+def object_temperature_response(wavelengths_m: ArrayLike, response_table: ArrayLike, signal: _Scalar, emissivity: _Scalar, reflected_temperature_k: _Scalar, transmittance: _Scalar, path_temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def object_temperature_response(wavelengths_m: ArrayLike, response_table: ArrayLike, signal: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+def object_temperature_response_with_uncertainty(wavelengths_m: ArrayLike, response_table: ArrayLike, signal: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, signal_uncertainty: ArrayLike, emissivity_uncertainty: ArrayLike, reflected_temperature_uncertainty_k: ArrayLike, transmittance_uncertainty: ArrayLike, path_temperature_uncertainty_k: ArrayLike, *, nan_on_error: bool = False) -> TemperatureUncertainty: ...
+@overload
+def response_weighted_radiance_temperature_derivative(wavelengths_m: ArrayLike, response_table: ArrayLike, temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def response_weighted_radiance_temperature_derivative(wavelengths_m: ArrayLike, response_table: ArrayLike, temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+def combined_standard_uncertainty(sensitivity_coefficients: ArrayLike, standard_uncertainties: ArrayLike) -> float: ...
+def combined_standard_uncertainty_correlated(sensitivity_coefficients: ArrayLike, standard_uncertainties: ArrayLike, correlation: ArrayLike) -> float: ...
 '''
 
 UNIVERSE_STUB = '''
@@ -358,6 +438,15 @@ class ThermalHistory:
 
 
 def _stub_overloads(fn: Function, indent: str) -> list[str]:
+    if fn.result_type:
+        cls = fn.result_type.python_type
+        out = []
+        for kind, hold in (("_Scalar", "float"), ("ArrayLike", "_Array")):
+            params = [f"{a}: {kind}" for a in fn.arg_names]
+            note = "  # type: ignore[overload-overlap]" if kind == "_Scalar" else ""
+            out += [f"{indent}@overload",
+                    f"{indent}def {fn.name}({', '.join(params)}, *, nan_on_error: bool = False) -> {cls}: ...{note}"]
+        return out
     if fn.python == "property":
         return [f"{indent}@property", f"{indent}def {fn.name}(self) -> float: ..."]
     out = []
@@ -376,6 +465,9 @@ def stub(topic: str, fns: list[Function]) -> str:
             "decoupling": "test_decoupling_faces.py"}[topic]
     typing = "final, overload" if topic == "blackbody" else "overload"
     imports = "\nfrom relicore.cosmology import Universe\n" if topic == "decoupling" else ""
+    if topic == "blackbody":
+        rts = dict.fromkeys(f.result_type.python_type for f in fns if f.topic == topic and f.result_type)
+        imports += "".join(f"\nfrom relicore._results import {c} as {c}" for c in rts) + "\n"
     head = STUB_HEAD.format(topic=topic, test=test, typing=typing, imports=imports)
     mine = [f for f in fns if f.topic == topic]
     out = [banner("#", f"the type stubs of relicore.{topic}"), head.rstrip("\n")]
@@ -394,8 +486,80 @@ def stub(topic: str, fns: list[Function]) -> str:
     return "\n".join(out) + "\n"
 
 
+RESULTS_DOC = """The named results of relicore's functions that return more than a number, one
+class per result type of the table (bindings/functions.toml, [result.<name>]).
+
+A scalar call returns the named result of Python numbers: each real field a float, a field of n
+reals a tuple of n floats, a count an int. A call with any array argument returns the same
+named result holding arrays of the broadcast shape S: each real field an ndarray of shape S,
+a field of n reals an ndarray of shape S + (n,) (the trailing axis indexes the field), a count
+an int64 ndarray of shape S. With nan_on_error, a failing element has NaN in its real fields
+and 0 in its counts."""
+
+
+def results_module(fns: list[Function]) -> tuple[str, str]:
+    """relicore/_results.py and its stub."""
+    rts = list(dict.fromkeys(f.result_type for f in fns if f.result_type))
+    py = [banner("#", "the named results of relicore"), f'"""{RESULTS_DOC}"""', "",
+          "from __future__ import annotations", "", "from typing import Any, NamedTuple", "",
+          "import numpy as np", "", f"__all__ = {[rt.python_type for rt in rts]!r}"]
+    pyi = [banner("#", "the type stubs of the named results of relicore"), f'"""{RESULTS_DOC}"""', "",
+           "from typing import Any, NamedTuple", "", "import numpy as np", "from numpy.typing import NDArray", ""]
+    for rt in rts:
+        layout = []
+        start = 0
+        for f in rt.fields:
+            layout.append((f.name, start, f.length, f.kind))
+            start += f.length
+        py += ["", "", f"class {rt.python_type}(NamedTuple):",
+               f'    """The core\'s `{rt.core_type}` (see the module docstring for scalars and arrays).', ""]
+        for f in rt.fields:
+            py.append(f"    {f.name}: {f.meaning}.")
+        py += ['    """', ""]
+        for f in rt.fields:
+            py.append(f"    {f.name}: Any")
+        py += ["", f"    #: (field, first column, number of columns, kind) of a row of {rt.width} floats",
+               f"    _LAYOUT = {tuple(layout)!r}", "", "    @classmethod",
+               f"    def _from_row(cls, row: Any) -> {rt.python_type}:",
+               '        """The value of one row of floats (a scalar call)."""',
+               "        values: list[Any] = []",
+               "        for _, start, length, kind in cls._LAYOUT:",
+               "            piece = row[start : start + length]",
+               '            if kind == "count":',
+               "                values.append(int(piece[0]) if piece[0] == piece[0] else 0)",
+               "            elif length == 1:",
+               "                values.append(float(piece[0]))",
+               "            else:",
+               "                values.append(tuple(float(v) for v in piece))",
+               "        return cls(*values)", "", "    @classmethod",
+               f"    def _from_rows(cls, rows: np.ndarray[Any, Any]) -> {rt.python_type}:",
+               '        """The value of an array of rows of shape S + (width,) (an array call)."""',
+               "        values: list[Any] = []",
+               "        for _, start, length, kind in cls._LAYOUT:",
+               "            piece = rows[..., start : start + length]",
+               '            if kind == "count":',
+               "                values.append(np.nan_to_num(piece[..., 0], nan=0.0).astype(np.int64))",
+               "            elif length == 1:",
+               "                values.append(piece[..., 0])",
+               "            else:",
+               "                values.append(piece)",
+               "        return cls(*values)"]
+        pyi += ["", f"class {rt.python_type}(NamedTuple):",
+                f'    """The core\'s `{rt.core_type}`: Python numbers from a scalar call, arrays from an array call."""', ""]
+        for f in rt.fields:
+            if f.kind == "count":
+                ty = "int | NDArray[np.int64]"
+            elif f.length > 1:
+                ty = "tuple[float, ...] | NDArray[np.float64]"
+            else:
+                ty = "float | NDArray[np.float64]"
+            pyi.append(f"    {f.name}: {ty}")
+    return "\n".join(py) + "\n", "\n".join(pyi) + "\n"
+
+
 def outputs(fns: list[Function]) -> dict:
     files = {PY / "src" / "generated.rs": rust(fns)}
+    files[PACKAGE / "_results.py"], files[PACKAGE / "_results.pyi"] = results_module(fns)
     for topic in ("blackbody", "cosmology", "decoupling"):
         files[PACKAGE / f"_{topic}.py"] = python_module(topic, fns)
         files[PACKAGE / f"{topic}.pyi"] = stub(topic, fns)

@@ -17,7 +17,10 @@ RECEIVER_KEYS = {
 PYTHON = ("function", "method", "property")
 KEYS = {
     "name", "topic", "receiver", "core", "infallible", "args", "result", "f32", "array",
-    "array_f32", "python",
+    "array_f32", "python", "returns", "frame",
+}
+RESULT_KEYS = {
+    "core_type", "core_path", "c_struct", "c_module", "fortran_type", "python_type", "fields",
 }
 
 
@@ -37,6 +40,39 @@ class Receiver:
 
 
 RECEIVERS: dict[str, Receiver] = {}
+
+
+@dataclass(frozen=True)
+class Field:
+    """One field of a result type: kind 'real' (length 1), 'real' with a length, or 'count'."""
+
+    name: str
+    kind: str
+    length: int
+    meaning: str
+
+
+@dataclass(frozen=True)
+class ResultType:
+    """A plain value a function returns instead of a number (a temperature with its uncertainty):
+    how each face names it and its fields in the core's order."""
+
+    name: str
+    core_type: str
+    core_path: str
+    c_struct: str
+    c_module: str
+    fortran_type: str
+    python_type: str
+    fields: tuple[Field, ...]
+
+    @property
+    def width(self) -> int:
+        """Number of f64 the value takes as one row (a count becomes a float)."""
+        return sum(f.length for f in self.fields)
+
+
+RESULTS: dict[str, ResultType] = {}
 
 
 @dataclass(frozen=True)
@@ -69,11 +105,18 @@ class Function:
     array_f32: bool
     python: str
     order: int = field(compare=False)
+    returns: str | None = None
+    frame: int | None = None  # leading single-value arguments of the core's frame form
 
     @property
     def recv(self) -> Receiver | None:
         """The receiver's description, None for a function without one."""
         return RECEIVERS.get(self.receiver)
+
+    @property
+    def result_type(self) -> ResultType | None:
+        """The result type's description, None for a function that returns a number."""
+        return RESULTS.get(self.returns) if self.returns else None
 
     @property
     def c_name(self) -> str:
@@ -103,6 +146,20 @@ def load(path: Path = TABLE) -> list[Function]:
     with open(path, "rb") as f:
         raw = tomllib.load(f)
     RECEIVERS.clear()
+    RESULTS.clear()
+    for tname, r in raw.get("result", {}).items():
+        if set(r) != RESULT_KEYS:
+            raise TableError(f"{path.name}: result {tname!r} needs exactly the keys {sorted(RESULT_KEYS)}")
+        fields = []
+        for f in r["fields"]:
+            fname, kind, meaning = (s.strip() for s in f.split(":", 2))
+            length = 1
+            if kind.startswith("real[") and kind.endswith("]"):
+                kind, length = "real", int(kind[5:-1])
+            if kind not in ("real", "count") or not fname.isidentifier():
+                raise TableError(f"{path.name}: result {tname!r}: field {f!r} is not 'name: real|real[n]|count: meaning'")
+            fields.append(Field(fname, kind, length, meaning))
+        RESULTS[tname] = ResultType(name=tname, fields=tuple(fields), **{k: v for k, v in r.items() if k != "fields"})
     for rname, r in raw.get("receiver", {}).items():
         if set(r) != RECEIVER_KEYS:
             raise TableError(f"{path.name}: receiver {rname!r} needs exactly the keys {sorted(RECEIVER_KEYS)}")
@@ -142,7 +199,15 @@ def load(path: Path = TABLE) -> list[Function]:
             array_f32=bool(e.get("array_f32", False)),
             python=e["python"],
             order=i,
+            returns=e.get("returns"),
+            frame=int(e["frame"]["scalars"]) if "frame" in e else None,
         )
+        if fn.returns and fn.returns not in RESULTS:
+            raise TableError(f"{where}: returns must be one of {sorted(RESULTS)}")
+        if fn.returns and (fn.array or fn.receiver != "none" or fn.python != "function"):
+            raise TableError(f"{where}: a function with a result type is a plain function without array form")
+        if fn.frame is not None and not (0 < fn.frame < len(fn.args) and not fn.returns and not fn.array):
+            raise TableError(f"{where}: frame scalars must leave the signal and the scene as slices")
         if fn.topic not in TOPICS:
             raise TableError(f"{where}: topic must be one of {TOPICS}")
         if fn.receiver != "none" and fn.receiver not in RECEIVERS:
@@ -163,3 +228,16 @@ def load(path: Path = TABLE) -> list[Function]:
             raise TableError(f"{where}: only constants (no arguments) are infallible")
         fns.append(fn)
     return fns
+
+
+def thermometry_names() -> set[str]:
+    """The functions whose reference vectors are in tests/data/thermometry*.txt (the
+    measurement equation and the uncertainty functions): the thermometry harnesses test them,
+    the blackbody harnesses do not."""
+    names: set[str] = set()
+    for path in sorted((ROOT / "tests" / "data").glob("thermometry*.txt")):
+        for line in path.read_text().splitlines():
+            if line and not line.startswith("#") and line[0].isalpha():
+                name = line.split()[0].split("@")[0]
+                names.add(name[: -len("_f32")] if name.endswith("_f32") else name)
+    return names

@@ -12,7 +12,10 @@
  * forms: pos is the position of the array argument among the scalar function's arguments.
  * Lists: RELICORE_<TOPIC>_SCALARS, _SCALARS_F32, _ARRAYS, _ARRAYS_F32 (no receiver),
  * _UNIVERSE, _UNIVERSE_ARRAYS (a universe first), _HISTORY, _HISTORY_ARRAYS (a thermal
- * history first); a list may be empty.
+ * history first); _WIDE, _WIDE_F32 (no receiver, more than 4 arguments or reference vectors
+ * in tests/data/thermometry*.txt) and _STRUCTS,
+ * _STRUCTS_F32 (no receiver, a result struct: relicore_temperature_uncertainty[_f32]);
+ * a list may be empty.
  */
 #ifndef RELICORE_TESTS_GEN_FUNCTIONS_H
 #define RELICORE_TESTS_GEN_FUNCTIONS_H
@@ -87,6 +90,37 @@
     X(spectral_radiance_frequency, 2, 0) \
     X(spectral_radiance_wavenumber, 2, 0)
 
+/* blackbody: double scalar forms of more than 4 arguments: X(name, nargs, domain, upper, array) */
+#define RELICORE_BLACKBODY_WIDE(X) \
+    X(measured_spectral_radiance_wavelength, 6, "pppnpn", INFINITY, 0) \
+    X(measured_spectral_radiance_frequency, 6, "pppnpn", INFINITY, 0) \
+    X(measured_band_radiance_wavelength, 7, "n-ppnpn", INFINITY, 0) \
+    X(object_temperature_wavelength, 6, "p-pnpn", INFINITY, 0) \
+    X(object_temperature_frequency, 6, "p-pnpn", INFINITY, 0) \
+    X(object_temperature_band, 7, "n--pnpn", INFINITY, 0) \
+    X(band_radiance_temperature_derivative_wavelength, 3, "n-p", INFINITY, 0)
+
+/* blackbody: their float twins: X(name, nargs, domain, upper, array) */
+#define RELICORE_BLACKBODY_WIDE_F32(X) \
+    X(measured_spectral_radiance_wavelength, 6, "pppnpn", INFINITY, 0) \
+    X(measured_spectral_radiance_frequency, 6, "pppnpn", INFINITY, 0) \
+    X(object_temperature_wavelength, 6, "p-pnpn", INFINITY, 0) \
+    X(object_temperature_frequency, 6, "p-pnpn", INFINITY, 0)
+
+/* blackbody: double forms writing a result struct: X(name, nargs, domain, upper, array) */
+#define RELICORE_BLACKBODY_STRUCTS(X) \
+    X(brightness_temperature_wavelength_with_uncertainty, 3, "ppn", INFINITY, 0) \
+    X(brightness_temperature_frequency_with_uncertainty, 3, "ppn", INFINITY, 0) \
+    X(object_temperature_wavelength_with_uncertainty, 11, "p-pnpnnnnnn", INFINITY, 0) \
+    X(object_temperature_frequency_with_uncertainty, 11, "p-pnpnnnnnn", INFINITY, 0) \
+    X(object_temperature_band_with_uncertainty, 12, "n--pnpnnnnnn", INFINITY, 0) \
+    X(calibrated_temperature_with_uncertainty, 11, "p-p-p-nnnnn", INFINITY, 0)
+
+/* blackbody: their float twins: X(name, nargs, domain, upper, array) */
+#define RELICORE_BLACKBODY_STRUCTS_F32(X) \
+    X(object_temperature_wavelength_with_uncertainty, 11, "p-pnpnnnnnn", INFINITY, 0) \
+    X(object_temperature_frequency_with_uncertainty, 11, "p-pnpnnnnnn", INFINITY, 0)
+
 /* blackbody: functions of a universe: X(name, nargs, domain, upper, array) */
 #define RELICORE_BLACKBODY_UNIVERSE(X)
 
@@ -112,6 +146,18 @@
 
 /* cosmology: float array forms (relicore_<name>_array_f32): X(name, nargs, pos) */
 #define RELICORE_COSMOLOGY_ARRAYS_F32(X)
+
+/* cosmology: double scalar forms of more than 4 arguments: X(name, nargs, domain, upper, array) */
+#define RELICORE_COSMOLOGY_WIDE(X)
+
+/* cosmology: their float twins: X(name, nargs, domain, upper, array) */
+#define RELICORE_COSMOLOGY_WIDE_F32(X)
+
+/* cosmology: double forms writing a result struct: X(name, nargs, domain, upper, array) */
+#define RELICORE_COSMOLOGY_STRUCTS(X)
+
+/* cosmology: their float twins: X(name, nargs, domain, upper, array) */
+#define RELICORE_COSMOLOGY_STRUCTS_F32(X)
 
 /* cosmology: functions of a universe: X(name, nargs, domain, upper, array) */
 #define RELICORE_COSMOLOGY_UNIVERSE(X) \
@@ -194,6 +240,18 @@
 
 /* decoupling: float array forms (relicore_<name>_array_f32): X(name, nargs, pos) */
 #define RELICORE_DECOUPLING_ARRAYS_F32(X)
+
+/* decoupling: double scalar forms of more than 4 arguments: X(name, nargs, domain, upper, array) */
+#define RELICORE_DECOUPLING_WIDE(X)
+
+/* decoupling: their float twins: X(name, nargs, domain, upper, array) */
+#define RELICORE_DECOUPLING_WIDE_F32(X)
+
+/* decoupling: double forms writing a result struct: X(name, nargs, domain, upper, array) */
+#define RELICORE_DECOUPLING_STRUCTS(X)
+
+/* decoupling: their float twins: X(name, nargs, domain, upper, array) */
+#define RELICORE_DECOUPLING_STRUCTS_F32(X)
 
 /* decoupling: functions of a universe: X(name, nargs, domain, upper, array) */
 #define RELICORE_DECOUPLING_UNIVERSE(X) \

@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # C tests of relicore: builds the release-c library, then, for each C test program
 # (test_blackbody on the blackbody vector files, test_cosmology on tests/data/cosmology.txt,
-# test_decoupling on tests/data/decoupling.txt):
+# test_decoupling on tests/data/decoupling.txt, test_thermometry on the thermometry files):
 #   1. the test against librelicore.a (by path, -lm, --gc-sections) on the reference vectors;
 #   2. the same test built with AddressSanitizer + UndefinedBehaviorSanitizer (leak checking on;
 #      falls back to valgrind if the sanitizer runtime is missing);
@@ -30,6 +30,7 @@ LIBDIR="${CARGO_TARGET_DIR:-$ROOT/target}/release-c"
 DATA=("$ROOT/tests/data/blackbody.txt" "$ROOT/tests/data/blackbody_response.txt")
 COSMOLOGY_DATA=("$ROOT/tests/data/cosmology.txt")
 DECOUPLING_DATA=("$ROOT/tests/data/decoupling.txt")
+THERMOMETRY_DATA=("$ROOT/tests/data/thermometry.txt" "$ROOT/tests/data/thermometry_response.txt")
 CC=${CC:-gcc}
 CFLAGS=(-std=c11 -Wall -Wextra -Wpedantic -Werror -I "$ROOT/include")
 SHARED=("$ROOT/tests/c/vector_files.c") # compiled into every test program
@@ -51,7 +52,7 @@ step() { # step NAME COMMAND...: runs a step, counts it, never stops the script
     fi
 }
 
-for f in "${DATA[@]}" "${COSMOLOGY_DATA[@]}" "${DECOUPLING_DATA[@]}"; do
+for f in "${DATA[@]}" "${COSMOLOGY_DATA[@]}" "${DECOUPLING_DATA[@]}" "${THERMOMETRY_DATA[@]}"; do
     [[ -f "$f" ]] || { echo "missing reference data $f" >&2; exit 1; }
 done
 
@@ -64,9 +65,10 @@ data_of() {
     test_blackbody) echo "${DATA[@]}" ;;
     test_cosmology) echo "${COSMOLOGY_DATA[@]}" ;;
     test_decoupling) echo "${DECOUPLING_DATA[@]}" ;;
+    test_thermometry) echo "${THERMOMETRY_DATA[@]}" ;;
     esac
 }
-TESTS=(test_blackbody test_cosmology test_decoupling)
+TESTS=(test_blackbody test_cosmology test_decoupling test_thermometry)
 
 build_static() { # build_static TEST
     "$CC" "${CFLAGS[@]}" -O2 "tests/c/$1.c" "${SHARED[@]}" "$LIBDIR/librelicore.a" -lm \
@@ -155,40 +157,48 @@ done
 step "firmware-style program needs no malloc/calloc/realloc/free" check_nomalloc
 
 HOSTILE_CALLS=${HOSTILE_CALLS:-100000}
-run_hostile_sanitized() {
+# the hostile harnesses: hostile_abi (every export) and hostile_thermometry (the thermometry
+# exports of more arguments, struct results, frames, response tables)
+HOSTILES=(hostile_abi hostile_thermometry)
+run_hostile_sanitized() { # run_hostile_sanitized HARNESS
+    local h=${1:-hostile_abi}
     "$CC" "${CFLAGS[@]}" -O1 -g -fsanitize=address,undefined -fno-omit-frame-pointer \
-        -fno-sanitize-recover=undefined tests/c/hostile_abi.c "$LIBDIR/librelicore.a" -lm \
-        -o "$BUILD/hostile_abi_asan" || return 1
+        -fno-sanitize-recover=undefined "tests/c/$h.c" "$LIBDIR/librelicore.a" -lm \
+        -o "$BUILD/${h}_asan" || return 1
     ASAN_OPTIONS=detect_leaks=1:abort_on_error=0 \
         UBSAN_OPTIONS=halt_on_error=1:print_stacktrace=1 \
-        "$BUILD/hostile_abi_asan" --calls "$HOSTILE_CALLS" >"$BUILD/hostile_abi_asan.log" 2>&1
+        "$BUILD/${h}_asan" --calls "$HOSTILE_CALLS" >"$BUILD/${h}_asan.log" 2>&1
     local status=$?
-    grep -E '^(FAIL|statuses over all calls|hostile:)' "$BUILD/hostile_abi_asan.log" | head -n 60
-    [[ $status -eq 0 ]] || { tail -n 40 "$BUILD/hostile_abi_asan.log"; return 1; }
-    echo "per-function status counts: $BUILD/hostile_abi_asan.log"
+    grep -E '^(FAIL|statuses over all calls|hostile:)' "$BUILD/${h}_asan.log" | head -n 60
+    [[ $status -eq 0 ]] || { tail -n 40 "$BUILD/${h}_asan.log"; return 1; }
+    echo "per-function status counts: $BUILD/${h}_asan.log"
 }
 run_hostile_plain() { # without a sanitizer runtime: the plain build, all calls
-    "$CC" "${CFLAGS[@]}" -O2 -g tests/c/hostile_abi.c "$LIBDIR/librelicore.a" -lm \
-        -Wl,--gc-sections -o "$BUILD/hostile_abi" || return 1
-    "$BUILD/hostile_abi" --calls "$HOSTILE_CALLS" >"$BUILD/hostile_abi.log" 2>&1 \
-        || { grep -E '^FAIL' "$BUILD/hostile_abi.log" | head -n 40; return 1; }
-    grep -E '^(statuses over all calls|hostile:)' "$BUILD/hostile_abi.log"
+    local h=${1:-hostile_abi}
+    "$CC" "${CFLAGS[@]}" -O2 -g "tests/c/$h.c" "$LIBDIR/librelicore.a" -lm \
+        -Wl,--gc-sections -o "$BUILD/$h" || return 1
+    "$BUILD/$h" --calls "$HOSTILE_CALLS" >"$BUILD/$h.log" 2>&1 \
+        || { grep -E '^FAIL' "$BUILD/$h.log" | head -n 40; return 1; }
+    grep -E '^(statuses over all calls|hostile:)' "$BUILD/$h.log"
 }
 run_hostile_valgrind() { # memcheck reports reads of uninitialised memory: no such struct here
-    "$CC" "${CFLAGS[@]}" -O2 -g tests/c/hostile_abi.c "$LIBDIR/librelicore.a" -lm \
-        -Wl,--gc-sections -o "$BUILD/hostile_abi" || return 1
-    valgrind --quiet --error-exitcode=1 --leak-check=full "$BUILD/hostile_abi" --calls 1000 \
-        --no-uninit >"$BUILD/hostile_abi_valgrind.log" 2>&1 \
-        || { grep -vE '^relicore_' "$BUILD/hostile_abi_valgrind.log" | head -n 60; return 1; }
-    grep -E '^hostile:' "$BUILD/hostile_abi_valgrind.log"
+    local h=${1:-hostile_abi}
+    "$CC" "${CFLAGS[@]}" -O2 -g "tests/c/$h.c" "$LIBDIR/librelicore.a" -lm \
+        -Wl,--gc-sections -o "$BUILD/$h" || return 1
+    valgrind --quiet --error-exitcode=1 --leak-check=full "$BUILD/$h" --calls 1000 \
+        --no-uninit >"$BUILD/${h}_valgrind.log" 2>&1 \
+        || { grep -vE '^relicore_' "$BUILD/${h}_valgrind.log" | head -n 60; return 1; }
+    grep -E '^hostile:' "$BUILD/${h}_valgrind.log"
 }
-if sanitizer_available; then
-    step "hostile inputs to every export under ASan + UBSan ($HOSTILE_CALLS calls each)" run_hostile_sanitized
-else
-    echo "sanitizer runtime missing: the hostile harness runs without it"
-    step "hostile inputs to every export ($HOSTILE_CALLS calls each, no sanitizer runtime)" run_hostile_plain
-fi
-step "hostile inputs to every export under valgrind memcheck (1000 calls each)" run_hostile_valgrind
+for h in "${HOSTILES[@]}"; do
+    if sanitizer_available; then
+        step "$h: hostile inputs under ASan + UBSan ($HOSTILE_CALLS calls each)" run_hostile_sanitized "$h"
+    else
+        echo "sanitizer runtime missing: the hostile harness runs without it"
+        step "$h: hostile inputs ($HOSTILE_CALLS calls each, no sanitizer runtime)" run_hostile_plain "$h"
+    fi
+    step "$h: hostile inputs under valgrind memcheck (1000 calls each)" run_hostile_valgrind "$h"
+done
 for t in "${TESTS[@]}"; do
     step "$t against librelicore.so, same bits as the static build" check_shared "$t"
 done

@@ -12,13 +12,15 @@ set -euo pipefail
 
 FC=${FC:-gfortran}
 OUT=build/fortran
-LIB=target/release-c/librelicore.a
+LIB=${CARGO_TARGET_DIR:-target}/release-c/librelicore.a
 BIN=$OUT/test_blackbody
 DATA=(tests/data/blackbody.txt tests/data/blackbody_response.txt)
 COSMOLOGY_BIN=$OUT/test_cosmology
 COSMOLOGY_DATA=tests/data/cosmology.txt
 DECOUPLING_BIN=$OUT/test_decoupling
 DECOUPLING_DATA=tests/data/decoupling.txt
+THERMOMETRY_BIN=$OUT/test_thermometry
+THERMOMETRY_DATA=(tests/data/thermometry.txt tests/data/thermometry_response.txt)
 
 if [[ ! -f bindings/fortran/relicore.f90 ]]; then
   echo "run.sh: run from the repository root" >&2
@@ -47,11 +49,14 @@ mkdir -p "$OUT"
   -c tests/fortran/test_cosmology.f90 -o "$OUT/test_cosmology.o"
 "$FC" -std=f2018 -Wall -Werror -J "$OUT" \
   -c tests/fortran/test_decoupling.f90 -o "$OUT/test_decoupling.o"
+"$FC" -std=f2018 -Wall -Werror -J "$OUT" \
+  -c tests/fortran/test_thermometry.f90 -o "$OUT/test_thermometry.o"
 # the archive by path (gcc would take the shared library for -lrelicore when both exist); on
 # this glibc -lm is the only system library it needs
 "$FC" "$OUT/test_blackbody.o" "$OUT/vector_files.o" "$OUT/relicore.o" "$LIB" -lm -o "$BIN"
 "$FC" "$OUT/test_cosmology.o" "$OUT/vector_files.o" "$OUT/relicore.o" "$LIB" -lm -o "$COSMOLOGY_BIN"
 "$FC" "$OUT/test_decoupling.o" "$OUT/vector_files.o" "$OUT/relicore.o" "$LIB" -lm -o "$DECOUPLING_BIN"
+"$FC" "$OUT/test_thermometry.o" "$OUT/vector_files.o" "$OUT/relicore.o" "$LIB" -lm -o "$THERMOMETRY_BIN"
 
 # ------------------------------------------------------------------ vectors and tests in code
 log=$OUT/test_blackbody.log
@@ -213,6 +218,49 @@ if "$DECOUPLING_BIN" --dump "$DECOUPLING_DATA" >"$ddump"; then
   fi
 else
   fail "--dump (decoupling) failed"
+fi
+
+# ------------------------------------------------------------------ thermometry
+# the vectors of both thermometry files, the frames and the combined uncertainty; the dump (one
+# 'name bits' line per double value line) must be the C harness's bit for bit
+tlog=$OUT/test_thermometry.log
+if "$THERMOMETRY_BIN" "${THERMOMETRY_DATA[@]}" >"$tlog" 2>&1 && grep -qE '^[0-9]+ passed, 0 failed$' "$tlog"; then
+  pass "test_thermometry on ${THERMOMETRY_DATA[*]}: $(grep -E '^[0-9]+ passed' "$tlog")"
+else
+  grep '^FAIL' "$tlog" | head -n 20 || true
+  fail "test_thermometry (see $tlog)"
+fi
+tdump=$OUT/dump_thermometry.txt
+if "$THERMOMETRY_BIN" --dump "${THERMOMETRY_DATA[@]}" >"$tdump" 2>/dev/null; then
+  want_lines=$(cat "${THERMOMETRY_DATA[@]}" | awk '/^[a-z]/ && $(NF - 2) != "status" && $1 !~ /_f32/' | wc -l)
+  if [[ $(wc -l <"$tdump") -eq $want_lines ]]; then
+    pass "--dump (thermometry): $want_lines lines 'name bits'"
+  else
+    fail "--dump (thermometry): $(wc -l <"$tdump") lines for $want_lines vectors"
+  fi
+  cbin=build/c-tests/test_thermometry
+  if [[ -x $cbin ]]; then
+    if "$cbin" --dump "${THERMOMETRY_DATA[@]}" | awk '{print $1, toupper($2)}' | cmp -s - "$tdump"; then
+      pass "--dump (thermometry): Fortran and C agree bit for bit on $want_lines results"
+    else
+      fail "--dump (thermometry): Fortran and C results differ (compare $tdump with $cbin --dump)"
+    fi
+  else
+    echo "skip: $cbin not built (run tests/c/run.sh first) - no Fortran/C bit comparison"
+  fi
+else
+  fail "--dump (thermometry) failed"
+fi
+if command -v valgrind >/dev/null 2>&1; then
+  tvlog=$OUT/valgrind_thermometry.log
+  valgrind --quiet --leak-check=full --errors-for-leak-kinds=definite,indirect \
+    --log-file="$tvlog" "$THERMOMETRY_BIN" "${THERMOMETRY_DATA[@]}" >"$OUT/valgrind_thermometry.out" 2>&1 || true
+  if [[ ! -s $tvlog ]] && grep -qE '^[0-9]+ passed, 0 failed$' "$OUT/valgrind_thermometry.out"; then
+    pass "valgrind (thermometry): no memory errors or leaks"
+  else
+    fail "valgrind (thermometry) reported errors (see $tvlog)"
+    head -n 40 "$tvlog"
+  fi
 fi
 
 # ------------------------------------------------------------------ interfaces against the header

@@ -121,7 +121,7 @@ contains
     integer, intent(in) :: unit
     character(len=*), intent(in) :: file
     integer, intent(inout) :: lineno
-    character(len=64), intent(out) :: tokens(:)
+    character(len=*), intent(out) :: tokens(:)
     integer, intent(out) :: ntokens
     character(len=:), allocatable, intent(inout) :: where
     logical, intent(out) :: found
@@ -147,7 +147,7 @@ contains
   ! The blank-separated fields of line; at most size(tokens) of them.
   subroutine split(line, tokens, ntokens)
     character(len=*), intent(in) :: line
-    character(len=64), intent(out) :: tokens(:)
+    character(len=*), intent(out) :: tokens(:)
     integer, intent(out) :: ntokens
     integer :: pos, next
     ntokens = 0
@@ -179,7 +179,7 @@ contains
   ! nargs of a vector line "function TARGET nargs args... expected kind tolerance source" of the
   ! universe and decoupling files (0 to 2 arguments); stops on a malformed line.
   integer function vector_nargs(tokens, ntokens, where)
-    character(len=64), intent(in) :: tokens(:)
+    character(len=*), intent(in) :: tokens(:)
     integer, intent(in) :: ntokens
     character(len=*), intent(in) :: where
     if (ntokens < 3) error stop trim(program_name) // ': malformed vector at ' // where

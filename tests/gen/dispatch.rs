@@ -93,6 +93,66 @@ pub fn call_none_f64(name: &str, a: &[f64]) -> Option<Result<f64>> {
         ("thermal_sz_null_frequency", 1) => {
             relicore::blackbody::thermal_sz_null_frequency::<f64>(g(0))
         }
+        ("measured_spectral_radiance_wavelength", 6) => {
+            relicore::blackbody::measured_spectral_radiance_wavelength::<f64>(
+                g(0),
+                g(1),
+                g(2),
+                g(3),
+                g(4),
+                g(5),
+            )
+        }
+        ("measured_spectral_radiance_frequency", 6) => {
+            relicore::blackbody::measured_spectral_radiance_frequency::<f64>(
+                g(0),
+                g(1),
+                g(2),
+                g(3),
+                g(4),
+                g(5),
+            )
+        }
+        ("measured_band_radiance_wavelength", 7) => {
+            relicore::blackbody::measured_band_radiance_wavelength::<f64>(
+                g(0),
+                g(1),
+                g(2),
+                g(3),
+                g(4),
+                g(5),
+                g(6),
+            )
+        }
+        ("object_temperature_wavelength", 6) => {
+            relicore::blackbody::object_temperature_wavelength::<f64>(
+                g(0),
+                g(1),
+                g(2),
+                g(3),
+                g(4),
+                g(5),
+            )
+        }
+        ("object_temperature_frequency", 6) => relicore::blackbody::object_temperature_frequency::<
+            f64,
+        >(g(0), g(1), g(2), g(3), g(4), g(5)),
+        ("object_temperature_band", 7) => relicore::blackbody::object_temperature_band::<f64>(
+            g(0),
+            g(1),
+            g(2),
+            g(3),
+            g(4),
+            g(5),
+            g(6),
+        ),
+        ("band_radiance_temperature_derivative_wavelength", 3) => {
+            relicore::blackbody::band_radiance_temperature_derivative_wavelength::<f64>(
+                g(0),
+                g(1),
+                g(2),
+            )
+        }
         ("last_scattering_redshift_fit", 2) => {
             relicore::decoupling::last_scattering_redshift_fit::<f64>(g(0), g(1))
         }
@@ -128,6 +188,39 @@ pub fn call_none_f32(name: &str, a: &[f32]) -> Option<Result<f32>> {
         ("brightness_temperature_frequency", 2) => {
             relicore::blackbody::brightness_temperature_frequency::<f32>(g(0), g(1))
         }
+        ("measured_spectral_radiance_wavelength", 6) => {
+            relicore::blackbody::measured_spectral_radiance_wavelength::<f32>(
+                g(0),
+                g(1),
+                g(2),
+                g(3),
+                g(4),
+                g(5),
+            )
+        }
+        ("measured_spectral_radiance_frequency", 6) => {
+            relicore::blackbody::measured_spectral_radiance_frequency::<f32>(
+                g(0),
+                g(1),
+                g(2),
+                g(3),
+                g(4),
+                g(5),
+            )
+        }
+        ("object_temperature_wavelength", 6) => {
+            relicore::blackbody::object_temperature_wavelength::<f32>(
+                g(0),
+                g(1),
+                g(2),
+                g(3),
+                g(4),
+                g(5),
+            )
+        }
+        ("object_temperature_frequency", 6) => relicore::blackbody::object_temperature_frequency::<
+            f32,
+        >(g(0), g(1), g(2), g(3), g(4), g(5)),
         _ => return None,
     })
 }

@@ -16,16 +16,23 @@ from gen import table  # noqa: E402
 FUNCTIONS = table.load()
 
 
-def _args(receiver: str, python: str, topic: str | None = None) -> dict[str, tuple[str, ...]]:
+def _args(receiver: str, python: str, topic: str | None = None, results: bool = False) -> dict[str, tuple[str, ...]]:
     return {
         f.name: tuple(f.arg_names)
         for f in FUNCTIONS
         if f.receiver == receiver and f.python == python and (topic is None or f.topic == topic)
+        and (f.result_type is not None) == results
     }
 
 
-#: relicore.blackbody's regular functions -> element-wise parameters
+#: relicore.blackbody's regular functions that return a number -> element-wise parameters
 BLACKBODY = _args("none", "function", "blackbody")
+#: relicore.blackbody's regular functions that return a named result (a temperature with its
+#: uncertainty) -> element-wise parameters
+BLACKBODY_RESULTS = _args("none", "function", "blackbody", results=True)
+#: (name, number of leading single-value arguments) of the functions whose image path is the
+#: core's frame form (`<name>_array`)
+FRAMES = [(f.name, f.frame) for f in FUNCTIONS if f.frame]
 #: methods of relicore.Universe -> parameters after self
 UNIVERSE_METHODS = _args("universe", "method")
 #: read-only properties of relicore.Universe computed by the core (constants of a universe)

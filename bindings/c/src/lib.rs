@@ -19,7 +19,9 @@
 //! Module map: `status` (codes, messages, version), the generated `gen_constants` (physical
 //! constants, from `src/constants.rs`),
 //! `boundary` (plumbing), `calibration` (two-load calibration), `response` (response-weighted
-//! radiance), `universe` (the universe struct, its init function and parameters),
+//! radiance), `thermometry` (the temperature-with-uncertainty struct, the response-table,
+//! combined-uncertainty and frame forms of radiation thermometry), `universe` (the universe
+//! struct, its init function and parameters),
 //! `decoupling` (the thermal-history struct and its compute function), and the generated
 //! `gen_blackbody`, `gen_cosmology`, `gen_decoupling`: the exports of every regular function of
 //! `bindings/functions.toml` (`double`, `float` twins, array forms), written by
@@ -51,6 +53,8 @@ pub mod gen_blackbody;
 pub mod calibration;
 
 pub mod response;
+
+pub mod thermometry;
 
 pub mod universe;
 

@@ -169,7 +169,12 @@ pub(crate) fn irregular_signatures() -> Vec<(&'static str, Vec<&'static str>)> {
         .iter()
         .map(|(n, _)| (*n, CALIBRATED_ARGS.to_vec()));
     let two_load = std::iter::once(("two_load_calibration", TWO_LOAD_ARGS.to_vec()));
-    tables.chain(calibrated).chain(two_load).collect()
+    let thermometry = crate::thermometry::signatures();
+    tables
+        .chain(calibrated)
+        .chain(two_load)
+        .chain(thermometry)
+        .collect()
 }
 
 fn table<'a>(

@@ -2,8 +2,11 @@
 //! tables generated into `generated.rs`) and the one native class that calls any of them on
 //! scalars or loops it over arrays: `relicore._native.Function`.
 //!
-//! A regular function has up to four element-wise `f64` arguments and is called on nothing, on
-//! a universe or on a thermal history (its receiver). The receiver decides what the error
+//! A regular function has element-wise `f64` arguments (up to four as plain `fn` values, more
+//! as a slice) and is called on nothing, on a universe or on a thermal history (its receiver);
+//! it returns a number, or a result value written as one row of `width` floats (a temperature
+//! with its uncertainty). Where the core has a frame form (an image of signals with per-pixel or
+//! shared parameters) the loop goes through it. The receiver decides what the error
 //! message adds (a reason in the function's own terms, a universe the model refuses); the rest
 //! (broadcast inputs, the parallel loop with the GIL released, NaN on failure, the message
 //! naming the argument, its value and the index) is the same code for every function.
@@ -19,7 +22,7 @@ use crate::cosmology::PyUniverse;
 use crate::decoupling::PyThermalHistory;
 use crate::errors::{Arg, Site, core_error_because};
 use crate::generated::{HISTORY, PLAIN, UNIVERSE};
-use crate::kernels::{check_shape, elements, run, run_array};
+use crate::kernels::{check_shape, elements, run, run_array, run_frame, run_rows};
 
 pub(crate) type U = Universe<f64>;
 pub(crate) type H = ThermalHistory<f64>;
@@ -31,7 +34,15 @@ pub(crate) enum Body<R: 'static> {
     A2(fn(&R, f64, f64) -> Result<f64>),
     A3(fn(&R, f64, f64, f64) -> Result<f64>),
     A4(fn(&R, f64, f64, f64, f64) -> Result<f64>),
+    /// Any number of arguments, as a slice of the function's arity.
+    AN(fn(&R, &[f64]) -> Result<f64>),
+    /// A result value: writes the row of `Spec::width` floats of the arguments' result.
+    Row(fn(&R, &[f64], &mut [f64]) -> Result<()>),
 }
+
+/// A core frame function: (the inputs of one chunk, each of the chunk's length or of one
+/// value, the chunk's output).
+pub(crate) type FrameFn = fn(&[&[f64]], &mut [f64]) -> ArrayResult;
 
 /// A core array function (SIMD-dispatched): (receiver, the values of the first argument, the
 /// single values of the others in order, out).
@@ -53,6 +64,11 @@ pub(crate) struct Spec<R: 'static> {
     /// The core's SIMD array form, used when the first argument is an array and the others are
     /// single values.
     pub(crate) array: Option<ArrayFn<R>>,
+    /// The core's frame form and the number of leading arguments it takes as single values,
+    /// used when those are single values and the next argument has one value per element.
+    pub(crate) frame: Option<(usize, FrameFn)>,
+    /// Floats per element of the result: 1 for a number, the row width of a result value.
+    pub(crate) width: usize,
 }
 
 /// A value returned by the core as it is (`T`) or as a `Result<T>`, as a `Result<f64>`.
@@ -105,6 +121,7 @@ fn eval<R>(body: &Body<R>, r: &R, x: &[f64]) -> Option<Result<f64>> {
         (Body::A2(f), &[a, b]) => f(r, a, b),
         (Body::A3(f), &[a, b, c]) => f(r, a, b, c),
         (Body::A4(f), &[a, b, c, d]) => f(r, a, b, c, d),
+        (Body::AN(f), x) => f(r, x),
         _ => return None,
     })
 }
@@ -154,11 +171,35 @@ fn call<P: Receiver>(
     args: &[f64],
     nan_on_error: bool,
 ) -> PyResult<f64> {
+    if args.len() != spec.args.len() {
+        return Err(arity_error(spec, args.len()));
+    }
     match eval(&spec.body, receiver.core(), args) {
         None => Err(arity_error(spec, args.len())),
         Some(Ok(v)) => Ok(v),
         Some(Err(e)) if nan_on_error && is_element_error(spec, e) => Ok(f64::NAN),
         Some(Err(e)) => Err(failure(py, spec, receiver, args, None, e)),
+    }
+}
+
+fn call_row<P: Receiver>(
+    py: Python<'_>,
+    spec: &Spec<P::Core>,
+    receiver: &P,
+    args: &[f64],
+    nan_on_error: bool,
+) -> PyResult<Vec<f64>> {
+    let Body::Row(f) = spec.body else {
+        return call(py, spec, receiver, args, nan_on_error).map(|v| vec![v]);
+    };
+    if args.len() != spec.args.len() {
+        return Err(arity_error(spec, args.len()));
+    }
+    let mut row = vec![f64::NAN; spec.width];
+    match f(receiver.core(), args, &mut row) {
+        Ok(()) => Ok(row),
+        Err(e) if nan_on_error && is_element_error(spec, e) => Ok(vec![f64::NAN; spec.width]),
+        Err(e) => Err(failure(py, spec, receiver, args, None, e)),
     }
 }
 
@@ -177,8 +218,12 @@ fn map<P: Receiver>(
     let out = out
         .as_slice_mut()
         .map_err(|e| PyValueError::new_err(format!("{}: out: {e}", spec.label)))?;
-    let n = out.len();
+    let width = spec.width.max(1);
+    let n = out.len() / width;
     check_shape(shape, n, spec.label)?;
+    if n * width != out.len() || inputs.len() != spec.args.len() {
+        return Err(arity_error(spec, inputs.len()));
+    }
     let x = elements(inputs, n, spec.label)?;
     let keep = |e: Error| is_element_error(spec, e);
     let single = |s: &[f64]| s.len() == 1;
@@ -189,25 +234,50 @@ fn map<P: Receiver>(
         }
         _ => None,
     };
-    let failed = match (array_path, &spec.body, x.as_slice()) {
-        (Some((f, first, values)), _, _) => {
-            py.detach(|| run_array(first, out, nan_on_error, |xs, os| f(r, xs, &values, os)))
+    let frame_path = match spec.frame {
+        Some((k, f))
+            if x.iter().take(k).all(|s| single(s)) && x.get(k).is_some_and(|s| s.len() == n) =>
+        {
+            Some(f)
         }
-        (None, Body::A1(f), &[a]) => py.detach(|| run([a], out, nan_on_error, keep, |[a]| f(r, a))),
-        (None, Body::A2(f), &[a, b]) => {
-            py.detach(|| run([a, b], out, nan_on_error, keep, |[a, b]| f(r, a, b)))
+        _ => None,
+    };
+    let failed = if let Some(f) = frame_path {
+        py.detach(|| run_frame(&x, out, nan_on_error, f))
+    } else {
+        match (array_path, &spec.body, x.as_slice()) {
+            (_, Body::AN(f), _) => py.detach(|| {
+                run_rows(&x, out, 1, nan_on_error, keep, |v, o| {
+                    for slot in o.iter_mut() {
+                        *slot = f(r, v)?;
+                    }
+                    Ok(())
+                })
+            }),
+            (_, Body::Row(f), _) => {
+                py.detach(|| run_rows(&x, out, width, nan_on_error, keep, |v, o| f(r, v, o)))
+            }
+            (Some((f, first, values)), _, _) => {
+                py.detach(|| run_array(first, out, nan_on_error, |xs, os| f(r, xs, &values, os)))
+            }
+            (None, Body::A1(f), &[a]) => {
+                py.detach(|| run([a], out, nan_on_error, keep, |[a]| f(r, a)))
+            }
+            (None, Body::A2(f), &[a, b]) => {
+                py.detach(|| run([a, b], out, nan_on_error, keep, |[a, b]| f(r, a, b)))
+            }
+            (None, Body::A3(f), &[a, b, c]) => py.detach(|| {
+                run([a, b, c], out, nan_on_error, keep, |[a, b, c]| {
+                    f(r, a, b, c)
+                })
+            }),
+            (None, Body::A4(f), &[a, b, c, d]) => py.detach(|| {
+                run([a, b, c, d], out, nan_on_error, keep, |[a, b, c, d]| {
+                    f(r, a, b, c, d)
+                })
+            }),
+            _ => return Err(arity_error(spec, x.len())),
         }
-        (None, Body::A3(f), &[a, b, c]) => py.detach(|| {
-            run([a, b, c], out, nan_on_error, keep, |[a, b, c]| {
-                f(r, a, b, c)
-            })
-        }),
-        (None, Body::A4(f), &[a, b, c, d]) => py.detach(|| {
-            run([a, b, c, d], out, nan_on_error, keep, |[a, b, c, d]| {
-                f(r, a, b, c, d)
-            })
-        }),
-        _ => return Err(arity_error(spec, x.len())),
     };
     match failed {
         None => Ok(()),
@@ -309,6 +379,35 @@ impl Function {
     #[getter]
     fn arguments(&self) -> Vec<&'static str> {
         self.parts().3.to_vec()
+    }
+
+    /// Floats per element of the result: 1 for a number, more for a result value (a row).
+    #[getter]
+    fn width(&self) -> usize {
+        match self.entry {
+            Entry::Plain(s) => s.width,
+            Entry::Universe(s) => s.width,
+            Entry::History(s) => s.width,
+        }
+    }
+
+    /// Calls a function with a result value on scalars: its row of `width` floats (NaN with
+    /// `nan_on_error` when the arguments fail).
+    #[pyo3(signature = (receiver, args, nan_on_error=false))]
+    fn call_row(
+        &self,
+        py: Python<'_>,
+        receiver: &Bound<'_, PyAny>,
+        args: Vec<f64>,
+        nan_on_error: bool,
+    ) -> PyResult<Vec<f64>> {
+        with_receiver!(self.entry, receiver, |spec, r| call_row(
+            py,
+            spec,
+            r,
+            &args,
+            nan_on_error
+        ))
     }
 
     /// Calls the function on scalars (of `receiver`, None for a plain function); with

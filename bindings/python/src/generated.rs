@@ -5,7 +5,7 @@
 //! The regular functions as `functions.rs` calls them: name, topic, how messages name them,
 //! element-wise parameters, the core call and the SIMD array form where there is one.
 
-use relicore::ArrayResult;
+use relicore::{ArrayResult, ElementError, Error};
 use relicore_dispatch::widest;
 
 use crate::functions::{Body, H, Lift, Spec, U};
@@ -20,6 +20,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, wavelength_m, temperature_k| relicore::blackbody::spectral_radiance_wavelength(wavelength_m, temperature_k).lift()),
         array: Some(spectral_radiance_wavelength_array),
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "spectral_radiance_frequency",
@@ -29,6 +31,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, frequency_hz, temperature_k| relicore::blackbody::spectral_radiance_frequency(frequency_hz, temperature_k).lift()),
         array: Some(spectral_radiance_frequency_array),
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "spectral_radiance_wavenumber",
@@ -38,6 +42,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, wavenumber_per_m, temperature_k| relicore::blackbody::spectral_radiance_wavenumber(wavenumber_per_m, temperature_k).lift()),
         array: Some(spectral_radiance_wavenumber_array),
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "photon_radiance_wavelength",
@@ -47,6 +53,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, wavelength_m, temperature_k| relicore::blackbody::photon_radiance_wavelength(wavelength_m, temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "photon_radiance_frequency",
@@ -56,6 +64,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, frequency_hz, temperature_k| relicore::blackbody::photon_radiance_frequency(frequency_hz, temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "photon_radiance_wavenumber",
@@ -65,6 +75,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, wavenumber_per_m, temperature_k| relicore::blackbody::photon_radiance_wavenumber(wavenumber_per_m, temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "radiance_temperature_derivative_wavelength",
@@ -74,6 +86,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, wavelength_m, temperature_k| relicore::blackbody::radiance_temperature_derivative_wavelength(wavelength_m, temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "radiance_temperature_derivative_frequency",
@@ -83,6 +97,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, frequency_hz, temperature_k| relicore::blackbody::radiance_temperature_derivative_frequency(frequency_hz, temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "radiant_exitance",
@@ -92,6 +108,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A1(|_, temperature_k| relicore::blackbody::radiant_exitance(temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "photon_exitance",
@@ -101,6 +119,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A1(|_, temperature_k| relicore::blackbody::photon_exitance(temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "photon_number_density",
@@ -110,6 +130,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A1(|_, temperature_k| relicore::blackbody::photon_number_density(temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "radiation_energy_density",
@@ -119,6 +141,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A1(|_, temperature_k| relicore::blackbody::radiation_energy_density(temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "peak_wavelength",
@@ -128,6 +152,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A1(|_, temperature_k| relicore::blackbody::peak_wavelength(temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "peak_frequency",
@@ -137,6 +163,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A1(|_, temperature_k| relicore::blackbody::peak_frequency(temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "peak_wavenumber",
@@ -146,6 +174,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A1(|_, temperature_k| relicore::blackbody::peak_wavenumber(temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "photon_peak_wavelength",
@@ -155,6 +185,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A1(|_, temperature_k| relicore::blackbody::photon_peak_wavelength(temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "photon_peak_frequency",
@@ -164,6 +196,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A1(|_, temperature_k| relicore::blackbody::photon_peak_frequency(temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "temperature_from_peak_wavelength",
@@ -173,6 +207,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A1(|_, wavelength_m| relicore::blackbody::temperature_from_peak_wavelength(wavelength_m).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "temperature_from_peak_frequency",
@@ -182,6 +218,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A1(|_, frequency_hz| relicore::blackbody::temperature_from_peak_frequency(frequency_hz).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "band_fraction_wavelength",
@@ -191,6 +229,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A3(|_, lower_m, upper_m, temperature_k| relicore::blackbody::band_fraction_wavelength(lower_m, upper_m, temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "band_radiance_wavelength",
@@ -200,6 +240,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A3(|_, lower_m, upper_m, temperature_k| relicore::blackbody::band_radiance_wavelength(lower_m, upper_m, temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "band_photon_radiance_wavelength",
@@ -209,6 +251,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A3(|_, lower_m, upper_m, temperature_k| relicore::blackbody::band_photon_radiance_wavelength(lower_m, upper_m, temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "band_radiance_frequency",
@@ -218,6 +262,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A3(|_, lower_hz, upper_hz, temperature_k| relicore::blackbody::band_radiance_frequency(lower_hz, upper_hz, temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "temperature_from_band_radiance_wavelength",
@@ -227,6 +273,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A3(|_, lower_m, upper_m, radiance| relicore::blackbody::temperature_from_band_radiance_wavelength(lower_m, upper_m, radiance).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "brightness_temperature_wavelength",
@@ -236,6 +284,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, wavelength_m, spectral_radiance| relicore::blackbody::brightness_temperature_wavelength(wavelength_m, spectral_radiance).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "brightness_temperature_frequency",
@@ -245,6 +295,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, frequency_hz, spectral_radiance| relicore::blackbody::brightness_temperature_frequency(frequency_hz, spectral_radiance).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "rayleigh_jeans_temperature",
@@ -254,6 +306,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, frequency_hz, spectral_radiance| relicore::blackbody::rayleigh_jeans_temperature(frequency_hz, spectral_radiance).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "ratio_temperature",
@@ -263,6 +317,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A4(|_, wavelength_1_m, wavelength_2_m, radiance_ratio, emissivity_ratio| relicore::blackbody::ratio_temperature(wavelength_1_m, wavelength_2_m, radiance_ratio, emissivity_ratio).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "thermodynamic_to_rayleigh_jeans_factor",
@@ -272,6 +328,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, frequency_hz, cmb_temperature_k| relicore::blackbody::thermodynamic_to_rayleigh_jeans_factor(frequency_hz, cmb_temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "kcmb_to_mjy_per_sr",
@@ -281,6 +339,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, frequency_hz, cmb_temperature_k| relicore::blackbody::kcmb_to_mjy_per_sr(frequency_hz, cmb_temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "thermal_sz_spectral_shape",
@@ -290,6 +350,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, frequency_hz, cmb_temperature_k| relicore::blackbody::thermal_sz_spectral_shape(frequency_hz, cmb_temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "thermal_sz_temperature_shape",
@@ -299,6 +361,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, frequency_hz, cmb_temperature_k| relicore::blackbody::thermal_sz_temperature_shape(frequency_hz, cmb_temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "thermal_sz_null_frequency",
@@ -308,6 +372,151 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A1(|_, cmb_temperature_k| relicore::blackbody::thermal_sz_null_frequency(cmb_temperature_k).lift()),
         array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "measured_spectral_radiance_wavelength",
+        topic: "blackbody",
+        label: "measured_spectral_radiance_wavelength",
+        args: &["wavelength_m", "object_temperature_k", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
+        free: false,
+        body: Body::AN(|_, x| match *x { [wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "measured_spectral_radiance_frequency",
+        topic: "blackbody",
+        label: "measured_spectral_radiance_frequency",
+        args: &["frequency_hz", "object_temperature_k", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
+        free: false,
+        body: Body::AN(|_, x| match *x { [frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "measured_band_radiance_wavelength",
+        topic: "blackbody",
+        label: "measured_band_radiance_wavelength",
+        args: &["lower_m", "upper_m", "object_temperature_k", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
+        free: false,
+        body: Body::AN(|_, x| match *x { [lower_m, upper_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_band_radiance_wavelength(lower_m, upper_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "object_temperature_wavelength",
+        topic: "blackbody",
+        label: "object_temperature_wavelength",
+        args: &["wavelength_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
+        free: false,
+        body: Body::AN(|_, x| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_wavelength(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        array: None,
+        frame: Some((1, object_temperature_wavelength_frame)),
+        width: 1,
+    },
+    Spec {
+        name: "object_temperature_frequency",
+        topic: "blackbody",
+        label: "object_temperature_frequency",
+        args: &["frequency_hz", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
+        free: false,
+        body: Body::AN(|_, x| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_frequency(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        array: None,
+        frame: Some((1, object_temperature_frequency_frame)),
+        width: 1,
+    },
+    Spec {
+        name: "object_temperature_band",
+        topic: "blackbody",
+        label: "object_temperature_band",
+        args: &["lower_m", "upper_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
+        free: false,
+        body: Body::AN(|_, x| match *x { [lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_band(lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        array: None,
+        frame: Some((2, object_temperature_band_frame)),
+        width: 1,
+    },
+    Spec {
+        name: "band_radiance_temperature_derivative_wavelength",
+        topic: "blackbody",
+        label: "band_radiance_temperature_derivative_wavelength",
+        args: &["lower_m", "upper_m", "temperature_k"],
+        free: false,
+        body: Body::A3(|_, lower_m, upper_m, temperature_k| relicore::blackbody::band_radiance_temperature_derivative_wavelength(lower_m, upper_m, temperature_k).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "brightness_temperature_wavelength_with_uncertainty",
+        topic: "blackbody",
+        label: "brightness_temperature_wavelength_with_uncertainty",
+        args: &["wavelength_m", "spectral_radiance", "spectral_radiance_uncertainty"],
+        free: false,
+        body: Body::Row(|_, x, out| match *x { [wavelength_m, spectral_radiance, spectral_radiance_uncertainty] => relicore::blackbody::brightness_temperature_wavelength_with_uncertainty(wavelength_m, spectral_radiance, spectral_radiance_uncertainty).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        array: None,
+        frame: None,
+        width: 8,
+    },
+    Spec {
+        name: "brightness_temperature_frequency_with_uncertainty",
+        topic: "blackbody",
+        label: "brightness_temperature_frequency_with_uncertainty",
+        args: &["frequency_hz", "spectral_radiance", "spectral_radiance_uncertainty"],
+        free: false,
+        body: Body::Row(|_, x, out| match *x { [frequency_hz, spectral_radiance, spectral_radiance_uncertainty] => relicore::blackbody::brightness_temperature_frequency_with_uncertainty(frequency_hz, spectral_radiance, spectral_radiance_uncertainty).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        array: None,
+        frame: None,
+        width: 8,
+    },
+    Spec {
+        name: "object_temperature_wavelength_with_uncertainty",
+        topic: "blackbody",
+        label: "object_temperature_wavelength_with_uncertainty",
+        args: &["wavelength_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k", "signal_uncertainty", "emissivity_uncertainty", "reflected_temperature_uncertainty_k", "transmittance_uncertainty", "path_temperature_uncertainty_k"],
+        free: false,
+        body: Body::Row(|_, x, out| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_wavelength_with_uncertainty(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        array: None,
+        frame: None,
+        width: 8,
+    },
+    Spec {
+        name: "object_temperature_frequency_with_uncertainty",
+        topic: "blackbody",
+        label: "object_temperature_frequency_with_uncertainty",
+        args: &["frequency_hz", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k", "signal_uncertainty", "emissivity_uncertainty", "reflected_temperature_uncertainty_k", "transmittance_uncertainty", "path_temperature_uncertainty_k"],
+        free: false,
+        body: Body::Row(|_, x, out| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_frequency_with_uncertainty(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        array: None,
+        frame: None,
+        width: 8,
+    },
+    Spec {
+        name: "object_temperature_band_with_uncertainty",
+        topic: "blackbody",
+        label: "object_temperature_band_with_uncertainty",
+        args: &["lower_m", "upper_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k", "signal_uncertainty", "emissivity_uncertainty", "reflected_temperature_uncertainty_k", "transmittance_uncertainty", "path_temperature_uncertainty_k"],
+        free: false,
+        body: Body::Row(|_, x, out| match *x { [lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_band_with_uncertainty(lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        array: None,
+        frame: None,
+        width: 8,
+    },
+    Spec {
+        name: "calibrated_temperature_with_uncertainty",
+        topic: "blackbody",
+        label: "calibrated_temperature_with_uncertainty",
+        args: &["frequency_hz", "reading_hot", "temperature_hot_k", "reading_cold", "temperature_cold_k", "reading", "reading_hot_uncertainty", "temperature_hot_uncertainty_k", "reading_cold_uncertainty", "temperature_cold_uncertainty_k", "reading_uncertainty"],
+        free: false,
+        body: Body::Row(|_, x, out| match *x { [frequency_hz, reading_hot, temperature_hot_k, reading_cold, temperature_cold_k, reading, reading_hot_uncertainty, temperature_hot_uncertainty_k, reading_cold_uncertainty, temperature_cold_uncertainty_k, reading_uncertainty] => relicore::blackbody::calibrated_temperature_with_uncertainty(frequency_hz, reading_hot, temperature_hot_k, reading_cold, temperature_cold_k, reading, reading_hot_uncertainty, temperature_hot_uncertainty_k, reading_cold_uncertainty, temperature_cold_uncertainty_k, reading_uncertainty).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        array: None,
+        frame: None,
+        width: 8,
     },
     Spec {
         name: "last_scattering_redshift_fit",
@@ -317,6 +526,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, omega_baryon_h2, omega_matter_h2| relicore::decoupling::last_scattering_redshift_fit(omega_baryon_h2, omega_matter_h2).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "drag_redshift_fit",
@@ -326,6 +537,8 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::A2(|_, omega_baryon_h2, omega_matter_h2| relicore::decoupling::drag_redshift_fit(omega_baryon_h2, omega_matter_h2).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
 ];
 
@@ -339,6 +552,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A0(|u| u.hubble_distance_mpc().lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "hubble_time_gyr",
@@ -348,6 +563,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A0(|u| u.hubble_time_gyr().lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "omega_radiation",
@@ -357,6 +574,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A0(|u| u.omega_radiation().lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "omega_dark_energy",
@@ -366,6 +585,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A0(|u| u.omega_dark_energy().lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "matter_radiation_equality_redshift",
@@ -375,6 +596,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A0(|u| u.matter_radiation_equality_redshift().lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "dimensionless_hubble",
@@ -384,6 +607,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.dimensionless_hubble(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "hubble_parameter_km_s_mpc",
@@ -393,6 +618,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.hubble_parameter_km_s_mpc(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "omega_matter_at",
@@ -402,6 +629,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.omega_matter_at(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "omega_radiation_at",
@@ -411,6 +640,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.omega_radiation_at(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "omega_dark_energy_at",
@@ -420,6 +651,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.omega_dark_energy_at(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "omega_curvature_at",
@@ -429,6 +662,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.omega_curvature_at(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "critical_density_kg_m3",
@@ -438,6 +673,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.critical_density_kg_m3(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "cmb_temperature_at_k",
@@ -447,6 +684,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.cmb_temperature_at_k(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "comoving_distance_mpc",
@@ -456,6 +695,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.comoving_distance_mpc(z).lift()),
         array: Some(comoving_distance_mpc_array),
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "transverse_comoving_distance_mpc",
@@ -465,6 +706,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.transverse_comoving_distance_mpc(z).lift()),
         array: Some(transverse_comoving_distance_mpc_array),
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "angular_diameter_distance_mpc",
@@ -474,6 +717,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.angular_diameter_distance_mpc(z).lift()),
         array: Some(angular_diameter_distance_mpc_array),
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "luminosity_distance_mpc",
@@ -483,6 +728,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.luminosity_distance_mpc(z).lift()),
         array: Some(luminosity_distance_mpc_array),
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "distance_modulus",
@@ -492,6 +739,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.distance_modulus(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "comoving_volume_gpc3",
@@ -501,6 +750,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.comoving_volume_gpc3(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "differential_comoving_volume_mpc3_sr",
@@ -510,6 +761,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.differential_comoving_volume_mpc3_sr(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "transverse_scale_kpc_per_arcsec",
@@ -519,6 +772,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.transverse_scale_kpc_per_arcsec(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "lookback_time_gyr",
@@ -528,6 +783,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.lookback_time_gyr(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "age_gyr",
@@ -537,6 +794,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.age_gyr(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "conformal_time_mpc",
@@ -546,6 +805,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, z| u.conformal_time_mpc(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "angular_diameter_distance_between_mpc",
@@ -555,6 +816,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A2(|u, z1, z2| u.angular_diameter_distance_between_mpc(z1, z2).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "redshift_at_age_gyr",
@@ -564,6 +827,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, age_gyr| u.redshift_at_age_gyr(age_gyr).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "redshift_at_lookback_time_gyr",
@@ -573,6 +838,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, lookback_gyr| u.redshift_at_lookback_time_gyr(lookback_gyr).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "redshift_at_comoving_distance_mpc",
@@ -582,6 +849,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, distance_mpc| u.redshift_at_comoving_distance_mpc(distance_mpc).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "redshift_at_luminosity_distance_mpc",
@@ -591,6 +860,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: false,
         body: Body::A1(|u, distance_mpc| u.redshift_at_luminosity_distance_mpc(distance_mpc).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "saha_ionized_fraction",
@@ -600,6 +871,8 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         free: true,
         body: Body::A1(|u, z| relicore::decoupling::saha_ionized_fraction(u, z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
 ];
 
@@ -613,6 +886,8 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         free: false,
         body: Body::A1(|h, z| h.ionized_fraction(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "matter_temperature_k",
@@ -622,6 +897,8 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         free: false,
         body: Body::A1(|h, z| h.matter_temperature_k(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "optical_depth",
@@ -631,6 +908,8 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         free: false,
         body: Body::A1(|h, z| h.optical_depth(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "visibility",
@@ -640,6 +919,8 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         free: false,
         body: Body::A1(|h, z| h.visibility(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "sound_horizon_mpc",
@@ -649,6 +930,8 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         free: false,
         body: Body::A1(|h, z| h.sound_horizon_mpc(z).lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "last_scattering_redshift",
@@ -658,6 +941,8 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         free: false,
         body: Body::A0(|h| h.last_scattering_redshift().lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "drag_redshift",
@@ -667,6 +952,8 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         free: false,
         body: Body::A0(|h| h.drag_redshift().lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "sound_horizon_last_scattering_mpc",
@@ -676,6 +963,8 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         free: false,
         body: Body::A0(|h| h.sound_horizon_last_scattering_mpc().lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "sound_horizon_drag_mpc",
@@ -685,6 +974,8 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         free: false,
         body: Body::A0(|h| h.sound_horizon_drag_mpc().lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "angular_scale_last_scattering",
@@ -694,6 +985,8 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         free: false,
         body: Body::A0(|h| h.angular_scale_last_scattering().lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "age_at_last_scattering_yr",
@@ -703,6 +996,8 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         free: false,
         body: Body::A0(|h| h.age_at_last_scattering_yr().lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "temperature_at_last_scattering_k",
@@ -712,6 +1007,8 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         free: false,
         body: Body::A0(|h| h.temperature_at_last_scattering_k().lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "visibility_peak_redshift",
@@ -721,6 +1018,8 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         free: false,
         body: Body::A0(|h| h.visibility_peak_redshift().lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "thermal_decoupling_redshift",
@@ -730,6 +1029,8 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         free: false,
         body: Body::A0(|h| h.thermal_decoupling_redshift().lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
     Spec {
         name: "reionization_optical_depth",
@@ -739,6 +1040,8 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         free: false,
         body: Body::A0(|h| h.reionization_optical_depth().lift()),
         array: None,
+        frame: None,
+        width: 1,
     },
 ];
 
@@ -788,4 +1091,39 @@ fn angular_diameter_distance_mpc_array(r: &U, x: &[f64], rest: &[f64], out: &mut
 fn luminosity_distance_mpc_array(r: &U, x: &[f64], rest: &[f64], out: &mut [f64]) -> ArrayResult {
     let _ = rest;
     widest!(|r: &U, x: &[f64], out: &mut [f64]| -> ArrayResult { r.luminosity_distance_mpc_array(x, out) })
+}
+
+/// `object_temperature_wavelength_array` of the core (a frame: the first 1 argument(s) single values, the others slices of the chunk's length or of one value).
+fn object_temperature_wavelength_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
+    let &[wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+    };
+    let wavelength_m = wavelength_m.first().copied().unwrap_or(f64::NAN);
+    relicore::blackbody::object_temperature_wavelength_array(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out)
+}
+
+/// `object_temperature_frequency_array` of the core (a frame: the first 1 argument(s) single values, the others slices of the chunk's length or of one value).
+fn object_temperature_frequency_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
+    let &[frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+    };
+    let frequency_hz = frequency_hz.first().copied().unwrap_or(f64::NAN);
+    relicore::blackbody::object_temperature_frequency_array(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out)
+}
+
+/// `object_temperature_band_array` of the core (a frame: the first 2 argument(s) single values, the others slices of the chunk's length or of one value).
+fn object_temperature_band_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
+    let &[lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+    };
+    let lower_m = lower_m.first().copied().unwrap_or(f64::NAN);
+    let upper_m = upper_m.first().copied().unwrap_or(f64::NAN);
+    relicore::blackbody::object_temperature_band_array(lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out)
+}
+
+/// A `TemperatureUncertainty` as one row of 8 f64 (its fields in order; `inputs` as a float).
+fn temperature_uncertainty_row(v: relicore::blackbody::TemperatureUncertainty<f64>, out: &mut [f64]) {
+    for (o, x) in out.iter_mut().zip([v.temperature_k].into_iter().chain([v.combined_standard_uncertainty_k]).chain(v.sensitivity_coefficients).chain([f64::from(v.inputs)])) {
+        *o = x;
+    }
 }

@@ -54,12 +54,22 @@ fn split(
     out: &mut [f64],
     body: impl Fn(usize, &mut [f64]) -> Option<(usize, Error)> + Sync,
 ) -> Option<(usize, Error)> {
-    let n = out.len();
+    split_rows(out, 1, body)
+}
+
+/// [`split`] over rows of `width` floats: `start` counts rows and every part holds whole rows.
+fn split_rows(
+    out: &mut [f64],
+    width: usize,
+    body: impl Fn(usize, &mut [f64]) -> Option<(usize, Error)> + Sync,
+) -> Option<(usize, Error)> {
+    let width = width.max(1);
+    let n = out.len() / width;
     let threads = worker_count().min(n / PARALLEL_MIN.max(1) + 1);
     if n < PARALLEL_MIN || threads < 2 {
         return body(0, out);
     }
-    let chunk = n.div_ceil(threads);
+    let chunk = n.div_ceil(threads) * width;
     let body = &body;
     let spawned = std::thread::scope(|s| {
         let mut parts = out.chunks_mut(chunk);
@@ -68,7 +78,7 @@ fn split(
         let own = parts.next();
         let mut handles = Vec::with_capacity(threads);
         for (k, part) in parts.enumerate() {
-            let start = (k + 1) * chunk;
+            let start = (k + 1) * (chunk / width);
             let h = std::thread::Builder::new().spawn_scoped(s, move || body(start, part));
             handles.push(h);
         }
@@ -92,6 +102,84 @@ fn split(
         Some(first) => first,
         None => body(0, out),
     }
+}
+
+/// The most element-wise arguments a regular function has (the loops below gather them on the
+/// stack).
+const MAX_ARGS: usize = 16;
+
+/// [`run`] for any number of inputs and a result of `width` floats per element:
+/// `f(values, row)` writes element i's row `out[i·width..(i + 1)·width]` from its input values
+/// (input k read at i, or at 0 when it has one element). A failing element's row is NaN when
+/// `nan_on_error` and `keep_going(err)`; otherwise the failure of the lowest index is returned.
+/// Split over cores as [`run`], with the serial bits.
+pub(crate) fn run_rows(
+    inputs: &[&[f64]],
+    out: &mut [f64],
+    width: usize,
+    nan_on_error: bool,
+    keep_going: impl Fn(Error) -> bool + Sync,
+    f: impl Fn(&[f64], &mut [f64]) -> Result<()> + Sync,
+) -> Option<(usize, Error)> {
+    let m = inputs.len();
+    if m > MAX_ARGS {
+        return Some((0, Error::LengthMismatch(0)));
+    }
+    let width = width.max(1);
+    split_rows(out, width, |start, part| {
+        let mut x = [f64::NAN; MAX_ARGS];
+        for (j, row) in part.chunks_exact_mut(width).enumerate() {
+            let i = start + j;
+            for (xk, s) in x.iter_mut().zip(inputs) {
+                *xk = s
+                    .get(if s.len() == 1 { 0 } else { i })
+                    .copied()
+                    .unwrap_or(f64::NAN);
+            }
+            let values = x.get(..m).unwrap_or(&[]);
+            match f(values, row) {
+                Ok(()) => {}
+                Err(e) if nan_on_error && keep_going(e) => row.fill(f64::NAN),
+                Err(e) => return Some((i, e)),
+            }
+        }
+        None
+    })
+}
+
+/// `out[i]` through a core frame function `f(chunk inputs, chunk out)` (the signals and the
+/// per-pixel parameters cut to each chunk, single values passed whole), split over cores as
+/// [`run`]; every element is the core's frame element, which is bit for bit the scalar
+/// function's. Returns the first failing element; with `nan_on_error` the call succeeds with its
+/// NaN.
+pub(crate) fn run_frame(
+    inputs: &[&[f64]],
+    out: &mut [f64],
+    nan_on_error: bool,
+    f: impl Fn(&[&[f64]], &mut [f64]) -> ArrayResult + Sync,
+) -> Option<(usize, Error)> {
+    let m = inputs.len();
+    if m > MAX_ARGS {
+        return Some((0, Error::LengthMismatch(0)));
+    }
+    let n = out.len();
+    let first = split(out, |start, part| {
+        let mut chunk: [&[f64]; MAX_ARGS] = [&[]; MAX_ARGS];
+        for (c, s) in chunk.iter_mut().zip(inputs) {
+            *c = if s.len() == 1 && n != 1 {
+                s
+            } else {
+                match s.get(start..start + part.len()) {
+                    Some(piece) => piece,
+                    None => return Some((start, Error::LengthMismatch(0))),
+                }
+            };
+        }
+        f(chunk.get(..m).unwrap_or(&[]), part)
+            .err()
+            .map(|e| (start + e.index, e.error))
+    });
+    if nan_on_error { None } else { first }
 }
 
 /// Arrays shorter than this are computed on the calling thread (thread start-up, tens of

@@ -40,6 +40,7 @@ mod gen_constants;
 #[rustfmt::skip]
 mod generated;
 mod kernels;
+mod thermometry;
 
 /// A dict of (name, value) pairs: the constants of `gen_constants`.
 fn constants_dict<'py>(py: Python<'py>, items: &[(&str, f64)]) -> PyResult<Bound<'py, PyDict>> {
@@ -78,6 +79,8 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_function(wrap_pyfunction!(blackbody::table_map, m)?)?;
     m.add_function(wrap_pyfunction!(blackbody::calibrated_map, m)?)?;
     m.add_function(wrap_pyfunction!(blackbody::irregular_signatures, m)?)?;
+    m.add_function(wrap_pyfunction!(thermometry::thermometry_table_map, m)?)?;
+    m.add_function(wrap_pyfunction!(thermometry::combined_uncertainty, m)?)?;
     m.add_class::<cosmology::PyUniverse>()?;
     m.add_function(wrap_pyfunction!(cosmology::universe_defaults, m)?)?;
     m.add_class::<decoupling::PyThermalHistory>()?;

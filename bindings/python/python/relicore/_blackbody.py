@@ -11,8 +11,10 @@ from typing import Any
 from relicore._elementwise import FUNCTIONS as _F
 from relicore._elementwise import apply as _apply
 from relicore._elementwise import publish as _publish
+from relicore import _results
+from relicore._elementwise import apply_result as _apply_result
 
-__all__ = ['spectral_radiance_wavelength', 'spectral_radiance_frequency', 'spectral_radiance_wavenumber', 'photon_radiance_wavelength', 'photon_radiance_frequency', 'photon_radiance_wavenumber', 'radiance_temperature_derivative_wavelength', 'radiance_temperature_derivative_frequency', 'radiant_exitance', 'photon_exitance', 'photon_number_density', 'radiation_energy_density', 'peak_wavelength', 'peak_frequency', 'peak_wavenumber', 'photon_peak_wavelength', 'photon_peak_frequency', 'temperature_from_peak_wavelength', 'temperature_from_peak_frequency', 'band_fraction_wavelength', 'band_radiance_wavelength', 'band_photon_radiance_wavelength', 'band_radiance_frequency', 'temperature_from_band_radiance_wavelength', 'brightness_temperature_wavelength', 'brightness_temperature_frequency', 'rayleigh_jeans_temperature', 'ratio_temperature', 'thermodynamic_to_rayleigh_jeans_factor', 'kcmb_to_mjy_per_sr', 'thermal_sz_spectral_shape', 'thermal_sz_temperature_shape', 'thermal_sz_null_frequency']
+__all__ = ['spectral_radiance_wavelength', 'spectral_radiance_frequency', 'spectral_radiance_wavenumber', 'photon_radiance_wavelength', 'photon_radiance_frequency', 'photon_radiance_wavenumber', 'radiance_temperature_derivative_wavelength', 'radiance_temperature_derivative_frequency', 'radiant_exitance', 'photon_exitance', 'photon_number_density', 'radiation_energy_density', 'peak_wavelength', 'peak_frequency', 'peak_wavenumber', 'photon_peak_wavelength', 'photon_peak_frequency', 'temperature_from_peak_wavelength', 'temperature_from_peak_frequency', 'band_fraction_wavelength', 'band_radiance_wavelength', 'band_photon_radiance_wavelength', 'band_radiance_frequency', 'temperature_from_band_radiance_wavelength', 'brightness_temperature_wavelength', 'brightness_temperature_frequency', 'rayleigh_jeans_temperature', 'ratio_temperature', 'thermodynamic_to_rayleigh_jeans_factor', 'kcmb_to_mjy_per_sr', 'thermal_sz_spectral_shape', 'thermal_sz_temperature_shape', 'thermal_sz_null_frequency', 'measured_spectral_radiance_wavelength', 'measured_spectral_radiance_frequency', 'measured_band_radiance_wavelength', 'object_temperature_wavelength', 'object_temperature_frequency', 'object_temperature_band', 'band_radiance_temperature_derivative_wavelength', 'brightness_temperature_wavelength_with_uncertainty', 'brightness_temperature_frequency_with_uncertainty', 'object_temperature_wavelength_with_uncertainty', 'object_temperature_frequency_with_uncertainty', 'object_temperature_band_with_uncertainty', 'calibrated_temperature_with_uncertainty']
 
 
 def spectral_radiance_wavelength(wavelength_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -430,4 +432,248 @@ def thermal_sz_null_frequency(cmb_temperature_k: Any, *, nan_on_error: bool = Fa
     return _apply(_F["thermal_sz_null_frequency"], None, (cmb_temperature_k, ), nan_on_error)
 
 
-_publish([spectral_radiance_wavelength, spectral_radiance_frequency, spectral_radiance_wavenumber, photon_radiance_wavelength, photon_radiance_frequency, photon_radiance_wavenumber, radiance_temperature_derivative_wavelength, radiance_temperature_derivative_frequency, radiant_exitance, photon_exitance, photon_number_density, radiation_energy_density, peak_wavelength, peak_frequency, peak_wavenumber, photon_peak_wavelength, photon_peak_frequency, temperature_from_peak_wavelength, temperature_from_peak_frequency, band_fraction_wavelength, band_radiance_wavelength, band_photon_radiance_wavelength, band_radiance_frequency, temperature_from_band_radiance_wavelength, brightness_temperature_wavelength, brightness_temperature_frequency, rayleigh_jeans_temperature, ratio_temperature, thermodynamic_to_rayleigh_jeans_factor, kcmb_to_mjy_per_sr, thermal_sz_spectral_shape, thermal_sz_temperature_shape, thermal_sz_null_frequency], 'relicore.blackbody')
+def measured_spectral_radiance_wavelength(wavelength_m: Any, object_temperature_k: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+    """Measured spectral radiance at one wavelength of a scene (the forward measurement equation):
+    L_meas = τ[ε B_λ(T_obj) + (1 − ε) B_λ(T_refl)] + (1 − τ) B_λ(T_path).
+
+    * `wavelength_m`: λ in m, finite and > 0.
+    * `object_temperature_k`: T_obj in K, finite and > 0.
+    * `emissivity`: ε of the surface, finite, 0 < ε ≤ 1.
+    * `reflected_temperature_k`: T_refl of the reflected surroundings in K, finite and ≥ 0.
+    * `transmittance`: τ of the path, finite, 0 < τ ≤ 1.
+    * `path_temperature_k`: T_path in K, finite and ≥ 0.
+
+    Returns W m⁻² sr⁻¹ m⁻¹, ≥ 0. Errors: `NonFinite(i)`; `NonPositive(0|1|2|4)`;
+    `Negative(3|5)`; `OutOfDomain(2|4)` for ε or τ above 1; `OutOfDomain(i)` when a radiance
+    overflows. Domain and conventions: module documentation.
+
+    Accuracy: within 1e-14 relative (`f64`) against mpmath (a sum of non-negative terms, each
+    within 4 ulp). Reference: the measurement equation of radiation thermometry (module docs).
+    """
+    return _apply(_F["measured_spectral_radiance_wavelength"], None, (wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+
+
+def measured_spectral_radiance_frequency(frequency_hz: Any, object_temperature_k: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+    """Measured spectral radiance at one frequency of a scene:
+    L_meas = τ[ε B_ν(T_obj) + (1 − ε) B_ν(T_refl)] + (1 − τ) B_ν(T_path).
+
+    * `frequency_hz`: ν in Hz, finite and > 0.
+    * the scene arguments as `measured_spectral_radiance_wavelength`.
+
+    Returns W m⁻² sr⁻¹ Hz⁻¹, ≥ 0. Errors as `measured_spectral_radiance_wavelength`.
+    Accuracy: within 1e-14 relative (`f64`) against mpmath.
+    """
+    return _apply(_F["measured_spectral_radiance_frequency"], None, (frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+
+
+def measured_band_radiance_wavelength(lower_m: Any, upper_m: Any, object_temperature_k: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+    """Measured band radiance between two wavelengths of a scene: the measurement equation with
+    L = `band_radiance_wavelength`.
+
+    * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
+    * `object_temperature_k` (argument 2), `emissivity`, `reflected_temperature_k`,
+      `transmittance`, `path_temperature_k` (arguments 3 to 6): as
+      `measured_spectral_radiance_wavelength`.
+
+    Returns W m⁻² sr⁻¹. Errors: those of `band_radiance_wavelength` for the band; the scene
+    errors of `measured_spectral_radiance_wavelength` at positions 2 to 6.
+    Accuracy: within 1e-14 relative (`f64`) against mpmath quadrature.
+    """
+    return _apply(_F["measured_band_radiance_wavelength"], None, (lower_m, upper_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+
+
+def object_temperature_wavelength(wavelength_m: Any, signal: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+    """Object temperature from the spectral radiance measured at one wavelength (the inverse
+    measurement equation): the brightness temperature of the corrected object radiance
+    L_obj = ([L_meas − (1 − τ)B_λ(T_path)]/τ − (1 − ε)B_λ(T_refl))/ε.
+
+    * `wavelength_m`: λ in m, finite and > 0.
+    * `signal`: L_meas in W m⁻² sr⁻¹ m⁻¹, finite.
+    * `emissivity`: ε, 0 < ε ≤ 1. `reflected_temperature_k`: T_refl ≥ 0 K.
+    * `transmittance`: τ, 0 < τ ≤ 1. `path_temperature_k`: T_path ≥ 0 K.
+
+    Returns T_obj in K, > 0. Errors: `NonFinite(i)`; `NonPositive(0|2|4)`; `Negative(3|5)`;
+    `OutOfDomain(2|4)` for ε or τ above 1; `OutOfDomain(1)` when L_obj ≤ 0 (the signal is at or
+    below what the surroundings and the path alone give: no object temperature exists) or
+    when no temperature can be formed; `OutOfDomain(3|5)` when a radiance of the surroundings
+    overflows.
+
+    Accuracy: within 1e-13 relative (`f64`) against mpmath for a correction condition number
+    κ ≤ 20 (module docs); ε = τ = 1 gives `brightness_temperature_wavelength` bit for bit.
+    Reference: the measurement equation (module docs), Planck's law solved for T.
+    """
+    return _apply(_F["object_temperature_wavelength"], None, (wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+
+
+def object_temperature_frequency(frequency_hz: Any, signal: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+    """Object temperature from the spectral radiance measured at one frequency: the brightness
+    temperature (`brightness_temperature_frequency`) of the corrected object radiance.
+
+    * `frequency_hz`: ν in Hz, finite and > 0.
+    * `signal`: L_meas in W m⁻² sr⁻¹ Hz⁻¹, finite; the scene as
+      `object_temperature_wavelength`.
+
+    Returns T_obj in K. Errors as `object_temperature_wavelength`. Accuracy: within 1e-13
+    relative (`f64`) against mpmath for κ ≤ 20.
+    """
+    return _apply(_F["object_temperature_frequency"], None, (frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+
+
+def object_temperature_band(lower_m: Any, upper_m: Any, signal: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+    """Object temperature from the band radiance measured between two wavelengths: the
+    temperature (`temperature_from_band_radiance_wavelength`, the shared root finder) of the
+    corrected object band radiance.
+
+    * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
+    * `signal` (argument 2): band radiance in W m⁻² sr⁻¹, finite.
+    * `emissivity`, `reflected_temperature_k`, `transmittance`, `path_temperature_k`
+      (arguments 3 to 6): as `object_temperature_wavelength`.
+
+    Returns T_obj in K. Errors: the band errors of `band_radiance_wavelength`; the scene errors
+    of `object_temperature_wavelength` at positions 2 to 6 (`OutOfDomain(2)` for L_obj ≤ 0);
+    `NoConvergence` (seen only far outside physical arguments).
+    Accuracy: within 1e-13 relative (`f64`) against mpmath for κ ≤ 20.
+    """
+    return _apply(_F["object_temperature_band"], None, (lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+
+
+def band_radiance_temperature_derivative_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+    """Temperature derivative of the band radiance between two wavelengths, dL/dT with
+    L = `band_radiance_wavelength`: dL/dT = (4L + K T⁴ (x₁ f(x₁) − x₂ f(x₂)))/T,
+    f(t) = t³/(eᵗ − 1), x = c₂/(λT) at the band edges, K = 2k⁴/(h³c²) (the derivative of
+    K T⁴ ∫ f(t) dt under the change of variables t = c₂/(λT)).
+
+    * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
+    * `temperature_k`: K, finite and > 0.
+
+    Returns W m⁻² sr⁻¹ K⁻¹, ≥ 0. Errors as `band_radiance_wavelength`.
+    Accuracy: within 1e-13 relative (`f64`) against mpmath quadrature of ∂B_λ/∂T over the band
+    for x at the long-wave edge ≥ 0.05 (below, 4L and the edge terms cancel as 4/x).
+    """
+    return _apply(_F["band_radiance_temperature_derivative_wavelength"], None, (lower_m, upper_m, temperature_k, ), nan_on_error)
+
+
+def brightness_temperature_wavelength_with_uncertainty(wavelength_m: Any, spectral_radiance: Any, spectral_radiance_uncertainty: Any, *, nan_on_error: bool = False) -> _results.TemperatureUncertainty:
+    """Brightness temperature at a wavelength with its uncertainty: T from
+    `brightness_temperature_wavelength` (the same bits) and the sensitivity coefficient
+    ∂T/∂L = 1/(∂B_λ/∂T) (Planck's law differentiated implicitly, with
+    `radiance_temperature_derivative_wavelength`).
+
+    * `wavelength_m`: m, finite and > 0.
+    * `spectral_radiance`: L in W m⁻² sr⁻¹ m⁻¹, finite and > 0.
+    * `spectral_radiance_uncertainty`: standard uncertainty u(L), same unit, finite and ≥ 0.
+
+    Returns a `TemperatureUncertainty` with `inputs` = 1, coefficient 0 = ∂T/∂L in
+    K per (W m⁻² sr⁻¹ m⁻¹), u_c = |∂T/∂L| u(L). Errors: those of
+    `brightness_temperature_wavelength`; `NonFinite(2)`, `Negative(2)`; `OutOfDomain(1)` when
+    dB/dT at T is not a positive normal number (radiances far outside thermal ones).
+
+    Accuracy: temperature as `brightness_temperature_wavelength`; coefficient within 1e-12
+    relative (`f64`) against mpmath (`tests/data/thermometry.txt`). Reference: JCGM 100:2008
+    eq. 10 with the implicit derivative of Planck's law.
+    """
+    return _apply_result(_F["brightness_temperature_wavelength_with_uncertainty"], None, (wavelength_m, spectral_radiance, spectral_radiance_uncertainty, ), nan_on_error, _results.TemperatureUncertainty)
+
+
+def brightness_temperature_frequency_with_uncertainty(frequency_hz: Any, spectral_radiance: Any, spectral_radiance_uncertainty: Any, *, nan_on_error: bool = False) -> _results.TemperatureUncertainty:
+    """Brightness temperature at a frequency with its uncertainty: T from
+    `brightness_temperature_frequency` (the same bits) and ∂T/∂L = 1/(∂B_ν/∂T)
+    (`radiance_temperature_derivative_frequency`).
+
+    * `frequency_hz`: Hz, finite and > 0.
+    * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
+    * `spectral_radiance_uncertainty`: u(L), same unit, finite and ≥ 0.
+
+    Returns a `TemperatureUncertainty` with `inputs` = 1 (coefficient 0 = ∂T/∂L in
+    K per W m⁻² sr⁻¹ Hz⁻¹). Errors as `brightness_temperature_wavelength_with_uncertainty`.
+    Accuracy: coefficient within 1e-12 relative (`f64`) against mpmath. Reference: JCGM 100:2008
+    eq. 10.
+    """
+    return _apply_result(_F["brightness_temperature_frequency_with_uncertainty"], None, (frequency_hz, spectral_radiance, spectral_radiance_uncertainty, ), nan_on_error, _results.TemperatureUncertainty)
+
+
+def object_temperature_wavelength_with_uncertainty(wavelength_m: Any, signal: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, signal_uncertainty: Any, emissivity_uncertainty: Any, reflected_temperature_uncertainty_k: Any, transmittance_uncertainty: Any, path_temperature_uncertainty_k: Any, *, nan_on_error: bool = False) -> _results.TemperatureUncertainty:
+    """`object_temperature_wavelength` with its sensitivity coefficients and combined standard
+    uncertainty.
+
+    * `wavelength_m`, `signal`, `emissivity`, `reflected_temperature_k`, `transmittance`,
+      `path_temperature_k` (arguments 0 to 5): as `object_temperature_wavelength`.
+    * `signal_uncertainty`, `emissivity_uncertainty`, `reflected_temperature_uncertainty_k`,
+      `transmittance_uncertainty`, `path_temperature_uncertainty_k` (arguments 6 to 10): the
+      standard uncertainties of the five inputs, finite and ≥ 0, in their units.
+
+    Returns a `TemperatureUncertainty`: the temperature (the bits of
+    `object_temperature_wavelength`), u_c in K (JCGM 100:2008 eq. 10, uncorrelated inputs),
+    `inputs` = 5 and the coefficients ∂T/∂(L_meas, ε, T_refl, τ, T_path) of the module
+    documentation, in K per W m⁻² sr⁻¹ m⁻¹, K, K/K, K, K/K. Errors: as
+    `object_temperature_wavelength` (where a term of weight 0 is evaluated here too, its
+    overflow is `OutOfDomain(3|5)`); `NonFinite(i)`, `Negative(i)` for i = 6…10;
+    `OutOfDomain(1)` when dB/dT at T_obj is not a positive normal number.
+
+    Accuracy: coefficients within 1e-12 relative (`f64`) against mpmath (module docs for those
+    of ε and τ), u_c within 1e-12 relative. Reference: JCGM 100:2008 eq. 10; implicit
+    differentiation of the measurement equation.
+    """
+    return _apply_result(_F["object_temperature_wavelength_with_uncertainty"], None, (wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k, ), nan_on_error, _results.TemperatureUncertainty)
+
+
+def object_temperature_frequency_with_uncertainty(frequency_hz: Any, signal: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, signal_uncertainty: Any, emissivity_uncertainty: Any, reflected_temperature_uncertainty_k: Any, transmittance_uncertainty: Any, path_temperature_uncertainty_k: Any, *, nan_on_error: bool = False) -> _results.TemperatureUncertainty:
+    """`object_temperature_frequency` with its sensitivity coefficients and combined standard
+    uncertainty; arguments, result and errors as
+    `object_temperature_wavelength_with_uncertainty` with the frequency ν in Hz first and the
+    signal in W m⁻² sr⁻¹ Hz⁻¹.
+
+    Accuracy: coefficients and u_c within 1e-12 relative (`f64`) against mpmath.
+    """
+    return _apply_result(_F["object_temperature_frequency_with_uncertainty"], None, (frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k, ), nan_on_error, _results.TemperatureUncertainty)
+
+
+def object_temperature_band_with_uncertainty(lower_m: Any, upper_m: Any, signal: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, signal_uncertainty: Any, emissivity_uncertainty: Any, reflected_temperature_uncertainty_k: Any, transmittance_uncertainty: Any, path_temperature_uncertainty_k: Any, *, nan_on_error: bool = False) -> _results.TemperatureUncertainty:
+    """`object_temperature_band` with its sensitivity coefficients and combined standard
+    uncertainty. The band derivative is `band_radiance_temperature_derivative_wavelength`.
+
+    * `lower_m`, `upper_m`, `signal`, the scene (arguments 0 to 6): as
+      `object_temperature_band`.
+    * the five standard uncertainties (arguments 7 to 11), as
+      `object_temperature_wavelength_with_uncertainty`.
+
+    Returns a `TemperatureUncertainty` (coefficients in K per W m⁻² sr⁻¹, K, K/K, K, K/K).
+    Errors: as `object_temperature_band`; `NonFinite(i)`, `Negative(i)` for i = 7…11.
+    Accuracy: coefficients and u_c within 1e-12 relative (`f64`) against mpmath quadrature.
+    """
+    return _apply_result(_F["object_temperature_band_with_uncertainty"], None, (lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k, ), nan_on_error, _results.TemperatureUncertainty)
+
+
+def calibrated_temperature_with_uncertainty(frequency_hz: Any, reading_hot: Any, temperature_hot_k: Any, reading_cold: Any, temperature_cold_k: Any, reading: Any, reading_hot_uncertainty: Any, temperature_hot_uncertainty_k: Any, reading_cold_uncertainty: Any, temperature_cold_uncertainty_k: Any, reading_uncertainty: Any, *, nan_on_error: bool = False) -> _results.TemperatureUncertainty:
+    """Two-load calibrated temperature with its uncertainty: T from `two_load_calibration` and
+    `calibrated_temperature` (the same bits), and its sensitivity to the three readings and
+    the two load temperatures.
+
+    With J(T) the Rayleigh-Jeans brightness temperature (hν/k)/(e^(hν/kT) − 1),
+    w = (r − r_c)/(r_h − r_c) and the scene J = J(T_c) + w (J(T_h) − J(T_c)), implicit
+    differentiation of J(T) = J gives, with J′ = dJ/dT = x²eˣ/(eˣ − 1)²
+    (`thermodynamic_to_rayleigh_jeans_factor`) and g the gain:
+    ∂T/∂r_h = −w/(g J′(T)), ∂T/∂T_h = w J′(T_h)/J′(T), ∂T/∂r_c = −(1 − w)/(g J′(T)),
+    ∂T/∂T_c = (1 − w) J′(T_c)/J′(T), ∂T/∂r = 1/(g J′(T)).
+
+    * `frequency_hz`, `reading_hot`, `temperature_hot_k`, `reading_cold`, `temperature_cold_k`:
+      as `two_load_calibration` (arguments 0 to 4).
+    * `reading`: the scene reading, as `calibrated_temperature` (argument 5).
+    * `reading_hot_uncertainty`, `temperature_hot_uncertainty_k`, `reading_cold_uncertainty`,
+      `temperature_cold_uncertainty_k`, `reading_uncertainty`: standard uncertainties of the
+      five inputs, finite and ≥ 0 (arguments 6 to 10), in reading units or K.
+
+    Returns a `TemperatureUncertainty` with `inputs` = 5 and the coefficients in the order
+    (reading_hot, temperature_hot, reading_cold, temperature_cold, reading), in K per reading
+    unit or K/K. Errors: those of `two_load_calibration` and `calibrated_temperature`
+    (`OutOfDomain(5)` for a reading no blackbody gives); `NonFinite(i)`, `Negative(i)` for
+    i = 6…10; `OutOfDomain(5)` when J′(T) is not a positive normal number.
+
+    Accuracy: temperature as `calibrated_temperature`; coefficients within 1e-12 relative
+    (`f64`) against mpmath (`tests/data/thermometry.txt`). Reference: JCGM 100:2008 eq. 10;
+    the calibration line as in `two_load_calibration`.
+    """
+    return _apply_result(_F["calibrated_temperature_with_uncertainty"], None, (frequency_hz, reading_hot, temperature_hot_k, reading_cold, temperature_cold_k, reading, reading_hot_uncertainty, temperature_hot_uncertainty_k, reading_cold_uncertainty, temperature_cold_uncertainty_k, reading_uncertainty, ), nan_on_error, _results.TemperatureUncertainty)
+
+
+_publish([spectral_radiance_wavelength, spectral_radiance_frequency, spectral_radiance_wavenumber, photon_radiance_wavelength, photon_radiance_frequency, photon_radiance_wavenumber, radiance_temperature_derivative_wavelength, radiance_temperature_derivative_frequency, radiant_exitance, photon_exitance, photon_number_density, radiation_energy_density, peak_wavelength, peak_frequency, peak_wavenumber, photon_peak_wavelength, photon_peak_frequency, temperature_from_peak_wavelength, temperature_from_peak_frequency, band_fraction_wavelength, band_radiance_wavelength, band_photon_radiance_wavelength, band_radiance_frequency, temperature_from_band_radiance_wavelength, brightness_temperature_wavelength, brightness_temperature_frequency, rayleigh_jeans_temperature, ratio_temperature, thermodynamic_to_rayleigh_jeans_factor, kcmb_to_mjy_per_sr, thermal_sz_spectral_shape, thermal_sz_temperature_shape, thermal_sz_null_frequency, measured_spectral_radiance_wavelength, measured_spectral_radiance_frequency, measured_band_radiance_wavelength, object_temperature_wavelength, object_temperature_frequency, object_temperature_band, band_radiance_temperature_derivative_wavelength, brightness_temperature_wavelength_with_uncertainty, brightness_temperature_frequency_with_uncertainty, object_temperature_wavelength_with_uncertainty, object_temperature_frequency_with_uncertainty, object_temperature_band_with_uncertainty, calibrated_temperature_with_uncertainty], 'relicore.blackbody')

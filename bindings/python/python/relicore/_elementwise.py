@@ -98,3 +98,16 @@ def publish(members: Any, module: str, owner: str | None = None) -> None:
         if callable(function) and hasattr(function, "__qualname__"):
             function.__module__ = module
             function.__qualname__ = f"{owner}.{function.__name__}" if owner else function.__name__
+
+
+def apply_result(function: Any, receiver: Any, args: tuple[Any, ...], nan_on_error: bool, result: Any) -> Any:
+    """Calls a regular function with a result value (a row of `function.width` floats per
+    element) and returns the named result `result` (relicore._results): of Python numbers when
+    every argument is a scalar, else holding arrays of the broadcast shape (a field of n values
+    with a trailing axis of n)."""
+    if all(isinstance(a, SCALAR_TYPES) for a in args):
+        return result._from_row(function.call_row(receiver, args, nan_on_error))
+    arrays, shape = float_arrays(function.label, function.arguments, args)
+    rows = np.empty(shape + (function.width,), dtype=np.float64)
+    function.map(receiver, [operand(a, shape) for a in arrays], rows.reshape(-1), shape, nan_on_error)
+    return result._from_rows(rows)

@@ -46,6 +46,9 @@ from relicore._blackbody import *  # noqa: F403 (the regular functions, generate
 from relicore._elementwise import SCALAR_TYPES as _SCALAR_TYPES
 from relicore._elementwise import contiguous as _contiguous
 from relicore._native import TwoLoadCalibration
+from relicore._results import TemperatureUncertainty
+from relicore._thermometry import *  # noqa: F403 (the response-table and array-uncertainty thermometry forms)
+from relicore import _thermometry
 
 
 def _apply_one(call: Any, value: Any) -> Any:
@@ -143,6 +146,8 @@ def calibrated_temperature(calibration: TwoLoadCalibration, reading: Any, *, nan
 __all__ = sorted(
     [
         *_blackbody.__all__,
+        *_thermometry.__all__,
+        "TemperatureUncertainty",
         "TwoLoadCalibration",
         "calibrated_brightness_temperature",
         "calibrated_temperature",

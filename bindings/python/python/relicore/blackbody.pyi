@@ -11,6 +11,8 @@ from typing import Any, Final, TypeAlias, final, overload
 import numpy as np
 from numpy.typing import ArrayLike, NDArray
 
+from relicore._results import TemperatureUncertainty as TemperatureUncertainty
+
 _Scalar: TypeAlias = float | int | np.floating[Any] | np.integer[Any]
 _Array: TypeAlias = NDArray[np.float64]
 
@@ -52,6 +54,21 @@ def response_weighted_radiance(wavelengths_m: ArrayLike, response: ArrayLike, te
 def temperature_from_response_weighted_radiance(wavelengths_m: ArrayLike, response: ArrayLike, radiance: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
 @overload
 def temperature_from_response_weighted_radiance(wavelengths_m: ArrayLike, response: ArrayLike, radiance: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+@overload
+def measured_response_weighted_radiance(wavelengths_m: ArrayLike, response_table: ArrayLike, object_temperature_k: _Scalar, emissivity: _Scalar, reflected_temperature_k: _Scalar, transmittance: _Scalar, path_temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def measured_response_weighted_radiance(wavelengths_m: ArrayLike, response_table: ArrayLike, object_temperature_k: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+@overload
+def object_temperature_response(wavelengths_m: ArrayLike, response_table: ArrayLike, signal: _Scalar, emissivity: _Scalar, reflected_temperature_k: _Scalar, transmittance: _Scalar, path_temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def object_temperature_response(wavelengths_m: ArrayLike, response_table: ArrayLike, signal: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+def object_temperature_response_with_uncertainty(wavelengths_m: ArrayLike, response_table: ArrayLike, signal: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, signal_uncertainty: ArrayLike, emissivity_uncertainty: ArrayLike, reflected_temperature_uncertainty_k: ArrayLike, transmittance_uncertainty: ArrayLike, path_temperature_uncertainty_k: ArrayLike, *, nan_on_error: bool = False) -> TemperatureUncertainty: ...
+@overload
+def response_weighted_radiance_temperature_derivative(wavelengths_m: ArrayLike, response_table: ArrayLike, temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def response_weighted_radiance_temperature_derivative(wavelengths_m: ArrayLike, response_table: ArrayLike, temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+def combined_standard_uncertainty(sensitivity_coefficients: ArrayLike, standard_uncertainties: ArrayLike) -> float: ...
+def combined_standard_uncertainty_correlated(sensitivity_coefficients: ArrayLike, standard_uncertainties: ArrayLike, correlation: ArrayLike) -> float: ...
 @overload
 def spectral_radiance_wavelength(wavelength_m: _Scalar, temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
 @overload
@@ -184,5 +201,57 @@ def thermal_sz_temperature_shape(frequency_hz: ArrayLike, cmb_temperature_k: Arr
 def thermal_sz_null_frequency(cmb_temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
 @overload
 def thermal_sz_null_frequency(cmb_temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+@overload
+def measured_spectral_radiance_wavelength(wavelength_m: _Scalar, object_temperature_k: _Scalar, emissivity: _Scalar, reflected_temperature_k: _Scalar, transmittance: _Scalar, path_temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def measured_spectral_radiance_wavelength(wavelength_m: ArrayLike, object_temperature_k: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+@overload
+def measured_spectral_radiance_frequency(frequency_hz: _Scalar, object_temperature_k: _Scalar, emissivity: _Scalar, reflected_temperature_k: _Scalar, transmittance: _Scalar, path_temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def measured_spectral_radiance_frequency(frequency_hz: ArrayLike, object_temperature_k: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+@overload
+def measured_band_radiance_wavelength(lower_m: _Scalar, upper_m: _Scalar, object_temperature_k: _Scalar, emissivity: _Scalar, reflected_temperature_k: _Scalar, transmittance: _Scalar, path_temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def measured_band_radiance_wavelength(lower_m: ArrayLike, upper_m: ArrayLike, object_temperature_k: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+@overload
+def object_temperature_wavelength(wavelength_m: _Scalar, signal: _Scalar, emissivity: _Scalar, reflected_temperature_k: _Scalar, transmittance: _Scalar, path_temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def object_temperature_wavelength(wavelength_m: ArrayLike, signal: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+@overload
+def object_temperature_frequency(frequency_hz: _Scalar, signal: _Scalar, emissivity: _Scalar, reflected_temperature_k: _Scalar, transmittance: _Scalar, path_temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def object_temperature_frequency(frequency_hz: ArrayLike, signal: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+@overload
+def object_temperature_band(lower_m: _Scalar, upper_m: _Scalar, signal: _Scalar, emissivity: _Scalar, reflected_temperature_k: _Scalar, transmittance: _Scalar, path_temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def object_temperature_band(lower_m: ArrayLike, upper_m: ArrayLike, signal: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+@overload
+def band_radiance_temperature_derivative_wavelength(lower_m: _Scalar, upper_m: _Scalar, temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+@overload
+def band_radiance_temperature_derivative_wavelength(lower_m: ArrayLike, upper_m: ArrayLike, temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+@overload
+def brightness_temperature_wavelength_with_uncertainty(wavelength_m: _Scalar, spectral_radiance: _Scalar, spectral_radiance_uncertainty: _Scalar, *, nan_on_error: bool = False) -> TemperatureUncertainty: ...  # type: ignore[overload-overlap]
+@overload
+def brightness_temperature_wavelength_with_uncertainty(wavelength_m: ArrayLike, spectral_radiance: ArrayLike, spectral_radiance_uncertainty: ArrayLike, *, nan_on_error: bool = False) -> TemperatureUncertainty: ...
+@overload
+def brightness_temperature_frequency_with_uncertainty(frequency_hz: _Scalar, spectral_radiance: _Scalar, spectral_radiance_uncertainty: _Scalar, *, nan_on_error: bool = False) -> TemperatureUncertainty: ...  # type: ignore[overload-overlap]
+@overload
+def brightness_temperature_frequency_with_uncertainty(frequency_hz: ArrayLike, spectral_radiance: ArrayLike, spectral_radiance_uncertainty: ArrayLike, *, nan_on_error: bool = False) -> TemperatureUncertainty: ...
+@overload
+def object_temperature_wavelength_with_uncertainty(wavelength_m: _Scalar, signal: _Scalar, emissivity: _Scalar, reflected_temperature_k: _Scalar, transmittance: _Scalar, path_temperature_k: _Scalar, signal_uncertainty: _Scalar, emissivity_uncertainty: _Scalar, reflected_temperature_uncertainty_k: _Scalar, transmittance_uncertainty: _Scalar, path_temperature_uncertainty_k: _Scalar, *, nan_on_error: bool = False) -> TemperatureUncertainty: ...  # type: ignore[overload-overlap]
+@overload
+def object_temperature_wavelength_with_uncertainty(wavelength_m: ArrayLike, signal: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, signal_uncertainty: ArrayLike, emissivity_uncertainty: ArrayLike, reflected_temperature_uncertainty_k: ArrayLike, transmittance_uncertainty: ArrayLike, path_temperature_uncertainty_k: ArrayLike, *, nan_on_error: bool = False) -> TemperatureUncertainty: ...
+@overload
+def object_temperature_frequency_with_uncertainty(frequency_hz: _Scalar, signal: _Scalar, emissivity: _Scalar, reflected_temperature_k: _Scalar, transmittance: _Scalar, path_temperature_k: _Scalar, signal_uncertainty: _Scalar, emissivity_uncertainty: _Scalar, reflected_temperature_uncertainty_k: _Scalar, transmittance_uncertainty: _Scalar, path_temperature_uncertainty_k: _Scalar, *, nan_on_error: bool = False) -> TemperatureUncertainty: ...  # type: ignore[overload-overlap]
+@overload
+def object_temperature_frequency_with_uncertainty(frequency_hz: ArrayLike, signal: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, signal_uncertainty: ArrayLike, emissivity_uncertainty: ArrayLike, reflected_temperature_uncertainty_k: ArrayLike, transmittance_uncertainty: ArrayLike, path_temperature_uncertainty_k: ArrayLike, *, nan_on_error: bool = False) -> TemperatureUncertainty: ...
+@overload
+def object_temperature_band_with_uncertainty(lower_m: _Scalar, upper_m: _Scalar, signal: _Scalar, emissivity: _Scalar, reflected_temperature_k: _Scalar, transmittance: _Scalar, path_temperature_k: _Scalar, signal_uncertainty: _Scalar, emissivity_uncertainty: _Scalar, reflected_temperature_uncertainty_k: _Scalar, transmittance_uncertainty: _Scalar, path_temperature_uncertainty_k: _Scalar, *, nan_on_error: bool = False) -> TemperatureUncertainty: ...  # type: ignore[overload-overlap]
+@overload
+def object_temperature_band_with_uncertainty(lower_m: ArrayLike, upper_m: ArrayLike, signal: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, signal_uncertainty: ArrayLike, emissivity_uncertainty: ArrayLike, reflected_temperature_uncertainty_k: ArrayLike, transmittance_uncertainty: ArrayLike, path_temperature_uncertainty_k: ArrayLike, *, nan_on_error: bool = False) -> TemperatureUncertainty: ...
+@overload
+def calibrated_temperature_with_uncertainty(frequency_hz: _Scalar, reading_hot: _Scalar, temperature_hot_k: _Scalar, reading_cold: _Scalar, temperature_cold_k: _Scalar, reading: _Scalar, reading_hot_uncertainty: _Scalar, temperature_hot_uncertainty_k: _Scalar, reading_cold_uncertainty: _Scalar, temperature_cold_uncertainty_k: _Scalar, reading_uncertainty: _Scalar, *, nan_on_error: bool = False) -> TemperatureUncertainty: ...  # type: ignore[overload-overlap]
+@overload
+def calibrated_temperature_with_uncertainty(frequency_hz: ArrayLike, reading_hot: ArrayLike, temperature_hot_k: ArrayLike, reading_cold: ArrayLike, temperature_cold_k: ArrayLike, reading: ArrayLike, reading_hot_uncertainty: ArrayLike, temperature_hot_uncertainty_k: ArrayLike, reading_cold_uncertainty: ArrayLike, temperature_cold_uncertainty_k: ArrayLike, reading_uncertainty: ArrayLike, *, nan_on_error: bool = False) -> TemperatureUncertainty: ...
 
 __all__: Final[list[str]]
