@@ -8,6 +8,7 @@
 use criterion::{Criterion, criterion_group, criterion_main};
 use relicore::cosmology::{Universe, UniverseParameters};
 use relicore::decoupling::{HistoryOptions, ThermalHistory};
+use relicore::growth::{LinearGrowth, LinearPowerSpectrum, TransferForm};
 use std::hint::black_box;
 
 fn regular(c: &mut Criterion) {
@@ -17,6 +18,17 @@ fn regular(c: &mut Criterion) {
     })
     .expect("universe");
     let h = Box::new(ThermalHistory::<f64>::new(&u, HistoryOptions::default()).expect("history"));
+    let gr = Box::new(LinearGrowth::new(&u).expect("growth"));
+    let ps = Box::new(
+        LinearPowerSpectrum::with_scalar_amplitude(
+            &gr,
+            TransferForm::BaryonOscillations,
+            2.1e-9,
+            0.9649,
+            0.0,
+        )
+        .expect("power spectrum"),
+    );
     let mut g = c.benchmark_group("regular");
     g.bench_function("spectral_radiance_wavelength", |b| {
         b.iter(|| {
@@ -821,6 +833,131 @@ fn regular(c: &mut Criterion) {
         b.iter(|| {
             let r = &*h;
             Ok::<f64, relicore::Error>(r.reionization_optical_depth())
+        })
+    });
+    g.bench_function("hubble_distance_at_mpc", |b| {
+        b.iter(|| {
+            let r = &u;
+            r.hubble_distance_at_mpc(black_box(0.0_f64))
+        })
+    });
+    g.bench_function("volume_averaged_distance_mpc", |b| {
+        b.iter(|| {
+            let r = &u;
+            r.volume_averaged_distance_mpc(black_box(0.0_f64))
+        })
+    });
+    g.bench_function("transverse_comoving_distance_over_sound_horizon", |b| {
+        b.iter(|| {
+            let r = &u;
+            r.transverse_comoving_distance_over_sound_horizon(
+                black_box(0.0_f64),
+                black_box(147.09_f64),
+            )
+        })
+    });
+    g.bench_function("hubble_distance_over_sound_horizon", |b| {
+        b.iter(|| {
+            let r = &u;
+            r.hubble_distance_over_sound_horizon(black_box(0.0_f64), black_box(147.09_f64))
+        })
+    });
+    g.bench_function("volume_averaged_distance_over_sound_horizon", |b| {
+        b.iter(|| {
+            let r = &u;
+            r.volume_averaged_distance_over_sound_horizon(black_box(0.1_f64), black_box(147.09_f64))
+        })
+    });
+    g.bench_function("leapfrog_drift_factor_gyr", |b| {
+        b.iter(|| {
+            let r = &u;
+            r.leapfrog_drift_factor_gyr(black_box(0.01_f64), black_box(0.0101_f64))
+        })
+    });
+    g.bench_function("leapfrog_kick_factor_gyr", |b| {
+        b.iter(|| {
+            let r = &u;
+            r.leapfrog_kick_factor_gyr(black_box(0.01_f64), black_box(0.0101_f64))
+        })
+    });
+    g.bench_function("growth_factor", |b| {
+        b.iter(|| {
+            let r = &*gr;
+            r.growth_factor(black_box(10.0_f64))
+        })
+    });
+    g.bench_function("growth_rate", |b| {
+        b.iter(|| {
+            let r = &*gr;
+            r.growth_rate(black_box(100.0_f64))
+        })
+    });
+    g.bench_function("unnormalized_growth_factor", |b| {
+        b.iter(|| {
+            let r = &*gr;
+            r.unnormalized_growth_factor(black_box(10.0_f64))
+        })
+    });
+    g.bench_function("transfer_function", |b| {
+        b.iter(|| {
+            let r = &*ps;
+            r.transfer_function(black_box(0.0001_f64))
+        })
+    });
+    g.bench_function("linear_power_spectrum_mpc3", |b| {
+        b.iter(|| {
+            let r = &*ps;
+            r.linear_power_spectrum_mpc3(black_box(0.0001_f64), black_box(0.0_f64))
+        })
+    });
+    g.bench_function("density_rms_in_sphere", |b| {
+        b.iter(|| {
+            let r = &*ps;
+            r.density_rms_in_sphere(black_box(1.0_f64), black_box(0.0_f64))
+        })
+    });
+    g.bench_function("growth_rate_times_sigma8", |b| {
+        b.iter(|| {
+            let r = &*ps;
+            r.growth_rate_times_sigma8(black_box(0.5_f64))
+        })
+    });
+    g.bench_function("sigma8", |b| {
+        b.iter(|| {
+            let r = &*ps;
+            Ok::<f64, relicore::Error>(r.sigma8())
+        })
+    });
+    g.bench_function("s8", |b| {
+        b.iter(|| {
+            let r = &*ps;
+            Ok::<f64, relicore::Error>(r.s8())
+        })
+    });
+    g.bench_function("scalar_amplitude", |b| {
+        b.iter(|| {
+            let r = &*ps;
+            Ok::<f64, relicore::Error>(r.scalar_amplitude())
+        })
+    });
+    g.bench_function("eisenstein_hu_transfer_function", |b| {
+        b.iter(|| {
+            relicore::growth::eisenstein_hu_transfer_function(
+                black_box(0.2_f64),
+                black_box(0.3_f64),
+                black_box(0.06_f64),
+                black_box(2.725_f64),
+            )
+        })
+    });
+    g.bench_function("eisenstein_hu_no_wiggle_transfer_function", |b| {
+        b.iter(|| {
+            relicore::growth::eisenstein_hu_no_wiggle_transfer_function(
+                black_box(1e-05_f64),
+                black_box(0.3_f64),
+                black_box(0.06_f64),
+                black_box(2.725_f64),
+            )
         })
     });
     g.finish();

@@ -17,7 +17,7 @@ import re
 import sys
 
 ROOT = pathlib.Path(__file__).resolve().parent.parent
-TOPICS = ["blackbody", "cosmology", "decoupling"]
+TOPICS = ["blackbody", "cosmology", "decoupling", "growth"]
 
 # Functions whose vectors are named after the function that exercises them, with the reason.
 VECTOR_ALIASES = {
@@ -32,6 +32,25 @@ NOT_FUNCTIONS = {
     "new",
     # Universe::parameters is the parameter struct in C/Fortran and read-only properties in Python.
     "parameters",
+    # LinearGrowth::compute_in_place is relicore_linear_growth_compute (C, Fortran) and the
+    # LinearGrowth(universe) constructor (Python); every growth line of tests/data/growth.txt
+    # goes through it.
+    "compute_in_place",
+    # LinearPowerSpectrum::with_scalar_amplitude / with_sigma8 and their _in_place forms are
+    # relicore_linear_power_spectrum_compute with the options' normalisation switch (C, Fortran)
+    # and the LinearPowerSpectrum(growth, scalar_amplitude=... | sigma8=...) constructor (Python);
+    # every spectrum line of tests/data/growth.txt goes through one of them.
+    "with_scalar_amplitude",
+    "with_sigma8",
+    "compute_with_scalar_amplitude_in_place",
+    "compute_with_sigma8_in_place",
+    # the inputs kept by a growth or spectrum: Python properties (LinearGrowth.universe,
+    # LinearPowerSpectrum.growth); C and Fortran callers hold the structs they passed.
+    "universe",
+    "growth",
+    # D_u(1): LinearGrowth.unnormalized_growth_factor_today in Python; the same number as
+    # unnormalized_growth_factor(0) in every face (tests/python/test_growth.py checks equality).
+    "unnormalized_growth_factor_today",
 }
 
 

@@ -8,6 +8,7 @@
 use proptest::prelude::*;
 use relicore::cosmology::{Universe, UniverseParameters};
 use relicore::decoupling::{HistoryOptions, ThermalHistory};
+use relicore::growth::{LinearGrowth, LinearPowerSpectrum, TransferForm};
 use std::sync::LazyLock;
 
 static UNIVERSE: LazyLock<Universe<f64>> = LazyLock::new(|| {
@@ -19,6 +20,21 @@ static UNIVERSE: LazyLock<Universe<f64>> = LazyLock::new(|| {
 });
 static HISTORY: LazyLock<Box<ThermalHistory<f64>>> = LazyLock::new(|| {
     Box::new(ThermalHistory::new(&UNIVERSE, HistoryOptions::default()).expect("history"))
+});
+// one growth (about 10 s in a debug build) and one spectrum for every test of this file
+static GROWTH: LazyLock<Box<LinearGrowth<f64>>> =
+    LazyLock::new(|| Box::new(LinearGrowth::new(&UNIVERSE).expect("growth")));
+static SPECTRUM: LazyLock<Box<LinearPowerSpectrum<f64>>> = LazyLock::new(|| {
+    Box::new(
+        LinearPowerSpectrum::with_scalar_amplitude(
+            &GROWTH,
+            TransferForm::BaryonOscillations,
+            2.1e-9,
+            0.9649,
+            0.0,
+        )
+        .expect("power spectrum"),
+    )
 });
 
 proptest! {
@@ -1168,6 +1184,209 @@ fn contract_reionization_optical_depth() {
     }
 }
 
+proptest! {
+    #[test]
+    fn contract_hubble_distance_at_mpc_f64(x0 in any::<u64>()) {
+        let x0 = f64::from_bits(x0);
+        let r = &*UNIVERSE; let any_nan = x0.is_nan();
+        if let Ok(v) = r.hubble_distance_at_mpc(x0) {
+            prop_assert!(v.is_finite(), "hubble_distance_at_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "hubble_distance_at_mpc: NaN accepted");
+        }
+    }
+}
+
+proptest! {
+    #[test]
+    fn contract_volume_averaged_distance_mpc_f64(x0 in any::<u64>()) {
+        let x0 = f64::from_bits(x0);
+        let r = &*UNIVERSE; let any_nan = x0.is_nan();
+        if let Ok(v) = r.volume_averaged_distance_mpc(x0) {
+            prop_assert!(v.is_finite(), "volume_averaged_distance_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "volume_averaged_distance_mpc: NaN accepted");
+        }
+    }
+}
+
+proptest! {
+    #[test]
+    fn contract_transverse_comoving_distance_over_sound_horizon_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
+        let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
+        let r = &*UNIVERSE; let any_nan = x0.is_nan() || x1.is_nan();
+        if let Ok(v) = r.transverse_comoving_distance_over_sound_horizon(x0, x1) {
+            prop_assert!(v.is_finite(), "transverse_comoving_distance_over_sound_horizon({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "transverse_comoving_distance_over_sound_horizon: NaN accepted");
+        }
+    }
+}
+
+proptest! {
+    #[test]
+    fn contract_hubble_distance_over_sound_horizon_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
+        let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
+        let r = &*UNIVERSE; let any_nan = x0.is_nan() || x1.is_nan();
+        if let Ok(v) = r.hubble_distance_over_sound_horizon(x0, x1) {
+            prop_assert!(v.is_finite(), "hubble_distance_over_sound_horizon({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "hubble_distance_over_sound_horizon: NaN accepted");
+        }
+    }
+}
+
+proptest! {
+    #[test]
+    fn contract_volume_averaged_distance_over_sound_horizon_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
+        let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
+        let r = &*UNIVERSE; let any_nan = x0.is_nan() || x1.is_nan();
+        if let Ok(v) = r.volume_averaged_distance_over_sound_horizon(x0, x1) {
+            prop_assert!(v.is_finite(), "volume_averaged_distance_over_sound_horizon({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "volume_averaged_distance_over_sound_horizon: NaN accepted");
+        }
+    }
+}
+
+proptest! {
+    #[test]
+    fn contract_leapfrog_drift_factor_gyr_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
+        let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
+        let r = &*UNIVERSE; let any_nan = x0.is_nan() || x1.is_nan();
+        if let Ok(v) = r.leapfrog_drift_factor_gyr(x0, x1) {
+            prop_assert!(v.is_finite(), "leapfrog_drift_factor_gyr({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "leapfrog_drift_factor_gyr: NaN accepted");
+        }
+    }
+}
+
+proptest! {
+    #[test]
+    fn contract_leapfrog_kick_factor_gyr_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
+        let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
+        let r = &*UNIVERSE; let any_nan = x0.is_nan() || x1.is_nan();
+        if let Ok(v) = r.leapfrog_kick_factor_gyr(x0, x1) {
+            prop_assert!(v.is_finite(), "leapfrog_kick_factor_gyr({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "leapfrog_kick_factor_gyr: NaN accepted");
+        }
+    }
+}
+
+proptest! {
+    #[test]
+    fn contract_growth_factor_f64(x0 in any::<u64>()) {
+        let x0 = f64::from_bits(x0);
+        let r = &**GROWTH; let any_nan = x0.is_nan();
+        if let Ok(v) = r.growth_factor(x0) {
+            prop_assert!(v.is_finite(), "growth_factor({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "growth_factor: NaN accepted");
+        }
+    }
+}
+
+proptest! {
+    #[test]
+    fn contract_growth_rate_f64(x0 in any::<u64>()) {
+        let x0 = f64::from_bits(x0);
+        let r = &**GROWTH; let any_nan = x0.is_nan();
+        if let Ok(v) = r.growth_rate(x0) {
+            prop_assert!(v.is_finite(), "growth_rate({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "growth_rate: NaN accepted");
+        }
+    }
+}
+
+proptest! {
+    #[test]
+    fn contract_unnormalized_growth_factor_f64(x0 in any::<u64>()) {
+        let x0 = f64::from_bits(x0);
+        let r = &**GROWTH; let any_nan = x0.is_nan();
+        if let Ok(v) = r.unnormalized_growth_factor(x0) {
+            prop_assert!(v.is_finite(), "unnormalized_growth_factor({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "unnormalized_growth_factor: NaN accepted");
+        }
+    }
+}
+
+proptest! {
+    #[test]
+    fn contract_transfer_function_f64(x0 in any::<u64>()) {
+        let x0 = f64::from_bits(x0);
+        let r = &**SPECTRUM; let any_nan = x0.is_nan();
+        if let Ok(v) = r.transfer_function(x0) {
+            prop_assert!(v.is_finite(), "transfer_function({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "transfer_function: NaN accepted");
+        }
+    }
+}
+
+proptest! {
+    #[test]
+    fn contract_linear_power_spectrum_mpc3_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
+        let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
+        let r = &**SPECTRUM; let any_nan = x0.is_nan() || x1.is_nan();
+        if let Ok(v) = r.linear_power_spectrum_mpc3(x0, x1) {
+            prop_assert!(v.is_finite(), "linear_power_spectrum_mpc3({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "linear_power_spectrum_mpc3: NaN accepted");
+        }
+    }
+}
+
+proptest! {
+    #[test]
+    fn contract_density_rms_in_sphere_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
+        let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
+        let r = &**SPECTRUM; let any_nan = x0.is_nan() || x1.is_nan();
+        if let Ok(v) = r.density_rms_in_sphere(x0, x1) {
+            prop_assert!(v.is_finite(), "density_rms_in_sphere({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "density_rms_in_sphere: NaN accepted");
+        }
+    }
+}
+
+proptest! {
+    #[test]
+    fn contract_growth_rate_times_sigma8_f64(x0 in any::<u64>()) {
+        let x0 = f64::from_bits(x0);
+        let r = &**SPECTRUM; let any_nan = x0.is_nan();
+        if let Ok(v) = r.growth_rate_times_sigma8(x0) {
+            prop_assert!(v.is_finite(), "growth_rate_times_sigma8({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "growth_rate_times_sigma8: NaN accepted");
+        }
+    }
+}
+
+#[test]
+fn contract_sigma8() {
+    let r = &**SPECTRUM;
+    let v = Ok::<f64, relicore::Error>(r.sigma8());
+    if let Ok(v) = v {
+        assert!(v.is_finite(), "sigma8: Ok({v})");
+    }
+}
+
+#[test]
+fn contract_s8() {
+    let r = &**SPECTRUM;
+    let v = Ok::<f64, relicore::Error>(r.s8());
+    if let Ok(v) = v {
+        assert!(v.is_finite(), "s8: Ok({v})");
+    }
+}
+
+#[test]
+fn contract_scalar_amplitude() {
+    let r = &**SPECTRUM;
+    let v = Ok::<f64, relicore::Error>(r.scalar_amplitude());
+    if let Ok(v) = v {
+        assert!(v.is_finite(), "scalar_amplitude: Ok({v})");
+    }
+}
+
+proptest! {
+    #[test]
+    fn contract_eisenstein_hu_transfer_function_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>(), x3 in any::<u64>()) {
+        let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2); let x3 = f64::from_bits(x3);
+        let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan();
+        if let Ok(v) = relicore::growth::eisenstein_hu_transfer_function(x0, x1, x2, x3) {
+            prop_assert!(v.is_finite(), "eisenstein_hu_transfer_function({:?}) = Ok({:?})", (x0, x1, x2, x3), v); prop_assert!(!any_nan, "eisenstein_hu_transfer_function: NaN accepted");
+        }
+    }
+}
+
+proptest! {
+    #[test]
+    fn contract_eisenstein_hu_no_wiggle_transfer_function_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>(), x3 in any::<u64>()) {
+        let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2); let x3 = f64::from_bits(x3);
+        let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan();
+        if let Ok(v) = relicore::growth::eisenstein_hu_no_wiggle_transfer_function(x0, x1, x2, x3) {
+            prop_assert!(v.is_finite(), "eisenstein_hu_no_wiggle_transfer_function({:?}) = Ok({:?})", (x0, x1, x2, x3), v); prop_assert!(!any_nan, "eisenstein_hu_no_wiggle_transfer_function: NaN accepted");
+        }
+    }
+}
+
 type Grid = fn(&[f64]) -> relicore::Result<f64>;
 
 #[test]
@@ -1271,6 +1490,10 @@ fn threads_give_the_serial_bits() {
         },
         |a: &[f64]| relicore::decoupling::last_scattering_redshift_fit(a[0], a[1]),
         |a: &[f64]| relicore::decoupling::drag_redshift_fit(a[0], a[1]),
+        |a: &[f64]| relicore::growth::eisenstein_hu_transfer_function(a[0], a[1], a[2], a[3]),
+        |a: &[f64]| {
+            relicore::growth::eisenstein_hu_no_wiggle_transfer_function(a[0], a[1], a[2], a[3])
+        },
     ];
     const ARGS: [f64; 9] = [1e-9, 1e-6, 3e-3, 0.5, 2.7255, 300.0, 5e3, 3e13, -1.0];
     let grid: Vec<[f64; 4]> = (0..ARGS.len().pow(4))

@@ -606,3 +606,46 @@ fn thermometry_frame_calls() -> Vec<Box<dyn Fn() -> Outcome + Send + Sync>> {
 fn thermometry_frames_from_many_threads_equal_serial() {
     compare_threads("thermometry frames", &thermometry_frame_calls());
 }
+
+/// The array forms of the growth topic from several threads sharing one growth and one
+/// spectrum: every thread's output equals the serial output bit for bit (the scalar functions
+/// are reached from threads by tests/gen_regular.rs).
+#[test]
+fn growth_arrays_from_many_threads_equal_serial() {
+    use relicore::growth::{LinearGrowth, LinearPowerSpectrum, TransferForm};
+    let u = Universe::new(UniverseParameters {
+        omega_baryon: 0.0493,
+        ..UniverseParameters::new(67.36, 0.3153)
+    })
+    .expect("universe");
+    let g = Box::new(LinearGrowth::new(&u).expect("growth"));
+    let s = Box::new(
+        LinearPowerSpectrum::with_scalar_amplitude(
+            &g,
+            TransferForm::BaryonOscillations,
+            2.1e-9,
+            0.9649,
+            0.0,
+        )
+        .expect("spectrum"),
+    );
+    let zs: Vec<f64> = (0..700).map(|i| f64::from(i) * 0.37 - 3.0).collect();
+    let ks: Vec<f64> = (0..300).map(|i| 1e-4 * 1.05f64.powi(i) - 1e-3).collect();
+    let run = || {
+        let mut d = vec![0.0; zs.len()];
+        let mut f = vec![0.0; zs.len()];
+        let mut p = vec![0.0; ks.len()];
+        let rd = g.growth_factor_array(&zs, &mut d).is_ok();
+        let rf = g.growth_rate_array(&zs, &mut f).is_ok();
+        let rp = s.linear_power_spectrum_mpc3_array(&ks, 0.5, &mut p).is_ok();
+        let bits = |v: &[f64]| v.iter().map(|x| x.to_bits()).collect::<Vec<u64>>();
+        (rd, rf, rp, bits(&d), bits(&f), bits(&p))
+    };
+    let serial = run();
+    std::thread::scope(|scope| {
+        let handles: Vec<_> = (0..4).map(|_| scope.spawn(run)).collect();
+        for h in handles {
+            assert_eq!(h.join().expect("thread"), serial);
+        }
+    });
+}

@@ -59,6 +59,17 @@
 !       xe = relicore_ionized_fraction(history, z)               ! elemental in z
 !       zstar = relicore_last_scattering_redshift(history)
 !   It keeps its own copy of the universe. Units: K, years, Mpc, Mpc-1 as the names say.
+! * Growth: a type(relicore_linear_growth) and a type(relicore_linear_power_spectrum) of 81928
+!   bytes each (keep them in a module, a derived type or an allocatable, not as local variables
+!   of a small stack), computed once with
+!       call relicore_linear_growth_compute(universe, growth, stat)
+!       options = relicore_linear_power_spectrum_options_default()  ! then set value and
+!       options%value = 2.1d-9; options%spectral_index = 0.965d0    ! spectral_index
+!       call relicore_linear_power_spectrum_compute(growth, options, spectrum, stat)
+!   and passed first to their queries: d = relicore_growth_factor(growth, z),
+!   pk = relicore_linear_power_spectrum_mpc3(spectrum, k, z), s = relicore_sigma8(spectrum).
+!   The BAO distances and leapfrog factors take the universe first. Units: k in Mpc-1, R in
+!   Mpc, P in Mpc3 (no hidden h), times in Gyr.
 ! * relicore_status_message(code) and relicore_version() return allocatable strings.
 ! * Nothing here allocates on the C side, keeps state or is thread-unsafe.
 !
@@ -89,6 +100,9 @@
 !   relicore_universe_get_parameters                              function, _s
 !   relicore_thermal_history_options_default                      function
 !   relicore_thermal_history_compute                              subroutine (optional stat)
+!   relicore_linear_growth_compute                                subroutine (optional stat)
+!   relicore_linear_power_spectrum_options_default                function
+!   relicore_linear_power_spectrum_compute                        subroutine (optional stat)
 !   relicore_spectral_radiance_wavelength                         function, _s
 !   relicore_spectral_radiance_wavelength_f32                     function, _s
 !   relicore_spectral_radiance_wavelength_array                   subroutine
@@ -240,6 +254,36 @@
 !   relicore_visibility_peak_redshift                             function, _s
 !   relicore_thermal_decoupling_redshift                          function, _s
 !   relicore_reionization_optical_depth                           function, _s
+!   relicore_hubble_distance_at_mpc                               function, _s
+!   relicore_hubble_distance_at_mpc_array                         subroutine
+!   relicore_volume_averaged_distance_mpc                         function, _s
+!   relicore_volume_averaged_distance_mpc_array                   subroutine
+!   relicore_transverse_comoving_distance_over_sound_horizon      function, _s
+!   relicore_transverse_comoving_distance_over_sound_horizon_arraysubroutine
+!   relicore_hubble_distance_over_sound_horizon                   function, _s
+!   relicore_hubble_distance_over_sound_horizon_array             subroutine
+!   relicore_volume_averaged_distance_over_sound_horizon          function, _s
+!   relicore_volume_averaged_distance_over_sound_horizon_array    subroutine
+!   relicore_leapfrog_drift_factor_gyr                            function, _s
+!   relicore_leapfrog_kick_factor_gyr                             function, _s
+!   relicore_growth_factor                                        function, _s
+!   relicore_growth_factor_array                                  subroutine
+!   relicore_growth_rate                                          function, _s
+!   relicore_growth_rate_array                                    subroutine
+!   relicore_unnormalized_growth_factor                           function, _s
+!   relicore_unnormalized_growth_factor_array                     subroutine
+!   relicore_transfer_function                                    function, _s
+!   relicore_transfer_function_array                              subroutine
+!   relicore_linear_power_spectrum_mpc3                           function, _s
+!   relicore_linear_power_spectrum_mpc3_array                     subroutine
+!   relicore_density_rms_in_sphere                                function, _s
+!   relicore_growth_rate_times_sigma8                             function, _s
+!   relicore_growth_rate_times_sigma8_array                       subroutine
+!   relicore_sigma8                                               function, _s
+!   relicore_s8                                                   function, _s
+!   relicore_scalar_amplitude                                     function, _s
+!   relicore_eisenstein_hu_transfer_function                      function, _s
+!   relicore_eisenstein_hu_no_wiggle_transfer_function            function, _s
 module relicore
   use, intrinsic :: iso_c_binding, only: c_double, c_float, c_int32_t, c_int64_t, c_size_t, &
       c_char, c_ptr, c_null_char, c_associated, c_f_pointer
@@ -270,6 +314,15 @@ module relicore
   integer(c_int32_t), parameter, public :: RELICORE_UNIVERSE_STORAGE_WORDS = 1920_c_int32_t
   ! Words of storage in type(relicore_thermal_history) (struct relicore_thermal_history).
   integer(c_int32_t), parameter, public :: RELICORE_THERMAL_HISTORY_STORAGE_WORDS = 20480_c_int32_t
+  ! Words of storage in type(relicore_linear_growth) and type(relicore_linear_power_spectrum).
+  integer(c_int32_t), parameter, public :: RELICORE_LINEAR_GROWTH_STORAGE_WORDS = 10240_c_int32_t
+  integer(c_int32_t), parameter, public :: &
+      RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS = 10240_c_int32_t
+  ! The switches of type(relicore_linear_power_spectrum_options).
+  integer(c_int32_t), parameter, public :: RELICORE_TRANSFER_BARYON_OSCILLATIONS = 0_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_TRANSFER_NO_WIGGLE = 1_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_NORMALISATION_SCALAR_AMPLITUDE = 0_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_NORMALISATION_SIGMA8 = 1_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_MAJOR = 0_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_MINOR = 1_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_PATCH = 0_c_int32_t
@@ -392,6 +445,8 @@ module relicore
       relicore_universe_check_parameters, relicore_universe_get_parameters, &
       relicore_universe_get_parameters_s, relicore_thermal_history_options_default, &
       relicore_thermal_history_compute
+  public :: relicore_linear_growth_compute, relicore_linear_power_spectrum_options_default, &
+      relicore_linear_power_spectrum_compute
   public :: relicore_spectral_radiance_wavelength, relicore_spectral_radiance_wavelength_s, &
       relicore_spectral_radiance_wavelength_f32, relicore_spectral_radiance_wavelength_f32_s, &
       relicore_spectral_radiance_wavelength_array, relicore_spectral_radiance_wavelength_array_f32, &
@@ -533,7 +588,34 @@ module relicore
       relicore_temperature_at_last_scattering_k_s, relicore_visibility_peak_redshift, &
       relicore_visibility_peak_redshift_s, relicore_thermal_decoupling_redshift, &
       relicore_thermal_decoupling_redshift_s, relicore_reionization_optical_depth, &
-      relicore_reionization_optical_depth_s
+      relicore_reionization_optical_depth_s, relicore_hubble_distance_at_mpc, &
+      relicore_hubble_distance_at_mpc_s, relicore_hubble_distance_at_mpc_array, &
+      relicore_volume_averaged_distance_mpc, relicore_volume_averaged_distance_mpc_s, &
+      relicore_volume_averaged_distance_mpc_array, &
+      relicore_transverse_comoving_distance_over_sound_horizon, &
+      relicore_transverse_comoving_distance_over_sound_horizon_s, &
+      relicore_transverse_comoving_distance_over_sound_horizon_array, &
+      relicore_hubble_distance_over_sound_horizon, relicore_hubble_distance_over_sound_horizon_s, &
+      relicore_hubble_distance_over_sound_horizon_array, &
+      relicore_volume_averaged_distance_over_sound_horizon, &
+      relicore_volume_averaged_distance_over_sound_horizon_s, &
+      relicore_volume_averaged_distance_over_sound_horizon_array, &
+      relicore_leapfrog_drift_factor_gyr, relicore_leapfrog_drift_factor_gyr_s, &
+      relicore_leapfrog_kick_factor_gyr, relicore_leapfrog_kick_factor_gyr_s, &
+      relicore_growth_factor, relicore_growth_factor_s, relicore_growth_factor_array, &
+      relicore_growth_rate, relicore_growth_rate_s, relicore_growth_rate_array, &
+      relicore_unnormalized_growth_factor, relicore_unnormalized_growth_factor_s, &
+      relicore_unnormalized_growth_factor_array, relicore_transfer_function, &
+      relicore_transfer_function_s, relicore_transfer_function_array, &
+      relicore_linear_power_spectrum_mpc3, relicore_linear_power_spectrum_mpc3_s, &
+      relicore_linear_power_spectrum_mpc3_array, relicore_density_rms_in_sphere, &
+      relicore_density_rms_in_sphere_s, relicore_growth_rate_times_sigma8, &
+      relicore_growth_rate_times_sigma8_s, relicore_growth_rate_times_sigma8_array, &
+      relicore_sigma8, relicore_sigma8_s, relicore_s8, relicore_s8_s, relicore_scalar_amplitude, &
+      relicore_scalar_amplitude_s, relicore_eisenstein_hu_transfer_function, &
+      relicore_eisenstein_hu_transfer_function_s, &
+      relicore_eisenstein_hu_no_wiggle_transfer_function, &
+      relicore_eisenstein_hu_no_wiggle_transfer_function_s
   ! The hand-kept parts (bindings/fortran/parts/*.f90).
   public :: relicore_measured_response_weighted_radiance, &
       relicore_measured_response_weighted_radiance_s, &
@@ -656,6 +738,46 @@ module relicore
     integer(c_int64_t) :: tag = 0_c_int64_t                                 ! private
     integer(c_int64_t) :: storage(RELICORE_THERMAL_HISTORY_STORAGE_WORDS)   ! private
   end type relicore_thermal_history
+
+  ! struct relicore_linear_growth { uint64_t tag;
+  !     uint64_t storage[RELICORE_LINEAR_GROWTH_STORAGE_WORDS]; };
+  ! A computed linear growth of one universe (D_u and f on a table in the scale factor, with a
+  ! copy of the universe), built by relicore_linear_growth_compute and passed to its queries. A
+  ! plain value of 81928 bytes owned by the caller: keep it in a module, a derived type or an
+  ! allocatable rather than as a local variable on a small stack; copy it by assignment; read it
+  ! from any number of threads. The tag starts at 0: a growth never computed (or whose compute
+  ! failed) is refused with RELICORE_ERROR_INVALID_STRUCT.
+  type, bind(C), public :: relicore_linear_growth
+    integer(c_int64_t) :: tag = 0_c_int64_t                                ! private
+    integer(c_int64_t) :: storage(RELICORE_LINEAR_GROWTH_STORAGE_WORDS)    ! private
+  end type relicore_linear_growth
+
+  ! struct relicore_linear_power_spectrum_options { int32_t transfer_form; int32_t normalisation;
+  !     double value; double spectral_index; double running; };
+  ! The options of a linear power spectrum: fill it with
+  ! relicore_linear_power_spectrum_options_default() (baryon oscillations, normalised by A_s,
+  ! running 0; value and spectral_index NaN, unset), set value and spectral_index, then call
+  ! relicore_linear_power_spectrum_compute.
+  type, bind(C), public :: relicore_linear_power_spectrum_options
+    integer(c_int32_t) :: transfer_form   ! RELICORE_TRANSFER_BARYON_OSCILLATIONS (0) or
+                                          ! RELICORE_TRANSFER_NO_WIGGLE (1)
+    integer(c_int32_t) :: normalisation   ! RELICORE_NORMALISATION_SCALAR_AMPLITUDE (0): value is
+                                          ! A_s; RELICORE_NORMALISATION_SIGMA8 (1): value is sigma8
+    real(c_double) :: value               ! A_s or sigma8, > 0
+    real(c_double) :: spectral_index      ! n_s, finite
+    real(c_double) :: running             ! alpha_s = dn_s/dln k, finite (default 0)
+  end type relicore_linear_power_spectrum_options
+
+  ! struct relicore_linear_power_spectrum { uint64_t tag;
+  !     uint64_t storage[RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS]; };
+  ! A computed linear matter power spectrum (a copy of its growth, the Eisenstein & Hu 1998
+  ! transfer function, the primordial spectrum and sigma8), built by
+  ! relicore_linear_power_spectrum_compute. A plain value of 81928 bytes: the same rules as
+  ! type(relicore_linear_growth).
+  type, bind(C), public :: relicore_linear_power_spectrum
+    integer(c_int64_t) :: tag = 0_c_int64_t                                        ! private
+    integer(c_int64_t) :: storage(RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS)    ! private
+  end type relicore_linear_power_spectrum
 
   ! The result types of the table (generated).
   ! struct relicore_temperature_uncertainty { double temperature_k; double
@@ -901,6 +1023,35 @@ module relicore
       type(relicore_thermal_history), intent(out) :: out
       integer(c_int32_t) :: status
     end function c_thermal_history_compute
+    ! int32_t relicore_linear_growth_compute(const struct relicore_universe *universe,
+    !     struct relicore_linear_growth *out);
+    function c_linear_growth_compute(universe, out) &
+        bind(C, name='relicore_linear_growth_compute') result(status)
+      import :: c_int32_t, relicore_universe, relicore_linear_growth
+      type(relicore_universe), intent(in) :: universe
+      type(relicore_linear_growth), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_linear_growth_compute
+    ! int32_t relicore_linear_power_spectrum_options_default(
+    !     struct relicore_linear_power_spectrum_options *out);
+    function c_linear_power_spectrum_options_default(out) &
+        bind(C, name='relicore_linear_power_spectrum_options_default') result(status)
+      import :: c_int32_t, relicore_linear_power_spectrum_options
+      type(relicore_linear_power_spectrum_options), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_linear_power_spectrum_options_default
+    ! int32_t relicore_linear_power_spectrum_compute(const struct relicore_linear_growth *growth,
+    !     const struct relicore_linear_power_spectrum_options *options,
+    !     struct relicore_linear_power_spectrum *out);
+    function c_linear_power_spectrum_compute(growth, options, out) &
+        bind(C, name='relicore_linear_power_spectrum_compute') result(status)
+      import :: c_int32_t, relicore_linear_growth, relicore_linear_power_spectrum_options, &
+          relicore_linear_power_spectrum
+      type(relicore_linear_growth), intent(in) :: growth
+      type(relicore_linear_power_spectrum_options), intent(in) :: options
+      type(relicore_linear_power_spectrum), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_linear_power_spectrum_compute
 
     ! The table's functions (generated):
     ! int32_t relicore_spectral_radiance_wavelength(double wavelength_m, double temperature_k,
@@ -2581,6 +2732,337 @@ module relicore
       real(c_double), intent(out) :: out
       integer(c_int32_t) :: status
     end function c_reionization_optical_depth
+    ! int32_t relicore_hubble_distance_at_mpc(const struct relicore_universe *universe, double z,
+    !     double *out);
+    function c_hubble_distance_at_mpc(universe, z, out) &
+        bind(C, name='relicore_hubble_distance_at_mpc') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_hubble_distance_at_mpc
+    ! int32_t relicore_hubble_distance_at_mpc_array(const struct relicore_universe *universe, const
+    !     double *redshifts, size_t n, double *out);
+    function c_hubble_distance_at_mpc_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_hubble_distance_at_mpc_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_hubble_distance_at_mpc_array
+    ! int32_t relicore_volume_averaged_distance_mpc(const struct relicore_universe *universe, double
+    !     z, double *out);
+    function c_volume_averaged_distance_mpc(universe, z, out) &
+        bind(C, name='relicore_volume_averaged_distance_mpc') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_volume_averaged_distance_mpc
+    ! int32_t relicore_volume_averaged_distance_mpc_array(const struct relicore_universe *universe,
+    !     const double *redshifts, size_t n, double *out);
+    function c_volume_averaged_distance_mpc_array(universe, redshifts, n, out) &
+        bind(C, name='relicore_volume_averaged_distance_mpc_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_volume_averaged_distance_mpc_array
+    ! int32_t relicore_transverse_comoving_distance_over_sound_horizon(const struct
+    !     relicore_universe *universe, double z, double sound_horizon_drag_mpc, double *out);
+    function c_transverse_comoving_distance_over_sound_horizon(universe, z, sound_horizon_drag_mpc, &
+        out) &
+        bind(C, name='relicore_transverse_comoving_distance_over_sound_horizon') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), value :: sound_horizon_drag_mpc
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_transverse_comoving_distance_over_sound_horizon
+    ! int32_t relicore_transverse_comoving_distance_over_sound_horizon_array(const struct
+    !     relicore_universe *universe, const double *redshifts, size_t n, double
+    !     sound_horizon_drag_mpc, double *out);
+    function c_transverse_comoving_distance_over_sound_horizon_array(universe, redshifts, n, &
+        sound_horizon_drag_mpc, out) &
+        bind(C, name='relicore_transverse_comoving_distance_over_sound_horizon_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), value :: sound_horizon_drag_mpc
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_transverse_comoving_distance_over_sound_horizon_array
+    ! int32_t relicore_hubble_distance_over_sound_horizon(const struct relicore_universe *universe,
+    !     double z, double sound_horizon_drag_mpc, double *out);
+    function c_hubble_distance_over_sound_horizon(universe, z, sound_horizon_drag_mpc, out) &
+        bind(C, name='relicore_hubble_distance_over_sound_horizon') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), value :: sound_horizon_drag_mpc
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_hubble_distance_over_sound_horizon
+    ! int32_t relicore_hubble_distance_over_sound_horizon_array(const struct relicore_universe
+    !     *universe, const double *redshifts, size_t n, double sound_horizon_drag_mpc, double *out);
+    function c_hubble_distance_over_sound_horizon_array(universe, redshifts, n, &
+        sound_horizon_drag_mpc, out) &
+        bind(C, name='relicore_hubble_distance_over_sound_horizon_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), value :: sound_horizon_drag_mpc
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_hubble_distance_over_sound_horizon_array
+    ! int32_t relicore_volume_averaged_distance_over_sound_horizon(const struct relicore_universe
+    !     *universe, double z, double sound_horizon_drag_mpc, double *out);
+    function c_volume_averaged_distance_over_sound_horizon(universe, z, sound_horizon_drag_mpc, &
+        out) &
+        bind(C, name='relicore_volume_averaged_distance_over_sound_horizon') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: z
+      real(c_double), value :: sound_horizon_drag_mpc
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_volume_averaged_distance_over_sound_horizon
+    ! int32_t relicore_volume_averaged_distance_over_sound_horizon_array(const struct
+    !     relicore_universe *universe, const double *redshifts, size_t n, double
+    !     sound_horizon_drag_mpc, double *out);
+    function c_volume_averaged_distance_over_sound_horizon_array(universe, redshifts, n, &
+        sound_horizon_drag_mpc, out) &
+        bind(C, name='relicore_volume_averaged_distance_over_sound_horizon_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), value :: sound_horizon_drag_mpc
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_volume_averaged_distance_over_sound_horizon_array
+    ! int32_t relicore_leapfrog_drift_factor_gyr(const struct relicore_universe *universe, double
+    !     start_scale_factor, double end_scale_factor, double *out);
+    function c_leapfrog_drift_factor_gyr(universe, start_scale_factor, end_scale_factor, out) &
+        bind(C, name='relicore_leapfrog_drift_factor_gyr') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: start_scale_factor
+      real(c_double), value :: end_scale_factor
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_leapfrog_drift_factor_gyr
+    ! int32_t relicore_leapfrog_kick_factor_gyr(const struct relicore_universe *universe, double
+    !     start_scale_factor, double end_scale_factor, double *out);
+    function c_leapfrog_kick_factor_gyr(universe, start_scale_factor, end_scale_factor, out) &
+        bind(C, name='relicore_leapfrog_kick_factor_gyr') result(status)
+      import :: c_double, c_int32_t, relicore_universe
+      type(relicore_universe), intent(in) :: universe
+      real(c_double), value :: start_scale_factor
+      real(c_double), value :: end_scale_factor
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_leapfrog_kick_factor_gyr
+    ! int32_t relicore_growth_factor(const struct relicore_linear_growth *growth, double z, double
+    !     *out);
+    function c_growth_factor(growth, z, out) &
+        bind(C, name='relicore_growth_factor') result(status)
+      import :: c_double, c_int32_t, relicore_linear_growth
+      type(relicore_linear_growth), intent(in) :: growth
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_growth_factor
+    ! int32_t relicore_growth_factor_array(const struct relicore_linear_growth *growth, const double
+    !     *redshifts, size_t n, double *out);
+    function c_growth_factor_array(growth, redshifts, n, out) &
+        bind(C, name='relicore_growth_factor_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_linear_growth
+      type(relicore_linear_growth), intent(in) :: growth
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_growth_factor_array
+    ! int32_t relicore_growth_rate(const struct relicore_linear_growth *growth, double z, double
+    !     *out);
+    function c_growth_rate(growth, z, out) &
+        bind(C, name='relicore_growth_rate') result(status)
+      import :: c_double, c_int32_t, relicore_linear_growth
+      type(relicore_linear_growth), intent(in) :: growth
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_growth_rate
+    ! int32_t relicore_growth_rate_array(const struct relicore_linear_growth *growth, const double
+    !     *redshifts, size_t n, double *out);
+    function c_growth_rate_array(growth, redshifts, n, out) &
+        bind(C, name='relicore_growth_rate_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_linear_growth
+      type(relicore_linear_growth), intent(in) :: growth
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_growth_rate_array
+    ! int32_t relicore_unnormalized_growth_factor(const struct relicore_linear_growth *growth,
+    !     double z, double *out);
+    function c_unnormalized_growth_factor(growth, z, out) &
+        bind(C, name='relicore_unnormalized_growth_factor') result(status)
+      import :: c_double, c_int32_t, relicore_linear_growth
+      type(relicore_linear_growth), intent(in) :: growth
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_unnormalized_growth_factor
+    ! int32_t relicore_unnormalized_growth_factor_array(const struct relicore_linear_growth *growth,
+    !     const double *redshifts, size_t n, double *out);
+    function c_unnormalized_growth_factor_array(growth, redshifts, n, out) &
+        bind(C, name='relicore_unnormalized_growth_factor_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_linear_growth
+      type(relicore_linear_growth), intent(in) :: growth
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_unnormalized_growth_factor_array
+    ! int32_t relicore_transfer_function(const struct relicore_linear_power_spectrum
+    !     *power_spectrum, double wavenumber_per_mpc, double *out);
+    function c_transfer_function(power_spectrum, wavenumber_per_mpc, out) &
+        bind(C, name='relicore_transfer_function') result(status)
+      import :: c_double, c_int32_t, relicore_linear_power_spectrum
+      type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+      real(c_double), value :: wavenumber_per_mpc
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_transfer_function
+    ! int32_t relicore_transfer_function_array(const struct relicore_linear_power_spectrum
+    !     *power_spectrum, const double *wavenumbers_per_mpc, size_t n, double *out);
+    function c_transfer_function_array(power_spectrum, wavenumbers_per_mpc, n, out) &
+        bind(C, name='relicore_transfer_function_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_linear_power_spectrum
+      type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+      real(c_double), intent(in) :: wavenumbers_per_mpc(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_transfer_function_array
+    ! int32_t relicore_linear_power_spectrum_mpc3(const struct relicore_linear_power_spectrum
+    !     *power_spectrum, double wavenumber_per_mpc, double z, double *out);
+    function c_linear_power_spectrum_mpc3(power_spectrum, wavenumber_per_mpc, z, out) &
+        bind(C, name='relicore_linear_power_spectrum_mpc3') result(status)
+      import :: c_double, c_int32_t, relicore_linear_power_spectrum
+      type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+      real(c_double), value :: wavenumber_per_mpc
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_linear_power_spectrum_mpc3
+    ! int32_t relicore_linear_power_spectrum_mpc3_array(const struct relicore_linear_power_spectrum
+    !     *power_spectrum, const double *wavenumbers_per_mpc, size_t n, double z, double *out);
+    function c_linear_power_spectrum_mpc3_array(power_spectrum, wavenumbers_per_mpc, n, z, out) &
+        bind(C, name='relicore_linear_power_spectrum_mpc3_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_linear_power_spectrum
+      type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+      real(c_double), intent(in) :: wavenumbers_per_mpc(*)
+      integer(c_size_t), value :: n
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_linear_power_spectrum_mpc3_array
+    ! int32_t relicore_density_rms_in_sphere(const struct relicore_linear_power_spectrum
+    !     *power_spectrum, double radius_mpc, double z, double *out);
+    function c_density_rms_in_sphere(power_spectrum, radius_mpc, z, out) &
+        bind(C, name='relicore_density_rms_in_sphere') result(status)
+      import :: c_double, c_int32_t, relicore_linear_power_spectrum
+      type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+      real(c_double), value :: radius_mpc
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_density_rms_in_sphere
+    ! int32_t relicore_growth_rate_times_sigma8(const struct relicore_linear_power_spectrum
+    !     *power_spectrum, double z, double *out);
+    function c_growth_rate_times_sigma8(power_spectrum, z, out) &
+        bind(C, name='relicore_growth_rate_times_sigma8') result(status)
+      import :: c_double, c_int32_t, relicore_linear_power_spectrum
+      type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+      real(c_double), value :: z
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_growth_rate_times_sigma8
+    ! int32_t relicore_growth_rate_times_sigma8_array(const struct relicore_linear_power_spectrum
+    !     *power_spectrum, const double *redshifts, size_t n, double *out);
+    function c_growth_rate_times_sigma8_array(power_spectrum, redshifts, n, out) &
+        bind(C, name='relicore_growth_rate_times_sigma8_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_linear_power_spectrum
+      type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+      real(c_double), intent(in) :: redshifts(*)
+      integer(c_size_t), value :: n
+      real(c_double), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_growth_rate_times_sigma8_array
+    ! int32_t relicore_sigma8(const struct relicore_linear_power_spectrum *power_spectrum, double
+    !     *out);
+    function c_sigma8(power_spectrum, out) &
+        bind(C, name='relicore_sigma8') result(status)
+      import :: c_double, c_int32_t, relicore_linear_power_spectrum
+      type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_sigma8
+    ! int32_t relicore_s8(const struct relicore_linear_power_spectrum *power_spectrum, double *out);
+    function c_s8(power_spectrum, out) &
+        bind(C, name='relicore_s8') result(status)
+      import :: c_double, c_int32_t, relicore_linear_power_spectrum
+      type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_s8
+    ! int32_t relicore_scalar_amplitude(const struct relicore_linear_power_spectrum *power_spectrum,
+    !     double *out);
+    function c_scalar_amplitude(power_spectrum, out) &
+        bind(C, name='relicore_scalar_amplitude') result(status)
+      import :: c_double, c_int32_t, relicore_linear_power_spectrum
+      type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_scalar_amplitude
+    ! int32_t relicore_eisenstein_hu_transfer_function(double wavenumber_per_mpc, double
+    !     omega_matter_h2, double omega_baryon_h2, double cmb_temperature_k, double *out);
+    function c_eisenstein_hu_transfer_function(wavenumber_per_mpc, omega_matter_h2, &
+        omega_baryon_h2, cmb_temperature_k, out) &
+        bind(C, name='relicore_eisenstein_hu_transfer_function') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: wavenumber_per_mpc
+      real(c_double), value :: omega_matter_h2
+      real(c_double), value :: omega_baryon_h2
+      real(c_double), value :: cmb_temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_eisenstein_hu_transfer_function
+    ! int32_t relicore_eisenstein_hu_no_wiggle_transfer_function(double wavenumber_per_mpc, double
+    !     omega_matter_h2, double omega_baryon_h2, double cmb_temperature_k, double *out);
+    function c_eisenstein_hu_no_wiggle_transfer_function(wavenumber_per_mpc, omega_matter_h2, &
+        omega_baryon_h2, cmb_temperature_k, out) &
+        bind(C, name='relicore_eisenstein_hu_no_wiggle_transfer_function') result(status)
+      import :: c_double, c_int32_t
+      real(c_double), value :: wavenumber_per_mpc
+      real(c_double), value :: omega_matter_h2
+      real(c_double), value :: omega_baryon_h2
+      real(c_double), value :: cmb_temperature_k
+      real(c_double), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_eisenstein_hu_no_wiggle_transfer_function
 
     ! The hand-kept parts (bindings/fortran/parts/*.f90):
     ! int32_t relicore_measured_response_weighted_radiance(const double *wavelengths_m, size_t
@@ -3672,6 +4154,48 @@ contains
     call report(c_thermal_history_compute(universe, options, out), &
         'relicore_thermal_history_compute', stat)
   end subroutine relicore_thermal_history_compute
+
+  ! ================================================================ growth construction
+
+  ! Computes the linear growth of a universe into out (the growth equation integrated once onto
+  ! a table; about 10 ms): compute once, then pass it to every query. stat = RELICORE_OK,
+  ! RELICORE_ERROR_INVALID_STRUCT (universe not initialised), RELICORE_ERROR_OUT_OF_DOMAIN (no
+  ! clustering matter, or a universe whose growing mode is unknown at a = 2^-47) or
+  ! RELICORE_ERROR_NO_CONVERGENCE; on failure out is cleared and every query refuses it
+  ! (RELICORE_ERROR_INVALID_STRUCT). Without stat a failure stops with the message.
+  subroutine relicore_linear_growth_compute(universe, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    type(relicore_linear_growth), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    call report(c_linear_growth_compute(universe, out), 'relicore_linear_growth_compute', stat)
+  end subroutine relicore_linear_growth_compute
+
+  ! The default options of a power spectrum: transfer_form RELICORE_TRANSFER_BARYON_OSCILLATIONS,
+  ! normalisation RELICORE_NORMALISATION_SCALAR_AMPLITUDE, running 0; value and spectral_index
+  ! NaN (unset: set them). Result: type(relicore_linear_power_spectrum_options).
+  function relicore_linear_power_spectrum_options_default() result(options)
+    type(relicore_linear_power_spectrum_options) :: options
+    call report(c_linear_power_spectrum_options_default(options), &
+        'relicore_linear_power_spectrum_options_default')
+  end function relicore_linear_power_spectrum_options_default
+
+  ! Computes a linear matter power spectrum on a computed growth into out (Eisenstein & Hu 1998
+  ! transfer function, primordial A_s, n_s, alpha_s at k_p = 0.05 Mpc-1, normalised by A_s or by
+  ! sigma8; sigma8 computed once, under a millisecond). stat = RELICORE_OK,
+  ! RELICORE_ERROR_INVALID_STRUCT (growth not computed), RELICORE_ERROR_OUT_OF_DOMAIN (a switch
+  ! outside its values, or sigma8 not formable), RELICORE_ERROR_NON_FINITE (value, n_s or
+  ! alpha_s), RELICORE_ERROR_NON_POSITIVE (A_s or sigma8 <= 0),
+  ! RELICORE_ERROR_INVALID_PARAMETER (the oscillating form without baryons, or no radiation) or
+  ! RELICORE_ERROR_NO_CONVERGENCE; on failure out is cleared. Without stat a failure stops with
+  ! the message.
+  subroutine relicore_linear_power_spectrum_compute(growth, options, out, stat)
+    type(relicore_linear_growth), intent(in) :: growth
+    type(relicore_linear_power_spectrum_options), intent(in) :: options
+    type(relicore_linear_power_spectrum), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    call report(c_linear_power_spectrum_compute(growth, options, out), &
+        'relicore_linear_power_spectrum_compute', stat)
+  end subroutine relicore_linear_power_spectrum_compute
 
   ! ================================================================ the table's functions
 
@@ -7316,6 +7840,752 @@ contains
     if (code /= RELICORE_OK) out = nan64()
     call report(code, 'relicore_reionization_optical_depth', stat)
   end subroutine relicore_reionization_optical_depth_s
+
+  ! Hubble distance at z, D_H(z) = c/H(z), Mpc.
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: D_H(z) = c/H(z) in Mpc.
+  ! Forms: relicore_hubble_distance_at_mpc, relicore_hubble_distance_at_mpc_s;
+  !   relicore_hubble_distance_at_mpc_array(universe, redshifts, out, stat) with redshifts(i) in
+  !   place of z.
+  impure elemental function relicore_hubble_distance_at_mpc(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_hubble_distance_at_mpc(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_hubble_distance_at_mpc
+
+  impure elemental subroutine relicore_hubble_distance_at_mpc_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_hubble_distance_at_mpc(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_hubble_distance_at_mpc', stat)
+  end subroutine relicore_hubble_distance_at_mpc_s
+
+  subroutine relicore_hubble_distance_at_mpc_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_hubble_distance_at_mpc_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_hubble_distance_at_mpc_array(universe, redshifts, size(redshifts, kind=c_size_t), &
+          out)
+    end if
+    call report(code, 'relicore_hubble_distance_at_mpc_array', stat)
+  end subroutine relicore_hubble_distance_at_mpc_array
+
+  ! Volume-averaged distance D_V(z) = [z D_M^2 D_H(z)]^(1/3), Mpc (Eisenstein et al. 2005, ApJ 633,
+  ! 560, eq. 2), 0 at z = 0.
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  ! Result: D_V(z) in Mpc.
+  ! Forms: relicore_volume_averaged_distance_mpc, relicore_volume_averaged_distance_mpc_s;
+  !   relicore_volume_averaged_distance_mpc_array(universe, redshifts, out, stat) with redshifts(i)
+  !   in place of z.
+  impure elemental function relicore_volume_averaged_distance_mpc(universe, z) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_volume_averaged_distance_mpc(universe, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_volume_averaged_distance_mpc
+
+  impure elemental subroutine relicore_volume_averaged_distance_mpc_s(universe, z, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_volume_averaged_distance_mpc(universe, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_volume_averaged_distance_mpc', stat)
+  end subroutine relicore_volume_averaged_distance_mpc_s
+
+  subroutine relicore_volume_averaged_distance_mpc_array(universe, redshifts, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_volume_averaged_distance_mpc_array(universe, empty, 0_c_size_t, empty_out)
+    else
+      code = c_volume_averaged_distance_mpc_array(universe, redshifts, size(redshifts, &
+          kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_volume_averaged_distance_mpc_array', stat)
+  end subroutine relicore_volume_averaged_distance_mpc_array
+
+  ! D_M(z)/r_d: the transverse comoving distance over the drag-epoch sound horizon.
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  !   sound_horizon_drag_mpc: drag-epoch sound horizon r_d in Mpc, > 0
+  ! Result: D_M(z)/r_d.
+  ! Forms: relicore_transverse_comoving_distance_over_sound_horizon,
+  !   relicore_transverse_comoving_distance_over_sound_horizon_s;
+  !   relicore_transverse_comoving_distance_over_sound_horizon_array(universe, redshifts,
+  !   sound_horizon_drag_mpc, out, stat) with redshifts(i) in place of z.
+  impure elemental function relicore_transverse_comoving_distance_over_sound_horizon(universe, z, &
+      sound_horizon_drag_mpc) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z, sound_horizon_drag_mpc
+    real(c_double) :: res
+    if (c_transverse_comoving_distance_over_sound_horizon(universe, z, sound_horizon_drag_mpc, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_transverse_comoving_distance_over_sound_horizon
+
+  impure elemental subroutine relicore_transverse_comoving_distance_over_sound_horizon_s(universe, &
+      z, sound_horizon_drag_mpc, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z, sound_horizon_drag_mpc
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_transverse_comoving_distance_over_sound_horizon(universe, z, sound_horizon_drag_mpc, &
+        out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_transverse_comoving_distance_over_sound_horizon', stat)
+  end subroutine relicore_transverse_comoving_distance_over_sound_horizon_s
+
+  subroutine relicore_transverse_comoving_distance_over_sound_horizon_array(universe, redshifts, &
+      sound_horizon_drag_mpc, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(in) :: sound_horizon_drag_mpc
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_transverse_comoving_distance_over_sound_horizon_array(universe, empty, 0_c_size_t, &
+          sound_horizon_drag_mpc, empty_out)
+    else
+      code = c_transverse_comoving_distance_over_sound_horizon_array(universe, redshifts, &
+          size(redshifts, kind=c_size_t), sound_horizon_drag_mpc, out)
+    end if
+    call report(code, 'relicore_transverse_comoving_distance_over_sound_horizon_array', stat)
+  end subroutine relicore_transverse_comoving_distance_over_sound_horizon_array
+
+  ! D_H(z)/r_d = c/(H(z) r_d). Arguments and errors as
+  ! `transverse_comoving_distance_over_sound_horizon`. Accuracy: within 1e-14 relative (`f64`) of
+  ! mpmath.
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  !   sound_horizon_drag_mpc: drag-epoch sound horizon r_d in Mpc, > 0
+  ! Result: D_H(z)/r_d.
+  ! Forms: relicore_hubble_distance_over_sound_horizon,
+  !   relicore_hubble_distance_over_sound_horizon_s;
+  !   relicore_hubble_distance_over_sound_horizon_array(universe, redshifts, sound_horizon_drag_mpc,
+  !   out, stat) with redshifts(i) in place of z.
+  impure elemental function relicore_hubble_distance_over_sound_horizon(universe, z, &
+      sound_horizon_drag_mpc) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z, sound_horizon_drag_mpc
+    real(c_double) :: res
+    if (c_hubble_distance_over_sound_horizon(universe, z, sound_horizon_drag_mpc, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_hubble_distance_over_sound_horizon
+
+  impure elemental subroutine relicore_hubble_distance_over_sound_horizon_s(universe, z, &
+      sound_horizon_drag_mpc, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z, sound_horizon_drag_mpc
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_hubble_distance_over_sound_horizon(universe, z, sound_horizon_drag_mpc, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_hubble_distance_over_sound_horizon', stat)
+  end subroutine relicore_hubble_distance_over_sound_horizon_s
+
+  subroutine relicore_hubble_distance_over_sound_horizon_array(universe, redshifts, &
+      sound_horizon_drag_mpc, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(in) :: sound_horizon_drag_mpc
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_hubble_distance_over_sound_horizon_array(universe, empty, 0_c_size_t, &
+          sound_horizon_drag_mpc, empty_out)
+    else
+      code = c_hubble_distance_over_sound_horizon_array(universe, redshifts, size(redshifts, &
+          kind=c_size_t), sound_horizon_drag_mpc, out)
+    end if
+    call report(code, 'relicore_hubble_distance_over_sound_horizon_array', stat)
+  end subroutine relicore_hubble_distance_over_sound_horizon_array
+
+  ! D_V(z)/r_d. Arguments and errors as `transverse_comoving_distance_over_sound_horizon`. Accuracy:
+  ! within 1e-12 relative (`f64`) of mpmath.
+  !   universe: from relicore_universe_init
+  !   z: redshift, finite and >= 0
+  !   sound_horizon_drag_mpc: drag-epoch sound horizon r_d in Mpc, > 0
+  ! Result: D_V(z)/r_d.
+  ! Forms: relicore_volume_averaged_distance_over_sound_horizon,
+  !   relicore_volume_averaged_distance_over_sound_horizon_s;
+  !   relicore_volume_averaged_distance_over_sound_horizon_array(universe, redshifts,
+  !   sound_horizon_drag_mpc, out, stat) with redshifts(i) in place of z.
+  impure elemental function relicore_volume_averaged_distance_over_sound_horizon(universe, z, &
+      sound_horizon_drag_mpc) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z, sound_horizon_drag_mpc
+    real(c_double) :: res
+    if (c_volume_averaged_distance_over_sound_horizon(universe, z, sound_horizon_drag_mpc, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_volume_averaged_distance_over_sound_horizon
+
+  impure elemental subroutine relicore_volume_averaged_distance_over_sound_horizon_s(universe, z, &
+      sound_horizon_drag_mpc, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: z, sound_horizon_drag_mpc
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_volume_averaged_distance_over_sound_horizon(universe, z, sound_horizon_drag_mpc, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_volume_averaged_distance_over_sound_horizon', stat)
+  end subroutine relicore_volume_averaged_distance_over_sound_horizon_s
+
+  subroutine relicore_volume_averaged_distance_over_sound_horizon_array(universe, redshifts, &
+      sound_horizon_drag_mpc, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(in) :: sound_horizon_drag_mpc
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_volume_averaged_distance_over_sound_horizon_array(universe, empty, 0_c_size_t, &
+          sound_horizon_drag_mpc, empty_out)
+    else
+      code = c_volume_averaged_distance_over_sound_horizon_array(universe, redshifts, &
+          size(redshifts, kind=c_size_t), sound_horizon_drag_mpc, out)
+    end if
+    call report(code, 'relicore_volume_averaged_distance_over_sound_horizon_array', stat)
+  end subroutine relicore_volume_averaged_distance_over_sound_horizon_array
+
+  ! Drift factor of a comoving leapfrog step, int_{a1}^{a2} da/(a^3H), Gyr (Quinn, Katz, Stadel &
+  ! Lake 1997): the time a drift multiplies the canonical momentum p = a^2dx/dt by.
+  !   universe: from relicore_universe_init
+  !   start_scale_factor: scale factor a1 at the start of the step, > 0 and <= 1
+  !   end_scale_factor: scale factor a2 at its end, > 0 and <= 1
+  ! Result: int da/(a^3 H) from a1 to a2 in Gyr.
+  ! Forms: relicore_leapfrog_drift_factor_gyr, relicore_leapfrog_drift_factor_gyr_s.
+  impure elemental function relicore_leapfrog_drift_factor_gyr(universe, start_scale_factor, &
+      end_scale_factor) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: start_scale_factor, end_scale_factor
+    real(c_double) :: res
+    if (c_leapfrog_drift_factor_gyr(universe, start_scale_factor, end_scale_factor, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_leapfrog_drift_factor_gyr
+
+  impure elemental subroutine relicore_leapfrog_drift_factor_gyr_s(universe, start_scale_factor, &
+      end_scale_factor, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: start_scale_factor, end_scale_factor
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_leapfrog_drift_factor_gyr(universe, start_scale_factor, end_scale_factor, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_leapfrog_drift_factor_gyr', stat)
+  end subroutine relicore_leapfrog_drift_factor_gyr_s
+
+  ! Kick factor of a comoving leapfrog step, int_{a1}^{a2} da/(a^2H), Gyr (Quinn, Katz, Stadel &
+  ! Lake 1997): the time a kick multiplies the comoving force by. Arguments, errors and accuracy as
+  ! `leapfrog_drift_factor_gyr`.
+  !   universe: from relicore_universe_init
+  !   start_scale_factor: scale factor a1 at the start of the step, > 0 and <= 1
+  !   end_scale_factor: scale factor a2 at its end, > 0 and <= 1
+  ! Result: int da/(a^2 H) from a1 to a2 in Gyr.
+  ! Forms: relicore_leapfrog_kick_factor_gyr, relicore_leapfrog_kick_factor_gyr_s.
+  impure elemental function relicore_leapfrog_kick_factor_gyr(universe, start_scale_factor, &
+      end_scale_factor) result(res)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: start_scale_factor, end_scale_factor
+    real(c_double) :: res
+    if (c_leapfrog_kick_factor_gyr(universe, start_scale_factor, end_scale_factor, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_leapfrog_kick_factor_gyr
+
+  impure elemental subroutine relicore_leapfrog_kick_factor_gyr_s(universe, start_scale_factor, &
+      end_scale_factor, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    real(c_double), intent(in) :: start_scale_factor, end_scale_factor
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_leapfrog_kick_factor_gyr(universe, start_scale_factor, end_scale_factor, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_leapfrog_kick_factor_gyr', stat)
+  end subroutine relicore_leapfrog_kick_factor_gyr_s
+
+  ! Linear growth factor D(z) = D_u(a)/D_u(1), normalised to 1 today (module doc of `growth`).
+  !   growth: from relicore_linear_growth_compute
+  !   z: redshift, finite and >= 0
+  ! Result: D(z) = D_u(a)/D_u(1), 1 today.
+  ! Forms: relicore_growth_factor, relicore_growth_factor_s; relicore_growth_factor_array(growth,
+  !   redshifts, out, stat) with redshifts(i) in place of z.
+  impure elemental function relicore_growth_factor(growth, z) result(res)
+    type(relicore_linear_growth), intent(in) :: growth
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_growth_factor(growth, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_growth_factor
+
+  impure elemental subroutine relicore_growth_factor_s(growth, z, out, stat)
+    type(relicore_linear_growth), intent(in) :: growth
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_growth_factor(growth, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_growth_factor', stat)
+  end subroutine relicore_growth_factor_s
+
+  subroutine relicore_growth_factor_array(growth, redshifts, out, stat)
+    type(relicore_linear_growth), intent(in) :: growth
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_growth_factor_array(growth, empty, 0_c_size_t, empty_out)
+    else
+      code = c_growth_factor_array(growth, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_growth_factor_array', stat)
+  end subroutine relicore_growth_factor_array
+
+  ! Linear growth rate f(z) = d ln D/d ln a (module doc of `growth`).
+  !   growth: from relicore_linear_growth_compute
+  !   z: redshift, finite and >= 0
+  ! Result: f(z) = dln D/dln a.
+  ! Forms: relicore_growth_rate, relicore_growth_rate_s; relicore_growth_rate_array(growth,
+  !   redshifts, out, stat) with redshifts(i) in place of z.
+  impure elemental function relicore_growth_rate(growth, z) result(res)
+    type(relicore_linear_growth), intent(in) :: growth
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_growth_rate(growth, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_growth_rate
+
+  impure elemental subroutine relicore_growth_rate_s(growth, z, out, stat)
+    type(relicore_linear_growth), intent(in) :: growth
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_growth_rate(growth, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_growth_rate', stat)
+  end subroutine relicore_growth_rate_s
+
+  subroutine relicore_growth_rate_array(growth, redshifts, out, stat)
+    type(relicore_linear_growth), intent(in) :: growth
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_growth_rate_array(growth, empty, 0_c_size_t, empty_out)
+    else
+      code = c_growth_rate_array(growth, redshifts, size(redshifts, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_growth_rate_array', stat)
+  end subroutine relicore_growth_rate_array
+
+  ! Unnormalised growth factor D_u(a), a = 1/(1+z): the growing mode of the growth equation with D_u
+  ! -> a + (2/3) a_eq as a -> 0, a_eq = Omega_r,early/Omega_cb counting photons and all N_eff
+  ! species as massless (without radiation D_u -> a); module doc of `growth`.
+  !   growth: from relicore_linear_growth_compute
+  !   z: redshift, finite and >= 0
+  ! Result: D_u(a), the growing mode with D_u -> a + (2/3) a_eq as a -> 0.
+  ! Forms: relicore_unnormalized_growth_factor, relicore_unnormalized_growth_factor_s;
+  !   relicore_unnormalized_growth_factor_array(growth, redshifts, out, stat) with redshifts(i) in
+  !   place of z.
+  impure elemental function relicore_unnormalized_growth_factor(growth, z) result(res)
+    type(relicore_linear_growth), intent(in) :: growth
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_unnormalized_growth_factor(growth, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_unnormalized_growth_factor
+
+  impure elemental subroutine relicore_unnormalized_growth_factor_s(growth, z, out, stat)
+    type(relicore_linear_growth), intent(in) :: growth
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_unnormalized_growth_factor(growth, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_unnormalized_growth_factor', stat)
+  end subroutine relicore_unnormalized_growth_factor_s
+
+  subroutine relicore_unnormalized_growth_factor_array(growth, redshifts, out, stat)
+    type(relicore_linear_growth), intent(in) :: growth
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_unnormalized_growth_factor_array(growth, empty, 0_c_size_t, empty_out)
+    else
+      code = c_unnormalized_growth_factor_array(growth, redshifts, size(redshifts, kind=c_size_t), &
+          out)
+    end if
+    call report(code, 'relicore_unnormalized_growth_factor_array', stat)
+  end subroutine relicore_unnormalized_growth_factor_array
+
+  ! The transfer function T(k) of the chosen form (Eisenstein & Hu 1998; see
+  ! `eisenstein_hu_transfer_function` and `eisenstein_hu_no_wiggle_transfer_function` for the
+  ! formulae, domain and accuracy).
+  !   power_spectrum: from relicore_linear_power_spectrum_compute
+  !   wavenumber_per_mpc: wavenumber k in Mpc-1, > 0
+  ! Result: T(k) of the spectrum's transfer form.
+  ! Forms: relicore_transfer_function, relicore_transfer_function_s;
+  !   relicore_transfer_function_array(power_spectrum, wavenumbers_per_mpc, out, stat) with
+  !   wavenumbers_per_mpc(i) in place of wavenumber_per_mpc.
+  impure elemental function relicore_transfer_function(power_spectrum, &
+      wavenumber_per_mpc) result(res)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double), intent(in) :: wavenumber_per_mpc
+    real(c_double) :: res
+    if (c_transfer_function(power_spectrum, wavenumber_per_mpc, res) /= RELICORE_OK) res = nan64()
+  end function relicore_transfer_function
+
+  impure elemental subroutine relicore_transfer_function_s(power_spectrum, wavenumber_per_mpc, out, &
+      stat)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double), intent(in) :: wavenumber_per_mpc
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_transfer_function(power_spectrum, wavenumber_per_mpc, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_transfer_function', stat)
+  end subroutine relicore_transfer_function_s
+
+  subroutine relicore_transfer_function_array(power_spectrum, wavenumbers_per_mpc, out, stat)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double), intent(in) :: wavenumbers_per_mpc(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(wavenumbers_per_mpc)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(wavenumbers_per_mpc) == 0) then
+      empty = 0
+      code = c_transfer_function_array(power_spectrum, empty, 0_c_size_t, empty_out)
+    else
+      code = c_transfer_function_array(power_spectrum, wavenumbers_per_mpc, &
+          size(wavenumbers_per_mpc, kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_transfer_function_array', stat)
+  end subroutine relicore_transfer_function_array
+
+  ! The linear matter power spectrum P(k, z) = (2 pi^2/k^3) A_s (k/k_p)^(n_s - 1 + (1/2) alpha_s
+  ! ln(k/k_p)) * [(2/5) (ck/H0)^2 T(k) D_u(a)/Omega_m]^2, Mpc^3 (module doc of `growth`).
+  !   power_spectrum: from relicore_linear_power_spectrum_compute
+  !   wavenumber_per_mpc: wavenumber k in Mpc-1 (no h), > 0
+  !   z: redshift, finite and >= 0
+  ! Result: P(k, z) in Mpc^3.
+  ! Forms: relicore_linear_power_spectrum_mpc3, relicore_linear_power_spectrum_mpc3_s;
+  !   relicore_linear_power_spectrum_mpc3_array(power_spectrum, wavenumbers_per_mpc, z, out, stat)
+  !   with wavenumbers_per_mpc(i) in place of wavenumber_per_mpc.
+  impure elemental function relicore_linear_power_spectrum_mpc3(power_spectrum, wavenumber_per_mpc, &
+      z) result(res)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double), intent(in) :: wavenumber_per_mpc, z
+    real(c_double) :: res
+    if (c_linear_power_spectrum_mpc3(power_spectrum, wavenumber_per_mpc, z, &
+        res) /= RELICORE_OK) res = nan64()
+  end function relicore_linear_power_spectrum_mpc3
+
+  impure elemental subroutine relicore_linear_power_spectrum_mpc3_s(power_spectrum, &
+      wavenumber_per_mpc, z, out, stat)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double), intent(in) :: wavenumber_per_mpc, z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_linear_power_spectrum_mpc3(power_spectrum, wavenumber_per_mpc, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_linear_power_spectrum_mpc3', stat)
+  end subroutine relicore_linear_power_spectrum_mpc3_s
+
+  subroutine relicore_linear_power_spectrum_mpc3_array(power_spectrum, wavenumbers_per_mpc, z, out, &
+      stat)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double), intent(in) :: wavenumbers_per_mpc(:)
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(wavenumbers_per_mpc)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(wavenumbers_per_mpc) == 0) then
+      empty = 0
+      code = c_linear_power_spectrum_mpc3_array(power_spectrum, empty, 0_c_size_t, z, empty_out)
+    else
+      code = c_linear_power_spectrum_mpc3_array(power_spectrum, wavenumbers_per_mpc, &
+          size(wavenumbers_per_mpc, kind=c_size_t), z, out)
+    end if
+    call report(code, 'relicore_linear_power_spectrum_mpc3_array', stat)
+  end subroutine relicore_linear_power_spectrum_mpc3_array
+
+  ! sigma(R, z): the r.m.s. linear density contrast in a top-hat sphere of radius R, sigma^2 = int
+  ! k^2 P(k, z) W(kR)^2 dk/2 pi^2, W(x) = 3(sin x - x cos x)/x^3 (module doc of `growth`).
+  !   power_spectrum: from relicore_linear_power_spectrum_compute
+  !   radius_mpc: top-hat radius R in Mpc (no h), > 0
+  !   z: redshift, finite and >= 0
+  ! Result: sigma(R, z), the r.m.s. linear density contrast.
+  ! Forms: relicore_density_rms_in_sphere, relicore_density_rms_in_sphere_s.
+  impure elemental function relicore_density_rms_in_sphere(power_spectrum, radius_mpc, &
+      z) result(res)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double), intent(in) :: radius_mpc, z
+    real(c_double) :: res
+    if (c_density_rms_in_sphere(power_spectrum, radius_mpc, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_density_rms_in_sphere
+
+  impure elemental subroutine relicore_density_rms_in_sphere_s(power_spectrum, radius_mpc, z, out, &
+      stat)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double), intent(in) :: radius_mpc, z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_density_rms_in_sphere(power_spectrum, radius_mpc, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_density_rms_in_sphere', stat)
+  end subroutine relicore_density_rms_in_sphere_s
+
+  ! f sigma8(z) = f(z) sigma(8 h^-1 Mpc, z) = f(z) D(z) sigma8.
+  !   power_spectrum: from relicore_linear_power_spectrum_compute
+  !   z: redshift, finite and >= 0
+  ! Result: f(z) sigma(8/h Mpc, z).
+  ! Forms: relicore_growth_rate_times_sigma8, relicore_growth_rate_times_sigma8_s;
+  !   relicore_growth_rate_times_sigma8_array(power_spectrum, redshifts, out, stat) with
+  !   redshifts(i) in place of z.
+  impure elemental function relicore_growth_rate_times_sigma8(power_spectrum, z) result(res)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double), intent(in) :: z
+    real(c_double) :: res
+    if (c_growth_rate_times_sigma8(power_spectrum, z, res) /= RELICORE_OK) res = nan64()
+  end function relicore_growth_rate_times_sigma8
+
+  impure elemental subroutine relicore_growth_rate_times_sigma8_s(power_spectrum, z, out, stat)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double), intent(in) :: z
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_growth_rate_times_sigma8(power_spectrum, z, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_growth_rate_times_sigma8', stat)
+  end subroutine relicore_growth_rate_times_sigma8_s
+
+  subroutine relicore_growth_rate_times_sigma8_array(power_spectrum, redshifts, out, stat)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double), intent(in) :: redshifts(:)
+    real(c_double), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    real(c_double) :: empty(1), empty_out(1)
+    if (size(out) /= size(redshifts)) then
+      out = nan64()
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (size(redshifts) == 0) then
+      empty = 0
+      code = c_growth_rate_times_sigma8_array(power_spectrum, empty, 0_c_size_t, empty_out)
+    else
+      code = c_growth_rate_times_sigma8_array(power_spectrum, redshifts, size(redshifts, &
+          kind=c_size_t), out)
+    end if
+    call report(code, 'relicore_growth_rate_times_sigma8_array', stat)
+  end subroutine relicore_growth_rate_times_sigma8_array
+
+  ! sigma8 = sigma(8 h^-1 Mpc, z = 0): the given one, or the one computed from A_s at construction
+  ! (accuracy as `density_rms_in_sphere`).
+  !   power_spectrum: from relicore_linear_power_spectrum_compute
+  ! Result: sigma8 = sigma(8/h Mpc, z = 0).
+  ! Forms: relicore_sigma8, relicore_sigma8_s.
+  impure elemental function relicore_sigma8(power_spectrum) result(res)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double) :: res
+    if (c_sigma8(power_spectrum, res) /= RELICORE_OK) res = nan64()
+  end function relicore_sigma8
+
+  impure elemental subroutine relicore_sigma8_s(power_spectrum, out, stat)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_sigma8(power_spectrum, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_sigma8', stat)
+  end subroutine relicore_sigma8_s
+
+  ! S8 = sigma8 (Omega_m/0.3)^(1/2).
+  !   power_spectrum: from relicore_linear_power_spectrum_compute
+  ! Result: S8 = sigma8 (Omega_m/0.3)^(1/2).
+  ! Forms: relicore_s8, relicore_s8_s.
+  impure elemental function relicore_s8(power_spectrum) result(res)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double) :: res
+    if (c_s8(power_spectrum, res) /= RELICORE_OK) res = nan64()
+  end function relicore_s8
+
+  impure elemental subroutine relicore_s8_s(power_spectrum, out, stat)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_s8(power_spectrum, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_s8', stat)
+  end subroutine relicore_s8_s
+
+  ! The primordial amplitude A_s at k_p = 0.05 Mpc^-1: the given one, or the one derived from sigma8
+  ! (then within 2e-9 relative (`f64`) of A_s sigma8^2/sigma8(A_s)^2, sigma8's accuracy doubled).
+  !   power_spectrum: from relicore_linear_power_spectrum_compute
+  ! Result: A_s at k_p = 0.05 Mpc-1, given or derived from sigma8.
+  ! Forms: relicore_scalar_amplitude, relicore_scalar_amplitude_s.
+  impure elemental function relicore_scalar_amplitude(power_spectrum) result(res)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double) :: res
+    if (c_scalar_amplitude(power_spectrum, res) /= RELICORE_OK) res = nan64()
+  end function relicore_scalar_amplitude
+
+  impure elemental subroutine relicore_scalar_amplitude_s(power_spectrum, out, stat)
+    type(relicore_linear_power_spectrum), intent(in) :: power_spectrum
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_scalar_amplitude(power_spectrum, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_scalar_amplitude', stat)
+  end subroutine relicore_scalar_amplitude_s
+
+  ! The transfer function of cold dark matter and baryons with baryon acoustic oscillations, by the
+  ! fitting formula of Eisenstein & Hu 1998 (ApJ 496, 605, eqs. 2-24 as recalled from memory: T =
+  ! (Omega_b/Omega_0) T_b + (Omega_c/Omega_0) T_c with the sound horizon of eq. 6, the Silk scale of
+  ! eq. 7, alpha_c, beta_c of eqs. 11-12, T_c of eqs. 17-20 and T_b of eqs. 21-24).
+  !   wavenumber_per_mpc: wavenumber k in Mpc-1 (no h), > 0
+  !   omega_matter_h2: Omega_m h^2, > 0
+  !   omega_baryon_h2: Omega_b h^2, > 0 and at most omega_matter_h2
+  !   cmb_temperature_k: CMB temperature T0 in K, > 0
+  ! Result: T(k) with baryon acoustic oscillations (Eisenstein & Hu 1998).
+  ! Forms: relicore_eisenstein_hu_transfer_function, relicore_eisenstein_hu_transfer_function_s.
+  impure elemental function relicore_eisenstein_hu_transfer_function(wavenumber_per_mpc, &
+      omega_matter_h2, omega_baryon_h2, cmb_temperature_k) result(res)
+    real(c_double), intent(in) :: wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, &
+        cmb_temperature_k
+    real(c_double) :: res
+    if (c_eisenstein_hu_transfer_function(wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, &
+        cmb_temperature_k, res) /= RELICORE_OK) res = nan64()
+  end function relicore_eisenstein_hu_transfer_function
+
+  impure elemental subroutine relicore_eisenstein_hu_transfer_function_s(wavenumber_per_mpc, &
+      omega_matter_h2, omega_baryon_h2, cmb_temperature_k, out, stat)
+    real(c_double), intent(in) :: wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, &
+        cmb_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_eisenstein_hu_transfer_function(wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, &
+        cmb_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_eisenstein_hu_transfer_function', stat)
+  end subroutine relicore_eisenstein_hu_transfer_function_s
+
+  ! The transfer function without baryon acoustic oscillations of Eisenstein & Hu 1998 (ApJ 496,
+  ! 605, section 4.2, eqs. 26-31 as recalled from memory): T0(q) = L0/(L0 + C0 q^2), L0 = ln(2e +
+  ! 1.8q), C0 = 14.2 + 731/(1 + 62.5q), q = k Theta^2/(Gamma_eff h), with the shape Gamma_eff h =
+  ! omega_m [alpha_Gamma + (1 - alpha_Gamma)/(1 + (0.43 k s)^4)], the approximate sound horizon s =
+  ! 44.5 ln(9.83/omega_m)/sqrt(1 + 10 omega_b^(3/4)) Mpc and alpha_Gamma = 1 - 0.328 ln(431 omega_m)
+  ! f_b + 0.38 ln(22.3 omega_m) f_b^2, f_b = omega_b/omega_m.
+  !   wavenumber_per_mpc: wavenumber k in Mpc-1 (no h), > 0
+  !   omega_matter_h2: Omega_m h^2, > 0
+  !   omega_baryon_h2: Omega_b h^2, >= 0 and at most omega_matter_h2
+  !   cmb_temperature_k: CMB temperature T0 in K, > 0
+  ! Result: T(k) without baryon oscillations (Eisenstein & Hu 1998, section 4.2), in (0, 1].
+  ! Forms: relicore_eisenstein_hu_no_wiggle_transfer_function,
+  !   relicore_eisenstein_hu_no_wiggle_transfer_function_s.
+  impure elemental function relicore_eisenstein_hu_no_wiggle_transfer_function(wavenumber_per_mpc, &
+      omega_matter_h2, omega_baryon_h2, cmb_temperature_k) result(res)
+    real(c_double), intent(in) :: wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, &
+        cmb_temperature_k
+    real(c_double) :: res
+    if (c_eisenstein_hu_no_wiggle_transfer_function(wavenumber_per_mpc, omega_matter_h2, &
+        omega_baryon_h2, cmb_temperature_k, res) /= RELICORE_OK) res = nan64()
+  end function relicore_eisenstein_hu_no_wiggle_transfer_function
+
+  impure elemental subroutine relicore_eisenstein_hu_no_wiggle_transfer_function_s(wavenumber_per_mpc, &
+      omega_matter_h2, omega_baryon_h2, cmb_temperature_k, out, stat)
+    real(c_double), intent(in) :: wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, &
+        cmb_temperature_k
+    real(c_double), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    code = c_eisenstein_hu_no_wiggle_transfer_function(wavenumber_per_mpc, omega_matter_h2, &
+        omega_baryon_h2, cmb_temperature_k, out)
+    if (code /= RELICORE_OK) out = nan64()
+    call report(code, 'relicore_eisenstein_hu_no_wiggle_transfer_function', stat)
+  end subroutine relicore_eisenstein_hu_no_wiggle_transfer_function_s
 
   ! ================================================================ the hand-kept parts
 

@@ -64,6 +64,17 @@
 !       xe = relicore_ionized_fraction(history, z)               ! elemental in z
 !       zstar = relicore_last_scattering_redshift(history)
 !   It keeps its own copy of the universe. Units: K, years, Mpc, Mpc-1 as the names say.
+! * Growth: a type(relicore_linear_growth) and a type(relicore_linear_power_spectrum) of 81928
+!   bytes each (keep them in a module, a derived type or an allocatable, not as local variables
+!   of a small stack), computed once with
+!       call relicore_linear_growth_compute(universe, growth, stat)
+!       options = relicore_linear_power_spectrum_options_default()  ! then set value and
+!       options%value = 2.1d-9; options%spectral_index = 0.965d0    ! spectral_index
+!       call relicore_linear_power_spectrum_compute(growth, options, spectrum, stat)
+!   and passed first to their queries: d = relicore_growth_factor(growth, z),
+!   pk = relicore_linear_power_spectrum_mpc3(spectrum, k, z), s = relicore_sigma8(spectrum).
+!   The BAO distances and leapfrog factors take the universe first. Units: k in Mpc-1, R in
+!   Mpc, P in Mpc3 (no hidden h), times in Gyr.
 ! * relicore_status_message(code) and relicore_version() return allocatable strings.
 ! * Nothing here allocates on the C side, keeps state or is thread-unsafe.
 !
@@ -94,6 +105,9 @@
 !   relicore_universe_get_parameters                              function, _s
 !   relicore_thermal_history_options_default                      function
 !   relicore_thermal_history_compute                              subroutine (optional stat)
+!   relicore_linear_growth_compute                                subroutine (optional stat)
+!   relicore_linear_power_spectrum_options_default                function
+!   relicore_linear_power_spectrum_compute                        subroutine (optional stat)
 !@ coverage
 module relicore
   use, intrinsic :: iso_c_binding, only: c_double, c_float, c_int32_t, c_int64_t, c_size_t, &
@@ -125,6 +139,15 @@ module relicore
   integer(c_int32_t), parameter, public :: RELICORE_UNIVERSE_STORAGE_WORDS = 1920_c_int32_t
   ! Words of storage in type(relicore_thermal_history) (struct relicore_thermal_history).
   integer(c_int32_t), parameter, public :: RELICORE_THERMAL_HISTORY_STORAGE_WORDS = 20480_c_int32_t
+  ! Words of storage in type(relicore_linear_growth) and type(relicore_linear_power_spectrum).
+  integer(c_int32_t), parameter, public :: RELICORE_LINEAR_GROWTH_STORAGE_WORDS = 10240_c_int32_t
+  integer(c_int32_t), parameter, public :: &
+      RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS = 10240_c_int32_t
+  ! The switches of type(relicore_linear_power_spectrum_options).
+  integer(c_int32_t), parameter, public :: RELICORE_TRANSFER_BARYON_OSCILLATIONS = 0_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_TRANSFER_NO_WIGGLE = 1_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_NORMALISATION_SCALAR_AMPLITUDE = 0_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_NORMALISATION_SIGMA8 = 1_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_MAJOR = 0_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_MINOR = 1_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_VERSION_PATCH = 0_c_int32_t
@@ -150,6 +173,8 @@ module relicore
       relicore_universe_check_parameters, relicore_universe_get_parameters, &
       relicore_universe_get_parameters_s, relicore_thermal_history_options_default, &
       relicore_thermal_history_compute
+  public :: relicore_linear_growth_compute, relicore_linear_power_spectrum_options_default, &
+      relicore_linear_power_spectrum_compute
 !@ public
   ! The hand-kept parts (bindings/fortran/parts/*.f90).
 !@ parts public
@@ -232,6 +257,46 @@ module relicore
     integer(c_int64_t) :: tag = 0_c_int64_t                                 ! private
     integer(c_int64_t) :: storage(RELICORE_THERMAL_HISTORY_STORAGE_WORDS)   ! private
   end type relicore_thermal_history
+
+  ! struct relicore_linear_growth { uint64_t tag;
+  !     uint64_t storage[RELICORE_LINEAR_GROWTH_STORAGE_WORDS]; };
+  ! A computed linear growth of one universe (D_u and f on a table in the scale factor, with a
+  ! copy of the universe), built by relicore_linear_growth_compute and passed to its queries. A
+  ! plain value of 81928 bytes owned by the caller: keep it in a module, a derived type or an
+  ! allocatable rather than as a local variable on a small stack; copy it by assignment; read it
+  ! from any number of threads. The tag starts at 0: a growth never computed (or whose compute
+  ! failed) is refused with RELICORE_ERROR_INVALID_STRUCT.
+  type, bind(C), public :: relicore_linear_growth
+    integer(c_int64_t) :: tag = 0_c_int64_t                                ! private
+    integer(c_int64_t) :: storage(RELICORE_LINEAR_GROWTH_STORAGE_WORDS)    ! private
+  end type relicore_linear_growth
+
+  ! struct relicore_linear_power_spectrum_options { int32_t transfer_form; int32_t normalisation;
+  !     double value; double spectral_index; double running; };
+  ! The options of a linear power spectrum: fill it with
+  ! relicore_linear_power_spectrum_options_default() (baryon oscillations, normalised by A_s,
+  ! running 0; value and spectral_index NaN, unset), set value and spectral_index, then call
+  ! relicore_linear_power_spectrum_compute.
+  type, bind(C), public :: relicore_linear_power_spectrum_options
+    integer(c_int32_t) :: transfer_form   ! RELICORE_TRANSFER_BARYON_OSCILLATIONS (0) or
+                                          ! RELICORE_TRANSFER_NO_WIGGLE (1)
+    integer(c_int32_t) :: normalisation   ! RELICORE_NORMALISATION_SCALAR_AMPLITUDE (0): value is
+                                          ! A_s; RELICORE_NORMALISATION_SIGMA8 (1): value is sigma8
+    real(c_double) :: value               ! A_s or sigma8, > 0
+    real(c_double) :: spectral_index      ! n_s, finite
+    real(c_double) :: running             ! alpha_s = dn_s/dln k, finite (default 0)
+  end type relicore_linear_power_spectrum_options
+
+  ! struct relicore_linear_power_spectrum { uint64_t tag;
+  !     uint64_t storage[RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS]; };
+  ! A computed linear matter power spectrum (a copy of its growth, the Eisenstein & Hu 1998
+  ! transfer function, the primordial spectrum and sigma8), built by
+  ! relicore_linear_power_spectrum_compute. A plain value of 81928 bytes: the same rules as
+  ! type(relicore_linear_growth).
+  type, bind(C), public :: relicore_linear_power_spectrum
+    integer(c_int64_t) :: tag = 0_c_int64_t                                        ! private
+    integer(c_int64_t) :: storage(RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS)    ! private
+  end type relicore_linear_power_spectrum
 
   ! The result types of the table (generated).
 !@ result_types
@@ -448,6 +513,35 @@ module relicore
       type(relicore_thermal_history), intent(out) :: out
       integer(c_int32_t) :: status
     end function c_thermal_history_compute
+    ! int32_t relicore_linear_growth_compute(const struct relicore_universe *universe,
+    !     struct relicore_linear_growth *out);
+    function c_linear_growth_compute(universe, out) &
+        bind(C, name='relicore_linear_growth_compute') result(status)
+      import :: c_int32_t, relicore_universe, relicore_linear_growth
+      type(relicore_universe), intent(in) :: universe
+      type(relicore_linear_growth), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_linear_growth_compute
+    ! int32_t relicore_linear_power_spectrum_options_default(
+    !     struct relicore_linear_power_spectrum_options *out);
+    function c_linear_power_spectrum_options_default(out) &
+        bind(C, name='relicore_linear_power_spectrum_options_default') result(status)
+      import :: c_int32_t, relicore_linear_power_spectrum_options
+      type(relicore_linear_power_spectrum_options), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_linear_power_spectrum_options_default
+    ! int32_t relicore_linear_power_spectrum_compute(const struct relicore_linear_growth *growth,
+    !     const struct relicore_linear_power_spectrum_options *options,
+    !     struct relicore_linear_power_spectrum *out);
+    function c_linear_power_spectrum_compute(growth, options, out) &
+        bind(C, name='relicore_linear_power_spectrum_compute') result(status)
+      import :: c_int32_t, relicore_linear_growth, relicore_linear_power_spectrum_options, &
+          relicore_linear_power_spectrum
+      type(relicore_linear_growth), intent(in) :: growth
+      type(relicore_linear_power_spectrum_options), intent(in) :: options
+      type(relicore_linear_power_spectrum), intent(out) :: out
+      integer(c_int32_t) :: status
+    end function c_linear_power_spectrum_compute
 
     ! The table's functions (generated):
 !@ interfaces
@@ -1073,6 +1167,48 @@ contains
     call report(c_thermal_history_compute(universe, options, out), &
         'relicore_thermal_history_compute', stat)
   end subroutine relicore_thermal_history_compute
+
+  ! ================================================================ growth construction
+
+  ! Computes the linear growth of a universe into out (the growth equation integrated once onto
+  ! a table; about 10 ms): compute once, then pass it to every query. stat = RELICORE_OK,
+  ! RELICORE_ERROR_INVALID_STRUCT (universe not initialised), RELICORE_ERROR_OUT_OF_DOMAIN (no
+  ! clustering matter, or a universe whose growing mode is unknown at a = 2^-47) or
+  ! RELICORE_ERROR_NO_CONVERGENCE; on failure out is cleared and every query refuses it
+  ! (RELICORE_ERROR_INVALID_STRUCT). Without stat a failure stops with the message.
+  subroutine relicore_linear_growth_compute(universe, out, stat)
+    type(relicore_universe), intent(in) :: universe
+    type(relicore_linear_growth), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    call report(c_linear_growth_compute(universe, out), 'relicore_linear_growth_compute', stat)
+  end subroutine relicore_linear_growth_compute
+
+  ! The default options of a power spectrum: transfer_form RELICORE_TRANSFER_BARYON_OSCILLATIONS,
+  ! normalisation RELICORE_NORMALISATION_SCALAR_AMPLITUDE, running 0; value and spectral_index
+  ! NaN (unset: set them). Result: type(relicore_linear_power_spectrum_options).
+  function relicore_linear_power_spectrum_options_default() result(options)
+    type(relicore_linear_power_spectrum_options) :: options
+    call report(c_linear_power_spectrum_options_default(options), &
+        'relicore_linear_power_spectrum_options_default')
+  end function relicore_linear_power_spectrum_options_default
+
+  ! Computes a linear matter power spectrum on a computed growth into out (Eisenstein & Hu 1998
+  ! transfer function, primordial A_s, n_s, alpha_s at k_p = 0.05 Mpc-1, normalised by A_s or by
+  ! sigma8; sigma8 computed once, under a millisecond). stat = RELICORE_OK,
+  ! RELICORE_ERROR_INVALID_STRUCT (growth not computed), RELICORE_ERROR_OUT_OF_DOMAIN (a switch
+  ! outside its values, or sigma8 not formable), RELICORE_ERROR_NON_FINITE (value, n_s or
+  ! alpha_s), RELICORE_ERROR_NON_POSITIVE (A_s or sigma8 <= 0),
+  ! RELICORE_ERROR_INVALID_PARAMETER (the oscillating form without baryons, or no radiation) or
+  ! RELICORE_ERROR_NO_CONVERGENCE; on failure out is cleared. Without stat a failure stops with
+  ! the message.
+  subroutine relicore_linear_power_spectrum_compute(growth, options, out, stat)
+    type(relicore_linear_growth), intent(in) :: growth
+    type(relicore_linear_power_spectrum_options), intent(in) :: options
+    type(relicore_linear_power_spectrum), intent(out) :: out
+    integer(c_int32_t), intent(out), optional :: stat
+    call report(c_linear_power_spectrum_compute(growth, options, out), &
+        'relicore_linear_power_spectrum_compute', stat)
+  end subroutine relicore_linear_power_spectrum_compute
 
   ! ================================================================ the table's functions
 !@ procedures

@@ -17,7 +17,7 @@ from .table import ROOT, TOPICS, Function
 
 C_SRC = ROOT / "bindings" / "c" / "src"
 
-SHORT = {"blackbody": "bb", "cosmology": "cosmo", "decoupling": "dc"}
+SHORT = {"blackbody": "bb", "cosmology": "cosmo", "decoupling": "dc", "growth": "gr"}
 
 
 def _doc(lines: list[str]) -> list[str]:

@@ -50,6 +50,9 @@ WIDTH = 100
 RECEIVERS = {
     "universe": ("universe", "relicore_universe", "from relicore_universe_init"),
     "history": ("history", "relicore_thermal_history", "from relicore_thermal_history_compute"),
+    "growth": ("growth", "relicore_linear_growth", "from relicore_linear_growth_compute"),
+    "power_spectrum": ("power_spectrum", "relicore_linear_power_spectrum",
+                       "from relicore_linear_power_spectrum_compute"),
 }
 
 
@@ -645,6 +648,29 @@ def test_dispatch(fns: list[Function]) -> dict[str, list[str]]:
             f"call {_call(fn, ['wb', 'wm', 'ref_s', 'stats'], '_s')}",
             f"call {_call(fn, ['wb(1:1)', 'wm', 'too_long', 'stat_mismatch'], '_array')}"]),
             indent="        ")]
+
+    # test_growth: every growth-topic function by name on its receiver (u a universe, g a
+    # linear growth, p a power spectrum); the array forms over the first argument, the others
+    # single values
+    gro = [f for f in fns if f.topic == "growth"]
+    grecv = {"universe": "u", "growth": "g", "power_spectrum": "p", "none": ""}
+    files["growth_names"] = (
+        _names("all_names", [fn.name for fn in gro])
+        + _names("receiver_of", [fn.receiver for fn in gro], 16))
+    files["growth_one"] = [
+        line for fn in gro for line in _case(fn.name, _body([
+            f"nargs = {len(fn.args)}",
+            f"if (size(a) == {len(fn.args)}) then",
+            f"  f64 = {_call(fn, _actuals(fn, False, prefix=grecv[fn.receiver]))}",
+            f"  call {_call(fn, _actuals(fn, False, prefix=grecv[fn.receiver]) + ['s64', 'stat'], '_s')}",
+            "end if"]))]
+    for fn in gro:
+        if fn.array and fn.array.index(fn) != 0:
+            raise FortranFaceError(f"{fn.name}: test_growth's array tests take the first argument")
+    files["growth_array"] = [
+        line for fn in gro if fn.array for line in _case(fn.name, _body([
+            f"call {_call(fn, [grecv[fn.receiver], 'x'] + [f'a({k})' for k in range(2, len(fn.args) + 1)] + ['out', 'stat'], '_array')}",
+            f"ref = {_call(fn, [grecv[fn.receiver], 'x'] + [f'a({k})' for k in range(2, len(fn.args) + 1)])}"]))]
     return files
 
 

@@ -10,14 +10,17 @@ from __future__ import annotations
 import re
 
 from .common import banner
-from .table import ROOT, TOPICS, Function, thermometry_names
+from .table import RECEIVERS, ROOT, TOPICS, Function, thermometry_names
 
 OUT = ROOT / "tests" / "c" / "gen_functions.h"
 
 # What the harnesses can call (their dispatch shapes); anything else is an error here, with
 # the place to extend, rather than a compile error in tests/c.
-MAX_NARGS = {"none": 4, "universe": 2, "history": 2}
-ARRAY_NARGS = {"none": 2, "universe": 1, "history": 1}
+MAX_NARGS = {"none": 4, "universe": 2, "history": 2, "growth": 1, "power_spectrum": 2}
+ARRAY_NARGS = {"none": 2, "universe": 1, "history": 1, "growth": 1, "power_spectrum": 1}
+# tests/c/hostile_growth.c and test_growth.c call the array forms of the growth topic over their
+# first argument with the others single values (the BAO ratios: z, then r_d)
+ARRAY_NARGS_GROWTH = 2
 
 _POSITIVE = re.compile(r"(?<![<>=!])> 0(?![\d.eE])")
 _NONNEGATIVE = re.compile(r">= 0(?![\d.eE])|(?<![\d.])0 <= ")
@@ -74,6 +77,11 @@ def _check(fn: Function) -> None:
             f"{where}: the C harnesses call {fn.receiver!r}-receiver functions of at most "
             f"{MAX_NARGS[fn.receiver]} arguments; extend tests/c (call_entry/call_scalar) first"
         )
+    if fn.array and fn.topic == "growth":
+        if len(fn.args) > ARRAY_NARGS_GROWTH or fn.array.index(fn) != 0:
+            raise SystemExit(f"{where}: the growth harnesses call array forms over the first of at most "
+                             f"{ARRAY_NARGS_GROWTH} arguments; extend tests/c/test_growth.c and hostile_growth.c first")
+        return
     if fn.array and len(fn.args) != ARRAY_NARGS[fn.receiver]:
         raise SystemExit(
             f"{where}: the C harnesses call array forms of {fn.receiver!r}-receiver functions of "
@@ -110,6 +118,8 @@ def _header(fns: list[Function]) -> str:
         " * in tests/data/thermometry*.txt) and _STRUCTS,",
         " * _STRUCTS_F32 (no receiver, a result struct: relicore_temperature_uncertainty[_f32]);",
         " * a list may be empty.",
+        " * Every receiver of the table has its two lists: _GROWTH, _GROWTH_ARRAYS (a linear growth",
+        " * first) and _POWER_SPECTRUM, _POWER_SPECTRUM_ARRAYS (a linear power spectrum first) too.",
         " */",
         "#ifndef RELICORE_TESTS_GEN_FUNCTIONS_H",
         "#define RELICORE_TESTS_GEN_FUNCTIONS_H",
@@ -156,7 +166,7 @@ def _header(fns: list[Function]) -> str:
                        f"{topic}: double forms writing a result struct", scalar_rows(structs))
         lines += _list(f"RELICORE_{T}_STRUCTS_F32", "name, nargs, domain, upper, array",
                        f"{topic}: their float twins", scalar_rows([f for f in structs if f.f32], f32=True))
-        for receiver in ("universe", "history"):
+        for receiver in RECEIVERS:
             R = receiver.upper()
             sel = [f for f in mine if f.receiver == receiver]
             lines += _list(f"RELICORE_{T}_{R}", "name, nargs, domain, upper, array",

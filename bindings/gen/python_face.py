@@ -25,7 +25,20 @@ def python_class(receiver: str) -> str:
     """The Python class of a receiver (the table's `python_class`)."""
     return RECEIVERS[receiver].python_class
 
-CORE_PATH = {"blackbody": "relicore::blackbody", "cosmology": "relicore::cosmology", "decoupling": "relicore::decoupling"}
+CORE_PATH = {"blackbody": "relicore::blackbody", "cosmology": "relicore::cosmology", "decoupling": "relicore::decoupling",
+             "growth": "relicore::growth"}
+
+# The Python module whose class a receiver's methods and properties join (the Universe methods
+# of the growth topic are methods of relicore.Universe, written into _cosmology.py).
+RECEIVER_HOME = {"universe": "cosmology", "history": "decoupling", "growth": "growth", "power_spectrum": "growth"}
+# The Rust name of each receiver's value in the native tables (functions.rs) and in the closures.
+RECEIVER_RUST = {"none": ("()", "_"), "universe": ("U", "u"), "history": ("H", "h"), "growth": ("G", "g"),
+                 "power_spectrum": ("S", "p")}
+
+
+def home(fn: Function) -> str:
+    """The Python module of a function (its topic) or of its receiver's class (a member)."""
+    return fn.topic if fn.python == "function" else RECEIVER_HOME[fn.receiver]
 
 
 def label(fn: Function) -> str:
@@ -92,7 +105,7 @@ def _rust_body(fn: Function) -> str:
         assert fn.receiver == "none", fn.name
         call = f"{CORE_PATH[fn.topic]}::{fn.name}({', '.join(fn.arg_names)})"
         return f"Body::AN(|_, x| {_slice_call(fn, call)})"
-    r = {"none": "_", "universe": "u", "history": "h"}[fn.receiver]
+    r = RECEIVER_RUST[fn.receiver][1]
     params = ", ".join([r, *fn.arg_names])
     if fn.receiver == "none":
         call = f"{CORE_PATH[fn.topic]}::{fn.name}({', '.join(fn.arg_names)})"
@@ -107,7 +120,7 @@ def _rust_body(fn: Function) -> str:
 def _rust_array(fn: Function) -> str:
     """The SIMD array wrapper of `fn` (its first argument an array, the others single values)."""
     assert fn.array and fn.array.index(fn) == 0, f"{fn.name}: the SIMD array argument must come first"
-    core = {"none": "()", "universe": "U", "history": "H"}[fn.receiver]
+    core = RECEIVER_RUST[fn.receiver][0]
     others = fn.arg_names[1:]
     lines = [f"fn {fn.name}_array(r: &{core}, x: &[f64], rest: &[f64], out: &mut [f64]) -> ArrayResult {{"]
     if others:
@@ -157,9 +170,10 @@ def rust(fns: list[Function]) -> str:
         "use relicore::{ArrayResult, ElementError, Error};",
         "use relicore_dispatch::widest;",
         "",
-        "use crate::functions::{Body, H, Lift, Spec, U};",
+        "use crate::functions::{Body, G, H, Lift, S, Spec, U};",
     ]
-    for receiver, static, core in (("none", "PLAIN", "()"), ("universe", "UNIVERSE", "U"), ("history", "HISTORY", "H")):
+    for receiver, static, core in (("none", "PLAIN", "()"), ("universe", "UNIVERSE", "U"), ("history", "HISTORY", "H"),
+                                   ("growth", "GROWTH", "G"), ("power_spectrum", "SPECTRUM", "S")):
         group = [f for f in fns if f.receiver == receiver]
         out += ["", f"/// The regular functions called on {'nothing' if receiver == 'none' else 'a ' + receiver}.",
                 f"pub(crate) static {static}: &[Spec<{core}>] = &["]
@@ -234,6 +248,9 @@ MODULE_DOC = {
     "cosmology": "The methods and properties of relicore.Universe (the mixin UniverseFunctions)",
     "decoupling": "The regular functions of relicore.decoupling and the methods and properties of "
     "relicore.decoupling.ThermalHistory (the mixin ThermalHistoryFunctions)",
+    "growth": "The regular functions of relicore.growth and the methods and properties of "
+    "relicore.growth.LinearGrowth and LinearPowerSpectrum (the mixins LinearGrowthFunctions and "
+    "LinearPowerSpectrumFunctions)",
 }
 
 
@@ -242,7 +259,7 @@ def python_module(topic: str, fns: list[Function]) -> str:
     functions = [f for f in fns if f.topic == topic and f.python == "function"]
     members: dict[str, list[Function]] = {}
     for f in fns:
-        if f.topic == topic and f.python != "function":
+        if home(f) == topic and f.python != "function":
             members.setdefault(f.receiver, []).append(f)
     out = [
         banner("#", f"the regular functions of {public}"),
@@ -436,6 +453,58 @@ class ThermalHistory:
     def __dask_tokenize__(self) -> tuple[str, Any, float | None, float]: ...
 '''
 
+GROWTH_STUB = '''
+PIVOT_WAVENUMBER_PER_MPC: Final[float]
+TRANSFER_FORMS: Final[tuple[str, ...]]
+
+class LinearGrowth:
+    """The linear growth factor and rate of a universe, computed once onto a fixed table."""
+
+    def __new__(cls, universe: Universe) -> LinearGrowth: ...
+    @property
+    def universe(self) -> Universe: ...
+    @property
+    def unnormalized_growth_factor_today(self) -> float: ...
+    def __eq__(self, other: object) -> bool: ...
+    def __ne__(self, other: object) -> bool: ...
+    def __hash__(self) -> int: ...
+    def __reduce__(self) -> tuple[type[LinearGrowth], tuple[Universe]]: ...
+    def __copy__(self) -> LinearGrowth: ...
+    def __deepcopy__(self, memo: dict[int, Any]) -> LinearGrowth: ...
+'''
+
+SPECTRUM_STUB = '''
+class LinearPowerSpectrum:
+    """A linear matter power spectrum: growth, Eisenstein & Hu 1998 transfer function, primordial spectrum."""
+
+    def __new__(
+        cls,
+        growth: LinearGrowth,
+        *,
+        transfer_form: str = "baryon_oscillations",
+        scalar_amplitude: float | None = None,
+        sigma8: float | None = None,
+        spectral_index: float,
+        running: float = 0.0,
+    ) -> LinearPowerSpectrum: ...
+    @property
+    def growth(self) -> LinearGrowth: ...
+    @property
+    def transfer_form(self) -> str: ...
+    @property
+    def normalisation(self) -> tuple[str, float]: ...
+    @property
+    def spectral_index(self) -> float: ...
+    @property
+    def running(self) -> float: ...
+    def __eq__(self, other: object) -> bool: ...
+    def __ne__(self, other: object) -> bool: ...
+    def __hash__(self) -> int: ...
+    def __reduce__(self) -> tuple[Any, tuple[Any, ...]]: ...
+    def __copy__(self) -> LinearPowerSpectrum: ...
+    def __deepcopy__(self, memo: dict[int, Any]) -> LinearPowerSpectrum: ...
+'''
+
 
 def _stub_overloads(fn: Function, indent: str) -> list[str]:
     if fn.result_type:
@@ -462,14 +531,14 @@ def _stub_overloads(fn: Function, indent: str) -> list[str]:
 
 def stub(topic: str, fns: list[Function]) -> str:
     test = {"blackbody": "test_faces.py", "cosmology": "test_cosmology_faces.py",
-            "decoupling": "test_decoupling_faces.py"}[topic]
+            "decoupling": "test_decoupling_faces.py", "growth": "test_growth.py"}[topic]
     typing = "final, overload" if topic == "blackbody" else "overload"
-    imports = "\nfrom relicore.cosmology import Universe\n" if topic == "decoupling" else ""
+    imports = "\nfrom relicore.cosmology import Universe\n" if topic in ("decoupling", "growth") else ""
     if topic == "blackbody":
         rts = dict.fromkeys(f.result_type.python_type for f in fns if f.topic == topic and f.result_type)
         imports += "".join(f"\nfrom relicore._results import {c} as {c}" for c in rts) + "\n"
     head = STUB_HEAD.format(topic=topic, test=test, typing=typing, imports=imports)
-    mine = [f for f in fns if f.topic == topic]
+    mine = [f for f in fns if home(f) == topic]
     out = [banner("#", f"the type stubs of relicore.{topic}"), head.rstrip("\n")]
     if topic == "blackbody":
         out.append(BLACKBODY_STUB.rstrip("\n"))
@@ -482,6 +551,12 @@ def stub(topic: str, fns: list[Function]) -> str:
         for f in mine:
             if f.python != "function":
                 out += _stub_overloads(f, "    ")
+    if topic == "growth":
+        for receiver, template in (("growth", GROWTH_STUB), ("power_spectrum", SPECTRUM_STUB)):
+            out.append(template.rstrip("\n"))
+            for f in mine:
+                if f.receiver == receiver and f.python != "function":
+                    out += _stub_overloads(f, "    ")
     out += ["", "__all__: Final[list[str]]"]
     return "\n".join(out) + "\n"
 
@@ -560,7 +635,7 @@ def results_module(fns: list[Function]) -> tuple[str, str]:
 def outputs(fns: list[Function]) -> dict:
     files = {PY / "src" / "generated.rs": rust(fns)}
     files[PACKAGE / "_results.py"], files[PACKAGE / "_results.pyi"] = results_module(fns)
-    for topic in ("blackbody", "cosmology", "decoupling"):
+    for topic in ("blackbody", "cosmology", "decoupling", "growth"):
         files[PACKAGE / f"_{topic}.py"] = python_module(topic, fns)
         files[PACKAGE / f"{topic}.pyi"] = stub(topic, fns)
     return files

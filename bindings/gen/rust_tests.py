@@ -43,7 +43,8 @@ def outputs(fns: list[Function]) -> dict[Path, str]:
         + "//! Calls of the regular core functions by name, for the Rust vector tests.\n\n"
         + "use relicore::Result;\n"
         + "use relicore::cosmology::Universe;\n"
-        + "use relicore::decoupling::ThermalHistory;\n\n"
+        + "use relicore::decoupling::ThermalHistory;\n"
+        + "use relicore::growth::{LinearGrowth, LinearPowerSpectrum};\n\n"
         + _function("call_none_f64", None, "f64", none)
         + "\n"
         + _function("call_none_f32", None, "f32", [f for f in none if f.f32])
@@ -51,6 +52,11 @@ def outputs(fns: list[Function]) -> dict[Path, str]:
         + _function("call_universe", "Universe<f64>", "f64", [f for f in fns if f.receiver == "universe"])
         + "\n"
         + _function("call_history", "ThermalHistory<f64>", "f64", [f for f in fns if f.receiver == "history"])
+        + "\n"
+        + _function("call_growth", "LinearGrowth<f64>", "f64", [f for f in fns if f.receiver == "growth"])
+        + "\n"
+        + _function("call_power_spectrum", "LinearPowerSpectrum<f64>", "f64",
+                    [f for f in fns if f.receiver == "power_spectrum"])
     )
     return {PATH: rustfmt(text)}
 
@@ -117,6 +123,11 @@ RECEIVERS_SETUP = """    let u = Universe::new(UniverseParameters {
     })
     .expect("universe");
     let h = Box::new(ThermalHistory::<f64>::new(&u, HistoryOptions::default()).expect("history"));
+    let gr = Box::new(LinearGrowth::new(&u).expect("growth"));
+    let ps = Box::new(
+        LinearPowerSpectrum::with_scalar_amplitude(&gr, TransferForm::BaryonOscillations, 2.1e-9, 0.9649, 0.0)
+            .expect("power spectrum"),
+    );
 """
 
 
@@ -125,7 +136,8 @@ def bench_outputs(fns: list[Function]) -> str:
     for fn in fns:
         ty = "f64"
         args = [f"black_box({_lit(x, ty)})" for x in typical_arguments(fn)]
-        r = {"none": "", "universe": "let r = &u; ", "history": "let r = &*h; "}[fn.receiver]
+        r = {"none": "", "universe": "let r = &u; ", "history": "let r = &*h; ", "growth": "let r = &*gr; ",
+             "power_spectrum": "let r = &*ps; "}[fn.receiver]
         lines.append(f'    g.bench_function("{fn.name}", |b| b.iter(|| {{ {r}{_recv_call(fn, args)} }}));')
         if fn.f32:
             args32 = [f"black_box({_lit(x, 'f32')})" for x in typical_arguments(fn)]
@@ -138,6 +150,7 @@ def bench_outputs(fns: list[Function]) -> str:
         "use criterion::{Criterion, criterion_group, criterion_main};\n"
         "use relicore::cosmology::{Universe, UniverseParameters};\n"
         "use relicore::decoupling::{HistoryOptions, ThermalHistory};\n"
+        "use relicore::growth::{LinearGrowth, LinearPowerSpectrum, TransferForm};\n"
         "use std::hint::black_box;\n\n"
         "fn regular(c: &mut Criterion) {\n" + RECEIVERS_SETUP
         + '    let mut g = c.benchmark_group("regular");\n'
@@ -157,7 +170,8 @@ def test_outputs(fns: list[Function]) -> str:
             if fn.receiver != "none" and ty == "f32":
                 continue
             vars_ = [f"x{i}" for i in range(n)]
-            recv = {"none": "", "universe": "let r = &*UNIVERSE; ", "history": "let r = &*HISTORY; "}[fn.receiver]
+            recv = {"none": "", "universe": "let r = &*UNIVERSE; ", "history": "let r = &*HISTORY; ",
+                    "growth": "let r = &**GROWTH; ", "power_spectrum": "let r = &**SPECTRUM; "}[fn.receiver]
             call = _recv_call(fn, vars_)
             ok = "v.is_finite()"
             if fn.result_type:  # every real field finite
@@ -192,12 +206,19 @@ def test_outputs(fns: list[Function]) -> str:
         "use proptest::prelude::*;\n"
         "use relicore::cosmology::{Universe, UniverseParameters};\n"
         "use relicore::decoupling::{HistoryOptions, ThermalHistory};\n"
+        "use relicore::growth::{LinearGrowth, LinearPowerSpectrum, TransferForm};\n"
         "use std::sync::LazyLock;\n\n"
         "static UNIVERSE: LazyLock<Universe<f64>> = LazyLock::new(|| {\n"
         "    Universe::new(UniverseParameters { omega_baryon: 0.0493, ..UniverseParameters::new(67.36, 0.3153) })\n"
         '        .expect("universe")\n});\n'
         "static HISTORY: LazyLock<Box<ThermalHistory<f64>>> = LazyLock::new(|| {\n"
-        '    Box::new(ThermalHistory::new(&UNIVERSE, HistoryOptions::default()).expect("history"))\n});\n\n'
+        '    Box::new(ThermalHistory::new(&UNIVERSE, HistoryOptions::default()).expect("history"))\n});\n'
+        "// one growth (about 10 s in a debug build) and one spectrum for every test of this file\n"
+        "static GROWTH: LazyLock<Box<LinearGrowth<f64>>> = LazyLock::new(|| {\n"
+        '    Box::new(LinearGrowth::new(&UNIVERSE).expect("growth"))\n});\n'
+        "static SPECTRUM: LazyLock<Box<LinearPowerSpectrum<f64>>> = LazyLock::new(|| {\n"
+        "    Box::new(LinearPowerSpectrum::with_scalar_amplitude(&GROWTH, TransferForm::BaryonOscillations, 2.1e-9, 0.9649, 0.0)\n"
+        '        .expect("power spectrum"))\n});\n\n'
         + "\n\n".join(props)
         + "\n\ntype Grid = fn(&[f64]) -> relicore::Result<f64>;\n\n"
         "#[test]\nfn threads_give_the_serial_bits() {\n"

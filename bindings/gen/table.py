@@ -9,7 +9,7 @@ from pathlib import Path
 ROOT = Path(__file__).resolve().parents[2]
 TABLE = ROOT / "bindings" / "functions.toml"
 
-TOPICS = ("blackbody", "cosmology", "decoupling")
+TOPICS = ("blackbody", "cosmology", "decoupling", "growth")
 RECEIVER_KEYS = {
     "core_type", "core_path", "c_struct", "c_module", "filled_by", "summary", "fortran_type",
     "python_class",

@@ -302,8 +302,11 @@ impl<T: Real, const D: usize> Lu<T, D> {
 
     fn solve(&self, b: [T; D]) -> [T; D] {
         let mut x = [T::zero(); D];
-        for i in 0..D {
-            x[i] = b[self.perm[i]];
+        // perm holds a permutation of 0..D, but the compiler cannot know it: a checked read
+        // (never NaN) keeps the panic path out of every caller (the C library's firmware check
+        // links no panic machinery)
+        for (xi, &p) in x.iter_mut().zip(self.perm.iter()) {
+            *xi = b.get(p).copied().unwrap_or(T::nan());
         }
         for i in 0..D {
             for j in 0..i {

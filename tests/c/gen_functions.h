@@ -16,11 +16,13 @@
  * in tests/data/thermometry*.txt) and _STRUCTS,
  * _STRUCTS_F32 (no receiver, a result struct: relicore_temperature_uncertainty[_f32]);
  * a list may be empty.
+ * Every receiver of the table has its two lists: _GROWTH, _GROWTH_ARRAYS (a linear growth
+ * first) and _POWER_SPECTRUM, _POWER_SPECTRUM_ARRAYS (a linear power spectrum first) too.
  */
 #ifndef RELICORE_TESTS_GEN_FUNCTIONS_H
 #define RELICORE_TESTS_GEN_FUNCTIONS_H
 
-#define RELICORE_TOPICS 3
+#define RELICORE_TOPICS 4
 
 /* ---- blackbody ------------------------------------------------------------------------------- */
 
@@ -133,6 +135,18 @@
 /* blackbody: array forms of the functions of a history: X(name, nargs, pos) */
 #define RELICORE_BLACKBODY_HISTORY_ARRAYS(X)
 
+/* blackbody: functions of a growth: X(name, nargs, domain, upper, array) */
+#define RELICORE_BLACKBODY_GROWTH(X)
+
+/* blackbody: array forms of the functions of a growth: X(name, nargs, pos) */
+#define RELICORE_BLACKBODY_GROWTH_ARRAYS(X)
+
+/* blackbody: functions of a power_spectrum: X(name, nargs, domain, upper, array) */
+#define RELICORE_BLACKBODY_POWER_SPECTRUM(X)
+
+/* blackbody: array forms of the functions of a power_spectrum: X(name, nargs, pos) */
+#define RELICORE_BLACKBODY_POWER_SPECTRUM_ARRAYS(X)
+
 /* ---- cosmology ------------------------------------------------------------------------------- */
 
 /* cosmology: double scalar forms without a receiver: X(name, nargs, domain, upper, array) */
@@ -223,6 +237,18 @@
 /* cosmology: array forms of the functions of a history: X(name, nargs, pos) */
 #define RELICORE_COSMOLOGY_HISTORY_ARRAYS(X)
 
+/* cosmology: functions of a growth: X(name, nargs, domain, upper, array) */
+#define RELICORE_COSMOLOGY_GROWTH(X)
+
+/* cosmology: array forms of the functions of a growth: X(name, nargs, pos) */
+#define RELICORE_COSMOLOGY_GROWTH_ARRAYS(X)
+
+/* cosmology: functions of a power_spectrum: X(name, nargs, domain, upper, array) */
+#define RELICORE_COSMOLOGY_POWER_SPECTRUM(X)
+
+/* cosmology: array forms of the functions of a power_spectrum: X(name, nargs, pos) */
+#define RELICORE_COSMOLOGY_POWER_SPECTRUM_ARRAYS(X)
+
 /* ---- decoupling ------------------------------------------------------------------------------ */
 
 /* decoupling: double scalar forms without a receiver: X(name, nargs, domain, upper, array) */
@@ -286,5 +312,97 @@
     X(optical_depth, 1, 0) \
     X(visibility, 1, 0) \
     X(sound_horizon_mpc, 1, 0)
+
+/* decoupling: functions of a growth: X(name, nargs, domain, upper, array) */
+#define RELICORE_DECOUPLING_GROWTH(X)
+
+/* decoupling: array forms of the functions of a growth: X(name, nargs, pos) */
+#define RELICORE_DECOUPLING_GROWTH_ARRAYS(X)
+
+/* decoupling: functions of a power_spectrum: X(name, nargs, domain, upper, array) */
+#define RELICORE_DECOUPLING_POWER_SPECTRUM(X)
+
+/* decoupling: array forms of the functions of a power_spectrum: X(name, nargs, pos) */
+#define RELICORE_DECOUPLING_POWER_SPECTRUM_ARRAYS(X)
+
+/* ---- growth ---------------------------------------------------------------------------------- */
+
+/* growth: double scalar forms without a receiver: X(name, nargs, domain, upper, array) */
+#define RELICORE_GROWTH_SCALARS(X) \
+    X(eisenstein_hu_transfer_function, 4, "pppp", INFINITY, 0) \
+    X(eisenstein_hu_no_wiggle_transfer_function, 4, "ppnp", INFINITY, 0)
+
+/* growth: float twins (relicore_<name>_f32): X(name, nargs, domain, upper, array) */
+#define RELICORE_GROWTH_SCALARS_F32(X)
+
+/* growth: array forms without a receiver (relicore_<name>_array): X(name, nargs, pos) */
+#define RELICORE_GROWTH_ARRAYS(X)
+
+/* growth: float array forms (relicore_<name>_array_f32): X(name, nargs, pos) */
+#define RELICORE_GROWTH_ARRAYS_F32(X)
+
+/* growth: double scalar forms of more than 4 arguments: X(name, nargs, domain, upper, array) */
+#define RELICORE_GROWTH_WIDE(X)
+
+/* growth: their float twins: X(name, nargs, domain, upper, array) */
+#define RELICORE_GROWTH_WIDE_F32(X)
+
+/* growth: double forms writing a result struct: X(name, nargs, domain, upper, array) */
+#define RELICORE_GROWTH_STRUCTS(X)
+
+/* growth: their float twins: X(name, nargs, domain, upper, array) */
+#define RELICORE_GROWTH_STRUCTS_F32(X)
+
+/* growth: functions of a universe: X(name, nargs, domain, upper, array) */
+#define RELICORE_GROWTH_UNIVERSE(X) \
+    X(hubble_distance_at_mpc, 1, "n", INFINITY, 1) \
+    X(volume_averaged_distance_mpc, 1, "n", INFINITY, 1) \
+    X(transverse_comoving_distance_over_sound_horizon, 2, "np", INFINITY, 1) \
+    X(hubble_distance_over_sound_horizon, 2, "np", INFINITY, 1) \
+    X(volume_averaged_distance_over_sound_horizon, 2, "np", INFINITY, 1) \
+    X(leapfrog_drift_factor_gyr, 2, "pp", 1.0, 0) \
+    X(leapfrog_kick_factor_gyr, 2, "pp", 1.0, 0)
+
+/* growth: array forms of the functions of a universe: X(name, nargs, pos) */
+#define RELICORE_GROWTH_UNIVERSE_ARRAYS(X) \
+    X(hubble_distance_at_mpc, 1, 0) \
+    X(volume_averaged_distance_mpc, 1, 0) \
+    X(transverse_comoving_distance_over_sound_horizon, 2, 0) \
+    X(hubble_distance_over_sound_horizon, 2, 0) \
+    X(volume_averaged_distance_over_sound_horizon, 2, 0)
+
+/* growth: functions of a history: X(name, nargs, domain, upper, array) */
+#define RELICORE_GROWTH_HISTORY(X)
+
+/* growth: array forms of the functions of a history: X(name, nargs, pos) */
+#define RELICORE_GROWTH_HISTORY_ARRAYS(X)
+
+/* growth: functions of a growth: X(name, nargs, domain, upper, array) */
+#define RELICORE_GROWTH_GROWTH(X) \
+    X(growth_factor, 1, "n", INFINITY, 1) \
+    X(growth_rate, 1, "n", INFINITY, 1) \
+    X(unnormalized_growth_factor, 1, "n", INFINITY, 1)
+
+/* growth: array forms of the functions of a growth: X(name, nargs, pos) */
+#define RELICORE_GROWTH_GROWTH_ARRAYS(X) \
+    X(growth_factor, 1, 0) \
+    X(growth_rate, 1, 0) \
+    X(unnormalized_growth_factor, 1, 0)
+
+/* growth: functions of a power_spectrum: X(name, nargs, domain, upper, array) */
+#define RELICORE_GROWTH_POWER_SPECTRUM(X) \
+    X(transfer_function, 1, "p", INFINITY, 1) \
+    X(linear_power_spectrum_mpc3, 2, "pn", INFINITY, 1) \
+    X(density_rms_in_sphere, 2, "pn", INFINITY, 0) \
+    X(growth_rate_times_sigma8, 1, "n", INFINITY, 1) \
+    X(sigma8, 0, "", INFINITY, 0) \
+    X(s8, 0, "", INFINITY, 0) \
+    X(scalar_amplitude, 0, "", INFINITY, 0)
+
+/* growth: array forms of the functions of a power_spectrum: X(name, nargs, pos) */
+#define RELICORE_GROWTH_POWER_SPECTRUM_ARRAYS(X) \
+    X(transfer_function, 1, 0) \
+    X(linear_power_spectrum_mpc3, 2, 0) \
+    X(growth_rate_times_sigma8, 1, 0)
 
 #endif

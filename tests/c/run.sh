@@ -30,6 +30,7 @@ LIBDIR="${CARGO_TARGET_DIR:-$ROOT/target}/release-c"
 DATA=("$ROOT/tests/data/blackbody.txt" "$ROOT/tests/data/blackbody_response.txt")
 COSMOLOGY_DATA=("$ROOT/tests/data/cosmology.txt")
 DECOUPLING_DATA=("$ROOT/tests/data/decoupling.txt")
+GROWTH_DATA=("$ROOT/tests/data/growth.txt")
 THERMOMETRY_DATA=("$ROOT/tests/data/thermometry.txt" "$ROOT/tests/data/thermometry_response.txt")
 CC=${CC:-gcc}
 CFLAGS=(-std=c11 -Wall -Wextra -Wpedantic -Werror -I "$ROOT/include")
@@ -52,7 +53,7 @@ step() { # step NAME COMMAND...: runs a step, counts it, never stops the script
     fi
 }
 
-for f in "${DATA[@]}" "${COSMOLOGY_DATA[@]}" "${DECOUPLING_DATA[@]}" "${THERMOMETRY_DATA[@]}"; do
+for f in "${DATA[@]}" "${COSMOLOGY_DATA[@]}" "${DECOUPLING_DATA[@]}" "${THERMOMETRY_DATA[@]}" "${GROWTH_DATA[@]}"; do
     [[ -f "$f" ]] || { echo "missing reference data $f" >&2; exit 1; }
 done
 
@@ -65,10 +66,11 @@ data_of() {
     test_blackbody) echo "${DATA[@]}" ;;
     test_cosmology) echo "${COSMOLOGY_DATA[@]}" ;;
     test_decoupling) echo "${DECOUPLING_DATA[@]}" ;;
+    test_growth) echo "${GROWTH_DATA[@]}" ;;
     test_thermometry) echo "${THERMOMETRY_DATA[@]}" ;;
     esac
 }
-TESTS=(test_blackbody test_cosmology test_decoupling test_thermometry)
+TESTS=(test_blackbody test_cosmology test_decoupling test_thermometry test_growth)
 
 build_static() { # build_static TEST
     "$CC" "${CFLAGS[@]}" -O2 "tests/c/$1.c" "${SHARED[@]}" "$LIBDIR/librelicore.a" -lm \
@@ -158,8 +160,9 @@ step "firmware-style program needs no malloc/calloc/realloc/free" check_nomalloc
 
 HOSTILE_CALLS=${HOSTILE_CALLS:-100000}
 # the hostile harnesses: hostile_abi (every export) and hostile_thermometry (the thermometry
-# exports of more arguments, struct results, frames, response tables)
-HOSTILES=(hostile_abi hostile_thermometry)
+# exports of more arguments, struct results, frames, response tables) and hostile_growth (the
+# growth lists of gen_functions.h, the growth and spectrum structs and their compute functions)
+HOSTILES=(hostile_abi hostile_thermometry hostile_growth)
 run_hostile_sanitized() { # run_hostile_sanitized HARNESS
     local h=${1:-hostile_abi}
     "$CC" "${CFLAGS[@]}" -O1 -g -fsanitize=address,undefined -fno-omit-frame-pointer \

@@ -263,6 +263,54 @@ if command -v valgrind >/dev/null 2>&1; then
   fi
 fi
 
+# ------------------------------------------------------------------ growth
+# test_growth on tests/data/growth.txt (vectors, array forms, construction errors), its --dump
+# compared bit for bit with the C harness's (tests/c/run.sh builds it), and valgrind
+GROWTH_BIN=$OUT/test_growth
+GROWTH_DATA=tests/data/growth.txt
+"$FC" -std=f2018 -Wall -Werror -J "$OUT" -c tests/fortran/test_growth.f90 -o "$OUT/test_growth.o"
+"$FC" "$OUT/test_growth.o" "$OUT/vector_files.o" "$OUT/relicore.o" "$LIB" -lm -o "$GROWTH_BIN"
+glog=$OUT/test_growth.log
+gstatus=0
+"$GROWTH_BIN" "$GROWTH_DATA" >"$glog" 2>&1 || gstatus=$?
+grep '^FAIL' "$glog" | head -n 20 || true
+gsummary=$(tail -n 1 "$glog")
+echo "test_growth: ${gsummary:-no summary (exit status $gstatus)}"
+if [[ $gstatus -eq 0 && $gsummary =~ ^([0-9]+)\ passed,\ 0\ failed$ && ${BASH_REMATCH[1]} -gt 0 ]]; then
+  pass "test_growth on $GROWTH_DATA ($(tail -n 2 "$glog" | head -n 1))"
+else
+  fail "test_growth on $GROWTH_DATA (exit status $gstatus; see $glog)"
+fi
+gdump=$OUT/dump_growth.txt
+if "$GROWTH_BIN" --dump "$GROWTH_DATA" >"$gdump"; then
+  want_lines=$(awk '!/^#/ && NF > 0 && $1 != "universe" && $1 != "growth" && $1 != "spectrum" && $(NF - 2) != "status"' "$GROWTH_DATA" | wc -l)
+  if [[ $(wc -l <"$gdump") -eq $want_lines ]]; then
+    pass "--dump (growth): $want_lines lines 'target function bits'"
+  else
+    fail "--dump (growth): $(wc -l <"$gdump") lines for $want_lines vectors"
+  fi
+  cbin=build/c-tests/test_growth
+  if [[ -x $cbin ]]; then
+    if "$cbin" --dump "$GROWTH_DATA" | awk '{print $1, $2, toupper($3)}' | cmp -s - "$gdump"; then
+      pass "--dump (growth): Fortran and C agree bit for bit on $want_lines results"
+    else
+      fail "--dump (growth): Fortran and C results differ (compare $gdump with $cbin --dump)"
+    fi
+  else
+    echo "skip: $cbin not built (run tests/c/run.sh first) - no Fortran/C bit comparison"
+  fi
+else
+  fail "--dump (growth) failed"
+fi
+if command -v valgrind >/dev/null 2>&1; then
+  if valgrind --quiet --error-exitcode=1 --leak-check=full --log-file="$OUT/valgrind_growth.log" \
+    "$GROWTH_BIN" "$GROWTH_DATA" >"$OUT/valgrind_growth.out" 2>&1; then
+    pass "valgrind (growth): no memory errors or leaks ($(tail -n 1 "$OUT/valgrind_growth.out"))"
+  else
+    fail "valgrind (growth) reported errors (see $OUT/valgrind_growth.log)"
+  fi
+fi
+
 # ------------------------------------------------------------------ interfaces against the header
 if python3 tests/fortran/check_interfaces.py; then
   pass "interfaces match include/relicore.h"

@@ -6,6 +6,7 @@
 use relicore::Result;
 use relicore::cosmology::Universe;
 use relicore::decoupling::ThermalHistory;
+use relicore::growth::{LinearGrowth, LinearPowerSpectrum};
 
 /// The none f64 functions of the table, by name and number of arguments.
 #[allow(dead_code)]
@@ -157,6 +158,17 @@ pub fn call_none_f64(name: &str, a: &[f64]) -> Option<Result<f64>> {
             relicore::decoupling::last_scattering_redshift_fit::<f64>(g(0), g(1))
         }
         ("drag_redshift_fit", 2) => relicore::decoupling::drag_redshift_fit::<f64>(g(0), g(1)),
+        ("eisenstein_hu_transfer_function", 4) => {
+            relicore::growth::eisenstein_hu_transfer_function::<f64>(g(0), g(1), g(2), g(3))
+        }
+        ("eisenstein_hu_no_wiggle_transfer_function", 4) => {
+            relicore::growth::eisenstein_hu_no_wiggle_transfer_function::<f64>(
+                g(0),
+                g(1),
+                g(2),
+                g(3),
+            )
+        }
         _ => return None,
     })
 }
@@ -262,6 +274,19 @@ pub fn call_universe(r: &Universe<f64>, name: &str, a: &[f64]) -> Option<Result<
         ("redshift_at_comoving_distance_mpc", 1) => r.redshift_at_comoving_distance_mpc(g(0)),
         ("redshift_at_luminosity_distance_mpc", 1) => r.redshift_at_luminosity_distance_mpc(g(0)),
         ("saha_ionized_fraction", 1) => relicore::decoupling::saha_ionized_fraction(r, g(0)),
+        ("hubble_distance_at_mpc", 1) => r.hubble_distance_at_mpc(g(0)),
+        ("volume_averaged_distance_mpc", 1) => r.volume_averaged_distance_mpc(g(0)),
+        ("transverse_comoving_distance_over_sound_horizon", 2) => {
+            r.transverse_comoving_distance_over_sound_horizon(g(0), g(1))
+        }
+        ("hubble_distance_over_sound_horizon", 2) => {
+            r.hubble_distance_over_sound_horizon(g(0), g(1))
+        }
+        ("volume_averaged_distance_over_sound_horizon", 2) => {
+            r.volume_averaged_distance_over_sound_horizon(g(0), g(1))
+        }
+        ("leapfrog_drift_factor_gyr", 2) => r.leapfrog_drift_factor_gyr(g(0), g(1)),
+        ("leapfrog_kick_factor_gyr", 2) => r.leapfrog_kick_factor_gyr(g(0), g(1)),
         _ => return None,
     })
 }
@@ -286,6 +311,38 @@ pub fn call_history(r: &ThermalHistory<f64>, name: &str, a: &[f64]) -> Option<Re
         ("visibility_peak_redshift", 0) => Ok(r.visibility_peak_redshift()),
         ("thermal_decoupling_redshift", 0) => Ok(r.thermal_decoupling_redshift()),
         ("reionization_optical_depth", 0) => Ok(r.reionization_optical_depth()),
+        _ => return None,
+    })
+}
+
+/// The growth functions of the table, by name and number of arguments.
+#[allow(dead_code)]
+pub fn call_growth(r: &LinearGrowth<f64>, name: &str, a: &[f64]) -> Option<Result<f64>> {
+    let g = |i: usize| a.get(i).copied().unwrap_or(f64::NAN);
+    Some(match (name, a.len()) {
+        ("growth_factor", 1) => r.growth_factor(g(0)),
+        ("growth_rate", 1) => r.growth_rate(g(0)),
+        ("unnormalized_growth_factor", 1) => r.unnormalized_growth_factor(g(0)),
+        _ => return None,
+    })
+}
+
+/// The power spectrum functions of the table, by name and number of arguments.
+#[allow(dead_code)]
+pub fn call_power_spectrum(
+    r: &LinearPowerSpectrum<f64>,
+    name: &str,
+    a: &[f64],
+) -> Option<Result<f64>> {
+    let g = |i: usize| a.get(i).copied().unwrap_or(f64::NAN);
+    Some(match (name, a.len()) {
+        ("transfer_function", 1) => r.transfer_function(g(0)),
+        ("linear_power_spectrum_mpc3", 2) => r.linear_power_spectrum_mpc3(g(0), g(1)),
+        ("density_rms_in_sphere", 2) => r.density_rms_in_sphere(g(0), g(1)),
+        ("growth_rate_times_sigma8", 1) => r.growth_rate_times_sigma8(g(0)),
+        ("sigma8", 0) => Ok(r.sigma8()),
+        ("s8", 0) => Ok(r.s8()),
+        ("scalar_amplitude", 0) => Ok(r.scalar_amplitude()),
         _ => return None,
     })
 }

@@ -49,6 +49,14 @@ FITS = tuple(n for n, a in DECOUPLING.items() if "universe" not in a)
 HISTORY_METHODS = _args("history", "method")
 #: read-only properties of relicore.decoupling.ThermalHistory (the summary)
 HISTORY_PROPERTIES = tuple(_args("history", "property"))
+#: relicore.growth's free functions (the Eisenstein & Hu transfer functions) -> parameters
+GROWTH_FUNCTIONS = _args("none", "function", "growth")
+#: methods of relicore.growth.LinearGrowth -> parameters after self
+GROWTH_METHODS = _args("growth", "method")
+#: methods of relicore.growth.LinearPowerSpectrum -> parameters after self
+SPECTRUM_METHODS = _args("power_spectrum", "method")
+#: read-only properties of relicore.growth.LinearPowerSpectrum computed by the core
+SPECTRUM_PROPERTIES = tuple(_args("power_spectrum", "property"))
 #: (name, core array function) of the functions whose array path is the core's SIMD array form
 SIMD = [(f.name, f"{f.name}_array", f.receiver) for f in FUNCTIONS if f.array and f.array.simd]
 

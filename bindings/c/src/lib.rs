@@ -22,8 +22,9 @@
 //! radiance), `thermometry` (the temperature-with-uncertainty struct, the response-table,
 //! combined-uncertainty and frame forms of radiation thermometry), `universe` (the universe
 //! struct, its init function and parameters),
-//! `decoupling` (the thermal-history struct and its compute function), and the generated
-//! `gen_blackbody`, `gen_cosmology`, `gen_decoupling`: the exports of every regular function of
+//! `decoupling` (the thermal-history struct and its compute function), `growth` (the
+//! linear-growth and power-spectrum structs, the spectrum's options and the compute functions), and the generated
+//! `gen_blackbody`, `gen_cosmology`, `gen_decoupling`, `gen_growth`: the exports of every regular function of
 //! `bindings/functions.toml` (`double`, `float` twins, array forms), written by
 //! `bindings/generate.py` from that table and the core's rustdoc.
 
@@ -63,6 +64,10 @@ pub mod gen_cosmology;
 pub mod decoupling;
 
 pub mod gen_decoupling;
+
+pub mod growth;
+
+pub mod gen_growth;
 
 #[cfg(test)]
 mod header;

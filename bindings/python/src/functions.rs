@@ -16,16 +16,20 @@ use pyo3::exceptions::{PyTypeError, PyValueError};
 use pyo3::prelude::*;
 use relicore::cosmology::Universe;
 use relicore::decoupling::ThermalHistory;
+use relicore::growth::{LinearGrowth, LinearPowerSpectrum};
 use relicore::{ArrayResult, Error, Result};
 
 use crate::cosmology::PyUniverse;
 use crate::decoupling::PyThermalHistory;
 use crate::errors::{Arg, Site, core_error_because};
-use crate::generated::{HISTORY, PLAIN, UNIVERSE};
+use crate::generated::{GROWTH, HISTORY, PLAIN, SPECTRUM, UNIVERSE};
+use crate::growth::{PyLinearGrowth, PyLinearPowerSpectrum};
 use crate::kernels::{check_shape, elements, run, run_array, run_frame, run_rows};
 
 pub(crate) type U = Universe<f64>;
 pub(crate) type H = ThermalHistory<f64>;
+pub(crate) type G = LinearGrowth<f64>;
+pub(crate) type S = LinearPowerSpectrum<f64>;
 
 /// How a core function is called: on its receiver `R` and 0 to 4 element-wise arguments.
 pub(crate) enum Body<R: 'static> {
@@ -51,7 +55,7 @@ pub(crate) type ArrayFn<R> = fn(&R, &[f64], &[f64], &mut [f64]) -> ArrayResult;
 /// One regular function, as `generated.rs` declares it.
 pub(crate) struct Spec<R: 'static> {
     pub(crate) name: &'static str,
-    /// Its topic (`blackbody`, `cosmology`, `decoupling`).
+    /// Its topic (`blackbody`, `cosmology`, `decoupling`, `growth`).
     pub(crate) topic: &'static str,
     /// How error messages name it (`Universe.age_gyr`, `saha_ionized_fraction`).
     pub(crate) label: &'static str,
@@ -296,6 +300,8 @@ enum Entry {
     Plain(&'static Spec<()>),
     Universe(&'static Spec<U>),
     History(&'static Spec<H>),
+    Growth(&'static Spec<G>),
+    Spectrum(&'static Spec<S>),
 }
 
 /// Runs `$body` with `$spec` the entry's spec and `$receiver` the receiver Python passed, as
@@ -314,6 +320,16 @@ macro_rules! with_receiver {
             }
             Entry::History($spec) => {
                 let bound = $object.cast::<PyThermalHistory>()?;
+                let $receiver = bound.get();
+                $body
+            }
+            Entry::Growth($spec) => {
+                let bound = $object.cast::<PyLinearGrowth>()?;
+                let $receiver = bound.get();
+                $body
+            }
+            Entry::Spectrum($spec) => {
+                let bound = $object.cast::<PyLinearPowerSpectrum>()?;
                 let $receiver = bound.get();
                 $body
             }
@@ -341,6 +357,8 @@ impl Function {
             Entry::Plain(s) => (s.name, s.topic, s.label, s.args),
             Entry::Universe(s) => (s.name, s.topic, s.label, s.args),
             Entry::History(s) => (s.name, s.topic, s.label, s.args),
+            Entry::Growth(s) => (s.name, s.topic, s.label, s.args),
+            Entry::Spectrum(s) => (s.name, s.topic, s.label, s.args),
         }
     }
 }
@@ -353,7 +371,7 @@ impl Function {
         self.parts().0
     }
 
-    /// Its topic: blackbody, cosmology or decoupling.
+    /// Its topic: blackbody, cosmology, decoupling or growth.
     #[getter]
     fn topic(&self) -> &'static str {
         self.parts().1
@@ -365,13 +383,15 @@ impl Function {
         self.parts().2
     }
 
-    /// What it is called on: "none", "universe" or "history".
+    /// What it is called on: "none", "universe", "history", "growth" or "power_spectrum".
     #[getter]
     fn receiver(&self) -> &'static str {
         match self.entry {
             Entry::Plain(_) => "none",
             Entry::Universe(_) => "universe",
             Entry::History(_) => "history",
+            Entry::Growth(_) => "growth",
+            Entry::Spectrum(_) => "power_spectrum",
         }
     }
 
@@ -388,6 +408,8 @@ impl Function {
             Entry::Plain(s) => s.width,
             Entry::Universe(s) => s.width,
             Entry::History(s) => s.width,
+            Entry::Growth(s) => s.width,
+            Entry::Spectrum(s) => s.width,
         }
     }
 
@@ -465,9 +487,13 @@ pub(crate) fn functions() -> Vec<Function> {
     let plain = PLAIN.iter().map(Entry::Plain);
     let universe = UNIVERSE.iter().map(Entry::Universe);
     let history = HISTORY.iter().map(Entry::History);
+    let growth = GROWTH.iter().map(Entry::Growth);
+    let spectrum = SPECTRUM.iter().map(Entry::Spectrum);
     plain
         .chain(universe)
         .chain(history)
+        .chain(growth)
+        .chain(spectrum)
         .map(|entry| Function { entry })
         .collect()
 }

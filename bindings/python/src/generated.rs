@@ -8,7 +8,7 @@
 use relicore::{ArrayResult, ElementError, Error};
 use relicore_dispatch::widest;
 
-use crate::functions::{Body, H, Lift, Spec, U};
+use crate::functions::{Body, G, H, Lift, S, Spec, U};
 
 /// The regular functions called on nothing.
 pub(crate) static PLAIN: &[Spec<()>] = &[
@@ -540,6 +540,28 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         frame: None,
         width: 1,
     },
+    Spec {
+        name: "eisenstein_hu_transfer_function",
+        topic: "growth",
+        label: "eisenstein_hu_transfer_function",
+        args: &["wavenumber_per_mpc", "omega_matter_h2", "omega_baryon_h2", "cmb_temperature_k"],
+        free: false,
+        body: Body::A4(|_, wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, cmb_temperature_k| relicore::growth::eisenstein_hu_transfer_function(wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, cmb_temperature_k).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "eisenstein_hu_no_wiggle_transfer_function",
+        topic: "growth",
+        label: "eisenstein_hu_no_wiggle_transfer_function",
+        args: &["wavenumber_per_mpc", "omega_matter_h2", "omega_baryon_h2", "cmb_temperature_k"],
+        free: false,
+        body: Body::A4(|_, wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, cmb_temperature_k| relicore::growth::eisenstein_hu_no_wiggle_transfer_function(wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, cmb_temperature_k).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
 ];
 
 /// The regular functions called on a universe.
@@ -874,6 +896,83 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         frame: None,
         width: 1,
     },
+    Spec {
+        name: "hubble_distance_at_mpc",
+        topic: "growth",
+        label: "Universe.hubble_distance_at_mpc",
+        args: &["z"],
+        free: false,
+        body: Body::A1(|u, z| u.hubble_distance_at_mpc(z).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "volume_averaged_distance_mpc",
+        topic: "growth",
+        label: "Universe.volume_averaged_distance_mpc",
+        args: &["z"],
+        free: false,
+        body: Body::A1(|u, z| u.volume_averaged_distance_mpc(z).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "transverse_comoving_distance_over_sound_horizon",
+        topic: "growth",
+        label: "Universe.transverse_comoving_distance_over_sound_horizon",
+        args: &["z", "sound_horizon_drag_mpc"],
+        free: false,
+        body: Body::A2(|u, z, sound_horizon_drag_mpc| u.transverse_comoving_distance_over_sound_horizon(z, sound_horizon_drag_mpc).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "hubble_distance_over_sound_horizon",
+        topic: "growth",
+        label: "Universe.hubble_distance_over_sound_horizon",
+        args: &["z", "sound_horizon_drag_mpc"],
+        free: false,
+        body: Body::A2(|u, z, sound_horizon_drag_mpc| u.hubble_distance_over_sound_horizon(z, sound_horizon_drag_mpc).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "volume_averaged_distance_over_sound_horizon",
+        topic: "growth",
+        label: "Universe.volume_averaged_distance_over_sound_horizon",
+        args: &["z", "sound_horizon_drag_mpc"],
+        free: false,
+        body: Body::A2(|u, z, sound_horizon_drag_mpc| u.volume_averaged_distance_over_sound_horizon(z, sound_horizon_drag_mpc).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "leapfrog_drift_factor_gyr",
+        topic: "growth",
+        label: "Universe.leapfrog_drift_factor_gyr",
+        args: &["start_scale_factor", "end_scale_factor"],
+        free: false,
+        body: Body::A2(|u, start_scale_factor, end_scale_factor| u.leapfrog_drift_factor_gyr(start_scale_factor, end_scale_factor).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "leapfrog_kick_factor_gyr",
+        topic: "growth",
+        label: "Universe.leapfrog_kick_factor_gyr",
+        args: &["start_scale_factor", "end_scale_factor"],
+        free: false,
+        body: Body::A2(|u, start_scale_factor, end_scale_factor| u.leapfrog_kick_factor_gyr(start_scale_factor, end_scale_factor).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
 ];
 
 /// The regular functions called on a history.
@@ -1045,6 +1144,124 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
     },
 ];
 
+/// The regular functions called on a growth.
+pub(crate) static GROWTH: &[Spec<G>] = &[
+    Spec {
+        name: "growth_factor",
+        topic: "growth",
+        label: "LinearGrowth.growth_factor",
+        args: &["z"],
+        free: false,
+        body: Body::A1(|g, z| g.growth_factor(z).lift()),
+        array: Some(growth_factor_array),
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "growth_rate",
+        topic: "growth",
+        label: "LinearGrowth.growth_rate",
+        args: &["z"],
+        free: false,
+        body: Body::A1(|g, z| g.growth_rate(z).lift()),
+        array: Some(growth_rate_array),
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "unnormalized_growth_factor",
+        topic: "growth",
+        label: "LinearGrowth.unnormalized_growth_factor",
+        args: &["z"],
+        free: false,
+        body: Body::A1(|g, z| g.unnormalized_growth_factor(z).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+];
+
+/// The regular functions called on a power_spectrum.
+pub(crate) static SPECTRUM: &[Spec<S>] = &[
+    Spec {
+        name: "transfer_function",
+        topic: "growth",
+        label: "LinearPowerSpectrum.transfer_function",
+        args: &["wavenumber_per_mpc"],
+        free: false,
+        body: Body::A1(|p, wavenumber_per_mpc| p.transfer_function(wavenumber_per_mpc).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "linear_power_spectrum_mpc3",
+        topic: "growth",
+        label: "LinearPowerSpectrum.linear_power_spectrum_mpc3",
+        args: &["wavenumber_per_mpc", "z"],
+        free: false,
+        body: Body::A2(|p, wavenumber_per_mpc, z| p.linear_power_spectrum_mpc3(wavenumber_per_mpc, z).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "density_rms_in_sphere",
+        topic: "growth",
+        label: "LinearPowerSpectrum.density_rms_in_sphere",
+        args: &["radius_mpc", "z"],
+        free: false,
+        body: Body::A2(|p, radius_mpc, z| p.density_rms_in_sphere(radius_mpc, z).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "growth_rate_times_sigma8",
+        topic: "growth",
+        label: "LinearPowerSpectrum.growth_rate_times_sigma8",
+        args: &["z"],
+        free: false,
+        body: Body::A1(|p, z| p.growth_rate_times_sigma8(z).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "sigma8",
+        topic: "growth",
+        label: "LinearPowerSpectrum.sigma8",
+        args: &[],
+        free: false,
+        body: Body::A0(|p| p.sigma8().lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "s8",
+        topic: "growth",
+        label: "LinearPowerSpectrum.s8",
+        args: &[],
+        free: false,
+        body: Body::A0(|p| p.s8().lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "scalar_amplitude",
+        topic: "growth",
+        label: "LinearPowerSpectrum.scalar_amplitude",
+        args: &[],
+        free: false,
+        body: Body::A0(|p| p.scalar_amplitude().lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+];
+
 /// `spectral_radiance_wavelength_array` of the core, compiled for each SIMD level and chosen at run time.
 fn spectral_radiance_wavelength_array(r: &(), x: &[f64], rest: &[f64], out: &mut [f64]) -> ArrayResult {
     let mut rest = rest.iter().copied();
@@ -1091,6 +1308,18 @@ fn angular_diameter_distance_mpc_array(r: &U, x: &[f64], rest: &[f64], out: &mut
 fn luminosity_distance_mpc_array(r: &U, x: &[f64], rest: &[f64], out: &mut [f64]) -> ArrayResult {
     let _ = rest;
     widest!(|r: &U, x: &[f64], out: &mut [f64]| -> ArrayResult { r.luminosity_distance_mpc_array(x, out) })
+}
+
+/// `growth_factor_array` of the core, compiled for each SIMD level and chosen at run time.
+fn growth_factor_array(r: &G, x: &[f64], rest: &[f64], out: &mut [f64]) -> ArrayResult {
+    let _ = rest;
+    widest!(|r: &G, x: &[f64], out: &mut [f64]| -> ArrayResult { r.growth_factor_array(x, out) })
+}
+
+/// `growth_rate_array` of the core, compiled for each SIMD level and chosen at run time.
+fn growth_rate_array(r: &G, x: &[f64], rest: &[f64], out: &mut [f64]) -> ArrayResult {
+    let _ = rest;
+    widest!(|r: &G, x: &[f64], out: &mut [f64]| -> ArrayResult { r.growth_rate_array(x, out) })
 }
 
 /// `object_temperature_wavelength_array` of the core (a frame: the first 1 argument(s) single values, the others slices of the chunk's length or of one value).

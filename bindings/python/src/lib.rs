@@ -10,6 +10,7 @@
 //! * [`blackbody`]: the irregular blackbody functions (calibration, response tables).
 //! * [`cosmology`]: the native base of `relicore.Universe`.
 //! * [`decoupling`]: the native base of `relicore.decoupling.ThermalHistory`.
+//! * [`growth`]: the native bases of `relicore.growth.LinearGrowth` and `LinearPowerSpectrum`.
 //! * [`errors`]: the one mapping from a core error to `relicore.RelicoreError`.
 //! * the constants of `relicore::constants`, as the dicts `CONSTANTS` and `ROOTS` (their names
 //!   generated into [`gen_constants`] from `src/constants.rs`), and the core's `VERSION`.
@@ -36,6 +37,7 @@ mod decoupling;
 mod errors;
 mod functions;
 mod gen_constants;
+mod growth;
 // written by bindings/generate.py, which keeps its own layout
 #[rustfmt::skip]
 mod generated;
@@ -86,6 +88,9 @@ fn _native(m: &Bound<'_, PyModule>) -> PyResult<()> {
     m.add_class::<decoupling::PyThermalHistory>()?;
     m.add_function(wrap_pyfunction!(decoupling::history_defaults, m)?)?;
     m.add_function(wrap_pyfunction!(decoupling::decoupling_constants, m)?)?;
+    m.add_class::<growth::PyLinearGrowth>()?;
+    m.add_class::<growth::PyLinearPowerSpectrum>()?;
+    m.add_function(wrap_pyfunction!(growth::growth_constants, m)?)?;
     m.add("CONSTANTS", constants_dict(py, gen_constants::CONSTANTS)?)?;
     m.add("ROOTS", constants_dict(py, gen_constants::ROOTS)?)?;
     m.add_function(wrap_pyfunction!(simd_level, m)?)?;

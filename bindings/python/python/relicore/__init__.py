@@ -19,6 +19,10 @@ relicore.decoupling (its class is also ``relicore.ThermalHistory``)
     fraction, matter temperature, Thomson optical depth, visibility, sound horizon) with its
     summary (last scattering, drag epoch, sound horizons, angular scale, thermal decoupling,
     reionisation optical depth). Pickles.
+relicore.growth
+    :class:`LinearGrowth` (the growth factor and rate of a universe) and
+    :class:`LinearPowerSpectrum` (Eisenstein & Hu 1998 transfer functions, P(k, z), sigma(R),
+    sigma8, S8, f sigma8). The BAO distances and leapfrog factors are Universe methods. Pickles.
 relicore.constants
     The physical and astronomical constants of the core, each in SI units.
 
@@ -38,7 +42,7 @@ the applicable standards, local codes and licensed practice.
 from relicore._native import VERSION as _VERSION
 from relicore._native import RelicoreError
 
-from relicore import blackbody, constants, cosmology, decoupling
+from relicore import blackbody, constants, cosmology, decoupling, growth
 from relicore.cosmology import Universe
 from relicore.decoupling import ThermalHistory
 
@@ -53,5 +57,6 @@ __all__ = [
     "constants",
     "cosmology",
     "decoupling",
+    "growth",
     "__version__",
 ]

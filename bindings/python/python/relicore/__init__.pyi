@@ -6,6 +6,7 @@ from relicore import blackbody as blackbody
 from relicore import constants as constants
 from relicore import cosmology as cosmology
 from relicore import decoupling as decoupling
+from relicore import growth as growth
 from relicore.cosmology import Universe as Universe
 from relicore.decoupling import ThermalHistory as ThermalHistory
 

@@ -252,5 +252,72 @@ class UniverseFunctions:
         """
         return _apply(_F["redshift_at_luminosity_distance_mpc"], self, (distance_mpc, ), nan_on_error, "redshift_at_luminosity_distance_mpc")
 
+    def hubble_distance_at_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
+        """Hubble distance at z, D_H(z) = c/H(z), Mpc.
+
+        * `z`: redshift, finite and ≥ 0.
+
+        Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-14 relative (`f64`) of mpmath,
+        as E(z).
+        """
+        return _apply(_F["hubble_distance_at_mpc"], self, (z, ), nan_on_error, "hubble_distance_at_mpc")
+
+    def volume_averaged_distance_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
+        """Volume-averaged distance D_V(z) = [z D_M² D_H(z)]^⅓, Mpc (Eisenstein et al. 2005, ApJ
+        633, 560, eq. 2), 0 at z = 0.
+
+        * `z`: redshift, finite and ≥ 0.
+
+        Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-12 relative (`f64`) of mpmath
+        (that of D_M).
+        """
+        return _apply(_F["volume_averaged_distance_mpc"], self, (z, ), nan_on_error, "volume_averaged_distance_mpc")
+
+    def transverse_comoving_distance_over_sound_horizon(self, z: Any, sound_horizon_drag_mpc: Any, *, nan_on_error: bool = False) -> Any:
+        """D_M(z)/r_d: the transverse comoving distance over the drag-epoch sound horizon.
+
+        * `z`: redshift, finite and ≥ 0.
+        * `sound_horizon_drag_mpc`: r_d in Mpc, > 0 (e.g. `ThermalHistory::sound_horizon_drag_mpc`).
+
+        Errors: `NonFinite(i)`, `Negative(0)`, `NonPositive(1)`. Accuracy: within 1e-12 relative
+        (`f64`) of mpmath.
+        """
+        return _apply(_F["transverse_comoving_distance_over_sound_horizon"], self, (z, sound_horizon_drag_mpc, ), nan_on_error, "transverse_comoving_distance_over_sound_horizon")
+
+    def hubble_distance_over_sound_horizon(self, z: Any, sound_horizon_drag_mpc: Any, *, nan_on_error: bool = False) -> Any:
+        """D_H(z)/r_d = c/(H(z) r_d). Arguments and errors as
+        `transverse_comoving_distance_over_sound_horizon`.
+        Accuracy: within 1e-14 relative (`f64`) of mpmath.
+        """
+        return _apply(_F["hubble_distance_over_sound_horizon"], self, (z, sound_horizon_drag_mpc, ), nan_on_error, "hubble_distance_over_sound_horizon")
+
+    def volume_averaged_distance_over_sound_horizon(self, z: Any, sound_horizon_drag_mpc: Any, *, nan_on_error: bool = False) -> Any:
+        """D_V(z)/r_d. Arguments and errors as
+        `transverse_comoving_distance_over_sound_horizon`.
+        Accuracy: within 1e-12 relative (`f64`) of mpmath.
+        """
+        return _apply(_F["volume_averaged_distance_over_sound_horizon"], self, (z, sound_horizon_drag_mpc, ), nan_on_error, "volume_averaged_distance_over_sound_horizon")
+
+    def leapfrog_drift_factor_gyr(self, start_scale_factor: Any, end_scale_factor: Any, *, nan_on_error: bool = False) -> Any:
+        """Drift factor of a comoving leapfrog step, ∫_{a1}^{a2} da/(a³H), Gyr (Quinn, Katz, Stadel
+        & Lake 1997): the time a drift multiplies the canonical momentum p = a²ẋ by.
+
+        * `start_scale_factor`: a1, 0 < a1 ≤ 1.
+        * `end_scale_factor`: a2, 0 < a2 ≤ 1 (a2 < a1 gives the negative factor of a backward
+          step).
+
+        Errors: `NonFinite(i)`, `NonPositive(i)`, `OutOfDomain(i)` above 1 (the universe is
+        validated up to today only); `OutOfDomain(0)` when the integral is not representable.
+        Accuracy: within 1e-12 relative (`f64`) of an mpmath quadrature (`tests/data/growth.txt`).
+        """
+        return _apply(_F["leapfrog_drift_factor_gyr"], self, (start_scale_factor, end_scale_factor, ), nan_on_error, "leapfrog_drift_factor_gyr")
+
+    def leapfrog_kick_factor_gyr(self, start_scale_factor: Any, end_scale_factor: Any, *, nan_on_error: bool = False) -> Any:
+        """Kick factor of a comoving leapfrog step, ∫_{a1}^{a2} da/(a²H), Gyr (Quinn, Katz, Stadel
+        & Lake 1997): the time a kick multiplies the comoving force by. Arguments, errors and
+        accuracy as `leapfrog_drift_factor_gyr`.
+        """
+        return _apply(_F["leapfrog_kick_factor_gyr"], self, (start_scale_factor, end_scale_factor, ), nan_on_error, "leapfrog_kick_factor_gyr")
+
 
 _publish(UniverseFunctions, 'relicore.cosmology', 'Universe')

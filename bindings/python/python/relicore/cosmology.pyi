@@ -166,5 +166,33 @@ class Universe:
     def redshift_at_luminosity_distance_mpc(self, distance_mpc: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
     @overload
     def redshift_at_luminosity_distance_mpc(self, distance_mpc: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+    @overload
+    def hubble_distance_at_mpc(self, z: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+    @overload
+    def hubble_distance_at_mpc(self, z: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+    @overload
+    def volume_averaged_distance_mpc(self, z: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+    @overload
+    def volume_averaged_distance_mpc(self, z: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+    @overload
+    def transverse_comoving_distance_over_sound_horizon(self, z: _Scalar, sound_horizon_drag_mpc: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+    @overload
+    def transverse_comoving_distance_over_sound_horizon(self, z: ArrayLike, sound_horizon_drag_mpc: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+    @overload
+    def hubble_distance_over_sound_horizon(self, z: _Scalar, sound_horizon_drag_mpc: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+    @overload
+    def hubble_distance_over_sound_horizon(self, z: ArrayLike, sound_horizon_drag_mpc: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+    @overload
+    def volume_averaged_distance_over_sound_horizon(self, z: _Scalar, sound_horizon_drag_mpc: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+    @overload
+    def volume_averaged_distance_over_sound_horizon(self, z: ArrayLike, sound_horizon_drag_mpc: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+    @overload
+    def leapfrog_drift_factor_gyr(self, start_scale_factor: _Scalar, end_scale_factor: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+    @overload
+    def leapfrog_drift_factor_gyr(self, start_scale_factor: ArrayLike, end_scale_factor: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+    @overload
+    def leapfrog_kick_factor_gyr(self, start_scale_factor: _Scalar, end_scale_factor: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
+    @overload
+    def leapfrog_kick_factor_gyr(self, start_scale_factor: ArrayLike, end_scale_factor: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
 
 __all__: Final[list[str]]
