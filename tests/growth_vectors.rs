@@ -51,8 +51,6 @@ fn universe_call(u: &Universe<f64>, name: &str, a: &[f64]) -> Option<Result<f64>
         ("volume_averaged_distance_over_sound_horizon", 2) => {
             u.volume_averaged_distance_over_sound_horizon(g(0), g(1))
         }
-        ("leapfrog_drift_factor_gyr", 2) => u.leapfrog_drift_factor_gyr(g(0), g(1)),
-        ("leapfrog_kick_factor_gyr", 2) => u.leapfrog_kick_factor_gyr(g(0), g(1)),
         _ => return None,
     })
 }
@@ -63,6 +61,8 @@ fn growth_call(gr: &LinearGrowth<f64>, name: &str, a: &[f64]) -> Option<Result<f
         ("growth_factor", 1) => gr.growth_factor(g(0)),
         ("growth_rate", 1) => gr.growth_rate(g(0)),
         ("unnormalized_growth_factor", 1) => gr.unnormalized_growth_factor(g(0)),
+        ("leapfrog_drift_factor_gyr", 2) => gr.leapfrog_drift_factor_gyr(g(0), g(1)),
+        ("leapfrog_kick_factor_gyr", 2) => gr.leapfrog_kick_factor_gyr(g(0), g(1)),
         _ => return None,
     })
 }

@@ -19,6 +19,7 @@
 //! Trefethen, Approximation Theory and Approximation Practice, SIAM 2013, ch. 8); otherwise a
 //! query integrates the equation from the start to its a (slow, same accuracy).
 
+use super::leapfrog::StepTable;
 use crate::check::finite_result;
 use crate::cosmology::Universe;
 use crate::math::ode::StiffStepper;
@@ -66,12 +67,18 @@ pub struct LinearGrowth<T> {
     a_eq: T,
     /// 1 when every piece passed the error control.
     valid: u8,
+    /// The integrands of the leapfrog drift and kick factors on the pieces from a = 2⁻²⁰ to 1
+    /// (`super::leapfrog`).
+    drift: StepTable<T>,
+    kick: StepTable<T>,
+    /// 1 when both step tables passed their error control.
+    steps_valid: u8,
 }
 
 /// Piece (octave j, sub-piece k) containing a ∈ [2^−47, 1), and t ∈ [−1, 1], as straight-line
 /// code: another a gives some index (possibly out of range) and a garbage t.
 #[inline(always)]
-fn locate_inside<T: Real>(a: T) -> (usize, T) {
+pub(crate) fn locate_inside<T: Real>(a: T) -> (usize, T) {
     let (m, e, _) = a.integer_decode();
     let d = T::MANTISSA_DIGITS as i32;
     let octave_exp = i32::from(e) + d - 1; // a ∈ [2^E, 2^(E+1))
@@ -129,17 +136,41 @@ fn chebyshev_node(m: usize) -> f64 {
     libm::cos(core::f64::consts::PI * (m as f64 + 0.5) / NODES as f64)
 }
 
+/// Monomial coefficients (in t ∈ [−1, 1]) of a function of t from its values at the Chebyshev
+/// points, and whether the dropped coefficients are small (as [`coefficients`]).
+pub(crate) fn coefficients_of<T: Real>(g: impl Fn(f64) -> T) -> ([T; NCOEF], bool) {
+    let mut values = [T::zero(); NODES];
+    for (m, v) in values.iter_mut().enumerate() {
+        *v = g(chebyshev_node(m));
+    }
+    coefficients(&values)
+}
+
 /// Chebyshev coefficients from the values at the nodes, and whether the dropped ones are small.
 fn coefficients<T: Real>(values: &[T; NODES]) -> ([T; NCOEF], bool) {
+    // c_j = (w_j/N) Σ_m v_m T_j(x_m), x_m the nodes; T_j(x_m) = cos(j θ_m) by the Chebyshev
+    // recurrence (one cosine per node instead of one per node and coefficient)
     let mut cs = [T::zero(); NODES];
-    for (jj, c) in cs.iter_mut().enumerate() {
-        let mut sum = T::zero();
-        for (m, v) in values.iter().enumerate() {
-            let ang = core::f64::consts::PI * jj as f64 * (m as f64 + 0.5) / NODES as f64;
-            sum = sum + *v * T::c(libm::cos(ang));
+    for (m, v) in values.iter().enumerate() {
+        let x = chebyshev_node(m);
+        let (mut t_prev, mut t_cur) = (1.0, x);
+        for (jj, c) in cs.iter_mut().enumerate() {
+            let tj = match jj {
+                0 => 1.0,
+                1 => x,
+                _ => {
+                    let next = 2.0 * x * t_cur - t_prev;
+                    t_prev = t_cur;
+                    t_cur = next;
+                    next
+                }
+            };
+            *c = *c + *v * T::c(tj);
         }
+    }
+    for (jj, c) in cs.iter_mut().enumerate() {
         let w = if jj == 0 { 1.0 } else { 2.0 };
-        *c = sum * T::c(w / NODES as f64);
+        *c = *c * T::c(w / NODES as f64);
     }
     let big = cs.iter().fold(T::zero(), |m, c| m.max(c.abs()));
     let tail = cs.iter().skip(NCOEF).fold(T::zero(), |m, c| m + c.abs());
@@ -172,6 +203,9 @@ impl<T: Real> LinearGrowth<T> {
             du_today: T::one(),
             a_eq: T::zero(),
             valid: 0,
+            drift: StepTable::zero(),
+            kick: StepTable::zero(),
+            steps_valid: 0,
         };
         g.compute()?;
         Ok(g)
@@ -183,6 +217,7 @@ impl<T: Real> LinearGrowth<T> {
     pub fn compute_in_place(&mut self, universe: &Universe<T>) -> Result<()> {
         self.universe = universe.clone();
         self.valid = 0;
+        self.steps_valid = 0;
         self.compute()
     }
 
@@ -281,7 +316,15 @@ impl<T: Real> LinearGrowth<T> {
         if !(self.du_today > T::zero() && self.du_today.is_finite()) {
             return Err(Error::NoConvergence);
         }
+        let ok = Self::compute_steps(&self.universe, &mut self.drift, &mut self.kick);
+        self.steps_valid = u8::from(ok);
         Ok(())
+    }
+
+    /// The drift (or kick) table and whether it passed its error control.
+    pub(crate) fn step_table(&self, drift: bool) -> (&StepTable<T>, bool) {
+        let t = if drift { &self.drift } else { &self.kick };
+        (t, self.steps_valid == 1)
     }
 
     /// (D_u, f) at a by integrating from the start (the path outside the table).

@@ -18,7 +18,7 @@ every line):
   heath1977        Heath 1977 (MNRAS 179, 351): for w = -1 without radiation, any curvature,
                    D_u = (5/2) Omega_m E(a) int_0^a da'/(a' E)^3, f = dlnE/dlna + 1/(a^2 E^3 I);
                    mpmath quad at 30 digits.
-  closed-form-einstein-de-sitter  D = a, f = 1.
+  closed-form-einstein-de-sitter  D = a, f = 1; leapfrog drift 2 t_H (a1^-1/2 - a2^-1/2), kick 2 t_H (a2^1/2 - a1^1/2).
   mpmath           Eisenstein & Hu 1998 (ApJ 496, 605) transcribed from the paper's equations
                    (recalled from memory) at 30 digits; P(k) from its definition; sigma(R) by
                    mpmath quad of the same P(k) (D_u(1) from scipy-solve-ivp) over subintervals
@@ -516,22 +516,49 @@ def main():
                             *tol("bao"), "mpmath")
                 else:
                     out.vec("volume_averaged_distance_mpc", uname, [z], 0.0, "abs", 1e-300, "spec")
-            for a1, a2 in ((0.01, 0.0101), (0.5, 0.51), (0.98, 1.0), (0.02, 1.0), (1e-3, 0.1), (0.9, 0.8),
-                           (1e-6, 1e-5)):
-                # drift = t_H int da/(a q), kick = t_H int da/q, q = sqrt(P(a)) = a^2 E
-                pa = [mpf(a1), mpf(a2)]
-                drift = bg.tH * mp.quad(lambda a: 1 / (a * mp.sqrt(bg.P(a))), pa)
-                kick = bg.tH * mp.quad(lambda a: 1 / mp.sqrt(bg.P(a)), pa)
-                out.vec("leapfrog_drift_factor_gyr", uname, [a1, a2], cv.f64(drift), *tol("leapfrog"), "mpmath")
-                out.vec("leapfrog_kick_factor_gyr", uname, [a1, a2], cv.f64(kick), *tol("leapfrog"), "mpmath")
         for n, args, code in (("hubble_distance_at_mpc", [-1.0], NEG), ("volume_averaged_distance_mpc", [math.nan], NF),
                               ("transverse_comoving_distance_over_sound_horizon", [0.5, 0.0], NP),
                               ("hubble_distance_over_sound_horizon", [0.5, -1.0], NP),
                               ("volume_averaged_distance_over_sound_horizon", [-0.5, 147.0], NEG),
-                              ("leapfrog_drift_factor_gyr", [0.0, 0.5], NP),
-                              ("leapfrog_kick_factor_gyr", [0.5, 1.5], OOD),
-                              ("leapfrog_kick_factor_gyr", [0.5, math.nan], NF)):
+                              ):
             out.status(n, uname, args, code)
+        out.blank()
+    # ---- leapfrog factors (functions of a growth: its step tables cover a >= 2^-20) ----
+    w("leapfrog drift and kick factors of a growth: mpmath quadrature (30 digits) on the mpmath background;")
+    w("steps inside one piece of the table (down to 1e-9 of a), across pieces and octaves, on piece and")
+    w("octave boundaries, at the lower end of the table (2^-20) and below it, backwards, and the whole range")
+    steps = ((0.01, 0.0101), (0.5, 0.51), (0.98, 1.0), (0.02, 1.0), (1e-3, 0.1), (0.9, 0.8), (1e-6, 1e-5),
+             (0.3, 0.3 + 3e-10), (0.7, 0.7000001), (0.25, 0.5), (0.124, 0.126), (0.5, 1.0), (0.03, 0.031),
+             (2.0 ** -20, 2.0 ** -19), (1e-7, 2e-7), (5e-7, 2e-6), (1e-6, 1.0), (0.015625, 0.0625),
+             (0.12, 0.08), (0.999999, 1.0))
+    for uname in ("einstein_de_sitter", "flat_lcdm_radiation", "closed_dynamical_radiation", "planck_like",
+                  "open_lcdm"):
+        bg = bgs[uname]
+        with mp.workdps(30):
+            for a1, a2 in steps:
+                # drift = t_H int da/(a q), kick = t_H int da/q, q = sqrt(P(a)) = a^2 E
+                pa = [mpf(a1), mpf(a2)]
+                drift = bg.tH * mp.quad(lambda a: 1 / (a * mp.sqrt(bg.P(a))), pa)
+                kick = bg.tH * mp.quad(lambda a: 1 / mp.sqrt(bg.P(a)), pa)
+                out.vec("leapfrog_drift_factor_gyr", "g_" + uname, [a1, a2], cv.f64(drift), *tol("leapfrog"),
+                        "mpmath")
+                out.vec("leapfrog_kick_factor_gyr", "g_" + uname, [a1, a2], cv.f64(kick), *tol("leapfrog"),
+                        "mpmath")
+            if uname == "einstein_de_sitter":
+                # closed forms: q = a^(1/2), drift = 2 t_H (a1^-1/2 - a2^-1/2), kick = 2 t_H (a2^1/2 - a1^1/2)
+                for a1, a2 in steps:
+                    drift = 2 * bg.tH * (mpf(a1) ** -0.5 - mpf(a2) ** -0.5)
+                    kick = 2 * bg.tH * (mp.sqrt(mpf(a2)) - mp.sqrt(mpf(a1)))
+                    out.vec("leapfrog_drift_factor_gyr", "g_" + uname, [a1, a2], cv.f64(drift),
+                            *tol("leapfrog"), "closed-form-einstein-de-sitter")
+                    out.vec("leapfrog_kick_factor_gyr", "g_" + uname, [a1, a2], cv.f64(kick), *tol("leapfrog"),
+                            "closed-form-einstein-de-sitter")
+        for n, args, code in (("leapfrog_drift_factor_gyr", [0.0, 0.5], NP),
+                              ("leapfrog_drift_factor_gyr", [-0.5, 0.5], NP),
+                              ("leapfrog_kick_factor_gyr", [0.5, 1.5], OOD),
+                              ("leapfrog_kick_factor_gyr", [0.5, math.nan], NF),
+                              ("leapfrog_drift_factor_gyr", [math.inf, 0.5], NF)):
+            out.status(n, "g_" + uname, args, code)
         out.blank()
     w("BOSS DR12 consensus at z = 0.51 (Alam et al. 2017, from memory), within two standard deviations;")
     w("r_d = 147.09 Mpc (Planck 2020 Table 2, from memory)")
