@@ -92,12 +92,18 @@ pub trait Real:
     /// `f64`, 12 in `f32`): the high part of the splitting x = hi + (x − hi), both parts exact,
     /// by one bit mask (no multiplication, no overflow, valid for subnormal x too).
     fn split_high(self) -> Self;
+    /// For a positive normal finite x: (f, k, m) with x = 2^m·f exactly, √½ ≤ f < √2 (the
+    /// bounds rounded to `Self`), k = m as a float, m in [`Real::MIN_NORMAL_EXPONENT`,
+    /// `Real::MAX_EXPONENT` + 1]: the argument reduction of [`crate::math::log`], by integer
+    /// operations on the bits (no branch, no library call). Another x gives unspecified values
+    /// (never a panic).
+    fn split_sqrt2(self) -> (Self, Self, i32);
 }
 
 macro_rules! impl_real {
     ($t:ty, $digits:expr, $split:expr, $lnmax:expr, $lnmin:expr,
      $exp:path, $expm1:path, $log:path, $log1p:path, $sqrt:path, $cbrt:path, $sinh:path, $tanh:path, $floor:path, $cosh:path, $sin:path, $cos:path,
-     $table:expr, $ln2n:expr, $emin:expr, $emax:expr, $shift:expr, $bits:ty) => {
+     $table:expr, $ln2n:expr, $emin:expr, $emax:expr, $shift:expr, $bits:ty, $sqrt_half_bits:expr) => {
         impl Real for $t {
             const MANTISSA_DIGITS: u32 = $digits;
             const SPLITTER: Self = $split;
@@ -193,6 +199,20 @@ macro_rules! impl_real {
                 let low: $bits = (1 << (($digits + 1) / 2)) - 1;
                 <$t>::from_bits(self.to_bits() & !low)
             }
+            #[inline(always)]
+            fn split_sqrt2(self) -> (Self, Self, i32) {
+                // adding 1 − bits(√½) moves significands ≥ √2 into the next binade (no carry
+                // out of the exponent field for finite x): the exponent field is then the
+                // biased m, and the significand plus bits(√½) is f
+                let one: $bits = ($emax as $bits) << ($digits - 1);
+                let t = self
+                    .to_bits()
+                    .wrapping_add(one.wrapping_sub($sqrt_half_bits));
+                let e = (t >> ($digits - 1)) as i32;
+                let mask: $bits = (1 << ($digits - 1)) - 1;
+                let f = <$t>::from_bits((t & mask).wrapping_add($sqrt_half_bits));
+                (f, Self::small_integer(e) - Self::c($emax as f64), e - $emax)
+            }
         }
     };
 }
@@ -220,7 +240,8 @@ impl_real!(
     -1022,
     1023,
     6_755_399_441_055_744.0, // 1.5·2^52
-    u64
+    u64,
+    0x3fe6_a09e_667f_3bcd // √½ rounded to nearest
 );
 impl_real!(
     f32,
@@ -245,7 +266,8 @@ impl_real!(
     -126,
     127,
     12_582_912.0, // 1.5·2^23
-    u32
+    u32,
+    0x3f35_04f3 // √½ rounded to nearest
 );
 
 #[cfg(test)]

@@ -29,3 +29,7 @@ echo "== benches/compare: luminosity distances of a catalogue (cosmology)"
 echo
 echo "== benches/compare: one thermal history and its summary (decoupling)"
 "$PY" benches/compare/decoupling_compare.py
+
+echo
+echo "== benches/compare: object temperature with u_c of a 1000 x 1000 frame (thermometry)"
+"$PY" benches/compare/thermometry_compare.py --lib "${CARGO_TARGET_DIR:-target}/release-c/librelicore.so"

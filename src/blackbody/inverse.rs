@@ -7,7 +7,7 @@
 //! without the emissivity, calibration and procedure that the applicable standards, local codes
 //! and licensed practice require.
 
-use super::kernel::{ln1p_quotient, two_h_nu3_over_c2, x_wavelength};
+use super::kernel::{ln1p_quotient, ln1p_quotient_fast, two_h_nu3_over_c2, x_wavelength};
 use crate::check::{finite_result, positive};
 use crate::constants as k;
 use crate::math::{dd, roots};
@@ -39,11 +39,33 @@ pub fn brightness_temperature_wavelength<T: Real>(
 
 #[inline(always)]
 pub(crate) fn brightness_temperature_wavelength_unchecked<T: Real>(l: T, b: T) -> T {
-    let a = T::c(k::FIRST_RADIATION_RADIANCE) / super::kernel::pow5(l);
+    let (c2_over_l, a) = brightness_constants_wavelength(l);
     let ln_a = || T::c(k::FIRST_RADIATION_RADIANCE).ln() - T::c(5.0) * l.ln();
+    c2_over_l / ln1p_quotient(a, ln_a, b)
+}
+
+/// The two constants of the brightness temperature at one wavelength: c₂/λ (rounded from
+/// double length) and a = 2hc²/λ⁵, so that T = (c₂/λ)/ln(1 + a/L).
+#[inline(always)]
+pub(crate) fn brightness_constants_wavelength<T: Real>(l: T) -> (T, T) {
+    let a = T::c(k::FIRST_RADIATION_RADIANCE) / super::kernel::pow5(l);
     let (ch, cl) = T::c2(k::SECOND_RADIATION, k::SECOND_RADIATION_LO);
     let (qh, ql) = dd::div_dd_dd(ch, cl, l, T::zero());
-    (qh + ql) / ln1p_quotient(a, ln_a, b)
+    (qh + ql, a)
+}
+
+/// The common case of [`brightness_temperature_wavelength`] as straight-line code, given the
+/// constants of [`brightness_constants_wavelength`] and the radiance L: T and whether the
+/// arguments are inside that case (where it is the scalar function's result bit for bit).
+#[inline(always)]
+pub(crate) fn brightness_temperature_wavelength_fast<T: Real>(
+    c2_over_l: T,
+    a: T,
+    radiance: T,
+) -> (T, bool) {
+    let (v, inside) = ln1p_quotient_fast(a, radiance);
+    let t = c2_over_l / v;
+    (t, inside & (t <= T::max_value()))
 }
 
 /// Brightness temperature at a frequency: T = (hν/k) / ln(1 + 2hν³/(c² L)).

@@ -2,7 +2,7 @@
 
 use crate::Real;
 use crate::constants as k;
-use crate::math::{dd, exp};
+use crate::math::{dd, exp, log};
 
 /// 2^-55: exact scaling that keeps ν³-type products inside the `f32` range.
 pub(crate) const SCALE_55: f64 = 2.775_557_561_562_891_4e-17;
@@ -269,14 +269,15 @@ pub(crate) fn invert_increasing<T: Real, F: FnMut(T) -> (T, T)>(
 
 /// ln(1 + a/b) for a, b > 0 without overflow or underflow of the quotient: the argument of the
 /// logarithm in every closed-form brightness temperature. `ln_a` is used when `a` itself is
-/// not a normal number (it is then ln of the exact a).
+/// not a normal number (it is then ln of the exact a). The common case (a, b and a/b normal,
+/// a/b < 1e30) is [`log::ln_1p`] of a/b, the bits of [`ln1p_quotient_fast`].
 #[inline]
 pub(crate) fn ln1p_quotient<T: Real>(a: T, ln_a: impl Fn() -> T, b: T) -> T {
     let a_ok = a.is_finite() && a >= T::min_positive_value();
     if a_ok && b >= T::min_positive_value() {
         let q = a / b;
         if q.is_finite() && q >= T::min_positive_value() && q < T::c(1e30) {
-            return q.ln_1p();
+            return log::ln_1p(q);
         }
     }
     // ln(1 + a/b) = ln a − ln b + ln(1 + b/a) for a/b large (the only case left for b > 0 and a
@@ -285,4 +286,18 @@ pub(crate) fn ln1p_quotient<T: Real>(a: T, ln_a: impl Fn() -> T, b: T) -> T {
     let lb = b.ln();
     let d = la - lb;
     d + (-d).exp().ln_1p()
+}
+
+/// The common case of [`ln1p_quotient`] as straight-line code for the array functions: its
+/// value and whether (a, b) are inside that case; outside, the value is garbage.
+#[inline(always)]
+pub(crate) fn ln1p_quotient_fast<T: Real>(a: T, b: T) -> (T, bool) {
+    let q = a / b;
+    let (v, _) = log::ln_1p_fast(q);
+    let inside = (a >= T::min_positive_value())
+        & (a <= T::max_value())
+        & (b >= T::min_positive_value())
+        & (q >= T::min_positive_value())
+        & (q < T::c(1e30));
+    (v, inside)
 }

@@ -67,13 +67,17 @@
 //! certified measurement chain.
 
 use super::band::{band_radiance_and_derivative_wavelength_unchecked, check_band};
-use super::inverse::{brightness_temperature_frequency, brightness_temperature_wavelength};
+use super::inverse::{
+    brightness_constants_wavelength, brightness_temperature_frequency,
+    brightness_temperature_wavelength, brightness_temperature_wavelength_fast,
+};
 use super::planck::{
+    radiance_and_derivative_wavelength_fast, radiance_and_derivative_wavelength_unchecked,
     radiance_temperature_derivative_frequency, radiance_temperature_derivative_wavelength,
     spectral_radiance_frequency, spectral_radiance_wavelength,
 };
 use super::response::{check_table, response_weighted_derivative_unchecked};
-use super::uncertainty::{SENSITIVITY_CAPACITY, TemperatureUncertainty};
+use super::uncertainty::{SENSITIVITY_CAPACITY, TemperatureUncertainty, sum_of_squares_is_safe};
 use super::{
     band_radiance_wavelength, response_weighted_radiance,
     temperature_from_band_radiance_wavelength, temperature_from_response_weighted_radiance,
@@ -97,6 +101,24 @@ trait Quantity<T: Real> {
     fn derivative(&self, t: T) -> Result<T>;
     /// The T > 0 with L(T) = l, for l > 0.
     fn temperature(&self, l: T) -> Result<T>;
+    /// (L(T), dL/dT) for T > 0: the bits of [`Quantity::radiance`] and
+    /// [`Quantity::derivative`], in one evaluation where the form has one.
+    fn radiance_and_derivative(&self, t: T) -> Result<(T, T)> {
+        Ok((self.radiance(t)?, self.derivative(t)?))
+    }
+    /// The constants of the branch-free frame path of this form, where it has one.
+    fn frame_constants(&self) -> Option<FrameConstants<T>> {
+        None
+    }
+}
+
+/// What the branch-free frame path of the one-wavelength form needs: λ, c₂/λ and 2hc²/λ⁵
+/// ([`brightness_constants_wavelength`]).
+#[derive(Clone, Copy)]
+struct FrameConstants<T> {
+    wavelength: T,
+    c2_over_l: T,
+    a: T,
 }
 
 #[derive(Clone, Copy)]
@@ -121,6 +143,19 @@ impl<T: Real> Quantity<T> for Wavelength<T> {
     #[inline(always)]
     fn temperature(&self, l: T) -> Result<T> {
         brightness_temperature_wavelength(self.0, l)
+    }
+    fn radiance_and_derivative(&self, t: T) -> Result<(T, T)> {
+        let t = positive(t, 1)?;
+        let (b, d) = radiance_and_derivative_wavelength_unchecked(self.0, t);
+        Ok((finite_result(b, 0)?, finite_result(d, 0)?))
+    }
+    fn frame_constants(&self) -> Option<FrameConstants<T>> {
+        let (c2_over_l, a) = brightness_constants_wavelength(self.0);
+        Some(FrameConstants {
+            wavelength: self.0,
+            c2_over_l,
+            a,
+        })
     }
 }
 
@@ -239,13 +274,11 @@ fn quantity_at<T: Real, Q: Quantity<T>>(q: &Q, t: T, arg: u8, derivative: bool) 
     if t == T::zero() {
         return Ok((T::zero(), T::zero()));
     }
-    let l = q.radiance(t).map_err(at(arg))?;
-    let d = if derivative {
-        q.derivative(t).map_err(at(arg))?
+    if derivative {
+        q.radiance_and_derivative(t).map_err(at(arg))
     } else {
-        T::zero()
-    };
-    Ok((l, d))
+        Ok((q.radiance(t).map_err(at(arg))?, T::zero()))
+    }
 }
 
 /// Checks the scene and evaluates its surroundings and path. Without `derivative` (the value
@@ -932,6 +965,158 @@ fn note(first: &mut Option<ElementError>, index: usize, error: Error) {
     }
 }
 
+/// Pixels per block of the branch-free frame path.
+const FRAME_BLOCK: usize = 64;
+
+/// Lane k of a block buffer (k < [`FRAME_BLOCK`] always: the `None` arm is never taken).
+#[inline(always)]
+fn lane<T: Real>(b: &[T; FRAME_BLOCK], k: usize) -> T {
+    b.get(k).copied().unwrap_or(T::nan())
+}
+
+/// Fills the first m lanes of `buf` with the block [start, start + m) of a per-pixel slice, or
+/// every lane with the one value of a shared one.
+#[inline(always)]
+fn load<T: Real>(buf: &mut [T; FRAME_BLOCK], s: &[T], start: usize, m: usize) {
+    if s.len() == 1 {
+        buf.fill(s.first().copied().unwrap_or(T::nan()));
+    } else if let (Some(src), Some(dst)) = (s.get(start..start + m), buf.get_mut(..m)) {
+        dst.copy_from_slice(src);
+    }
+}
+
+/// The frame loop of the one-wavelength forms: blocks of [`FRAME_BLOCK`] pixels through the
+/// branch-free `fast(inputs) -> (outputs before `finish`, inside)`, which the compiler turns
+/// into SIMD instructions; `finish` (the square root of u_c, a library call) is applied while
+/// storing; a block in which any pixel left the common case is recomputed pixel by pixel by
+/// `scalar(i)`, the scalar function's own path. Every output is the scalar function's result
+/// bit for bit; failing pixels are NaN and the first is returned.
+#[inline(always)]
+fn frame_blocks<T: Real, const P: usize, const O: usize>(
+    n: usize,
+    inputs: [&[T]; P],
+    outs: [&mut [T]; O],
+    fast: impl Fn([T; P]) -> ([T; O], bool),
+    finish: impl Fn([T; O]) -> [T; O],
+    mut scalar: impl FnMut(usize) -> Result<[T; O]>,
+) -> ArrayResult {
+    let mut first = None;
+    let mut outs = outs;
+    let mut start = 0;
+    while start < n {
+        let m = (n - start).min(FRAME_BLOCK);
+        let mut buf = [[T::zero(); FRAME_BLOCK]; P];
+        for (b, s) in buf.iter_mut().zip(inputs.iter()) {
+            load(b, s, start, m);
+        }
+        let mut res = [[T::zero(); FRAME_BLOCK]; O];
+        let mut ins = [true; FRAME_BLOCK];
+        for (k, ok) in ins.iter_mut().enumerate() {
+            let x = buf.each_ref().map(|b| lane(b, k));
+            let (v, inside) = fast(x);
+            for (r, vi) in res.iter_mut().zip(v) {
+                if let Some(slot) = r.get_mut(k) {
+                    *slot = vi;
+                }
+            }
+            *ok = inside;
+        }
+        let all_in = ins.iter().take(m).all(|&b| b);
+        for k in 0..m {
+            let v = finish(res.each_ref().map(|r| lane(r, k)));
+            for (o, vi) in outs.iter_mut().zip(v) {
+                if let Some(slot) = o.get_mut(start + k) {
+                    *slot = vi;
+                }
+            }
+        }
+        if !all_in {
+            for i in start..start + m {
+                let v = scalar(i).unwrap_or_else(|err| {
+                    note(&mut first, i, err);
+                    [T::nan(); O]
+                });
+                for (o, vi) in outs.iter_mut().zip(v) {
+                    if let Some(slot) = o.get_mut(i) {
+                        *slot = vi;
+                    }
+                }
+            }
+        }
+        start += m;
+    }
+    first.map_or(Ok(()), Err)
+}
+
+/// The surroundings and the path of a frame whose T_refl and T_path are shared, for the
+/// branch-free path: `None` (use the element loop) when they are per pixel or when evaluating
+/// them fails (the element loop then reports each pixel's error as the scalar function does).
+fn shared_scene<T: Real, Q: Quantity<T>>(q: &Q, tr: &[T], tp: &[T]) -> Option<[T; 4]> {
+    let (&[tr], &[tp]) = (tr, tp) else {
+        return None;
+    };
+    let a = Q::FIRST;
+    let tr = non_negative(tr, a + 2).ok()?;
+    let tp = non_negative(tp, a + 4).ok()?;
+    let (r, rd) = quantity_at(q, tr, a + 2, true).ok()?;
+    let (p, pd) = quantity_at(q, tp, a + 4, true).ok()?;
+    Some([r, rd, p, pd])
+}
+
+/// Whether ε or τ is in (0, 1] (false for NaN).
+#[inline(always)]
+fn is_fraction<T: Real>(x: T) -> bool {
+    (x > T::zero()) & (x <= T::one())
+}
+
+/// The object temperature of one pixel as straight-line code: T and whether the pixel is
+/// inside the common case, where T is the bits of [`solve`] through
+/// [`brightness_temperature_wavelength`].
+#[inline(always)]
+fn object_fast<T: Real>(k: &FrameConstants<T>, sc: &Scene<T>, signal: T) -> (T, T, bool) {
+    let l = corrected(sc, signal);
+    let (t, ok) = brightness_temperature_wavelength_fast(k.c2_over_l, k.a, l);
+    let valid = (signal.abs() <= T::max_value())
+        & is_fraction(sc.emissivity)
+        & is_fraction(sc.transmittance)
+        & (l >= T::min_positive_value())
+        & (l <= T::max_value());
+    (t, l, ok & valid)
+}
+
+/// T_obj and the sum of squares of u_c of one pixel as straight-line code (the operations of
+/// [`solve_with_uncertainty`], whose result is T and the square root of the sum), and whether
+/// the pixel is inside the common case.
+#[inline(always)]
+fn object_uncertainty_fast<T: Real>(
+    k: &FrameConstants<T>,
+    sc: &Scene<T>,
+    signal: T,
+    u: [T; 5],
+) -> ([T; 2], bool) {
+    let (t, l, ok_t) = object_fast(k, sc, signal);
+    let (e, tau) = (sc.emissivity, sc.transmittance);
+    let (_, dt, ok_d) = radiance_and_derivative_wavelength_fast(k.wavelength, t);
+    let d = tau * e * dt;
+    let inv = T::one() / d;
+    let c = [
+        inv,
+        -(tau * (l - sc.reflected)) * inv,
+        -(tau * (T::one() - e) * sc.reflected_derivative) * inv,
+        -((e * l + (T::one() - e) * sc.reflected) - sc.path) * inv,
+        -((T::one() - tau) * sc.path_derivative) * inv,
+    ];
+    let mut ss = T::zero();
+    let mut ok_c = true;
+    for (&ci, &ui) in c.iter().zip(u.iter()) {
+        let y = ci * ui;
+        ss = ss + y * y;
+        ok_c &= (ci.abs() <= T::max_value()) & (ui >= T::zero()) & (ui <= T::max_value());
+    }
+    let inside = ok_t & ok_d & (d >= T::min_positive_value()) & ok_c & sum_of_squares_is_safe(ss);
+    ([t, ss], inside)
+}
+
 #[allow(clippy::too_many_arguments)]
 fn object_array<T: Real, Q: Quantity<T>>(
     q: Result<Q>,
@@ -950,7 +1135,6 @@ fn object_array<T: Real, Q: Quantity<T>>(
         &mut [out],
         a + 5,
     )?;
-    let mut first = None;
     let q = match q {
         Ok(q) => q,
         Err(err) => {
@@ -966,14 +1150,32 @@ fn object_array<T: Real, Q: Quantity<T>>(
         }
     };
     let mut cache = SceneCache::new();
-    for (i, (&s, o)) in signals.iter().zip(out.iter_mut()).enumerate() {
+    let mut element = |i: usize| -> Result<[T; 1]> {
+        let s = signals.get(i).copied().unwrap_or(T::nan());
         let key = [pick(e, i), pick(tr, i), pick(tau, i), pick(tp, i)];
-        let r = finite(s, a).and_then(|s| {
-            let sc = cache.get(&q, key, false)?;
-            Ok(solve(&q, &sc, s)?.0)
-        });
-        match r {
-            Ok(t) => *o = t,
+        let s = finite(s, a)?;
+        let sc = cache.get(&q, key, false)?;
+        Ok([solve(&q, &sc, s)?.0])
+    };
+    if let (Some(k), Some([r, rd, p, pd])) = (q.frame_constants(), shared_scene(&q, tr, tp)) {
+        let fast = |[s, e, tau]: [T; 3]| {
+            let sc = Scene {
+                emissivity: e,
+                transmittance: tau,
+                reflected: r,
+                path: p,
+                reflected_derivative: rd,
+                path_derivative: pd,
+            };
+            let (t, _, inside) = object_fast(&k, &sc, s);
+            ([t], inside)
+        };
+        return frame_blocks(n, [signals, e, tau], [out], fast, |v| v, element);
+    }
+    let mut first = None;
+    for (i, o) in out.iter_mut().enumerate() {
+        match element(i) {
+            Ok([t]) => *o = t,
             Err(err) => {
                 *o = T::nan();
                 note(&mut first, i, err);
@@ -1027,14 +1229,9 @@ fn object_uncertainty_array<T: Real, Q: Quantity<T>>(
             };
         }
     };
-    let mut first = None;
     let mut cache = SceneCache::new();
-    for (i, ((&s, ot), ou)) in signals
-        .iter()
-        .zip(out_t.iter_mut())
-        .zip(out_u.iter_mut())
-        .enumerate()
-    {
+    let mut element = |i: usize| -> Result<[T; 2]> {
+        let s = signals.get(i).copied().unwrap_or(T::nan());
         let key = [pick(e, i), pick(tr, i), pick(tau, i), pick(tp, i)];
         let us = [
             pick(u0, i),
@@ -1043,15 +1240,39 @@ fn object_uncertainty_array<T: Real, Q: Quantity<T>>(
             pick(u3, i),
             pick(u4, i),
         ];
-        let r = finite(s, a).and_then(|s| {
-            let sc = cache.get(&q, key, true)?;
-            let us = check_uncertainties(a + 5, us)?;
-            solve_with_uncertainty(&q, &sc, s, us)
-        });
-        match r {
-            Ok(v) => {
-                *ot = v.temperature_k;
-                *ou = v.combined_standard_uncertainty_k;
+        let s = finite(s, a)?;
+        let sc = cache.get(&q, key, true)?;
+        let us = check_uncertainties(a + 5, us)?;
+        let v = solve_with_uncertainty(&q, &sc, s, us)?;
+        Ok([v.temperature_k, v.combined_standard_uncertainty_k])
+    };
+    if let (Some(k), Some([r, rd, p, pd])) = (q.frame_constants(), shared_scene(&q, tr, tp)) {
+        let fast = |[s, e, tau, v0, v1, v2, v3, v4]: [T; 8]| {
+            let sc = Scene {
+                emissivity: e,
+                transmittance: tau,
+                reflected: r,
+                path: p,
+                reflected_derivative: rd,
+                path_derivative: pd,
+            };
+            object_uncertainty_fast(&k, &sc, s, [v0, v1, v2, v3, v4])
+        };
+        return frame_blocks(
+            n,
+            [signals, e, tau, u0, u1, u2, u3, u4],
+            [out_t, out_u],
+            fast,
+            |[t, ss]| [t, ss.sqrt()],
+            element,
+        );
+    }
+    let mut first = None;
+    for (i, (ot, ou)) in out_t.iter_mut().zip(out_u.iter_mut()).enumerate() {
+        match element(i) {
+            Ok([t, uc]) => {
+                *ot = t;
+                *ou = uc;
             }
             Err(err) => {
                 *ot = T::nan();
@@ -1080,10 +1301,13 @@ fn object_uncertainty_array<T: Real, Q: Quantity<T>>(
 /// error. `LengthMismatch(i)` when a parameter slice has neither 1 nor n values or `out` is
 /// not of length n (then `out` is all NaN).
 ///
-/// Accuracy: that of [`object_temperature_wavelength`]. Method: an element loop; the
-/// radiances of the surroundings and the path are computed once for shared parameters (and
-/// reused while per-pixel parameters repeat), so the cost per pixel is one brightness
-/// temperature.
+/// Accuracy: that of [`object_temperature_wavelength`]. Method: when T_refl and T_path are
+/// shared (one value each), their radiances are computed once and the pixels go in blocks of
+/// 64 through a branch-free form of the scalar function's operations (the logarithm of
+/// [`crate::math::log`]), which the compiler vectorises; a block holding a pixel outside the
+/// common case (bad input, no temperature, a value that is not a normal number) is recomputed
+/// by the scalar function. Otherwise an element loop that reuses the radiances of the
+/// surroundings and the path while per-pixel parameters repeat.
 pub fn object_temperature_wavelength_array<T: Real>(
     wavelength_m: T,
     signals: &[T],
@@ -1167,7 +1391,9 @@ pub fn object_temperature_band_array<T: Real>(
 ///
 /// Returns and errors as [`object_temperature_wavelength_array`] (a failing element is NaN in
 /// both outputs). Accuracy: that of the scalar function. Method: as
-/// [`object_temperature_wavelength_array`]; per pixel one brightness temperature and one dB/dT.
+/// [`object_temperature_wavelength_array`] (blocks of 64 through a branch-free form when T_refl
+/// and T_path are shared, the square root of u_c taken while storing); per pixel one
+/// brightness temperature and one dB/dT.
 #[allow(clippy::too_many_arguments)]
 pub fn object_temperature_wavelength_with_uncertainty_array<T: Real>(
     wavelength_m: T,

@@ -20,6 +20,7 @@ use super::kernel::{
 use crate::array::blockwise;
 use crate::check::{finite_result, positive};
 use crate::constants as k;
+use crate::math::exp;
 use crate::{ArrayResult, Real, Result};
 
 /// Planck spectral radiance per unit wavelength, B_λ = 2hc²/λ⁵ / (e^(hc/λkT) − 1).
@@ -267,7 +268,9 @@ pub fn photon_radiance_wavenumber<T: Real>(wavenumber_per_m: T, temperature_k: T
 /// * `wavelength_m`: m, > 0; `temperature_k`: K, > 0.
 ///
 /// Returns W m⁻² sr⁻¹ m⁻¹ K⁻¹, ≥ 0. Errors as [`spectral_radiance_wavelength`].
-/// Accuracy: ≤ 8 ulp (`f64`, normal results) against mpmath (three roundings more than B_λ).
+/// Accuracy: ≤ 8 ulp (`f64`, normal results) against mpmath (five roundings more than B_λ).
+/// Method: B_λ·x(1 + E)/(T E) with E = e^x − 1, the one exponential B_λ needs (the
+/// overflow-safe form B_λ·(x/T)/(1 − e^−x) where an intermediate is not a normal number).
 pub fn radiance_temperature_derivative_wavelength<T: Real>(
     wavelength_m: T,
     temperature_k: T,
@@ -282,6 +285,51 @@ pub fn radiance_temperature_derivative_wavelength<T: Real>(
 
 #[inline(always)]
 pub(crate) fn radiance_temperature_derivative_wavelength_unchecked<T: Real>(l: T, t: T) -> T {
+    radiance_and_derivative_wavelength_unchecked(l, t).1
+}
+
+/// B_λ and ∂B_λ/∂T at one (λ, T) from one exponent and one e^x − 1: B_λ the bits of
+/// [`spectral_radiance_wavelength`], ∂B_λ/∂T those of
+/// [`radiance_temperature_derivative_wavelength`] (λ, T > 0 checked by the caller).
+#[inline(always)]
+pub(crate) fn radiance_and_derivative_wavelength_unchecked<T: Real>(l: T, t: T) -> (T, T) {
+    match radiance_and_derivative_wavelength_fast(l, t) {
+        (b, d, true) => (b, d),
+        _ => (
+            spectral_radiance_wavelength_unchecked(l, t),
+            derivative_wavelength_outside(l, t),
+        ),
+    }
+}
+
+/// The common case of [`radiance_and_derivative_wavelength_unchecked`] as straight-line code:
+/// with E = e^x − 1 (the one exponential), B = (2hc²/λ⁵)/E as in [`planck_ratio_fast`] and
+/// ∂B/∂T = B·x·(1 + E)/(T·E) (that is B (x/T) eˣ/(eˣ − 1), five roundings more than B), and
+/// whether every intermediate stays a normal number (x < ln MAX − 1); outside, garbage.
+#[inline(always)]
+pub(crate) fn radiance_and_derivative_wavelength_fast<T: Real>(l: T, t: T) -> (T, T, bool) {
+    let (xh, xl) = x_wavelength_pair(l, t);
+    let e = exp::exp_m1_nonnegative_in_range(xh, xl);
+    let den = pow5(l) * e;
+    let b = T::c(k::FIRST_RADIATION_RADIANCE) / den;
+    let te = t * e;
+    let num = (b * (xh + xl)) * (T::one() + e);
+    let d = num / te;
+    let normal = |v: T| (v >= T::min_positive_value()) & (v <= T::max_value());
+    let inside = (xh < T::LN_MAX - T::one())
+        & normal(den)
+        & normal(te)
+        & normal(b)
+        & normal(num)
+        & normal(d);
+    (b, d, inside)
+}
+
+/// ∂B_λ/∂T where [`radiance_and_derivative_wavelength_fast`] is outside its common case (the far
+/// Wien tail, results that are not normal numbers).
+#[cold]
+#[inline(never)]
+fn derivative_wavelength_outside<T: Real>(l: T, t: T) -> T {
     let (xh, xl) = x_wavelength(l, t);
     // fold x/(T(1 − e^−x)) into the prefactor so no intermediate underflows before the result
     let p = T::c(k::FIRST_RADIATION_RADIANCE) / pow5(l) * ((xh + xl) / one_minus_exp_neg(xh)) / t;

@@ -76,9 +76,33 @@ impl<T: Real> TemperatureUncertainty<T> {
     }
 }
 
-/// (Σ (cᵢuᵢ)²)^½ over the common length, scaled by the largest |cᵢuᵢ| so that no square
+/// (Σ (cᵢuᵢ)²)^½ over the common length: the plain sum where it is safe
+/// ([`sum_of_squares_is_safe`]), otherwise scaled by the largest |cᵢuᵢ| so that no square
 /// overflows or underflows early (in `f32` the products span many decades).
 fn root_sum_of_squares<T: Real>(c: &[T], u: &[T], result_arg: u8) -> Result<T> {
+    let mut s = T::zero();
+    for (&ci, &ui) in c.iter().zip(u.iter()) {
+        let y = ci * ui;
+        s = s + y * y;
+    }
+    if sum_of_squares_is_safe(s) {
+        return Ok(s.sqrt());
+    }
+    root_sum_of_squares_scaled(c, u, result_arg)
+}
+
+/// Whether the plain sum of squares s = Σ (cᵢuᵢ)² (in order) may be used as it is: no term
+/// overflowed and a term that underflowed lies below ε·s (s ≥ MIN/ε). Then √s is u_c with the
+/// roundings of the n products, n squares and n − 1 additions and the square root only.
+#[inline(always)]
+pub(crate) fn sum_of_squares_is_safe<T: Real>(s: T) -> bool {
+    (s >= T::min_positive_value() / T::epsilon()) & (s <= T::max_value())
+}
+
+/// u_c by squares scaled by the largest |cᵢuᵢ| (no overflow or underflow of the squares).
+#[cold]
+#[inline(never)]
+fn root_sum_of_squares_scaled<T: Real>(c: &[T], u: &[T], result_arg: u8) -> Result<T> {
     let mut m = T::zero();
     for (&ci, &ui) in c.iter().zip(u.iter()) {
         m = m.max((ci * ui).abs());
