@@ -2,7 +2,10 @@
 # The relicore demo (`make demo`): INVENTED scenarios computed by the same core from Rust, C,
 # Fortran and Python, each language reading the same invented input file:
 #   part 1: the fictional Glimmerfen Ridge Observatory's balloon radiometer and a fictional
-#           handheld infrared thermometer (examples/data/invented_radiometer.txt);
+#           handheld infrared thermometer (examples/data/invented_radiometer.txt), and its
+#           workshop seen by a fictional thermal camera: an invented 640 x 480 thermal scene
+#           turned into object-temperature and uncertainty images in all four languages,
+#           compared byte for byte (examples/data/invented_thermal_scene.txt);
 #   part 2: the fictional Quillmere Deep Field Survey: a distance-redshift table of the demo
 #           universe in all four languages, and a catalogue of 100,000 invented galaxies turned
 #           into distances and ages in Python (examples/data/invented_catalogue.txt);
@@ -19,38 +22,45 @@ PY=${PY:-.venv/bin/python}
 CC=${CC:-cc}
 FC=${FC:-gfortran}
 INPUT=examples/data/invented_radiometer.txt
+SCENE=examples/data/invented_thermal_scene.txt
 CATALOGUE=examples/data/invented_catalogue.txt
 SIMULATION=examples/data/invented_simulation.txt
 BUILD=build/demo
+# cargo's target directory (CARGO_TARGET_DIR when set, as for an engineer's own target dir)
+TARGET=${CARGO_TARGET_DIR:-target}
 OUT=examples/out
 mkdir -p "$BUILD" "$OUT"
 
 echo "relicore demo -- every number below comes from INVENTED data for a FICTIONAL observatory,"
-echo "a FICTIONAL galaxy survey and a FICTIONAL simulation code (inputs: $INPUT, $CATALOGUE,"
-echo "$SIMULATION)"
+echo "a FICTIONAL galaxy survey and a FICTIONAL simulation code (inputs: $INPUT, $SCENE,"
+echo "$CATALOGUE, $SIMULATION)"
 echo
 
 echo "== building: Rust example, C static library, C and Fortran programs"
-cargo build --quiet --release --example radiometer_demo --example catalogue_table \
-  --example simulation_start
+cargo build --quiet --release --example radiometer_demo --example thermal_scene \
+  --example catalogue_table --example simulation_start
 cargo build --quiet -p relicore-capi --profile release-c
 "$CC" -std=c11 -O2 -Wall -Wextra -Wpedantic -Werror -Iinclude examples/c/radiometer_demo.c \
-  target/release-c/librelicore.a -lm -o "$BUILD/radiometer_demo_c"
+  "$TARGET/release-c/librelicore.a" -lm -o "$BUILD/radiometer_demo_c"
 "$FC" -std=f2018 -O2 -c bindings/fortran/relicore.f90 -J"$BUILD" -o "$BUILD/relicore.o"
 "$FC" -std=f2018 -O2 -Wall -Wextra -Werror -I"$BUILD" examples/fortran/radiometer_demo.f90 \
-  "$BUILD/relicore.o" target/release-c/librelicore.a -lm -o "$BUILD/radiometer_demo_f"
+  "$BUILD/relicore.o" "$TARGET/release-c/librelicore.a" -lm -o "$BUILD/radiometer_demo_f"
+"$CC" -std=c11 -O2 -Wall -Wextra -Wpedantic -Werror -Iinclude examples/c/thermal_scene.c \
+  "$TARGET/release-c/librelicore.a" -lm -o "$BUILD/thermal_scene_c"
+"$FC" -std=f2018 -O2 -Wall -Wextra -Werror -I"$BUILD" examples/fortran/thermal_scene.f90 \
+  "$BUILD/relicore.o" "$TARGET/release-c/librelicore.a" -lm -o "$BUILD/thermal_scene_f"
 "$CC" -std=c11 -O2 -Wall -Wextra -Wpedantic -Werror -Iinclude examples/c/catalogue_table.c \
-  target/release-c/librelicore.a -lm -o "$BUILD/catalogue_table_c"
+  "$TARGET/release-c/librelicore.a" -lm -o "$BUILD/catalogue_table_c"
 "$FC" -std=f2018 -O2 -Wall -Wextra -Werror -I"$BUILD" examples/fortran/catalogue_table.f90 \
-  "$BUILD/relicore.o" target/release-c/librelicore.a -lm -o "$BUILD/catalogue_table_f"
+  "$BUILD/relicore.o" "$TARGET/release-c/librelicore.a" -lm -o "$BUILD/catalogue_table_f"
 "$CC" -std=c11 -O2 -Wall -Wextra -Wpedantic -Werror -Iinclude examples/c/simulation_start.c \
-  target/release-c/librelicore.a -lm -o "$BUILD/simulation_start_c"
+  "$TARGET/release-c/librelicore.a" -lm -o "$BUILD/simulation_start_c"
 # -J: the program's own module (its state) goes to $BUILD too, not to the working directory
 "$FC" -std=f2018 -O2 -Wall -Wextra -Werror -I"$BUILD" -J"$BUILD" examples/fortran/simulation_start.f90 \
-  "$BUILD/relicore.o" target/release-c/librelicore.a -lm -o "$BUILD/simulation_start_f"
+  "$BUILD/relicore.o" "$TARGET/release-c/librelicore.a" -lm -o "$BUILD/simulation_start_f"
 
 echo "== part 1: running the four radiometer programs on the same invented inputs"
-target/release/examples/radiometer_demo "$INPUT" >"$OUT/rust.txt"
+"$TARGET"/release/examples/radiometer_demo "$INPUT" >"$OUT/rust.txt"
 "$BUILD/radiometer_demo_c" "$INPUT" >"$OUT/c.txt"
 "$BUILD/radiometer_demo_f" "$INPUT" >"$OUT/fortran.txt"
 "$PY" examples/python/radiometer_demo.py "$INPUT" >"$OUT/python.txt"
@@ -81,9 +91,52 @@ echo "== plots"
 "$PY" examples/python/plot_demo.py "$INPUT" "$OUT"
 echo
 
+echo "== part 1b: the fictional workshop's INVENTED thermal scene, 640 x 480, in all four languages"
+"$TARGET"/release/examples/thermal_scene "$SCENE" "$OUT/thermal_rust" >"$OUT/thermal_rust.txt"
+"$BUILD/thermal_scene_c" "$SCENE" "$OUT/thermal_c" >"$OUT/thermal_c.txt"
+"$BUILD/thermal_scene_f" "$SCENE" "$OUT/thermal_fortran" >"$OUT/thermal_fortran.txt"
+"$PY" examples/python/thermal_scene.py "$SCENE" "$OUT/thermal_python" >"$OUT/thermal_python.txt"
+for lang in rust c fortran python; do
+  echo "   $lang: $(grep -c ' = ' "$OUT/thermal_$lang.txt") quantities -> $OUT/thermal_$lang.txt;" \
+    "images $OUT/thermal_${lang}_{signal,temperature,uncertainty}.f64"
+done
+echo
+
+cat <<'EOF'
+== what the quantities are (an invented scene: a painted wall, a painted panel with a cold can,
+   a bare aluminium plate, an oxidised steel bar, a water-like tray and a skin-like patch,
+   reflecting a warm room at 303 K, seen at 10 um through an infrared window, tau = 0.85)
+   region_K_pixels       how many pixels each surface covers (0 = the wall)
+   frame_*               the frame of signals from the forward measurement equation, and the
+                         object-temperature and u_c images the frame function made of it; the
+                         largest |T_obj - T_scene| (the signals are noise-free)
+   probe_N_*             at one pixel of each surface, the scalar call's full result: signal,
+                         T_obj, u_c and the five sensitivity coefficients dT/d(signal, emissivity,
+                         T_refl, tau, T_window) (checked to have the frame pixel's bits)
+   u_c is JCGM 100:2008 eq. 10 of the stated (invented) input uncertainties of the scene file
+   only; it does not cover the emissivity model or the camera
+
+EOF
+echo "== the four languages side by side"
+"$PY" examples/python/compare_outputs.py \
+  Rust="$OUT/thermal_rust.txt" C="$OUT/thermal_c.txt" Fortran="$OUT/thermal_fortran.txt" \
+  Python="$OUT/thermal_python.txt"
+echo
+echo "== the three images, byte for byte (raw little-endian float64, row-major, 640 x 480)"
+for kind in signal temperature uncertainty; do
+  "$PY" examples/python/compare_outputs.py --raw-f64 "   $kind image" \
+    Rust="$OUT/thermal_rust_$kind.f64" C="$OUT/thermal_c_$kind.f64" \
+    Fortran="$OUT/thermal_fortran_$kind.f64" Python="$OUT/thermal_python_$kind.f64"
+done
+echo
+
+echo "== plots of the thermal scene"
+"$PY" examples/python/plot_thermal_scene.py "$SCENE" "$OUT" "$OUT/thermal_python"
+echo
+
 echo "== part 2: the fictional Quillmere Deep Field Survey"
 echo "== running the four distance-redshift table programs on the same invented inputs"
-target/release/examples/catalogue_table "$CATALOGUE" >"$OUT/cosmology_rust.txt"
+"$TARGET"/release/examples/catalogue_table "$CATALOGUE" >"$OUT/cosmology_rust.txt"
 "$BUILD/catalogue_table_c" "$CATALOGUE" >"$OUT/cosmology_c.txt"
 "$BUILD/catalogue_table_f" "$CATALOGUE" >"$OUT/cosmology_fortran.txt"
 "$PY" examples/python/catalogue_table.py "$CATALOGUE" >"$OUT/cosmology_python.txt"
@@ -115,7 +168,7 @@ echo
 
 echo "== part 3: the fictional toy simulation code Wrenfold"
 echo "== running the four simulation_start programs on the same invented inputs"
-target/release/examples/simulation_start "$SIMULATION" >"$OUT/simulation_rust.txt"
+"$TARGET"/release/examples/simulation_start "$SIMULATION" >"$OUT/simulation_rust.txt"
 "$BUILD/simulation_start_c" "$SIMULATION" >"$OUT/simulation_c.txt"
 "$BUILD/simulation_start_f" "$SIMULATION" >"$OUT/simulation_fortran.txt"
 "$PY" examples/python/simulation_start.py "$SIMULATION" >"$OUT/simulation_python.txt"

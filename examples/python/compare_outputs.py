@@ -2,12 +2,18 @@
 """Compares what the four demo programs printed and says how far they agree.
 
 Usage: compare_outputs.py rust=FILE c=FILE fortran=FILE python=FILE
+       compare_outputs.py --raw-f64 LABEL rust=FILE c=FILE fortran=FILE python=FILE
 
 Each file holds one program's output: comment lines starting with '#' and result lines
 ``key = value`` (17 significant digits, so the decimal text identifies the double exactly).
 Prints one table row per quantity with its value and how far the languages differ (in units in
 the last place of the first language's value), then the largest difference. Exits 1 when a
 program printed a different set of keys or a value that is not a number; a numerical
+difference is reported, not treated as a failure.
+
+With --raw-f64 the files are images written as raw little-endian float64 (the thermal scene):
+they are compared byte for byte, and where they differ value by value (how many values differ
+and by how many ulp at most). Exits 1 when the files differ in size or hold NaN; a numerical
 difference is reported, not treated as a failure.
 """
 
@@ -51,7 +57,59 @@ def ulp_distance(a: float, b: float) -> int | None:
     return abs(ordered_bits(a) - ordered_bits(b))
 
 
+def compare_raw_f64(label: str, sources: list[tuple[str, Path]]) -> int:
+    """Compares images of raw little-endian float64 byte for byte (and value by value where they
+    differ); prints one summary line per image."""
+    import hashlib
+
+    import numpy as np
+
+    names = [name for name, _ in sources]
+    data = {name: path.read_bytes() for name, path in sources}
+    sizes = {name: len(b) for name, b in data.items()}
+    if len(set(sizes.values())) != 1 or next(iter(sizes.values())) % 8:
+        print(f"{label}: FILE SIZES DIFFER or are not whole float64 values: {sizes}")
+        return 1
+    ref_name = names[0]
+    ref = np.frombuffer(data[ref_name], dtype="<f8")
+    status = 0
+    nans = {name: int(np.isnan(np.frombuffer(b, dtype="<f8")).sum()) for name, b in data.items()}
+    if any(nans.values()):
+        print(f"{label}: NaN values in the image: {nans}")
+        status = 1
+    langs = ", ".join(names)
+    if all(data[name] == data[ref_name] for name in names[1:]):
+        digest = hashlib.sha256(data[ref_name]).hexdigest()[:16]
+        print(f"{label}: {ref.size} values ({sizes[ref_name]} bytes), byte-identical in {langs} "
+              f"(sha256 {digest}...)")
+        return status
+    worst = []
+    for name in names[1:]:
+        other = np.frombuffer(data[name], dtype="<f8")
+        a, b = ref.view("<i8"), other.view("<i8")
+        # ordered bit patterns: their difference is the distance in ulp, across zero too
+        oa = np.where(a >= 0, a, -(a & 0x7FFF_FFFF_FFFF_FFFF))
+        ob = np.where(b >= 0, b, -(b & 0x7FFF_FFFF_FFFF_FFFF))
+        ulp = np.abs(oa - ob)
+        differing = int(np.count_nonzero(ulp))
+        worst.append(f"{name}: {differing} of {ref.size} values differ from {ref_name}, "
+                     f"at most {int(ulp.max())} ulp")
+    print(f"{label}: the languages do NOT agree bit for bit: " + "; ".join(worst))
+    return status
+
+
 def main(argv: list[str]) -> int:
+    if len(argv) > 2 and argv[1] == "--raw-f64":
+        label = argv[2]
+        raw: list[tuple[str, Path]] = []
+        for arg in argv[3:]:
+            name, _, file = arg.partition("=")
+            if not file:
+                raise SystemExit(__doc__)
+            raw.append((name, Path(file)))
+        if len(raw) < 2:
+            raise SystemExit(__doc__)
+        return compare_raw_f64(label, raw)
     sources: list[tuple[str, Path]] = []
     for arg in argv[1:]:
         name, _, file = arg.partition("=")
