@@ -870,13 +870,13 @@ fn regular(c: &mut Criterion) {
     });
     g.bench_function("leapfrog_drift_factor_gyr", |b| {
         b.iter(|| {
-            let r = &u;
+            let r = &*gr;
             r.leapfrog_drift_factor_gyr(black_box(0.01_f64), black_box(0.0101_f64))
         })
     });
     g.bench_function("leapfrog_kick_factor_gyr", |b| {
         b.iter(|| {
-            let r = &u;
+            let r = &*gr;
             r.leapfrog_kick_factor_gyr(black_box(0.01_f64), black_box(0.0101_f64))
         })
     });

@@ -1,7 +1,7 @@
 //! Criterion benches of structure growth: construction of a growth table and of a power
 //! spectrum (σ8 included), every query at one argument, the array forms over 1000 inputs, σ(R),
 //! the transfer functions, the BAO ratios and the leapfrog factors of one step. The speed
-//! targets of issue 11 compare with scipy/numpy recipes in `benches/compare/`.
+//! targets compare with scipy/numpy recipes in `benches/compare/`.
 
 use criterion::{Criterion, criterion_group, criterion_main};
 use relicore::cosmology::{Universe, UniverseParameters};

@@ -1,4 +1,4 @@
-//! Criterion benches of the radiation-thermometry functions (issue 12): one object temperature
+//! Criterion benches of the radiation-thermometry functions: one object temperature
 //! with its uncertainty (the firmware case, f32 and f64), the band and response forms, and a
 //! 1000 × 1000 frame of signals to object temperature and u_c, with shared and with per-pixel
 //! emissivity, in f32 and f64. Speed targets live here, never in timed tests.

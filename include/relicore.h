@@ -370,17 +370,18 @@
 #define RELICORE_THERMAL_HISTORY_STORAGE_WORDS 20480
 
 /**
- * Number of 8-byte words of storage in `struct relicore_linear_growth` (81920 bytes; the core
- * growth, 376 pieces of 10 coefficients for D_u and for f and a copy of the universe, takes
- * 74744 bytes of them, the rest is room to grow without changing the size of the struct).
+ * Number of 8-byte words of storage in `struct relicore_linear_growth` (131072 bytes; the core
+ * growth — 376 pieces of 10 coefficients for D_u and for f, 160 pieces of 10 coefficients and
+ * a total for each of the two leapfrog integrands, and a copy of the universe — takes 102904
+ * bytes of them, the rest is room to grow without changing the size of the struct).
  */
-#define RELICORE_LINEAR_GROWTH_STORAGE_WORDS 10240
+#define RELICORE_LINEAR_GROWTH_STORAGE_WORDS 16384
 
 /**
- * Number of 8-byte words of storage in `struct relicore_linear_power_spectrum` (81920 bytes;
- * the core spectrum, a copy of the growth included, takes 74928 bytes of them).
+ * Number of 8-byte words of storage in `struct relicore_linear_power_spectrum` (131072 bytes;
+ * the core spectrum, a copy of the growth included, takes 103088 bytes of them).
  */
-#define RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS 10240
+#define RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS 16384
 
 /**
  * `transfer_form` of the options: the Eisenstein & Hu 1998 fitting formula with baryon
@@ -639,7 +640,7 @@ struct relicore_thermal_history {
  * `const struct relicore_linear_growth *`. It keeps its own copy of the universe.
  *
  * Caller-owned and fixed-size: `sizeof(struct relicore_linear_growth)` = 8 + 8 ×
- * `RELICORE_LINEAR_GROWTH_STORAGE_WORDS` = 81928 bytes, aligned like `uint64_t`. That is large
+ * `RELICORE_LINEAR_GROWTH_STORAGE_WORDS` = 131080 bytes, aligned like `uint64_t`. That is large
  * for a small thread stack: put it in static storage, inside your own structs, or allocate it;
  * there is nothing to free besides your own allocation. A plain value: it may be copied
  * (memcpy, assignment) and read by any number of threads at once. Its fields are private to
@@ -696,7 +697,7 @@ struct relicore_linear_power_spectrum_options {
  * relicore_linear_power_spectrum *`. It keeps its own copy of the growth.
  *
  * Caller-owned and fixed-size: `sizeof(struct relicore_linear_power_spectrum)` = 8 + 8 ×
- * `RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS` = 81928 bytes, aligned like `uint64_t`; the
+ * `RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS` = 131080 bytes, aligned like `uint64_t`; the
  * same rules as `struct relicore_linear_growth` (keep it off small stacks, copyable, readable
  * from many threads, refused with `RELICORE_ERROR_INVALID_STRUCT` unless filled).
  */
@@ -6727,9 +6728,10 @@ int32_t relicore_volume_averaged_distance_over_sound_horizon_array(const struct 
  * Errors: `NonFinite(i)`, `NonPositive(i)`, `OutOfDomain(i)` above 1 (the universe is
  * validated up to today only); `OutOfDomain(0)` when the integral is not representable.
  * Accuracy: within 1e-12 relative (`f64`) of an mpmath quadrature (`tests/data/growth.txt`).
+ * Cost: tens of nanoseconds on the table (a ≥ 2⁻²⁰), a quadrature below.
  *
  * Arguments of the C function:
- * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `growth`: a `struct relicore_linear_growth` filled by `relicore_linear_growth_compute`.
  * * `start_scale_factor`: scale factor a1 at the start of the step, > 0 and <= 1.
  * * `end_scale_factor`: scale factor a2 at its end, > 0 and <= 1.
  * * `out`: where the result is written: int da/(a^3 H) from a1 to a2 in Gyr.
@@ -6737,24 +6739,24 @@ int32_t relicore_volume_averaged_distance_over_sound_horizon_array(const struct 
  * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
  * errors named above as status codes (`relicore_status_message` gives the text);
  * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
- * `*universe` was not filled by a successful `relicore_universe_init`.
+ * `*growth` was not filled by a successful `relicore_linear_growth_compute`.
  *
  * # Safety
- * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
- * to a readable `struct relicore_universe`.
+ * `out` is NULL or points to a writable `double` outside `*growth`. `growth` is NULL or points to
+ * a readable `struct relicore_linear_growth`.
  */
-int32_t relicore_leapfrog_drift_factor_gyr(const struct relicore_universe *universe,
+int32_t relicore_leapfrog_drift_factor_gyr(const struct relicore_linear_growth *growth,
                                            double start_scale_factor,
                                            double end_scale_factor,
                                            double *out);
 
 /**
  * Kick factor of a comoving leapfrog step, ∫_{a1}^{a2} da/(a²H), Gyr (Quinn, Katz, Stadel
- * & Lake 1997): the time a kick multiplies the comoving force by. Arguments, errors and
- * accuracy as `leapfrog_drift_factor_gyr`.
+ * & Lake 1997): the time a kick multiplies the comoving force by. Arguments, errors,
+ * accuracy and cost as `leapfrog_drift_factor_gyr`.
  *
  * Arguments of the C function:
- * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
+ * * `growth`: a `struct relicore_linear_growth` filled by `relicore_linear_growth_compute`.
  * * `start_scale_factor`: scale factor a1 at the start of the step, > 0 and <= 1.
  * * `end_scale_factor`: scale factor a2 at its end, > 0 and <= 1.
  * * `out`: where the result is written: int da/(a^2 H) from a1 to a2 in Gyr.
@@ -6762,13 +6764,13 @@ int32_t relicore_leapfrog_drift_factor_gyr(const struct relicore_universe *unive
  * Returns `RELICORE_OK`, or a negative `RELICORE_ERROR_*` code with `*out` set to NaN: the core's
  * errors named above as status codes (`relicore_status_message` gives the text);
  * `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL. `RELICORE_ERROR_INVALID_STRUCT` when
- * `*universe` was not filled by a successful `relicore_universe_init`.
+ * `*growth` was not filled by a successful `relicore_linear_growth_compute`.
  *
  * # Safety
- * `out` is NULL or points to a writable `double` outside `*universe`. `universe` is NULL or points
- * to a readable `struct relicore_universe`.
+ * `out` is NULL or points to a writable `double` outside `*growth`. `growth` is NULL or points to
+ * a readable `struct relicore_linear_growth`.
  */
-int32_t relicore_leapfrog_kick_factor_gyr(const struct relicore_universe *universe,
+int32_t relicore_leapfrog_kick_factor_gyr(const struct relicore_linear_growth *growth,
                                           double start_scale_factor,
                                           double end_scale_factor,
                                           double *out);

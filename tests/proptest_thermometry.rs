@@ -1,4 +1,4 @@
-//! Property tests of the radiation-thermometry functions (issue 12).
+//! Property tests of the radiation-thermometry functions.
 //!
 //! Part 1, robustness: the measurement-equation functions, in `f64` and `f32`, with arbitrary
 //! inputs (NaN, ±∞, ±0, subnormals, the largest floats, raw bit patterns, every scale) return

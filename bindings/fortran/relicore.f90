@@ -59,7 +59,7 @@
 !       xe = relicore_ionized_fraction(history, z)               ! elemental in z
 !       zstar = relicore_last_scattering_redshift(history)
 !   It keeps its own copy of the universe. Units: K, years, Mpc, Mpc-1 as the names say.
-! * Growth: a type(relicore_linear_growth) and a type(relicore_linear_power_spectrum) of 81928
+! * Growth: a type(relicore_linear_growth) and a type(relicore_linear_power_spectrum) of 131080
 !   bytes each (keep them in a module, a derived type or an allocatable, not as local variables
 !   of a small stack), computed once with
 !       call relicore_linear_growth_compute(universe, growth, stat)
@@ -68,7 +68,7 @@
 !       call relicore_linear_power_spectrum_compute(growth, options, spectrum, stat)
 !   and passed first to their queries: d = relicore_growth_factor(growth, z),
 !   pk = relicore_linear_power_spectrum_mpc3(spectrum, k, z), s = relicore_sigma8(spectrum).
-!   The BAO distances and leapfrog factors take the universe first. Units: k in Mpc-1, R in
+!   The BAO distances take the universe first, the leapfrog factors the growth. Units: k in Mpc-1, R in
 !   Mpc, P in Mpc3 (no hidden h), times in Gyr.
 ! * relicore_status_message(code) and relicore_version() return allocatable strings.
 ! * Nothing here allocates on the C side, keeps state or is thread-unsafe.
@@ -315,9 +315,9 @@ module relicore
   ! Words of storage in type(relicore_thermal_history) (struct relicore_thermal_history).
   integer(c_int32_t), parameter, public :: RELICORE_THERMAL_HISTORY_STORAGE_WORDS = 20480_c_int32_t
   ! Words of storage in type(relicore_linear_growth) and type(relicore_linear_power_spectrum).
-  integer(c_int32_t), parameter, public :: RELICORE_LINEAR_GROWTH_STORAGE_WORDS = 10240_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_LINEAR_GROWTH_STORAGE_WORDS = 16384_c_int32_t
   integer(c_int32_t), parameter, public :: &
-      RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS = 10240_c_int32_t
+      RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS = 16384_c_int32_t
   ! The switches of type(relicore_linear_power_spectrum_options).
   integer(c_int32_t), parameter, public :: RELICORE_TRANSFER_BARYON_OSCILLATIONS = 0_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_TRANSFER_NO_WIGGLE = 1_c_int32_t
@@ -743,7 +743,7 @@ module relicore
   !     uint64_t storage[RELICORE_LINEAR_GROWTH_STORAGE_WORDS]; };
   ! A computed linear growth of one universe (D_u and f on a table in the scale factor, with a
   ! copy of the universe), built by relicore_linear_growth_compute and passed to its queries. A
-  ! plain value of 81928 bytes owned by the caller: keep it in a module, a derived type or an
+  ! plain value of 131080 bytes owned by the caller: keep it in a module, a derived type or an
   ! allocatable rather than as a local variable on a small stack; copy it by assignment; read it
   ! from any number of threads. The tag starts at 0: a growth never computed (or whose compute
   ! failed) is refused with RELICORE_ERROR_INVALID_STRUCT.
@@ -772,7 +772,7 @@ module relicore
   !     uint64_t storage[RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS]; };
   ! A computed linear matter power spectrum (a copy of its growth, the Eisenstein & Hu 1998
   ! transfer function, the primordial spectrum and sigma8), built by
-  ! relicore_linear_power_spectrum_compute. A plain value of 81928 bytes: the same rules as
+  ! relicore_linear_power_spectrum_compute. A plain value of 131080 bytes: the same rules as
   ! type(relicore_linear_growth).
   type, bind(C), public :: relicore_linear_power_spectrum
     integer(c_int64_t) :: tag = 0_c_int64_t                                        ! private
@@ -2850,23 +2850,23 @@ module relicore
       real(c_double), intent(out) :: out(*)
       integer(c_int32_t) :: status
     end function c_volume_averaged_distance_over_sound_horizon_array
-    ! int32_t relicore_leapfrog_drift_factor_gyr(const struct relicore_universe *universe, double
+    ! int32_t relicore_leapfrog_drift_factor_gyr(const struct relicore_linear_growth *growth, double
     !     start_scale_factor, double end_scale_factor, double *out);
-    function c_leapfrog_drift_factor_gyr(universe, start_scale_factor, end_scale_factor, out) &
+    function c_leapfrog_drift_factor_gyr(growth, start_scale_factor, end_scale_factor, out) &
         bind(C, name='relicore_leapfrog_drift_factor_gyr') result(status)
-      import :: c_double, c_int32_t, relicore_universe
-      type(relicore_universe), intent(in) :: universe
+      import :: c_double, c_int32_t, relicore_linear_growth
+      type(relicore_linear_growth), intent(in) :: growth
       real(c_double), value :: start_scale_factor
       real(c_double), value :: end_scale_factor
       real(c_double), intent(out) :: out
       integer(c_int32_t) :: status
     end function c_leapfrog_drift_factor_gyr
-    ! int32_t relicore_leapfrog_kick_factor_gyr(const struct relicore_universe *universe, double
+    ! int32_t relicore_leapfrog_kick_factor_gyr(const struct relicore_linear_growth *growth, double
     !     start_scale_factor, double end_scale_factor, double *out);
-    function c_leapfrog_kick_factor_gyr(universe, start_scale_factor, end_scale_factor, out) &
+    function c_leapfrog_kick_factor_gyr(growth, start_scale_factor, end_scale_factor, out) &
         bind(C, name='relicore_leapfrog_kick_factor_gyr') result(status)
-      import :: c_double, c_int32_t, relicore_universe
-      type(relicore_universe), intent(in) :: universe
+      import :: c_double, c_int32_t, relicore_linear_growth
+      type(relicore_linear_growth), intent(in) :: growth
       real(c_double), value :: start_scale_factor
       real(c_double), value :: end_scale_factor
       real(c_double), intent(out) :: out
@@ -8097,57 +8097,57 @@ contains
 
   ! Drift factor of a comoving leapfrog step, int_{a1}^{a2} da/(a^3H), Gyr (Quinn, Katz, Stadel &
   ! Lake 1997): the time a drift multiplies the canonical momentum p = a^2dx/dt by.
-  !   universe: from relicore_universe_init
+  !   growth: from relicore_linear_growth_compute
   !   start_scale_factor: scale factor a1 at the start of the step, > 0 and <= 1
   !   end_scale_factor: scale factor a2 at its end, > 0 and <= 1
   ! Result: int da/(a^3 H) from a1 to a2 in Gyr.
   ! Forms: relicore_leapfrog_drift_factor_gyr, relicore_leapfrog_drift_factor_gyr_s.
-  impure elemental function relicore_leapfrog_drift_factor_gyr(universe, start_scale_factor, &
+  impure elemental function relicore_leapfrog_drift_factor_gyr(growth, start_scale_factor, &
       end_scale_factor) result(res)
-    type(relicore_universe), intent(in) :: universe
+    type(relicore_linear_growth), intent(in) :: growth
     real(c_double), intent(in) :: start_scale_factor, end_scale_factor
     real(c_double) :: res
-    if (c_leapfrog_drift_factor_gyr(universe, start_scale_factor, end_scale_factor, &
+    if (c_leapfrog_drift_factor_gyr(growth, start_scale_factor, end_scale_factor, &
         res) /= RELICORE_OK) res = nan64()
   end function relicore_leapfrog_drift_factor_gyr
 
-  impure elemental subroutine relicore_leapfrog_drift_factor_gyr_s(universe, start_scale_factor, &
+  impure elemental subroutine relicore_leapfrog_drift_factor_gyr_s(growth, start_scale_factor, &
       end_scale_factor, out, stat)
-    type(relicore_universe), intent(in) :: universe
+    type(relicore_linear_growth), intent(in) :: growth
     real(c_double), intent(in) :: start_scale_factor, end_scale_factor
     real(c_double), intent(out) :: out
     integer(c_int32_t), intent(out), optional :: stat
     integer(c_int32_t) :: code
-    code = c_leapfrog_drift_factor_gyr(universe, start_scale_factor, end_scale_factor, out)
+    code = c_leapfrog_drift_factor_gyr(growth, start_scale_factor, end_scale_factor, out)
     if (code /= RELICORE_OK) out = nan64()
     call report(code, 'relicore_leapfrog_drift_factor_gyr', stat)
   end subroutine relicore_leapfrog_drift_factor_gyr_s
 
   ! Kick factor of a comoving leapfrog step, int_{a1}^{a2} da/(a^2H), Gyr (Quinn, Katz, Stadel &
-  ! Lake 1997): the time a kick multiplies the comoving force by. Arguments, errors and accuracy as
-  ! `leapfrog_drift_factor_gyr`.
-  !   universe: from relicore_universe_init
+  ! Lake 1997): the time a kick multiplies the comoving force by. Arguments, errors, accuracy and
+  ! cost as `leapfrog_drift_factor_gyr`.
+  !   growth: from relicore_linear_growth_compute
   !   start_scale_factor: scale factor a1 at the start of the step, > 0 and <= 1
   !   end_scale_factor: scale factor a2 at its end, > 0 and <= 1
   ! Result: int da/(a^2 H) from a1 to a2 in Gyr.
   ! Forms: relicore_leapfrog_kick_factor_gyr, relicore_leapfrog_kick_factor_gyr_s.
-  impure elemental function relicore_leapfrog_kick_factor_gyr(universe, start_scale_factor, &
+  impure elemental function relicore_leapfrog_kick_factor_gyr(growth, start_scale_factor, &
       end_scale_factor) result(res)
-    type(relicore_universe), intent(in) :: universe
+    type(relicore_linear_growth), intent(in) :: growth
     real(c_double), intent(in) :: start_scale_factor, end_scale_factor
     real(c_double) :: res
-    if (c_leapfrog_kick_factor_gyr(universe, start_scale_factor, end_scale_factor, &
+    if (c_leapfrog_kick_factor_gyr(growth, start_scale_factor, end_scale_factor, &
         res) /= RELICORE_OK) res = nan64()
   end function relicore_leapfrog_kick_factor_gyr
 
-  impure elemental subroutine relicore_leapfrog_kick_factor_gyr_s(universe, start_scale_factor, &
+  impure elemental subroutine relicore_leapfrog_kick_factor_gyr_s(growth, start_scale_factor, &
       end_scale_factor, out, stat)
-    type(relicore_universe), intent(in) :: universe
+    type(relicore_linear_growth), intent(in) :: growth
     real(c_double), intent(in) :: start_scale_factor, end_scale_factor
     real(c_double), intent(out) :: out
     integer(c_int32_t), intent(out), optional :: stat
     integer(c_int32_t) :: code
-    code = c_leapfrog_kick_factor_gyr(universe, start_scale_factor, end_scale_factor, out)
+    code = c_leapfrog_kick_factor_gyr(growth, start_scale_factor, end_scale_factor, out)
     if (code /= RELICORE_OK) out = nan64()
     call report(code, 'relicore_leapfrog_kick_factor_gyr', stat)
   end subroutine relicore_leapfrog_kick_factor_gyr_s

@@ -64,7 +64,7 @@
 !       xe = relicore_ionized_fraction(history, z)               ! elemental in z
 !       zstar = relicore_last_scattering_redshift(history)
 !   It keeps its own copy of the universe. Units: K, years, Mpc, Mpc-1 as the names say.
-! * Growth: a type(relicore_linear_growth) and a type(relicore_linear_power_spectrum) of 81928
+! * Growth: a type(relicore_linear_growth) and a type(relicore_linear_power_spectrum) of 131080
 !   bytes each (keep them in a module, a derived type or an allocatable, not as local variables
 !   of a small stack), computed once with
 !       call relicore_linear_growth_compute(universe, growth, stat)
@@ -73,7 +73,7 @@
 !       call relicore_linear_power_spectrum_compute(growth, options, spectrum, stat)
 !   and passed first to their queries: d = relicore_growth_factor(growth, z),
 !   pk = relicore_linear_power_spectrum_mpc3(spectrum, k, z), s = relicore_sigma8(spectrum).
-!   The BAO distances and leapfrog factors take the universe first. Units: k in Mpc-1, R in
+!   The BAO distances take the universe first, the leapfrog factors the growth. Units: k in Mpc-1, R in
 !   Mpc, P in Mpc3 (no hidden h), times in Gyr.
 ! * relicore_status_message(code) and relicore_version() return allocatable strings.
 ! * Nothing here allocates on the C side, keeps state or is thread-unsafe.
@@ -140,9 +140,9 @@ module relicore
   ! Words of storage in type(relicore_thermal_history) (struct relicore_thermal_history).
   integer(c_int32_t), parameter, public :: RELICORE_THERMAL_HISTORY_STORAGE_WORDS = 20480_c_int32_t
   ! Words of storage in type(relicore_linear_growth) and type(relicore_linear_power_spectrum).
-  integer(c_int32_t), parameter, public :: RELICORE_LINEAR_GROWTH_STORAGE_WORDS = 10240_c_int32_t
+  integer(c_int32_t), parameter, public :: RELICORE_LINEAR_GROWTH_STORAGE_WORDS = 16384_c_int32_t
   integer(c_int32_t), parameter, public :: &
-      RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS = 10240_c_int32_t
+      RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS = 16384_c_int32_t
   ! The switches of type(relicore_linear_power_spectrum_options).
   integer(c_int32_t), parameter, public :: RELICORE_TRANSFER_BARYON_OSCILLATIONS = 0_c_int32_t
   integer(c_int32_t), parameter, public :: RELICORE_TRANSFER_NO_WIGGLE = 1_c_int32_t
@@ -262,7 +262,7 @@ module relicore
   !     uint64_t storage[RELICORE_LINEAR_GROWTH_STORAGE_WORDS]; };
   ! A computed linear growth of one universe (D_u and f on a table in the scale factor, with a
   ! copy of the universe), built by relicore_linear_growth_compute and passed to its queries. A
-  ! plain value of 81928 bytes owned by the caller: keep it in a module, a derived type or an
+  ! plain value of 131080 bytes owned by the caller: keep it in a module, a derived type or an
   ! allocatable rather than as a local variable on a small stack; copy it by assignment; read it
   ! from any number of threads. The tag starts at 0: a growth never computed (or whose compute
   ! failed) is refused with RELICORE_ERROR_INVALID_STRUCT.
@@ -291,7 +291,7 @@ module relicore
   !     uint64_t storage[RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS]; };
   ! A computed linear matter power spectrum (a copy of its growth, the Eisenstein & Hu 1998
   ! transfer function, the primordial spectrum and sigma8), built by
-  ! relicore_linear_power_spectrum_compute. A plain value of 81928 bytes: the same rules as
+  ! relicore_linear_power_spectrum_compute. A plain value of 131080 bytes: the same rules as
   ! type(relicore_linear_growth).
   type, bind(C), public :: relicore_linear_power_spectrum
     integer(c_int64_t) :: tag = 0_c_int64_t                                        ! private

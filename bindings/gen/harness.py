@@ -16,7 +16,7 @@ OUT = ROOT / "tests" / "c" / "gen_functions.h"
 
 # What the harnesses can call (their dispatch shapes); anything else is an error here, with
 # the place to extend, rather than a compile error in tests/c.
-MAX_NARGS = {"none": 4, "universe": 2, "history": 2, "growth": 1, "power_spectrum": 2}
+MAX_NARGS = {"none": 4, "universe": 2, "history": 2, "growth": 2, "power_spectrum": 2}
 ARRAY_NARGS = {"none": 2, "universe": 1, "history": 1, "growth": 1, "power_spectrum": 1}
 # tests/c/hostile_growth.c and test_growth.c call the array forms of the growth topic over their
 # first argument with the others single values (the BAO ratios: z, then r_d)

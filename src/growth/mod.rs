@@ -2,11 +2,12 @@
 //! Eisenstein & Hu 1998, the linear matter power spectrum with σ(R), σ8, S8 and fσ8, and the
 //! time-step factors of a comoving leapfrog. The BAO distance ratios are functions of a
 //! [`Universe`](crate::cosmology::Universe) (`hubble_distance_at_mpc`,
-//! `volume_averaged_distance_mpc` and their ratios to a drag-epoch sound horizon), as are the
-//! leapfrog factors ([`leapfrog_drift_factor_gyr`](crate::cosmology::Universe::leapfrog_drift_factor_gyr),
-//! [`leapfrog_kick_factor_gyr`](crate::cosmology::Universe::leapfrog_kick_factor_gyr)).
+//! `volume_averaged_distance_mpc` and their ratios to a drag-epoch sound horizon); the leapfrog
+//! factors ([`leapfrog_drift_factor_gyr`](LinearGrowth::leapfrog_drift_factor_gyr),
+//! [`leapfrog_kick_factor_gyr`](LinearGrowth::leapfrog_kick_factor_gyr)) are functions of a
+//! [`LinearGrowth`], which holds tables of their integrands.
 //!
-//! # Meanings (fixed by issue 11; every face follows them)
+//! # Meanings (every face follows them)
 //!
 //! * Clustering matter Ω_cb = Ω_m − Ω_ν,massive today (massive neutrinos are in Ω_m, as the
 //!   universe's parameters already define, and are treated as smooth for growth).

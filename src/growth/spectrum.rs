@@ -31,7 +31,7 @@ pub enum TransferForm {
 /// function and a primordial spectrum A_s (k/k_p)^(n_s − 1 + ½ α_s ln(k/k_p)) at
 /// k_p = 0.05 Mpc⁻¹, either given or derived from a given σ8 (module doc of [`crate::growth`]
 /// for the meanings). A plain value the caller owns (no heap; every field plain old data; about
-/// 47 KB for `f64`, a copy of the growth included); σ8 is computed once at construction.
+/// 103 KB for `f64`, a copy of the growth included); σ8 is computed once at construction.
 #[derive(Debug, Clone, PartialEq)]
 pub struct LinearPowerSpectrum<T> {
     growth: LinearGrowth<T>,

@@ -359,9 +359,7 @@
     X(volume_averaged_distance_mpc, 1, "n", INFINITY, 1) \
     X(transverse_comoving_distance_over_sound_horizon, 2, "np", INFINITY, 1) \
     X(hubble_distance_over_sound_horizon, 2, "np", INFINITY, 1) \
-    X(volume_averaged_distance_over_sound_horizon, 2, "np", INFINITY, 1) \
-    X(leapfrog_drift_factor_gyr, 2, "pp", 1.0, 0) \
-    X(leapfrog_kick_factor_gyr, 2, "pp", 1.0, 0)
+    X(volume_averaged_distance_over_sound_horizon, 2, "np", INFINITY, 1)
 
 /* growth: array forms of the functions of a universe: X(name, nargs, pos) */
 #define RELICORE_GROWTH_UNIVERSE_ARRAYS(X) \
@@ -379,6 +377,8 @@
 
 /* growth: functions of a growth: X(name, nargs, domain, upper, array) */
 #define RELICORE_GROWTH_GROWTH(X) \
+    X(leapfrog_drift_factor_gyr, 2, "pp", 1.0, 0) \
+    X(leapfrog_kick_factor_gyr, 2, "pp", 1.0, 0) \
     X(growth_factor, 1, "n", INFINITY, 1) \
     X(growth_rate, 1, "n", INFINITY, 1) \
     X(unnormalized_growth_factor, 1, "n", INFINITY, 1)

@@ -125,6 +125,7 @@ typedef int32_t (*n4_fn)(double, double, double, double, double *);
 typedef int32_t (*u1_fn)(const struct relicore_universe *, double, double *);
 typedef int32_t (*u2_fn)(const struct relicore_universe *, double, double, double *);
 typedef int32_t (*g1_fn)(const struct relicore_linear_growth *, double, double *);
+typedef int32_t (*g2_fn)(const struct relicore_linear_growth *, double, double, double *);
 typedef int32_t (*p0_fn)(const struct relicore_linear_power_spectrum *, double *);
 typedef int32_t (*p1_fn)(const struct relicore_linear_power_spectrum *, double, double *);
 typedef int32_t (*p2_fn)(const struct relicore_linear_power_spectrum *, double, double, double *);
@@ -149,7 +150,8 @@ static int32_t call(const struct entry *e, const struct recv *r, const double *a
     case R_NONE: return ((n4_fn)e->f)(a[0], a[1], a[2], a[3], out);
     case R_UNIVERSE:
         return e->nargs == 1 ? ((u1_fn)e->f)(r->u, a[0], out) : ((u2_fn)e->f)(r->u, a[0], a[1], out);
-    case R_GROWTH: return ((g1_fn)e->f)(r->g, a[0], out);
+    case R_GROWTH:
+        return e->nargs == 1 ? ((g1_fn)e->f)(r->g, a[0], out) : ((g2_fn)e->f)(r->g, a[0], a[1], out);
     case R_SPECTRUM:
         return e->nargs == 0   ? ((p0_fn)e->f)(r->p, out)
                : e->nargs == 1 ? ((p1_fn)e->f)(r->p, a[0], out)

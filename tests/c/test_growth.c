@@ -13,7 +13,7 @@
  *
  * The functions are called through the lists of tests/c/gen_functions.h (generated from
  * bindings/functions.toml), so a new growth entry of the table is reached without an edit here.
- * The growth and spectrum structs (81928 bytes each) are allocated, never on the stack.
+ * The growth and spectrum structs (131080 bytes each) are allocated, never on the stack.
  */
 #include <inttypes.h>
 #include <math.h>
@@ -39,6 +39,7 @@ typedef int32_t (*n4_fn)(double, double, double, double, double *);
 typedef int32_t (*u1_fn)(const struct relicore_universe *, double, double *);
 typedef int32_t (*u2_fn)(const struct relicore_universe *, double, double, double *);
 typedef int32_t (*g1_fn)(const struct relicore_linear_growth *, double, double *);
+typedef int32_t (*g2_fn)(const struct relicore_linear_growth *, double, double, double *);
 typedef int32_t (*p0_fn)(const struct relicore_linear_power_spectrum *, double *);
 typedef int32_t (*p1_fn)(const struct relicore_linear_power_spectrum *, double, double *);
 typedef int32_t (*p2_fn)(const struct relicore_linear_power_spectrum *, double, double, double *);
@@ -155,7 +156,8 @@ static int32_t call_entry(const struct entry *e, const struct target *t, const d
         return e->nargs == 1 ? ((u1_fn)e->f)(t->u, a[0], out)
                              : ((u2_fn)e->f)(t->u, a[0], a[1], out);
     case R_GROWTH:
-        return ((g1_fn)e->f)(t->g, a[0], out);
+        return e->nargs == 1 ? ((g1_fn)e->f)(t->g, a[0], out)
+                             : ((g2_fn)e->f)(t->g, a[0], a[1], out);
     case R_SPECTRUM:
         switch (e->nargs) {
         case 0: return ((p0_fn)e->f)(t->p, out);

@@ -18,7 +18,7 @@
 ! bit for bit; the array forms (growth_array.inc) over the first argument must give the
 ! elemental results bit for bit on every vector. Tests written here: a growth or spectrum never
 ! computed is refused; copies; the default options; the construction errors (each clears its
-! output). Growths and spectra are allocatable (81928 bytes each: not for the stack).
+! output). Growths and spectra are allocatable (131080 bytes each: not for the stack).
 program test_growth
   use, intrinsic :: iso_c_binding, only: c_double, c_int32_t
   use, intrinsic :: ieee_arithmetic, only: ieee_is_nan, ieee_value, ieee_quiet_nan

@@ -285,8 +285,6 @@ pub fn call_universe(r: &Universe<f64>, name: &str, a: &[f64]) -> Option<Result<
         ("volume_averaged_distance_over_sound_horizon", 2) => {
             r.volume_averaged_distance_over_sound_horizon(g(0), g(1))
         }
-        ("leapfrog_drift_factor_gyr", 2) => r.leapfrog_drift_factor_gyr(g(0), g(1)),
-        ("leapfrog_kick_factor_gyr", 2) => r.leapfrog_kick_factor_gyr(g(0), g(1)),
         _ => return None,
     })
 }
@@ -320,6 +318,8 @@ pub fn call_history(r: &ThermalHistory<f64>, name: &str, a: &[f64]) -> Option<Re
 pub fn call_growth(r: &LinearGrowth<f64>, name: &str, a: &[f64]) -> Option<Result<f64>> {
     let g = |i: usize| a.get(i).copied().unwrap_or(f64::NAN);
     Some(match (name, a.len()) {
+        ("leapfrog_drift_factor_gyr", 2) => r.leapfrog_drift_factor_gyr(g(0), g(1)),
+        ("leapfrog_kick_factor_gyr", 2) => r.leapfrog_kick_factor_gyr(g(0), g(1)),
         ("growth_factor", 1) => r.growth_factor(g(0)),
         ("growth_rate", 1) => r.growth_rate(g(0)),
         ("unnormalized_growth_factor", 1) => r.unnormalized_growth_factor(g(0)),

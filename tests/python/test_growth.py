@@ -240,7 +240,7 @@ def test_universe_methods_of_the_topic(planck):
         u.hubble_distance_over_sound_horizon(0.5, 0.0)
     assert e.value.argument == "sound_horizon_drag_mpc" and e.value.status == -3
     with pytest.raises(RelicoreError) as e:
-        u.leapfrog_kick_factor_gyr(0.5, 1.5)
+        LinearGrowth(u).leapfrog_kick_factor_gyr(0.5, 1.5)
     assert e.value.argument == "end_scale_factor" and e.value.status == -10
     z = np.linspace(0.1, 2.0, 7).reshape(7, 1)
     ratios = u.volume_averaged_distance_over_sound_horizon(z, np.array([147.0, 150.0]))

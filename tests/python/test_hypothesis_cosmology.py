@@ -200,7 +200,7 @@ def test_construction_from_hostile_parameters(p):
 def test_the_tables_cover_the_class():
     """Every method of the native module is in METHODS with its arguments, and every parameter
     of the constructor in PARAMETERS (so a new method joins these tests or this test says so)."""
-    # the Universe methods of the growth topic (BAO distances, leapfrog factors) included
+    # the Universe methods of the growth topic (BAO distances) included
     native = {**native_signatures("cosmology", "universe"), **native_signatures("growth", "universe")}
     assert {n: a for n, a in native.items() if a} == METHODS
     assert {n for n, a in native.items() if not a} == set(CONSTANTS)

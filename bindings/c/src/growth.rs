@@ -14,14 +14,15 @@ use crate::stored::{stored, stored_clear, stored_place, stored_ref, stored_seal}
 use crate::universe::relicore_universe;
 use relicore::growth::{LinearGrowth, LinearPowerSpectrum, TransferForm};
 
-/// Number of 8-byte words of storage in `struct relicore_linear_growth` (81920 bytes; the core
-/// growth, 376 pieces of 10 coefficients for D_u and for f and a copy of the universe, takes
-/// 74744 bytes of them, the rest is room to grow without changing the size of the struct).
-pub const RELICORE_LINEAR_GROWTH_STORAGE_WORDS: usize = 10240;
+/// Number of 8-byte words of storage in `struct relicore_linear_growth` (131072 bytes; the core
+/// growth — 376 pieces of 10 coefficients for D_u and for f, 160 pieces of 10 coefficients and
+/// a total for each of the two leapfrog integrands, and a copy of the universe — takes 102904
+/// bytes of them, the rest is room to grow without changing the size of the struct).
+pub const RELICORE_LINEAR_GROWTH_STORAGE_WORDS: usize = 16384;
 
-/// Number of 8-byte words of storage in `struct relicore_linear_power_spectrum` (81920 bytes;
-/// the core spectrum, a copy of the growth included, takes 74928 bytes of them).
-pub const RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS: usize = 10240;
+/// Number of 8-byte words of storage in `struct relicore_linear_power_spectrum` (131072 bytes;
+/// the core spectrum, a copy of the growth included, takes 103088 bytes of them).
+pub const RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS: usize = 16384;
 
 /// `transfer_form` of the options: the Eisenstein & Hu 1998 fitting formula with baryon
 /// acoustic oscillations (needs Ω_b > 0).
@@ -63,7 +64,7 @@ pub struct relicore_linear_power_spectrum_options {
 /// `const struct relicore_linear_growth *`. It keeps its own copy of the universe.
 ///
 /// Caller-owned and fixed-size: `sizeof(struct relicore_linear_growth)` = 8 + 8 ×
-/// `RELICORE_LINEAR_GROWTH_STORAGE_WORDS` = 81928 bytes, aligned like `uint64_t`. That is large
+/// `RELICORE_LINEAR_GROWTH_STORAGE_WORDS` = 131080 bytes, aligned like `uint64_t`. That is large
 /// for a small thread stack: put it in static storage, inside your own structs, or allocate it;
 /// there is nothing to free besides your own allocation. A plain value: it may be copied
 /// (memcpy, assignment) and read by any number of threads at once. Its fields are private to
@@ -92,7 +93,7 @@ stored!(
 /// relicore_linear_power_spectrum *`. It keeps its own copy of the growth.
 ///
 /// Caller-owned and fixed-size: `sizeof(struct relicore_linear_power_spectrum)` = 8 + 8 ×
-/// `RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS` = 81928 bytes, aligned like `uint64_t`; the
+/// `RELICORE_LINEAR_POWER_SPECTRUM_STORAGE_WORDS` = 131080 bytes, aligned like `uint64_t`; the
 /// same rules as `struct relicore_linear_growth` (keep it off small stacks, copyable, readable
 /// from many threads, refused with `RELICORE_ERROR_INVALID_STRUCT` unless filled).
 #[allow(non_camel_case_types)]

@@ -951,28 +951,6 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         frame: None,
         width: 1,
     },
-    Spec {
-        name: "leapfrog_drift_factor_gyr",
-        topic: "growth",
-        label: "Universe.leapfrog_drift_factor_gyr",
-        args: &["start_scale_factor", "end_scale_factor"],
-        free: false,
-        body: Body::A2(|u, start_scale_factor, end_scale_factor| u.leapfrog_drift_factor_gyr(start_scale_factor, end_scale_factor).lift()),
-        array: None,
-        frame: None,
-        width: 1,
-    },
-    Spec {
-        name: "leapfrog_kick_factor_gyr",
-        topic: "growth",
-        label: "Universe.leapfrog_kick_factor_gyr",
-        args: &["start_scale_factor", "end_scale_factor"],
-        free: false,
-        body: Body::A2(|u, start_scale_factor, end_scale_factor| u.leapfrog_kick_factor_gyr(start_scale_factor, end_scale_factor).lift()),
-        array: None,
-        frame: None,
-        width: 1,
-    },
 ];
 
 /// The regular functions called on a history.
@@ -1146,6 +1124,28 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
 
 /// The regular functions called on a growth.
 pub(crate) static GROWTH: &[Spec<G>] = &[
+    Spec {
+        name: "leapfrog_drift_factor_gyr",
+        topic: "growth",
+        label: "LinearGrowth.leapfrog_drift_factor_gyr",
+        args: &["start_scale_factor", "end_scale_factor"],
+        free: false,
+        body: Body::A2(|g, start_scale_factor, end_scale_factor| g.leapfrog_drift_factor_gyr(start_scale_factor, end_scale_factor).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
+    Spec {
+        name: "leapfrog_kick_factor_gyr",
+        topic: "growth",
+        label: "LinearGrowth.leapfrog_kick_factor_gyr",
+        args: &["start_scale_factor", "end_scale_factor"],
+        free: false,
+        body: Body::A2(|g, start_scale_factor, end_scale_factor| g.leapfrog_kick_factor_gyr(start_scale_factor, end_scale_factor).lift()),
+        array: None,
+        frame: None,
+        width: 1,
+    },
     Spec {
         name: "growth_factor",
         topic: "growth",

@@ -5,7 +5,7 @@
 //! The Python classes derive from these bases (to give the constructors their keywords and
 //! defaults) and from the generated mixins of their methods and properties, which call
 //! [`crate::functions`]. Both computations run with the GIL released, on a thread with a known
-//! stack (the core values are about 75 KB each); every number comes from `relicore::growth`.
+//! stack (the core values are about 103 KB each); every number comes from `relicore::growth`.
 
 use std::collections::hash_map::DefaultHasher;
 use std::hash::{Hash, Hasher};
@@ -21,7 +21,7 @@ use crate::decoupling::universe_refused;
 use crate::errors::{Arg, build, core_error_because, py_repr, status_code};
 use crate::functions::{G, Receiver, S};
 
-/// Stack of the thread that computes a growth or a spectrum: the values are about 75 KB and
+/// Stack of the thread that computes a growth or a spectrum: the values are about 103 KB and
 /// are computed in place on the heap, but the integration and σ8's quadrature keep their own
 /// state; 1 MiB plus four values leaves a wide margin whatever the caller's stack is.
 const COMPUTE_STACK: usize = (1 << 20) + 4 * std::mem::size_of::<S>();

@@ -22,7 +22,8 @@ relicore.decoupling (its class is also ``relicore.ThermalHistory``)
 relicore.growth
     :class:`LinearGrowth` (the growth factor and rate of a universe) and
     :class:`LinearPowerSpectrum` (Eisenstein & Hu 1998 transfer functions, P(k, z), sigma(R),
-    sigma8, S8, f sigma8). The BAO distances and leapfrog factors are Universe methods. Pickles.
+    sigma8, S8, f sigma8). The BAO distances are Universe methods, the leapfrog drift and kick
+    factors LinearGrowth methods. Pickles.
 relicore.constants
     The physical and astronomical constants of the core, each in SI units.
 

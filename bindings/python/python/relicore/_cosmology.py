@@ -298,26 +298,5 @@ class UniverseFunctions:
         """
         return _apply(_F["volume_averaged_distance_over_sound_horizon"], self, (z, sound_horizon_drag_mpc, ), nan_on_error, "volume_averaged_distance_over_sound_horizon")
 
-    def leapfrog_drift_factor_gyr(self, start_scale_factor: Any, end_scale_factor: Any, *, nan_on_error: bool = False) -> Any:
-        """Drift factor of a comoving leapfrog step, ∫_{a1}^{a2} da/(a³H), Gyr (Quinn, Katz, Stadel
-        & Lake 1997): the time a drift multiplies the canonical momentum p = a²ẋ by.
-
-        * `start_scale_factor`: a1, 0 < a1 ≤ 1.
-        * `end_scale_factor`: a2, 0 < a2 ≤ 1 (a2 < a1 gives the negative factor of a backward
-          step).
-
-        Errors: `NonFinite(i)`, `NonPositive(i)`, `OutOfDomain(i)` above 1 (the universe is
-        validated up to today only); `OutOfDomain(0)` when the integral is not representable.
-        Accuracy: within 1e-12 relative (`f64`) of an mpmath quadrature (`tests/data/growth.txt`).
-        """
-        return _apply(_F["leapfrog_drift_factor_gyr"], self, (start_scale_factor, end_scale_factor, ), nan_on_error, "leapfrog_drift_factor_gyr")
-
-    def leapfrog_kick_factor_gyr(self, start_scale_factor: Any, end_scale_factor: Any, *, nan_on_error: bool = False) -> Any:
-        """Kick factor of a comoving leapfrog step, ∫_{a1}^{a2} da/(a²H), Gyr (Quinn, Katz, Stadel
-        & Lake 1997): the time a kick multiplies the comoving force by. Arguments, errors and
-        accuracy as `leapfrog_drift_factor_gyr`.
-        """
-        return _apply(_F["leapfrog_kick_factor_gyr"], self, (start_scale_factor, end_scale_factor, ), nan_on_error, "leapfrog_kick_factor_gyr")
-
 
 _publish(UniverseFunctions, 'relicore.cosmology', 'Universe')

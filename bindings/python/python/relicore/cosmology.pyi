@@ -186,13 +186,5 @@ class Universe:
     def volume_averaged_distance_over_sound_horizon(self, z: _Scalar, sound_horizon_drag_mpc: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
     @overload
     def volume_averaged_distance_over_sound_horizon(self, z: ArrayLike, sound_horizon_drag_mpc: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
-    @overload
-    def leapfrog_drift_factor_gyr(self, start_scale_factor: _Scalar, end_scale_factor: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
-    @overload
-    def leapfrog_drift_factor_gyr(self, start_scale_factor: ArrayLike, end_scale_factor: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
-    @overload
-    def leapfrog_kick_factor_gyr(self, start_scale_factor: _Scalar, end_scale_factor: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
-    @overload
-    def leapfrog_kick_factor_gyr(self, start_scale_factor: ArrayLike, end_scale_factor: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
 
 __all__: Final[list[str]]

@@ -2,8 +2,9 @@
 (:class:`LinearGrowth`), the Eisenstein & Hu 1998 transfer functions, the linear matter power
 spectrum with σ(R), σ8, S8 and fσ8 (:class:`LinearPowerSpectrum`). The BAO distances
 (``hubble_distance_at_mpc``, ``volume_averaged_distance_mpc`` and the three ratios to a
-drag-epoch sound horizon) and the leapfrog drift and kick factors are methods of
-:class:`relicore.Universe`.
+drag-epoch sound horizon) are methods of :class:`relicore.Universe`; the leapfrog drift and
+kick factors are methods of :class:`LinearGrowth` (from tables of their integrands computed with
+the growth).
 
 Every function and method is the Rust core's of the same name with the same arguments in the
 same order (``src/growth/``), and its docstring is the core's documentation of it; this module
