@@ -1227,7 +1227,9 @@ int32_t relicore_photon_radiance_wavenumber_array(const double *wavenumbers_per_
  * * `wavelength_m`: m, > 0; `temperature_k`: K, > 0.
  *
  * Returns W m⁻² sr⁻¹ m⁻¹ K⁻¹, ≥ 0. Errors as `spectral_radiance_wavelength`.
- * Accuracy: ≤ 8 ulp (`f64`, normal results) against mpmath (three roundings more than B_λ).
+ * Accuracy: ≤ 8 ulp (`f64`, normal results) against mpmath (five roundings more than B_λ).
+ * Method: B_λ·x(1 + E)/(T E) with E = e^x − 1, the one exponential B_λ needs (the
+ * overflow-safe form B_λ·(x/T)/(1 − e^−x) where an intermediate is not a normal number).
  *
  * Arguments of the C function:
  * * `wavelength_m`: wavelength in m, > 0.

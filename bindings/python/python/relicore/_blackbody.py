@@ -95,7 +95,9 @@ def radiance_temperature_derivative_wavelength(wavelength_m: Any, temperature_k:
     * `wavelength_m`: m, > 0; `temperature_k`: K, > 0.
 
     Returns W m⁻² sr⁻¹ m⁻¹ K⁻¹, ≥ 0. Errors as `spectral_radiance_wavelength`.
-    Accuracy: ≤ 8 ulp (`f64`, normal results) against mpmath (three roundings more than B_λ).
+    Accuracy: ≤ 8 ulp (`f64`, normal results) against mpmath (five roundings more than B_λ).
+    Method: B_λ·x(1 + E)/(T E) with E = e^x − 1, the one exponential B_λ needs (the
+    overflow-safe form B_λ·(x/T)/(1 − e^−x) where an intermediate is not a normal number).
     """
     return _apply(_F["radiance_temperature_derivative_wavelength"], None, (wavelength_m, temperature_k, ), nan_on_error)
 
