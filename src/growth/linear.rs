@@ -530,12 +530,17 @@ mod tests {
         for u in universes() {
             let g = LinearGrowth::new(&u).unwrap_or_else(|e| panic!("{e}"));
             assert!(g.is_valid());
-            // each integration runs from a = 2^-47: a few redshifts across the table
+            // each integration runs from a = 2^-47: a few redshifts across the table. The table
+            // and the direct integration are two integrations of the same equation with
+            // different step sequences, each within about 6e-12 of the exact solution where one
+            // is known (Einstein-de Sitter and the Meszaros mode, tests/data/growth.txt), so
+            // they may differ by about 1e-11 (measured up to 1.6e-12 here); 2e-11 keeps that
+            // bound and still fails a table that is wrong by a few rounding steps of a piece.
             for z in [1e-3, 0.37, 2.0, 30.0, 1089.0, 5e4, 1.6e7, 1e12] {
                 let (d, f) = g.at(z).unwrap_or((f64::NAN, f64::NAN));
                 let (di, fi) = g.integrated(z);
-                assert!(((d - di) / di).abs() < 1e-12, "z={z}: D_u {d} vs {di}");
-                assert!(((f - fi) / fi).abs() < 1e-12, "z={z}: f {f} vs {fi}");
+                assert!(((d - di) / di).abs() < 2e-11, "z={z}: D_u {d} vs {di}");
+                assert!(((f - fi) / fi).abs() < 2e-11, "z={z}: f {f} vs {fi}");
             }
         }
     }
