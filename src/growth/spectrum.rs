@@ -239,11 +239,30 @@ impl<T: Real> LinearPowerSpectrum<T> {
         let du1 = self.growth.unnormalized_growth_factor_today();
         let du2 = du1 * du1;
         let d2 = |x: T| self.delta2_per_du2(x / r) * du2;
-        let tol = T::epsilon() * T::c(64.0);
-        // (A) ln x from x_min to 4
+        let tol = T::c(1e-13).max(T::epsilon() * T::c(64.0));
+        // Where the baryon oscillations of the full form live, in x = kR: from k = π/s (below,
+        // less than half a period) to k = 100 Mpc⁻¹ (beyond, their relative size ~ (ks)⁻³ is
+        // below 1e-13); None for the form without them.
+        let x_max = T::c(100.0);
+        let four = T::c(4.0);
+        let wiggles = match (self.form, self.transfer.has_baryons()) {
+            (0, true) if self.transfer.sound_horizon_mpc() > T::zero() => {
+                let s = self.transfer.sound_horizon_mpc();
+                Some((
+                    r * T::c(core::f64::consts::PI) / s,
+                    r * T::c(100.0),
+                    T::c(16.0 * core::f64::consts::PI) * r / s,
+                ))
+            }
+            _ => None,
+        };
+        // (A) ln x from x_min to 4, or to the first baryon oscillation where that comes first
         let k_min = T::c(1e-7).min(T::c(1e-6) / r);
         let lo = (k_min * r).ln();
-        let four = T::c(4.0);
+        let x_a = match wiggles {
+            Some((x_lo, _, _)) => four.min(x_lo.max(k_min * r * T::c(2.0))),
+            None => four,
+        };
         let part_a = integrate(
             |u: T| {
                 let x = u.exp();
@@ -251,7 +270,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
                 d2(x) * w * w
             },
             lo,
-            four.ln(),
+            x_a.ln(),
             tol,
             T::zero(),
         )?;
@@ -259,13 +278,19 @@ impl<T: Real> LinearPowerSpectrum<T> {
             return Err(Error::OutOfDomain(0));
         }
         let abs_tol = part_a * T::c(1e-15);
-        // (B) x from 4 to 100 in chunks of 4π
-        let x_max = T::c(100.0);
-        let chunk = T::c(4.0 * core::f64::consts::PI);
+        // (B) x from there to 100 in chunks of 4π (the period of W² is π), or of 8 periods 2πR/s
+        // of the baryon oscillations while they matter: each chunk holds a few oscillations,
+        // which the adaptive rule resolves within its capacity
         let mut part_b = T::zero();
-        let mut x0 = four;
+        let mut x0 = x_a;
         while x0 < x_max {
-            let x1 = (x0 + chunk).min(x_max);
+            let width = match wiggles {
+                Some((_, x_hi, period8)) if x0 < x_hi => {
+                    period8.min(T::c(4.0 * core::f64::consts::PI))
+                }
+                _ => T::c(4.0 * core::f64::consts::PI),
+            };
+            let x1 = (x0 + width).min(x_max);
             part_b = part_b
                 + integrate(
                     |x: T| {

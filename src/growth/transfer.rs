@@ -144,6 +144,12 @@ impl<T: Real> EisensteinHu<T> {
     }
 
     /// Whether the oscillating form is available (ω_b > 0).
+    /// The sound horizon s at the drag epoch (eq. 6), Mpc: the period 2π/s in k of the
+    /// oscillating part of the full form.
+    pub(crate) fn sound_horizon_mpc(&self) -> T {
+        self.s
+    }
+
     pub(crate) fn has_baryons(&self) -> bool {
         self.has_baryons == 1
     }
