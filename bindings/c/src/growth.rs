@@ -341,8 +341,8 @@ mod tests {
 
     #[test]
     fn the_structs_are_a_tag_and_their_words() {
-        assert_eq!(size_of::<relicore_linear_growth>(), 81_928);
-        assert_eq!(size_of::<relicore_linear_power_spectrum>(), 81_928);
+        assert_eq!(size_of::<relicore_linear_growth>(), 131_080);
+        assert_eq!(size_of::<relicore_linear_power_spectrum>(), 131_080);
         assert_eq!(align_of::<relicore_linear_growth>(), 8);
         assert_eq!(size_of::<relicore_linear_power_spectrum_options>(), 32);
         // SAFETY: NULL is allowed.
