@@ -9,10 +9,12 @@
 #   part 2: the fictional Quillmere Deep Field Survey: a distance-redshift table of the demo
 #           universe in all four languages, and a catalogue of 100,000 invented galaxies turned
 #           into distances and ages in Python (examples/data/invented_catalogue.txt);
-#   part 3: the fictional toy simulation code Wrenfold: its starting time, the last-scattering
-#           summary and the ionised fraction and gas temperature on its output redshifts, in all
-#           four languages, and plots of the decoupling history in Python
-#           (examples/data/invented_simulation.txt).
+#   part 3: the fictional toy simulation code Orvelstep (a coinage, like its group's name): its
+#           starting time, the last-scattering summary, the growth factor and rate at its start,
+#           sigma8, the leapfrog factors of its first steps, a power-spectrum file for its initial
+#           conditions and the ionised fraction and gas temperature on its output redshifts, in
+#           all four languages, and plots of the decoupling history and of structure growth in
+#           Python (examples/data/invented_simulation.txt).
 # Prints how far the four agree and writes plots to examples/out/. Run from anywhere; `make
 # demo` first builds the Python package into .venv.
 set -euo pipefail
@@ -166,18 +168,22 @@ echo "== the INVENTED catalogue of 100,000 galaxies (Python), and its plot"
 "$PY" examples/python/catalogue_demo.py "$CATALOGUE" "$OUT"
 echo
 
-echo "== part 3: the fictional toy simulation code Wrenfold"
+echo "== part 3: the fictional toy simulation code Orvelstep"
 echo "== running the four simulation_start programs on the same invented inputs"
-"$TARGET"/release/examples/simulation_start "$SIMULATION" >"$OUT/simulation_rust.txt"
-"$BUILD/simulation_start_c" "$SIMULATION" >"$OUT/simulation_c.txt"
-"$BUILD/simulation_start_f" "$SIMULATION" >"$OUT/simulation_fortran.txt"
-"$PY" examples/python/simulation_start.py "$SIMULATION" >"$OUT/simulation_python.txt"
+"$TARGET"/release/examples/simulation_start "$SIMULATION" "$OUT/simulation_power_spectrum_rust.txt" \
+  >"$OUT/simulation_rust.txt"
+"$BUILD/simulation_start_c" "$SIMULATION" "$OUT/simulation_power_spectrum_c.txt" >"$OUT/simulation_c.txt"
+"$BUILD/simulation_start_f" "$SIMULATION" "$OUT/simulation_power_spectrum_fortran.txt" \
+  >"$OUT/simulation_fortran.txt"
+"$PY" examples/python/simulation_start.py "$SIMULATION" "$OUT/simulation_power_spectrum_python.txt" \
+  >"$OUT/simulation_python.txt"
 for lang in rust c fortran python; do
-  echo "   $lang: $(grep -c ' = ' "$OUT/simulation_$lang.txt") quantities -> $OUT/simulation_$lang.txt"
+  echo "   $lang: $(grep -c ' = ' "$OUT/simulation_$lang.txt") quantities -> $OUT/simulation_$lang.txt;" \
+    "power spectrum -> $OUT/simulation_power_spectrum_$lang.txt"
 done
 echo
 echo "   what the fictional Fortran code printed, in part:"
-grep -E '^(start_(redshift|age_myr|ionized_fraction|matter_temperature_k)|history_(last_scattering|drag)_redshift|history_100_theta_star|history_reionization_optical_depth) = ' \
+grep -E '^(start_(redshift|age_myr|ionized_fraction|matter_temperature_k)|history_(last_scattering|drag)_redshift|history_100_theta_star|history_reionization_optical_depth|growth_start_growth_(factor|rate)|spectrum_sigma8|step_1_(drift|kick)_factor_gyr) = ' \
   "$OUT/simulation_fortran.txt" | sed 's/^/     /'
 echo
 
@@ -193,6 +199,14 @@ cat <<'EOF'
                          sound horizons at both (Mpc), 100 theta*, the age (years) and radiation
                          temperature at last scattering, the visibility peak, the thermal
                          decoupling redshift (T_m/T_r = 0.99), the reionisation optical depth
+   growth_*              the linear growth factor D (1 today), growth rate f = dln D/dln a and
+                         unnormalised D_u at the start redshift, and D_u today
+   spectrum_*            the linear power spectrum of the initial conditions: the invented A_s,
+                         n_s and running, sigma8 (derived from A_s), S8, sigma(8/h Mpc) at the
+                         start, f sigma8 at the start and today; spectrum_file_* the first and last
+                         rows of the two-column file (k in Mpc^-1, P(k, z_start) in Mpc^3)
+   step_N_*              the invented first time steps: start and end scale factors and the
+                         comoving-leapfrog drift and kick factors (Gyr) of each whole step
    output_N_*            at each invented output redshift: age (Myr), x_e, T_m, T_r, T_m/T_r
                          (the core does not model the heating of the gas by reionisation)
 
@@ -203,5 +217,15 @@ echo "== the four languages side by side"
   Python="$OUT/simulation_python.txt"
 echo
 
+echo "== the power-spectrum files of the four languages (k in Mpc^-1, P in Mpc^3, at the start redshift)"
+"$PY" examples/python/compare_outputs.py --table "   power spectrum file" \
+  Rust="$OUT/simulation_power_spectrum_rust.txt" C="$OUT/simulation_power_spectrum_c.txt" \
+  Fortran="$OUT/simulation_power_spectrum_fortran.txt" Python="$OUT/simulation_power_spectrum_python.txt"
+echo
+
 echo "== plots of the decoupling history"
 "$PY" examples/python/plot_decoupling.py "$SIMULATION" "$OUT"
+echo
+
+echo "== plots of structure growth"
+"$PY" examples/python/plot_growth.py "$SIMULATION" "$OUT"

@@ -3,6 +3,7 @@
 
 Usage: compare_outputs.py rust=FILE c=FILE fortran=FILE python=FILE
        compare_outputs.py --raw-f64 LABEL rust=FILE c=FILE fortran=FILE python=FILE
+       compare_outputs.py --table LABEL rust=FILE c=FILE fortran=FILE python=FILE
 
 Each file holds one program's output: comment lines starting with '#' and result lines
 ``key = value`` (17 significant digits, so the decimal text identifies the double exactly).
@@ -15,6 +16,12 @@ With --raw-f64 the files are images written as raw little-endian float64 (the th
 they are compared byte for byte, and where they differ value by value (how many values differ
 and by how many ulp at most). Exits 1 when the files differ in size or hold NaN; a numerical
 difference is reported, not treated as a failure.
+
+With --table the files are text tables (the simulation's power-spectrum file): comment lines
+starting with '#' (those of the form ``# name = value`` are compared as numbers, the others as
+text) and rows of whitespace-separated numbers. The files are compared byte for byte, and where
+they differ line by line: the numbers in ulp, the text exactly. Exits 1 when the files differ in
+shape or comment text, or hold NaN; a numerical difference is reported, not treated as a failure.
 """
 
 from __future__ import annotations
@@ -98,7 +105,99 @@ def compare_raw_f64(label: str, sources: list[tuple[str, Path]]) -> int:
     return status
 
 
+HEADER_VALUE = re.compile(r"^# ([a-z][a-z0-9_]*) = (\S+)$")
+
+
+def read_table(path: Path) -> tuple[list[tuple[str, str | float]], list[list[float]]]:
+    """The comment lines (text, or name and value for ``# name = value``) and the numeric rows
+    of a text table."""
+    header: list[tuple[str, str | float]] = []
+    rows: list[list[float]] = []
+    for line in path.read_text().splitlines():
+        if line.startswith("#"):
+            m = HEADER_VALUE.match(line)
+            if m is not None:
+                header.append((m.group(1), float(m.group(2))))
+            else:
+                header.append(("text", line))
+        elif line.strip():
+            try:
+                rows.append([float(t) for t in line.split()])
+            except ValueError:
+                raise SystemExit(f"compare_outputs: {path}: not a row of numbers: {line!r}") from None
+    return header, rows
+
+
+def compare_table(label: str, sources: list[tuple[str, Path]]) -> int:
+    """Compares text tables byte for byte, and line by line where they differ; prints a summary."""
+    import hashlib
+
+    names = [name for name, _ in sources]
+    raw = {name: path.read_bytes() for name, path in sources}
+    tables = {name: read_table(path) for name, path in sources}
+    ref_name = names[0]
+    ref_header, ref_rows = tables[ref_name]
+    n_values = sum(len(r) for r in ref_rows)
+    langs = ", ".join(names)
+    status = 0
+    if any(math.isnan(v) for r in ref_rows for v in r):
+        print(f"{label}: NaN in {ref_name}'s table")
+        status = 1
+    if all(raw[n] == raw[ref_name] for n in names[1:]):
+        digest = hashlib.sha256(raw[ref_name]).hexdigest()[:16]
+        print(f"{label}: {len(ref_rows)} rows ({n_values} values) and {len(ref_header)} header lines, "
+              f"byte-identical in {langs} (sha256 {digest}...)")
+        return status
+    notes = []
+    rows_agree = True
+    for name in names[1:]:
+        header, rows = tables[name]
+        if len(rows) != len(ref_rows) or any(len(a) != len(b) for a, b in zip(rows, ref_rows)):
+            print(f"{label}: SHAPES DIFFER: {name} vs {ref_name}")
+            return 1
+        if len(header) != len(ref_header) or any(a[0] != b[0] for a, b in zip(header, ref_header)):
+            print(f"{label}: HEADERS DIFFER: {name} vs {ref_name}")
+            return 1
+        for (key, a), (_, b) in zip(ref_header, header):
+            if key == "text":
+                if a != b:
+                    print(f"{label}: HEADER TEXT DIFFERS: {name}: {b!r} vs {a!r}")
+                    status = 1
+            elif isinstance(a, float) and isinstance(b, float):
+                d = ulp_distance(a, b)
+                if d:
+                    notes.append(f"header {key}: {name} {d} ulp")
+        worst = 0
+        differing = 0
+        for ra, rb in zip(ref_rows, rows):
+            for a, b in zip(ra, rb):
+                d = ulp_distance(a, b)
+                if d is None:
+                    status = 1
+                elif d:
+                    differing += 1
+                    worst = max(worst, d)
+        if differing:
+            rows_agree = False
+            notes.append(f"rows: {name} {differing} of {n_values} values differ, at most {worst} ulp")
+    verdict = (f"the {len(ref_rows)} rows ({n_values} values) have identical bits in {langs}"
+               if rows_agree else "the rows do NOT agree bit for bit")
+    print(f"{label}: files not byte-identical; {verdict}; differences: " + "; ".join(notes))
+    return status
+
+
 def main(argv: list[str]) -> int:
+    if len(argv) > 2 and argv[1] == "--table":
+        label = argv[2]
+        tabs: list[tuple[str, Path]] = []
+        for arg in argv[3:]:
+            name, _, file = arg.partition("=")
+            if not file:
+                raise SystemExit(__doc__)
+            tabs.append((name, Path(file)))
+        if len(tabs) < 2:
+            raise SystemExit(__doc__)
+        return compare_table(label, tabs)
     if len(argv) > 2 and argv[1] == "--raw-f64":
         label = argv[2]
         raw: list[tuple[str, Path]] = []

@@ -1,6 +1,6 @@
 #!/usr/bin/env python3
 """Plots of the relicore demo, part 3: the thermal history of the demo universe as the INVENTED
-toy simulation code "Wrenfold" (fictional Marrowgate Simulation Group) sees it.
+toy simulation code "Orvelstep" (fictional Hollinscarth Simulation Group) sees it.
 
 Usage: plot_decoupling.py [INPUT_FILE] [OUTPUT_DIR]   (defaults:
 examples/data/invented_simulation.txt, examples/out)
@@ -33,7 +33,7 @@ sys.path.insert(0, str(Path(__file__).resolve().parent))
 from relicore.decoupling import ThermalHistory, saha_ionized_fraction  # noqa: E402
 from simulation_start import DEFAULT_INPUT, Inputs, read_inputs  # noqa: E402
 
-INVENTED = ("INVENTED scenario: fictional toy code Wrenfold (Marrowgate Simulation Group); "
+INVENTED = ("INVENTED scenario: fictional toy code Orvelstep (Hollinscarth Simulation Group); "
             "round-number demo universe, not a published fit (relicore demo)")
 
 
