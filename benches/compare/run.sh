@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # Side-by-side speed and accuracy of relicore against what a user would otherwise write
 # (a plain C loop with exp, a numpy expression; for distances a cumulative-trapezoid grid with
-# numpy.interp and a scipy quad loop), in one run on the same inputs.
+# numpy.interp and a scipy quad loop; for growth a scipy solve_ivp, a numpy Eisenstein & Hu
+# expression and scipy quad; for thermometry a numpy frame), in one run on the same inputs.
 # Run from the repository root after the Python package is built into .venv (`make bench`
 # does both). A benchmark, not a test: nothing asserts on speed.
 set -euo pipefail
@@ -33,3 +34,7 @@ echo "== benches/compare: one thermal history and its summary (decoupling)"
 echo
 echo "== benches/compare: object temperature with u_c of a 1000 x 1000 frame (thermometry)"
 "$PY" benches/compare/thermometry_compare.py --lib "${CARGO_TARGET_DIR:-target}/release-c/librelicore.so"
+
+echo
+echo "== benches/compare: growth factor and rate, P(k), sigma(8/h Mpc), leapfrog factors (growth)"
+"$PY" benches/compare/growth_compare.py
