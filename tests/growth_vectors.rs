@@ -1,6 +1,6 @@
 //! Checks every structure-growth function against the shared reference vectors of
 //! `tests/data/growth.txt`: an independent scipy `solve_ivp` integration of the growth equation,
-//! the Heath (1977) integral, the Einstein-de Sitter closed form, an mpmath transcription of the
+//! the Heath (1977) integral, the Einstein-de Sitter closed form, an mpmath evaluation of the
 //! Eisenstein & Hu 1998 formulae, mpmath quadratures of σ(R), of the BAO distances and of the
 //! leapfrog factors, and facts of the trade (Linder 2005, Planck 2020, BOSS DR12; from memory);
 //! see the `source` column and `tests/reference/growth_vectors.py`. Tolerances come from the file.

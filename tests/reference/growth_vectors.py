@@ -19,7 +19,7 @@ every line):
                    D_u = (5/2) Omega_m E(a) int_0^a da'/(a' E)^3, f = dlnE/dlna + 1/(a^2 E^3 I);
                    mpmath quad at 30 digits.
   closed-form-einstein-de-sitter  D = a, f = 1; leapfrog drift 2 t_H (a1^-1/2 - a2^-1/2), kick 2 t_H (a2^1/2 - a1^1/2).
-  mpmath           Eisenstein & Hu 1998 (ApJ 496, 605) transcribed from the paper's equations
+  mpmath           Eisenstein & Hu 1998 (ApJ 496, 605) written from the paper's equations
                    (recalled from memory) at 30 digits; P(k) from its definition; sigma(R) by
                    mpmath quad of the same P(k) (D_u(1) from scipy-solve-ivp) over subintervals
                    (ln k below x = kR = 4, periods of the window from x = 4 to X >= 600 (doubled until the left-out
@@ -189,7 +189,7 @@ def heath(bg, z):
 
 
 # ---------------------------------------------------------------------------------------------
-# Eisenstein & Hu 1998, transcribed from the paper (mpmath)
+# Eisenstein & Hu 1998, written from the paper (mpmath)
 # ---------------------------------------------------------------------------------------------
 class EH:
     def __init__(self, wm, wb, t0):
