@@ -9,7 +9,7 @@ PY := $(VENV)/bin/python
 export PYO3_PYTHON := $(abspath $(PY))
 PREFIX ?= /usr/local
 
-.PHONY: all deps test demo bench install fmt-check clippy rust-test nostd c-test fortran-test python-build python-test bench-build coverage miri clean
+.PHONY: all deps test demo bench install fmt-check clippy rust-test nostd c-test fortran-test python-build python-test bench-build coverage miri fuzz clean
 
 all: test
 
@@ -87,6 +87,42 @@ miri:
 	else \
 	  echo "miri: skipped (no nightly toolchain with the miri component installed)"; \
 	fi
+
+# Coverage-guided fuzzing of the core (fuzz/, its own workspace; libFuzzer through cargo-fuzz,
+# which needs a nightly toolchain): each target for FUZZ_SECONDS seconds, one job, new inputs
+# kept in fuzz/target/corpus (the committed seeds in fuzz/corpus are read, not written),
+# crashes and contract violations written to fuzz/artifacts/<target>/. Not part of `make test`.
+# No sanitizer (-s none): the core forbids unsafe code, and the checks are the contract's.
+FUZZ_SECONDS ?= 60
+FUZZ_TARGETS := blackbody universe thermal_history response_and_calibration
+fuzz:
+	@if ! rustup toolchain list 2>/dev/null | grep -q '^nightly'; then \
+	  echo "fuzz: skipped (no nightly toolchain installed; cargo-fuzz needs one)"; \
+	  exit 0; \
+	fi; \
+	if ! cargo fuzz --version >/dev/null 2>&1; then \
+	  echo "fuzz: installing cargo-fuzz from crates.io"; \
+	  cargo install cargo-fuzz --locked; \
+	fi; \
+	mkdir -p fuzz/target/logs; \
+	failed=0; \
+	for t in $(FUZZ_TARGETS); do \
+	  mkdir -p fuzz/target/corpus/$$t; \
+	  echo "fuzz: $$t for $(FUZZ_SECONDS) s"; \
+	  rm -f fuzz/fuzz-0.log; \
+	  if (cd fuzz && cargo +nightly fuzz run -O -s none $$t target/corpus/$$t corpus/$$t -- \
+	        -max_total_time=$(FUZZ_SECONDS) -jobs=1 -timeout=30 -print_final_stats=1) \
+	        > fuzz/target/logs/$$t.cargo.log 2>&1; then result=ok; else result=FAILED; failed=1; fi; \
+	  if [ -f fuzz/fuzz-0.log ]; then mv fuzz/fuzz-0.log fuzz/target/logs/$$t.log; \
+	  else cp fuzz/target/logs/$$t.cargo.log fuzz/target/logs/$$t.log; fi; \
+	  execs=$$(grep -h 'stat::number_of_executed_units' fuzz/target/logs/$$t.log | tail -1 | awk '{print $$2}' || true); \
+	  echo "fuzz: $$t: $${execs:-?} executions (limit $(FUZZ_SECONDS) s; libFuzzer stops at the first finding): $$result"; \
+	  if [ "$$result" != ok ]; then \
+	    grep -h -A1 -E "panicked at|ERROR: libFuzzer|Test unit written" fuzz/target/logs/$$t.log | head -12 || true; \
+	    echo "fuzz: $$t: full log fuzz/target/logs/$$t.log; inputs in fuzz/artifacts/$$t/"; \
+	  fi; \
+	done; \
+	if [ $$failed = 0 ]; then echo "fuzz: no finding"; else echo "fuzz: findings above"; exit 1; fi
 
 # ---------------------------------------------------------------- demo and benches
 demo: deps python-build
