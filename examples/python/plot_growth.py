@@ -15,7 +15,7 @@ Writes three PNG files and prints their paths:
                           start and time steps marked;
   growth_rate_sigma8.png  f(z) sigma8(z) from z = 0 to 3 (the redshifts galaxy surveys measure),
                           with the growth-index approximation Omega_m(z)^0.55 D(z) sigma8 for
-                          comparison (gamma = 0.55 in LambdaCDM: Linder 2005, from memory).
+                          comparison (gamma = 0.55 in flat Lambda-CDM: Linder 2005, from memory).
 Every plotted value comes from relicore (one array call per curve); this script only calls it
 and draws (and forms the comparison curves named above).
 """
