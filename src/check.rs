@@ -24,6 +24,17 @@ pub(crate) fn positive<T: Real>(x: T, arg: u8) -> Result<T> {
     }
 }
 
+/// A value in (0, 1] (an emissivity, a transmittance, a scale factor up to today): `NonFinite`,
+/// `NonPositive`, or `OutOfDomain` above 1.
+#[inline(always)]
+pub(crate) fn unit_interval<T: Real>(x: T, arg: u8) -> Result<T> {
+    let x = positive(x, arg)?;
+    if x > T::one() {
+        return Err(Error::OutOfDomain(arg));
+    }
+    Ok(x)
+}
+
 /// A computed result when it is finite, else `OutOfDomain(arg)`: an input combination whose
 /// result overflows the floating-point type, or cannot be formed in it (∞ − ∞, 0/0 of
 /// intermediates that under- or overflowed), is refused rather than returned as ∞ or NaN. Every

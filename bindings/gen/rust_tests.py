@@ -13,20 +13,26 @@ from .table import ROOT, Function
 PATH = ROOT / "tests" / "gen" / "dispatch.rs"
 
 
-def _call(fn: Function, ty: str) -> str:
-    args = ", ".join(f"g({i})" for i in range(len(fn.args)))
+def _call(fn: Function, args: list[str], ty: str | None = None) -> str:
+    """The core call of `fn` on the argument expressions `args` (the receiver as `r`), as a
+    `Result`; `ty` names the float type of a function without a receiver where inference needs it."""
+    a = ", ".join(args)
     if fn.receiver == "none":
-        return f"relicore::{fn.topic}::{fn.name}::<{ty}>({args})"
+        turbofish = f"::<{ty}>" if ty else ""
+        return f"relicore::{fn.topic}::{fn.name}{turbofish}({a})"
     if fn.core:
         topic, _, name = fn.core.partition("::")
-        return f"relicore::{topic}::{name}(r{', ' if args else ''}{args})"
-    call = f"r.{fn.name}({args})"
-    return f"Ok({call})" if fn.infallible else call
+        return f"relicore::{topic}::{name}(r{', ' if a else ''}{a})"
+    call = f"r.{fn.name}({a})"
+    return f"Ok::<f64, relicore::Error>({call})" if fn.infallible else call
 
 
 def _function(name: str, receiver: str | None, ty: str, fns: list[Function]) -> str:
     recv = f"r: &{receiver}, " if receiver else ""
-    arms = [f'        ("{f.name}", {len(f.args)}) => {_call(f, ty)},' for f in fns]
+    arms = [
+        f'        ("{f.name}", {len(f.args)}) => {_call(f, [f"g({i})" for i in range(len(f.args))], ty)},'
+        for f in fns
+    ]
     return (
         f"/// The {name.split('_', 1)[1].replace('_', ' ')} functions of the table, by name and number of arguments.\n"
         "#[allow(dead_code)]\n"
@@ -36,7 +42,7 @@ def _function(name: str, receiver: str | None, ty: str, fns: list[Function]) -> 
     )
 
 
-def outputs(fns: list[Function]) -> dict[Path, str]:
+def dispatch_output(fns: list[Function]) -> str:
     none = [f for f in fns if f.receiver == "none" and not f.result_type]
     text = (
         banner("//", "the dispatch of the Rust vector tests")
@@ -58,7 +64,7 @@ def outputs(fns: list[Function]) -> dict[Path, str]:
         + _function("call_power_spectrum", "LinearPowerSpectrum<f64>", "f64",
                     [f for f in fns if f.receiver == "power_spectrum"])
     )
-    return {PATH: rustfmt(text)}
+    return rustfmt(text)
 
 
 # ---------------------------------------------------------------- regular-function tests and benches
@@ -106,17 +112,6 @@ def _lit(x: str, ty: str) -> str:
     return f"{float(x)!r}_{ty}"
 
 
-def _recv_call(fn: Function, args: list[str], suffix: str = "") -> str:
-    a = ", ".join(args)
-    if fn.receiver == "none":
-        return f"bb_or_topic::{fn.name}{suffix}({a})".replace("bb_or_topic", f"relicore::{fn.topic}")
-    if fn.core:
-        topic, _, name = fn.core.partition("::")
-        return f"relicore::{topic}::{name}(r{', ' if a else ''}{a})"
-    call = f"r.{fn.name}({a})"
-    return f"Ok::<f64, relicore::Error>({call})" if fn.infallible else call
-
-
 RECEIVERS_SETUP = """    let u = Universe::new(UniverseParameters {
         omega_baryon: 0.0493,
         ..UniverseParameters::new(67.36, 0.3153)
@@ -138,10 +133,10 @@ def bench_outputs(fns: list[Function]) -> str:
         args = [f"black_box({_lit(x, ty)})" for x in typical_arguments(fn)]
         r = {"none": "", "universe": "let r = &u; ", "history": "let r = &*h; ", "growth": "let r = &*gr; ",
              "power_spectrum": "let r = &*ps; "}[fn.receiver]
-        lines.append(f'    g.bench_function("{fn.name}", |b| b.iter(|| {{ {r}{_recv_call(fn, args)} }}));')
+        lines.append(f'    g.bench_function("{fn.name}", |b| b.iter(|| {{ {r}{_call(fn, args)} }}));')
         if fn.f32:
             args32 = [f"black_box({_lit(x, 'f32')})" for x in typical_arguments(fn)]
-            lines.append(f'    g.bench_function("{fn.name}_f32", |b| b.iter(|| {_recv_call(fn, args32)}));')
+            lines.append(f'    g.bench_function("{fn.name}_f32", |b| b.iter(|| {_call(fn, args32)}));')
     return rustfmt(
         banner("//", "criterion benches of every regular function")
         + "//! Criterion benches of every regular function of the table, one call at the arguments of\n"
@@ -172,7 +167,7 @@ def test_outputs(fns: list[Function]) -> str:
             vars_ = [f"x{i}" for i in range(n)]
             recv = {"none": "", "universe": "let r = &*UNIVERSE; ", "history": "let r = &*HISTORY; ",
                     "growth": "let r = &**GROWTH; ", "power_spectrum": "let r = &**SPECTRUM; "}[fn.receiver]
-            call = _recv_call(fn, vars_)
+            call = _call(fn, vars_)
             ok = "v.is_finite()"
             if fn.result_type:  # every real field finite
                 ok = "v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite())"
@@ -236,11 +231,5 @@ def test_outputs(fns: list[Function]) -> str:
     )
 
 
-_old_outputs = outputs
-
-
-def outputs(fns: list[Function]) -> dict[Path, str]:  # noqa: F811
-    out = _old_outputs(fns)
-    out[TEST_PATH] = test_outputs(fns)
-    out[BENCH_PATH] = bench_outputs(fns)
-    return out
+def outputs(fns: list[Function]) -> dict[Path, str]:
+    return {PATH: dispatch_output(fns), TEST_PATH: test_outputs(fns), BENCH_PATH: bench_outputs(fns)}

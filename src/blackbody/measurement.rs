@@ -82,7 +82,7 @@ use super::{
     band_radiance_wavelength, response_weighted_radiance,
     temperature_from_band_radiance_wavelength, temperature_from_response_weighted_radiance,
 };
-use crate::check::{finite, finite_result, non_negative, positive};
+use crate::check::{finite, finite_result, non_negative, positive, unit_interval};
 use crate::{ArrayResult, ElementError, Error, Real, Result};
 
 // ---------------------------------------------------------------------------------------------
@@ -253,20 +253,11 @@ struct Scene<T> {
 
 /// Checks ε, T_refl, τ, T_path (positions `first + 1 … first + 4`) in that order.
 fn check_scene<T: Real>(first: u8, e: T, tr: T, tau: T, tp: T) -> Result<(T, T, T, T)> {
-    let e = fraction(e, first + 1)?;
+    let e = unit_interval(e, first + 1)?;
     let tr = non_negative(tr, first + 2)?;
-    let tau = fraction(tau, first + 3)?;
+    let tau = unit_interval(tau, first + 3)?;
     let tp = non_negative(tp, first + 4)?;
     Ok((e, tr, tau, tp))
-}
-
-/// A value in (0, 1]: `NonFinite`, `NonPositive`, or `OutOfDomain` above 1.
-fn fraction<T: Real>(x: T, arg: u8) -> Result<T> {
-    let x = positive(x, arg)?;
-    if x > T::one() {
-        return Err(Error::OutOfDomain(arg));
-    }
-    Ok(x)
 }
 
 /// L(T) and, when `derivative`, L′(T), for T ≥ 0 (0 and 0 at T = 0).

@@ -17,8 +17,8 @@
 //! estimate exceeds 1e-14 of the value the shared adaptive quadrature integrates in N = ln a
 //! (drift = t_H ∫ dN/q, kick = t_H ∫ a dN/q, smooth over any range).
 
-use super::linear::{LinearGrowth, NCOEF, SUB, coefficients_of, locate_inside};
-use crate::check::{finite, finite_result};
+use super::linear::{LinearGrowth, NCOEF, SUB, coefficients_of, locate_inside, piece_bounds};
+use crate::check::{finite_result, unit_interval};
 use crate::cosmology::Universe;
 use crate::math::quadrature::{gauss_kronrod_15, integrate};
 use crate::{Error, Real, Result};
@@ -109,14 +109,6 @@ impl<T: Real> StepTable<T> {
     }
 }
 
-/// (lower a, width) of piece p of the growth table's layout (octave j = p / 8 is
-/// [2^−j−1, 2^−j), sub-piece k = p % 8 from below).
-fn piece_bounds(p: usize) -> (f64, f64) {
-    let (j, k) = (p / SUB, p % SUB);
-    let base = libm::ldexp(1.0, -(j as i32) - 1);
-    (base * (1.0 + k as f64 / SUB as f64), base / SUB as f64)
-}
-
 /// Rank of a piece in order of decreasing a (0: the piece ending at a = 1).
 fn rank_of_piece(p: usize) -> usize {
     (p / SUB) * SUB + (SUB - 1 - p % SUB)
@@ -152,8 +144,8 @@ impl<T: Real> LinearGrowth<T> {
     /// t_H ∫_{a1}^{a2} (drift: da/(a q), kick: da/q), signed, through the tables where they
     /// apply.
     fn step_factor(&self, start: T, end: T, drift: bool) -> Result<T> {
-        let a1 = scale_factor(start, 0)?;
-        let a2 = scale_factor(end, 1)?;
+        let a1 = unit_interval(start, 0)?;
+        let a2 = unit_interval(end, 1)?;
         let (lo, hi, sign) = if a1 <= a2 {
             (a1, a2, T::one())
         } else {
@@ -199,18 +191,6 @@ impl<T: Real> LinearGrowth<T> {
     ) -> Result<T> {
         self.step_factor(start_scale_factor, end_scale_factor, false)
     }
-}
-
-/// A scale factor: finite, > 0 (`NonPositive`) and ≤ 1 (`OutOfDomain`).
-fn scale_factor<T: Real>(a: T, arg: u8) -> Result<T> {
-    let a = finite(a, arg)?;
-    if !(a > T::zero()) {
-        return Err(Error::NonPositive(arg));
-    }
-    if a > T::one() {
-        return Err(Error::OutOfDomain(arg));
-    }
-    Ok(a)
 }
 
 impl<T: Real> Universe<T> {

@@ -138,6 +138,14 @@ fn chebyshev_node(m: usize) -> f64 {
     libm::cos(core::f64::consts::PI * (m as f64 + 0.5) / NODES as f64)
 }
 
+/// (lower a, width) of piece p of the table (octave j = p / 8 is [2^−j−1, 2^−j), sub-piece
+/// k = p % 8 from below).
+pub(crate) fn piece_bounds(p: usize) -> (f64, f64) {
+    let (j, k) = (p / SUB, p % SUB);
+    let base = libm::ldexp(1.0, -(j as i32) - 1);
+    (base * (1.0 + k as f64 / SUB as f64), base / SUB as f64)
+}
+
 /// Monomial coefficients (in t ∈ [−1, 1]) of a function of t from its values at the Chebyshev
 /// points, and whether the dropped coefficients are small (as [`coefficients`]).
 pub(crate) fn coefficients_of<T: Real>(g: impl Fn(f64) -> T) -> ([T; NCOEF], bool) {
@@ -294,10 +302,9 @@ impl<T: Real> LinearGrowth<T> {
         let mut fv = [T::zero(); NODES];
         // pieces in order of increasing a: the smallest octave first, sub-pieces from below
         for j in (0..OCTAVES).rev() {
-            let base = libm::ldexp(1.0, -(j as i32) - 1);
             for k in 0..SUB {
-                let lo = base * (1.0 + k as f64 / SUB as f64);
-                let width = base / SUB as f64;
+                let p = j * SUB + k;
+                let (lo, width) = piece_bounds(p);
                 // nodes in order of increasing a: m from NODES − 1 down to 0
                 for m in (0..NODES).rev() {
                     let a = T::c(lo + width * 0.5 * (chebyshev_node(m) + 1.0));
@@ -311,7 +318,6 @@ impl<T: Real> LinearGrowth<T> {
                         *fvv = p / (q * d);
                     }
                 }
-                let p = j * SUB + k;
                 let (dc, ok1) = coefficients(&du);
                 let (fc, ok2) = coefficients(&fv);
                 ok &= ok1 & ok2;

@@ -242,10 +242,10 @@ pub fn call_none_f32(name: &str, a: &[f32]) -> Option<Result<f32>> {
 pub fn call_universe(r: &Universe<f64>, name: &str, a: &[f64]) -> Option<Result<f64>> {
     let g = |i: usize| a.get(i).copied().unwrap_or(f64::NAN);
     Some(match (name, a.len()) {
-        ("hubble_distance_mpc", 0) => Ok(r.hubble_distance_mpc()),
-        ("hubble_time_gyr", 0) => Ok(r.hubble_time_gyr()),
-        ("omega_radiation", 0) => Ok(r.omega_radiation()),
-        ("omega_dark_energy", 0) => Ok(r.omega_dark_energy()),
+        ("hubble_distance_mpc", 0) => Ok::<f64, relicore::Error>(r.hubble_distance_mpc()),
+        ("hubble_time_gyr", 0) => Ok::<f64, relicore::Error>(r.hubble_time_gyr()),
+        ("omega_radiation", 0) => Ok::<f64, relicore::Error>(r.omega_radiation()),
+        ("omega_dark_energy", 0) => Ok::<f64, relicore::Error>(r.omega_dark_energy()),
         ("matter_radiation_equality_redshift", 0) => r.matter_radiation_equality_redshift(),
         ("dimensionless_hubble", 1) => r.dimensionless_hubble(g(0)),
         ("hubble_parameter_km_s_mpc", 1) => r.hubble_parameter_km_s_mpc(g(0)),
@@ -299,16 +299,28 @@ pub fn call_history(r: &ThermalHistory<f64>, name: &str, a: &[f64]) -> Option<Re
         ("optical_depth", 1) => r.optical_depth(g(0)),
         ("visibility", 1) => r.visibility(g(0)),
         ("sound_horizon_mpc", 1) => r.sound_horizon_mpc(g(0)),
-        ("last_scattering_redshift", 0) => Ok(r.last_scattering_redshift()),
-        ("drag_redshift", 0) => Ok(r.drag_redshift()),
-        ("sound_horizon_last_scattering_mpc", 0) => Ok(r.sound_horizon_last_scattering_mpc()),
-        ("sound_horizon_drag_mpc", 0) => Ok(r.sound_horizon_drag_mpc()),
-        ("angular_scale_last_scattering", 0) => Ok(r.angular_scale_last_scattering()),
-        ("age_at_last_scattering_yr", 0) => Ok(r.age_at_last_scattering_yr()),
-        ("temperature_at_last_scattering_k", 0) => Ok(r.temperature_at_last_scattering_k()),
-        ("visibility_peak_redshift", 0) => Ok(r.visibility_peak_redshift()),
-        ("thermal_decoupling_redshift", 0) => Ok(r.thermal_decoupling_redshift()),
-        ("reionization_optical_depth", 0) => Ok(r.reionization_optical_depth()),
+        ("last_scattering_redshift", 0) => Ok::<f64, relicore::Error>(r.last_scattering_redshift()),
+        ("drag_redshift", 0) => Ok::<f64, relicore::Error>(r.drag_redshift()),
+        ("sound_horizon_last_scattering_mpc", 0) => {
+            Ok::<f64, relicore::Error>(r.sound_horizon_last_scattering_mpc())
+        }
+        ("sound_horizon_drag_mpc", 0) => Ok::<f64, relicore::Error>(r.sound_horizon_drag_mpc()),
+        ("angular_scale_last_scattering", 0) => {
+            Ok::<f64, relicore::Error>(r.angular_scale_last_scattering())
+        }
+        ("age_at_last_scattering_yr", 0) => {
+            Ok::<f64, relicore::Error>(r.age_at_last_scattering_yr())
+        }
+        ("temperature_at_last_scattering_k", 0) => {
+            Ok::<f64, relicore::Error>(r.temperature_at_last_scattering_k())
+        }
+        ("visibility_peak_redshift", 0) => Ok::<f64, relicore::Error>(r.visibility_peak_redshift()),
+        ("thermal_decoupling_redshift", 0) => {
+            Ok::<f64, relicore::Error>(r.thermal_decoupling_redshift())
+        }
+        ("reionization_optical_depth", 0) => {
+            Ok::<f64, relicore::Error>(r.reionization_optical_depth())
+        }
         _ => return None,
     })
 }
@@ -340,9 +352,9 @@ pub fn call_power_spectrum(
         ("linear_power_spectrum_mpc3", 2) => r.linear_power_spectrum_mpc3(g(0), g(1)),
         ("density_rms_in_sphere", 2) => r.density_rms_in_sphere(g(0), g(1)),
         ("growth_rate_times_sigma8", 1) => r.growth_rate_times_sigma8(g(0)),
-        ("sigma8", 0) => Ok(r.sigma8()),
-        ("s8", 0) => Ok(r.s8()),
-        ("scalar_amplitude", 0) => Ok(r.scalar_amplitude()),
+        ("sigma8", 0) => Ok::<f64, relicore::Error>(r.sigma8()),
+        ("s8", 0) => Ok::<f64, relicore::Error>(r.s8()),
+        ("scalar_amplitude", 0) => Ok::<f64, relicore::Error>(r.scalar_amplitude()),
         _ => return None,
     })
 }
