@@ -17,6 +17,7 @@
 ! Conventions (the same in every face; the C side is described in include/relicore.h)
 ! * Units are SI (m, Hz, m-1, K, W, sr) unless the name says otherwise; kinds are those of
 !   iso_c_binding: real(c_double), real(c_float) for the _f32 twins, integer(c_int32_t) status.
+!   `use relicore` makes c_double, c_float, c_int, c_int32_t, c_int64_t and c_size_t available.
 ! * Every C function relicore_<name> has Fortran wrappers with the same words:
 !     relicore_<name>(...)                  an elemental function: the result, NaN on failure;
 !     call relicore_<name>_s(..., out, stat) the status form, an elemental subroutine: out is
@@ -110,11 +111,17 @@
 !   relicore_linear_power_spectrum_compute                        subroutine (optional stat)
 !@ coverage
 module relicore
-  use, intrinsic :: iso_c_binding, only: c_double, c_float, c_int32_t, c_int64_t, c_size_t, &
-      c_char, c_ptr, c_null_char, c_associated, c_f_pointer
+  use, intrinsic :: iso_c_binding, only: c_double, c_float, c_int, c_int32_t, c_int64_t, &
+      c_size_t, c_char, c_ptr, c_null_char, c_associated, c_f_pointer
   use, intrinsic :: ieee_arithmetic, only: ieee_value, ieee_quiet_nan
   implicit none
   private
+
+  ! The kinds of iso_c_binding that a caller declares its arguments and results with, re-exported
+  ! so that `use relicore` alone compiles `real(c_double) :: b` or `1.0_c_double`. They are the
+  ! intrinsic module's own entities: a program that also has `use, intrinsic :: iso_c_binding`
+  ! sees the same names without conflict.
+  public :: c_double, c_float, c_int, c_int32_t, c_int64_t, c_size_t
 
   ! ---------------------------------------------------------------- status codes and constants
   ! The #defines of include/relicore.h (tests/fortran/check_interfaces.py compares values).
