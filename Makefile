@@ -39,7 +39,7 @@ $(VENV)/.stamp: requirements-dev.txt
 	touch $@
 
 # ---------------------------------------------------------------- tests
-test: deps generated fmt-check clippy rust-test nostd c-test fortran-test python-test bench-build coverage miri
+test: deps generated fmt-check clippy rust-test nostd c-test fortran-test install-test python-test bench-build coverage miri
 	@echo "make test: all steps passed"
 
 fmt-check:
@@ -133,14 +133,81 @@ bench: deps python-build
 	bash benches/compare/run.sh
 
 # ---------------------------------------------------------------- install
+# make install PREFIX=/opt/relicore [DESTDIR=/staging/root]  (README, "Installing"):
+#   include/relicore.h, include/relicore/relicore.f90 (the Fortran module's source);
+#   lib/librelicore.so.<version>, its SONAME link lib/librelicore.so.<abi> (bindings/c/build.rs
+#   sets the SONAME; read back here with readelf) and the link lib/librelicore.so for -lrelicore;
+#   lib/librelicore.a;
+#   lib/pkgconfig/relicore.pc (shared, with a run path) and relicore-static.pc (the archive):
+#   only their `prefix=` line is written, comments are copied unchanged;
+#   lib/cmake/relicore/relicoreConfig.cmake and relicoreConfigVersion.cmake (imported targets
+#   relicore::relicore, relicore::relicore_static, relicore::fortran, relicore::fortran_static).
+# PREFIX must be absolute: it is written into the pkg-config files. The library is the one of
+# `cargo build -p relicore-capi --profile release-c` in $(CARGO_TARGET_DIR) (default target),
+# run here when cargo is on the PATH; without cargo (sudo make install, whose PATH and HOME are
+# root's) the library built before is installed.
+RELEASE_C := $(or $(CARGO_TARGET_DIR),target)/release-c
+CAPI_VERSION = $(shell sed -n 's/^version = "\(.*\)"$$/\1/p' bindings/c/Cargo.toml | head -n 1)
+INSTALL_ROOT = $(DESTDIR)$(PREFIX)
+
 install:
-	cargo build -p relicore-capi --profile release-c
-	install -d $(PREFIX)/include $(PREFIX)/lib $(PREFIX)/lib/pkgconfig $(PREFIX)/include/relicore
-	install -m 644 include/relicore.h $(PREFIX)/include/relicore.h
-	install -m 644 target/release-c/librelicore.a $(PREFIX)/lib/librelicore.a
-	install -m 755 target/release-c/librelicore.so $(PREFIX)/lib/librelicore.so
-	sed -e 's|@PREFIX@|$(PREFIX)|g' bindings/c/relicore.pc.in > $(PREFIX)/lib/pkgconfig/relicore.pc
-	install -m 644 bindings/fortran/relicore.f90 $(PREFIX)/include/relicore/relicore.f90
+	@case "$(PREFIX)" in /*) ;; *) echo "make install: PREFIX must be an absolute path (got '$(PREFIX)')"; exit 1 ;; esac
+	@[ -n "$(CAPI_VERSION)" ] || { echo "make install: no version in bindings/c/Cargo.toml"; exit 1; }
+	@if command -v cargo >/dev/null 2>&1; then \
+	  echo "cargo build -p relicore-capi --profile release-c"; \
+	  cargo build -p relicore-capi --profile release-c; \
+	elif [ -f $(RELEASE_C)/librelicore.so ] && [ -f $(RELEASE_C)/librelicore.a ]; then \
+	  echo "make install: no cargo on this PATH (sudo?): installing the library built before in $(RELEASE_C)"; \
+	else \
+	  echo "make install: no cargo on this PATH and no library in $(RELEASE_C): build it first, as the user"; \
+	  echo "who has the Rust toolchain, with 'cargo build -p relicore-capi --profile release-c'"; \
+	  exit 1; \
+	fi
+	@soname=$$(readelf -d $(RELEASE_C)/librelicore.so | sed -n 's/.*Library soname: \[\(.*\)\]$$/\1/p'); \
+	abi=$${soname#librelicore.so.}; \
+	if [ -z "$$soname" ] || [ "$$abi" = "$$soname" ]; then \
+	  echo "make install: $(RELEASE_C)/librelicore.so has no SONAME librelicore.so.<abi> (bindings/c/build.rs)"; exit 1; \
+	fi; \
+	real=librelicore.so.$(CAPI_VERSION); \
+	lib='$(INSTALL_ROOT)/lib'; \
+	set -x; \
+	install -d '$(INSTALL_ROOT)/include/relicore' "$$lib/pkgconfig" "$$lib/cmake/relicore"; \
+	install -m 644 include/relicore.h '$(INSTALL_ROOT)/include/relicore.h'; \
+	install -m 644 bindings/fortran/relicore.f90 '$(INSTALL_ROOT)/include/relicore/relicore.f90'; \
+	install -m 644 $(RELEASE_C)/librelicore.a "$$lib/librelicore.a"; \
+	install -m 755 $(RELEASE_C)/librelicore.so "$$lib/$$real"; \
+	ln -sfn "$$real" "$$lib/$$soname"; \
+	ln -sfn "$$soname" "$$lib/librelicore.so"; \
+	for pc in relicore relicore-static; do \
+	  sed -e 's|^prefix=@PREFIX@$$|prefix=$(PREFIX)|' bindings/c/$$pc.pc.in > "$$lib/pkgconfig/$$pc.pc"; \
+	done; \
+	for f in relicoreConfig relicoreConfigVersion; do \
+	  sed -e "s|@RELICORE_VERSION@|$(CAPI_VERSION)|g" -e "s|@RELICORE_SONAME@|$$soname|g" \
+	      -e "s|@RELICORE_ABI@|$$abi|g" -e "s|@RELICORE_SIZEOF_VOID_P@|$$(( $$(getconf LONG_BIT) / 8 ))|g" \
+	      bindings/c/cmake/$$f.cmake.in > "$$lib/cmake/relicore/$$f.cmake"; \
+	done
+	@echo "installed relicore $(CAPI_VERSION) in $(INSTALL_ROOT). Programs linked with"
+	@echo "'pkg-config --libs relicore' or CMake's relicore::relicore find the shared library by their"
+	@echo "run path; others need '$(PREFIX)/lib' in ld.so's path (ldconfig, see README) or LD_LIBRARY_PATH."
+
+# The install test (tests/install/run.sh): make install into a temporary prefix, then the README's
+# C, Fortran and CMake examples built and run as a user would. cmake and pkg-config come from
+# Debian's packages when missing (apt-get, as root or with sudo), as gfortran does above.
+.PHONY: install-test install-tools
+install-tools:
+	@missing=""; \
+	command -v cmake >/dev/null 2>&1 || missing="$$missing cmake"; \
+	command -v pkg-config >/dev/null 2>&1 || missing="$$missing pkgconf"; \
+	if [ -n "$$missing" ]; then \
+	  echo "installing$$missing from Debian's packages"; \
+	  SUDO=""; if [ "$$(id -u)" != 0 ]; then SUDO=sudo; fi; \
+	  $$SUDO apt-get update -qq && $$SUDO env DEBIAN_FRONTEND=noninteractive apt-get install -y -qq $$missing >/dev/null; \
+	fi
+	@cmake --version | head -1
+	@echo "pkg-config $$(pkg-config --version)"
+
+install-test: deps install-tools
+	bash tests/install/run.sh
 
 clean:
 	cargo clean
