@@ -6996,8 +6996,8 @@ int32_t relicore_transfer_function(const struct relicore_linear_power_spectrum *
  * `RELICORE_ERROR_INVALID_STRUCT` when `*power_spectrum` was not filled by a successful
  * `relicore_linear_power_spectrum_compute`; then every element of a non-NULL `out` is NaN.
  *
- * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
- * accuracy as there. Allocates nothing.
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation the
+ * CPU supports), with the scalar function's bits. Allocates nothing.
  *
  * # Safety
  * `wavenumbers_per_mpc` is NULL or points to n readable `double`; `out` is NULL or points to n
@@ -7060,8 +7060,8 @@ int32_t relicore_linear_power_spectrum_mpc3(const struct relicore_linear_power_s
  * `RELICORE_ERROR_INVALID_STRUCT` when `*power_spectrum` was not filled by a successful
  * `relicore_linear_power_spectrum_compute`; then every element of a non-NULL `out` is NaN.
  *
- * Each element is computed by the same code as the scalar function, so the two agree bit for bit;
- * accuracy as there. Allocates nothing.
+ * Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation the
+ * CPU supports), with the scalar function's bits. Allocates nothing.
  *
  * # Safety
  * `wavenumbers_per_mpc` is NULL or points to n readable `double`; `out` is NULL or points to n

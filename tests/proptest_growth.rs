@@ -215,6 +215,74 @@ proptest! {
     }
 }
 
+proptest! {
+    #![proptest_config(ProptestConfig::with_cases(64))]
+
+    /// The vectorised P(k) and T(k) array forms (both transfer forms, f64 and f32) are their
+    /// scalar functions bit for bit over the whole range of k: inside the kernels' common
+    /// domain, across its edges (k ≈ 1e-300, k s ≈ 1e6) and on bad input.
+    #[test]
+    fn spectrum_arrays_are_the_scalar_functions(
+        lks in prop::collection::vec(prop_oneof![6 => -12.0f64..8.0, 2 => -310.0f64..310.0], 0..300),
+        bad in prop::collection::vec(any64(), 0..8),
+        z in prop_oneof![4 => 0.0f64..20.0, 1 => any64()],
+    ) {
+        let mut ks: Vec<f64> = lks.iter().map(|l| 10f64.powf(*l)).collect();
+        ks.extend(bad);
+        let wiggle = spectrum();
+        let smooth = LinearPowerSpectrum::with_scalar_amplitude(
+            growth(), TransferForm::NoWiggle, 2.1e-9, 0.9649, 0.01).unwrap_or_else(|e| panic!("{e}"));
+        for s in [wiggle, &smooth] {
+            let mut out = vec![0.0; ks.len()];
+            let r = s.linear_power_spectrum_mpc3_array(&ks, z, &mut out);
+            for (&k, &o) in ks.iter().zip(out.iter()) {
+                match s.linear_power_spectrum_mpc3(k, z) {
+                    Ok(v) => prop_assert_eq!(v.to_bits(), o.to_bits(), "P at k={}", k),
+                    Err(_) => prop_assert!(o.is_nan() && r.is_err()),
+                }
+            }
+            let r = s.transfer_function_array(&ks, &mut out);
+            for (&k, &o) in ks.iter().zip(out.iter()) {
+                match s.transfer_function(k) {
+                    Ok(v) => prop_assert_eq!(v.to_bits(), o.to_bits(), "T at k={}", k),
+                    Err(_) => prop_assert!(o.is_nan() && r.is_err()),
+                }
+            }
+        }
+        let s32 = spectrum_f32();
+        let k32: Vec<f32> = ks.iter().map(|&k| k as f32).collect();
+        let mut out = vec![0.0f32; k32.len()];
+        let r = s32.linear_power_spectrum_mpc3_array(&k32, z as f32, &mut out);
+        for (&k, &o) in k32.iter().zip(out.iter()) {
+            match s32.linear_power_spectrum_mpc3(k, z as f32) {
+                Ok(v) => prop_assert_eq!(v.to_bits(), o.to_bits(), "P32 at k={}", k),
+                Err(_) => prop_assert!(o.is_nan() && r.is_err()),
+            }
+        }
+    }
+}
+
+fn spectrum_f32() -> &'static LinearPowerSpectrum<f32> {
+    static S: OnceLock<Box<LinearPowerSpectrum<f32>>> = OnceLock::new();
+    S.get_or_init(|| {
+        let h = 0.6736f32;
+        let mut p = UniverseParameters::new(67.36f32, 0.3153);
+        p.omega_baryon = 0.02237 / (h * h);
+        let u = Universe::new(p).unwrap_or_else(|e| panic!("{e}"));
+        let g = LinearGrowth::<f32>::new(&u).unwrap_or_else(|e| panic!("{e}"));
+        Box::new(
+            LinearPowerSpectrum::with_scalar_amplitude(
+                &g,
+                TransferForm::BaryonOscillations,
+                2.1e-9,
+                0.9649,
+                0.0,
+            )
+            .unwrap_or_else(|e| panic!("{e}")),
+        )
+    })
+}
+
 /// σ(R, z) = D(z) σ(R, 0) and σ(8/h Mpc, 0) = σ8 (definitions), a few cases (each σ is a
 /// quadrature).
 #[test]

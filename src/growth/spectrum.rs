@@ -10,13 +10,15 @@
 //! by central differences); the next terms are below 1e-15 of σ² for every R (g ∝ X⁻⁵).
 
 use super::linear::LinearGrowth;
-use super::transfer::EisensteinHu;
+use super::transfer::{self, EisensteinHu};
 use crate::check::{finite, finite_result, positive};
 use crate::math::quadrature::integrate;
 use crate::{Error, Real, Result};
 
 /// The pivot scale of the primordial spectrum, k_p = 0.05 Mpc⁻¹.
 pub const PIVOT_WAVENUMBER_PER_MPC: f64 = 0.05;
+/// ln k_p (ln 0.05 rounded; mpmath: −2.99573227355399099343…).
+const LN_PIVOT: f64 = -2.995732273553991;
 
 /// Which Eisenstein & Hu 1998 transfer function a power spectrum uses.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
@@ -61,7 +63,8 @@ fn top_hat<T: Real>(x: T) -> T {
                     + x2 * (T::c(-1.0 / 15_120.0)
                         + x2 * (T::c(1.0 / 1_330_560.0) + x2 * T::c(-1.0 / 172_972_800.0)))))
     } else {
-        T::c(3.0) * (x.sin() - x * x.cos()) / (x * x * x)
+        let (s, c) = crate::math::trig::sin_cos(x);
+        T::c(3.0) * (s - x * c) / (x * x * x)
     }
 }
 
@@ -214,24 +217,88 @@ impl<T: Real> LinearPowerSpectrum<T> {
         self.amplitude = a_s * c * c;
     }
 
+    /// T(k) of the chosen form at k > 0 (no checks), one body for the scalar and the array
+    /// functions (see `EisensteinHu::transfer_with`).
+    #[inline(always)]
+    fn transfer_with<const FAST: bool>(&self, k: T) -> (T, bool) {
+        if self.wiggles() {
+            self.transfer.transfer_with::<FAST>(k)
+        } else {
+            self.transfer.no_wiggle_with::<FAST>(k)
+        }
+    }
+
+    /// Whether T(k) is the full form (the array functions test this once, outside their loops,
+    /// so that the loops have no branch and are vectorised).
+    #[inline(always)]
+    fn wiggles(&self) -> bool {
+        self.form == 0 && self.transfer.has_baryons()
+    }
+
+    /// T(k) of the given form (`WIGGLES` = [`wiggles`](Self::wiggles)), straight-line.
+    #[inline(always)]
+    fn transfer_form<const WIGGLES: bool>(&self, k: T) -> (T, bool) {
+        if WIGGLES {
+            self.transfer.transfer_with::<true>(k)
+        } else {
+            self.transfer.no_wiggle_with::<true>(k)
+        }
+    }
+
     /// T(k) of the chosen form at k > 0 (no checks).
     #[inline]
     fn transfer_at(&self, k: T) -> T {
-        if self.form == 0 && self.transfer.has_baryons() {
-            self.transfer.transfer(k)
-        } else {
-            self.transfer.no_wiggle(k)
-        }
+        self.transfer_with::<false>(k).0
+    }
+
+    /// The primordial tilt (k/k_p)^(n_s − 1 + ½ α_s ln(k/k_p)) and T(k) at k > 0: one body for
+    /// the scalar and the array functions.
+    #[inline(always)]
+    fn tilt_and_transfer<const FAST: bool>(&self, k: T) -> (T, T, bool) {
+        let t = self.transfer_with::<FAST>(k);
+        self.tilt_with::<FAST>(k, t)
+    }
+
+    /// The tilt at k > 0 joined to a T(k) already computed (flag and all).
+    #[inline(always)]
+    fn tilt_with<const FAST: bool>(&self, k: T, (t, in_t): (T, bool)) -> (T, T, bool) {
+        let (lk, in_k) = transfer::ln_k::<T, FAST>(k);
+        let l = lk - T::c(LN_PIVOT);
+        let (tilt, in_e) = transfer::exp_k::<T, FAST>(
+            l * (self.spectral_index - T::one() + T::c(0.5) * self.running * l),
+        );
+        (tilt, t, in_t & in_k & in_e)
     }
 
     /// Δ²(k)/D_u² = k³P/(2π² D_u²) at k > 0 (no checks).
     #[inline]
     fn delta2_per_du2(&self, k: T) -> T {
-        let t = self.transfer_at(k);
-        let l = (k / T::c(PIVOT_WAVENUMBER_PER_MPC)).ln();
-        let tilt = (l * (self.spectral_index - T::one() + T::c(0.5) * self.running * l)).exp();
+        let (tilt, t, _) = self.tilt_and_transfer::<false>(k);
         let kt = k * k * t;
         self.amplitude * tilt * kt * kt
+    }
+
+    /// P(k) at k > 0 for D_u = du, one body for the scalar and the array functions: P =
+    /// 2π² Δ²/k³ = 2π² · amplitude · tilt · k T² D_u² (no k⁴ formed). The flag (array form)
+    /// also requires a normal result.
+    #[inline(always)]
+    fn power_with<const FAST: bool>(&self, k: T, du: T) -> (T, bool) {
+        self.power_from(k, du, self.tilt_and_transfer::<FAST>(k))
+    }
+
+    /// P from the tilt and T(k) at k (flag and all).
+    #[inline(always)]
+    fn power_from(&self, k: T, du: T, (tilt, t, inside): (T, T, bool)) -> (T, bool) {
+        let p = T::c(2.0 * core::f64::consts::PI * core::f64::consts::PI)
+            * self.amplitude
+            * tilt
+            * k
+            * (t * du)
+            * (t * du);
+        (
+            p,
+            inside & (p >= T::min_positive_value()) & (p <= T::max_value()),
+        )
     }
 
     /// σ(R) today, by the quadrature of the module doc.
@@ -365,6 +432,46 @@ impl<T: Real> LinearPowerSpectrum<T> {
         finite_result(self.transfer_at(k), 0)
     }
 
+    /// [`transfer_function`](Self::transfer_function) over many wavenumbers:
+    /// `out[i] = transfer_function(wavenumbers[i])`, bit for bit.
+    ///
+    /// * `wavenumbers_per_mpc`: k in Mpc⁻¹, each > 0.
+    /// * `out`: T(k), the same length as `wavenumbers_per_mpc`.
+    ///
+    /// Returns `Ok(())` when every element succeeded; otherwise failing elements are NaN and the
+    /// error names the first failing index; `LengthMismatch(1)` when `out` has another length.
+    /// Method: as [`linear_power_spectrum_mpc3_array`](Self::linear_power_spectrum_mpc3_array).
+    pub fn transfer_function_array(
+        &self,
+        wavenumbers_per_mpc: &[T],
+        out: &mut [T],
+    ) -> crate::ArrayResult {
+        let check = |k: T, (t, inside): (T, bool)| {
+            let k_in = (k >= T::min_positive_value()) & (k <= T::max_value());
+            let t_in = (t >= T::min_positive_value()) & (t <= T::max_value());
+            (t, inside & k_in & t_in)
+        };
+        let scalar = |k| self.transfer_function(k);
+        let x = wavenumbers_per_mpc;
+        if self.wiggles() {
+            crate::array::blockwise(
+                x,
+                out,
+                1,
+                |k| check(k, self.transfer_form::<true>(k)),
+                scalar,
+            )
+        } else {
+            crate::array::blockwise(
+                x,
+                out,
+                1,
+                |k| check(k, self.transfer_form::<false>(k)),
+                scalar,
+            )
+        }
+    }
+
     /// The linear matter power spectrum P(k, z) = (2π²/k³) A_s (k/k_p)^(n_s − 1 + ½ α_s ln(k/k_p))
     /// · [(2/5) (ck/H0)² T(k) D_u(a)/Ω_m]², Mpc³ (module doc of [`crate::growth`]).
     ///
@@ -385,17 +492,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
                 Error::Negative(_) => Error::Negative(1),
                 other => other,
             })?;
-        // P = 2π² Δ²/k³ = 2π² · amplitude · tilt · k T² D_u² (no k⁴ formed)
-        let t = self.transfer_at(k);
-        let l = (k / T::c(PIVOT_WAVENUMBER_PER_MPC)).ln();
-        let tilt = (l * (self.spectral_index - T::one() + T::c(0.5) * self.running * l)).exp();
-        let p = T::c(2.0 * core::f64::consts::PI * core::f64::consts::PI)
-            * self.amplitude
-            * tilt
-            * k
-            * (t * du)
-            * (t * du);
-        finite_result(p, 0)
+        finite_result(self.power_with::<false>(k, du).0, 0)
     }
 
     /// [`linear_power_spectrum_mpc3`](Self::linear_power_spectrum_mpc3) at one redshift over
@@ -407,24 +504,51 @@ impl<T: Real> LinearPowerSpectrum<T> {
     ///
     /// Returns `Ok(())` when every element succeeded; otherwise failing elements are NaN and the
     /// error names the first failing index; `LengthMismatch(2)` when `out` has another length.
-    /// Method: the scalar function per element (the transfer function's logarithms, powers and
-    /// sine are library calls, so this loop is not vectorised).
+    /// Method: D_u(z) once, then the scalar function's body as straight-line code (the
+    /// logarithm, exponential and sine kernels of `math`), which the compiler vectorises; a
+    /// block with an element outside the kernels' common domain (k below about 1e-300 or above
+    /// about 6000 Mpc⁻¹, a result that is not a normal number, bad input) is computed again by
+    /// the scalar function.
     pub fn linear_power_spectrum_mpc3_array(
         &self,
         wavenumbers_per_mpc: &[T],
         z: T,
         out: &mut [T],
     ) -> crate::ArrayResult {
-        crate::array::blockwise(
-            wavenumbers_per_mpc,
-            out,
-            2,
-            |k| match self.linear_power_spectrum_mpc3(k, z) {
-                Ok(v) => (v, true),
-                Err(_) => (T::nan(), false),
-            },
-            |k| self.linear_power_spectrum_mpc3(k, z),
-        )
+        let du = match crate::check::non_negative(z, 1)
+            .and_then(|z| self.growth.unnormalized_growth_factor(z))
+        {
+            Ok(du) => du,
+            Err(_) => T::nan(),
+        };
+        let valid = du.is_finite();
+        let scalar = |k| self.linear_power_spectrum_mpc3(k, z);
+        let x = wavenumbers_per_mpc;
+        if self.wiggles() {
+            crate::array::blockwise(
+                x,
+                out,
+                2,
+                |k| {
+                    let t = self.transfer_form::<true>(k);
+                    let (p, inside) = self.power_from(k, du, self.tilt_with::<true>(k, t));
+                    (p, inside & valid)
+                },
+                scalar,
+            )
+        } else {
+            crate::array::blockwise(
+                x,
+                out,
+                2,
+                |k| {
+                    let t = self.transfer_form::<false>(k);
+                    let (p, inside) = self.power_from(k, du, self.tilt_with::<true>(k, t));
+                    (p, inside & valid)
+                },
+                scalar,
+            )
+        }
     }
 
     /// σ(R, z): the r.m.s. linear density contrast in a top-hat sphere of radius R,

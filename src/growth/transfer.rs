@@ -5,22 +5,13 @@
 //! (`tests/reference/growth_vectors.py`).
 
 use crate::check::{finite, finite_result, non_negative, positive};
+use crate::math::{exp, log, trig};
 use crate::{Error, Real, Result};
 
 /// x^p for x > 0.
 #[inline]
 fn pow<T: Real>(x: T, p: T) -> T {
     (p * x.ln()).exp()
-}
-
-/// j0(x) = sin x / x, with its series below 1e-4 (error below x⁴/120).
-#[inline]
-fn spherical_bessel_j0<T: Real>(x: T) -> T {
-    if x.abs() < T::c(1e-4) {
-        T::one() - x * x / T::c(6.0)
-    } else {
-        x.sin() / x
-    }
 }
 
 /// The k-independent coefficients of the two fitting formulae for one (ω_m, ω_b, T0).
@@ -32,6 +23,12 @@ pub(crate) struct EisensteinHu<T> {
     /// k_eq (eq. 3), Mpc⁻¹; 1/(13.41 k_eq) for q (eq. 10).
     k_eq: T,
     q_per_k: T,
+    /// ln q_per_k and ln k_Silk, for the powers q^1.08 and (k/k_Silk)^1.4 of the kernels.
+    ln_q_per_k: T,
+    ln_k_silk: T,
+    /// 1/β_node and 14.2/α_c (eq. 20), for the kernels.
+    inv_beta_node: T,
+    c_alpha: T,
     /// Sound horizon at the drag epoch s (eq. 6), Mpc.
     s: T,
     /// Silk damping scale (eq. 7), Mpc⁻¹.
@@ -94,6 +91,8 @@ impl<T: Real> EisensteinHu<T> {
         let b1 = c(0.944) / (T::one() + pow(c(458.0) * wm, c(-0.708)));
         let b2 = pow(c(0.395) * wm, c(-0.0266));
         e.beta_c = T::one() / (T::one() + b1 * (pow(fc, b2) - T::one()));
+        e.ln_q_per_k = e.q_per_k.ln();
+        e.c_alpha = c(14.2) / e.alpha_c;
         if wb > T::zero() {
             e.has_baryons = 1;
             // eq. 4: drag epoch
@@ -123,6 +122,8 @@ impl<T: Real> EisensteinHu<T> {
             e.beta_b =
                 c(0.5) + fb + (c(3.0) - c(2.0) * fb) * ((c(17.2) * wm).powi(2) + T::one()).sqrt();
             e.beta_node = c(8.41) * pow(wm, c(0.435));
+            e.ln_k_silk = e.k_silk.ln();
+            e.inv_beta_node = T::one() / e.beta_node;
         }
         for v in [
             e.alpha_gamma,
@@ -135,6 +136,10 @@ impl<T: Real> EisensteinHu<T> {
             e.beta_b,
             e.beta_node,
             e.q_per_k,
+            e.ln_q_per_k,
+            e.ln_k_silk,
+            e.inv_beta_node,
+            e.c_alpha,
         ] {
             if !v.is_finite() {
                 return Err(Error::OutOfDomain(first));
@@ -154,51 +159,93 @@ impl<T: Real> EisensteinHu<T> {
         self.has_baryons == 1
     }
 
-    /// T̃0(k, α_c, β_c) of eqs. 19–20 at q = k/(13.41 k_eq).
-    #[inline]
-    fn t_tilde(q: T, alpha_c: T, beta_c: T) -> T {
-        let l = (T::c(core::f64::consts::E) + T::c(1.8) * beta_c * q).ln();
-        let cc = T::c(14.2) / alpha_c + T::c(386.0) / (T::one() + T::c(69.9) * pow(q, T::c(1.08)));
-        l / (l + cc * q * q)
-    }
-
     /// The full form T(k) (eqs. 8, 16–24) at k > 0 in Mpc⁻¹; requires baryons.
+    #[inline]
     pub(crate) fn transfer(&self, k: T) -> T {
-        let one = T::one();
-        let q = k * self.q_per_k;
-        let ks = k * self.s;
-        // eq. 18 and 17: cold dark matter
-        let ks54 = ks / T::c(5.4);
-        let ks54_2 = ks54 * ks54;
-        let f = one / (one + ks54_2 * ks54_2);
-        let tc = f * Self::t_tilde(q, one, self.beta_c)
-            + (one - f) * Self::t_tilde(q, self.alpha_c, self.beta_c);
-        // eq. 22: s̃ = s/[1 + (β_node/ks)³]^(1/3), so k s̃ = ks/[1 + (β_node/ks)³]^(1/3),
-        // written without overflow at small and large ks
-        let bn = self.beta_node;
-        let x = if ks < bn {
-            ks * ks / (ks * ks * ks + bn * bn * bn).cbrt()
-        } else {
-            let r = bn / ks;
-            ks / (one + r * r * r).cbrt()
-        };
-        // eq. 21: baryons
-        let ks52 = ks / T::c(5.2);
-        let first = Self::t_tilde(q, one, one) / (one + ks52 * ks52);
-        let second = if ks > T::zero() {
-            let r = self.beta_b / ks;
-            let damp = pow(k / self.k_silk, T::c(1.4));
-            self.alpha_b / (one + r * r * r) * (-damp).exp()
-        } else {
-            T::zero()
-        };
-        let tb = (first + second) * spherical_bessel_j0(x);
-        // eq. 16
-        self.fb * tb + self.fc * tc
+        self.transfer_with::<false>(k).0
     }
 
     /// The form without oscillations (eqs. 26–31) at k > 0 in Mpc⁻¹.
+    #[inline]
     pub(crate) fn no_wiggle(&self, k: T) -> T {
+        self.no_wiggle_with::<false>(k).0
+    }
+
+    /// The full form T(k) (eqs. 8, 16–24), one body for the scalar function (`FAST` false:
+    /// the kernels of `math` with their `libm` fallbacks, the flag always true) and for the
+    /// array functions (`FAST` true: straight-line code and whether every kernel stayed in its
+    /// branch-free domain, where the bits are those of the scalar form).
+    ///
+    /// Written with ln k computed once: q^1.08 = e^(1.08 ln q), (k/k_Silk)^1.4 =
+    /// e^(1.4 (ln k − ln k_Silk)); the node shift of eq. 22 as k s̃ = ks·m̂·(1 + m³)^(−1/3)
+    /// with m = min(β_node/ks, ks/β_node) and m̂ = m below the node (ks < β_node), 1 above
+    /// (no overflow at either end); the Silk damping e^(−(k/k_Silk)^1.4) with its exponent
+    /// capped at 700 (`f64`; 80 in `f32`), where it is below 1e-304 and the baryon term it
+    /// multiplies is lost against the other one.
+    #[inline(always)]
+    pub(crate) fn transfer_with<const FAST: bool>(&self, k: T) -> (T, bool) {
+        let one = T::one();
+        let c = |x: f64| T::c(x);
+        let (lk, in_k) = ln_k::<T, FAST>(k);
+        let q = k * self.q_per_k;
+        // q^1.08 (eq. 20)
+        let (q108, in_q) = exp_k::<T, FAST>(c(1.08) * (lk + self.ln_q_per_k));
+        let ks = k * self.s;
+        // eqs. 19–20: T̃0 for (α, β) = (1, β_c), (α_c, β_c), (1, 1)
+        let (l_c, in_lc) = ln_k::<T, FAST>(c(core::f64::consts::E) + c(1.8) * self.beta_c * q);
+        let (l_1, in_l1) = ln_k::<T, FAST>(c(core::f64::consts::E) + c(1.8) * q);
+        let c386 = c(386.0) / (one + c(69.9) * q108);
+        let q2 = q * q;
+        let tt_1c = l_c / (l_c + (c(14.2) + c386) * q2);
+        let tt_ac = l_c / (l_c + (self.c_alpha + c386) * q2);
+        let tt_11 = l_1 / (l_1 + (c(14.2) + c386) * q2);
+        // eq. 18 and 17: cold dark matter
+        let ks54 = ks * c(1.0 / 5.4);
+        let ks54_2 = ks54 * ks54;
+        let f = one / (one + ks54_2 * ks54_2);
+        let tc = f * tt_1c + (one - f) * tt_ac;
+        // eq. 22: k s̃ = ks/[1 + (β_node/ks)³]^(1/3)
+        let bn = self.beta_node;
+        let below = ks < bn;
+        let inv_ks = one / ks;
+        let m = if below {
+            ks * self.inv_beta_node
+        } else {
+            bn * inv_ks
+        };
+        let (l_m, in_m) = ln_1p_k::<T, FAST>(m * m * m);
+        let (shrink, in_s) = exp_k::<T, FAST>(l_m * c(-1.0 / 3.0));
+        let x = ks * (if below { m } else { one }) * shrink;
+        // eq. 21: baryons
+        let ks52 = ks * c(1.0 / 5.2);
+        let first = tt_11 / (one + ks52 * ks52);
+        let r = self.beta_b * inv_ks;
+        let (damp, in_d) = exp_k::<T, FAST>(c(1.4) * (lk - self.ln_k_silk));
+        let cap = if T::MANTISSA_DIGITS < 53 {
+            c(80.0)
+        } else {
+            c(700.0)
+        };
+        let (silk, in_e) = exp_k::<T, FAST>(-(damp.min(cap)));
+        let second = self.alpha_b / (one + r * r * r) * silk;
+        let (sin_x, _, in_x) = sin_cos_k::<T, FAST>(x);
+        let j0 = if x < c(1e-4) {
+            one - x * x * c(1.0 / 6.0)
+        } else {
+            sin_x / x
+        };
+        let tb = (first + second) * j0;
+        // eq. 16
+        (
+            self.fb * tb + self.fc * tc,
+            in_k & in_q & in_lc & in_l1 & in_m & in_s & in_d & in_e & in_x,
+        )
+    }
+
+    /// The form without oscillations (eqs. 26–31), one body for the scalar and the array
+    /// functions as [`transfer_with`](Self::transfer_with).
+    #[inline(always)]
+    pub(crate) fn no_wiggle_with<const FAST: bool>(&self, k: T) -> (T, bool) {
         let ks = T::c(0.43) * k * self.s_nw;
         let ks2 = ks * ks;
         // eq. 30: Γ_eff h = ω_m [α_Γ + (1 − α_Γ)/(1 + (0.43 k s)⁴)]
@@ -207,9 +254,51 @@ impl<T: Real> EisensteinHu<T> {
         // eq. 28: q = k Θ²/(Γ_eff h)
         let q = k * self.theta2 / gamma_h;
         // eq. 29
-        let l0 = (T::c(2.0 * core::f64::consts::E) + T::c(1.8) * q).ln();
+        let (l0, inside) = ln_k::<T, FAST>(T::c(2.0 * core::f64::consts::E) + T::c(1.8) * q);
         let c0 = T::c(14.2) + T::c(731.0) / (T::one() + T::c(62.5) * q);
-        l0 / (l0 + c0 * q * q)
+        (l0 / (l0 + c0 * q * q), inside)
+    }
+}
+
+/// ln x by the kernel of `math::log`: straight-line with its domain flag (`FAST`), or with its
+/// `libm` fallback and the flag true.
+#[inline(always)]
+pub(crate) fn ln_k<T: Real, const FAST: bool>(x: T) -> (T, bool) {
+    if FAST {
+        log::ln_fast(x)
+    } else {
+        (log::ln(x), true)
+    }
+}
+
+/// ln(1 + x) by the kernel of `math::log`, as [`ln_k`].
+#[inline(always)]
+fn ln_1p_k<T: Real, const FAST: bool>(x: T) -> (T, bool) {
+    if FAST {
+        log::ln_1p_fast(x)
+    } else {
+        (log::ln_1p(x), true)
+    }
+}
+
+/// e^x by the kernel of `math::exp`, as [`ln_k`].
+#[inline(always)]
+pub(crate) fn exp_k<T: Real, const FAST: bool>(x: T) -> (T, bool) {
+    if FAST {
+        exp::exp_fast(x)
+    } else {
+        (exp::exp(x), true)
+    }
+}
+
+/// sin x and cos x by the kernel of `math::trig`, as [`ln_k`].
+#[inline(always)]
+pub(crate) fn sin_cos_k<T: Real, const FAST: bool>(x: T) -> (T, T, bool) {
+    if FAST {
+        trig::sin_cos_fast(x)
+    } else {
+        let (s, c) = trig::sin_cos(x);
+        (s, c, true)
     }
 }
 

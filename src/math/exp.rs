@@ -427,6 +427,18 @@ fn exp_outside<T: Real>(xh: T) -> T {
     }
 }
 
+/// The common case of [`exp`] as straight-line code for the array functions: e^x and whether
+/// x is inside that case (−(ln MAX − 1.5) < x < ln MAX − 1, where the result is a normal
+/// number); outside, the value is garbage. Inside, the bits are those of [`exp`].
+#[inline(always)]
+pub(crate) fn exp_fast<T: Real>(x: T) -> (T, bool) {
+    let inside = (x > -(T::LN_MAX - T::c(1.5))) & (x < T::LN_MAX - T::one());
+    let xr = if inside { x } else { T::zero() };
+    let Reduced { m, th, tl, r1, pl } = reduce(xr, Some(T::zero()));
+    let p = r1 + pl;
+    ((th + (tl + th * p)) * T::pow2i(m), inside)
+}
+
 /// e^x for a plain x: [`exp_dd`] with xl = 0.
 #[inline]
 pub fn exp<T: Real>(x: T) -> T {

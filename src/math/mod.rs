@@ -7,6 +7,8 @@
 //!   deterministic), the exponential of the Planck kernel.
 //! * [`log`]: ln x and ln(1 + x), table-free and branch-free in their common case (vectorised
 //!   in the array functions), within 1 ulp.
+//! * [`trig`]: sin x and cos x together, branch-free in their common case (|x| ≤ 1e6), for the
+//!   array functions of the transfer function and the top-hat window.
 //! * [`roots`]: the one root finder, a safeguarded (bracketed) Newton iteration.
 //! * [`ode`]: the one stiff ODE stepper, the Rosenbrock 4(3) method of Kaps & Rentrop with
 //!   Shampine's parameters, fixed-size state, no heap (the recombination history).
@@ -18,3 +20,4 @@ pub mod log;
 pub mod ode;
 pub mod quadrature;
 pub mod roots;
+pub mod trig;

@@ -11,6 +11,7 @@ use crate::stored::{stored_array, stored_scalar, stored_summary, stored_through_
 use crate::universe::relicore_universe;
 use relicore::ArrayResult;
 use relicore::growth::LinearGrowth;
+use relicore::growth::LinearPowerSpectrum;
 use relicore_dispatch::widest;
 
 /// Hubble distance at z, D_H(z) = c/H(z), Mpc.
@@ -723,8 +724,8 @@ pub unsafe extern "C" fn relicore_transfer_function(
 /// `RELICORE_ERROR_INVALID_STRUCT` when `*power_spectrum` was not filled by a successful
 /// `relicore_linear_power_spectrum_compute`; then every element of a non-NULL `out` is NaN.
 ///
-/// Each element is computed by the same code as the scalar function, so the two agree bit for bit;
-/// accuracy as there. Allocates nothing.
+/// Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation the
+/// CPU supports), with the scalar function's bits. Allocates nothing.
 ///
 /// # Safety
 /// `wavenumbers_per_mpc` is NULL or points to n readable `double`; `out` is NULL or points to n
@@ -740,8 +741,12 @@ pub unsafe extern "C" fn relicore_transfer_function_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        stored_array(power_spectrum, wavenumbers_per_mpc, n, out, |r, x| {
-            r.transfer_function(x)
+        stored_through_array(power_spectrum, wavenumbers_per_mpc, n, out, |r, x, out| {
+            widest!(
+                |r: &LinearPowerSpectrum<f64>, x: &[f64], out: &mut [f64]| -> ArrayResult {
+                    r.transfer_function_array(x, out)
+                }
+            )
         })
     }
 }
@@ -803,8 +808,8 @@ pub unsafe extern "C" fn relicore_linear_power_spectrum_mpc3(
 /// `RELICORE_ERROR_INVALID_STRUCT` when `*power_spectrum` was not filled by a successful
 /// `relicore_linear_power_spectrum_compute`; then every element of a non-NULL `out` is NaN.
 ///
-/// Each element is computed by the same code as the scalar function, so the two agree bit for bit;
-/// accuracy as there. Allocates nothing.
+/// Computed by the core's array form (blocks of 64 elements in SIMD, in the widest compilation the
+/// CPU supports), with the scalar function's bits. Allocates nothing.
 ///
 /// # Safety
 /// `wavenumbers_per_mpc` is NULL or points to n readable `double`; `out` is NULL or points to n
@@ -821,8 +826,12 @@ pub unsafe extern "C" fn relicore_linear_power_spectrum_mpc3_array(
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid for n elements (this function's contract).
     unsafe {
-        stored_array(power_spectrum, wavenumbers_per_mpc, n, out, |r, x| {
-            r.linear_power_spectrum_mpc3(x, z)
+        stored_through_array(power_spectrum, wavenumbers_per_mpc, n, out, |r, x, out| {
+            widest!(|r: &LinearPowerSpectrum<f64>,
+                     x: &[f64],
+                     z: f64,
+                     out: &mut [f64]|
+             -> ArrayResult { r.linear_power_spectrum_mpc3_array(x, z, out) })
         })
     }
 }

@@ -1190,7 +1190,7 @@ pub(crate) static SPECTRUM: &[Spec<S>] = &[
         args: &["wavenumber_per_mpc"],
         free: false,
         body: Body::A1(|p, wavenumber_per_mpc| p.transfer_function(wavenumber_per_mpc).lift()),
-        array: None,
+        array: Some(transfer_function_array),
         frame: None,
         width: 1,
     },
@@ -1201,7 +1201,7 @@ pub(crate) static SPECTRUM: &[Spec<S>] = &[
         args: &["wavenumber_per_mpc", "z"],
         free: false,
         body: Body::A2(|p, wavenumber_per_mpc, z| p.linear_power_spectrum_mpc3(wavenumber_per_mpc, z).lift()),
-        array: None,
+        array: Some(linear_power_spectrum_mpc3_array),
         frame: None,
         width: 1,
     },
@@ -1320,6 +1320,19 @@ fn growth_factor_array(r: &G, x: &[f64], rest: &[f64], out: &mut [f64]) -> Array
 fn growth_rate_array(r: &G, x: &[f64], rest: &[f64], out: &mut [f64]) -> ArrayResult {
     let _ = rest;
     widest!(|r: &G, x: &[f64], out: &mut [f64]| -> ArrayResult { r.growth_rate_array(x, out) })
+}
+
+/// `transfer_function_array` of the core, compiled for each SIMD level and chosen at run time.
+fn transfer_function_array(r: &S, x: &[f64], rest: &[f64], out: &mut [f64]) -> ArrayResult {
+    let _ = rest;
+    widest!(|r: &S, x: &[f64], out: &mut [f64]| -> ArrayResult { r.transfer_function_array(x, out) })
+}
+
+/// `linear_power_spectrum_mpc3_array` of the core, compiled for each SIMD level and chosen at run time.
+fn linear_power_spectrum_mpc3_array(r: &S, x: &[f64], rest: &[f64], out: &mut [f64]) -> ArrayResult {
+    let mut rest = rest.iter().copied();
+    let z = rest.next().unwrap_or(f64::NAN);
+    widest!(|r: &S, x: &[f64], z: f64, out: &mut [f64]| -> ArrayResult { r.linear_power_spectrum_mpc3_array(x, z, out) })
 }
 
 /// `object_temperature_wavelength_array` of the core (a frame: the first 1 argument(s) single values, the others slices of the chunk's length or of one value).
