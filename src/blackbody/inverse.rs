@@ -39,9 +39,17 @@ pub fn brightness_temperature_wavelength<T: Real>(
 
 #[inline(always)]
 pub(crate) fn brightness_temperature_wavelength_unchecked<T: Real>(l: T, b: T) -> T {
+    brightness_temperature_wavelength_parts(l, b).0
+}
+
+/// The brightness temperature at a wavelength (λ, L > 0 checked by the caller) with the
+/// constants it used: (T, c₂/λ, 2hc²/λ⁵), so that a caller that also needs ∂B_λ/∂T at T
+/// ([`derivative_at_brightness`](super::measurement::derivative_at_brightness)) forms them once.
+#[inline(always)]
+pub(crate) fn brightness_temperature_wavelength_parts<T: Real>(l: T, b: T) -> (T, T, T) {
     let (c2_over_l, a) = brightness_constants_wavelength(l);
     let ln_a = || T::c(k::FIRST_RADIATION_RADIANCE).ln() - T::c(5.0) * l.ln();
-    c2_over_l / ln1p_quotient(a, ln_a, b)
+    (c2_over_l / ln1p_quotient(a, ln_a, b), c2_over_l, a)
 }
 
 /// The two constants of the brightness temperature at one wavelength: c₂/λ (rounded from

@@ -70,11 +70,13 @@ use super::band::{band_radiance_and_derivative_wavelength_unchecked, check_band}
 use super::inverse::{
     brightness_constants_wavelength, brightness_temperature_frequency,
     brightness_temperature_wavelength, brightness_temperature_wavelength_fast,
+    brightness_temperature_wavelength_parts,
 };
+use super::kernel::two_h_nu3_over_c2;
 use super::planck::{
-    radiance_and_derivative_wavelength_fast, radiance_and_derivative_wavelength_unchecked,
-    radiance_temperature_derivative_frequency, radiance_temperature_derivative_wavelength,
-    spectral_radiance_frequency, spectral_radiance_wavelength,
+    radiance_and_derivative_wavelength_unchecked, radiance_temperature_derivative_frequency,
+    radiance_temperature_derivative_wavelength, spectral_radiance_frequency,
+    spectral_radiance_wavelength,
 };
 use super::response::{check_table, response_weighted_derivative_unchecked};
 use super::uncertainty::{SENSITIVITY_CAPACITY, TemperatureUncertainty, sum_of_squares_is_safe};
@@ -83,6 +85,8 @@ use super::{
     temperature_from_band_radiance_wavelength, temperature_from_response_weighted_radiance,
 };
 use crate::check::{finite, finite_result, non_negative, positive, unit_interval};
+use crate::constants as k;
+use crate::math::dd;
 use crate::{ArrayResult, ElementError, Error, Real, Result};
 
 // ---------------------------------------------------------------------------------------------
@@ -92,7 +96,7 @@ use crate::{ArrayResult, ElementError, Error, Real, Result};
 /// The blackbody quantity an instrument measures, L(T), with its derivative and its inverse.
 /// Implementations are built from checked spectral arguments; `first` is the position of the
 /// first scene argument (the signal or the object temperature) in the public functions.
-trait Quantity<T: Real> {
+pub(crate) trait Quantity<T: Real> {
     /// Position of the signal (or object temperature) argument.
     const FIRST: u8;
     /// L(T) for T > 0.
@@ -106,6 +110,15 @@ trait Quantity<T: Real> {
     fn radiance_and_derivative(&self, t: T) -> Result<(T, T)> {
         Ok((self.radiance(t)?, self.derivative(t)?))
     }
+    /// The T > 0 with L(T) = l and dL/dT there (the temperature bits of
+    /// [`Quantity::temperature`]): by default [`Quantity::derivative`] at T; the one-wavelength
+    /// and one-frequency forms give the derivative in closed form from l
+    /// ([`derivative_at_brightness`]). The outer error is that of the temperature, the inner one
+    /// that of the derivative.
+    fn temperature_and_derivative(&self, l: T) -> Result<(T, Result<T>)> {
+        let t = self.temperature(l)?;
+        Ok((t, self.derivative(t)))
+    }
     /// The constants of the branch-free frame path of this form, where it has one.
     fn frame_constants(&self) -> Option<FrameConstants<T>> {
         None
@@ -115,16 +128,27 @@ trait Quantity<T: Real> {
 /// What the branch-free frame path of the one-wavelength form needs: λ, c₂/λ and 2hc²/λ⁵
 /// ([`brightness_constants_wavelength`]).
 #[derive(Clone, Copy)]
-struct FrameConstants<T> {
-    wavelength: T,
+pub(crate) struct FrameConstants<T> {
     c2_over_l: T,
     a: T,
+    inv_a: T,
+}
+
+/// ∂B/∂T at the brightness temperature t of a spectral radiance l, in closed form from l:
+/// with B = a/(eˣ − 1) and x = θ/t (θ = c₂/λ at a wavelength, hν/k at a frequency), at the
+/// solution eˣ − 1 = a/l, so ∂B/∂T = (x/t)·B·eˣ/(eˣ − 1) = (θ/t)·(l/t)·(1 + l/a). No
+/// exponential: the derivative the implicit differentiation needs comes from the same
+/// constants as the temperature (`inv_a` = 1/a).
+#[inline(always)]
+pub(crate) fn derivative_at_brightness<T: Real>(theta: T, inv_a: T, t: T, l: T) -> T {
+    let inv_t = T::one() / t;
+    ((theta * inv_t) * (l * inv_t)) * (T::one() + l * inv_a)
 }
 
 #[derive(Clone, Copy)]
-struct Wavelength<T>(T);
+pub(crate) struct Wavelength<T>(pub(crate) T);
 #[derive(Clone, Copy)]
-struct Frequency<T>(T);
+pub(crate) struct Frequency<T>(pub(crate) T);
 #[derive(Clone, Copy)]
 struct Band<T>(T, T);
 #[derive(Clone, Copy)]
@@ -152,10 +176,17 @@ impl<T: Real> Quantity<T> for Wavelength<T> {
     fn frame_constants(&self) -> Option<FrameConstants<T>> {
         let (c2_over_l, a) = brightness_constants_wavelength(self.0);
         Some(FrameConstants {
-            wavelength: self.0,
             c2_over_l,
             a,
+            inv_a: T::one() / a,
         })
+    }
+    fn temperature_and_derivative(&self, l: T) -> Result<(T, Result<T>)> {
+        let b = positive(l, 1)?;
+        let (t, c2_over_l, a) = brightness_temperature_wavelength_parts(self.0, b);
+        let t = finite_result(t, 1)?;
+        let d = derivative_at_brightness(c2_over_l, T::one() / a, t, b);
+        Ok((t, finite_result(d, 1)))
     }
 }
 
@@ -172,6 +203,14 @@ impl<T: Real> Quantity<T> for Frequency<T> {
     #[inline(always)]
     fn temperature(&self, l: T) -> Result<T> {
         brightness_temperature_frequency(self.0, l)
+    }
+    fn temperature_and_derivative(&self, l: T) -> Result<(T, Result<T>)> {
+        let t = brightness_temperature_frequency(self.0, l)?;
+        let (hh, hl) = T::c2(k::PLANCK_OVER_BOLTZMANN, k::PLANCK_OVER_BOLTZMANN_LO);
+        let (th, tl) = dd::mul_dd_d(hh, hl, self.0);
+        let a = two_h_nu3_over_c2(self.0);
+        let d = derivative_at_brightness(th + tl, T::one() / a, t, l);
+        Ok((t, finite_result(d, 1)))
     }
 }
 
@@ -339,9 +378,14 @@ fn solve_with_uncertainty<T: Real, Q: Quantity<T>>(
     u: [T; SENSITIVITY_CAPACITY],
 ) -> Result<TemperatureUncertainty<T>> {
     let arg = Q::FIRST;
-    let (t, l) = solve(q, s, signal)?;
+    let l = corrected(s, signal);
+    if !(l > T::zero()) || !l.is_finite() {
+        return Err(Error::OutOfDomain(arg));
+    }
+    let (t, dt) = q.temperature_and_derivative(l).map_err(at(arg))?;
+    let dt = dt.map_err(at(arg))?;
     let (e, tau) = (s.emissivity, s.transmittance);
-    let d = tau * e * q.derivative(t).map_err(at(arg))?;
+    let d = tau * e * dt;
     if !(d >= T::min_positive_value()) {
         return Err(Error::OutOfDomain(arg));
     }
@@ -956,6 +1000,18 @@ fn note(first: &mut Option<ElementError>, index: usize, error: Error) {
     }
 }
 
+/// Square roots of a block, in place, out of line: `Real::sqrt` is `libm`'s, whose x86-64 form
+/// is one legacy-SSE `sqrtsd` in inline assembly; inlined into a loop compiled for AVX (the
+/// SIMD dispatch of the C and Python faces) it would pay the SSE/AVX transition penalty on
+/// every pixel, while a call is preceded by `vzeroupper` once per block. Correctly rounded
+/// either way (IEEE 754 square root): the same bits.
+#[inline(never)]
+fn sqrt_lanes<T: Real>(x: &mut [T; FRAME_BLOCK]) {
+    for v in x.iter_mut() {
+        *v = v.sqrt();
+    }
+}
+
 /// Pixels per block of the branch-free frame path.
 const FRAME_BLOCK: usize = 64;
 
@@ -978,7 +1034,9 @@ fn load<T: Real>(buf: &mut [T; FRAME_BLOCK], s: &[T], start: usize, m: usize) {
 
 /// The frame loop of the one-wavelength forms: blocks of [`FRAME_BLOCK`] pixels through the
 /// branch-free `fast(inputs) -> (outputs before `finish`, inside)`, which the compiler turns
-/// into SIMD instructions; `finish` (the square root of u_c, a library call) is applied while
+/// into SIMD instructions (callers pass it as an `#[inline(always)]` closure: a closure left to
+/// the inliner is called per pixel once the frame function is compiled three times by the SIMD
+/// dispatch); `finish` (the square root of u_c, out of line) is applied to the block while
 /// storing; a block in which any pixel left the common case is recomputed pixel by pixel by
 /// `scalar(i)`, the scalar function's own path. Every output is the scalar function's result
 /// bit for bit; failing pixels are NaN and the first is returned.
@@ -988,7 +1046,7 @@ fn frame_blocks<T: Real, const P: usize, const O: usize>(
     inputs: [&[T]; P],
     outs: [&mut [T]; O],
     fast: impl Fn([T; P]) -> ([T; O], bool),
-    finish: impl Fn([T; O]) -> [T; O],
+    finish: impl Fn(&mut [[T; FRAME_BLOCK]; O]),
     mut scalar: impl FnMut(usize) -> Result<[T; O]>,
 ) -> ArrayResult {
     let mut first = None;
@@ -1013,8 +1071,9 @@ fn frame_blocks<T: Real, const P: usize, const O: usize>(
             *ok = inside;
         }
         let all_in = ins.iter().take(m).all(|&b| b);
+        finish(&mut res);
         for k in 0..m {
-            let v = finish(res.each_ref().map(|r| lane(r, k)));
+            let v = res.each_ref().map(|r| lane(r, k));
             for (o, vi) in outs.iter_mut().zip(v) {
                 if let Some(slot) = o.get_mut(start + k) {
                     *slot = vi;
@@ -1087,7 +1146,8 @@ fn object_uncertainty_fast<T: Real>(
 ) -> ([T; 2], bool) {
     let (t, l, ok_t) = object_fast(k, sc, signal);
     let (e, tau) = (sc.emissivity, sc.transmittance);
-    let (_, dt, ok_d) = radiance_and_derivative_wavelength_fast(k.wavelength, t);
+    let dt = derivative_at_brightness(k.c2_over_l, k.inv_a, t, l);
+    let ok_d = (dt >= T::min_positive_value()) & (dt <= T::max_value());
     let d = tau * e * dt;
     let inv = T::one() / d;
     let c = [
@@ -1109,6 +1169,7 @@ fn object_uncertainty_fast<T: Real>(
 }
 
 #[allow(clippy::too_many_arguments)]
+#[inline(always)]
 fn object_array<T: Real, Q: Quantity<T>>(
     q: Result<Q>,
     signals: &[T],
@@ -1149,19 +1210,26 @@ fn object_array<T: Real, Q: Quantity<T>>(
         Ok([solve(&q, &sc, s)?.0])
     };
     if let (Some(k), Some([r, rd, p, pd])) = (q.frame_constants(), shared_scene(&q, tr, tp)) {
-        let fast = |[s, e, tau]: [T; 3]| {
-            let sc = Scene {
-                emissivity: e,
-                transmittance: tau,
-                reflected: r,
-                path: p,
-                reflected_derivative: rd,
-                path_derivative: pd,
-            };
-            let (t, _, inside) = object_fast(&k, &sc, s);
-            ([t], inside)
-        };
-        return frame_blocks(n, [signals, e, tau], [out], fast, |v| v, element);
+        return frame_blocks(
+            n,
+            [signals, e, tau],
+            [out],
+            #[inline(always)]
+            |[s, e, tau]: [T; 3]| {
+                let sc = Scene {
+                    emissivity: e,
+                    transmittance: tau,
+                    reflected: r,
+                    path: p,
+                    reflected_derivative: rd,
+                    path_derivative: pd,
+                };
+                let (t, _, inside) = object_fast(&k, &sc, s);
+                ([t], inside)
+            },
+            |_| {},
+            element,
+        );
     }
     let mut first = None;
     for (i, o) in out.iter_mut().enumerate() {
@@ -1177,6 +1245,7 @@ fn object_array<T: Real, Q: Quantity<T>>(
 }
 
 #[allow(clippy::too_many_arguments)]
+#[inline(always)]
 fn object_uncertainty_array<T: Real, Q: Quantity<T>>(
     q: Result<Q>,
     signals: &[T],
@@ -1238,23 +1307,23 @@ fn object_uncertainty_array<T: Real, Q: Quantity<T>>(
         Ok([v.temperature_k, v.combined_standard_uncertainty_k])
     };
     if let (Some(k), Some([r, rd, p, pd])) = (q.frame_constants(), shared_scene(&q, tr, tp)) {
-        let fast = |[s, e, tau, v0, v1, v2, v3, v4]: [T; 8]| {
-            let sc = Scene {
-                emissivity: e,
-                transmittance: tau,
-                reflected: r,
-                path: p,
-                reflected_derivative: rd,
-                path_derivative: pd,
-            };
-            object_uncertainty_fast(&k, &sc, s, [v0, v1, v2, v3, v4])
-        };
         return frame_blocks(
             n,
             [signals, e, tau, u0, u1, u2, u3, u4],
             [out_t, out_u],
-            fast,
-            |[t, ss]| [t, ss.sqrt()],
+            #[inline(always)]
+            |[s, e, tau, v0, v1, v2, v3, v4]: [T; 8]| {
+                let sc = Scene {
+                    emissivity: e,
+                    transmittance: tau,
+                    reflected: r,
+                    path: p,
+                    reflected_derivative: rd,
+                    path_derivative: pd,
+                };
+                object_uncertainty_fast(&k, &sc, s, [v0, v1, v2, v3, v4])
+            },
+            |[_, ss]| sqrt_lanes(ss),
             element,
         );
     }
@@ -1299,6 +1368,7 @@ fn object_uncertainty_array<T: Real, Q: Quantity<T>>(
 /// common case (bad input, no temperature, a value that is not a normal number) is recomputed
 /// by the scalar function. Otherwise an element loop that reuses the radiances of the
 /// surroundings and the path while per-pixel parameters repeat.
+#[inline(always)]
 pub fn object_temperature_wavelength_array<T: Real>(
     wavelength_m: T,
     signals: &[T],
@@ -1386,6 +1456,7 @@ pub fn object_temperature_band_array<T: Real>(
 /// and T_path are shared, the square root of u_c taken while storing); per pixel one
 /// brightness temperature and one dB/dT.
 #[allow(clippy::too_many_arguments)]
+#[inline(always)]
 pub fn object_temperature_wavelength_with_uncertainty_array<T: Real>(
     wavelength_m: T,
     signals: &[T],

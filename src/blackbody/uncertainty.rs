@@ -19,13 +19,10 @@
 //! Reference: JCGM 100:2008, Evaluation of measurement data — Guide to the expression of
 //! uncertainty in measurement (GUM), §5.1.2 eq. (10), §5.2.2 eq. (13).
 
-use super::inverse::{brightness_temperature_frequency, brightness_temperature_wavelength};
+use super::measurement::{Frequency, Quantity, Wavelength};
 use super::microwave::thermodynamic_to_rayleigh_jeans_factor;
-use super::planck::{
-    radiance_temperature_derivative_frequency, radiance_temperature_derivative_wavelength,
-};
 use super::{calibrated_temperature, two_load_calibration};
-use crate::check::{finite, finite_result, non_negative};
+use crate::check::{finite, finite_result, non_negative, positive};
 use crate::{Error, Real, Result};
 
 /// The number of sensitivity coefficients a [`TemperatureUncertainty`] can hold.
@@ -237,9 +234,10 @@ pub fn combined_standard_uncertainty_correlated<T: Real>(
 }
 
 /// Brightness temperature at a wavelength with its uncertainty: T from
-/// [`brightness_temperature_wavelength`] (the same bits) and the sensitivity coefficient
-/// ∂T/∂L = 1/(∂B_λ/∂T) (Planck's law differentiated implicitly, with
-/// [`radiance_temperature_derivative_wavelength`]).
+/// [`brightness_temperature_wavelength`](super::brightness_temperature_wavelength) (the same bits) and the sensitivity coefficient
+/// ∂T/∂L = 1/(∂B_λ/∂T) (Planck's law differentiated implicitly; ∂B_λ/∂T at T in closed form
+/// from L: with B = a/(eˣ − 1), eˣ − 1 = a/L at the solution, so ∂B_λ/∂T = (x/T)·L·(1 + L/a),
+/// the value [`radiance_temperature_derivative_wavelength`](super::radiance_temperature_derivative_wavelength) gives at T, without an exponential).
 ///
 /// * `wavelength_m`: m, finite and > 0.
 /// * `spectral_radiance`: L in W m⁻² sr⁻¹ m⁻¹, finite and > 0.
@@ -247,10 +245,10 @@ pub fn combined_standard_uncertainty_correlated<T: Real>(
 ///
 /// Returns a [`TemperatureUncertainty`] with `inputs` = 1, coefficient 0 = ∂T/∂L in
 /// K per (W m⁻² sr⁻¹ m⁻¹), u_c = |∂T/∂L| u(L). Errors: those of
-/// [`brightness_temperature_wavelength`]; `NonFinite(2)`, `Negative(2)`; `OutOfDomain(1)` when
+/// [`brightness_temperature_wavelength`](super::brightness_temperature_wavelength); `NonFinite(2)`, `Negative(2)`; `OutOfDomain(1)` when
 /// dB/dT at T is not a positive normal number (radiances far outside thermal ones).
 ///
-/// Accuracy: temperature as [`brightness_temperature_wavelength`]; coefficient within 1e-12
+/// Accuracy: temperature as [`brightness_temperature_wavelength`](super::brightness_temperature_wavelength); coefficient within 1e-12
 /// relative (`f64`) against mpmath (`tests/data/thermometry.txt`). Reference: JCGM 100:2008
 /// eq. 10 with the implicit derivative of Planck's law.
 pub fn brightness_temperature_wavelength_with_uncertainty<T: Real>(
@@ -258,16 +256,16 @@ pub fn brightness_temperature_wavelength_with_uncertainty<T: Real>(
     spectral_radiance: T,
     spectral_radiance_uncertainty: T,
 ) -> Result<TemperatureUncertainty<T>> {
-    let t = brightness_temperature_wavelength(wavelength_m, spectral_radiance)?;
+    let l = positive(wavelength_m, 0)?;
+    let (t, d) = Wavelength(l).temperature_and_derivative(spectral_radiance)?;
     let u = non_negative(spectral_radiance_uncertainty, 2)?;
-    let d = radiance_temperature_derivative_wavelength(wavelength_m, t)
-        .map_err(|_| Error::OutOfDomain(1))?;
-    single_input(t, d, u)
+    single_input(t, d.map_err(|_| Error::OutOfDomain(1))?, u)
 }
 
 /// Brightness temperature at a frequency with its uncertainty: T from
-/// [`brightness_temperature_frequency`] (the same bits) and ∂T/∂L = 1/(∂B_ν/∂T)
-/// ([`radiance_temperature_derivative_frequency`]).
+/// [`brightness_temperature_frequency`](super::brightness_temperature_frequency) (the same bits) and ∂T/∂L = 1/(∂B_ν/∂T), ∂B_ν/∂T at T
+/// in closed form from L as for the wavelength form (the value of
+/// [`radiance_temperature_derivative_frequency`](super::radiance_temperature_derivative_frequency) at T).
 ///
 /// * `frequency_hz`: Hz, finite and > 0.
 /// * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
@@ -282,11 +280,9 @@ pub fn brightness_temperature_frequency_with_uncertainty<T: Real>(
     spectral_radiance: T,
     spectral_radiance_uncertainty: T,
 ) -> Result<TemperatureUncertainty<T>> {
-    let t = brightness_temperature_frequency(frequency_hz, spectral_radiance)?;
+    let (t, d) = Frequency(frequency_hz).temperature_and_derivative(spectral_radiance)?;
     let u = non_negative(spectral_radiance_uncertainty, 2)?;
-    let d = radiance_temperature_derivative_frequency(frequency_hz, t)
-        .map_err(|_| Error::OutOfDomain(1))?;
-    single_input(t, d, u)
+    single_input(t, d.map_err(|_| Error::OutOfDomain(1))?, u)
 }
 
 fn single_input<T: Real>(t: T, d: T, u: T) -> Result<TemperatureUncertainty<T>> {

@@ -441,6 +441,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
     /// Returns `Ok(())` when every element succeeded; otherwise failing elements are NaN and the
     /// error names the first failing index; `LengthMismatch(1)` when `out` has another length.
     /// Method: as [`linear_power_spectrum_mpc3_array`](Self::linear_power_spectrum_mpc3_array).
+    #[inline(always)]
     pub fn transfer_function_array(
         &self,
         wavenumbers_per_mpc: &[T],
@@ -458,6 +459,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
                 x,
                 out,
                 1,
+                #[inline(always)]
                 |k| check(k, self.transfer_form::<true>(k)),
                 scalar,
             )
@@ -466,6 +468,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
                 x,
                 out,
                 1,
+                #[inline(always)]
                 |k| check(k, self.transfer_form::<false>(k)),
                 scalar,
             )
@@ -509,6 +512,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
     /// block with an element outside the kernels' common domain (k below about 1e-300 or above
     /// about 6000 Mpc⁻¹, a result that is not a normal number, bad input) is computed again by
     /// the scalar function.
+    #[inline(always)]
     pub fn linear_power_spectrum_mpc3_array(
         &self,
         wavenumbers_per_mpc: &[T],
@@ -529,6 +533,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
                 x,
                 out,
                 2,
+                #[inline(always)]
                 |k| {
                     let t = self.transfer_form::<true>(k);
                     let (p, inside) = self.power_from(k, du, self.tilt_with::<true>(k, t));
@@ -541,6 +546,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
                 x,
                 out,
                 2,
+                #[inline(always)]
                 |k| {
                     let t = self.transfer_form::<false>(k);
                     let (p, inside) = self.power_from(k, du, self.tilt_with::<true>(k, t));

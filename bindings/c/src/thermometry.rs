@@ -12,7 +12,9 @@
 
 use crate::boundary::{Failure, NotANumber, boundary, input_slice, non_null, put, put_nan_n};
 use crate::status::status_of;
+use relicore::ArrayResult;
 use relicore::blackbody::{self as bb, TemperatureUncertainty};
+use relicore_dispatch::widest;
 
 /// An inferred temperature with its combined standard uncertainty and sensitivity coefficients
 /// (the core's `TemperatureUncertainty<f64>`), written by every `_with_uncertainty` function.
@@ -822,7 +824,16 @@ pub unsafe extern "C" fn relicore_object_temperature_wavelength_array(
     // disjoint from the inputs (this function's contract).
     unsafe {
         frame_call(n, params, [out], |&[s, p0, p1, p2, p3], [o]| {
-            bb::object_temperature_wavelength_array(wavelength_m, s, p0, p1, p2, p3, o)
+            widest!(|wavelength_m: f64,
+                     s: &[f64],
+                     p0: &[f64],
+                     p1: &[f64],
+                     p2: &[f64],
+                     p3: &[f64],
+                     o: &mut [f64]|
+             -> ArrayResult {
+                bb::object_temperature_wavelength_array(wavelength_m, s, p0, p1, p2, p3, o)
+            })
         })
     }
 }
@@ -876,7 +887,16 @@ pub unsafe extern "C" fn relicore_object_temperature_wavelength_array_f32(
     // disjoint from the inputs (this function's contract).
     unsafe {
         frame_call(n, params, [out], |&[s, p0, p1, p2, p3], [o]| {
-            bb::object_temperature_wavelength_array(wavelength_m, s, p0, p1, p2, p3, o)
+            widest!(|wavelength_m: f32,
+                     s: &[f32],
+                     p0: &[f32],
+                     p1: &[f32],
+                     p2: &[f32],
+                     p3: &[f32],
+                     o: &mut [f32]|
+             -> ArrayResult {
+                bb::object_temperature_wavelength_array(wavelength_m, s, p0, p1, p2, p3, o)
+            })
         })
     }
 }
@@ -961,21 +981,36 @@ pub unsafe extern "C" fn relicore_object_temperature_wavelength_with_uncertainty
             params,
             [out_temperature, out_uncertainty],
             |&[s, p0, p1, p2, p3, p4, p5, p6, p7, p8], [t, u]| {
-                bb::object_temperature_wavelength_with_uncertainty_array(
-                    wavelength_m,
-                    s,
-                    p0,
-                    p1,
-                    p2,
-                    p3,
-                    p4,
-                    p5,
-                    p6,
-                    p7,
-                    p8,
-                    t,
-                    u,
-                )
+                widest!(|wavelength_m: f64,
+                         s: &[f64],
+                         p0: &[f64],
+                         p1: &[f64],
+                         p2: &[f64],
+                         p3: &[f64],
+                         p4: &[f64],
+                         p5: &[f64],
+                         p6: &[f64],
+                         p7: &[f64],
+                         p8: &[f64],
+                         t: &mut [f64],
+                         u: &mut [f64]|
+                 -> ArrayResult {
+                    bb::object_temperature_wavelength_with_uncertainty_array(
+                        wavelength_m,
+                        s,
+                        p0,
+                        p1,
+                        p2,
+                        p3,
+                        p4,
+                        p5,
+                        p6,
+                        p7,
+                        p8,
+                        t,
+                        u,
+                    )
+                })
             },
         )
     }
@@ -1059,21 +1094,36 @@ pub unsafe extern "C" fn relicore_object_temperature_wavelength_with_uncertainty
             params,
             [out_temperature, out_uncertainty],
             |&[s, p0, p1, p2, p3, p4, p5, p6, p7, p8], [t, u]| {
-                bb::object_temperature_wavelength_with_uncertainty_array(
-                    wavelength_m,
-                    s,
-                    p0,
-                    p1,
-                    p2,
-                    p3,
-                    p4,
-                    p5,
-                    p6,
-                    p7,
-                    p8,
-                    t,
-                    u,
-                )
+                widest!(|wavelength_m: f32,
+                         s: &[f32],
+                         p0: &[f32],
+                         p1: &[f32],
+                         p2: &[f32],
+                         p3: &[f32],
+                         p4: &[f32],
+                         p5: &[f32],
+                         p6: &[f32],
+                         p7: &[f32],
+                         p8: &[f32],
+                         t: &mut [f32],
+                         u: &mut [f32]|
+                 -> ArrayResult {
+                    bb::object_temperature_wavelength_with_uncertainty_array(
+                        wavelength_m,
+                        s,
+                        p0,
+                        p1,
+                        p2,
+                        p3,
+                        p4,
+                        p5,
+                        p6,
+                        p7,
+                        p8,
+                        t,
+                        u,
+                    )
+                })
             },
         )
     }
