@@ -112,7 +112,12 @@ impl<T: Real> Universe<T> {
     /// positive mass with T0 = 0 (no neutrino background), massive neutrinos denser today than
     /// Ω_m, Y_p outside [0, 1); `NoBigBang` when E(z)² ≤ 0 somewhere between today and a → 0
     /// (checked on the 4096 points of a logarithmic grid in a from 1e-30 to 1 and on every node
-    /// of the distance table); `NoConvergence` when a quadrature of the distance table fails
+    /// of the distance table); `InvalidParameter(7)` (w0, with wa) when the dark-energy density
+    /// overflows the type somewhere on that grid, so that E(z) has no value there: an equation
+    /// of state far from physical ones (for `f64`, w0 above about 3.8, or w0 + wa, the
+    /// early-time w, above about 3.8 to 4.8 with the e^(−3 wa) factor; for `f32`, 0.8 to 1.8),
+    /// `InvalidParameter(1)` when E(z)² overflows otherwise (densities near the largest number
+    /// of the type); `NoConvergence` when a quadrature of the distance table fails
     /// (seen only for parameters far outside physical ones, such as Ω_m in the hundreds or
     /// |Ω_k|, N_eff or |wa| in the thousands and more).
     ///
@@ -218,13 +223,25 @@ impl<T: Real> Universe<T> {
                 * (T::one() + n_eff * T::c(NEUTRINO_PER_PHOTON)),
             table: DistanceTable::empty(),
         };
-        // no big bang: E² ≤ 0 somewhere on the way back
+        // no big bang: E² ≤ 0 somewhere on the way back; an expansion rate the type cannot
+        // hold: E² overflows somewhere on the way back (the time and distance integrands are
+        // then 0 there, and where that starts just before today the quadratures see nothing
+        // but zeros: lookback times and distances of exactly 0, found by the fuzzing)
         let steps = 4096;
         for i in 0..=steps {
             let la = T::c(-30.0 * core::f64::consts::LN_10 * (1.0 - i as f64 / steps as f64));
-            let q2 = u.q_squared(la.exp());
+            let a = la.exp();
+            let q2 = u.q_squared(a);
             if !(q2 > T::zero()) {
                 return Err(Error::NoBigBang);
+            }
+            if !q2.is_finite() {
+                let culprit = if u.dark_energy_term(a).is_finite() {
+                    1
+                } else {
+                    7
+                };
+                return Err(Error::InvalidParameter(culprit));
             }
         }
         u.table = DistanceTable::build(&u)?;
@@ -246,23 +263,24 @@ impl<T: Real> Universe<T> {
         q2 + self.dark_energy_term(a)
     }
 
-    /// Ω_de a⁴ f_de(a): the dark-energy part of q².
+    /// Ω_de a⁴ f_de(a): the dark-energy part of q², with f_de(a) = ρ_de(a)/ρ_de(1) =
+    /// a^(−3(1+w0+wa)) e^(−3 wa (1 − a)). Outside Λ (w0 = −1, wa = 0: Ω_de a⁴) as one
+    /// exponential of (4 − 3(1+w0+wa)) ln a − 3 wa (1 − a): the product a⁴ · f_de overflowed
+    /// (f_de alone passes the largest float at a = 1e-30 for w0 + wa above 2.4 in `f64`, −0.57 in
+    /// `f32`, where a⁴ even underflows to 0 and the product is NaN) while the term itself
+    /// was a finite number.
     #[inline]
     pub(crate) fn dark_energy_term(&self, a: T) -> T {
         if self.omega_de == T::zero() {
             return T::zero();
         }
-        let a2 = a * a;
-        self.omega_de * a2 * a2 * self.dark_energy_factor(a)
-    }
-
-    /// ρ_de(a)/ρ_de(1) = a^(−3(1+w0+wa)) e^(−3 wa (1 − a)).
-    #[inline]
-    fn dark_energy_factor(&self, a: T) -> T {
         if self.de_power == T::zero() && self.params.wa == T::zero() {
-            return T::one();
+            let a2 = a * a;
+            return self.omega_de * a2 * a2;
         }
-        (self.de_power * a.ln() - T::c(3.0) * self.params.wa * (T::one() - a)).exp()
+        let exponent =
+            (T::c(4.0) + self.de_power) * a.ln() - T::c(3.0) * self.params.wa * (T::one() - a);
+        self.omega_de * exponent.exp()
     }
 
     /// q(s²) for the integrands in s = √a.

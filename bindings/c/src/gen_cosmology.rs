@@ -1473,7 +1473,16 @@ pub unsafe extern "C" fn relicore_redshift_at_age_gyr_array(
 ///
 /// * `lookback_gyr`: Gyr, finite and ≥ 0, below the age today.
 ///
-/// Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` at or beyond the age today.
+/// From half the age today on, the redshift is that of the age today minus the target (an
+/// exact difference there), by `redshift_at_age_gyr`: near
+/// the age today the lookback time is flat to the last bit over decades of z (it is the age
+/// today minus an age of 1e-19 of it at z = 1e4 in a model without radiation), where
+/// inverting it directly is decided by rounding noise; elsewhere (and where the age is not
+/// available) by the lookback time itself.
+///
+/// Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` at or beyond the age today, or
+/// beyond the lookback time at z = 1e12 (the top of the search; in a model whose past is
+/// infinite, such as a nearly empty one, the lookback time grows without bound).
 /// Accuracy: round trip within 1e-12 relative (`f64`).
 ///
 /// Arguments of the C function:

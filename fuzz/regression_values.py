@@ -1,0 +1,89 @@
+"""Expected values of the fuzzing regression tests (tests/fuzz_regressions.rs), computed here with
+mpmath at 40 digits from the definitions, independently of the library:
+
+* Hubble time t_H = 1 Mpc / (1000 H0 m/s) in Gyr, with 1 pc = 648000/pi au, 1 au =
+  149 597 870 700 m (IAU 2012 B2, IAU 2015 B2) and 1 Gyr = 1e9 Julian years of 365.25 days;
+* photon density a_rad T0^4 / c^2 with a_rad = pi^2 k^4 / (15 hbar^3 c^3) (SI 2019 exact h, k, c)
+  over the critical density 3 H0^2 / (8 pi G), G = 6.67430e-11 (CODATA 2022); each of the
+  N_eff massless neutrino species 7/8 (4/11)^(4/3) / 3 of it times N_eff (common practice);
+* ages as t_H int_0^a a' da' / sqrt(a'^4 E^2(a')) by mpmath.quad (tanh-sinh; in a' = a t, the
+  integrand scaled to 1 at t = 1), with
+  a^4 E^2 = Omega_r + Omega_m a + Omega_de a^(1 - 3 (w0 + wa)) exp(-3 wa (1 - a)) (flat; the
+  Friedmann equation with w0-wa dark energy, Chevallier & Polarski 2001, Linder 2003);
+* closed forms where they exist (named at each value).
+
+Run: .venv/bin/python fuzz/regression_values.py (prints the values the test file quotes).
+"""
+from mpmath import mp, mpf, sqrt, quad, log, pi, exp, expm1
+
+mp.dps = 40
+
+C = mpf(299792458)
+H = mpf("6.62607015e-34")
+HBAR = H / (2 * pi)
+KB = mpf("1.380649e-23")
+G = mpf("6.67430e-11")
+AU = mpf(149597870700)
+MPC = 648000 / pi * AU * 10**6
+GYR = mpf(10)**9 * mpf("365.25") * 86400
+
+
+def hubble_time_gyr(h0):
+    return MPC / (1000 * mpf(h0)) / GYR
+
+
+def omega_radiation(h0, t0, n_eff):
+    h0_si = mpf(h0) * 1000 / MPC
+    rho_crit = 3 * h0_si**2 / (8 * pi * G)
+    a_rad = pi**2 * KB**4 / (15 * HBAR**3 * C**3)
+    photon = a_rad * mpf(t0)**4 / C**2 / rho_crit
+    return photon * (1 + mpf(n_eff) * mpf(7) / 8 * (mpf(4) / 11) ** (mpf(4) / 3))
+
+
+def age(h0, om, t0, n_eff, w0, wa, z):
+    om = mpf(om)
+    orad = omega_radiation(h0, t0, n_eff) if t0 else mpf(0)
+    ode = 1 - om - orad
+    w0, wa = mpf(w0), mpf(wa)
+
+    def q2(a):
+        return orad + om * a + ode * a ** (1 - 3 * (w0 + wa)) * exp(-3 * wa * (1 - a))
+
+    # a = a_z t, and the integrand scaled to 1 at t = 1: mpmath.quad stops on an absolute error
+    # estimate, so an integrand of 1e-100 would be returned far less accurately than its digits
+    a_z = 1 / (1 + mpf(z))
+    scale = a_z / sqrt(q2(a_z))
+    inner = quad(lambda t: (a_z * t / sqrt(q2(a_z * t))) / scale, [0, mpf(1) / 2, 1])
+    return hubble_time_gyr(h0) * a_z * scale * inner
+
+
+def show(name, v):
+    print(f"{name:60s} {mp.nstr(v, 20)}")
+
+
+# 1. flat, Omega_m = 0.3, no radiation, w0 = 3 (H0 = 70): the age at z = 1e8, 1e20 and 1e26; at 1e26
+#    also the closed form of a past ruled by dark energy with w = 3, t_H / (6 sqrt(Omega_de)
+#    (1+z)^6), whose matter correction is (0.3/0.7) (1+z)^-9 relative
+show("w0=3 age(1e8)", age(70, 0.3, 0, 0, 3, 0, mpf("1e8")))
+show("w0=3 age(1e20)", age(70, 0.3, 0, 0, 3, 0, mpf("1e20")))
+show("w0=3 age(1e26)", age(70, 0.3, 0, 0, 3, 0, mpf("1e26")))
+show("w0=3 age(1e26) closed form", hubble_time_gyr(70) / (6 * sqrt(1 - mpf(0.3)) * (1 + mpf("1e26")) ** 6))
+
+# 2. nearly empty: Omega_m = 1e-308, T0 = 3e-202 K (Omega_r ~ 1e-806, 0 in f64): de Sitter,
+#    lookback time t_H ln(1+z) up to relative terms of 1e-308 (1+z)^3 (closed form)
+for z in ("10", "1e4", "1e12"):
+    show(f"empty lookback({z})", hubble_time_gyr(67.36) * log(1 + mpf(z)))
+
+# 3. flat, H0 = 67.36, Omega_m = 0.3153, T0 = 2.7255 K, N_eff = 3.044 massless, w0 = -1,
+#    wa = 10^0.5 (the fuzzer's largest wa): the age near the top of the inversions' bracket
+wa = mpf(10) ** mpf("0.5")
+wa = mpf(float(wa))  # the f64 the test uses
+u_max = mpf(float("27.631021115928547"))
+z_top = mpf(float(expm1(u_max)))  # the f64 z of the top of the bracket
+for z in (mpf("1.005e12"), z_top):
+    show(f"wa=10^0.5 age({mp.nstr(z, 17)})", age(67.36, 0.3153, 2.7255, 3.044, -1, wa, z))
+
+# 4. f32 model: flat, Omega_m = f32(0.3), no radiation, w0 = -0.5: E(1)^2 = Omega_m 8 +
+#    Omega_de 2^1.5 (closed form)
+om32 = mpf(float.fromhex("0x1.333334p-2"))  # f32 nearest to 0.3
+show("f32 w0=-0.5 E(1)", sqrt(om32 * 8 + (1 - om32) * mpf(2) ** mpf("1.5")))
