@@ -281,8 +281,18 @@ pub(crate) fn invert_increasing<T: Real, F: FnMut(T) -> (T, T)>(
 /// logarithm in every closed-form brightness temperature. `ln_a` is used when `a` itself is
 /// not a normal number (it is then ln of the exact a). The common case (a, b and a/b normal,
 /// a/b < 1e30) is [`log::ln_1p`] of a/b, the bits of [`ln1p_quotient_fast`].
-#[inline]
+#[inline(always)]
 pub(crate) fn ln1p_quotient<T: Real>(a: T, ln_a: impl Fn() -> T, b: T) -> T {
+    match ln1p_quotient_fast(a, b) {
+        (v, true) => v,
+        _ => ln1p_quotient_outside(a, ln_a, b),
+    }
+}
+
+/// [`ln1p_quotient`] outside its common case (out of line: the rare path).
+#[cold]
+#[inline(never)]
+fn ln1p_quotient_outside<T: Real>(a: T, ln_a: impl Fn() -> T, b: T) -> T {
     let a_ok = a.is_finite() && a >= T::min_positive_value();
     if a_ok && b >= T::min_positive_value() {
         let q = a / b;

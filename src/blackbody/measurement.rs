@@ -74,9 +74,9 @@ use super::inverse::{
 };
 use super::kernel::two_h_nu3_over_c2;
 use super::planck::{
-    radiance_and_derivative_wavelength_unchecked, radiance_temperature_derivative_frequency,
-    radiance_temperature_derivative_wavelength, spectral_radiance_frequency,
-    spectral_radiance_wavelength,
+    radiance_and_derivative_wavelength_fast, radiance_and_derivative_wavelength_unchecked,
+    radiance_temperature_derivative_frequency, radiance_temperature_derivative_wavelength,
+    spectral_radiance_frequency, spectral_radiance_wavelength,
 };
 use super::response::{check_table, response_weighted_derivative_unchecked};
 use super::uncertainty::{SENSITIVITY_CAPACITY, TemperatureUncertainty, sum_of_squares_is_safe};
@@ -118,6 +118,13 @@ pub(crate) trait Quantity<T: Real> {
     fn temperature_and_derivative(&self, l: T) -> Result<(T, Result<T>)> {
         let t = self.temperature(l)?;
         Ok((t, self.derivative(t)))
+    }
+    /// (L, dL/dT) at two temperatures at once, the bits of
+    /// [`Quantity::radiance_and_derivative`], where the form has a straight-line kernel and
+    /// both temperatures are inside its common case (positive, results normal); else `None`.
+    /// Written over a pair so that the compiler may evaluate both in one SIMD register.
+    fn radiance_and_derivative_pair(&self, _t1: T, _t2: T) -> Option<[(T, T); 2]> {
+        None
     }
     /// The constants of the branch-free frame path of this form, where it has one.
     fn frame_constants(&self) -> Option<FrameConstants<T>> {
@@ -172,6 +179,20 @@ impl<T: Real> Quantity<T> for Wavelength<T> {
         let t = positive(t, 1)?;
         let (b, d) = radiance_and_derivative_wavelength_unchecked(self.0, t);
         Ok((finite_result(b, 0)?, finite_result(d, 0)?))
+    }
+    #[inline(always)]
+    fn radiance_and_derivative_pair(&self, t1: T, t2: T) -> Option<[(T, T); 2]> {
+        let r = [t1, t2].map(|t| {
+            let (b, d, inside) = radiance_and_derivative_wavelength_fast(self.0, t);
+            (
+                (b, d),
+                inside & (t >= T::min_positive_value()) & (t <= T::max_value()),
+            )
+        });
+        match r {
+            [(p1, true), (p2, true)] => Some([p1, p2]),
+            _ => None,
+        }
     }
     fn frame_constants(&self) -> Option<FrameConstants<T>> {
         let (c2_over_l, a) = brightness_constants_wavelength(self.0);
@@ -323,6 +344,20 @@ fn scene<T: Real, Q: Quantity<T>>(
 ) -> Result<Scene<T>> {
     let first = Q::FIRST;
     let (e, tr, tau, tp) = check_scene(first, e, tr, tau, tp)?;
+    if derivative {
+        if let Some([(reflected, reflected_derivative), (path, path_derivative)]) =
+            q.radiance_and_derivative_pair(tr, tp)
+        {
+            return Ok(Scene {
+                emissivity: e,
+                transmittance: tau,
+                reflected,
+                path,
+                reflected_derivative,
+                path_derivative,
+            });
+        }
+    }
     let (reflected, reflected_derivative) = if derivative || e < T::one() {
         quantity_at(q, tr, first + 2, derivative)?
     } else {
