@@ -259,8 +259,7 @@ fn round_trips<T: Float>(u: &Universe<T>, z: T) {
             // lookback time rounds to the age today where the age at z is below half an ulp
             // of it (z = 9473 in a model without radiation and with w0 = 2.13)
             Err(relicore::Error::OutOfDomain(0))
-                if name == "z(lookback(z))"
-                    && u.age_gyr(T::zero()).is_ok_and(|age| v >= age) => {}
+                if name == "z(lookback(z))" && u.age_gyr(T::zero()).is_ok_and(|age| v >= age) => {}
             Err(err) => panic!(
                 "{name}: z = {zf:e} -> {vf:e} but the inversion fails: {err:?} in {:?}",
                 u.parameters()
