@@ -10,8 +10,8 @@ tau 0.01, T_path 2 K):
   relicore           the C face's frame function
                      relicore_object_temperature_wavelength_with_uncertainty_array(_f32),
                      called once through ctypes on one core (the core's blockwise frame path
-                     as compiled for the baseline target: this export does not go through
-                     relicore-dispatch yet);
+                     in the widest SIMD compilation the CPU supports, through
+                     relicore-dispatch);
   numpy (BASELINE)   NOT relicore: the same formulas as a competent user writes them in numpy
                      (vectorised expressions with expm1/log1p, the dtype of the frame
                      throughout): the corrected object radiance, the closed-form brightness

@@ -31,7 +31,8 @@ pub(crate) const STEP_PIECES: usize = STEP_OCTAVES * SUB;
 const A_STEP_MIN: f64 = 9.536_743_164_062_5e-7;
 
 /// One integrand of a time-step factor on the pieces of the table: monomial coefficients (in
-/// t ∈ [−1, 1]) per piece and the integral over each piece (in a). Plain old data.
+/// t ∈ [−1, 1]) per piece, each divided by k + 1 (those of the integral), and the integral over
+/// each piece (in a). Plain old data.
 #[derive(Debug, Clone, PartialEq)]
 pub(crate) struct StepTable<T> {
     poly: [[T; NCOEF]; STEP_PIECES],
@@ -54,7 +55,10 @@ impl<T: Real> StepTable<T> {
             let (c, ok1) = coefficients_of(|t: f64| g(T::c(lo + width * 0.5 * (t + 1.0))));
             ok &= ok1;
             if let Some(slot) = self.poly.get_mut(p) {
-                *slot = c;
+                // c_k/(k + 1), the coefficients of the integral: the queries then multiply only
+                for (k, (d, &ck)) in slot.iter_mut().zip(c.iter()).enumerate() {
+                    *d = ck / T::small_integer(k as i32 + 1);
+                }
             }
         }
         for p in 0..STEP_PIECES {
@@ -67,7 +71,8 @@ impl<T: Real> StepTable<T> {
         ok
     }
 
-    /// ∫_{t1}^{t2} Σ c_k t^k dt of piece p = (t2 − t1) Σ c_k h_k/(k + 1), h_k = Σ t2^j t1^(k−j).
+    /// ∫_{t1}^{t2} Σ c_k t^k dt of piece p = (t2 − t1) Σ [c_k/(k + 1)] h_k, h_k = Σ t2^j t1^(k−j)
+    /// (the table holds c_k/(k + 1)).
     #[inline(always)]
     fn piece_integral(&self, p: usize, t1: T, t2: T) -> T {
         let Some(c) = self.poly.get(p) else {
@@ -79,7 +84,7 @@ impl<T: Real> StepTable<T> {
                 t1k = t1k * t1;
                 h = t2 * h + t1k;
             }
-            acc = acc + ck * h / T::small_integer(k as i32 + 1);
+            acc = acc + ck * h;
         }
         (t2 - t1) * acc
     }
@@ -159,6 +164,14 @@ impl<T: Real> LinearGrowth<T> {
             let u = self.universe();
             return finite_result(u.hubble_time_gyr * (sign * table.integral(lo, hi)), 0);
         }
+        self.step_factor_outside(a1, a2, drift)
+    }
+
+    /// [`step_factor`](Self::step_factor) below the tables or where they failed their check:
+    /// the quadrature (out of line, so that the table path stays small and inlined).
+    #[cold]
+    #[inline(never)]
+    fn step_factor_outside(&self, a1: T, a2: T, drift: bool) -> Result<T> {
         self.universe().leapfrog_integral(a1, a2, drift)
     }
 

@@ -142,7 +142,9 @@ fn chebyshev_node(m: usize) -> f64 {
 /// k = p % 8 from below).
 pub(crate) fn piece_bounds(p: usize) -> (f64, f64) {
     let (j, k) = (p / SUB, p % SUB);
-    let base = libm::ldexp(1.0, -(j as i32) - 1);
+    // 2^(−j−1) from its bits (j < OCTAVES ≪ 1022: a normal power of two), not a library call:
+    // the leapfrog queries find their pieces through here
+    let base = f64::from_bits(1022u64.saturating_sub(j as u64) << 52);
     (base * (1.0 + k as f64 / SUB as f64), base / SUB as f64)
 }
 
