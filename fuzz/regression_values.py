@@ -87,3 +87,16 @@ for z in (mpf("1.005e12"), z_top):
 #    Omega_de 2^1.5 (closed form)
 om32 = mpf(float.fromhex("0x1.333334p-2"))  # f32 nearest to 0.3
 show("f32 w0=-0.5 E(1)", sqrt(om32 * 8 + (1 - om32) * mpf(2) ** mpf("1.5")))
+
+# 5. ages by octaves (the single quadrature fails): flat, no radiation, H0 = 67.36
+#    (a) dark energy alone, w0 = -0.9 (the f64 value): age(z) = t_H 2/(3(1+w)) (1+z)^(-3(1+w)/2)
+#        (closed form of a single fluid with constant w)
+w = mpf(-0.9)
+for z in ("0", "1e3", "1e12"):
+    show(f"w=-0.9 alone age({z})", hubble_time_gyr(67.36) * 2 / (3 * (1 + w)) * (1 + mpf(z)) ** (-3 * (1 + w) / 2))
+#    (b) Omega_m = 1e-200 with a cosmological constant: age(z) = t_H 2/(3 sqrt(Omega_L))
+#        asinh(sqrt(Omega_L/Omega_m) (1+z)^(-3/2)) (closed form of flat matter + Lambda)
+om = mpf(1e-200)
+ol = 1 - om
+for z in ("0", "1e3"):
+    show(f"Omega_m=1e-200 age({z})", hubble_time_gyr(67.36) * 2 / (3 * sqrt(ol)) * mp.asinh(sqrt(ol / om) * (1 + mpf(z)) ** mpf(-1.5)))

@@ -5276,7 +5276,10 @@ int32_t relicore_lookback_time_gyr_array(const struct relicore_universe *univers
  * * `z`: redshift, finite and ≥ 0 (z = 0: the age today).
  *
  * Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` when the integral diverges (a
- * model whose past is infinite, e.g. pure de Sitter). Accuracy: within 1e-12 relative
+ * model whose past is infinite, e.g. pure de Sitter, or phantom dark energy alone) or
+ * cannot be evaluated in the type: a past ruled by dark energy down to where a⁴E² leaves
+ * the range of `f64` (matter and radiation densities below about 1e-228 of critical), or
+ * dark energy alone with w within about 0.08 of −1. Accuracy: within 1e-12 relative
  * (`f64`) for z up to 1e8 against mpmath; the Einstein-de Sitter and flat ΛCDM closed forms
  * are among the vectors.
  *

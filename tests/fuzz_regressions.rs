@@ -217,3 +217,47 @@ fn lookback_inversion_near_the_age_today() {
         Err(e) => panic!("{t}: {e:?}"),
     }
 }
+
+/// Ages where the single quadrature over [0, s] cannot converge: dark energy alone with
+/// w = −0.9 (integrand 2 s^−0.7 down to s = 0) and a cosmological constant with Ω_m = 1e-200
+/// (2/s for 110 octaves of s, then matter) were refused as if the age diverged (found by the
+/// `universe` target in a nearly empty model); now summed octave by octave. Against the closed
+/// forms t_H 2/(3(1+w)) (1+z)^(−3(1+w)/2) and t_H 2/(3√Ω_Λ) asinh(√(Ω_Λ/Ω_m) (1+z)^(−3/2))
+/// (mpmath). Pure de Sitter still diverges, and Ω_m = 1e-308 (a⁴E² below the smallest double
+/// before matter takes over) is refused, as documented.
+#[test]
+fn ages_of_pasts_ruled_by_dark_energy() {
+    let mut p = UniverseParameters::new(67.36, 0.0);
+    p.cmb_temperature_k = 0.0;
+    p.w0 = -0.9;
+    let u = Universe::new(p).unwrap();
+    for (z, want) in [
+        (0.0, 96.77278520197837),
+        (1e3, 34.331132420484685),
+        (1e12, 1.533_745_284_820_942),
+    ] {
+        let got = u.age_gyr(z).unwrap();
+        assert!(
+            rel(got, want) <= 1e-12,
+            "w = -0.9: age({z:e}) = {got}, want {want}"
+        );
+    }
+    let mut p = UniverseParameters::new(67.36, 1e-200);
+    p.cmb_temperature_k = 0.0;
+    let u = Universe::new(p).unwrap();
+    for (z, want) in [(0.0, 2234.9835044576694), (1e3, 2134.6965881168976)] {
+        let got = u.age_gyr(z).unwrap();
+        assert!(
+            rel(got, want) <= 1e-12,
+            "Ω_m = 1e-200: age({z:e}) = {got}, want {want}"
+        );
+    }
+    let mut p = UniverseParameters::new(67.36, 0.0);
+    p.cmb_temperature_k = 0.0;
+    let de_sitter = Universe::new(p).unwrap();
+    assert_eq!(de_sitter.age_gyr(0.0), Err(Error::OutOfDomain(0)));
+    let mut p = UniverseParameters::new(67.36, 1e-308);
+    p.cmb_temperature_k = 3e-202;
+    let nearly_empty = Universe::new(p).unwrap();
+    assert_eq!(nearly_empty.age_gyr(0.0), Err(Error::OutOfDomain(0)));
+}
