@@ -143,6 +143,9 @@ fn queries(c: &mut Criterion) {
     g.bench_function("linear_power_spectrum_mpc3_array_1000", |b| {
         b.iter(|| s.linear_power_spectrum_mpc3_array(black_box(&ks), 0.0, &mut out))
     });
+    g.bench_function("transfer_function_array_1000", |b| {
+        b.iter(|| s.transfer_function_array(black_box(&ks), &mut out))
+    });
     g.finish();
     let mut g = c.benchmark_group("growth_sigma");
     g.sample_size(20);

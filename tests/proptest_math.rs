@@ -10,7 +10,7 @@ mod proptest_support;
 
 use proptest::prelude::*;
 use proptest_support::{any32, any64, cases, close, contract, ok};
-use relicore::math::{dd, exp, log, quadrature, roots};
+use relicore::math::{dd, exp, log, quadrature, roots, trig};
 
 proptest! {
     #![proptest_config(cases(1000))]
@@ -102,6 +102,35 @@ proptest! {
                 let ulp = (want.abs() * f32::EPSILON).max(f32::from_bits(1));
                 prop_assert!((v - want).abs() <= 2.0 * ulp, "{}({:e}) = {:e}, platform {:e}", what, x32, v, want);
             }
+        }
+    }
+
+    /// sin and cos on any input: NaN exactly where the platform's sin/cos is NaN (NaN, ±∞), the
+    /// `libm` crate's values bit for bit beyond the branch-free domain, and within 2 ulp of 1 (the
+    /// results are bounded by 1: absolute near their zeros) of the platform's inside it, in both
+    /// types; sin² + cos² = 1 within 4 ulp.
+    #[test]
+    fn sines_on_any_input(x in any64(), x32 in any32()) {
+        let (s, c) = trig::sin_cos(x);
+        let (ws, wc) = (x.sin(), x.cos());
+        prop_assert_eq!(s.is_nan(), ws.is_nan(), "sin({:e}) = {:e}", x, s);
+        prop_assert_eq!(c.is_nan(), wc.is_nan(), "cos({:e}) = {:e}", x, c);
+        if ws.is_finite() {
+            let ulp = |w: f64| (w.abs().max(f64::MIN_POSITIVE) * f64::EPSILON).max(f64::from_bits(1));
+            prop_assert!((s - ws).abs() <= 2.0 * ulp(ws).max(f64::EPSILON), "sin({:e}) = {:e}, platform {:e}", x, s, ws);
+            prop_assert!((c - wc).abs() <= 2.0 * ulp(wc).max(f64::EPSILON), "cos({:e}) = {:e}, platform {:e}", x, c, wc);
+            prop_assert!((s * s + c * c - 1.0).abs() <= 4.0 * f64::EPSILON);
+            if x.abs() > 1e6 {
+                // beyond the branch-free domain: the `libm` crate's values, as the `Real` methods
+                prop_assert_eq!((s.to_bits(), c.to_bits()), (libm::sin(x).to_bits(), libm::cos(x).to_bits()));
+            }
+        }
+        let (s32, c32) = trig::sin_cos(x32);
+        let (ws32, wc32) = (x32.sin(), x32.cos());
+        prop_assert_eq!(s32.is_nan(), ws32.is_nan(), "sin({:e})", x32);
+        if ws32.is_finite() {
+            prop_assert!((s32 - ws32).abs() <= 2.0 * f32::EPSILON, "sin({:e}) = {:e}, platform {:e}", x32, s32, ws32);
+            prop_assert!((c32 - wc32).abs() <= 2.0 * f32::EPSILON, "cos({:e}) = {:e}, platform {:e}", x32, c32, wc32);
         }
     }
 

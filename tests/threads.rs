@@ -635,11 +635,13 @@ fn growth_arrays_from_many_threads_equal_serial() {
         let mut d = vec![0.0; zs.len()];
         let mut f = vec![0.0; zs.len()];
         let mut p = vec![0.0; ks.len()];
+        let mut t = vec![0.0; ks.len()];
         let rd = g.growth_factor_array(&zs, &mut d).is_ok();
         let rf = g.growth_rate_array(&zs, &mut f).is_ok();
         let rp = s.linear_power_spectrum_mpc3_array(&ks, 0.5, &mut p).is_ok();
+        let rt = s.transfer_function_array(&ks, &mut t).is_ok();
         let bits = |v: &[f64]| v.iter().map(|x| x.to_bits()).collect::<Vec<u64>>();
-        (rd, rf, rp, bits(&d), bits(&f), bits(&p))
+        (rd, rf, rp, rt, bits(&d), bits(&f), bits(&p), bits(&t))
     };
     let serial = run();
     std::thread::scope(|scope| {
