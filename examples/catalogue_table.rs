@@ -1,5 +1,6 @@
-//! The relicore demo, part 2, in Rust: the distance-redshift table of the INVENTED Quillmere
-//! Deep Field Survey's universe.
+//! The relicore demo, part 2, in Rust: the table of the INVENTED Quillmere Deep Field Survey's
+//! follow-up objects (per object: luminosity distance, distance modulus, apparent magnitude,
+//! half-light radius as an angle, lookback time, age of the universe when the light left).
 //!
 //! Reads `examples/data/invented_catalogue.txt` (or the path given as the first argument) and
 //! prints every computed quantity as `key = value` with 17 significant digits. The C, Fortran
@@ -29,17 +30,22 @@ const UNIVERSE_KEYS: [&str; 10] = [
 
 struct Inputs {
     params: UniverseParameters<f64>,
-    redshifts: Vec<f64>,
-    ages_gyr: Vec<f64>,
+    /// the follow-up objects' redshifts, absolute magnitudes and half-light radii (kpc)
+    objects: [Vec<f64>; 3],
 }
+
+const OBJECT_KEYS: [&str; 3] = [
+    "object_redshift",
+    "object_absolute_magnitude",
+    "object_half_light_radius_kpc",
+];
 
 fn read_inputs(path: &str) -> Result<Inputs, String> {
     let text = std::fs::read_to_string(path).map_err(|e| format!("cannot read {path}: {e}"))?;
     // every parameter is read from the file; the defaults only fill the struct first
     let mut p = UniverseParameters::new(0.0, 0.0);
     let mut given = [0usize; 10];
-    let mut redshifts = Vec::new();
-    let mut ages_gyr = Vec::new();
+    let mut objects: [Vec<f64>; 3] = [Vec::new(), Vec::new(), Vec::new()];
     for (i, line) in text.lines().enumerate() {
         let line_no = i + 1;
         let line = line.trim();
@@ -78,10 +84,12 @@ fn read_inputs(path: &str) -> Result<Inputs, String> {
                 return Err(format!("line {line_no}: {key} given twice"));
             }
             *slot = v;
-        } else if *key == "table_redshift" {
-            redshifts.push(v);
-        } else if *key == "table_age_gyr" {
-            ages_gyr.push(v);
+        } else if let Some(list) = OBJECT_KEYS
+            .iter()
+            .position(|k| k == key)
+            .and_then(|which| objects.get_mut(which))
+        {
+            list.push(v);
         } else {
             return Err(format!("line {line_no}: unknown key {key:?}"));
         }
@@ -96,11 +104,13 @@ fn read_inputs(path: &str) -> Result<Inputs, String> {
             return Err(format!("{k} must be given {want} time(s), got {n}"));
         }
     }
-    Ok(Inputs {
-        params: p,
-        redshifts,
-        ages_gyr,
-    })
+    if objects.iter().any(|list| list.len() != objects[0].len()) {
+        return Err(format!(
+            "{} must be given equally often",
+            OBJECT_KEYS.join(", ")
+        ));
+    }
+    Ok(Inputs { params: p, objects })
 }
 
 /// 17 significant digits in the C `%.16e` form, so the four programs print alike.
@@ -122,52 +132,39 @@ fn print(key: &str, value: f64) {
     println!("{key} = {}", fmt17(value));
 }
 
-type Method = fn(&Universe<f64>, f64) -> relicore::Result<f64>;
-
 fn run(path: &str) -> Result<(), String> {
     let inp = read_inputs(path)?;
     let u = Universe::new(inp.params).map_err(|e| format!("Universe::new: {e}"))?;
     println!("# relicore catalogue table (Rust) -- INVENTED DATA from {path}");
-    println!("# fictional Quillmere Deep Field Survey; a demo universe, not a published fit");
+    println!("# fictional Quillmere Deep Field Survey; an invented universe, not a published fit");
     let call = |what: &str, r: relicore::Result<f64>| r.map_err(|e| format!("{what}: {e}"));
-    print("universe_hubble_distance_mpc", u.hubble_distance_mpc());
-    print("universe_hubble_time_gyr", u.hubble_time_gyr());
-    print("universe_omega_radiation", u.omega_radiation());
-    print("universe_omega_dark_energy", u.omega_dark_energy());
-    print(
-        "universe_matter_radiation_equality_redshift",
-        call("equality", u.matter_radiation_equality_redshift())?,
-    );
     print("universe_age_today_gyr", call("age_gyr", u.age_gyr(0.0))?);
-    let columns: [(&str, Method); 8] = [
-        ("comoving_distance_mpc", Universe::comoving_distance_mpc),
-        ("luminosity_distance_mpc", Universe::luminosity_distance_mpc),
-        (
-            "angular_diameter_distance_mpc",
-            Universe::angular_diameter_distance_mpc,
-        ),
-        ("distance_modulus", Universe::distance_modulus),
-        (
-            "transverse_scale_kpc_per_arcsec",
-            Universe::transverse_scale_kpc_per_arcsec,
-        ),
-        ("comoving_volume_gpc3", Universe::comoving_volume_gpc3),
-        ("lookback_time_gyr", Universe::lookback_time_gyr),
-        ("age_gyr", Universe::age_gyr),
-    ];
-    for (i, &z) in inp.redshifts.iter().enumerate() {
-        let n = i + 1;
-        print(&format!("redshift_{n}_z"), z);
-        for (name, f) in columns {
-            print(&format!("redshift_{n}_{name}"), call(name, f(&u, z))?);
-        }
-    }
-    for (i, &t) in inp.ages_gyr.iter().enumerate() {
-        let n = i + 1;
-        print(&format!("age_{n}_gyr"), t);
+    let [redshifts, magnitudes, radii] = &inp.objects;
+    for (i, ((&z, &m_abs), &radius_kpc)) in redshifts.iter().zip(magnitudes).zip(radii).enumerate()
+    {
+        let p = format!("object_{}_", i + 1);
+        print(&format!("{p}redshift"), z);
+        print(&format!("{p}absolute_magnitude"), m_abs);
+        print(&format!("{p}half_light_radius_kpc"), radius_kpc);
         print(
-            &format!("age_{n}_redshift"),
-            call("redshift_at_age_gyr", u.redshift_at_age_gyr(t))?,
+            &format!("{p}luminosity_distance_mpc"),
+            call("luminosity_distance_mpc", u.luminosity_distance_mpc(z))?,
+        );
+        let modulus = call("distance_modulus", u.distance_modulus(z))?;
+        print(&format!("{p}distance_modulus"), modulus);
+        print(&format!("{p}apparent_magnitude"), m_abs + modulus);
+        let scale = call(
+            "transverse_scale_kpc_per_arcsec",
+            u.transverse_scale_kpc_per_arcsec(z),
+        )?;
+        print(&format!("{p}half_light_radius_arcsec"), radius_kpc / scale);
+        print(
+            &format!("{p}lookback_time_gyr"),
+            call("lookback_time_gyr", u.lookback_time_gyr(z))?,
+        );
+        print(
+            &format!("{p}age_at_emission_gyr"),
+            call("age_gyr", u.age_gyr(z))?,
         );
     }
     Ok(())

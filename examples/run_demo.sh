@@ -6,9 +6,10 @@
 #           workshop seen by a fictional thermal camera: an invented 640 x 480 thermal scene
 #           turned into object-temperature and uncertainty images in all four languages,
 #           compared byte for byte (examples/data/invented_thermal_scene.txt);
-#   part 2: the fictional Quillmere Deep Field Survey: a distance-redshift table of the demo
-#           universe in all four languages, and a catalogue of 100,000 invented galaxies turned
-#           into distances and ages in Python (examples/data/invented_catalogue.txt);
+#   part 2: the fictional Quillmere Deep Field Survey: a table of its invented follow-up galaxies
+#           (distance, magnitudes, angular size, lookback time, age) in all four languages, and a
+#           catalogue of 100,000 invented galaxies turned into distances and ages in Python
+#           (examples/data/invented_catalogue.txt);
 #   part 3: the fictional toy simulation code Orvelstep (a coinage, like its group's name): its
 #           starting time, the last-scattering summary, the growth factor and rate at its start,
 #           sigma8, the leapfrog factors of its first steps, a power-spectrum file for its initial
@@ -137,7 +138,7 @@ echo "== plots of the thermal scene"
 echo
 
 echo "== part 2: the fictional Quillmere Deep Field Survey"
-echo "== running the four distance-redshift table programs on the same invented inputs"
+echo "== running the four follow-up table programs on the same invented inputs"
 "$TARGET"/release/examples/catalogue_table "$CATALOGUE" >"$OUT/cosmology_rust.txt"
 "$BUILD/catalogue_table_c" "$CATALOGUE" >"$OUT/cosmology_c.txt"
 "$BUILD/catalogue_table_f" "$CATALOGUE" >"$OUT/cosmology_fortran.txt"
@@ -148,14 +149,15 @@ done
 echo
 
 cat <<'EOF'
-== what the quantities are (the demo universe: flat, H0 = 70, Omega_m = 0.3, radiation, one
-   0.06 eV neutrino -- a round-number model for the demo, not a published fit)
-   universe_*            Hubble distance and time, Omega_radiation and Omega_dark_energy today,
-                         matter-radiation equality redshift, age today
-   redshift_N_*          at each table redshift: comoving, luminosity and angular-diameter
-                         distances (Mpc), distance modulus, kpc per arcsec, comoving volume
-                         (Gpc^3), lookback time and age (Gyr)
-   age_N_*               the redshift at which the universe had the given age
+== what the quantities are (the survey's invented universe: flat, H0 = 68.31, Omega_m = 0.3117,
+   Omega_b = 0.04893, radiation, one 0.057 eV neutrino -- made-up parameters, not a published fit)
+   universe_age_today_gyr   the age of that universe today
+   object_N_*            for each of the survey's eight invented follow-up galaxies: its invented
+                         redshift, absolute magnitude and half-light radius (kpc); the luminosity
+                         distance (Mpc) and distance modulus; the apparent magnitude M + modulus
+                         (no K-correction); the half-light radius as an angle (arcsec, from the
+                         transverse scale); the lookback time to the galaxy and the age of the
+                         universe when its light left (Gyr)
 
 EOF
 echo "== the four languages side by side"
@@ -188,7 +190,7 @@ grep -E '^(start_(redshift|age_myr|ionized_fraction|matter_temperature_k)|histor
 echo
 
 cat <<'EOF'
-== what the quantities are (part 2's demo universe -- flat, H0 = 70, Omega_m = 0.3,
+== what the quantities are (the simulation's universe -- flat, H0 = 70, Omega_m = 0.3,
    Omega_b = 0.05, radiation, one 0.06 eV neutrino: a round-number model, not a published
    fit -- with the invented reionisation redshift)
    start_*               the fictional run's start: its redshift, the age of the universe there

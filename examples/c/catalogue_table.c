@@ -1,6 +1,7 @@
 /*
- * The relicore demo, part 2, in C: the distance-redshift table of the INVENTED Quillmere Deep
- * Field Survey's universe.
+ * The relicore demo, part 2, in C: the table of the INVENTED Quillmere Deep Field Survey's
+ * follow-up objects (per object: luminosity distance, distance modulus, apparent magnitude,
+ * half-light radius as an angle, lookback time, age of the universe when the light left).
  *
  * Reads examples/data/invented_catalogue.txt (or the path given as the first argument) and
  * prints every computed quantity as "key = value" with 17 significant digits. The Rust,
@@ -29,10 +30,15 @@
 struct inputs {
     struct relicore_universe_parameters params;
     int given[10]; /* how often each universe_ key was given (masses: three times) */
-    double redshifts[MAX_LIST];
-    size_t n_redshifts;
-    double ages_gyr[MAX_LIST];
-    size_t n_ages;
+    /* the follow-up objects: redshift, absolute magnitude, half-light radius (kpc) */
+    double objects[3][MAX_LIST];
+    size_t n_objects[3];
+};
+
+static const char *const OBJECT_KEYS[3] = {
+    "object_redshift",
+    "object_absolute_magnitude",
+    "object_half_light_radius_kpc",
 };
 
 static const char *const UNIVERSE_KEYS[10] = {
@@ -105,19 +111,20 @@ static int read_inputs(const char *path, struct inputs *inp) {
             status = -1;
             break;
         }
-        int which = -1;
+        int which = -1, object = -1;
         for (int k = 0; k < 10; k++) {
             if (strcmp(key, UNIVERSE_KEYS[k]) == 0) which = k;
+        }
+        for (int k = 0; k < 3; k++) {
+            if (strcmp(key, OBJECT_KEYS[k]) == 0) object = k;
         }
         if (which >= 0) {
             if (store(inp, which, v) != 0) {
                 fprintf(stderr, "catalogue_table: line %d: %s given too often\n", line_no, key);
                 status = -1;
             }
-        } else if (strcmp(key, "table_redshift") == 0) {
-            status = append(inp->redshifts, &inp->n_redshifts, v, line_no);
-        } else if (strcmp(key, "table_age_gyr") == 0) {
-            status = append(inp->ages_gyr, &inp->n_ages, v, line_no);
+        } else if (object >= 0) {
+            status = append(inp->objects[object], &inp->n_objects[object], v, line_no);
         } else {
             fprintf(stderr, "catalogue_table: line %d: unknown key \"%s\"\n", line_no, key);
             status = -1;
@@ -130,6 +137,11 @@ static int read_inputs(const char *path, struct inputs *inp) {
                     k == 6 ? "three times" : "once");
             status = -1;
         }
+    }
+    if (status == 0 && (inp->n_objects[1] != inp->n_objects[0] || inp->n_objects[2] != inp->n_objects[0])) {
+        fprintf(stderr, "catalogue_table: %s, %s and %s must be given equally often\n", OBJECT_KEYS[0],
+                OBJECT_KEYS[1], OBJECT_KEYS[2]);
+        status = -1;
     }
     return status;
 }
@@ -150,18 +162,9 @@ static void check(int32_t status, const char *what) {
     }
 }
 
-typedef int32_t (*constant_fn)(const struct relicore_universe *, double *);
-typedef int32_t (*element_fn)(const struct relicore_universe *, double, double *);
-
-/* A constant of the universe (stops on failure). */
-static double constant(constant_fn f, const struct relicore_universe *u, const char *what) {
-    double v = 0.0;
-    check(f(u, &v), what);
-    return v;
-}
-
 /* A function of the universe at one argument (stops on failure). */
-static double at(element_fn f, const struct relicore_universe *u, double x, const char *what) {
+static double at(int32_t (*f)(const struct relicore_universe *, double, double *),
+                 const struct relicore_universe *u, double x, const char *what) {
     double v = 0.0;
     check(f(u, x, &v), what);
     return v;
@@ -177,41 +180,24 @@ int main(int argc, char **argv) {
     const struct relicore_universe *u = &universe;
     check(relicore_universe_init(&inp.params, &universe), "relicore_universe_init");
     printf("# relicore catalogue table (C) -- INVENTED DATA from %s\n", path);
-    printf("# fictional Quillmere Deep Field Survey; a demo universe, not a published fit\n");
+    printf("# fictional Quillmere Deep Field Survey; an invented universe, not a published fit\n");
 
-    print("universe_hubble_distance_mpc", constant(relicore_hubble_distance_mpc, u, "hubble_distance_mpc"));
-    print("universe_hubble_time_gyr", constant(relicore_hubble_time_gyr, u, "hubble_time_gyr"));
-    print("universe_omega_radiation", constant(relicore_omega_radiation, u, "omega_radiation"));
-    print("universe_omega_dark_energy", constant(relicore_omega_dark_energy, u, "omega_dark_energy"));
-    print("universe_matter_radiation_equality_redshift",
-          constant(relicore_matter_radiation_equality_redshift, u, "matter_radiation_equality_redshift"));
     print("universe_age_today_gyr", at(relicore_age_gyr, u, 0.0, "age_gyr"));
-
-    /* the table: each quantity of each redshift, in the order every language prints them */
-    static const struct {
-        const char *name;
-        element_fn f;
-    } columns[] = {
-        { "comoving_distance_mpc", relicore_comoving_distance_mpc },
-        { "luminosity_distance_mpc", relicore_luminosity_distance_mpc },
-        { "angular_diameter_distance_mpc", relicore_angular_diameter_distance_mpc },
-        { "distance_modulus", relicore_distance_modulus },
-        { "transverse_scale_kpc_per_arcsec", relicore_transverse_scale_kpc_per_arcsec },
-        { "comoving_volume_gpc3", relicore_comoving_volume_gpc3 },
-        { "lookback_time_gyr", relicore_lookback_time_gyr },
-        { "age_gyr", relicore_age_gyr },
-    };
-    for (size_t i = 0; i < inp.n_redshifts; i++) {
-        double z = inp.redshifts[i];
-        print_indexed("redshift", i + 1, "z", z);
-        for (size_t c = 0; c < sizeof columns / sizeof columns[0]; c++) {
-            print_indexed("redshift", i + 1, columns[c].name, at(columns[c].f, u, z, columns[c].name));
-        }
-    }
-    for (size_t i = 0; i < inp.n_ages; i++) {
-        double t = inp.ages_gyr[i];
-        print_indexed("age", i + 1, "gyr", t);
-        print_indexed("age", i + 1, "redshift", at(relicore_redshift_at_age_gyr, u, t, "redshift_at_age_gyr"));
+    /* per object, in the order every language prints them */
+    for (size_t i = 0; i < inp.n_objects[0]; i++) {
+        double z = inp.objects[0][i], m_abs = inp.objects[1][i], radius_kpc = inp.objects[2][i];
+        print_indexed("object", i + 1, "redshift", z);
+        print_indexed("object", i + 1, "absolute_magnitude", m_abs);
+        print_indexed("object", i + 1, "half_light_radius_kpc", radius_kpc);
+        print_indexed("object", i + 1, "luminosity_distance_mpc",
+                      at(relicore_luminosity_distance_mpc, u, z, "luminosity_distance_mpc"));
+        double modulus = at(relicore_distance_modulus, u, z, "distance_modulus");
+        print_indexed("object", i + 1, "distance_modulus", modulus);
+        print_indexed("object", i + 1, "apparent_magnitude", m_abs + modulus);
+        double scale = at(relicore_transverse_scale_kpc_per_arcsec, u, z, "transverse_scale_kpc_per_arcsec");
+        print_indexed("object", i + 1, "half_light_radius_arcsec", radius_kpc / scale);
+        print_indexed("object", i + 1, "lookback_time_gyr", at(relicore_lookback_time_gyr, u, z, "lookback_time_gyr"));
+        print_indexed("object", i + 1, "age_at_emission_gyr", at(relicore_age_gyr, u, z, "age_gyr"));
     }
     return 0;
 }

@@ -1,5 +1,6 @@
-! The relicore demo, part 2, in Fortran: the distance-redshift table of the INVENTED Quillmere
-! Deep Field Survey's universe.
+! The relicore demo, part 2, in Fortran: the table of the INVENTED Quillmere Deep Field Survey's
+! follow-up objects (per object: luminosity distance, distance modulus, apparent magnitude,
+! half-light radius as an angle, lookback time, age of the universe when the light left).
 !
 ! Reads examples/data/invented_catalogue.txt (or the path given as the first argument) and
 ! prints every computed quantity as "key = value" with 17 significant digits. The Rust, C and
@@ -16,12 +17,8 @@ program catalogue_table
   use, intrinsic :: iso_c_binding, only: c_double
   use relicore, only: relicore_universe, relicore_universe_parameters, &
       relicore_universe_parameters_default, relicore_universe_init, &
-      relicore_hubble_distance_mpc_s, relicore_hubble_time_gyr_s, relicore_omega_radiation_s, &
-      relicore_omega_dark_energy_s, relicore_matter_radiation_equality_redshift_s, &
-      relicore_comoving_distance_mpc_s, relicore_luminosity_distance_mpc_s, &
-      relicore_angular_diameter_distance_mpc_s, relicore_distance_modulus_s, &
-      relicore_transverse_scale_kpc_per_arcsec_s, relicore_comoving_volume_gpc3_s, &
-      relicore_lookback_time_gyr_s, relicore_age_gyr_s, relicore_redshift_at_age_gyr_s
+      relicore_luminosity_distance_mpc_s, relicore_distance_modulus_s, &
+      relicore_transverse_scale_kpc_per_arcsec_s, relicore_lookback_time_gyr_s, relicore_age_gyr_s
   implicit none
 
   character(len=*), parameter :: default_input = 'examples/data/invented_catalogue.txt'
@@ -30,10 +27,11 @@ program catalogue_table
   type(relicore_universe_parameters) :: params
   type(relicore_universe) :: universe
   integer :: given(0:9) = 0
-  real(c_double) :: redshifts(max_list), ages_gyr(max_list)
-  integer :: n_redshifts = 0, n_ages = 0
+  ! the follow-up objects: redshift, absolute magnitude, half-light radius (kpc)
+  real(c_double) :: redshifts(max_list), magnitudes(max_list), radii_kpc(max_list)
+  integer :: n_redshifts = 0, n_magnitudes = 0, n_radii = 0
   character(len=1024) :: path
-  real(c_double) :: z, v
+  real(c_double) :: z, v, modulus, scale
   integer :: i, path_length
 
   if (command_argument_count() >= 1) then
@@ -47,45 +45,27 @@ program catalogue_table
   ! without stat, a failure stops with relicore's message
   call relicore_universe_init(params, universe)
   print '(a)', '# relicore catalogue table (Fortran) -- INVENTED DATA from ' // trim(path)
-  print '(a)', '# fictional Quillmere Deep Field Survey; a demo universe, not a published fit'
+  print '(a)', '# fictional Quillmere Deep Field Survey; an invented universe, not a published fit'
 
-  call relicore_hubble_distance_mpc_s(universe, v)
-  call show('universe_hubble_distance_mpc', v)
-  call relicore_hubble_time_gyr_s(universe, v)
-  call show('universe_hubble_time_gyr', v)
-  call relicore_omega_radiation_s(universe, v)
-  call show('universe_omega_radiation', v)
-  call relicore_omega_dark_energy_s(universe, v)
-  call show('universe_omega_dark_energy', v)
-  call relicore_matter_radiation_equality_redshift_s(universe, v)
-  call show('universe_matter_radiation_equality_redshift', v)
   call relicore_age_gyr_s(universe, 0.0_c_double, v)
   call show('universe_age_today_gyr', v)
-
+  ! per object, in the order every language prints them
   do i = 1, n_redshifts
     z = redshifts(i)
-    call show(indexed('redshift', i, 'z'), z)
-    call relicore_comoving_distance_mpc_s(universe, z, v)
-    call show(indexed('redshift', i, 'comoving_distance_mpc'), v)
+    call show(indexed('object', i, 'redshift'), z)
+    call show(indexed('object', i, 'absolute_magnitude'), magnitudes(i))
+    call show(indexed('object', i, 'half_light_radius_kpc'), radii_kpc(i))
     call relicore_luminosity_distance_mpc_s(universe, z, v)
-    call show(indexed('redshift', i, 'luminosity_distance_mpc'), v)
-    call relicore_angular_diameter_distance_mpc_s(universe, z, v)
-    call show(indexed('redshift', i, 'angular_diameter_distance_mpc'), v)
-    call relicore_distance_modulus_s(universe, z, v)
-    call show(indexed('redshift', i, 'distance_modulus'), v)
-    call relicore_transverse_scale_kpc_per_arcsec_s(universe, z, v)
-    call show(indexed('redshift', i, 'transverse_scale_kpc_per_arcsec'), v)
-    call relicore_comoving_volume_gpc3_s(universe, z, v)
-    call show(indexed('redshift', i, 'comoving_volume_gpc3'), v)
+    call show(indexed('object', i, 'luminosity_distance_mpc'), v)
+    call relicore_distance_modulus_s(universe, z, modulus)
+    call show(indexed('object', i, 'distance_modulus'), modulus)
+    call show(indexed('object', i, 'apparent_magnitude'), magnitudes(i) + modulus)
+    call relicore_transverse_scale_kpc_per_arcsec_s(universe, z, scale)
+    call show(indexed('object', i, 'half_light_radius_arcsec'), radii_kpc(i) / scale)
     call relicore_lookback_time_gyr_s(universe, z, v)
-    call show(indexed('redshift', i, 'lookback_time_gyr'), v)
+    call show(indexed('object', i, 'lookback_time_gyr'), v)
     call relicore_age_gyr_s(universe, z, v)
-    call show(indexed('redshift', i, 'age_gyr'), v)
-  end do
-  do i = 1, n_ages
-    call show(indexed('age', i, 'gyr'), ages_gyr(i))
-    call relicore_redshift_at_age_gyr_s(universe, ages_gyr(i), v)
-    call show(indexed('age', i, 'redshift'), v)
+    call show(indexed('object', i, 'age_at_emission_gyr'), v)
   end do
 
 contains
@@ -192,10 +172,12 @@ contains
       case ('universe_helium_mass_fraction')
         call count_given(9, line_no)
         params%helium_mass_fraction = v
-      case ('table_redshift')
+      case ('object_redshift')
         call append(redshifts, n_redshifts, v, line_no)
-      case ('table_age_gyr')
-        call append(ages_gyr, n_ages, v, line_no)
+      case ('object_absolute_magnitude')
+        call append(magnitudes, n_magnitudes, v, line_no)
+      case ('object_half_light_radius_kpc')
+        call append(radii_kpc, n_radii, v, line_no)
       case default
         call fail(line_no, 'unknown key ' // trim(key))
       end select
@@ -205,6 +187,9 @@ contains
       if (k == 6 .and. given(k) /= 3) error stop 'catalogue_table: three neutrino masses are needed'
       if (k /= 6 .and. given(k) /= 1) error stop 'catalogue_table: every universe parameter is needed once'
     end do
+    if (n_magnitudes /= n_redshifts .or. n_radii /= n_redshifts) error stop &
+        'catalogue_table: object_redshift, object_absolute_magnitude and object_half_light_radius_kpc ' // &
+        'must be given equally often'
   end subroutine read_inputs
 
 end program catalogue_table

@@ -69,7 +69,8 @@ def main(argv: list[str]) -> int:
 
     print(f"# {SURVEY}: INVENTED catalogue of {z.size:,} galaxies (seeded random redshifts, invented magnitudes)")
     print(f"# universe: {u!r}")
-    print("#   (a round-number demo model with radiation and one massive neutrino, not a published fit)")
+    print("#   (a flat model with radiation and one massive neutrino, its parameters invented for the demo,")
+    print("#   not a published fit)")
     print("# relicore computed D_L, distance modulus, age, lookback time and transverse scale for every galaxy")
     print("#   (one array call per quantity; speed is measured by make bench, not here)")
     print()
@@ -115,10 +116,13 @@ def main(argv: list[str]) -> int:
     ax.set_title(f"Distance-redshift relations of the demo universe\n{SURVEY}: INVENTED data", fontsize=10)
     ax.legend(fontsize=8)
     ax.grid(True, which="both", lw=0.3, alpha=0.5)
-    hist.hist(z, bins=np.geomspace(1e-3, 1e3, 120), color="tab:purple", alpha=0.7)
+    bins_per_decade = 20  # bins of equal width in log10(z): 0.05 dex
+    hist.hist(z, bins=np.geomspace(1e-3, 1e3, 6 * bins_per_decade + 1), color="tab:purple", alpha=0.7,
+              label=f"{z.size:,} INVENTED galaxies")
     hist.set_xscale("log")
-    hist.set_xlabel("redshift z")
-    hist.set_ylabel("invented\ngalaxies")
+    hist.set_xlabel("redshift $z$")
+    hist.set_ylabel(f"galaxies per\n{1 / bins_per_decade:g} dex in $z$")
+    hist.legend(fontsize=8, loc="upper left")
     hist.grid(True, which="both", lw=0.3, alpha=0.5)
     fig.tight_layout()
     target = out_dir / "distance_redshift.png"

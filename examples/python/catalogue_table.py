@@ -1,6 +1,7 @@
 #!/usr/bin/env python3
-"""The relicore demo, part 2, in Python: the distance-redshift table of the INVENTED Quillmere
-Deep Field Survey's universe.
+"""The relicore demo, part 2, in Python: the table of the INVENTED Quillmere Deep Field Survey's
+follow-up objects (per object: luminosity distance, distance modulus, apparent magnitude,
+half-light radius as an angle, lookback time, age of the universe when the light left).
 
 Reads examples/data/invented_catalogue.txt (or the path given as the first argument) and prints
 every computed quantity as ``key = value`` with 17 significant digits. The Rust, C and Fortran
@@ -68,32 +69,36 @@ def show(key: str, value: float) -> None:
     print(f"{key} = {value:.16e}")
 
 
+OBJECT_KEYS = ["object_redshift", "object_absolute_magnitude", "object_half_light_radius_kpc"]
+
+
+def objects_of(values: dict[str, list[float]]) -> list[tuple[float, float, float]]:
+    """The follow-up objects: (redshift, absolute magnitude, half-light radius in kpc) each."""
+    lists = [values.get(key, []) for key in OBJECT_KEYS]
+    if len({len(v) for v in lists}) != 1:
+        raise SystemExit("catalogue_table: " + ", ".join(OBJECT_KEYS) + " must be given equally often")
+    return list(zip(*lists))
+
+
 def main(argv: list[str]) -> int:
     path = argv[1] if len(argv) > 1 else DEFAULT_INPUT
     values = read_inputs(path)
     u = universe_of(values)
     print(f"# relicore catalogue table (Python) -- INVENTED DATA from {path}")
-    print("# fictional Quillmere Deep Field Survey; a demo universe, not a published fit")
-    show("universe_hubble_distance_mpc", u.hubble_distance_mpc)
-    show("universe_hubble_time_gyr", u.hubble_time_gyr)
-    show("universe_omega_radiation", u.omega_radiation)
-    show("universe_omega_dark_energy", u.omega_dark_energy)
-    show("universe_matter_radiation_equality_redshift", u.matter_radiation_equality_redshift)
+    print("# fictional Quillmere Deep Field Survey; an invented universe, not a published fit")
     show("universe_age_today_gyr", u.age_gyr(0.0))
-    for i, z in enumerate(values.get("table_redshift", []), start=1):
-        p = f"redshift_{i}_"
-        show(p + "z", z)
-        show(p + "comoving_distance_mpc", u.comoving_distance_mpc(z))
+    for i, (z, m_abs, radius_kpc) in enumerate(objects_of(values), start=1):
+        p = f"object_{i}_"
+        show(p + "redshift", z)
+        show(p + "absolute_magnitude", m_abs)
+        show(p + "half_light_radius_kpc", radius_kpc)
         show(p + "luminosity_distance_mpc", u.luminosity_distance_mpc(z))
-        show(p + "angular_diameter_distance_mpc", u.angular_diameter_distance_mpc(z))
-        show(p + "distance_modulus", u.distance_modulus(z))
-        show(p + "transverse_scale_kpc_per_arcsec", u.transverse_scale_kpc_per_arcsec(z))
-        show(p + "comoving_volume_gpc3", u.comoving_volume_gpc3(z))
+        modulus = u.distance_modulus(z)
+        show(p + "distance_modulus", modulus)
+        show(p + "apparent_magnitude", m_abs + modulus)
+        show(p + "half_light_radius_arcsec", radius_kpc / u.transverse_scale_kpc_per_arcsec(z))
         show(p + "lookback_time_gyr", u.lookback_time_gyr(z))
-        show(p + "age_gyr", u.age_gyr(z))
-    for i, t in enumerate(values.get("table_age_gyr", []), start=1):
-        show(f"age_{i}_gyr", t)
-        show(f"age_{i}_redshift", u.redshift_at_age_gyr(t))
+        show(p + "age_at_emission_gyr", u.age_gyr(z))
     return 0
 
 
