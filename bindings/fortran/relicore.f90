@@ -5756,8 +5756,10 @@ contains
 
   ! Brightness temperature at a wavelength with its uncertainty: T from
   ! `brightness_temperature_wavelength` (the same bits) and the sensitivity coefficient d T/d L =
-  ! 1/(d B_lambda/d T) (Planck's law differentiated implicitly, with
-  ! `radiance_temperature_derivative_wavelength`).
+  ! 1/(d B_lambda/d T) (Planck's law differentiated implicitly; d B_lambda/d T at T in closed form
+  ! from L: with B = a/(e^x - 1), e^x - 1 = a/L at the solution, so d B_lambda/d T = (x/T)*L*(1 +
+  ! L/a), the value `radiance_temperature_derivative_wavelength` gives at T, without an
+  ! exponential).
   !   wavelength_m: wavelength in m, > 0
   !   spectral_radiance: B_lambda in W m-2 sr-1 m-1, > 0
   !   spectral_radiance_uncertainty: standard uncertainty of the radiance, same unit, >= 0
@@ -5788,8 +5790,9 @@ contains
   end subroutine relicore_brightness_temperature_wavelength_with_uncertainty_s
 
   ! Brightness temperature at a frequency with its uncertainty: T from
-  ! `brightness_temperature_frequency` (the same bits) and d T/d L = 1/(d B_nu/d T)
-  ! (`radiance_temperature_derivative_frequency`).
+  ! `brightness_temperature_frequency` (the same bits) and d T/d L = 1/(d B_nu/d T), d B_nu/d T at T
+  ! in closed form from L as for the wavelength form (the value of
+  ! `radiance_temperature_derivative_frequency` at T).
   !   frequency_hz: frequency in Hz, > 0
   !   spectral_radiance: B_nu in W m-2 sr-1 Hz-1, > 0
   !   spectral_radiance_uncertainty: standard uncertainty of the radiance, same unit, >= 0

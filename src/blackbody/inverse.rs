@@ -82,7 +82,8 @@ pub(crate) fn brightness_temperature_wavelength_fast<T: Real>(
 /// * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
 ///
 /// Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
-/// Accuracy: round trip within 1e-14 relative (`f64`) against mpmath.
+/// Accuracy: round trip within 1e-14 relative (`f64`) against mpmath; where 2hν³/c² is below
+/// the normal range (ν below about 1e-95 Hz in `f64`) within 5e-13 (`tests/blackbody_edges.rs`).
 pub fn brightness_temperature_frequency<T: Real>(
     frequency_hz: T,
     spectral_radiance: T,

@@ -300,12 +300,19 @@ fn ln1p_quotient_outside<T: Real>(a: T, ln_a: impl Fn() -> T, b: T) -> T {
             return log::ln_1p(q);
         }
     }
-    // ln(1 + a/b) = ln a − ln b + ln(1 + b/a) for a/b large (the only case left for b > 0 and a
-    // a normal number; a tiny quotient would need b far above any radiance)
+    // with d = ln a − ln b = ln(a/b): ln(1 + a/b) = d + ln(1 + e^−d) for a/b > 1 and
+    // ln(1 + e^d) below (a/b large, or a below the normal range: a subnormal or underflowing
+    // 2hν³/c² at a far-infrared frequency, where the quotient may be small; the first form
+    // alone returned d + (−d) = 0 there). The logarithms carry an absolute error of about
+    // ulp(ln a), so the result is then good to about |ln a|·ε relative (up to 2e-13 in `f64`).
     let la = if a_ok { a.ln() } else { ln_a() };
     let lb = b.ln();
     let d = la - lb;
-    d + (-d).exp().ln_1p()
+    if d > T::zero() {
+        d + (-d).exp().ln_1p()
+    } else {
+        d.exp().ln_1p()
+    }
 }
 
 /// The common case of [`ln1p_quotient`] as straight-line code for the array functions: its

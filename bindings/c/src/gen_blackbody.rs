@@ -1522,7 +1522,8 @@ pub unsafe extern "C" fn relicore_brightness_temperature_wavelength_array(
 /// * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
 ///
 /// Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
-/// Accuracy: round trip within 1e-14 relative (`f64`) against mpmath.
+/// Accuracy: round trip within 1e-14 relative (`f64`) against mpmath; where 2hν³/c² is below
+/// the normal range (ν below about 1e-95 Hz in `f64`) within 5e-13 (`tests/blackbody_edges.rs`).
 ///
 /// Arguments of the C function:
 /// * `frequency_hz`: frequency in Hz, > 0.
@@ -1558,7 +1559,8 @@ pub unsafe extern "C" fn relicore_brightness_temperature_frequency(
 /// * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
 ///
 /// Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
-/// Accuracy: round trip within 1e-14 relative (`f64`) against mpmath.
+/// Accuracy: round trip within 1e-14 relative (`f64`) against mpmath; where 2hν³/c² is below
+/// the normal range (ν below about 1e-95 Hz in `f64`) within 5e-13 (`tests/blackbody_edges.rs`).
 ///
 /// Arguments of the C function:
 /// * `frequency_hz`: frequency in Hz, > 0.
@@ -2476,8 +2478,9 @@ pub unsafe extern "C" fn relicore_band_radiance_temperature_derivative_wavelengt
 
 /// Brightness temperature at a wavelength with its uncertainty: T from
 /// `brightness_temperature_wavelength` (the same bits) and the sensitivity coefficient
-/// ∂T/∂L = 1/(∂B_λ/∂T) (Planck's law differentiated implicitly, with
-/// `radiance_temperature_derivative_wavelength`).
+/// ∂T/∂L = 1/(∂B_λ/∂T) (Planck's law differentiated implicitly; ∂B_λ/∂T at T in closed form
+/// from L: with B = a/(eˣ − 1), eˣ − 1 = a/L at the solution, so ∂B_λ/∂T = (x/T)·L·(1 + L/a),
+/// the value `radiance_temperature_derivative_wavelength` gives at T, without an exponential).
 ///
 /// * `wavelength_m`: m, finite and > 0.
 /// * `spectral_radiance`: L in W m⁻² sr⁻¹ m⁻¹, finite and > 0.
@@ -2528,8 +2531,9 @@ pub unsafe extern "C" fn relicore_brightness_temperature_wavelength_with_uncerta
 }
 
 /// Brightness temperature at a frequency with its uncertainty: T from
-/// `brightness_temperature_frequency` (the same bits) and ∂T/∂L = 1/(∂B_ν/∂T)
-/// (`radiance_temperature_derivative_frequency`).
+/// `brightness_temperature_frequency` (the same bits) and ∂T/∂L = 1/(∂B_ν/∂T), ∂B_ν/∂T at T
+/// in closed form from L as for the wavelength form (the value of
+/// `radiance_temperature_derivative_frequency` at T).
 ///
 /// * `frequency_hz`: Hz, finite and > 0.
 /// * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
