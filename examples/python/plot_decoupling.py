@@ -12,7 +12,7 @@ Writes three PNG files and prints their paths:
                           run's start and output redshifts marked;
   temperature_ratio.png   T_m/T_r against z, the thermal decoupling redshift (T_m/T_r = 0.99)
                           and the run's start marked;
-  visibility.png          the visibility function per Mpc of conformal distance around
+  visibility.png          the visibility function g (per Mpc of conformal distance) around
                           recombination, z* and z_drag marked with vertical lines and labels.
 Every plotted value comes from relicore (one array call per curve); this script only calls it,
 divides T_m by T_r and draws.
@@ -55,7 +55,7 @@ def plot_ionization_history(inp: Inputs, history: ThermalHistory, plain: Thermal
     z = redshift_grid(history.highest_redshift)
     fig, ax = plt.subplots(figsize=(8.5, 5.5))
     ax.loglog(1.0 + z, history.ionized_fraction(z), color="tab:blue", lw=2,
-              label=f"relicore history, reionisation at z = {inp.reionization_redshift:g}")
+              label=f"relicore history, reionisation at $z$ = {inp.reionization_redshift:g}")
     ax.loglog(1.0 + z, plain.ionized_fraction(z), color="tab:blue", lw=1, ls=":",
               label="the same universe without reionisation")
     saha = saha_ionized_fraction(u, z)
@@ -65,16 +65,18 @@ def plot_ionization_history(inp: Inputs, history: ThermalHistory, plain: Thermal
     ax.plot(1.0 + out, history.ionized_fraction(out), "o", ms=4, color="black",
             label="the fictional run's output redshifts")
     ax.plot(1.0 + inp.start_redshift, history.ionized_fraction(inp.start_redshift), "s", ms=7,
-            mfc="none", mec="black", label=f"the fictional run's start, z = {inp.start_redshift:g}")
+            mfc="none", mec="black", label=f"the fictional run's start, $z$ = {inp.start_redshift:g}")
     z_star = history.last_scattering_redshift
-    for zz, text in ((inp.reionization_redshift, "reionisation"), (z_star, "last scattering z*")):
+    for zz, text in ((inp.reionization_redshift, "reionisation"), (z_star, "last scattering $z_*$")):
         ax.axvline(1.0 + zz, color="gray", lw=0.8, ls="-.")
-        ax.text(1.0 + zz, 2.5, f" {text}\n z = {zz:.5g}", fontsize=8, color="dimgray", va="top")
+        ax.text(1.0 + zz, 2.5, f" {text}\n $z$ = {zz:.5g}", fontsize=8, color="dimgray", va="top")
+    ax.plot([], [], color="gray", lw=0.8, ls="-.", label="reionisation and last-scattering redshifts")
     ax.set_xlim(1.0 + z[-1], 1.0)  # time runs to the right: z from 1e4 down to 0
     ax.set_ylim(1e-5, 3.0)
-    ax.set_xlabel("1 + z")
-    ax.set_ylabel("ionised fraction x_e = n_e / n_H")
-    ax.set_title("Ionisation history of the demo universe (x_e > 1 while helium is ionised)", fontsize=10)
+    ax.set_xlabel("$1 + z$")
+    ax.set_ylabel("ionised fraction $x_\\mathrm{e} = n_\\mathrm{e} / n_\\mathrm{H}$")
+    ax.set_title("Ionisation history of the demo universe ($x_\\mathrm{e} > 1$ while helium is ionised)",
+                 fontsize=10)
     ax.grid(True, which="major", alpha=0.3)
     ax.legend(fontsize=8, loc="lower left")
     finish(fig, path)
@@ -86,19 +88,21 @@ def plot_temperature_ratio(inp: Inputs, history: ThermalHistory, path: Path) -> 
     ratio = history.matter_temperature_k(z) / u.cmb_temperature_at_k(z)
     z_dec = history.thermal_decoupling_redshift
     fig, ax = plt.subplots(figsize=(8.5, 5.5))
-    ax.semilogx(1.0 + z, ratio, color="tab:purple", lw=2, label="T_m / T_r (relicore)")
-    ax.axvline(1.0 + z_dec, color="gray", lw=0.8, ls="-.")
-    ax.text(1.0 + z_dec, 0.5, f" thermal decoupling\n (T_m/T_r = 0.99)\n z = {z_dec:.5g}", fontsize=8,
-            color="dimgray")
+    ax.semilogx(1.0 + z, ratio, color="tab:purple", lw=2,
+                label="$T_\\mathrm{m} / T_\\mathrm{r}$, gas over radiation temperature (relicore)")
+    ax.axvline(1.0 + z_dec, color="gray", lw=0.8, ls="-.",
+               label="thermal decoupling ($T_\\mathrm{m} / T_\\mathrm{r}$ = 0.99)")
+    ax.text(1.0 + z_dec, 0.5, f" thermal decoupling\n ($T_\\mathrm{{m}} / T_\\mathrm{{r}}$ = 0.99)\n $z$ = {z_dec:.5g}",
+            fontsize=8, color="dimgray")
     z0 = inp.start_redshift
     ax.plot(1.0 + z0, history.matter_temperature_k(z0) / u.cmb_temperature_at_k(z0), "s", ms=7, mfc="none",
-            mec="black", label=f"the fictional run's start, z = {z0:g}")
+            mec="black", label=f"the fictional run's start, $z$ = {z0:g}")
     ax.set_xlim(1.0 + z[-1], 1.0)
     ax.set_ylim(0.0, 1.05)
-    ax.set_xlabel("1 + z")
-    ax.set_ylabel("matter temperature / radiation temperature")
-    ax.set_title("Gas and radiation temperatures of the demo universe (heating by reionisation is not modelled)",
-                 fontsize=10)
+    ax.set_xlabel("$1 + z$")
+    ax.set_ylabel("$T_\\mathrm{m} / T_\\mathrm{r}$ (matter over radiation temperature)")
+    ax.set_title("Ratio of the gas (matter) temperature to the radiation temperature in the demo universe\n"
+                 "(heating of the gas by reionisation is not modelled)", fontsize=10)
     ax.grid(True, which="major", alpha=0.3)
     ax.legend(fontsize=8, loc="lower left")
     finish(fig, path)
@@ -110,20 +114,23 @@ def plot_visibility(history: ThermalHistory, path: Path) -> None:
     z_star = history.last_scattering_redshift
     z_drag = history.drag_redshift
     fig, ax = plt.subplots(figsize=(8.5, 5.5))
-    ax.plot(z, g, color="tab:green", lw=2, label="visibility g(z) (relicore)")
+    ax.plot(z, g, color="tab:green", lw=2, label="visibility $g = -(\\mathrm{d}\\tau/\\mathrm{d}\\eta)\\,e^{-\\tau}$ (relicore)")
     top = float(g.max())
     # the axis runs from high z to low z (time to the right): z* > z_drag is drawn left of z_drag,
     # so its label extends to the left and z_drag's to the right
-    for zz, text, colour, align in ((z_star, "z*", "tab:red", "right"), (z_drag, "z_drag", "tab:blue", "left")):
-        ax.axvline(zz, color=colour, lw=1.0, ls="--")
+    for zz, text, colour, align, name in (
+        (z_star, "$z_*$", "tab:red", "right", "last scattering $z_*$ (optical depth 1)"),
+        (z_drag, "$z_\\mathrm{drag}$", "tab:blue", "left", "drag epoch $z_\\mathrm{drag}$ (baryon-drag depth 1)"),
+    ):
+        ax.axvline(zz, color=colour, lw=1.0, ls="--", label=name)
         ax.text(zz, top * 1.03, f" {text} = {zz:.2f} ", color=colour, fontsize=9, ha=align)
     ax.invert_xaxis()
     ax.set_ylim(0.0, top * 1.12)
-    ax.set_xlabel("redshift z")
-    ax.set_ylabel("visibility per Mpc of conformal distance (Mpc$^{-1}$)")
+    ax.set_xlabel("redshift $z$")
+    ax.set_ylabel("visibility $g$ per unit conformal distance $\\eta$ (Mpc$^{-1}$)")
     ax.set_title("Visibility function of the demo universe around recombination", fontsize=10)
     ax.grid(True, alpha=0.3)
-    ax.legend(fontsize=8, loc="upper right")
+    ax.legend(fontsize=8, loc="center left")  # above the high-z tail of g, below the labels of the lines
     finish(fig, path)
 
 
