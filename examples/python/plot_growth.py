@@ -80,13 +80,13 @@ def plot_power_spectrum(inp: Inputs, spectrum: LinearPowerSpectrum, growth: Line
                  fontsize=10)
     ax.grid(True, which="major", alpha=0.3)
     ax.legend(fontsize=8, loc="lower left")
-    ax_ratio.semilogx(k, p_today / p_smooth, color="tab:blue", lw=1.2)
-    ax_ratio.axhline(1.0, color="black", lw=0.8, ls="--")
+    ax_ratio.semilogx(k, p_today / p_smooth, color="tab:blue", lw=1.2,
+                      label="baryon acoustic oscillations:\n$P$ with / without them (same at every $z$)")
+    ax_ratio.axhline(1.0, color="black", lw=0.8, ls="--", label="1 (no oscillations)")
     ax_ratio.set_ylim(0.88, 1.12)
     ax_ratio.set_xlabel(r"wavenumber $k$ (Mpc$^{-1}$, no factor of $h$)")
     ax_ratio.set_ylabel("with / without\noscillations")
-    ax_ratio.text(1.5e-4, 1.08, "baryon acoustic oscillations (the ratio is the same at every $z$)", fontsize=8,
-                  color="dimgray")
+    ax_ratio.legend(fontsize=7, loc="lower right")  # below the flat small-scale end, clear of the wiggles
     ax_ratio.grid(True, which="major", alpha=0.3)
     finish(fig, path)
 
@@ -129,8 +129,10 @@ def plot_growth_rate_sigma8(inp: Inputs, growth: LinearGrowth, spectrum: LinearP
             label=r"$\Omega_\mathrm{m}(z)^{0.55}\,D(z)\,\sigma_8$ (growth index $\gamma$ = 0.55, Linder 2005)")
     ax.set_xlim(0.0, 3.0)
     ax.set_ylim(0.0, 0.55)
-    ax_diff.plot(z, 100.0 * (approx / fs8 - 1.0), color="black", lw=1)
-    ax_diff.axhline(0.0, color="gray", lw=0.6)
+    ax_diff.plot(z, 100.0 * (approx / fs8 - 1.0), color="black", lw=1,
+                 label=r"growth-index approximation / relicore $-$ 1")
+    ax_diff.axhline(0.0, color="gray", lw=0.6, label="0 (agreement)")
+    ax_diff.legend(fontsize=7, loc="upper right")
     ax_diff.set_ylabel("approximation /\nrelicore $-$ 1 (%)")
     ax_diff.set_xlabel(r"redshift $z$")
     ax_diff.grid(True, alpha=0.3)
