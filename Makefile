@@ -39,7 +39,7 @@ $(VENV)/.stamp: requirements-dev.txt
 	touch $@
 
 # ---------------------------------------------------------------- tests
-test: deps generated fmt-check clippy rust-test nostd c-test fortran-test install-test python-test bench-build coverage miri fuzz-quick
+test: deps generated fmt-check clippy rust-test nostd c-test fortran-test install-test readme-test python-test bench-build coverage miri fuzz-quick
 	@echo "make test: all steps passed"
 
 fmt-check:
@@ -193,6 +193,14 @@ install-tools:
 
 install-test: deps install-tools
 	bash tests/install/run.sh
+
+# The README snippet test (tests/readme/run.py): every ```python and ```rust block of README.md,
+# read from the file after its `<!-- readme-test: NAME -->` line (the install test's convention),
+# run as written: Python in the venv with the package just built, Rust as the body of a main
+# returning Result<_, relicore::Error> in a temporary package depending on the core (offline).
+.PHONY: readme-test
+readme-test: deps python-build
+	$(PY) tests/readme/run.py --python $(PY)
 
 clean:
 	cargo clean
