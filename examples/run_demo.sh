@@ -36,7 +36,9 @@ mkdir -p "$BUILD" "$OUT"
 
 echo "relicore demo -- every number below comes from INVENTED data for a FICTIONAL observatory,"
 echo "a FICTIONAL galaxy survey and a FICTIONAL simulation code (inputs: $INPUT, $SCENE,"
-echo "$CATALOGUE, $SIMULATION)"
+echo "$CATALOGUE, $SIMULATION). Their names -- Glimmerfen Ridge Observatory, Quillmere Deep Field"
+echo "Survey, Hollinscarth Simulation Group, Orvelstep -- are coinages made for this demo, not real"
+echo "places, projects or programs."
 echo
 
 echo "== building: Rust example, C static library, C and Fortran programs"

@@ -23,7 +23,7 @@ from pathlib import Path
 import numpy as np
 
 sys.path.insert(0, str(Path(__file__).resolve().parent))
-from catalogue_table import DEFAULT_INPUT, read_inputs, universe_of  # noqa: E402
+from catalogue_table import DEFAULT_INPUT, objects_of, read_inputs, universe_of  # noqa: E402
 
 SURVEY = "Quillmere Deep Field Survey (FICTIONAL)"
 
@@ -112,8 +112,13 @@ def main(argv: list[str]) -> int:
     ax.loglog(grid, u.luminosity_distance_mpc(grid), label="luminosity distance $D_L$")
     ax.loglog(grid, u.angular_diameter_distance_mpc(grid), label="angular-diameter distance $D_A$")
     ax.axhline(u.hubble_distance_mpc, color="grey", lw=0.8, ls=":", label="Hubble distance $c/H_0$")
+    follow_up = np.array([z_obj for z_obj, _, _ in objects_of(values)])
+    if follow_up.size:
+        ax.plot(follow_up, u.luminosity_distance_mpc(follow_up), "o", ms=5, mfc="none", color="black",
+                label=f"the {follow_up.size} INVENTED follow-up galaxies of the table (at their $D_L$)")
     ax.set_ylabel("distance, Mpc")
-    ax.set_title(f"Distance-redshift relations of the demo universe\n{SURVEY}: INVENTED data", fontsize=10)
+    ax.set_title(f"Distance-redshift relations of the survey's invented universe\n{SURVEY}: INVENTED data",
+                 fontsize=10)
     ax.legend(fontsize=8)
     ax.grid(True, which="both", lw=0.3, alpha=0.5)
     bins_per_decade = 20  # bins of equal width in log10(z): 0.05 dex
