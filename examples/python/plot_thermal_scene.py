@@ -137,8 +137,8 @@ def plot_uncertainty(s: Scene, u_c: np.ndarray, probes, path: Path) -> None:
         f"\n$u_\\mathrm{{c}}$ = {res.combined_standard_uncertainty_k:.2g} K",
     )
     ax.set_title("Combined standard uncertainty $u_\\mathrm{c}(T_\\mathrm{obj})$ of each pixel "
-                 "(JCGM 100:2008 eq. 10, uncorrelated inputs)\n"
-                 "it covers only the stated input uncertainties listed below, not the emissivity model "
+                 "(JCGM 100:2008 eq. 10, uncorrelated inputs):\n"
+                 "only the stated input uncertainties listed below, not the emissivity model "
                  "or the camera", fontsize=10)
     inputs = (
         "stated standard uncertainties: $u(L_\\mathrm{meas})$ = "
