@@ -587,8 +587,9 @@ struct relicore_thermal_history_options {
     /**
      * 0: no reionisation (default; `reionization_redshift` is then ignored); 1: tanh
      * reionisation of hydrogen at `reionization_redshift` (a tanh in (1+z)^{3/2} of width
-     * Δz = 0.5, Lewis 2008) and of helium's second electron at z = 3.5. Any other value is
-     * refused with `RELICORE_ERROR_OUT_OF_DOMAIN`.
+     * Δz = 0.5, Lewis 2008) and of helium's second electron at `helium_reionization_redshift`
+     * (a tanh in z of width `helium_reionization_width`). Any other value is refused with
+     * `RELICORE_ERROR_OUT_OF_DOMAIN`.
      */
     int32_t reionization;
     /**
@@ -602,6 +603,17 @@ struct relicore_thermal_history_options {
      * relative, the 2048 nodes are too few: `RELICORE_ERROR_CAPACITY_TOO_SMALL`).
      */
     double highest_redshift;
+    /**
+     * Redshift of helium's second reionisation (He II → He III), the centre of its tanh in z:
+     * finite, 0 ≤ z ≤ 20 (default 3.5, Planck Collaboration 2020, A&A 641, A6, Sect. 3.3; from
+     * memory). Used only with reionisation, checked always.
+     */
+    double helium_reionization_redshift;
+    /**
+     * Width Δz of helium's second reionisation tanh: finite, 0.1 ≤ Δz ≤ 10 (default 0.5, same
+     * source). Used only with reionisation, checked always.
+     */
+    double helium_reionization_width;
 };
 
 /**
@@ -5653,7 +5665,9 @@ int32_t relicore_redshift_at_luminosity_distance_mpc_array(const struct relicore
 
 /**
  * Fills `*out` with the default options: no reionisation (`reionization` = 0,
- * `reionization_redshift` NaN, unset) and a table up to `highest_redshift` = 10⁴.
+ * `reionization_redshift` NaN, unset), a table up to `highest_redshift` = 10⁴, and helium's
+ * second reionisation (when reionisation is on) at `helium_reionization_redshift` = 3.5 with
+ * `helium_reionization_width` = 0.5.
  *
  * * `out`: the options struct.
  *
@@ -5688,10 +5702,11 @@ int32_t relicore_thermal_history_options_default(struct relicore_thermal_history
  * a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a
  * successful `relicore_universe_init`; `RELICORE_ERROR_INVALID_PARAMETER` for a universe
  * without baryons or without radiation; `RELICORE_ERROR_OUT_OF_DOMAIN` for a `reionization`
- * switch other than 0 or 1, a reionisation redshift above 100 or a highest redshift below
- * 3000; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite reionisation redshift (when
- * reionisation is on) or highest redshift; `RELICORE_ERROR_NEGATIVE` for a negative
- * reionisation redshift; `RELICORE_ERROR_CAPACITY_TOO_SMALL` for a highest redshift above 10⁴
+ * switch other than 0 or 1, a reionisation redshift above 100, a highest redshift below
+ * 3000, a helium reionisation redshift above 20 or a helium reionisation width outside
+ * [0.1, 10]; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite reionisation redshift (when
+ * reionisation is on), highest redshift, helium reionisation redshift or width;
+ * `RELICORE_ERROR_NEGATIVE` for a negative reionisation or helium reionisation redshift; `RELICORE_ERROR_CAPACITY_TOO_SMALL` for a highest redshift above 10⁴
  * by more than 1e-11 relative (more than the 2048 nodes can cover at their spacing); `RELICORE_ERROR_NO_CONVERGENCE` if the
  * integration or a root search fails (not seen for physical parameters).
  *

@@ -102,22 +102,38 @@ proptest! {
     #![proptest_config(cases(24))]
 
     /// Arbitrary options: Ok, or an error naming the reionisation redshift (1), the highest
-    /// redshift (2) or a universe parameter; never a panic.
+    /// redshift (2), helium's second reionisation redshift (3) or width (4); never a panic.
     #[test]
-    fn construction_with_any_options(zr in any64(), top in any64(), reion in any::<bool>()) {
+    fn construction_with_any_options(
+        zr in any64(),
+        top in any64(),
+        reion in any::<bool>(),
+        helium in any::<bool>(),
+        hz in any64(),
+        hw in any64(),
+    ) {
         let u = planck();
-        let options = HistoryOptions {
+        let mut options = HistoryOptions {
             reionization_redshift: if reion { Some(zr) } else { None },
             highest_redshift: top,
+            ..HistoryOptions::default()
         };
+        if helium {
+            options.helium_reionization_redshift = hz;
+            options.helium_reionization_width = hw;
+        }
         match ThermalHistory::<f64>::new(&u, options) {
             Ok(h) => {
                 prop_assert!(top.is_finite() && (3000.0..=1.0001e4).contains(&top));
+                if helium {
+                    prop_assert!((0.0..=20.0).contains(&hz) && (0.1..=10.0).contains(&hw));
+                }
                 prop_assert!(h.last_scattering_redshift().is_finite());
             }
             Err(e) => {
                 let a = e.argument();
-                prop_assert!(a == Some(1) || a == Some(2), "{e:?}");
+                prop_assert!(matches!(a, Some(1..=4)), "{e:?}");
+                prop_assert!(helium || a != Some(3) && a != Some(4), "{e:?}");
             }
         }
     }

@@ -719,10 +719,12 @@ module relicore
   end type relicore_universe
 
   ! struct relicore_thermal_history_options { int32_t reionization; double reionization_redshift;
-  !     double highest_redshift; };
+  !     double highest_redshift; double helium_reionization_redshift;
+  !     double helium_reionization_width; };
   ! The options of a thermal history: fill it with relicore_thermal_history_options_default()
-  ! (no reionisation, reionization_redshift NaN (unset), highest_redshift 1e4), change what
-  ! differs, then call relicore_thermal_history_compute.
+  ! (no reionisation, reionization_redshift NaN (unset), highest_redshift 1e4, helium's second
+  ! reionisation at z = 3.5 with width 0.5, Planck Collaboration 2020, A&A 641, A6, Sect. 3.3,
+  ! from memory), change what differs, then call relicore_thermal_history_compute.
   type, bind(C), public :: relicore_thermal_history_options
     integer(c_int32_t) :: reionization       ! 0: none; 1: tanh reionisation at
                                              ! reionization_redshift (any other value:
@@ -730,6 +732,9 @@ module relicore
     real(c_double) :: reionization_redshift  ! z_re, 0 <= z_re <= 100 (used when reionization = 1)
     real(c_double) :: highest_redshift       ! top of the table, 3000 <= z <= 1e4 (above 1e4:
                                              ! RELICORE_ERROR_CAPACITY_TOO_SMALL)
+    real(c_double) :: helium_reionization_redshift  ! centre of helium's second reionisation
+                                             ! tanh in z, 0 <= z <= 20 (used with reionisation)
+    real(c_double) :: helium_reionization_width     ! its width in z, 0.1 <= width <= 10
   end type relicore_thermal_history_options
 
   ! struct relicore_thermal_history { uint64_t tag;
@@ -4135,7 +4140,8 @@ contains
   ! ================================================================ thermal-history construction
 
   ! The default options of a thermal history: no reionisation (reionization = 0,
-  ! reionization_redshift NaN, unset), highest_redshift = 1e4.
+  ! reionization_redshift NaN, unset), highest_redshift = 1e4,
+  ! helium_reionization_redshift = 3.5, helium_reionization_width = 0.5.
   ! Result: type(relicore_thermal_history_options).
   function relicore_thermal_history_options_default() result(options)
     type(relicore_thermal_history_options) :: options
@@ -4148,8 +4154,9 @@ contains
   ! order of milliseconds): compute once, then pass it to every query. stat = RELICORE_OK,
   ! RELICORE_ERROR_INVALID_STRUCT (universe not initialised), RELICORE_ERROR_INVALID_PARAMETER
   ! (a universe without baryons or radiation), RELICORE_ERROR_OUT_OF_DOMAIN (a reionization
-  ! switch other than 0 or 1, z_re above 100, a highest redshift below 3000),
-  ! RELICORE_ERROR_NON_FINITE, RELICORE_ERROR_NEGATIVE (z_re < 0),
+  ! switch other than 0 or 1, z_re above 100, a highest redshift below 3000, a helium
+  ! reionisation redshift above 20 or width outside [0.1, 10]), RELICORE_ERROR_NON_FINITE,
+  ! RELICORE_ERROR_NEGATIVE (z_re < 0 or a negative helium reionisation redshift),
   ! RELICORE_ERROR_CAPACITY_TOO_SMALL (a highest redshift above 1e4) or
   ! RELICORE_ERROR_NO_CONVERGENCE; on failure out is cleared and every query refuses it
   ! (RELICORE_ERROR_INVALID_STRUCT). Without stat a failure stops with the message.

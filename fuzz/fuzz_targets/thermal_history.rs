@@ -43,6 +43,7 @@ fn run<T: Float>(input: &mut Input<'_>) {
         } else {
             input.real::<T>(3.4, 4.1)
         },
+        ..HistoryOptions::default()
     };
     let Ok(u) = Universe::new(p) else {
         return;

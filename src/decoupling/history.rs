@@ -39,9 +39,19 @@ const MAX_SPAN: usize = 8;
 const SPAN_BELOW_REDSHIFT: f64 = 200.0;
 /// Width Δz of the hydrogen reionisation tanh (Lewis 2008).
 const REIONIZATION_WIDTH: f64 = 0.5;
-/// Redshift and width of helium's second reionisation (common practice).
-const HELIUM_REIONIZATION_REDSHIFT: f64 = 3.5;
-const HELIUM_REIONIZATION_WIDTH: f64 = 0.5;
+/// Default redshift and width Δz of helium's second reionisation (He II → He III): z = 3.5 and
+/// Δz = 0.5, the values assumed with the tanh model of hydrogen reionisation by Planck
+/// Collaboration 2020, A&A 641, A6, Sect. 3.3 (from memory).
+pub const DEFAULT_HELIUM_REIONIZATION_REDSHIFT: f64 = 3.5;
+/// Default width Δz of helium's second reionisation (see
+/// [`DEFAULT_HELIUM_REIONIZATION_REDSHIFT`]).
+pub const DEFAULT_HELIUM_REIONIZATION_WIDTH: f64 = 0.5;
+/// Highest allowed redshift of helium's second reionisation.
+pub const HIGHEST_HELIUM_REIONIZATION_REDSHIFT: f64 = 20.0;
+/// Narrowest and widest allowed width Δz of helium's second reionisation: at least 0.1, so that
+/// at z ≤ 20 the tanh spans at least one node interval (Δu = Δz/(1+z) ≥ 0.0048, where one
+/// Gauss-Kronrod panel per interval integrates it to rounding), and at most 10.
+pub const HELIUM_REIONIZATION_WIDTH_RANGE: [f64; 2] = [0.1, 10.0];
 /// Largest node spacing in u (that of HISTORY_NODES nodes up to z = 10⁴): a table with fewer
 /// nodes per unit of u is refused as too small.
 fn max_spacing() -> f64 {
@@ -60,6 +70,13 @@ pub struct HistoryOptions<T> {
     /// (default 10⁴; at least 3000; at most what the capacity allows, 10⁴ for
     /// [`HISTORY_NODES`] nodes).
     pub highest_redshift: T,
+    /// Redshift of helium's second reionisation, the centre of its tanh in z (used only with
+    /// reionisation; default 3.5, Planck Collaboration 2020, A&A 641, A6, Sect. 3.3, from
+    /// memory). Finite, 0 ≤ z ≤ 20.
+    pub helium_reionization_redshift: T,
+    /// Width Δz of helium's second reionisation tanh (used only with reionisation; default 0.5,
+    /// same source). Finite, 0.1 ≤ Δz ≤ 10.
+    pub helium_reionization_width: T,
 }
 
 impl<T: Real> Default for HistoryOptions<T> {
@@ -67,6 +84,8 @@ impl<T: Real> Default for HistoryOptions<T> {
         Self {
             reionization_redshift: None,
             highest_redshift: T::c(DEFAULT_HIGHEST_REDSHIFT),
+            helium_reionization_redshift: T::c(DEFAULT_HELIUM_REIONIZATION_REDSHIFT),
+            helium_reionization_width: T::c(DEFAULT_HELIUM_REIONIZATION_WIDTH),
         }
     }
 }
@@ -93,6 +112,9 @@ pub struct ThermalHistory<T, const N: usize = HISTORY_NODES> {
     reion_z: T,
     reion_y: T,
     reion_dy: T,
+    /// Helium's second reionisation: redshift and width of its tanh in z.
+    helium_z: T,
+    helium_width: T,
     top_z: T,
     top_u: T,
     spacing: T,
@@ -202,8 +224,11 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
     /// (argument 1) `NonFinite(1)`, `Negative(1)`, `OutOfDomain(1)` above 100; for the highest
     /// redshift (argument 2) `NonFinite(2)`, `OutOfDomain(2)` below 3000, and
     /// `CapacityTooSmall(2)` when N nodes cannot cover it at the spacing of [`HISTORY_NODES`]
-    /// nodes up to z = 10⁴ (at most 10⁴ for N = [`HISTORY_NODES`]); `NoConvergence` if the
-    /// integration fails (not seen for physical parameters).
+    /// nodes up to z = 10⁴ (at most 10⁴ for N = [`HISTORY_NODES`]); for helium's second
+    /// reionisation redshift (argument 3) `NonFinite(3)`, `Negative(3)`, `OutOfDomain(3)` above
+    /// 20, and for its width (argument 4) `NonFinite(4)`, `OutOfDomain(4)` outside [0.1, 10]
+    /// (both checked whether or not reionisation is on); `NoConvergence` if the integration
+    /// fails (not seen for physical parameters).
     pub fn new(universe: &Universe<T>, options: HistoryOptions<T>) -> Result<Self> {
         let mut h = Self::blank(universe)?;
         h.compute(options)?;
@@ -237,6 +262,8 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
             reion_z: T::zero(),
             reion_y: T::zero(),
             reion_dy: T::one(),
+            helium_z: T::c(DEFAULT_HELIUM_REIONIZATION_REDSHIFT),
+            helium_width: T::c(DEFAULT_HELIUM_REIONIZATION_WIDTH),
             top_z: T::zero(),
             top_u: T::zero(),
             spacing: T::one(),
@@ -293,6 +320,26 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
         if spacing > T::c(max_spacing() * (1.0 + 1e-12)) {
             return Err(Error::CapacityTooSmall(2));
         }
+        let hz = options.helium_reionization_redshift;
+        if !hz.is_finite() {
+            return Err(Error::NonFinite(3));
+        }
+        if hz < T::zero() {
+            return Err(Error::Negative(3));
+        }
+        if hz > T::c(HIGHEST_HELIUM_REIONIZATION_REDSHIFT) {
+            return Err(Error::OutOfDomain(3));
+        }
+        let hw = options.helium_reionization_width;
+        if !hw.is_finite() {
+            return Err(Error::NonFinite(4));
+        }
+        let [w_lo, w_hi] = HELIUM_REIONIZATION_WIDTH_RANGE;
+        if !(hw >= T::c(w_lo)) || hw > T::c(w_hi) {
+            return Err(Error::OutOfDomain(4));
+        }
+        self.helium_z = hz;
+        self.helium_width = hw;
         self.top_z = top;
         self.top_u = top_u;
         self.spacing = spacing;
@@ -586,7 +633,7 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
         // ½(1 + tanh w) = 1/(1 + e^{−2w}), without the cancellation of 1 + tanh w in the tail
         let step = |w: T| T::one() / (T::one() + (T::c(-2.0) * w).exp());
         let sh = step((self.reion_y - y) / self.reion_dy);
-        let she = step((T::c(HELIUM_REIONIZATION_REDSHIFT) - z) / T::c(HELIUM_REIONIZATION_WIDTH));
+        let she = step((self.helium_z - z) / self.helium_width);
         let f = self.species.f_he;
         (T::one() + f - x).max(T::zero()) * sh + f * she
     }
@@ -607,9 +654,7 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
         // tanh tail: ½(1 + tanh(−w)) ≈ e^{−2w} < 1e-30 for w > 35
         let y = self.reion_y + T::c(35.0) * self.reion_dy;
         let z_h = y.cbrt() * y.cbrt() - T::one();
-        let z = z_h.max(T::c(
-            HELIUM_REIONIZATION_REDSHIFT + 35.0 * HELIUM_REIONIZATION_WIDTH,
-        ));
+        let z = z_h.max(self.helium_z + T::c(35.0) * self.helium_width);
         z.ln_1p().min(self.top_u)
     }
 

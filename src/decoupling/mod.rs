@@ -47,9 +47,10 @@
 //!
 //! **Reionisation** (optional, at z_re): with y = (1+z)^{3/2}, Δy = (3/2)(1+z_re)^{1/2} Δz and
 //! Δz = 0.5 (the tanh form of Lewis 2008, PRD 78, 023002), and helium's second reionisation at
-//! z = 3.5 with width 0.5 (common practice),
+//! z_He with width Δz_He (options; by default z_He = 3.5 and Δz_He = 0.5, the values assumed with
+//! that tanh model by Planck Collaboration 2020, A&A 641, A6, Sect. 3.3; from memory),
 //!
-//! x_e,tot = x_e + max(0, 1 + f_He − x_e) · ½[1 + tanh((y(z_re) − y)/Δy)] + f_He · ½[1 + tanh((3.5 − z)/0.5)].
+//! x_e,tot = x_e + max(0, 1 + f_He − x_e) · ½[1 + tanh((y(z_re) − y)/Δy)] + f_He · ½[1 + tanh((z_He − z)/Δz_He)].
 //!
 //! It changes x_e, the optical depth and the visibility, not the matter temperature (no
 //! photo-heating is modelled).
@@ -76,7 +77,9 @@ mod species;
 
 pub use fits::{drag_redshift_fit, last_scattering_redshift_fit};
 pub use history::{
-    DEFAULT_HIGHEST_REDSHIFT, HIGHEST_REIONIZATION_REDSHIFT, HISTORY_NODES, HistoryOptions,
-    LOWEST_HIGHEST_REDSHIFT, ThermalHistory,
+    DEFAULT_HELIUM_REIONIZATION_REDSHIFT, DEFAULT_HELIUM_REIONIZATION_WIDTH,
+    DEFAULT_HIGHEST_REDSHIFT, HELIUM_REIONIZATION_WIDTH_RANGE, HIGHEST_HELIUM_REIONIZATION_REDSHIFT,
+    HIGHEST_REIONIZATION_REDSHIFT, HISTORY_NODES, HistoryOptions, LOWEST_HIGHEST_REDSHIFT,
+    ThermalHistory,
 };
 pub use saha::{SAHA_HIGHEST_REDSHIFT, saha_ionized_fraction};

@@ -49,7 +49,10 @@ T_m = T_r) to z = 0, with helium in Saha equilibrium at T_r at every evaluation
     dt = -dz/((1+z) H).
 Reionisation (optional z_re), with y = (1+z)^(3/2), dy = (3/2)(1+z_re)^(1/2) * 0.5:
     x_e,tot = x_e + max(0, 1 + f_He - x_e) (1 + tanh((y(z_re) - y)/dy))/2
-              + f_He (1 + tanh((3.5 - z)/0.5))/2
+              + f_He (1 + tanh((z_He - z)/dz_He))/2
+(helium's second reionisation at z_He = 3.5 with dz_He = 0.5 by default, options
+helium_reionization_redshift and helium_reionization_width; the default values are those of
+Planck Collaboration 2020, A&A 641, A6, Sect. 3.3, from memory)
 (it changes x_e, the optical depth and the visibility, not T_m).
 Derived: tau(z) = int_0^z x_e,tot n_H sigma_T c dz'/((1+z')H) (tau_rec: x_e instead);
 z*: tau_rec = 1; z_drag: tau_drag = 1, tau_drag = int_0^z x_e n_H sigma_T c/(R (1+z') H) dz',
@@ -428,7 +431,11 @@ class ReferenceHistory:
                  omega_curvature: float = 0.0, cmb_temperature_k: float = 2.7255, n_eff: float = 3.044,
                  neutrino_masses_ev=(0.0, 0.0, 0.0), w0: float = -1.0, wa: float = 0.0,
                  helium_mass_fraction: float = 0.245, reionization_redshift: float | None = None,
-                 highest_redshift: float = 1e4, rtol: float = 1e-10, method: str = "Radau") -> None:
+                 highest_redshift: float = 1e4, rtol: float = 1e-10, method: str = "Radau",
+                 helium_reionization_redshift: float = HELIUM_REIONIZATION_REDSHIFT,
+                 helium_reionization_width: float = HELIUM_REIONIZATION_WIDTH) -> None:
+        self.helium_z = float(helium_reionization_redshift)
+        self.helium_width = float(helium_reionization_width)
         self.universe = u = ReferenceUniverse(
             h0_km_s_mpc, omega_matter, omega_baryon, omega_curvature, cmb_temperature_k, n_eff,
             neutrino_masses_ev, w0, wa, helium_mass_fraction)
@@ -453,7 +460,7 @@ class ReferenceHistory:
         us = np.array(sol.t[::-1])
         us[0] = 0.0
         if self.z_re is not None:
-            u_edge = min(math.log1p(self.z_re + 40.0), u_top)
+            u_edge = min(math.log1p(max(self.z_re + 40.0, self.helium_z + 35.0 * self.helium_width)), u_top)
             us = np.union1d(us, np.linspace(0.0, u_edge, int(u_edge / 0.005) + 2))
         self.us = us
         self.tau_nodes, self.drag_nodes, self.reion_nodes = self._cumulative()
@@ -540,7 +547,7 @@ class ReferenceHistory:
         y_re = (1.0 + self.z_re) ** 1.5
         dy = 1.5 * math.sqrt(1.0 + self.z_re) * REIONIZATION_WIDTH
         hyd = np.maximum(0.0, 1.0 + f - x_e) * 0.5 * (1.0 + np.tanh((y_re - y) / dy))
-        hel = f * 0.5 * (1.0 + np.tanh((HELIUM_REIONIZATION_REDSHIFT - z) / HELIUM_REIONIZATION_WIDTH))
+        hel = f * 0.5 * (1.0 + np.tanh((self.helium_z - z) / self.helium_width))
         return hyd + hel
 
     def _thomson_per_u(self, uu, x_e):

@@ -12,7 +12,10 @@ use crate::boundary::{Failure, boundary, non_null};
 use crate::status::RELICORE_ERROR_OUT_OF_DOMAIN;
 use crate::stored::{stored, stored_clear, stored_place, stored_ref, stored_seal};
 use crate::universe::relicore_universe;
-use relicore::decoupling::{DEFAULT_HIGHEST_REDSHIFT, HistoryOptions, ThermalHistory};
+use relicore::decoupling::{
+    DEFAULT_HELIUM_REIONIZATION_REDSHIFT, DEFAULT_HELIUM_REIONIZATION_WIDTH,
+    DEFAULT_HIGHEST_REDSHIFT, HistoryOptions, ThermalHistory,
+};
 
 /// Number of 8-byte words of storage in `struct relicore_thermal_history` (163840 bytes; the
 /// core history, 2048 table nodes of eight columns and a copy of the universe, takes about
@@ -28,8 +31,9 @@ pub const RELICORE_THERMAL_HISTORY_STORAGE_WORDS: usize = 20480;
 pub struct relicore_thermal_history_options {
     /// 0: no reionisation (default; `reionization_redshift` is then ignored); 1: tanh
     /// reionisation of hydrogen at `reionization_redshift` (a tanh in (1+z)^{3/2} of width
-    /// Δz = 0.5, Lewis 2008) and of helium's second electron at z = 3.5. Any other value is
-    /// refused with `RELICORE_ERROR_OUT_OF_DOMAIN`.
+    /// Δz = 0.5, Lewis 2008) and of helium's second electron at `helium_reionization_redshift`
+    /// (a tanh in z of width `helium_reionization_width`). Any other value is refused with
+    /// `RELICORE_ERROR_OUT_OF_DOMAIN`.
     pub reionization: i32,
     /// Reionisation redshift z_re, finite, 0 ≤ z_re ≤ 100 (used only when `reionization` = 1;
     /// the default is NaN, unset, so it must be set when reionisation is switched on).
@@ -38,6 +42,13 @@ pub struct relicore_thermal_history_options {
     /// ≥ 3000 and ≤ 10⁴ (default 10⁴; above 10⁴, beyond a rounding allowance of 1e-11
     /// relative, the 2048 nodes are too few: `RELICORE_ERROR_CAPACITY_TOO_SMALL`).
     pub highest_redshift: f64,
+    /// Redshift of helium's second reionisation (He II → He III), the centre of its tanh in z:
+    /// finite, 0 ≤ z ≤ 20 (default 3.5, Planck Collaboration 2020, A&A 641, A6, Sect. 3.3; from
+    /// memory). Used only with reionisation, checked always.
+    pub helium_reionization_redshift: f64,
+    /// Width Δz of helium's second reionisation tanh: finite, 0.1 ≤ Δz ≤ 10 (default 0.5, same
+    /// source). Used only with reionisation, checked always.
+    pub helium_reionization_width: f64,
 }
 
 impl relicore_thermal_history_options {
@@ -51,6 +62,8 @@ impl relicore_thermal_history_options {
         Ok(HistoryOptions {
             reionization_redshift,
             highest_redshift: self.highest_redshift,
+            helium_reionization_redshift: self.helium_reionization_redshift,
+            helium_reionization_width: self.helium_reionization_width,
         })
     }
 }
@@ -96,7 +109,9 @@ stored!(
 // --------------------------------------------------------------------------- the history
 
 /// Fills `*out` with the default options: no reionisation (`reionization` = 0,
-/// `reionization_redshift` NaN, unset) and a table up to `highest_redshift` = 10⁴.
+/// `reionization_redshift` NaN, unset), a table up to `highest_redshift` = 10⁴, and helium's
+/// second reionisation (when reionisation is on) at `helium_reionization_redshift` = 3.5 with
+/// `helium_reionization_width` = 0.5.
 ///
 /// * `out`: the options struct.
 ///
@@ -116,6 +131,8 @@ pub unsafe extern "C" fn relicore_thermal_history_options_default(
                 reionization: 0,
                 reionization_redshift: f64::NAN,
                 highest_redshift: DEFAULT_HIGHEST_REDSHIFT,
+                helium_reionization_redshift: DEFAULT_HELIUM_REIONIZATION_REDSHIFT,
+                helium_reionization_width: DEFAULT_HELIUM_REIONIZATION_WIDTH,
             };
             // SAFETY: out is non-NULL and writable (this function's contract).
             unsafe { out.write(o) };
@@ -147,10 +164,11 @@ pub unsafe extern "C" fn relicore_thermal_history_options_default(
 /// a pointer is NULL; `RELICORE_ERROR_INVALID_STRUCT` when `*universe` was not filled by a
 /// successful `relicore_universe_init`; `RELICORE_ERROR_INVALID_PARAMETER` for a universe
 /// without baryons or without radiation; `RELICORE_ERROR_OUT_OF_DOMAIN` for a `reionization`
-/// switch other than 0 or 1, a reionisation redshift above 100 or a highest redshift below
-/// 3000; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite reionisation redshift (when
-/// reionisation is on) or highest redshift; `RELICORE_ERROR_NEGATIVE` for a negative
-/// reionisation redshift; `RELICORE_ERROR_CAPACITY_TOO_SMALL` for a highest redshift above 10⁴
+/// switch other than 0 or 1, a reionisation redshift above 100, a highest redshift below
+/// 3000, a helium reionisation redshift above 20 or a helium reionisation width outside
+/// [0.1, 10]; `RELICORE_ERROR_NON_FINITE` for a NaN or infinite reionisation redshift (when
+/// reionisation is on), highest redshift, helium reionisation redshift or width;
+/// `RELICORE_ERROR_NEGATIVE` for a negative reionisation or helium reionisation redshift; `RELICORE_ERROR_CAPACITY_TOO_SMALL` for a highest redshift above 10⁴
 /// by more than 1e-11 relative (more than the 2048 nodes can cover at their spacing); `RELICORE_ERROR_NO_CONVERGENCE` if the
 /// integration or a root search fails (not seen for physical parameters).
 ///
@@ -257,6 +275,8 @@ mod tests {
             reionization: 7,
             reionization_redshift: 1.0,
             highest_redshift: 1.0,
+            helium_reionization_redshift: 1.0,
+            helium_reionization_width: 1.0,
         };
         // SAFETY: o is writable.
         assert_eq!(
@@ -274,7 +294,7 @@ mod tests {
         );
         assert_eq!(size_of::<relicore_thermal_history>(), 163_848);
         assert_eq!(align_of::<relicore_thermal_history>(), 8);
-        assert_eq!(size_of::<relicore_thermal_history_options>(), 24);
+        assert_eq!(size_of::<relicore_thermal_history_options>(), 40);
     }
 
     #[test]
@@ -290,12 +310,16 @@ mod tests {
             reionization: 1,
             reionization_redshift: 7.5,
             highest_redshift: 5000.0,
+            helium_reionization_redshift: 4.0,
+            helium_reionization_width: 0.25,
         };
         assert_eq!(
             on.to_core(),
             Ok(HistoryOptions {
                 reionization_redshift: Some(7.5),
-                highest_redshift: 5000.0
+                highest_redshift: 5000.0,
+                helium_reionization_redshift: 4.0,
+                helium_reionization_width: 0.25,
             })
         );
         for switch in [-1, 2, i32::MAX, i32::MIN] {
@@ -456,7 +480,7 @@ mod tests {
             <relicore_thermal_history as crate::stored::Stored>::TAG
         );
         let no_baryons = universe(0.0);
-        let cases: [(relicore_thermal_history_options, &relicore_universe, i32); 9] = [
+        let cases: [(relicore_thermal_history_options, &relicore_universe, i32); 13] = [
             (
                 relicore_thermal_history_options {
                     reionization: 2,
@@ -514,6 +538,38 @@ mod tests {
                 },
                 &*u,
                 RELICORE_ERROR_NON_FINITE,
+            ),
+            (
+                relicore_thermal_history_options {
+                    helium_reionization_redshift: f64::NAN,
+                    ..good
+                },
+                &*u,
+                RELICORE_ERROR_NON_FINITE,
+            ),
+            (
+                relicore_thermal_history_options {
+                    helium_reionization_redshift: -0.5,
+                    ..good
+                },
+                &*u,
+                RELICORE_ERROR_NEGATIVE,
+            ),
+            (
+                relicore_thermal_history_options {
+                    helium_reionization_redshift: 21.0,
+                    ..good
+                },
+                &*u,
+                RELICORE_ERROR_OUT_OF_DOMAIN,
+            ),
+            (
+                relicore_thermal_history_options {
+                    helium_reionization_width: 0.0,
+                    ..good
+                },
+                &*u,
+                RELICORE_ERROR_OUT_OF_DOMAIN,
             ),
             (good, &*no_baryons, RELICORE_ERROR_INVALID_PARAMETER),
             (good, &*blank_universe(), RELICORE_ERROR_INVALID_STRUCT),

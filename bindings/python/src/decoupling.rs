@@ -75,8 +75,14 @@ pub(crate) fn universe_refused(
 
 /// Parameter names of the history's constructor, in the order of the core's error positions
 /// (`ThermalHistory::new(universe, options)`: 1 is the reionisation redshift, 2 the highest
-/// redshift of the options).
-pub(crate) const HISTORY_ARGS: &[&str] = &["universe", "reionization_redshift", "highest_redshift"];
+/// redshift, 3 and 4 the redshift and width of helium's second reionisation).
+pub(crate) const HISTORY_ARGS: &[&str] = &[
+    "universe",
+    "reionization_redshift",
+    "highest_redshift",
+    "helium_reionization_redshift",
+    "helium_reionization_width",
+];
 
 /// The history of `u` on the heap, computed on the current thread. Never inlined: its large
 /// stack frame must exist only on the thread that runs it, not in its caller's frame.
@@ -131,6 +137,15 @@ fn construction_error(py: Python<'_>, u: &U, options: HistoryOptions<f64>, err: 
             dc::HISTORY_NODES,
             py_repr(dc::DEFAULT_HIGHEST_REDSHIFT)
         )),
+        Error::OutOfDomain(3) => Some(format!(
+            "must not exceed {}",
+            py_repr(dc::HIGHEST_HELIUM_REIONIZATION_REDSHIFT)
+        )),
+        Error::OutOfDomain(4) => Some(format!(
+            "must lie between {} and {}",
+            py_repr(dc::HELIUM_REIONIZATION_WIDTH_RANGE[0]),
+            py_repr(dc::HELIUM_REIONIZATION_WIDTH_RANGE[1])
+        )),
         _ => None,
     };
     let reionization = match options.reionization_redshift {
@@ -145,6 +160,8 @@ fn construction_error(py: Python<'_>, u: &U, options: HistoryOptions<f64>, err: 
             Arg::Shared,
             reionization,
             Arg::Value(options.highest_redshift),
+            Arg::Value(options.helium_reionization_redshift),
+            Arg::Value(options.helium_reionization_width),
         ],
         None,
         err,
@@ -178,16 +195,21 @@ impl PyThermalHistory {
     /// Computes the history of `universe` (every argument given; the defaults live in the
     /// Python subclass, read from [`history_defaults`]). The GIL is released while it runs.
     #[new]
-    #[pyo3(signature = (universe, reionization_redshift, highest_redshift))]
+    #[pyo3(signature = (universe, reionization_redshift, highest_redshift,
+                        helium_reionization_redshift, helium_reionization_width))]
     fn new(
         py: Python<'_>,
         universe: &Bound<'_, PyUniverse>,
         reionization_redshift: Option<f64>,
         highest_redshift: f64,
+        helium_reionization_redshift: f64,
+        helium_reionization_width: f64,
     ) -> PyResult<Self> {
         let options = HistoryOptions {
             reionization_redshift,
             highest_redshift,
+            helium_reionization_redshift,
+            helium_reionization_width,
         };
         let u = universe.get().value();
         match py.detach(|| compute_history(u, options)) {
@@ -218,6 +240,19 @@ impl PyThermalHistory {
         self.options.highest_redshift
     }
 
+    /// Redshift of helium's second reionisation (the centre of its tanh in z; used with
+    /// reionisation).
+    #[getter]
+    fn helium_reionization_redshift(&self) -> f64 {
+        self.options.helium_reionization_redshift
+    }
+
+    /// Width Δz of helium's second reionisation tanh (used with reionisation).
+    #[getter]
+    fn helium_reionization_width(&self) -> f64 {
+        self.options.helium_reionization_width
+    }
+
     fn __repr__(slf: &Bound<'_, Self>) -> PyResult<String> {
         let name = slf.get_type().qualname()?;
         let this = slf.get();
@@ -227,8 +262,11 @@ impl PyThermalHistory {
             None => "None".into(),
         };
         Ok(format!(
-            "{name}({universe}, reionization_redshift={reionization}, highest_redshift={})",
-            py_repr(this.options.highest_redshift)
+            "{name}({universe}, reionization_redshift={reionization}, highest_redshift={}, \
+             helium_reionization_redshift={}, helium_reionization_width={})",
+            py_repr(this.options.highest_redshift),
+            py_repr(this.options.helium_reionization_redshift),
+            py_repr(this.options.helium_reionization_width)
         ))
     }
 
@@ -246,6 +284,8 @@ impl PyThermalHistory {
             None => 0u8.hash(&mut h),
         }
         key(self.options.highest_redshift).hash(&mut h);
+        key(self.options.helium_reionization_redshift).hash(&mut h);
+        key(self.options.helium_reionization_width).hash(&mut h);
         Ok(h.finish())
     }
 }
@@ -257,6 +297,11 @@ pub(crate) fn history_defaults(py: Python<'_>) -> PyResult<Bound<'_, PyDict>> {
     let d = PyDict::new(py);
     d.set_item("reionization_redshift", o.reionization_redshift)?;
     d.set_item("highest_redshift", o.highest_redshift)?;
+    d.set_item(
+        "helium_reionization_redshift",
+        o.helium_reionization_redshift,
+    )?;
+    d.set_item("helium_reionization_width", o.helium_reionization_width)?;
     Ok(d)
 }
 
@@ -272,6 +317,10 @@ pub(crate) fn decoupling_constants(py: Python<'_>) -> PyResult<Bound<'_, PyDict>
         dc::HIGHEST_REIONIZATION_REDSHIFT,
     )?;
     d.set_item("SAHA_HIGHEST_REDSHIFT", dc::SAHA_HIGHEST_REDSHIFT)?;
+    d.set_item(
+        "HIGHEST_HELIUM_REIONIZATION_REDSHIFT",
+        dc::HIGHEST_HELIUM_REIONIZATION_REDSHIFT,
+    )?;
     Ok(d)
 }
 
@@ -317,15 +366,29 @@ mod tests {
         let o = HistoryOptions {
             reionization_redshift: Some(-1.0),
             highest_redshift: 1e4,
+            ..HistoryOptions::default()
         };
         assert_eq!(H::new(&u, o).err(), Some(Error::Negative(1)));
         assert_eq!(HISTORY_ARGS[1], "reionization_redshift");
         let o = HistoryOptions {
             reionization_redshift: None,
             highest_redshift: 2e4,
+            ..HistoryOptions::default()
         };
         assert_eq!(H::new(&u, o).err(), Some(Error::CapacityTooSmall(2)));
         assert_eq!(HISTORY_ARGS[2], "highest_redshift");
+        let o = HistoryOptions {
+            helium_reionization_redshift: -1.0,
+            ..HistoryOptions::default()
+        };
+        assert_eq!(H::new(&u, o).err(), Some(Error::Negative(3)));
+        assert_eq!(HISTORY_ARGS[3], "helium_reionization_redshift");
+        let o = HistoryOptions {
+            helium_reionization_width: 0.0,
+            ..HistoryOptions::default()
+        };
+        assert_eq!(H::new(&u, o).err(), Some(Error::OutOfDomain(4)));
+        assert_eq!(HISTORY_ARGS[4], "helium_reionization_width");
         assert_eq!(dc::saha_ionized_fraction(&u, -1.0), Err(Error::Negative(1)));
     }
 }

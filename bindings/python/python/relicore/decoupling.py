@@ -76,13 +76,19 @@ HIGHEST_REIONIZATION_REDSHIFT: float = _CONSTANTS["HIGHEST_REIONIZATION_REDSHIFT
 """Highest allowed reionisation redshift."""
 SAHA_HIGHEST_REDSHIFT: float = _CONSTANTS["SAHA_HIGHEST_REDSHIFT"]
 """Highest redshift of :func:`saha_ionized_fraction`."""
+HIGHEST_HELIUM_REIONIZATION_REDSHIFT: float = _CONSTANTS["HIGHEST_HELIUM_REIONIZATION_REDSHIFT"]
+"""Highest allowed redshift of helium's second reionisation."""
 
 _D: dict[str, Any] = dict(_native.history_defaults())
 
 
-def _rebuild(cls: type, universe: Any, reionization_redshift: Any, highest_redshift: float) -> Any:
+def _rebuild(cls: type, universe: Any, reionization_redshift: Any, highest_redshift: float,
+             helium_reionization_redshift: float = _D["helium_reionization_redshift"],
+             helium_reionization_width: float = _D["helium_reionization_width"]) -> Any:
     """Unpickling: the history recomputed from its universe and options."""
-    return cls(universe, reionization_redshift=reionization_redshift, highest_redshift=highest_redshift)
+    return cls(universe, reionization_redshift=reionization_redshift, highest_redshift=highest_redshift,
+               helium_reionization_redshift=helium_reionization_redshift,
+               helium_reionization_width=helium_reionization_width)
 
 
 class ThermalHistory(ThermalHistoryFunctions, _native.ThermalHistoryBase):
@@ -94,15 +100,21 @@ class ThermalHistory(ThermalHistoryFunctions, _native.ThermalHistoryBase):
     ----------
     universe : a :class:`relicore.Universe` with baryons (omega_baryon > 0) and radiation
         (cmb_temperature_k > 0).
-    reionization_redshift : redshift z_re of the tanh reionisation (width 0.5 in z, helium's
-        second reionisation at z = 3.5), 0 <= z_re <= 100; None (the default): no reionisation.
+    reionization_redshift : redshift z_re of the tanh reionisation (width 0.5 in z), 0 <= z_re
+        <= 100; None (the default): no reionisation.
     highest_redshift : where the integration starts in Saha equilibrium; at least 3000 and at
         most 1e4 (the default; what the fixed table can cover).
+    helium_reionization_redshift : redshift of helium's second reionisation, the centre of its
+        tanh in z, 0 <= z <= 20 (default 3.5, Planck Collaboration 2020, A&A 641, A6, Sect. 3.3;
+        from memory); used with reionisation, checked always.
+    helium_reionization_width : width of that tanh in z, 0.1 <= width <= 10 (default 0.5, same
+        source); used with reionisation, checked always.
 
     Raises RelicoreError naming the parameter: ``universe`` (status -14, the parameter named in
     the message), ``reionization_redshift`` (NaN or infinite -2, negative -4, above 100 -10),
     ``highest_redshift`` (NaN or infinite -2, below 3000 -10, above what the table can cover
-    -16). Frozen; compares and hashes by its universe and options; pickles.
+    -16), ``helium_reionization_redshift`` (NaN or infinite -2, negative -4, above 20 -10),
+    ``helium_reionization_width`` (NaN or infinite -2, outside [0.1, 10] -10). Frozen; compares and hashes by its universe and options; pickles.
 
     Methods of a redshift z (scalar or array; 0 <= z <= highest_redshift, except
     ``sound_horizon_mpc``, any z >= 0): ``ionized_fraction``, ``matter_temperature_k``,
@@ -112,7 +124,8 @@ class ThermalHistory(ThermalHistoryFunctions, _native.ThermalHistoryBase):
     ``angular_scale_last_scattering``, ``age_at_last_scattering_yr``,
     ``temperature_at_last_scattering_k``, ``visibility_peak_redshift``,
     ``thermal_decoupling_redshift``, ``reionization_optical_depth``) and the inputs
-    (``universe``, ``reionization_redshift``, ``highest_redshift``).
+    (``universe``, ``reionization_redshift``, ``highest_redshift``,
+    ``helium_reionization_redshift``, ``helium_reionization_width``).
     """
 
     __slots__ = ()
@@ -123,11 +136,15 @@ class ThermalHistory(ThermalHistoryFunctions, _native.ThermalHistoryBase):
         *,
         reionization_redshift: float | None = _D["reionization_redshift"],
         highest_redshift: float = _D["highest_redshift"],
+        helium_reionization_redshift: float = _D["helium_reionization_redshift"],
+        helium_reionization_width: float = _D["helium_reionization_width"],
     ) -> ThermalHistory:
-        return super().__new__(cls, universe, reionization_redshift, highest_redshift)
+        return super().__new__(cls, universe, reionization_redshift, highest_redshift, helium_reionization_redshift,
+                               helium_reionization_width)
 
-    def __reduce__(self) -> tuple[Any, tuple[type, Any, float | None, float]]:
-        return (_rebuild, (type(self), self.universe, self.reionization_redshift, self.highest_redshift))
+    def __reduce__(self) -> tuple[Any, tuple[type, Any, float | None, float, float, float]]:
+        return (_rebuild, (type(self), self.universe, self.reionization_redshift, self.highest_redshift,
+                           self.helium_reionization_redshift, self.helium_reionization_width))
 
     def __copy__(self) -> ThermalHistory:
         return self
@@ -135,10 +152,10 @@ class ThermalHistory(ThermalHistoryFunctions, _native.ThermalHistoryBase):
     def __deepcopy__(self, memo: dict[int, Any]) -> ThermalHistory:
         return self
 
-    def __dask_tokenize__(self) -> tuple[str, Any, float | None, float]:
+    def __dask_tokenize__(self) -> tuple[str, Any, float | None, float, float, float]:
         """dask's name for this value: equal universe and options, equal token (no pickling)."""
         return ("relicore.ThermalHistory", self.universe.__dask_tokenize__(), self.reionization_redshift,
-                self.highest_redshift)
+                self.highest_redshift, self.helium_reionization_redshift, self.helium_reionization_width)
 
 
 ThermalHistory.__module__ = "relicore.decoupling"
