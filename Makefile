@@ -117,6 +117,17 @@ bench: deps python-build
 	cargo bench -p relicore
 	bash benches/compare/run.sh
 
+# ---------------------------------------------------------------- Python wheel
+# make wheel: the Python package as one abi3 wheel (CPython 3.10 and later, this OS and CPU)
+# in build/wheel/, built by maturin from the pinned venv (installed first when missing; no
+# other download than the package registry's and the crates of Cargo.lock). Users install it with
+# `pip install build/wheel/relicore-<version>-cp310-abi3-<platform>.whl`, without Rust (README).
+.PHONY: wheel
+wheel: $(VENV)/.stamp
+	rm -f build/wheel/relicore-*.whl
+	cd bindings/python && $(abspath $(VENV))/bin/maturin build --release --locked --quiet --out $(abspath build/wheel)
+	@ls -1 build/wheel/relicore-*.whl
+
 # ---------------------------------------------------------------- install
 # make install PREFIX=/opt/relicore [DESTDIR=/staging/root]  (README, "Installing"):
 #   include/relicore.h, include/relicore/relicore.f90 (the Fortran module's source);

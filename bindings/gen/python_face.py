@@ -141,6 +141,39 @@ def _rust_array(fn: Function) -> str:
     return "\n".join(lines)
 
 
+def _rust_array_f32(fn: Function) -> str:
+    """The SIMD array wrapper of the single-precision twin (array_f32: first argument an array,
+    the others single values)."""
+    others = fn.arg_names[1:]
+    lines = [f"fn {fn.name}_array_f32(x: &[f32], rest: &[f32], out: &mut [f32]) -> ArrayResult {{"]
+    if others:
+        lines.append("    let mut rest = rest.iter().copied();")
+        for a in others:
+            lines.append(f"    let {a} = rest.next().unwrap_or(f32::NAN);")
+    else:
+        lines.append("    let _ = rest;")
+    sig = ["x: &[f32]", *[f"{a}: f32" for a in others], "out: &mut [f32]"]
+    call = f"{CORE_PATH[fn.topic]}::{fn.name}_array(x, {''.join(a + ', ' for a in others)}out)"
+    lines.append(f"    widest!(|{', '.join(sig)}| -> ArrayResult {{ {call} }})")
+    lines.append("}")
+    return "\n".join(lines)
+
+
+def has_single(fn: Function) -> bool:
+    """Whether the Python face computes float32 input with the core's single-precision twin: a
+    function with `f32 = true` that returns a number and is called on nothing."""
+    return fn.f32 and not fn.result_type and fn.receiver == "none"
+
+
+def _rust_single(fn: Function) -> str:
+    """The core's single-precision twin as a `Single` (and its SIMD array form with array_f32)."""
+    if not has_single(fn):
+        return "None"
+    call = f"{CORE_PATH[fn.topic]}::{fn.name}({', '.join(fn.arg_names)})"
+    array = f"Some({fn.name}_array_f32)" if fn.array_f32 and fn.array and fn.array.simd else "None"
+    return f"Some(Single {{ body: |x| {_slice_call(fn, call)}, array: {array} }})"
+
+
 def _rust_spec(fn: Function) -> str:
     args = ", ".join(f'"{a}"' for a in fn.arg_names)
     array = f"Some({fn.name}_array)" if fn.array and fn.array.simd else "None"
@@ -157,6 +190,7 @@ def _rust_spec(fn: Function) -> str:
         f"        array: {array},\n"
         f"        frame: {frame},\n"
         f"        width: {width},\n"
+        f"        single: {_rust_single(fn)},\n"
         "    },"
     )
 
@@ -170,7 +204,7 @@ def rust(fns: list[Function]) -> str:
         "use relicore::{ArrayResult, ElementError, Error};",
         "use relicore_dispatch::widest;",
         "",
-        "use crate::functions::{Body, G, H, Lift, S, Spec, U};",
+        "use crate::functions::{Body, G, H, Lift, S, Single, Spec, U};",
     ]
     for receiver, static, core in (("none", "PLAIN", "()"), ("universe", "UNIVERSE", "U"), ("history", "HISTORY", "H"),
                                    ("growth", "GROWTH", "G"), ("power_spectrum", "SPECTRUM", "S")):
@@ -183,6 +217,10 @@ def rust(fns: list[Function]) -> str:
         if f.array and f.array.simd:
             out += ["", f"/// `{f.name}_array` of the core, compiled for each SIMD level and chosen at run time.",
                     _rust_array(f)]
+    for f in fns:
+        if has_single(f) and f.array_f32 and f.array and f.array.simd:
+            out += ["", f"/// `{f.name}_array` of the core in single precision, compiled for each SIMD level and chosen at run time.",
+                    _rust_array_f32(f)]
     for f in fns:
         if f.frame:
             out += ["", f"/// `{f.name}_array` of the core (a frame: the first {f.frame} argument(s) single values, "
@@ -220,7 +258,7 @@ def _py_function(fn: Function) -> str:
     return (
         f"def {fn.name}({params}, *, nan_on_error: bool = False) -> Any:\n"
         f"{_docstring(fn, '    ')}\n"
-        f'    return _apply(_F["{fn.name}"], {receiver}, ({values}), nan_on_error)\n'
+        f'    return _F["{fn.name}"].apply({receiver}, ({values}), nan_on_error)\n'
     )
 
 
@@ -234,12 +272,10 @@ def _py_member(fn: Function) -> str:
         )
     params = ", ".join(f"{a}: Any" for a in fn.arg_names)
     values = "".join(f"{a}, " for a in fn.arg_names)
-    # the dtype and shape errors of the universe's methods have always named the bare method
-    bare = f', "{fn.name}"' if fn.receiver == "universe" else ""
     return (
         f"    def {fn.name}(self, {params}, *, nan_on_error: bool = False) -> Any:\n"
         f"{_docstring(fn, '        ')}\n"
-        f'        return _apply(_F["{fn.name}"], self, ({values}), nan_on_error{bare})\n'
+        f'        return _F["{fn.name}"].apply(self, ({values}), nan_on_error)\n'
     )
 
 
@@ -270,7 +306,6 @@ def python_module(topic: str, fns: list[Function]) -> str:
         "from typing import Any",
         "",
         "from relicore._elementwise import FUNCTIONS as _F",
-        "from relicore._elementwise import apply as _apply",
         "from relicore._elementwise import publish as _publish",
         *(["from relicore import _results", "from relicore._elementwise import apply_result as _apply_result"]
           if any(f.result_type for f in functions) else []),

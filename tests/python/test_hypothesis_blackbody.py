@@ -37,6 +37,7 @@ from hypothesis.extra import numpy as hnp
 
 import relicore
 from relicore import blackbody as bb
+from relicore._elementwise import FUNCTIONS
 from faces_table import BLACKBODY, BLACKBODY_RESULTS, native_blackbody
 
 # Every regular element-wise function of relicore.blackbody and its arguments, from the table of
@@ -196,9 +197,10 @@ NUMERIC_DTYPES = st.one_of(
 @given(data=st.data())
 def test_integer_and_narrow_float_dtypes_are_converted_to_float64(name, data):
     """Integer and float16/32 arrays (as the module documents) give the result of their float64
-    conversion, bit for bit, or the same error."""
+    conversion, bit for bit, or the same error; float32 only for functions without a
+    single-precision twin (with one, float32 stays float32: test_float32.py)."""
     argnames = ELEMENTWISE[name]
-    dtype = data.draw(NUMERIC_DTYPES)
+    dtype = data.draw(NUMERIC_DTYPES.filter(lambda d: not (np.dtype(d) == np.float32 and FUNCTIONS[name].single)))
     shape = data.draw(hnp.array_shapes(min_dims=1, max_dims=2, min_side=0, max_side=4))
     arr = data.draw(hnp.arrays(dtype, shape))
     rest = [data.draw(st.sampled_from([300.0, 1e-5, 2.7255, 1e9])) for _ in argnames[1:]]

@@ -8,7 +8,7 @@
 use relicore::{ArrayResult, ElementError, Error};
 use relicore_dispatch::widest;
 
-use crate::functions::{Body, G, H, Lift, S, Spec, U};
+use crate::functions::{Body, G, H, Lift, S, Single, Spec, U};
 
 /// The regular functions called on nothing.
 pub(crate) static PLAIN: &[Spec<()>] = &[
@@ -22,6 +22,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: Some(spectral_radiance_wavelength_array),
         frame: None,
         width: 1,
+        single: Some(Single { body: |x| match *x { [wavelength_m, temperature_k] => relicore::blackbody::spectral_radiance_wavelength(wavelength_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: Some(spectral_radiance_wavelength_array_f32) }),
     },
     Spec {
         name: "spectral_radiance_frequency",
@@ -33,6 +34,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: Some(spectral_radiance_frequency_array),
         frame: None,
         width: 1,
+        single: Some(Single { body: |x| match *x { [frequency_hz, temperature_k] => relicore::blackbody::spectral_radiance_frequency(frequency_hz, temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: Some(spectral_radiance_frequency_array_f32) }),
     },
     Spec {
         name: "spectral_radiance_wavenumber",
@@ -44,6 +46,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: Some(spectral_radiance_wavenumber_array),
         frame: None,
         width: 1,
+        single: Some(Single { body: |x| match *x { [wavenumber_per_m, temperature_k] => relicore::blackbody::spectral_radiance_wavenumber(wavenumber_per_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: Some(spectral_radiance_wavenumber_array_f32) }),
     },
     Spec {
         name: "photon_radiance_wavelength",
@@ -55,6 +58,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "photon_radiance_frequency",
@@ -66,6 +70,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "photon_radiance_wavenumber",
@@ -77,6 +82,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "radiance_temperature_derivative_wavelength",
@@ -88,6 +94,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "radiance_temperature_derivative_frequency",
@@ -99,6 +106,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "radiant_exitance",
@@ -110,6 +118,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "photon_exitance",
@@ -121,6 +130,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "photon_number_density",
@@ -132,6 +142,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: Some(Single { body: |x| match *x { [temperature_k] => relicore::blackbody::photon_number_density(temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: None }),
     },
     Spec {
         name: "radiation_energy_density",
@@ -143,6 +154,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: Some(Single { body: |x| match *x { [temperature_k] => relicore::blackbody::radiation_energy_density(temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: None }),
     },
     Spec {
         name: "peak_wavelength",
@@ -154,6 +166,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "peak_frequency",
@@ -165,6 +178,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "peak_wavenumber",
@@ -176,6 +190,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "photon_peak_wavelength",
@@ -187,6 +202,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "photon_peak_frequency",
@@ -198,6 +214,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "temperature_from_peak_wavelength",
@@ -209,6 +226,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "temperature_from_peak_frequency",
@@ -220,6 +238,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "band_fraction_wavelength",
@@ -231,6 +250,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "band_radiance_wavelength",
@@ -242,6 +262,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: Some(Single { body: |x| match *x { [lower_m, upper_m, temperature_k] => relicore::blackbody::band_radiance_wavelength(lower_m, upper_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: None }),
     },
     Spec {
         name: "band_photon_radiance_wavelength",
@@ -253,6 +274,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "band_radiance_frequency",
@@ -264,6 +286,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "temperature_from_band_radiance_wavelength",
@@ -275,6 +298,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "brightness_temperature_wavelength",
@@ -286,6 +310,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: Some(Single { body: |x| match *x { [wavelength_m, spectral_radiance] => relicore::blackbody::brightness_temperature_wavelength(wavelength_m, spectral_radiance), _ => Err(Error::LengthMismatch(0)) }, array: None }),
     },
     Spec {
         name: "brightness_temperature_frequency",
@@ -297,6 +322,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: Some(Single { body: |x| match *x { [frequency_hz, spectral_radiance] => relicore::blackbody::brightness_temperature_frequency(frequency_hz, spectral_radiance), _ => Err(Error::LengthMismatch(0)) }, array: None }),
     },
     Spec {
         name: "rayleigh_jeans_temperature",
@@ -308,6 +334,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "ratio_temperature",
@@ -319,6 +346,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "thermodynamic_to_rayleigh_jeans_factor",
@@ -330,6 +358,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "kcmb_to_mjy_per_sr",
@@ -341,6 +370,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "thermal_sz_spectral_shape",
@@ -352,6 +382,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "thermal_sz_temperature_shape",
@@ -363,6 +394,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "thermal_sz_null_frequency",
@@ -374,6 +406,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "measured_spectral_radiance_wavelength",
@@ -385,6 +418,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: Some(Single { body: |x| match *x { [wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: None }),
     },
     Spec {
         name: "measured_spectral_radiance_frequency",
@@ -396,6 +430,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: Some(Single { body: |x| match *x { [frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: None }),
     },
     Spec {
         name: "measured_band_radiance_wavelength",
@@ -407,6 +442,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "object_temperature_wavelength",
@@ -418,6 +454,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: Some((1, object_temperature_wavelength_frame)),
         width: 1,
+        single: Some(Single { body: |x| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_wavelength(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: None }),
     },
     Spec {
         name: "object_temperature_frequency",
@@ -429,6 +466,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: Some((1, object_temperature_frequency_frame)),
         width: 1,
+        single: Some(Single { body: |x| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_frequency(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: None }),
     },
     Spec {
         name: "object_temperature_band",
@@ -440,6 +478,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: Some((2, object_temperature_band_frame)),
         width: 1,
+        single: None,
     },
     Spec {
         name: "band_radiance_temperature_derivative_wavelength",
@@ -451,6 +490,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "brightness_temperature_wavelength_with_uncertainty",
@@ -462,6 +502,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 8,
+        single: None,
     },
     Spec {
         name: "brightness_temperature_frequency_with_uncertainty",
@@ -473,6 +514,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 8,
+        single: None,
     },
     Spec {
         name: "object_temperature_wavelength_with_uncertainty",
@@ -484,6 +526,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 8,
+        single: None,
     },
     Spec {
         name: "object_temperature_frequency_with_uncertainty",
@@ -495,6 +538,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 8,
+        single: None,
     },
     Spec {
         name: "object_temperature_band_with_uncertainty",
@@ -506,6 +550,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 8,
+        single: None,
     },
     Spec {
         name: "calibrated_temperature_with_uncertainty",
@@ -517,6 +562,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 8,
+        single: None,
     },
     Spec {
         name: "last_scattering_redshift_fit",
@@ -528,6 +574,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "drag_redshift_fit",
@@ -539,6 +586,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "eisenstein_hu_transfer_function",
@@ -550,6 +598,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "eisenstein_hu_no_wiggle_transfer_function",
@@ -561,6 +610,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
 ];
 
@@ -576,6 +626,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "hubble_time_gyr",
@@ -587,6 +638,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "omega_radiation",
@@ -598,6 +650,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "omega_dark_energy",
@@ -609,6 +662,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "matter_radiation_equality_redshift",
@@ -620,6 +674,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "dimensionless_hubble",
@@ -631,6 +686,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "hubble_parameter_km_s_mpc",
@@ -642,6 +698,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "omega_matter_at",
@@ -653,6 +710,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "omega_radiation_at",
@@ -664,6 +722,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "omega_dark_energy_at",
@@ -675,6 +734,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "omega_curvature_at",
@@ -686,6 +746,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "critical_density_kg_m3",
@@ -697,6 +758,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "cmb_temperature_at_k",
@@ -708,6 +770,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "comoving_distance_mpc",
@@ -719,6 +782,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: Some(comoving_distance_mpc_array),
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "transverse_comoving_distance_mpc",
@@ -730,6 +794,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: Some(transverse_comoving_distance_mpc_array),
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "angular_diameter_distance_mpc",
@@ -741,6 +806,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: Some(angular_diameter_distance_mpc_array),
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "luminosity_distance_mpc",
@@ -752,6 +818,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: Some(luminosity_distance_mpc_array),
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "distance_modulus",
@@ -763,6 +830,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "comoving_volume_gpc3",
@@ -774,6 +842,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "differential_comoving_volume_mpc3_sr",
@@ -785,6 +854,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "transverse_scale_kpc_per_arcsec",
@@ -796,6 +866,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "lookback_time_gyr",
@@ -807,6 +878,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "age_gyr",
@@ -818,6 +890,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "conformal_time_mpc",
@@ -829,6 +902,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "angular_diameter_distance_between_mpc",
@@ -840,6 +914,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "redshift_at_age_gyr",
@@ -851,6 +926,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "redshift_at_lookback_time_gyr",
@@ -862,6 +938,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "redshift_at_comoving_distance_mpc",
@@ -873,6 +950,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "redshift_at_luminosity_distance_mpc",
@@ -884,6 +962,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "saha_ionized_fraction",
@@ -895,6 +974,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "hubble_distance_at_mpc",
@@ -906,6 +986,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "volume_averaged_distance_mpc",
@@ -917,6 +998,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "transverse_comoving_distance_over_sound_horizon",
@@ -928,6 +1010,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "hubble_distance_over_sound_horizon",
@@ -939,6 +1022,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "volume_averaged_distance_over_sound_horizon",
@@ -950,6 +1034,7 @@ pub(crate) static UNIVERSE: &[Spec<U>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
 ];
 
@@ -965,6 +1050,7 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "matter_temperature_k",
@@ -976,6 +1062,7 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "optical_depth",
@@ -987,6 +1074,7 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "visibility",
@@ -998,6 +1086,7 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "sound_horizon_mpc",
@@ -1009,6 +1098,7 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "last_scattering_redshift",
@@ -1020,6 +1110,7 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "drag_redshift",
@@ -1031,6 +1122,7 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "sound_horizon_last_scattering_mpc",
@@ -1042,6 +1134,7 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "sound_horizon_drag_mpc",
@@ -1053,6 +1146,7 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "angular_scale_last_scattering",
@@ -1064,6 +1158,7 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "age_at_last_scattering_yr",
@@ -1075,6 +1170,7 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "temperature_at_last_scattering_k",
@@ -1086,6 +1182,7 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "visibility_peak_redshift",
@@ -1097,6 +1194,7 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "thermal_decoupling_redshift",
@@ -1108,6 +1206,7 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "reionization_optical_depth",
@@ -1119,6 +1218,7 @@ pub(crate) static HISTORY: &[Spec<H>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
 ];
 
@@ -1134,6 +1234,7 @@ pub(crate) static GROWTH: &[Spec<G>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "leapfrog_kick_factor_gyr",
@@ -1145,6 +1246,7 @@ pub(crate) static GROWTH: &[Spec<G>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "growth_factor",
@@ -1156,6 +1258,7 @@ pub(crate) static GROWTH: &[Spec<G>] = &[
         array: Some(growth_factor_array),
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "growth_rate",
@@ -1167,6 +1270,7 @@ pub(crate) static GROWTH: &[Spec<G>] = &[
         array: Some(growth_rate_array),
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "unnormalized_growth_factor",
@@ -1178,6 +1282,7 @@ pub(crate) static GROWTH: &[Spec<G>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
 ];
 
@@ -1193,6 +1298,7 @@ pub(crate) static SPECTRUM: &[Spec<S>] = &[
         array: Some(transfer_function_array),
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "linear_power_spectrum_mpc3",
@@ -1204,6 +1310,7 @@ pub(crate) static SPECTRUM: &[Spec<S>] = &[
         array: Some(linear_power_spectrum_mpc3_array),
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "density_rms_in_sphere",
@@ -1215,6 +1322,7 @@ pub(crate) static SPECTRUM: &[Spec<S>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "growth_rate_times_sigma8",
@@ -1226,6 +1334,7 @@ pub(crate) static SPECTRUM: &[Spec<S>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "sigma8",
@@ -1237,6 +1346,7 @@ pub(crate) static SPECTRUM: &[Spec<S>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "s8",
@@ -1248,6 +1358,7 @@ pub(crate) static SPECTRUM: &[Spec<S>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
     Spec {
         name: "scalar_amplitude",
@@ -1259,6 +1370,7 @@ pub(crate) static SPECTRUM: &[Spec<S>] = &[
         array: None,
         frame: None,
         width: 1,
+        single: None,
     },
 ];
 
@@ -1333,6 +1445,27 @@ fn linear_power_spectrum_mpc3_array(r: &S, x: &[f64], rest: &[f64], out: &mut [f
     let mut rest = rest.iter().copied();
     let z = rest.next().unwrap_or(f64::NAN);
     widest!(|r: &S, x: &[f64], z: f64, out: &mut [f64]| -> ArrayResult { r.linear_power_spectrum_mpc3_array(x, z, out) })
+}
+
+/// `spectral_radiance_wavelength_array` of the core in single precision, compiled for each SIMD level and chosen at run time.
+fn spectral_radiance_wavelength_array_f32(x: &[f32], rest: &[f32], out: &mut [f32]) -> ArrayResult {
+    let mut rest = rest.iter().copied();
+    let temperature_k = rest.next().unwrap_or(f32::NAN);
+    widest!(|x: &[f32], temperature_k: f32, out: &mut [f32]| -> ArrayResult { relicore::blackbody::spectral_radiance_wavelength_array(x, temperature_k, out) })
+}
+
+/// `spectral_radiance_frequency_array` of the core in single precision, compiled for each SIMD level and chosen at run time.
+fn spectral_radiance_frequency_array_f32(x: &[f32], rest: &[f32], out: &mut [f32]) -> ArrayResult {
+    let mut rest = rest.iter().copied();
+    let temperature_k = rest.next().unwrap_or(f32::NAN);
+    widest!(|x: &[f32], temperature_k: f32, out: &mut [f32]| -> ArrayResult { relicore::blackbody::spectral_radiance_frequency_array(x, temperature_k, out) })
+}
+
+/// `spectral_radiance_wavenumber_array` of the core in single precision, compiled for each SIMD level and chosen at run time.
+fn spectral_radiance_wavenumber_array_f32(x: &[f32], rest: &[f32], out: &mut [f32]) -> ArrayResult {
+    let mut rest = rest.iter().copied();
+    let temperature_k = rest.next().unwrap_or(f32::NAN);
+    widest!(|x: &[f32], temperature_k: f32, out: &mut [f32]| -> ArrayResult { relicore::blackbody::spectral_radiance_wavenumber_array(x, temperature_k, out) })
 }
 
 /// `object_temperature_wavelength_array` of the core (a frame: the first 1 argument(s) single values, the others slices of the chunk's length or of one value).

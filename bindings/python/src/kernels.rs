@@ -33,11 +33,11 @@ pub(crate) fn run<const N: usize>(
 /// `out[i] = f(x[i])` through a core array function `f(x, out)` (which computes every element,
 /// failing ones as NaN, with the scalar function's bits), split over cores as [`run`] does.
 /// Returns the first failing element; with `nan_on_error` the call succeeds with its NaN.
-pub(crate) fn run_array(
-    x: &[f64],
-    out: &mut [f64],
+pub(crate) fn run_array<T: Element>(
+    x: &[T],
+    out: &mut [T],
     nan_on_error: bool,
-    f: impl Fn(&[f64], &mut [f64]) -> ArrayResult + Sync,
+    f: impl Fn(&[T], &mut [T]) -> ArrayResult + Sync,
 ) -> Option<(usize, Error)> {
     let first = split(out, |start, part| {
         let Some(xs) = x.get(start..start + part.len()) else {
@@ -50,18 +50,18 @@ pub(crate) fn run_array(
 
 /// Runs `body(start, part)` over `out`: on the calling thread for short arrays, else over one
 /// contiguous part per core (see [`run`]); returns the failure of the lowest index.
-fn split(
-    out: &mut [f64],
-    body: impl Fn(usize, &mut [f64]) -> Option<(usize, Error)> + Sync,
+fn split<T: Element>(
+    out: &mut [T],
+    body: impl Fn(usize, &mut [T]) -> Option<(usize, Error)> + Sync,
 ) -> Option<(usize, Error)> {
     split_rows(out, 1, body)
 }
 
 /// [`split`] over rows of `width` floats: `start` counts rows and every part holds whole rows.
-fn split_rows(
-    out: &mut [f64],
+fn split_rows<T: Element>(
+    out: &mut [T],
     width: usize,
-    body: impl Fn(usize, &mut [f64]) -> Option<(usize, Error)> + Sync,
+    body: impl Fn(usize, &mut [T]) -> Option<(usize, Error)> + Sync,
 ) -> Option<(usize, Error)> {
     let width = width.max(1);
     let n = out.len() / width;
@@ -104,6 +104,19 @@ fn split_rows(
     }
 }
 
+/// An element type of the loops: `f64`, and `f32` for the single-precision twins.
+pub(crate) trait Element: Copy + Send + Sync + 'static {
+    const NAN: Self;
+}
+
+impl Element for f64 {
+    const NAN: Self = f64::NAN;
+}
+
+impl Element for f32 {
+    const NAN: Self = f32::NAN;
+}
+
 /// The most element-wise arguments a regular function has (the loops below gather them on the
 /// stack).
 const MAX_ARGS: usize = 16;
@@ -113,13 +126,13 @@ const MAX_ARGS: usize = 16;
 /// (input k read at i, or at 0 when it has one element). A failing element's row is NaN when
 /// `nan_on_error` and `keep_going(err)`; otherwise the failure of the lowest index is returned.
 /// Split over cores as [`run`], with the serial bits.
-pub(crate) fn run_rows(
-    inputs: &[&[f64]],
-    out: &mut [f64],
+pub(crate) fn run_rows<T: Element>(
+    inputs: &[&[T]],
+    out: &mut [T],
     width: usize,
     nan_on_error: bool,
     keep_going: impl Fn(Error) -> bool + Sync,
-    f: impl Fn(&[f64], &mut [f64]) -> Result<()> + Sync,
+    f: impl Fn(&[T], &mut [T]) -> Result<()> + Sync,
 ) -> Option<(usize, Error)> {
     let m = inputs.len();
     if m > MAX_ARGS {
@@ -127,19 +140,19 @@ pub(crate) fn run_rows(
     }
     let width = width.max(1);
     split_rows(out, width, |start, part| {
-        let mut x = [f64::NAN; MAX_ARGS];
+        let mut x = [T::NAN; MAX_ARGS];
         for (j, row) in part.chunks_exact_mut(width).enumerate() {
             let i = start + j;
             for (xk, s) in x.iter_mut().zip(inputs) {
                 *xk = s
                     .get(if s.len() == 1 { 0 } else { i })
                     .copied()
-                    .unwrap_or(f64::NAN);
+                    .unwrap_or(T::NAN);
             }
             let values = x.get(..m).unwrap_or(&[]);
             match f(values, row) {
                 Ok(()) => {}
-                Err(e) if nan_on_error && keep_going(e) => row.fill(f64::NAN),
+                Err(e) if nan_on_error && keep_going(e) => row.fill(T::NAN),
                 Err(e) => return Some((i, e)),
             }
         }
@@ -226,11 +239,11 @@ fn run_range<const N: usize>(
     None
 }
 
-pub(crate) fn elements<'a>(
-    inputs: &'a [PyReadonlyArray1<'_, f64>],
+pub(crate) fn elements<'a, T: numpy::Element>(
+    inputs: &'a [PyReadonlyArray1<'_, T>],
     n: usize,
     name: &str,
-) -> PyResult<Vec<&'a [f64]>> {
+) -> PyResult<Vec<&'a [T]>> {
     inputs
         .iter()
         .map(|a| {

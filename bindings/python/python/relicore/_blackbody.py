@@ -9,7 +9,6 @@ from __future__ import annotations
 from typing import Any
 
 from relicore._elementwise import FUNCTIONS as _F
-from relicore._elementwise import apply as _apply
 from relicore._elementwise import publish as _publish
 from relicore import _results
 from relicore._elementwise import apply_result as _apply_result
@@ -29,7 +28,7 @@ def spectral_radiance_wavelength(wavelength_m: Any, temperature_k: Any, *, nan_o
 
     Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath; see the module documentation.
     """
-    return _apply(_F["spectral_radiance_wavelength"], None, (wavelength_m, temperature_k, ), nan_on_error)
+    return _F["spectral_radiance_wavelength"].apply(None, (wavelength_m, temperature_k, ), nan_on_error)
 
 
 def spectral_radiance_frequency(frequency_hz: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -41,7 +40,7 @@ def spectral_radiance_frequency(frequency_hz: Any, temperature_k: Any, *, nan_on
     Returns W m⁻² sr⁻¹ Hz⁻¹, ≥ 0. Errors as `spectral_radiance_wavelength`.
     Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
     """
-    return _apply(_F["spectral_radiance_frequency"], None, (frequency_hz, temperature_k, ), nan_on_error)
+    return _F["spectral_radiance_frequency"].apply(None, (frequency_hz, temperature_k, ), nan_on_error)
 
 
 def spectral_radiance_wavenumber(wavenumber_per_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -53,7 +52,7 @@ def spectral_radiance_wavenumber(wavenumber_per_m: Any, temperature_k: Any, *, n
     Returns W m⁻² sr⁻¹ per m⁻¹ (that is W m⁻¹ sr⁻¹), ≥ 0. Errors as
     `spectral_radiance_wavelength`. Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
     """
-    return _apply(_F["spectral_radiance_wavenumber"], None, (wavenumber_per_m, temperature_k, ), nan_on_error)
+    return _F["spectral_radiance_wavenumber"].apply(None, (wavenumber_per_m, temperature_k, ), nan_on_error)
 
 
 def photon_radiance_wavelength(wavelength_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -64,7 +63,7 @@ def photon_radiance_wavelength(wavelength_m: Any, temperature_k: Any, *, nan_on_
     Returns photons s⁻¹ m⁻² sr⁻¹ m⁻¹. Errors as `spectral_radiance_wavelength`.
     Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
     """
-    return _apply(_F["photon_radiance_wavelength"], None, (wavelength_m, temperature_k, ), nan_on_error)
+    return _F["photon_radiance_wavelength"].apply(None, (wavelength_m, temperature_k, ), nan_on_error)
 
 
 def photon_radiance_frequency(frequency_hz: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -75,7 +74,7 @@ def photon_radiance_frequency(frequency_hz: Any, temperature_k: Any, *, nan_on_e
     Returns photons s⁻¹ m⁻² sr⁻¹ Hz⁻¹. Errors as `spectral_radiance_wavelength`.
     Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
     """
-    return _apply(_F["photon_radiance_frequency"], None, (frequency_hz, temperature_k, ), nan_on_error)
+    return _F["photon_radiance_frequency"].apply(None, (frequency_hz, temperature_k, ), nan_on_error)
 
 
 def photon_radiance_wavenumber(wavenumber_per_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -86,7 +85,7 @@ def photon_radiance_wavenumber(wavenumber_per_m: Any, temperature_k: Any, *, nan
     Returns photons s⁻¹ m⁻² sr⁻¹ per m⁻¹. Errors as `spectral_radiance_wavelength`.
     Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
     """
-    return _apply(_F["photon_radiance_wavenumber"], None, (wavenumber_per_m, temperature_k, ), nan_on_error)
+    return _F["photon_radiance_wavenumber"].apply(None, (wavenumber_per_m, temperature_k, ), nan_on_error)
 
 
 def radiance_temperature_derivative_wavelength(wavelength_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -99,7 +98,7 @@ def radiance_temperature_derivative_wavelength(wavelength_m: Any, temperature_k:
     Method: B_λ·x(1 + E)/(T E) with E = e^x − 1, the one exponential B_λ needs (the
     overflow-safe form B_λ·(x/T)/(1 − e^−x) where an intermediate is not a normal number).
     """
-    return _apply(_F["radiance_temperature_derivative_wavelength"], None, (wavelength_m, temperature_k, ), nan_on_error)
+    return _F["radiance_temperature_derivative_wavelength"].apply(None, (wavelength_m, temperature_k, ), nan_on_error)
 
 
 def radiance_temperature_derivative_frequency(frequency_hz: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -110,7 +109,7 @@ def radiance_temperature_derivative_frequency(frequency_hz: Any, temperature_k: 
     Returns W m⁻² sr⁻¹ Hz⁻¹ K⁻¹, ≥ 0. Errors as `spectral_radiance_wavelength`.
     Accuracy: ≤ 8 ulp (`f64`, normal results) against mpmath.
     """
-    return _apply(_F["radiance_temperature_derivative_frequency"], None, (frequency_hz, temperature_k, ), nan_on_error)
+    return _F["radiance_temperature_derivative_frequency"].apply(None, (frequency_hz, temperature_k, ), nan_on_error)
 
 
 def radiant_exitance(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -121,7 +120,7 @@ def radiant_exitance(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
     Returns W m⁻². Errors: `NonFinite(0)`, `NonPositive(0)`.
     Accuracy: ≤ 2 ulp (`f64`) against mpmath (T⁴ is formed to double length).
     """
-    return _apply(_F["radiant_exitance"], None, (temperature_k, ), nan_on_error)
+    return _F["radiant_exitance"].apply(None, (temperature_k, ), nan_on_error)
 
 
 def photon_exitance(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -132,7 +131,7 @@ def photon_exitance(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
     Returns photons s⁻¹ m⁻². Errors: `NonFinite(0)`, `NonPositive(0)`.
     Accuracy: ≤ 2 ulp (`f64`) against mpmath.
     """
-    return _apply(_F["photon_exitance"], None, (temperature_k, ), nan_on_error)
+    return _F["photon_exitance"].apply(None, (temperature_k, ), nan_on_error)
 
 
 def photon_number_density(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -149,7 +148,7 @@ def photon_number_density(temperature_k: Any, *, nan_on_error: bool = False) -> 
     Reference: Planck's law integrated over frequency and solid angle, ∫ 8πν²/c³ /(e^(hν/kT) − 1) dν
     (e.g. Rybicki & Lightman, Radiative Processes in Astrophysics, 1979, ch. 1).
     """
-    return _apply(_F["photon_number_density"], None, (temperature_k, ), nan_on_error)
+    return _F["photon_number_density"].apply(None, (temperature_k, ), nan_on_error)
 
 
 def radiation_energy_density(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -166,7 +165,7 @@ def radiation_energy_density(temperature_k: Any, *, nan_on_error: bool = False) 
     Reference: Stefan 1879, Boltzmann 1884; u = 4M/c for isotropic radiation (e.g. Rybicki &
     Lightman 1979, ch. 1).
     """
-    return _apply(_F["radiation_energy_density"], None, (temperature_k, ), nan_on_error)
+    return _F["radiation_energy_density"].apply(None, (temperature_k, ), nan_on_error)
 
 
 def peak_wavelength(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -176,7 +175,7 @@ def peak_wavelength(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
 
     Accuracy: ≤ 1 ulp (`f64`) against mpmath.
     """
-    return _apply(_F["peak_wavelength"], None, (temperature_k, ), nan_on_error)
+    return _F["peak_wavelength"].apply(None, (temperature_k, ), nan_on_error)
 
 
 def peak_frequency(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -186,7 +185,7 @@ def peak_frequency(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
 
     Accuracy: ≤ 1 ulp (`f64`) against mpmath.
     """
-    return _apply(_F["peak_frequency"], None, (temperature_k, ), nan_on_error)
+    return _F["peak_frequency"].apply(None, (temperature_k, ), nan_on_error)
 
 
 def peak_wavenumber(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -196,7 +195,7 @@ def peak_wavenumber(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
 
     Accuracy: ≤ 1 ulp (`f64`) against mpmath.
     """
-    return _apply(_F["peak_wavenumber"], None, (temperature_k, ), nan_on_error)
+    return _F["peak_wavenumber"].apply(None, (temperature_k, ), nan_on_error)
 
 
 def photon_peak_wavelength(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -206,7 +205,7 @@ def photon_peak_wavelength(temperature_k: Any, *, nan_on_error: bool = False) ->
 
     Accuracy: ≤ 1 ulp (`f64`) against mpmath.
     """
-    return _apply(_F["photon_peak_wavelength"], None, (temperature_k, ), nan_on_error)
+    return _F["photon_peak_wavelength"].apply(None, (temperature_k, ), nan_on_error)
 
 
 def photon_peak_frequency(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -216,7 +215,7 @@ def photon_peak_frequency(temperature_k: Any, *, nan_on_error: bool = False) -> 
 
     Accuracy: ≤ 1 ulp (`f64`) against mpmath.
     """
-    return _apply(_F["photon_peak_frequency"], None, (temperature_k, ), nan_on_error)
+    return _F["photon_peak_frequency"].apply(None, (temperature_k, ), nan_on_error)
 
 
 def temperature_from_peak_wavelength(wavelength_m: Any, *, nan_on_error: bool = False) -> Any:
@@ -226,7 +225,7 @@ def temperature_from_peak_wavelength(wavelength_m: Any, *, nan_on_error: bool = 
 
     Accuracy: ≤ 1 ulp (`f64`) against mpmath.
     """
-    return _apply(_F["temperature_from_peak_wavelength"], None, (wavelength_m, ), nan_on_error)
+    return _F["temperature_from_peak_wavelength"].apply(None, (wavelength_m, ), nan_on_error)
 
 
 def temperature_from_peak_frequency(frequency_hz: Any, *, nan_on_error: bool = False) -> Any:
@@ -236,7 +235,7 @@ def temperature_from_peak_frequency(frequency_hz: Any, *, nan_on_error: bool = F
 
     Accuracy: ≤ 1 ulp (`f64`) against mpmath.
     """
-    return _apply(_F["temperature_from_peak_frequency"], None, (frequency_hz, ), nan_on_error)
+    return _F["temperature_from_peak_frequency"].apply(None, (frequency_hz, ), nan_on_error)
 
 
 def band_fraction_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -252,7 +251,7 @@ def band_fraction_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, 
 
     Accuracy: within 1e-15 absolute (`f64`) against mpmath quadrature; see the module docs.
     """
-    return _apply(_F["band_fraction_wavelength"], None, (lower_m, upper_m, temperature_k, ), nan_on_error)
+    return _F["band_fraction_wavelength"].apply(None, (lower_m, upper_m, temperature_k, ), nan_on_error)
 
 
 def band_radiance_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -264,7 +263,7 @@ def band_radiance_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, 
     Returns W m⁻² sr⁻¹. Errors as `band_fraction_wavelength`.
     Accuracy: within max(1e-14·L, 1e-15·σT⁴/π) (`f64`) against mpmath quadrature.
     """
-    return _apply(_F["band_radiance_wavelength"], None, (lower_m, upper_m, temperature_k, ), nan_on_error)
+    return _F["band_radiance_wavelength"].apply(None, (lower_m, upper_m, temperature_k, ), nan_on_error)
 
 
 def band_photon_radiance_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -276,7 +275,7 @@ def band_photon_radiance_wavelength(lower_m: Any, upper_m: Any, temperature_k: A
     Returns photons s⁻¹ m⁻² sr⁻¹. Errors as `band_fraction_wavelength`.
     Accuracy: within max(1e-14·N, 1e-15·N_total) (`f64`) against mpmath quadrature.
     """
-    return _apply(_F["band_photon_radiance_wavelength"], None, (lower_m, upper_m, temperature_k, ), nan_on_error)
+    return _F["band_photon_radiance_wavelength"].apply(None, (lower_m, upper_m, temperature_k, ), nan_on_error)
 
 
 def band_radiance_frequency(lower_hz: Any, upper_hz: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -288,7 +287,7 @@ def band_radiance_frequency(lower_hz: Any, upper_hz: Any, temperature_k: Any, *,
     Returns W m⁻² sr⁻¹. Errors as `band_fraction_wavelength`.
     Accuracy: within max(1e-14·L, 1e-15·σT⁴/π) (`f64`) against mpmath quadrature.
     """
-    return _apply(_F["band_radiance_frequency"], None, (lower_hz, upper_hz, temperature_k, ), nan_on_error)
+    return _F["band_radiance_frequency"].apply(None, (lower_hz, upper_hz, temperature_k, ), nan_on_error)
 
 
 def temperature_from_band_radiance_wavelength(lower_m: Any, upper_m: Any, radiance: Any, *, nan_on_error: bool = False) -> Any:
@@ -307,7 +306,7 @@ def temperature_from_band_radiance_wavelength(lower_m: Any, upper_m: Any, radian
     brightness temperature of the mean spectral radiance at the band centre.
     Accuracy: round trip within 1e-14 relative (`f64`) against mpmath root finding.
     """
-    return _apply(_F["temperature_from_band_radiance_wavelength"], None, (lower_m, upper_m, radiance, ), nan_on_error)
+    return _F["temperature_from_band_radiance_wavelength"].apply(None, (lower_m, upper_m, radiance, ), nan_on_error)
 
 
 def brightness_temperature_wavelength(wavelength_m: Any, spectral_radiance: Any, *, nan_on_error: bool = False) -> Any:
@@ -322,7 +321,7 @@ def brightness_temperature_wavelength(wavelength_m: Any, spectral_radiance: Any,
     within 1e-14 relative (`f64`) against mpmath.
     Reference: Planck's law solved for T (closed form).
     """
-    return _apply(_F["brightness_temperature_wavelength"], None, (wavelength_m, spectral_radiance, ), nan_on_error)
+    return _F["brightness_temperature_wavelength"].apply(None, (wavelength_m, spectral_radiance, ), nan_on_error)
 
 
 def brightness_temperature_frequency(frequency_hz: Any, spectral_radiance: Any, *, nan_on_error: bool = False) -> Any:
@@ -335,7 +334,7 @@ def brightness_temperature_frequency(frequency_hz: Any, spectral_radiance: Any, 
     Accuracy: round trip within 1e-14 relative (`f64`) against mpmath; where 2hν³/c² is below
     the normal range (ν below about 1e-95 Hz in `f64`) within 5e-13 (`tests/blackbody_edges.rs`).
     """
-    return _apply(_F["brightness_temperature_frequency"], None, (frequency_hz, spectral_radiance, ), nan_on_error)
+    return _F["brightness_temperature_frequency"].apply(None, (frequency_hz, spectral_radiance, ), nan_on_error)
 
 
 def rayleigh_jeans_temperature(frequency_hz: Any, spectral_radiance: Any, *, nan_on_error: bool = False) -> Any:
@@ -350,7 +349,7 @@ def rayleigh_jeans_temperature(frequency_hz: Any, spectral_radiance: Any, *, nan
     mpmath (formed to double length with exact power-of-two scalings, so `f32` does not
     overflow).
     """
-    return _apply(_F["rayleigh_jeans_temperature"], None, (frequency_hz, spectral_radiance, ), nan_on_error)
+    return _F["rayleigh_jeans_temperature"].apply(None, (frequency_hz, spectral_radiance, ), nan_on_error)
 
 
 def ratio_temperature(wavelength_1_m: Any, wavelength_2_m: Any, radiance_ratio: Any, emissivity_ratio: Any, *, nan_on_error: bool = False) -> Any:
@@ -372,7 +371,7 @@ def ratio_temperature(wavelength_1_m: Any, wavelength_2_m: Any, radiance_ratio: 
     Reference: two-colour pyrometry, e.g. DeWitt & Nutter (eds.), Theory and Practice of
     Radiation Thermometry, Wiley 1988, ch. 6. Cautions as in the module documentation.
     """
-    return _apply(_F["ratio_temperature"], None, (wavelength_1_m, wavelength_2_m, radiance_ratio, emissivity_ratio, ), nan_on_error)
+    return _F["ratio_temperature"].apply(None, (wavelength_1_m, wavelength_2_m, radiance_ratio, emissivity_ratio, ), nan_on_error)
 
 
 def thermodynamic_to_rayleigh_jeans_factor(frequency_hz: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -384,7 +383,7 @@ def thermodynamic_to_rayleigh_jeans_factor(frequency_hz: Any, cmb_temperature_k:
     Returns a number in (0, 1). Errors: `NonFinite(i)`, `NonPositive(i)`.
     Accuracy: ≤ 8 ulp (`f64`) against mpmath.
     """
-    return _apply(_F["thermodynamic_to_rayleigh_jeans_factor"], None, (frequency_hz, cmb_temperature_k, ), nan_on_error)
+    return _F["thermodynamic_to_rayleigh_jeans_factor"].apply(None, (frequency_hz, cmb_temperature_k, ), nan_on_error)
 
 
 def kcmb_to_mjy_per_sr(frequency_hz: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -397,7 +396,7 @@ def kcmb_to_mjy_per_sr(frequency_hz: Any, cmb_temperature_k: Any, *, nan_on_erro
     Returns MJy sr⁻¹ K⁻¹ (1e20 × the SI value in W m⁻² sr⁻¹ Hz⁻¹ K⁻¹). Errors: `NonFinite(i)`,
     `NonPositive(i)`. Accuracy: ≤ 8 ulp (`f64`) against mpmath.
     """
-    return _apply(_F["kcmb_to_mjy_per_sr"], None, (frequency_hz, cmb_temperature_k, ), nan_on_error)
+    return _F["kcmb_to_mjy_per_sr"].apply(None, (frequency_hz, cmb_temperature_k, ), nan_on_error)
 
 
 def thermal_sz_spectral_shape(frequency_hz: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -408,7 +407,7 @@ def thermal_sz_spectral_shape(frequency_hz: Any, cmb_temperature_k: Any, *, nan_
     Returns a pure number (negative below the null, positive above). Errors: `NonFinite(i)`,
     `NonPositive(i)`. Accuracy: within 1e-15·(x + 4)·x⁴eˣ/(eˣ − 1)² absolute (`f64`).
     """
-    return _apply(_F["thermal_sz_spectral_shape"], None, (frequency_hz, cmb_temperature_k, ), nan_on_error)
+    return _F["thermal_sz_spectral_shape"].apply(None, (frequency_hz, cmb_temperature_k, ), nan_on_error)
 
 
 def thermal_sz_temperature_shape(frequency_hz: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -420,7 +419,7 @@ def thermal_sz_temperature_shape(frequency_hz: Any, cmb_temperature_k: Any, *, n
     T₀ = 2.72548 K), growing like x − 4 at high frequency. Errors: `NonFinite(i)`,
     `NonPositive(i)`. Accuracy: within 1e-15·(x + 4) absolute (`f64`) against mpmath.
     """
-    return _apply(_F["thermal_sz_temperature_shape"], None, (frequency_hz, cmb_temperature_k, ), nan_on_error)
+    return _F["thermal_sz_temperature_shape"].apply(None, (frequency_hz, cmb_temperature_k, ), nan_on_error)
 
 
 def thermal_sz_null_frequency(cmb_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -432,7 +431,7 @@ def thermal_sz_null_frequency(cmb_temperature_k: Any, *, nan_on_error: bool = Fa
     Accuracy: ≤ 2 ulp (`f64`) against mpmath (non-relativistic limit; relativistic corrections
     move the null upward with cluster temperature and are not included).
     """
-    return _apply(_F["thermal_sz_null_frequency"], None, (cmb_temperature_k, ), nan_on_error)
+    return _F["thermal_sz_null_frequency"].apply(None, (cmb_temperature_k, ), nan_on_error)
 
 
 def measured_spectral_radiance_wavelength(wavelength_m: Any, object_temperature_k: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -453,7 +452,7 @@ def measured_spectral_radiance_wavelength(wavelength_m: Any, object_temperature_
     Accuracy: within 1e-14 relative (`f64`) against mpmath (a sum of non-negative terms, each
     within 4 ulp). Reference: the measurement equation of radiation thermometry (module docs).
     """
-    return _apply(_F["measured_spectral_radiance_wavelength"], None, (wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+    return _F["measured_spectral_radiance_wavelength"].apply(None, (wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
 
 
 def measured_spectral_radiance_frequency(frequency_hz: Any, object_temperature_k: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -466,7 +465,7 @@ def measured_spectral_radiance_frequency(frequency_hz: Any, object_temperature_k
     Returns W m⁻² sr⁻¹ Hz⁻¹, ≥ 0. Errors as `measured_spectral_radiance_wavelength`.
     Accuracy: within 1e-14 relative (`f64`) against mpmath.
     """
-    return _apply(_F["measured_spectral_radiance_frequency"], None, (frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+    return _F["measured_spectral_radiance_frequency"].apply(None, (frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
 
 
 def measured_band_radiance_wavelength(lower_m: Any, upper_m: Any, object_temperature_k: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -482,7 +481,7 @@ def measured_band_radiance_wavelength(lower_m: Any, upper_m: Any, object_tempera
     errors of `measured_spectral_radiance_wavelength` at positions 2 to 6.
     Accuracy: within 1e-14 relative (`f64`) against mpmath quadrature.
     """
-    return _apply(_F["measured_band_radiance_wavelength"], None, (lower_m, upper_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+    return _F["measured_band_radiance_wavelength"].apply(None, (lower_m, upper_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
 
 
 def object_temperature_wavelength(wavelength_m: Any, signal: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -505,7 +504,7 @@ def object_temperature_wavelength(wavelength_m: Any, signal: Any, emissivity: An
     κ ≤ 20 (module docs); ε = τ = 1 gives `brightness_temperature_wavelength` bit for bit.
     Reference: the measurement equation (module docs), Planck's law solved for T.
     """
-    return _apply(_F["object_temperature_wavelength"], None, (wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+    return _F["object_temperature_wavelength"].apply(None, (wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
 
 
 def object_temperature_frequency(frequency_hz: Any, signal: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -519,7 +518,7 @@ def object_temperature_frequency(frequency_hz: Any, signal: Any, emissivity: Any
     Returns T_obj in K. Errors as `object_temperature_wavelength`. Accuracy: within 1e-13
     relative (`f64`) against mpmath for κ ≤ 20.
     """
-    return _apply(_F["object_temperature_frequency"], None, (frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+    return _F["object_temperature_frequency"].apply(None, (frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
 
 
 def object_temperature_band(lower_m: Any, upper_m: Any, signal: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -537,7 +536,7 @@ def object_temperature_band(lower_m: Any, upper_m: Any, signal: Any, emissivity:
     `NoConvergence` (seen only far outside physical arguments).
     Accuracy: within 1e-13 relative (`f64`) against mpmath for κ ≤ 20.
     """
-    return _apply(_F["object_temperature_band"], None, (lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+    return _F["object_temperature_band"].apply(None, (lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
 
 
 def band_radiance_temperature_derivative_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -553,7 +552,7 @@ def band_radiance_temperature_derivative_wavelength(lower_m: Any, upper_m: Any, 
     Accuracy: within 1e-13 relative (`f64`) against mpmath quadrature of ∂B_λ/∂T over the band
     for x at the long-wave edge ≥ 0.05 (below, 4L and the edge terms cancel as 4/x).
     """
-    return _apply(_F["band_radiance_temperature_derivative_wavelength"], None, (lower_m, upper_m, temperature_k, ), nan_on_error)
+    return _F["band_radiance_temperature_derivative_wavelength"].apply(None, (lower_m, upper_m, temperature_k, ), nan_on_error)
 
 
 def brightness_temperature_wavelength_with_uncertainty(wavelength_m: Any, spectral_radiance: Any, spectral_radiance_uncertainty: Any, *, nan_on_error: bool = False) -> _results.TemperatureUncertainty:

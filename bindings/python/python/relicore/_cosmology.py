@@ -9,7 +9,6 @@ from __future__ import annotations
 from typing import Any
 
 from relicore._elementwise import FUNCTIONS as _F
-from relicore._elementwise import apply as _apply
 from relicore._elementwise import publish as _publish
 
 __all__ = ['UniverseFunctions']
@@ -62,50 +61,50 @@ class UniverseFunctions:
         Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-14 relative (`f64`) against
         mpmath (`tests/data/cosmology.txt`).
         """
-        return _apply(_F["dimensionless_hubble"], self, (z, ), nan_on_error, "dimensionless_hubble")
+        return _F["dimensionless_hubble"].apply(self, (z, ), nan_on_error)
 
     def hubble_parameter_km_s_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Hubble parameter H(z) = H0 E(z), km s⁻¹ Mpc⁻¹. Errors and accuracy as
         `dimensionless_hubble`.
         """
-        return _apply(_F["hubble_parameter_km_s_mpc"], self, (z, ), nan_on_error, "hubble_parameter_km_s_mpc")
+        return _F["hubble_parameter_km_s_mpc"].apply(self, (z, ), nan_on_error)
 
     def omega_matter_at(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Matter density parameter at z (cold dark matter, baryons and massive neutrinos, the
         same bookkeeping as `omega_matter` today), in [0, 1] for flat models. Errors as
         `dimensionless_hubble`.
         """
-        return _apply(_F["omega_matter_at"], self, (z, ), nan_on_error, "omega_matter_at")
+        return _F["omega_matter_at"].apply(self, (z, ), nan_on_error)
 
     def omega_radiation_at(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Radiation density parameter at z (photons and massless neutrino species). Errors as
         `dimensionless_hubble`.
         """
-        return _apply(_F["omega_radiation_at"], self, (z, ), nan_on_error, "omega_radiation_at")
+        return _F["omega_radiation_at"].apply(self, (z, ), nan_on_error)
 
     def omega_dark_energy_at(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Dark-energy density parameter at z. Errors as
         `dimensionless_hubble`.
         """
-        return _apply(_F["omega_dark_energy_at"], self, (z, ), nan_on_error, "omega_dark_energy_at")
+        return _F["omega_dark_energy_at"].apply(self, (z, ), nan_on_error)
 
     def omega_curvature_at(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Curvature density parameter at z, Ω_k(1+z)²/E². Errors as
         `dimensionless_hubble`.
         """
-        return _apply(_F["omega_curvature_at"], self, (z, ), nan_on_error, "omega_curvature_at")
+        return _F["omega_curvature_at"].apply(self, (z, ), nan_on_error)
 
     def critical_density_kg_m3(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Critical density at z, ρ_c(z) = 3H(z)²/(8πG), kg m⁻³ (G from CODATA 2022). Errors as
         `dimensionless_hubble`.
         """
-        return _apply(_F["critical_density_kg_m3"], self, (z, ), nan_on_error, "critical_density_kg_m3")
+        return _F["critical_density_kg_m3"].apply(self, (z, ), nan_on_error)
 
     def cmb_temperature_at_k(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """CMB temperature at z, T0(1+z), K. Errors: `NonFinite(0)`, `Negative(0)`. Exact to one
         rounding.
         """
-        return _apply(_F["cmb_temperature_at_k"], self, (z, ), nan_on_error, "cmb_temperature_at_k")
+        return _F["cmb_temperature_at_k"].apply(self, (z, ), nan_on_error)
 
     def comoving_distance_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Line-of-sight comoving distance D_C = (c/H0) ∫₀^z dz'/E(z'), Mpc (Hogg 1999 eq. 15).
@@ -118,26 +117,26 @@ class UniverseFunctions:
         neutrinos). Method: the per-universe table (see `table.rs`) for z ≤ 16383, the shared
         quadrature in s = √a beyond.
         """
-        return _apply(_F["comoving_distance_mpc"], self, (z, ), nan_on_error, "comoving_distance_mpc")
+        return _F["comoving_distance_mpc"].apply(self, (z, ), nan_on_error)
 
     def transverse_comoving_distance_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Transverse comoving distance D_M, Mpc (Hogg 1999 eq. 16: equal to D_C when flat, the
         sinh/sin form when open/closed). Errors and accuracy as
         `comoving_distance_mpc`.
         """
-        return _apply(_F["transverse_comoving_distance_mpc"], self, (z, ), nan_on_error, "transverse_comoving_distance_mpc")
+        return _F["transverse_comoving_distance_mpc"].apply(self, (z, ), nan_on_error)
 
     def angular_diameter_distance_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Angular-diameter distance D_A = D_M/(1+z), Mpc (Hogg 1999 eq. 18). Errors and accuracy
         as `comoving_distance_mpc`.
         """
-        return _apply(_F["angular_diameter_distance_mpc"], self, (z, ), nan_on_error, "angular_diameter_distance_mpc")
+        return _F["angular_diameter_distance_mpc"].apply(self, (z, ), nan_on_error)
 
     def luminosity_distance_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Luminosity distance D_L = (1+z) D_M, Mpc (Hogg 1999 eq. 21). Errors and accuracy as
         `comoving_distance_mpc`.
         """
-        return _apply(_F["luminosity_distance_mpc"], self, (z, ), nan_on_error, "luminosity_distance_mpc")
+        return _F["luminosity_distance_mpc"].apply(self, (z, ), nan_on_error)
 
     def distance_modulus(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Distance modulus 5 log10(D_L / 10 pc), magnitudes (Hogg 1999 eq. 25).
@@ -145,7 +144,7 @@ class UniverseFunctions:
         Errors: `NonFinite(0)`, `Negative(0)`, `NonPositive(0)` at z = 0 (D_L = 0).
         Accuracy: within 1e-12 absolute (`f64`) against mpmath.
         """
-        return _apply(_F["distance_modulus"], self, (z, ), nan_on_error, "distance_modulus")
+        return _F["distance_modulus"].apply(self, (z, ), nan_on_error)
 
     def comoving_volume_gpc3(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Comoving volume inside redshift z over the whole sky, Gpc³ (Hogg 1999 eq. 29), written
@@ -155,19 +154,19 @@ class UniverseFunctions:
 
         Errors and accuracy as `comoving_distance_mpc`.
         """
-        return _apply(_F["comoving_volume_gpc3"], self, (z, ), nan_on_error, "comoving_volume_gpc3")
+        return _F["comoving_volume_gpc3"].apply(self, (z, ), nan_on_error)
 
     def differential_comoving_volume_mpc3_sr(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Differential comoving volume dV_C/dz/dΩ = D_H D_M²/E(z), Mpc³ sr⁻¹ (Hogg 1999 eq. 28).
         Errors and accuracy as `comoving_distance_mpc`.
         """
-        return _apply(_F["differential_comoving_volume_mpc3_sr"], self, (z, ), nan_on_error, "differential_comoving_volume_mpc3_sr")
+        return _F["differential_comoving_volume_mpc3_sr"].apply(self, (z, ), nan_on_error)
 
     def transverse_scale_kpc_per_arcsec(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Proper transverse size per arcsecond at z, D_A·π/648000, kpc per arcsec. Errors and
         accuracy as `comoving_distance_mpc`.
         """
-        return _apply(_F["transverse_scale_kpc_per_arcsec"], self, (z, ), nan_on_error, "transverse_scale_kpc_per_arcsec")
+        return _F["transverse_scale_kpc_per_arcsec"].apply(self, (z, ), nan_on_error)
 
     def lookback_time_gyr(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Lookback time t(0) − t(z) = (1/H0) ∫₀^z dz'/((1+z')E(z')), Gyr (Hogg 1999 eq. 30).
@@ -177,7 +176,7 @@ class UniverseFunctions:
         Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-12 relative (`f64`) for z up
         to 1e4 against mpmath.
         """
-        return _apply(_F["lookback_time_gyr"], self, (z, ), nan_on_error, "lookback_time_gyr")
+        return _F["lookback_time_gyr"].apply(self, (z, ), nan_on_error)
 
     def age_gyr(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Age of the universe at redshift z, (1/H0) ∫_z^∞ dz'/((1+z')E(z')), Gyr.
@@ -192,7 +191,7 @@ class UniverseFunctions:
         (`f64`) for z up to 1e8 against mpmath; the Einstein-de Sitter and flat ΛCDM closed forms
         are among the vectors.
         """
-        return _apply(_F["age_gyr"], self, (z, ), nan_on_error, "age_gyr")
+        return _F["age_gyr"].apply(self, (z, ), nan_on_error)
 
     def conformal_time_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Conformal time at z times c, c·η(z) = (c/H0) ∫_z^∞ dz'/E(z'), Mpc: the comoving horizon.
@@ -203,7 +202,7 @@ class UniverseFunctions:
         neither radiation nor matter, e.g. the empty Milne model). Accuracy: within 1e-12
         relative (`f64`) for z up to 1e8 against mpmath.
         """
-        return _apply(_F["conformal_time_mpc"], self, (z, ), nan_on_error, "conformal_time_mpc")
+        return _F["conformal_time_mpc"].apply(self, (z, ), nan_on_error)
 
     def angular_diameter_distance_between_mpc(self, z1: Any, z2: Any, *, nan_on_error: bool = False) -> Any:
         """Angular-diameter distance of an object at z2 seen from z1 ≤ z2, D_M(χ2 − χ1)/(1 + z2),
@@ -212,7 +211,7 @@ class UniverseFunctions:
         Errors: `NonFinite(i)`, `Negative(i)`, `EmptyInterval(0)` when z2 < z1.
         Accuracy: within 1e-12 relative (`f64`) unless z2 − z1 is so small that χ2 − χ1 cancels.
         """
-        return _apply(_F["angular_diameter_distance_between_mpc"], self, (z1, z2, ), nan_on_error, "angular_diameter_distance_between_mpc")
+        return _F["angular_diameter_distance_between_mpc"].apply(self, (z1, z2, ), nan_on_error)
 
     def redshift_at_age_gyr(self, age_gyr: Any, *, nan_on_error: bool = False) -> Any:
         """Redshift at which the age of the universe equals `age_gyr`.
@@ -222,7 +221,7 @@ class UniverseFunctions:
         Errors: `NonFinite(0)`, `NonPositive(0)`, `OutOfDomain(0)` above the age today or
         below the age at z = 1e12. Accuracy: round trip within 1e-12 relative (`f64`).
         """
-        return _apply(_F["redshift_at_age_gyr"], self, (age_gyr, ), nan_on_error, "redshift_at_age_gyr")
+        return _F["redshift_at_age_gyr"].apply(self, (age_gyr, ), nan_on_error)
 
     def redshift_at_lookback_time_gyr(self, lookback_gyr: Any, *, nan_on_error: bool = False) -> Any:
         """Redshift at which the lookback time equals `lookback_gyr`.
@@ -241,7 +240,7 @@ class UniverseFunctions:
         infinite, such as a nearly empty one, the lookback time grows without bound).
         Accuracy: round trip within 1e-12 relative (`f64`).
         """
-        return _apply(_F["redshift_at_lookback_time_gyr"], self, (lookback_gyr, ), nan_on_error, "redshift_at_lookback_time_gyr")
+        return _F["redshift_at_lookback_time_gyr"].apply(self, (lookback_gyr, ), nan_on_error)
 
     def redshift_at_comoving_distance_mpc(self, distance_mpc: Any, *, nan_on_error: bool = False) -> Any:
         """Redshift at which the line-of-sight comoving distance equals `distance_mpc`.
@@ -251,7 +250,7 @@ class UniverseFunctions:
         Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` beyond the distance reachable
         by z = 1e12 (the particle horizon). Accuracy: round trip within 1e-12 relative (`f64`).
         """
-        return _apply(_F["redshift_at_comoving_distance_mpc"], self, (distance_mpc, ), nan_on_error, "redshift_at_comoving_distance_mpc")
+        return _F["redshift_at_comoving_distance_mpc"].apply(self, (distance_mpc, ), nan_on_error)
 
     def redshift_at_luminosity_distance_mpc(self, distance_mpc: Any, *, nan_on_error: bool = False) -> Any:
         """Redshift at which the luminosity distance equals `distance_mpc`.
@@ -262,7 +261,7 @@ class UniverseFunctions:
         gives it. Accuracy: round trip within 1e-12 relative (`f64`). (In a closed model D_L
         need not be monotone; the root in the bracket found is returned.)
         """
-        return _apply(_F["redshift_at_luminosity_distance_mpc"], self, (distance_mpc, ), nan_on_error, "redshift_at_luminosity_distance_mpc")
+        return _F["redshift_at_luminosity_distance_mpc"].apply(self, (distance_mpc, ), nan_on_error)
 
     def hubble_distance_at_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Hubble distance at z, D_H(z) = c/H(z), Mpc.
@@ -272,7 +271,7 @@ class UniverseFunctions:
         Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-14 relative (`f64`) of mpmath,
         as E(z).
         """
-        return _apply(_F["hubble_distance_at_mpc"], self, (z, ), nan_on_error, "hubble_distance_at_mpc")
+        return _F["hubble_distance_at_mpc"].apply(self, (z, ), nan_on_error)
 
     def volume_averaged_distance_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Volume-averaged distance D_V(z) = [z D_M² D_H(z)]^⅓, Mpc (Eisenstein et al. 2005, ApJ
@@ -283,7 +282,7 @@ class UniverseFunctions:
         Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-12 relative (`f64`) of mpmath
         (that of D_M).
         """
-        return _apply(_F["volume_averaged_distance_mpc"], self, (z, ), nan_on_error, "volume_averaged_distance_mpc")
+        return _F["volume_averaged_distance_mpc"].apply(self, (z, ), nan_on_error)
 
     def transverse_comoving_distance_over_sound_horizon(self, z: Any, sound_horizon_drag_mpc: Any, *, nan_on_error: bool = False) -> Any:
         """D_M(z)/r_d: the transverse comoving distance over the drag-epoch sound horizon.
@@ -294,21 +293,21 @@ class UniverseFunctions:
         Errors: `NonFinite(i)`, `Negative(0)`, `NonPositive(1)`. Accuracy: within 1e-12 relative
         (`f64`) of mpmath.
         """
-        return _apply(_F["transverse_comoving_distance_over_sound_horizon"], self, (z, sound_horizon_drag_mpc, ), nan_on_error, "transverse_comoving_distance_over_sound_horizon")
+        return _F["transverse_comoving_distance_over_sound_horizon"].apply(self, (z, sound_horizon_drag_mpc, ), nan_on_error)
 
     def hubble_distance_over_sound_horizon(self, z: Any, sound_horizon_drag_mpc: Any, *, nan_on_error: bool = False) -> Any:
         """D_H(z)/r_d = c/(H(z) r_d). Arguments and errors as
         `transverse_comoving_distance_over_sound_horizon`.
         Accuracy: within 1e-14 relative (`f64`) of mpmath.
         """
-        return _apply(_F["hubble_distance_over_sound_horizon"], self, (z, sound_horizon_drag_mpc, ), nan_on_error, "hubble_distance_over_sound_horizon")
+        return _F["hubble_distance_over_sound_horizon"].apply(self, (z, sound_horizon_drag_mpc, ), nan_on_error)
 
     def volume_averaged_distance_over_sound_horizon(self, z: Any, sound_horizon_drag_mpc: Any, *, nan_on_error: bool = False) -> Any:
         """D_V(z)/r_d. Arguments and errors as
         `transverse_comoving_distance_over_sound_horizon`.
         Accuracy: within 1e-12 relative (`f64`) of mpmath.
         """
-        return _apply(_F["volume_averaged_distance_over_sound_horizon"], self, (z, sound_horizon_drag_mpc, ), nan_on_error, "volume_averaged_distance_over_sound_horizon")
+        return _F["volume_averaged_distance_over_sound_horizon"].apply(self, (z, sound_horizon_drag_mpc, ), nan_on_error)
 
 
 _publish(UniverseFunctions, 'relicore.cosmology', 'Universe')

@@ -9,7 +9,6 @@ from __future__ import annotations
 from typing import Any
 
 from relicore._elementwise import FUNCTIONS as _F
-from relicore._elementwise import apply as _apply
 from relicore._elementwise import publish as _publish
 
 __all__ = ['saha_ionized_fraction', 'last_scattering_redshift_fit', 'drag_redshift_fit', 'ThermalHistoryFunctions']
@@ -35,7 +34,7 @@ def saha_ionized_fraction(universe: Any, z: Any, *, nan_on_error: bool = False) 
     Reference: Saha 1920, Phil. Mag. 40, 472; for the cosmological form, e.g. Peebles 1993,
     Principles of Physical Cosmology, §6.
     """
-    return _apply(_F["saha_ionized_fraction"], universe, (z, ), nan_on_error)
+    return _F["saha_ionized_fraction"].apply(universe, (z, ), nan_on_error)
 
 
 def last_scattering_redshift_fit(omega_baryon_h2: Any, omega_matter_h2: Any, *, nan_on_error: bool = False) -> Any:
@@ -51,7 +50,7 @@ def last_scattering_redshift_fit(omega_baryon_h2: Any, omega_matter_h2: Any, *, 
     own, about 1% against full recombination calculations (as its authors state; from memory);
     the formula itself is evaluated to a few ulp (mpmath vectors).
     """
-    return _apply(_F["last_scattering_redshift_fit"], None, (omega_baryon_h2, omega_matter_h2, ), nan_on_error)
+    return _F["last_scattering_redshift_fit"].apply(None, (omega_baryon_h2, omega_matter_h2, ), nan_on_error)
 
 
 def drag_redshift_fit(omega_baryon_h2: Any, omega_matter_h2: Any, *, nan_on_error: bool = False) -> Any:
@@ -67,7 +66,7 @@ def drag_redshift_fit(omega_baryon_h2: Any, omega_matter_h2: Any, *, nan_on_erro
     own (its authors quote a few per cent or better over the usual parameter range; from
     memory); the formula itself is evaluated to a few ulp (mpmath vectors).
     """
-    return _apply(_F["drag_redshift_fit"], None, (omega_baryon_h2, omega_matter_h2, ), nan_on_error)
+    return _F["drag_redshift_fit"].apply(None, (omega_baryon_h2, omega_matter_h2, ), nan_on_error)
 
 
 class ThermalHistoryFunctions:
@@ -85,14 +84,14 @@ class ThermalHistoryFunctions:
         within 1e-5 relative from z = 1600 to 50 against scipy `solve_ivp` on the same
         equations; cubic Hermite interpolation in ln(1+z) between nodes.
         """
-        return _apply(_F["ionized_fraction"], self, (z, ), nan_on_error)
+        return _F["ionized_fraction"].apply(self, (z, ), nan_on_error)
 
     def matter_temperature_k(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Matter (gas) temperature T_m at redshift z, K (reionisation heating is not modelled).
 
         Errors and accuracy as `ionized_fraction`.
         """
-        return _apply(_F["matter_temperature_k"], self, (z, ), nan_on_error)
+        return _F["matter_temperature_k"].apply(self, (z, ), nan_on_error)
 
     def optical_depth(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Thomson optical depth from today to redshift z, τ = ∫₀^z n_e σ_T c dz'/((1+z')H),
@@ -101,7 +100,7 @@ class ThermalHistoryFunctions:
         Errors as `ionized_fraction`. Accuracy: within 1e-5 relative
         against scipy `solve_ivp` on the same equations.
         """
-        return _apply(_F["optical_depth"], self, (z, ), nan_on_error)
+        return _F["optical_depth"].apply(self, (z, ), nan_on_error)
 
     def visibility(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Visibility function per unit conformal distance, g = −dτ/dη e^{−τ} = n_e σ_T a e^{−τ},
@@ -110,7 +109,7 @@ class ThermalHistoryFunctions:
         Errors as `ionized_fraction`. Accuracy: within 1e-5 relative
         against scipy `solve_ivp` near the peak.
         """
-        return _apply(_F["visibility"], self, (z, ), nan_on_error)
+        return _F["visibility"].apply(self, (z, ), nan_on_error)
 
     def sound_horizon_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Comoving sound horizon r_s(z) = ∫_z^∞ c_s dz'/H(z'), c_s = c/√(3(1+R)),
@@ -120,7 +119,7 @@ class ThermalHistoryFunctions:
 
         Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-12 relative against mpmath.
         """
-        return _apply(_F["sound_horizon_mpc"], self, (z, ), nan_on_error)
+        return _F["sound_horizon_mpc"].apply(self, (z, ), nan_on_error)
 
     @property
     def last_scattering_redshift(self) -> float:

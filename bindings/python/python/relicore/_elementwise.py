@@ -14,21 +14,21 @@ from relicore import _native
 SCALAR_TYPES = (float, int, np.floating, np.integer)
 
 
-def contiguous(a: np.ndarray[Any, Any]) -> np.ndarray[Any, Any]:
-    """`a` itself when it is C-contiguous and aligned, else an aligned C-contiguous copy (the
-    native loops read plain slices; an array unpickled from an out-of-band buffer, as dask and
-    multiprocessing deliver them, may be misaligned)."""
-    return np.require(a, dtype=np.float64, requirements=("C", "A"))
+def contiguous(a: np.ndarray[Any, Any], dtype: Any = np.float64) -> np.ndarray[Any, Any]:
+    """`a` itself when it is C-contiguous, aligned and of `dtype`, else an aligned C-contiguous
+    copy (the native loops read plain slices; an array unpickled from an out-of-band buffer, as
+    dask and multiprocessing deliver them, may be misaligned)."""
+    return np.require(a, dtype=dtype, requirements=("C", "A"))
 
 
-def operand(a: np.ndarray[Any, Any], shape: tuple[int, ...]) -> np.ndarray[Any, Any]:
-    """A contiguous, aligned 1-D float64 view or copy of one input: one element when it
+def operand(a: np.ndarray[Any, Any], shape: tuple[int, ...], dtype: Any = np.float64) -> np.ndarray[Any, Any]:
+    """A contiguous, aligned 1-D view or copy of one input in `dtype`: one element when it
     broadcasts as a scalar, else prod(shape) elements in C order."""
     if a.size == 1:
-        return contiguous(a.reshape(1))
+        return contiguous(a.reshape(1), dtype)
     if a.shape != shape:
         a = np.broadcast_to(a, shape)
-    return contiguous(a).reshape(-1)
+    return contiguous(a, dtype).reshape(-1)
 
 
 # numpy dtype kinds that are real numbers: bool, signed and unsigned integers, floats
@@ -47,9 +47,10 @@ def _error(message: str, function: str, argument: str) -> Exception:
 
 
 def float_arrays(
-    function: str, names: tuple[str, ...] | list[str], args: tuple[Any, ...]
+    function: str, names: tuple[str, ...] | list[str], args: tuple[Any, ...], dtype: Any = np.float64
 ) -> tuple[list[np.ndarray[Any, Any]], tuple[int, ...]]:
-    """The element-wise arguments as float64 arrays and their broadcast shape.
+    """The element-wise arguments as arrays of `dtype` (float64, or float32 for a
+    single-precision call) and their broadcast shape.
 
     Raises RelicoreError naming the argument when an input is not made of real numbers
     (complex, datetime64, timedelta64, text or object arrays are refused, not converted) or when
@@ -59,7 +60,7 @@ def float_arrays(
         raw = np.asarray(a)
         if raw.dtype.kind not in _REAL_KINDS:
             raise _error(f"{function}: {name} has dtype {raw.dtype}: real numbers are required", function, name)
-        arrays.append(raw.astype(np.float64, copy=False))
+        arrays.append(raw.astype(dtype, copy=False))
     shape: tuple[int, ...] = ()
     for name, a in zip(names, arrays):
         try:
@@ -76,17 +77,43 @@ def float_arrays(
 #: every regular function of the core by name (relicore._native.Function)
 FUNCTIONS: dict[str, Any] = {f.name: f for f in _native.functions()}
 
+# Python numbers: weak in numpy's promotion (NEP 50), they take the precision of the arrays.
+_WEAK = (float, int)
+
+
+def precision(function: Any, args: tuple[Any, ...]) -> Any:
+    """The dtype a call computes and returns: float32 when the function has a single-precision
+    twin in the core (`function.single`) and numpy's promotion of the arguments gives float32
+    (every array and numpy scalar argument is float32, the others Python numbers), else float64
+    (float16, integer, bool, float64 and mixed arguments, and functions without a twin)."""
+    if not function.single:
+        return np.float64
+    seen = False
+    for a in args:
+        if type(a) in _WEAK or type(a) is bool:
+            continue
+        dtype = getattr(a, "dtype", None)
+        if dtype is None or dtype != np.float32:
+            return np.float64
+        seen = True
+    return np.float32 if seen else np.float64
+
 
 def apply(function: Any, receiver: Any, args: tuple[Any, ...], nan_on_error: bool, label: str | None = None) -> Any:
-    """Calls a regular function on `receiver` (None, a universe or a history): a float when every
-    argument is a scalar, else the ndarray of the broadcast shape. `label` names the function
-    in the dtype and shape errors raised here (its `label` by default)."""
-    if all(isinstance(a, SCALAR_TYPES) for a in args):
+    """Calls a regular function on `receiver` (None, a universe or a history), the Python path of
+    `function.apply` (which handles Python numbers and plain float64 and float32 arrays itself):
+    a Python float when every argument is a scalar (a numpy float32 scalar when the call is in
+    single precision), else the ndarray of the broadcast shape, float32 for a single-precision
+    call (see `precision`), else float64. `label` names the function in the dtype and shape
+    errors raised here (its `label` by default)."""
+    dtype = precision(function, args)
+    scalars = all(isinstance(a, SCALAR_TYPES) for a in args)
+    if scalars and dtype is np.float64:
         return function.call(receiver, args, nan_on_error)
-    arrays, shape = float_arrays(label or function.label, function.arguments, args)
-    out = np.empty(shape, dtype=np.float64)
-    function.map(receiver, [operand(a, shape) for a in arrays], out.reshape(-1), shape, nan_on_error)
-    return out
+    arrays, shape = float_arrays(label or function.label, function.arguments, args, dtype)
+    out = np.empty(shape, dtype=dtype)
+    function.map(receiver, [operand(a, shape, dtype) for a in arrays], out.reshape(-1), shape, nan_on_error)
+    return out[()] if scalars else out
 
 
 def publish(members: Any, module: str, owner: str | None = None) -> None:

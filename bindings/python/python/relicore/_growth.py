@@ -9,7 +9,6 @@ from __future__ import annotations
 from typing import Any
 
 from relicore._elementwise import FUNCTIONS as _F
-from relicore._elementwise import apply as _apply
 from relicore._elementwise import publish as _publish
 
 __all__ = ['eisenstein_hu_transfer_function', 'eisenstein_hu_no_wiggle_transfer_function', 'LinearGrowthFunctions', 'LinearPowerSpectrumFunctions']
@@ -36,7 +35,7 @@ def eisenstein_hu_transfer_function(wavenumber_per_mpc: Any, omega_matter_h2: An
     mpmath evaluation of the same formulae (`tests/data/growth.txt`), except near the zeros of
     T_b's oscillation where the absolute error stays within 1e-14.
     """
-    return _apply(_F["eisenstein_hu_transfer_function"], None, (wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, cmb_temperature_k, ), nan_on_error)
+    return _F["eisenstein_hu_transfer_function"].apply(None, (wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, cmb_temperature_k, ), nan_on_error)
 
 
 def eisenstein_hu_no_wiggle_transfer_function(wavenumber_per_mpc: Any, omega_matter_h2: Any, omega_baryon_h2: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
@@ -57,7 +56,7 @@ def eisenstein_hu_no_wiggle_transfer_function(wavenumber_per_mpc: Any, omega_mat
     `eisenstein_hu_transfer_function`; the evaluation is within 1e-13 relative (`f64`) of an
     mpmath evaluation of the same formulae (`tests/data/growth.txt`).
     """
-    return _apply(_F["eisenstein_hu_no_wiggle_transfer_function"], None, (wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, cmb_temperature_k, ), nan_on_error)
+    return _F["eisenstein_hu_no_wiggle_transfer_function"].apply(None, (wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, cmb_temperature_k, ), nan_on_error)
 
 
 class LinearGrowthFunctions:
@@ -78,14 +77,14 @@ class LinearGrowthFunctions:
         Accuracy: within 1e-12 relative (`f64`) of an mpmath quadrature (`tests/data/growth.txt`).
         Cost: tens of nanoseconds on the table (a ≥ 2⁻²⁰), a quadrature below.
         """
-        return _apply(_F["leapfrog_drift_factor_gyr"], self, (start_scale_factor, end_scale_factor, ), nan_on_error)
+        return _F["leapfrog_drift_factor_gyr"].apply(self, (start_scale_factor, end_scale_factor, ), nan_on_error)
 
     def leapfrog_kick_factor_gyr(self, start_scale_factor: Any, end_scale_factor: Any, *, nan_on_error: bool = False) -> Any:
         """Kick factor of a comoving leapfrog step, ∫_{a1}^{a2} da/(a²H), Gyr (Quinn, Katz, Stadel
         & Lake 1997): the time a kick multiplies the comoving force by. Arguments, errors,
         accuracy and cost as `leapfrog_drift_factor_gyr`.
         """
-        return _apply(_F["leapfrog_kick_factor_gyr"], self, (start_scale_factor, end_scale_factor, ), nan_on_error)
+        return _F["leapfrog_kick_factor_gyr"].apply(self, (start_scale_factor, end_scale_factor, ), nan_on_error)
 
     def growth_factor(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Linear growth factor D(z) = D_u(a)/D_u(1), normalised to 1 today (module doc of
@@ -99,7 +98,7 @@ class LinearGrowthFunctions:
         (1977, MNRAS 179, 351) integral D ∝ E ∫ da/(aE)³ for w = −1 without radiation;
         D = a in the Einstein-de Sitter model (`tests/data/growth.txt`).
         """
-        return _apply(_F["growth_factor"], self, (z, ), nan_on_error)
+        return _F["growth_factor"].apply(self, (z, ), nan_on_error)
 
     def growth_rate(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Linear growth rate f(z) = d ln D/d ln a (module doc of `growth`).
@@ -111,7 +110,7 @@ class LinearGrowthFunctions:
         Accuracy: within 1e-10 relative (`f64`) of an independent scipy `solve_ivp` integration
         and of the Heath (1977) closed form (`tests/data/growth.txt`).
         """
-        return _apply(_F["growth_rate"], self, (z, ), nan_on_error)
+        return _F["growth_rate"].apply(self, (z, ), nan_on_error)
 
     def unnormalized_growth_factor(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """Unnormalised growth factor D_u(a), a = 1/(1+z): the growing mode of the growth equation
@@ -125,7 +124,7 @@ class LinearGrowthFunctions:
         control when the integration to z fails (not seen). Accuracy: within 1e-10 relative (`f64`)
         of an independent scipy `solve_ivp` integration (`tests/data/growth.txt`).
         """
-        return _apply(_F["unnormalized_growth_factor"], self, (z, ), nan_on_error)
+        return _F["unnormalized_growth_factor"].apply(self, (z, ), nan_on_error)
 
 
 class LinearPowerSpectrumFunctions:
@@ -143,7 +142,7 @@ class LinearPowerSpectrumFunctions:
 
         Errors: `NonFinite(0)`, `NonPositive(0)`.
         """
-        return _apply(_F["transfer_function"], self, (wavenumber_per_mpc, ), nan_on_error)
+        return _F["transfer_function"].apply(self, (wavenumber_per_mpc, ), nan_on_error)
 
     def linear_power_spectrum_mpc3(self, wavenumber_per_mpc: Any, z: Any, *, nan_on_error: bool = False) -> Any:
         """The linear matter power spectrum P(k, z) = (2π²/k³) A_s (k/k_p)^(n_s − 1 + ½ α_s ln(k/k_p))
@@ -156,7 +155,7 @@ class LinearPowerSpectrumFunctions:
         representable (k beyond about 1e70 Mpc⁻¹). Accuracy: that of T(k) (1e-13 of the
         formula), doubled, plus that of D_u (1e-10), doubled.
         """
-        return _apply(_F["linear_power_spectrum_mpc3"], self, (wavenumber_per_mpc, z, ), nan_on_error)
+        return _F["linear_power_spectrum_mpc3"].apply(self, (wavenumber_per_mpc, z, ), nan_on_error)
 
     def density_rms_in_sphere(self, radius_mpc: Any, z: Any, *, nan_on_error: bool = False) -> Any:
         """σ(R, z): the r.m.s. linear density contrast in a top-hat sphere of radius R,
@@ -172,7 +171,7 @@ class LinearPowerSpectrumFunctions:
         (`tests/data/growth.txt`). Cost: about a thousand evaluations of P (a fraction of a
         millisecond); `sigma8` is stored.
         """
-        return _apply(_F["density_rms_in_sphere"], self, (radius_mpc, z, ), nan_on_error)
+        return _F["density_rms_in_sphere"].apply(self, (radius_mpc, z, ), nan_on_error)
 
     def growth_rate_times_sigma8(self, z: Any, *, nan_on_error: bool = False) -> Any:
         """fσ8(z) = f(z) σ(8 h⁻¹ Mpc, z) = f(z) D(z) σ8.
@@ -181,7 +180,7 @@ class LinearPowerSpectrumFunctions:
 
         Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: that of f and D (1e-10) and σ8 (1e-9).
         """
-        return _apply(_F["growth_rate_times_sigma8"], self, (z, ), nan_on_error)
+        return _F["growth_rate_times_sigma8"].apply(self, (z, ), nan_on_error)
 
     @property
     def sigma8(self) -> float:

@@ -18,9 +18,10 @@ off; ``n_eff`` is shared equally by three neutrino species, of masses ``neutrino
 Inputs and results
 ------------------
 Redshifts (and the targets of the inversions) are scalars, sequences or numpy arrays of any
-shape, converted to float64; ``angular_diameter_distance_between_mpc(z1, z2)`` broadcasts its two
-arguments by numpy's rules. All-scalar calls return a Python ``float``; anything else a new
-float64 ``ndarray`` of the (broadcast) shape.
+shape, converted to float64 (float32 input too: the background has no single-precision form in
+Python, so it is computed and returned in float64); ``angular_diameter_distance_between_mpc(z1,
+z2)`` broadcasts its two arguments by numpy's rules. All-scalar calls return a Python ``float``;
+anything else a new float64 ``ndarray`` of the (broadcast) shape.
 
 Errors
 ------
@@ -73,7 +74,7 @@ class Universe(UniverseFunctions, _native.UniverseBase):
     distance table (about a millisecond to build; then each method call costs nanoseconds per
     element).
 
-    Parameters (the defaults are the core's, ``UniverseParameters::new``)
+    Parameters (the defaults, shown in the signature, are the same in every language)
     ----------
     h0_km_s_mpc : Hubble constant H0, km s^-1 Mpc^-1, > 0.
     omega_matter : density parameter of everything non-relativistic today (cold dark matter,
