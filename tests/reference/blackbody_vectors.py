@@ -1144,6 +1144,13 @@ def build_scalar(summary):
     for nu, T in ((160.2e9, 2.72548), (30e9, 20.0)):
         L = f64(hp(L_fr, nu, T))
         out.value(name, [nu, L], hp(rayleigh_jeans_temperature, nu, L), "rayleigh_jeans")
+    # the edges: subnormal radiances, and frequencies whose square is subnormal, where the result
+    # is a normal number (c^2 L/2k must not be formed from the subnormal L: 3e-12 at L = 1.5e-316)
+    for nu, L in ((3e15, 1.5e-316), (3.3e15, 1.5e-316), (1e9, 1e-310), (1e6, 5e-324), (2.5e7, 1.23456e-320),
+                  (1e-150, 1e-300), (3e-160, 2e-320), (1.7e-154, 3.3e-318)):
+        want = hp(rayleigh_jeans_temperature, nu, L)
+        assert DBL_MIN <= want <= 1.7e308, (nu, L, want)
+        out.value(name, [nu, L], want, "rayleigh_jeans")
     out.errors(name, [30e9, 1e-18], [(0, 0.0, NP), (1, -1e-18, NP), (1, NAN, NF), (0, INF, NF)])
     out.blank()
 
