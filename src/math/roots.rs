@@ -33,12 +33,13 @@ where
 }
 
 /// Finds the root of a monotone f on (0, ∞), starting from a positive `guess`: the bracket
-/// grows from the guess by factors of 2 (at most 400 times each way) until f changes sign, then
+/// grows from the guess by factors of 2 until f changes sign (over the whole range of the type
+/// if need be: at most about 2,100 doublings or 1,100 halvings in `f64`), then
 /// [`bracketed_newton`] polishes the root to about 2 ulp. `increasing` says whether f increases
 /// with x; `f` returns (f(x), f'(x)).
 ///
 /// Errors: `NoConvergence` when f(guess) is NaN or the polish fails; `OutOfDomain(domain_arg)`
-/// when no sign change lies within a factor 2^400 of the guess (or x reaches 0 or ∞).
+/// when no sign change lies between 0 and ∞ (x reaches 0 or ∞ first).
 pub fn solve_monotone_positive<T: Real, F>(
     mut f: F,
     guess: T,
@@ -71,13 +72,16 @@ where
         return Ok(guess);
     }
     let (mut lo, mut hi) = (guess, guess);
-    let mut n = 0;
+    // every doubling from the smallest subnormal to past the largest float, and no more (a
+    // guess of 0 or ∞, outside the contract, would otherwise never leave its value)
+    let cap = 2 * (T::MAX_EXPONENT - T::MIN_NORMAL_EXPONENT) as u32 + 2 * T::MANTISSA_DIGITS;
+    let mut n = 0u32;
     if root_above(f0) {
         while root_above(f(hi).0) {
             lo = hi;
             hi = hi * T::c(2.0);
             n += 1;
-            if n > 400 || !hi.is_finite() {
+            if n > cap || !hi.is_finite() {
                 return Err(Error::OutOfDomain(domain_arg));
             }
         }
@@ -86,7 +90,7 @@ where
             hi = lo;
             lo = lo * T::c(0.5);
             n += 1;
-            if n > 400 || lo == T::zero() {
+            if n > cap || lo == T::zero() {
                 return Err(Error::OutOfDomain(domain_arg));
             }
         }
