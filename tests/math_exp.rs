@@ -3,55 +3,21 @@
 //! double-length arguments at 50 digits, correctly rounded to f64 or f32; tolerance from the
 //! file), plus special values and a dense f32 sweep against the f64 kernel.
 
+mod kernel_vectors;
+
+use kernel_vectors::ulp32;
 use relicore::math::exp::{exp, exp_dd, exp_m1, exp_m1_dd};
-use std::collections::BTreeMap;
-use std::path::PathBuf;
-
-fn data(name: &str) -> String {
-    let p = PathBuf::from(env!("CARGO_MANIFEST_DIR"))
-        .join("tests/data")
-        .join(name);
-    std::fs::read_to_string(&p).unwrap_or_else(|e| panic!("cannot read {}: {e}", p.display()))
-}
-
-/// Spacing of doubles at |w| (at least the spacing at DBL_MIN), as tests/data/FORMAT.md defines.
-fn ulp64(w: f64) -> f64 {
-    let a = w.abs().max(f64::MIN_POSITIVE);
-    f64::from_bits(a.to_bits() & 0x7ff0_0000_0000_0000) * f64::EPSILON
-}
-
-/// Spacing of floats at |w| (at least the spacing at FLT_MIN).
-fn ulp32(w: f64) -> f64 {
-    let a = (w.abs() as f32).max(f32::MIN_POSITIVE);
-    (f32::from_bits(a.to_bits() & 0x7f80_0000) * f32::EPSILON) as f64
-}
-
-fn parse(s: &str) -> f64 {
-    s.parse().unwrap_or_else(|_| panic!("bad number {s}"))
-}
 
 #[test]
 fn exp_kernel_reference_vectors() {
-    let text = data("math_exp.txt");
-    let mut worst: BTreeMap<String, (f64, usize, usize)> = BTreeMap::new();
-    let mut failures = Vec::new();
-    let mut count = 0;
-    for line in text.lines() {
-        let line = line.trim();
-        if line.is_empty() || line.starts_with('#') {
-            continue;
-        }
-        let f: Vec<&str> = line.split(' ').collect();
-        let name = f[0];
-        assert_eq!(f[1], "2", "{line}");
-        let (xh, xl, want) = (parse(f[2]), parse(f[3]), parse(f[4]));
-        let (kind, tol) = (f[5], parse(f[6]));
-        let got = match name {
+    kernel_vectors::check("math_exp.txt", 2, 6000, "exp kernel", |name, a| {
+        let (xh, xl) = (a[0], a[1]);
+        match name {
             "exp_dd" => exp_dd(xh, xl),
             "exp_m1_dd" => exp_m1_dd(xh, xl),
             "exp_dd_f32" | "exp_m1_dd_f32" => {
                 let (h, l) = (xh as f32, xl as f32);
-                assert_eq!((h as f64, l as f64), (xh, xl), "{line}: arguments not f32");
+                assert_eq!((h as f64, l as f64), (xh, xl), "{name}: arguments not f32");
                 (if name == "exp_dd_f32" {
                     exp_dd(h, l)
                 } else {
@@ -59,44 +25,8 @@ fn exp_kernel_reference_vectors() {
                 }) as f64
             }
             _ => panic!("unknown function {name}"),
-        };
-        let ulp = match kind {
-            "ulp" => ulp64(want),
-            "ulp32" => ulp32(want),
-            _ => panic!("unexpected tolerance kind {kind}"),
-        };
-        let err = if got == want {
-            0.0
-        } else {
-            (got - want).abs() / ulp
-        };
-        let e = worst.entry(name.to_string()).or_insert((0.0, 0, 0));
-        e.0 = e.0.max(err);
-        e.1 += 1;
-        e.2 += usize::from(got == want);
-        count += 1;
-        if err.is_nan() || err > tol {
-            failures.push(format!(
-                "{name}({xh:.17e}, {xl:.17e}): want {want:.17e} got {got:.17e} ({err} ulp > {tol})"
-            ));
         }
-    }
-    println!(
-        "exp kernel against mpmath ({count} vectors): worst error in ulps, share correctly rounded"
-    );
-    for (name, (e, n, exact)) in &worst {
-        println!(
-            "  {name:<16} {e:4.1} ulp  {:6.2}% of {n} correctly rounded",
-            100.0 * *exact as f64 / *n as f64
-        );
-    }
-    assert!(count > 6000, "only {count} vectors");
-    assert!(
-        failures.is_empty(),
-        "{} failures:\n{}",
-        failures.len(),
-        failures.join("\n")
-    );
+    });
 }
 
 #[test]
