@@ -458,7 +458,7 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
         let mut stepper = StiffStepper::new(rtol, [T::c(1e-16), T::c(1e-14)], 2_000_000);
         let mut i = N - 1;
         let mut fi = self.state_rates(top_u, &y)?;
-        self.record(i, top_u, &y, at(&fi, 1))?;
+        self.record(i, top_u, &y, at(&fi, 1), None)?;
         let span_below = T::c(SPAN_BELOW_REDSHIFT).ln_1p();
         while i > 0 {
             let ui = self.node_u(i);
@@ -476,8 +476,13 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
             };
             let j = i - k;
             let uj = self.node_u(j);
+            // the last evaluation of the equations (u, state, rates, balance): the stepper's
+            // last one is usually at the end of the step, whose rates and electron balance the
+            // node needs as well
+            let mut last_eval: Option<(T, [T; 2], [T; 2], Balance<T>)> = None;
             let yj = {
                 let this: &Self = self;
+                let last_eval = &mut last_eval;
                 // the stepper evaluates several states at one u (the Jacobian columns, the
                 // second stage and the end of a step) and several u at one x_p: keep the
                 // last two backgrounds and the last balance
@@ -503,19 +508,24 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
                     };
                     last_balance = Some((uu, xp, bal));
                     let (a, b) = this.rates(&bg, &bal, xp, th);
+                    *last_eval = Some((uu, *st, [a, b], bal));
                     Ok([a, b])
                 };
                 stepper.advance(&mut f, ui, y, uj)?
             };
-            let fj = self.state_rates(uj, &yj)?;
+            // the same function at the same point gives the same bits: reuse it when it is there
+            let (fj, xe_j) = match last_eval {
+                Some((lu, ly, lf, lb)) if lu == uj && ly == yj => (lf, Some(lb.x_e)),
+                _ => (self.state_rates(uj, &yj)?, None),
+            };
             let h = uj - ui;
             for m in j + 1..i {
                 let t = (self.node_u(m) - ui) / h;
                 let (v, _, _) = hermite(t, h, at(&y, 0), at(&fi, 0), at(&yj, 0), at(&fj, 0));
                 let (th, dth, _) = hermite(t, h, at(&y, 1), at(&fi, 1), at(&yj, 1), at(&fj, 1));
-                self.record(m, self.node_u(m), &[v, th], dth)?;
+                self.record(m, self.node_u(m), &[v, th], dth, None)?;
             }
-            self.record(j, uj, &yj, at(&fj, 1))?;
+            self.record(j, uj, &yj, at(&fj, 1), xe_j)?;
             y = yj;
             fi = fj;
             i = j;
@@ -546,16 +556,22 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
         Ok([a, c])
     }
 
-    /// Writes node i from (x_p, θ) and dθ/du.
-    fn record(&mut self, i: usize, u: T, y: &[T; 2], dtheta: T) -> Result<()> {
+    /// Writes node i from (x_p, θ) and dθ/du, with x_e when the caller has it (from the same
+    /// electron balance at the same u and x_p).
+    fn record(&mut self, i: usize, u: T, y: &[T; 2], dtheta: T, x_e: Option<T>) -> Result<()> {
         let s = self.species;
         let [xp, theta] = *y;
         if !(xp > T::zero()) || !(theta > T::zero()) {
             return Err(Error::NoConvergence);
         }
         let zp1 = exp(u);
-        let inv_t = T::one() / (s.t0 * zp1);
-        let b = electron_balance(s.f_he, Hydrogen::Fixed(xp), s.ln_saha_factors_at(u, inv_t))?;
+        let x_e = match x_e {
+            Some(x) => x,
+            None => {
+                let inv_t = T::one() / (s.t0 * zp1);
+                electron_balance(s.f_he, Hydrogen::Fixed(xp), s.ln_saha_factors_at(u, inv_t))?.x_e
+            }
+        };
         let hub = at(&self.hubble, i);
         if let (Some(a), Some(c), Some(d), Some(e)) = (
             self.ln_xe.get_mut(i),
@@ -563,10 +579,10 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
             self.dln_tm.get_mut(i),
             self.dtau.get_mut(i),
         ) {
-            *a = b.x_e.ln();
+            *a = x_e.ln();
             *c = theta.ln() + s.ln_t0 + u;
             *d = dtheta / theta + T::one();
-            *e = s.thomson0 * b.x_e * zp1 * zp1 * zp1 / hub;
+            *e = s.thomson0 * x_e * zp1 * zp1 * zp1 / hub;
         }
         Ok(())
     }
