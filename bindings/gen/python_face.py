@@ -64,20 +64,22 @@ def _slice_call(fn: Function, call: str) -> str:
     return f"match *x {{ [{names}] => {call}, _ => Err(Error::LengthMismatch(0)) }}"
 
 
-def _row_function(rt) -> str:
-    """`<result>_row`: a result value as one row of f64 (the fields in order; a count as a float)."""
+def _row_function(rt, real: str = "f64") -> str:
+    """`<result>_row` (`_row_f32`): a result value as one row of f64 (f32) (the fields in order; a
+    count as a float)."""
     parts = []
     for f in rt.fields:
         if f.kind == "count":
-            parts.append(f"[f64::from(v.{f.name})]")
+            parts.append(f"[f64::from(v.{f.name})]" if real == "f64" else f"[v.{f.name} as f32]")
         elif f.length > 1:
             parts.append(f"v.{f.name}")
         else:
             parts.append(f"[v.{f.name}]")
     chain = parts[0] + ".into_iter()" + "".join(f".chain({p})" for p in parts[1:])
+    suffix = "" if real == "f64" else "_f32"
     return (
-        f"/// A `{rt.core_type}` as one row of {rt.width} f64 (its fields in order; `inputs` as a float).\n"
-        f"fn {rt.name}_row(v: {rt.core_path}<f64>, out: &mut [f64]) {{\n"
+        f"/// A `{rt.core_type}` as one row of {rt.width} {real} (its fields in order; `inputs` as a float).\n"
+        f"fn {rt.name}_row{suffix}(v: {rt.core_path}<{real}>, out: &mut [{real}]) {{\n"
         f"    for (o, x) in out.iter_mut().zip({chain}) {{\n        *o = x;\n    }}\n}}"
     )
 
@@ -161,8 +163,8 @@ def _rust_array_f32(fn: Function) -> str:
 
 def has_single(fn: Function) -> bool:
     """Whether the Python face computes float32 input with the core's single-precision twin: a
-    function with `f32 = true` that returns a number and is called on nothing."""
-    return fn.f32 and not fn.result_type and fn.receiver == "none"
+    function with `f32 = true` called on nothing."""
+    return fn.f32 and fn.receiver == "none"
 
 
 def _rust_single(fn: Function) -> str:
@@ -170,8 +172,11 @@ def _rust_single(fn: Function) -> str:
     if not has_single(fn):
         return "None"
     call = f"{CORE_PATH[fn.topic]}::{fn.name}({', '.join(fn.arg_names)})"
+    if fn.result_type:
+        call += f".map(|v| {fn.result_type.name}_row_f32(v, out))"
+        return f"Some(Single {{ body: SingleBody::Row(|x, out| {_slice_call(fn, call)}), array: None }})"
     array = f"Some({fn.name}_array_f32)" if fn.array_f32 and fn.array and fn.array.simd else "None"
-    return f"Some(Single {{ body: |x| {_slice_call(fn, call)}, array: {array} }})"
+    return f"Some(Single {{ body: SingleBody::Number(|x| {_slice_call(fn, call)}), array: {array} }})"
 
 
 def _rust_spec(fn: Function) -> str:
@@ -204,7 +209,7 @@ def rust(fns: list[Function]) -> str:
         "use relicore::{ArrayResult, ElementError, Error};",
         "use relicore_dispatch::widest;",
         "",
-        "use crate::functions::{Body, G, H, Lift, S, Single, Spec, U};",
+        "use crate::functions::{Body, G, H, Lift, S, Single, SingleBody, Spec, U};",
     ]
     for receiver, static, core in (("none", "PLAIN", "()"), ("universe", "UNIVERSE", "U"), ("history", "HISTORY", "H"),
                                    ("growth", "GROWTH", "G"), ("power_spectrum", "SPECTRUM", "S")):
@@ -227,6 +232,8 @@ def rust(fns: list[Function]) -> str:
                     "the others slices of the chunk's length or of one value).", _rust_frame(f)]
     for rt in dict.fromkeys(f.result_type for f in fns if f.result_type):
         out += ["", _row_function(rt)]
+    for rt in dict.fromkeys(f.result_type for f in fns if f.result_type and has_single(f)):
+        out += ["", _row_function(rt, "f32")]
     return "\n".join(out) + "\n"
 
 

@@ -9,6 +9,8 @@ Checked against:
   RELICORE_REQUIRE_CROSS=1, as `make test` sets it, and a skip otherwise);
 * the `_f32` reference vectors themselves (mpmath values rounded to f32, their `ulp32`
   tolerances, tests/data/FORMAT.md), through float32 arrays, which do not need the C program;
+* the `_f32` lines of tests/data/thermometry.txt (the C thermometry dump prints only the double
+  lines), within their tolerances, for the numbers and the `_with_uncertainty` results;
 * numpy's promotion rules (NEP 50) for which calls are float32.
 """
 
@@ -25,6 +27,7 @@ import relicore
 from relicore import blackbody as bb
 from relicore._elementwise import FUNCTIONS
 from refdata import ROOT, SCALAR_FILE, read_scalar_file, report, within
+from thermometry_refdata import field
 from test_cross_language import PROGRAMS, program
 
 SINGLE = sorted(name for name, f in FUNCTIONS.items() if f.single)
@@ -37,9 +40,9 @@ def test_the_twins_are_the_table_entries_with_f32():
     want = sorted(
         f["name"]
         for f in table["function"]
-        if f.get("f32") and not f.get("returns") and f.get("receiver", "none") == "none"
+        if f.get("f32") and f.get("receiver", "none") == "none"
     )
-    assert SINGLE == want and len(SINGLE) >= 12
+    assert SINGLE == want and len(SINGLE) >= 14
 
 
 def f32_vectors():
@@ -168,3 +171,46 @@ def test_float32_errors_name_the_argument_and_index():
     assert (err.function, err.argument, err.index) == ("spectral_radiance_wavelength", "temperature_k", (1,))
     got = bb.spectral_radiance_wavelength(np.float32(1e-5), t, nan_on_error=True)
     assert got.dtype == np.float32 and np.isnan(got[1]) and np.isfinite(got[[0, 2]]).all()
+
+
+def test_thermometry_float32_vectors_within_their_tolerance():
+    """The `_f32` lines of tests/data/thermometry.txt (numbers and the fields of the
+    `_with_uncertainty` results) through float32 arrays of one element: float32 results from
+    the single-precision twins, within the lines' tolerances (mpmath rounded to f32)."""
+    from thermometry_refdata import read_scalar_file as thermometry_lines
+
+    checked = 0
+    for v in thermometry_lines():
+        base = v.function[: -len("_f32")] if v.is_f32 else None
+        if base not in SINGLE or v.is_status or v.table is not None:
+            continue
+        result = getattr(bb, base)(*[np.array([a], dtype=np.float32) for a in v.args])
+        if v.field is None:
+            assert result.dtype == np.float32, v.where()
+            got = float(result[0])
+        else:
+            assert result.temperature_k.dtype == np.float32, v.where()
+            row = result._replace(
+                **{k: (x[0] if k != "inputs" else int(x[0])) for k, x in result._asdict().items()}
+            )
+            got = field(row, v.field)
+        assert within(v, got), report(v, got)
+        checked += 1
+    assert checked > 150
+
+
+def test_float32_result_values_in_every_form():
+    signal = bb.measured_spectral_radiance_wavelength(10e-6, 350.0, 0.9, 300.0, 0.95, 290.0)
+    args = (10e-6, signal, 0.9, 300.0, 0.95, 290.0, 0.01 * signal, 0.01, 1.0, 0.01, 1.0)
+    fn = bb.object_temperature_wavelength_with_uncertainty
+    arrays = fn(*[np.array([a, a], dtype=np.float32) for a in args])
+    assert arrays.temperature_k.dtype == np.float32 and arrays.sensitivity_coefficients.shape == (2, 5)
+    scalars = fn(*[np.float32(a) for a in args])
+    assert type(scalars.temperature_k) is np.float32 and scalars.temperature_k == arrays.temperature_k[0]
+    assert scalars.sensitivity_coefficients.tobytes() == arrays.sensitivity_coefficients[0].tobytes()
+    assert int(scalars.inputs) == int(arrays.inputs[0])
+    assert abs(float(scalars.temperature_k) - 350.0) < 1e-3 * 350.0
+    # float64 input and mixed input stay float64
+    assert type(fn(*args).temperature_k) is float
+    mixed = fn(np.array([10e-6], dtype=np.float32), *[np.array([a]) for a in args[1:]])
+    assert mixed.temperature_k.dtype == np.float64

@@ -65,8 +65,15 @@ pub(crate) type SingleArrayFn = fn(&[f32], &[f32], &mut [f32]) -> ArrayResult;
 /// only, called on nothing): its call on a slice of the function's arity and, with `array_f32`,
 /// its SIMD array form (the values of the first argument, the single values of the others, out).
 pub(crate) struct Single {
-    pub(crate) body: fn(&[f32]) -> Result<f32>,
+    pub(crate) body: SingleBody,
     pub(crate) array: Option<SingleArrayFn>,
+}
+
+/// How a single-precision twin is called: on a slice of the function's arity, returning a
+/// number or writing the row of `Spec::width` floats of a result value.
+pub(crate) enum SingleBody {
+    Number(fn(&[f32]) -> Result<f32>),
+    Row(fn(&[f32], &mut [f32]) -> Result<()>),
 }
 
 /// One regular function, as `generated.rs` declares it.
@@ -330,9 +337,10 @@ fn map_single<P: Receiver>(
     shape: &[usize],
     nan_on_error: bool,
 ) -> PyResult<()> {
-    let n = out.len();
+    let width = spec.width.max(1);
+    let n = out.len() / width;
     check_shape(shape, n, spec.label)?;
-    if x.len() != spec.args.len() {
+    if n * width != out.len() || x.len() != spec.args.len() {
         return Err(arity_error(spec, x.len()));
     }
     let keep = |e: Error| is_element_error(spec, e);
@@ -344,14 +352,19 @@ fn map_single<P: Receiver>(
                 run_array(first, out, nan_on_error, |xs, os| f(xs, &values, os))
             })
         }
-        _ => loop_over(py, calls, || {
-            run_rows(x, out, 1, nan_on_error, keep, |v, o| {
-                for slot in o.iter_mut() {
-                    *slot = (single.body)(v)?;
-                }
-                Ok(())
-            })
-        }),
+        _ => match single.body {
+            SingleBody::Number(f) => loop_over(py, calls, || {
+                run_rows(x, out, 1, nan_on_error, keep, |v, o| {
+                    for slot in o.iter_mut() {
+                        *slot = f(v)?;
+                    }
+                    Ok(())
+                })
+            }),
+            SingleBody::Row(f) => {
+                loop_over(py, calls, || run_rows(x, out, width, nan_on_error, keep, f))
+            }
+        },
     };
     raise_first(py, spec, receiver, x, shape, failed)
 }
@@ -420,7 +433,7 @@ fn map32<P: Receiver>(
     let out = out
         .as_slice_mut()
         .map_err(|e| PyValueError::new_err(format!("{}: out: {e}", spec.label)))?;
-    let n = out.len();
+    let n = out.len() / spec.width.max(1);
     let x = elements(inputs, n, spec.label)?;
     map_single(py, spec, single, receiver, &x, out, shape, nan_on_error)
 }

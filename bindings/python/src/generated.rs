@@ -8,7 +8,7 @@
 use relicore::{ArrayResult, ElementError, Error};
 use relicore_dispatch::widest;
 
-use crate::functions::{Body, G, H, Lift, S, Single, Spec, U};
+use crate::functions::{Body, G, H, Lift, S, Single, SingleBody, Spec, U};
 
 /// The regular functions called on nothing.
 pub(crate) static PLAIN: &[Spec<()>] = &[
@@ -22,7 +22,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: Some(spectral_radiance_wavelength_array),
         frame: None,
         width: 1,
-        single: Some(Single { body: |x| match *x { [wavelength_m, temperature_k] => relicore::blackbody::spectral_radiance_wavelength(wavelength_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: Some(spectral_radiance_wavelength_array_f32) }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, temperature_k] => relicore::blackbody::spectral_radiance_wavelength(wavelength_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: Some(spectral_radiance_wavelength_array_f32) }),
     },
     Spec {
         name: "spectral_radiance_frequency",
@@ -34,7 +34,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: Some(spectral_radiance_frequency_array),
         frame: None,
         width: 1,
-        single: Some(Single { body: |x| match *x { [frequency_hz, temperature_k] => relicore::blackbody::spectral_radiance_frequency(frequency_hz, temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: Some(spectral_radiance_frequency_array_f32) }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, temperature_k] => relicore::blackbody::spectral_radiance_frequency(frequency_hz, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: Some(spectral_radiance_frequency_array_f32) }),
     },
     Spec {
         name: "spectral_radiance_wavenumber",
@@ -46,7 +46,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: Some(spectral_radiance_wavenumber_array),
         frame: None,
         width: 1,
-        single: Some(Single { body: |x| match *x { [wavenumber_per_m, temperature_k] => relicore::blackbody::spectral_radiance_wavenumber(wavenumber_per_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: Some(spectral_radiance_wavenumber_array_f32) }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavenumber_per_m, temperature_k] => relicore::blackbody::spectral_radiance_wavenumber(wavenumber_per_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: Some(spectral_radiance_wavenumber_array_f32) }),
     },
     Spec {
         name: "photon_radiance_wavelength",
@@ -142,7 +142,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: |x| match *x { [temperature_k] => relicore::blackbody::photon_number_density(temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [temperature_k] => relicore::blackbody::photon_number_density(temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
     },
     Spec {
         name: "radiation_energy_density",
@@ -154,7 +154,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: |x| match *x { [temperature_k] => relicore::blackbody::radiation_energy_density(temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [temperature_k] => relicore::blackbody::radiation_energy_density(temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
     },
     Spec {
         name: "peak_wavelength",
@@ -262,7 +262,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: |x| match *x { [lower_m, upper_m, temperature_k] => relicore::blackbody::band_radiance_wavelength(lower_m, upper_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [lower_m, upper_m, temperature_k] => relicore::blackbody::band_radiance_wavelength(lower_m, upper_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
     },
     Spec {
         name: "band_photon_radiance_wavelength",
@@ -310,7 +310,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: |x| match *x { [wavelength_m, spectral_radiance] => relicore::blackbody::brightness_temperature_wavelength(wavelength_m, spectral_radiance), _ => Err(Error::LengthMismatch(0)) }, array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, spectral_radiance] => relicore::blackbody::brightness_temperature_wavelength(wavelength_m, spectral_radiance), _ => Err(Error::LengthMismatch(0)) }), array: None }),
     },
     Spec {
         name: "brightness_temperature_frequency",
@@ -322,7 +322,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: |x| match *x { [frequency_hz, spectral_radiance] => relicore::blackbody::brightness_temperature_frequency(frequency_hz, spectral_radiance), _ => Err(Error::LengthMismatch(0)) }, array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, spectral_radiance] => relicore::blackbody::brightness_temperature_frequency(frequency_hz, spectral_radiance), _ => Err(Error::LengthMismatch(0)) }), array: None }),
     },
     Spec {
         name: "rayleigh_jeans_temperature",
@@ -418,7 +418,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: |x| match *x { [wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
     },
     Spec {
         name: "measured_spectral_radiance_frequency",
@@ -430,7 +430,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: |x| match *x { [frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
     },
     Spec {
         name: "measured_band_radiance_wavelength",
@@ -454,7 +454,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: Some((1, object_temperature_wavelength_frame)),
         width: 1,
-        single: Some(Single { body: |x| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_wavelength(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_wavelength(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
     },
     Spec {
         name: "object_temperature_frequency",
@@ -466,7 +466,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: Some((1, object_temperature_frequency_frame)),
         width: 1,
-        single: Some(Single { body: |x| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_frequency(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }, array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_frequency(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
     },
     Spec {
         name: "object_temperature_band",
@@ -526,7 +526,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 8,
-        single: None,
+        single: Some(Single { body: SingleBody::Row(|x, out| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_wavelength_with_uncertainty(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row_f32(v, out)), _ => Err(Error::LengthMismatch(0)) }), array: None }),
     },
     Spec {
         name: "object_temperature_frequency_with_uncertainty",
@@ -538,7 +538,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 8,
-        single: None,
+        single: Some(Single { body: SingleBody::Row(|x, out| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_frequency_with_uncertainty(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row_f32(v, out)), _ => Err(Error::LengthMismatch(0)) }), array: None }),
     },
     Spec {
         name: "object_temperature_band_with_uncertainty",
@@ -1499,6 +1499,13 @@ fn object_temperature_band_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
 /// A `TemperatureUncertainty` as one row of 8 f64 (its fields in order; `inputs` as a float).
 fn temperature_uncertainty_row(v: relicore::blackbody::TemperatureUncertainty<f64>, out: &mut [f64]) {
     for (o, x) in out.iter_mut().zip([v.temperature_k].into_iter().chain([v.combined_standard_uncertainty_k]).chain(v.sensitivity_coefficients).chain([f64::from(v.inputs)])) {
+        *o = x;
+    }
+}
+
+/// A `TemperatureUncertainty` as one row of 8 f32 (its fields in order; `inputs` as a float).
+fn temperature_uncertainty_row_f32(v: relicore::blackbody::TemperatureUncertainty<f32>, out: &mut [f32]) {
+    for (o, x) in out.iter_mut().zip([v.temperature_k].into_iter().chain([v.combined_standard_uncertainty_k]).chain(v.sensitivity_coefficients).chain([v.inputs as f32])) {
         *o = x;
     }
 }

@@ -131,10 +131,18 @@ def apply_result(function: Any, receiver: Any, args: tuple[Any, ...], nan_on_err
     """Calls a regular function with a result value (a row of `function.width` floats per
     element) and returns the named result `result` (relicore._results): of Python numbers when
     every argument is a scalar, else holding arrays of the broadcast shape (a field of n values
-    with a trailing axis of n)."""
-    if all(isinstance(a, SCALAR_TYPES) for a in args):
+    with a trailing axis of n); float32 fields from the single-precision twin where `precision`
+    says so (numpy scalars, and a float32 array for a field of n values, for numpy float32
+    scalars in)."""
+    dtype = precision(function, args)
+    scalars = all(isinstance(a, SCALAR_TYPES) for a in args)
+    if scalars and dtype is np.float64:
         return result._from_row(function.call_row(receiver, args, nan_on_error))
-    arrays, shape = float_arrays(function.label, function.arguments, args)
-    rows = np.empty(shape + (function.width,), dtype=np.float64)
-    function.map(receiver, [operand(a, shape) for a in arrays], rows.reshape(-1), shape, nan_on_error)
-    return result._from_rows(rows)
+    arrays, shape = float_arrays(function.label, function.arguments, args, dtype)
+    rows = np.empty(shape + (function.width,), dtype=dtype)
+    function.map(receiver, [operand(a, shape, dtype) for a in arrays], rows.reshape(-1), shape, nan_on_error)
+    value = result._from_rows(rows)
+    if scalars:
+        # numpy float32 scalars in: numpy scalars out (a field of n values a float32 array of n)
+        return value._replace(**{k: v[()] for k, v in value._asdict().items() if np.ndim(v) == 0})
+    return value

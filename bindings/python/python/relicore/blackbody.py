@@ -21,14 +21,15 @@ otherwise it is a new ``ndarray`` of the broadcast shape (a 0-d array when every
 Precision follows numpy's promotion rules (NEP 50) where the core has a single-precision
 twin: the functions whose C and Fortran faces have ``_f32`` forms (the three spectral
 radiances, ``photon_number_density``, ``radiation_energy_density``,
-``band_radiance_wavelength``, the two brightness temperatures, the measured radiances and the
-object temperatures; ``relicore._native.Function.single`` says which) compute float32 input
-with that twin and return float32, bit for bit the C ``relicore_*_f32`` functions, when every
-array or numpy-scalar argument is float32 (Python numbers take the arrays' precision); numpy
-float32 scalars alone give a ``numpy.float32``. Every other call, and every other function
-(including the ``_with_uncertainty`` forms), converts its arguments to float64 and returns
-float64: integers, bool, float16, float32 mixed with float64, and float32 input to a function
-without a twin.
+``band_radiance_wavelength``, the two brightness temperatures, the measured radiances, the
+object temperatures and ``object_temperature_{wavelength,frequency}_with_uncertainty``;
+``relicore._native.Function.single`` says which) compute float32 input with that twin and
+return float32 (the fields of a ``TemperatureUncertainty`` too), bit for bit the C
+``relicore_*_f32`` functions, when every array or numpy-scalar argument is float32 (Python
+numbers take the arrays' precision); numpy float32 scalars alone give ``numpy.float32``
+scalars. Every other call, and every other function (the other ``_with_uncertainty`` forms
+included), converts its arguments to float64 and returns float64: integers, bool, float16,
+float32 mixed with float64, and float32 input to a function without a twin.
 
 Errors
 ------
