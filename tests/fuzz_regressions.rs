@@ -261,3 +261,38 @@ fn ages_of_pasts_ruled_by_dark_energy() {
     let nearly_empty = Universe::new(p).unwrap();
     assert_eq!(nearly_empty.age_gyr(0.0), Err(Error::OutOfDomain(0)));
 }
+
+/// A model far from physical ones (H0 = 3.5e158, Ω_m ≈ 0, Ω_r = 5e-324, phantom dark energy
+/// with w0 = −3.16, wa = −3.13, so E(z) falls toward 0 into the past): D_C fails at z ≥ 1e6
+/// (it passes 1e30 D_H), so at the top of the inversions' bracket, and
+/// `redshift_at_comoving_distance_mpc` refused every target as unreachable, D_C(1) included
+/// (found by the `universe` target); the lookback inversion likewise. The search now stops at
+/// the largest redshift where the function can be computed. Round trips of the inputs.
+#[test]
+fn inversions_where_the_distance_fails_at_the_top_of_the_bracket() {
+    let p = UniverseParameters {
+        h0_km_s_mpc: 3.501_048_893_453_435_7e158,
+        omega_matter: 3.602_455_785_444_780_5e-276,
+        omega_baryon: 4.416_576_193_967_140_5e-278,
+        omega_curvature: 3.476_677_903_917_502e-308,
+        cmb_temperature_k: 0.1,
+        n_eff: 0.101_808_045_776_723_88,
+        neutrino_masses_ev: [7.291_118_542_878_493_6e-304, -0.0, 1.0],
+        w0: -3.162_277_660_168_379_5,
+        wa: -3.134_016_797_955_952_3,
+        helium_mass_fraction: 0.630_957_344_480_193_4,
+    };
+    let u = Universe::new(p).unwrap();
+    assert_eq!(u.comoving_distance_mpc(1e12), Err(Error::NoConvergence));
+    for z in [1.0, 1e3, 1e5] {
+        let d = u.comoving_distance_mpc(z).unwrap();
+        let back = u.redshift_at_comoving_distance_mpc(d).unwrap();
+        assert!(rel(back, z) <= 1e-12, "D_C: z = {z:e} -> {d:e} -> {back:e}");
+        let t = u.lookback_time_gyr(z).unwrap();
+        let back = u.redshift_at_lookback_time_gyr(t).unwrap();
+        assert!(
+            rel(back, z) <= 1e-12,
+            "lookback: z = {z:e} -> {t:e} -> {back:e}"
+        );
+    }
+}

@@ -161,7 +161,8 @@ impl<T: Real> Universe<T> {
     ///
     /// * `z`: redshift, finite and ≥ 0.
     ///
-    /// Errors: `NonFinite(0)`, `Negative(0)`, `NoConvergence` (not seen in testing).
+    /// Errors: `NonFinite(0)`, `Negative(0)`, `NoConvergence` (seen only far from physical
+    /// models: a past in which E(z) falls toward 0, where D_C grows past 1e30 D_H).
     /// Accuracy: within 1e-12 relative (`f64`) for z from 0 to 1e4 against mpmath, for every
     /// model of `tests/data/cosmology.txt` (with and without radiation, curved, w0–wa, massive
     /// neutrinos). Method: the per-universe table (see `table.rs`) for z ≤ 16383, the shared

@@ -1,7 +1,8 @@
 //! Inversions: the redshift at a given age, lookback time, comoving or luminosity distance.
 //!
 //! Each solves in u = ln(1+z) with the shared safeguarded Newton iteration
-//! ([`crate::math::roots`]), bracketed by [0, ln(1 + 1e12)], with the exact derivative
+//! ([`crate::math::roots`]), bracketed by [0, ln(1 + 1e12)] (or below, where the function
+//! cannot be computed up to z = 1e12: see `check_reachable`), with the exact derivative
 //! (dχ/du = D_H/(q(1+z)), dt/du = t_H/E, …) and a relative tolerance of a few ulp in u.
 //! Up to 1100 iterations: enough for bisection alone to reach a redshift of 1e-300 from the
 //! top of the bracket, so tiny targets converge too; a target so small that the redshift is
@@ -17,19 +18,52 @@ use crate::{Error, Real, Result};
 const U_MAX: f64 = 27.631_021_115_928_547;
 
 impl<T: Real> Universe<T> {
-    fn solve_u<F: FnMut(T) -> (T, T)>(&self, f: F) -> Result<T> {
-        let u =
-            bracketed_newton_relative(f, T::zero(), T::c(U_MAX), T::epsilon() * T::c(2.0), 1100)?;
+    fn solve_u<F: FnMut(T) -> (T, T)>(&self, f: F, top: T) -> Result<T> {
+        let u = bracketed_newton_relative(f, T::zero(), top, T::epsilon() * T::c(2.0), 1100)?;
         finite_result(u.exp_m1(), 0)
     }
 
-    fn check_reachable<F: FnMut(T) -> (T, T)>(mut f: F) -> Result<()> {
+    /// The top of the search, u = ln(1 + 1e12), when the target lies between the values at
+    /// u = 0 and there; `OutOfDomain(0)` when it does not. Where the function fails at
+    /// u = ln(1 + 1e12) (an integral the quadrature cannot resolve, or a value past the largest
+    /// float: a past in which E(z) falls toward 0, found by the fuzzing), the top is the
+    /// largest u found to 1e-3 of itself, by halving and then bisection, where it succeeds.
+    fn check_reachable<F: FnMut(T) -> (T, T)>(mut f: F) -> Result<T> {
         let (lo, _) = f(T::zero());
-        let (hi, _) = f(T::c(U_MAX));
+        let mut top = T::c(U_MAX);
+        let (mut hi, _) = f(top);
+        if hi.is_nan() {
+            let mut failed = top;
+            let mut found = false;
+            for _ in 0..64 {
+                top = T::c(0.5) * top;
+                hi = f(top).0;
+                if !hi.is_nan() {
+                    found = true;
+                    break;
+                }
+                failed = top;
+            }
+            if !found {
+                return Err(Error::OutOfDomain(0));
+            }
+            for _ in 0..32 {
+                if failed - top <= T::c(1e-3) * top {
+                    break;
+                }
+                let mid = T::c(0.5) * (top + failed);
+                let v = f(mid).0;
+                if v.is_nan() {
+                    failed = mid;
+                } else {
+                    (top, hi) = (mid, v);
+                }
+            }
+        }
         if lo.is_nan() || hi.is_nan() || (lo > T::zero()) == (hi > T::zero()) && lo != T::zero() {
             return Err(Error::OutOfDomain(0));
         }
-        Ok(())
+        Ok(top)
     }
 
     /// Redshift at which the line-of-sight comoving distance equals `distance_mpc`.
@@ -37,7 +71,8 @@ impl<T: Real> Universe<T> {
     /// * `distance_mpc`: Mpc, finite and ≥ 0.
     ///
     /// Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` beyond the distance reachable
-    /// by z = 1e12 (the particle horizon). Accuracy: round trip within 1e-12 relative (`f64`).
+    /// by z = 1e12 (the particle horizon), or, where the distance cannot be computed up to
+    /// z = 1e12, beyond the largest redshift at which it can. Accuracy: round trip within 1e-12 relative (`f64`).
     pub fn redshift_at_comoving_distance_mpc(&self, distance_mpc: T) -> Result<T> {
         let d = non_negative(distance_mpc, 0)? / self.hubble_distance_mpc;
         if d == T::zero() {
@@ -50,8 +85,8 @@ impl<T: Real> Universe<T> {
             // dχ/du = (1+z)/E = a/q
             (chi - d, a / self.q_squared(a).sqrt())
         };
-        Self::check_reachable(f)?;
-        self.solve_u(f)
+        let top = Self::check_reachable(f)?;
+        self.solve_u(f, top)
     }
 
     /// Redshift at which the luminosity distance equals `distance_mpc`.
@@ -59,7 +94,8 @@ impl<T: Real> Universe<T> {
     /// * `distance_mpc`: Mpc, finite and ≥ 0.
     ///
     /// Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` when no redshift up to 1e12
-    /// gives it. Accuracy: round trip within 1e-12 relative (`f64`). (In a closed model D_L
+    /// gives it (up to the largest redshift at which the distance can be computed, where that
+    /// is below 1e12). Accuracy: round trip within 1e-12 relative (`f64`). (In a closed model D_L
     /// need not be monotone; the root in the bracket found is returned.)
     pub fn redshift_at_luminosity_distance_mpc(&self, distance_mpc: T) -> Result<T> {
         let d = non_negative(distance_mpc, 0)? / self.hubble_distance_mpc;
@@ -77,8 +113,8 @@ impl<T: Real> Universe<T> {
             let slope = opz * (dm + opz * self.transverse_slope(chi) * dchi_dz);
             (opz * dm - d, slope)
         };
-        Self::check_reachable(f)?;
-        self.solve_u(f)
+        let top = Self::check_reachable(f)?;
+        self.solve_u(f, top)
     }
 
     /// Redshift at which the lookback time equals `lookback_gyr`.
@@ -94,7 +130,8 @@ impl<T: Real> Universe<T> {
     ///
     /// Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` at or beyond the age today, or
     /// beyond the lookback time at z = 1e12 (the top of the search; in a model whose past is
-    /// infinite, such as a nearly empty one, the lookback time grows without bound).
+    /// infinite, such as a nearly empty one, the lookback time grows without bound) or at the
+    /// largest redshift below it at which the lookback time can be computed.
     /// Accuracy: round trip within 1e-12 relative (`f64`).
     pub fn redshift_at_lookback_time_gyr(&self, lookback_gyr: T) -> Result<T> {
         let lookback = non_negative(lookback_gyr, 0)?;
@@ -123,8 +160,8 @@ impl<T: Real> Universe<T> {
             // dt/du = (1+z) dt/dz = 1/E = a²/q
             (v - t, a * a / self.q_squared(a).sqrt())
         };
-        Self::check_reachable(f)?;
-        self.solve_u(f)
+        let top = Self::check_reachable(f)?;
+        self.solve_u(f, top)
     }
 
     /// Redshift at which the age of the universe equals `age_gyr`.
@@ -132,7 +169,8 @@ impl<T: Real> Universe<T> {
     /// * `age_gyr`: Gyr, finite and > 0, at most the age today.
     ///
     /// Errors: `NonFinite(0)`, `NonPositive(0)`, `OutOfDomain(0)` above the age today or
-    /// below the age at z = 1e12. Accuracy: round trip within 1e-12 relative (`f64`).
+    /// below the age at z = 1e12 (or at the largest redshift below it at which the age can be
+    /// computed). Accuracy: round trip within 1e-12 relative (`f64`).
     pub fn redshift_at_age_gyr(&self, age_gyr: T) -> Result<T> {
         let t = positive(age_gyr, 0)? / self.hubble_time_gyr;
         let ln_t = t.ln();
@@ -146,7 +184,7 @@ impl<T: Real> Universe<T> {
             // d ln t/du = −(1/E)/t
             (v.ln() - ln_t, -(a * a / self.q_squared(a).sqrt()) / v)
         };
-        Self::check_reachable(f)?;
-        self.solve_u(f)
+        let top = Self::check_reachable(f)?;
+        self.solve_u(f, top)
     }
 }

@@ -641,7 +641,8 @@ pub unsafe extern "C" fn relicore_cmb_temperature_at_k_array(
 ///
 /// * `z`: redshift, finite and ≥ 0.
 ///
-/// Errors: `NonFinite(0)`, `Negative(0)`, `NoConvergence` (not seen in testing).
+/// Errors: `NonFinite(0)`, `Negative(0)`, `NoConvergence` (seen only far from physical
+/// models: a past in which E(z) falls toward 0, where D_C grows past 1e30 D_H).
 /// Accuracy: within 1e-12 relative (`f64`) for z from 0 to 1e4 against mpmath, for every
 /// model of `tests/data/cosmology.txt` (with and without radiation, curved, w0–wa, massive
 /// neutrinos). Method: the per-universe table (see `table.rs`) for z ≤ 16383, the shared
@@ -1413,7 +1414,8 @@ pub unsafe extern "C" fn relicore_angular_diameter_distance_between_mpc(
 /// * `age_gyr`: Gyr, finite and > 0, at most the age today.
 ///
 /// Errors: `NonFinite(0)`, `NonPositive(0)`, `OutOfDomain(0)` above the age today or
-/// below the age at z = 1e12. Accuracy: round trip within 1e-12 relative (`f64`).
+/// below the age at z = 1e12 (or at the largest redshift below it at which the age can be
+/// computed). Accuracy: round trip within 1e-12 relative (`f64`).
 ///
 /// Arguments of the C function:
 /// * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
@@ -1485,7 +1487,8 @@ pub unsafe extern "C" fn relicore_redshift_at_age_gyr_array(
 ///
 /// Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` at or beyond the age today, or
 /// beyond the lookback time at z = 1e12 (the top of the search; in a model whose past is
-/// infinite, such as a nearly empty one, the lookback time grows without bound).
+/// infinite, such as a nearly empty one, the lookback time grows without bound) or at the
+/// largest redshift below it at which the lookback time can be computed.
 /// Accuracy: round trip within 1e-12 relative (`f64`).
 ///
 /// Arguments of the C function:
@@ -1559,7 +1562,9 @@ pub unsafe extern "C" fn relicore_redshift_at_lookback_time_gyr_array(
 /// * `distance_mpc`: Mpc, finite and ≥ 0.
 ///
 /// Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` beyond the distance reachable
-/// by z = 1e12 (the particle horizon). Accuracy: round trip within 1e-12 relative (`f64`).
+/// by z = 1e12 (the particle horizon), or, where the distance cannot be computed up to
+/// z = 1e12, beyond the largest redshift at which it can. Accuracy: round trip within 1e-12
+/// relative (`f64`).
 ///
 /// Arguments of the C function:
 /// * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
@@ -1631,7 +1636,8 @@ pub unsafe extern "C" fn relicore_redshift_at_comoving_distance_mpc_array(
 /// * `distance_mpc`: Mpc, finite and ≥ 0.
 ///
 /// Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` when no redshift up to 1e12
-/// gives it. Accuracy: round trip within 1e-12 relative (`f64`). (In a closed model D_L
+/// gives it (up to the largest redshift at which the distance can be computed, where that
+/// is below 1e12). Accuracy: round trip within 1e-12 relative (`f64`). (In a closed model D_L
 /// need not be monotone; the root in the bracket found is returned.)
 ///
 /// Arguments of the C function:

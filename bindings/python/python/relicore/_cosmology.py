@@ -111,7 +111,8 @@ class UniverseFunctions:
 
         * `z`: redshift, finite and ≥ 0.
 
-        Errors: `NonFinite(0)`, `Negative(0)`, `NoConvergence` (not seen in testing).
+        Errors: `NonFinite(0)`, `Negative(0)`, `NoConvergence` (seen only far from physical
+        models: a past in which E(z) falls toward 0, where D_C grows past 1e30 D_H).
         Accuracy: within 1e-12 relative (`f64`) for z from 0 to 1e4 against mpmath, for every
         model of `tests/data/cosmology.txt` (with and without radiation, curved, w0–wa, massive
         neutrinos). Method: the per-universe table (see `table.rs`) for z ≤ 16383, the shared
@@ -219,7 +220,8 @@ class UniverseFunctions:
         * `age_gyr`: Gyr, finite and > 0, at most the age today.
 
         Errors: `NonFinite(0)`, `NonPositive(0)`, `OutOfDomain(0)` above the age today or
-        below the age at z = 1e12. Accuracy: round trip within 1e-12 relative (`f64`).
+        below the age at z = 1e12 (or at the largest redshift below it at which the age can be
+        computed). Accuracy: round trip within 1e-12 relative (`f64`).
         """
         return _F["redshift_at_age_gyr"].apply(self, (age_gyr, ), nan_on_error)
 
@@ -237,7 +239,8 @@ class UniverseFunctions:
 
         Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` at or beyond the age today, or
         beyond the lookback time at z = 1e12 (the top of the search; in a model whose past is
-        infinite, such as a nearly empty one, the lookback time grows without bound).
+        infinite, such as a nearly empty one, the lookback time grows without bound) or at the
+        largest redshift below it at which the lookback time can be computed.
         Accuracy: round trip within 1e-12 relative (`f64`).
         """
         return _F["redshift_at_lookback_time_gyr"].apply(self, (lookback_gyr, ), nan_on_error)
@@ -248,7 +251,8 @@ class UniverseFunctions:
         * `distance_mpc`: Mpc, finite and ≥ 0.
 
         Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` beyond the distance reachable
-        by z = 1e12 (the particle horizon). Accuracy: round trip within 1e-12 relative (`f64`).
+        by z = 1e12 (the particle horizon), or, where the distance cannot be computed up to
+        z = 1e12, beyond the largest redshift at which it can. Accuracy: round trip within 1e-12 relative (`f64`).
         """
         return _F["redshift_at_comoving_distance_mpc"].apply(self, (distance_mpc, ), nan_on_error)
 
@@ -258,7 +262,8 @@ class UniverseFunctions:
         * `distance_mpc`: Mpc, finite and ≥ 0.
 
         Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` when no redshift up to 1e12
-        gives it. Accuracy: round trip within 1e-12 relative (`f64`). (In a closed model D_L
+        gives it (up to the largest redshift at which the distance can be computed, where that
+        is below 1e12). Accuracy: round trip within 1e-12 relative (`f64`). (In a closed model D_L
         need not be monotone; the root in the bracket found is returned.)
         """
         return _F["redshift_at_luminosity_distance_mpc"].apply(self, (distance_mpc, ), nan_on_error)
