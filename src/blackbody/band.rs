@@ -16,6 +16,7 @@
 use super::kernel::{K3, K4, PI4_OVER_15, TWO_ZETA3, invert_increasing, x_frequency, x_wavelength};
 use crate::check::{finite_result, non_negative, positive};
 use crate::math::quadrature::integrate;
+use crate::math::{dd, exp, log};
 use crate::{Error, Real, Result};
 
 const SWITCH: f64 = 2.0;
@@ -90,6 +91,9 @@ fn tail<T: Real>(p: u32, xh: T, xl: T) -> T {
     if !xh.is_finite() {
         return T::zero();
     }
+    if xh > T::LN_MAX - T::c(2.0) {
+        return far_tail(p, xh, xl);
+    }
     let q = (-xh).exp() * (T::one() - xl);
     if q == T::zero() {
         return T::zero();
@@ -113,6 +117,32 @@ fn tail<T: Real>(p: u32, xh: T, xl: T) -> T {
         }
     }
     sum
+}
+
+/// [`tail`] where e^−x is below the normal range (x > ln MAX − 2) while the integral, e^−x times
+/// a polynomial of degree p in x, may still be a normal number: only the first term of the
+/// series counts (the next is e^−x smaller), and e^−x is formed scaled by 2^k (k = 256 in
+/// `f64`, 64 in `f32`) from the double-length argument k ln2 − x (k·ln2_hi exact, the
+/// subtraction by a two-sum), so that it keeps its full precision; the product is scaled back
+/// at the end, exactly where the result is normal.
+fn far_tail<T: Real>(p: u32, xh: T, xl: T) -> T {
+    let k: i32 = if T::MANTISSA_DIGITS < 53 { 64 } else { 256 };
+    let (hi, lo) = log::ln2_split::<T>();
+    let kf = T::small_integer(k);
+    let (s, e) = dd::two_sum(kf * hi, -xh);
+    let q = exp::exp_dd(s, e + (kf * lo - xl));
+    if q == T::zero() {
+        // x beyond about 745 + k ln2: the integral is below the smallest subnormal
+        return T::zero();
+    }
+    let x = xh;
+    let poly = if p == 3 {
+        x * x * x + (T::c(3.0) * x * x + (T::c(6.0) * x + T::c(6.0)))
+    } else {
+        x * x + (T::c(2.0) * x + T::c(2.0))
+    };
+    // the product below 2^−k·MAX, then scaled in two exact steps where the result is normal
+    (q * poly) * T::pow2i(-k / 2) * T::pow2i(-k / 2)
 }
 
 /// ∫ t^p/(eᵗ−1) dt over [a, b] with 0 ≤ a < b ≤ ∞, each end given to double length.

@@ -89,13 +89,20 @@ fn ln_reduced<T: Real>(k: T, g: T, d: T) -> T {
         let c = T::c(c5) + z * T::c(c6);
         z * ((a + z2 * b) + z4 * (c + z2 * T::c(c7)))
     };
-    let (hi, lo) = if T::MANTISSA_DIGITS < 53 {
+    let (hi, lo) = ln2_split::<T>();
+    let hfsq = T::c(0.5) * g * g;
+    k * hi + (g - (hfsq - (s * (hfsq + r) + (k * lo + d))))
+}
+
+/// ln 2 = hi + lo with hi of 41 (`f64`) or 15 (`f32`) significant bits: m·hi is exact for
+/// |m| < 2^11 (`f64`) or 2^9 (`f32`).
+#[inline(always)]
+pub(crate) fn ln2_split<T: Real>() -> (T, T) {
+    if T::MANTISSA_DIGITS < 53 {
         (T::c(LN2_HI_F32), T::c(LN2_LO_F32))
     } else {
         (T::c(LN2_HI_F64), T::c(LN2_LO_F64))
-    };
-    let hfsq = T::c(0.5) * g * g;
-    k * hi + (g - (hfsq - (s * (hfsq + r) + (k * lo + d))))
+    }
 }
 
 /// The common case of [`ln`] as straight-line code for the array functions: ln x and whether
