@@ -13,6 +13,8 @@
 
 from __future__ import annotations
 
+import re
+
 from .common import banner
 from .rustdoc import find
 from .table import RECEIVERS, ROOT, Function
@@ -240,9 +242,15 @@ def rust(fns: list[Function]) -> str:
 # ------------------------------------------------------------------------------- Python
 
 
+def _python_paths(text: str) -> str:
+    """The core's paths in code spans as Python spells them (`Type::method` -> `Type.method`):
+    help() of a Python class names no Rust item."""
+    return re.sub(r"`([A-Za-z_][\w:]*::\w+)`", lambda m: "`" + m.group(1).replace("::", ".") + "`", text)
+
+
 def _docstring(fn: Function, indent: str) -> str:
     _, doc = find(fn)
-    text = "\n".join(doc).strip().replace("\\", "\\\\")
+    text = _python_paths("\n".join(doc).strip()).replace("\\", "\\\\")
     assert '"""' not in text, fn.name
     lines = text.split("\n")
     body = "\n".join((indent + line) if line.strip() else "" for line in lines[1:])

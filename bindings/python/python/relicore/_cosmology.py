@@ -293,7 +293,7 @@ class UniverseFunctions:
         """D_M(z)/r_d: the transverse comoving distance over the drag-epoch sound horizon.
 
         * `z`: redshift, finite and ≥ 0.
-        * `sound_horizon_drag_mpc`: r_d in Mpc, > 0 (e.g. `ThermalHistory::sound_horizon_drag_mpc`).
+        * `sound_horizon_drag_mpc`: r_d in Mpc, > 0 (e.g. `ThermalHistory.sound_horizon_drag_mpc`).
 
         Errors: `NonFinite(i)`, `Negative(0)`, `NonPositive(1)`. Accuracy: within 1e-12 relative
         (`f64`) of mpmath.

@@ -3,8 +3,9 @@ inversions to temperature, response-weighted radiance, two-load radiometer calib
 the microwave-sky conversions at the CMB temperature.
 
 Every function here is the Rust core's function of the same name with the same arguments in
-the same order; this module only converts, broadcasts and loops (the loop runs in Rust with
-the GIL released). Units are SI: wavelength in m, frequency in Hz, wavenumber in m^-1 (not
+the same order; this module only converts, broadcasts and loops (in one native call; the loop
+runs in Rust, with the GIL released unless it is short: under 4096 elements for the functions
+with a SIMD array form, under 64 for the others). Units are SI: wavelength in m, frequency in Hz, wavenumber in m^-1 (not
 cm^-1), temperature in K, spectral radiance in W m^-2 sr^-1 per unit of the spectral variable.
 Each function's docstring is the core's documentation of it (``src/blackbody/``): purpose,
 arguments with units, result, errors, accuracy (measured against mpmath) and reference. The

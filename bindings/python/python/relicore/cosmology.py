@@ -2,8 +2,9 @@
 the expansion rate, density parameters, distances, volumes, times and their inverses.
 
 Every method is the Rust core's method of the same name with the same arguments in the same
-order (``src/cosmology/``); this module only converts, broadcasts and loops (the loop runs in
-Rust with the GIL released). Units are in the names: Mpc, Gyr (Julian years), km s^-1 Mpc^-1,
+order (``src/cosmology/``); this module only converts, broadcasts and loops (in one native
+call; the loop runs in Rust, with the GIL released unless it is short: under 4096 elements for
+the methods with a SIMD array form, under 64 for the others). Units are in the names: Mpc, Gyr (Julian years), km s^-1 Mpc^-1,
 kg m^-3, Gpc^3, K. Each method's docstring is the core's documentation of it: purpose,
 arguments, result, errors in the core's terms (``Negative(i)``, ``i`` the argument position
 from 0, the universe excluded), accuracy (measured against mpmath, ``tests/data/cosmology.txt``)
