@@ -419,10 +419,16 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
         }
     }
 
-    /// dx_p/du and dθ/du at (x_p, θ) with the background `bg` and the balance `b` at x_p.
-    fn rates(&self, bg: &Background<T>, b: &Balance<T>, xp: T, theta: T) -> (T, T) {
+    /// The recombination coefficient at the matter temperature θ T_r, m³ s⁻¹.
+    #[inline]
+    fn alpha_matter(bg: &Background<T>, theta: T) -> T {
+        Species::alpha_ln(theta.ln() + bg.ln_t - T::c(LN_1E4))
+    }
+
+    /// dx_p/du and dθ/du at (x_p, θ) with the background `bg`, the balance `b` at x_p and the
+    /// recombination coefficient α(T_m) ([`alpha_matter`](Self::alpha_matter)).
+    fn rates(&self, bg: &Background<T>, b: &Balance<T>, xp: T, theta: T, alpha_m: T) -> (T, T) {
         let s = &self.species;
-        let alpha_m = Species::alpha_ln(theta.ln() + bg.ln_t - T::c(LN_1E4));
         let n1s = bg.n_h * (T::one() - xp).max(T::zero());
         let lam = T::c(super::species::TWO_PHOTON_RATE);
         let c = (T::one() + bg.escape * lam * n1s) / (T::one() + bg.escape * (lam + bg.beta) * n1s);
@@ -488,6 +494,8 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
                 // last two backgrounds and the last balance
                 let mut recent: [Option<Background<T>>; 2] = [None, None];
                 let mut last_balance: Option<(T, T, Balance<T>)> = None;
+                // and the last α(T_m) (the Jacobian's x_p column shares u and θ with f)
+                let mut last_alpha: Option<(T, T, T)> = None;
                 let mut f = |uu: T, st: &[T; 2]| -> Result<[T; 2]> {
                     let [xp, th] = *st;
                     if !(xp > T::zero()) || !(th > T::zero()) {
@@ -507,7 +515,12 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
                         _ => proton_balance(this.species.f_he, xp, bg.ln_s, bg.s12)?,
                     };
                     last_balance = Some((uu, xp, bal));
-                    let (a, b) = this.rates(&bg, &bal, xp, th);
+                    let alpha = match last_alpha {
+                        Some((lu, lt, al)) if lu == uu && lt == th => al,
+                        _ => Self::alpha_matter(&bg, th),
+                    };
+                    last_alpha = Some((uu, th, alpha));
+                    let (a, b) = this.rates(&bg, &bal, xp, th, alpha);
                     *last_eval = Some((uu, *st, [a, b], bal));
                     Ok([a, b])
                 };
@@ -552,7 +565,7 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
         }
         let bg = self.background(u);
         let b = proton_balance(self.species.f_he, xp, bg.ln_s, bg.s12)?;
-        let (a, c) = self.rates(&bg, &b, xp, th);
+        let (a, c) = self.rates(&bg, &b, xp, th, Self::alpha_matter(&bg, th));
         Ok([a, c])
     }
 
@@ -682,6 +695,8 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
         let mut tau_d = T::zero();
         let mut tau_r = T::zero();
         let six = T::c(6.0);
+        // e^u at the lower end of the interval (the upper end of the previous one)
+        let mut e0 = T::zero().exp();
         for i in 0..N {
             if i > 0 {
                 let u0 = T::c((i - 1) as f64) * h;
@@ -699,8 +714,9 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
                 let w = u1 - u0;
                 tau = tau + w / six * (d0 + T::c(4.0) * dm + d1);
                 // drag: dτ_d/du = dτ/du · (1+z)/R0
-                tau_d =
-                    tau_d + w / six / r0 * (d0 * u0.exp() + T::c(4.0) * dm * zm + d1 * u1.exp());
+                let e1 = u1.exp();
+                tau_d = tau_d + w / six / r0 * (d0 * e0 + T::c(4.0) * dm * zm + d1 * e1);
+                e0 = e1;
                 if self.reion_on != 0 && u0 < reion_top {
                     // one Kronrod panel per interval: the tanh is at least as wide as an
                     // interval (Δu ≥ 0.005 up to z_re = 100), where the 15-point rule is exact
