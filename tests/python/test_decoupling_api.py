@@ -91,14 +91,18 @@ def grid(top: float = 1e4) -> np.ndarray:
 
 def test_signature_and_defaults_are_the_cores_and_the_documented_ones():
     params = list(inspect.signature(ThermalHistory).parameters.values())
-    assert [p.name for p in params] == ["universe", "reionization_redshift", "highest_redshift"]
+    assert [p.name for p in params] == ["universe", "reionization_redshift", "highest_redshift",
+                                        "helium_reionization_redshift", "helium_reionization_width"]
     assert params[0].kind is inspect.Parameter.POSITIONAL_OR_KEYWORD and params[0].default is params[0].empty
     assert all(p.kind is inspect.Parameter.KEYWORD_ONLY for p in params[1:])
     defaults = {p.name: p.default for p in params[1:]}
     # the core's HistoryOptions::default(), read from it ...
     assert defaults == dict(_native.history_defaults())
-    # ... which are the documented ones (src/decoupling/history.rs: no reionisation, z = 1e4)
-    assert defaults == {"reionization_redshift": None, "highest_redshift": 1e4}
+    # ... which are the documented ones (src/decoupling/history.rs: no reionisation, z = 1e4,
+    # helium's second reionisation at z = 3.5 with width 0.5, Planck Collaboration 2020, A&A 641,
+    # A6, Sect. 3.3, from memory)
+    assert defaults == {"reionization_redshift": None, "highest_redshift": 1e4,
+                        "helium_reionization_redshift": 3.5, "helium_reionization_width": 0.5}
 
 
 def test_module_exports(h):
@@ -183,7 +187,8 @@ def test_equality_hash_and_repr(u, h, hr):
     assert zero == negative_zero and hash(zero) == hash(negative_zero)
     r = repr(hr)
     assert r.startswith("ThermalHistory(Universe(h0_km_s_mpc=68.0, ")
-    assert r.endswith(", reionization_redshift=8.0, highest_redshift=10000.0)")
+    assert r.endswith(", reionization_redshift=8.0, highest_redshift=10000.0, helium_reionization_redshift=3.5, "
+                      "helium_reionization_width=0.5)")
     assert eval(r, {"ThermalHistory": ThermalHistory, "Universe": Universe}) == hr
     assert eval(repr(h), {"ThermalHistory": ThermalHistory, "Universe": Universe}) == h
 
@@ -225,6 +230,7 @@ def test_dask_token_follows_the_universe_and_the_options(u, h, hr):
     assert tokenize(h) == tokenize(ThermalHistory(Universe(**u.parameters)))
     assert tokenize(h) != tokenize(hr)
     assert tokenize(h) != tokenize(ThermalHistory(u, highest_redshift=5000.0))
+    assert tokenize(h) != tokenize(ThermalHistory(u, helium_reionization_width=0.7))
     assert tokenize(h) != tokenize(ThermalHistory(Universe(68.0, 0.31, **{**PARAMETERS, "omega_baryon": 0.05})))
     assert tokenize(hr.optical_depth) != tokenize(hr.visibility)
 
@@ -448,6 +454,18 @@ BAD_OPTIONS = [
     (dict(highest_redshift=10001.0), "highest_redshift", -16, "highest_redshift = 10001.0: more than the 2048 nodes"),
     (dict(highest_redshift=2e4), "highest_redshift", -16, "highest_redshift = 20000.0"),
     (dict(highest_redshift=1e300), "highest_redshift", -16, "highest_redshift = 1e+300"),
+    (dict(helium_reionization_redshift=-0.5), "helium_reionization_redshift", -4,
+     "helium_reionization_redshift = -0.5"),
+    (dict(helium_reionization_redshift=20.5), "helium_reionization_redshift", -10,
+     "helium_reionization_redshift = 20.5: must not exceed 20.0"),
+    (dict(helium_reionization_redshift=math.nan), "helium_reionization_redshift", -2,
+     "helium_reionization_redshift = nan: must be finite"),
+    (dict(helium_reionization_width=0.05), "helium_reionization_width", -10,
+     "helium_reionization_width = 0.05: must lie between 0.1 and 10.0"),
+    (dict(helium_reionization_width=11.0, reionization_redshift=7.0), "helium_reionization_width", -10,
+     "helium_reionization_width = 11.0: must lie between 0.1 and 10.0"),
+    (dict(helium_reionization_width=math.inf), "helium_reionization_width", -2,
+     "helium_reionization_width = inf: must be finite"),
 ]
 
 
@@ -462,8 +480,11 @@ def test_invalid_options_raise_naming_the_parameter_and_value(u, options, name, 
 
 def test_the_limits_of_the_options_are_inside(u):
     # documented: 0 <= z_re <= 100, 3000 <= highest redshift <= 1e4 for 2048 nodes
+    # and 0 <= z_He <= 20, 0.1 <= width <= 10
     for options in (dict(reionization_redshift=0.0), dict(reionization_redshift=100.0),
-                    dict(highest_redshift=3000.0), dict(highest_redshift=1e4)):
+                    dict(highest_redshift=3000.0), dict(highest_redshift=1e4),
+                    dict(reionization_redshift=7.0, helium_reionization_redshift=0.0, helium_reionization_width=0.1),
+                    dict(reionization_redshift=7.0, helium_reionization_redshift=20.0, helium_reionization_width=10.0)):
         x = ThermalHistory(u, **options)
         assert math.isfinite(x.last_scattering_redshift), options
 
@@ -579,3 +600,26 @@ def test_a_history_is_computed_from_a_thread_with_a_small_stack(hr):
     run = subprocess.run([sys.executable, "-c", script], capture_output=True, text=True, timeout=300)
     assert run.returncode == 0, f"exit {run.returncode}: {run.stderr[-2000:]}"
     assert run.stdout.strip() == hr.visibility_peak_redshift.hex()
+
+
+def test_helium_reionisation_options_move_the_late_ionisation_by_the_model(u):
+    """x_e(z) differs from the default history by f_He [S((z_He - z)/w) - S((3.5 - z)/0.5)] with
+    S(x) = (1 + tanh x)/2 (the model of src/decoupling/mod.rs), f_He = Y_p m_H/((1 - Y_p) m_He)
+    from the atom masses printed there; recombination is untouched; the options are kept,
+    compared, hashed and pickled."""
+    y = u.helium_mass_fraction
+    f_he = y / (1.0 - y) * (1.007825031898 / 4.002603254130)
+    base = ThermalHistory(u, reionization_redshift=7.5)
+    other = ThermalHistory(u, reionization_redshift=7.5, helium_reionization_redshift=5.0,
+                           helium_reionization_width=1.0)
+    z = np.array([0.0, 1.0, 2.5, 3.5, 4.0, 5.0, 6.0, 9.0])
+    want = f_he * (0.5 * (1.0 + np.tanh((5.0 - z) / 1.0)) - 0.5 * (1.0 + np.tanh((3.5 - z) / 0.5)))
+    np.testing.assert_allclose(other.ionized_fraction(z) - base.ionized_fraction(z), want, rtol=0, atol=1e-13)
+    assert other.ionized_fraction(1100.0) == base.ionized_fraction(1100.0)
+    assert other.reionization_optical_depth > base.reionization_optical_depth
+    assert (other.helium_reionization_redshift, other.helium_reionization_width) == (5.0, 1.0)
+    assert other != base and hash(other) != hash(base)
+    assert ThermalHistory(u, reionization_redshift=7.5, helium_reionization_redshift=3.5) == base
+    back = pickle.loads(pickle.dumps(other))
+    assert back == other and back.ionized_fraction(4.0) == other.ionized_fraction(4.0)
+    assert "helium_reionization_width=1.0" in repr(other)
