@@ -5,9 +5,9 @@
 //! `relicore::decoupling`), f_He · ½[tanh((z_He − z)/Δz_He) − tanh((3.5 − z)/0.5)], with f_He
 //! computed here from Y_p and the atom masses printed in that doc (AME 2020, from memory).
 
+use relicore::Error;
 use relicore::cosmology::{Universe, UniverseParameters};
 use relicore::decoupling::{HistoryOptions, ThermalHistory};
-use relicore::Error;
 
 /// Base ΛCDM parameters of Planck Collaboration 2020 (A&A 641, A6, Table 2; from memory).
 fn planck() -> Universe<f64> {

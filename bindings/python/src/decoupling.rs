@@ -321,6 +321,14 @@ pub(crate) fn decoupling_constants(py: Python<'_>) -> PyResult<Bound<'_, PyDict>
         "HIGHEST_HELIUM_REIONIZATION_REDSHIFT",
         dc::HIGHEST_HELIUM_REIONIZATION_REDSHIFT,
     )?;
+    d.set_item(
+        "DEFAULT_HELIUM_REIONIZATION_REDSHIFT",
+        dc::DEFAULT_HELIUM_REIONIZATION_REDSHIFT,
+    )?;
+    d.set_item(
+        "DEFAULT_HELIUM_REIONIZATION_WIDTH",
+        dc::DEFAULT_HELIUM_REIONIZATION_WIDTH,
+    )?;
     Ok(d)
 }
 

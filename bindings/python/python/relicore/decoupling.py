@@ -53,7 +53,10 @@ from relicore._decoupling import ThermalHistoryFunctions, drag_redshift_fit, las
 from relicore._decoupling import saha_ionized_fraction
 
 __all__ = [
+    "DEFAULT_HELIUM_REIONIZATION_REDSHIFT",
+    "DEFAULT_HELIUM_REIONIZATION_WIDTH",
     "DEFAULT_HIGHEST_REDSHIFT",
+    "HIGHEST_HELIUM_REIONIZATION_REDSHIFT",
     "HIGHEST_REIONIZATION_REDSHIFT",
     "HISTORY_NODES",
     "LOWEST_HIGHEST_REDSHIFT",
@@ -78,6 +81,11 @@ SAHA_HIGHEST_REDSHIFT: float = _CONSTANTS["SAHA_HIGHEST_REDSHIFT"]
 """Highest redshift of :func:`saha_ionized_fraction`."""
 HIGHEST_HELIUM_REIONIZATION_REDSHIFT: float = _CONSTANTS["HIGHEST_HELIUM_REIONIZATION_REDSHIFT"]
 """Highest allowed redshift of helium's second reionisation."""
+DEFAULT_HELIUM_REIONIZATION_REDSHIFT: float = _CONSTANTS["DEFAULT_HELIUM_REIONIZATION_REDSHIFT"]
+"""Default redshift of helium's second reionisation (Planck Collaboration 2020, A&A 641, A6,
+Sect. 3.3; from memory)."""
+DEFAULT_HELIUM_REIONIZATION_WIDTH: float = _CONSTANTS["DEFAULT_HELIUM_REIONIZATION_WIDTH"]
+"""Default width in z of helium's second reionisation (same source)."""
 
 _D: dict[str, Any] = dict(_native.history_defaults())
 
