@@ -141,6 +141,9 @@ pub struct ThermalHistory<T, const N: usize = HISTORY_NODES> {
     tau_reion_total: T,
 }
 
+/// One evaluation of the equations: u, the state, its rates and its electron balance.
+type LastEvaluation<T> = (T, [T; 2], [T; 2], Balance<T>);
+
 /// The state-independent quantities of the equations at one u = ln(1+z).
 #[derive(Clone, Copy)]
 struct Background<T> {
@@ -485,7 +488,7 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
             // the last evaluation of the equations (u, state, rates, balance): the stepper's
             // last one is usually at the end of the step, whose rates and electron balance the
             // node needs as well
-            let mut last_eval: Option<(T, [T; 2], [T; 2], Balance<T>)> = None;
+            let mut last_eval: Option<LastEvaluation<T>> = None;
             let yj = {
                 let this: &Self = self;
                 let last_eval = &mut last_eval;
