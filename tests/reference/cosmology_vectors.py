@@ -1226,6 +1226,19 @@ def inverse_section(out, model, info):
         out.status("redshift_at_comoving_distance_mpc", name, [1.05 * horizon], OOD)
     out.status("redshift_at_comoving_distance_mpc", name, [-1.0], NEG)
     out.status("redshift_at_luminosity_distance_mpc", name, [-1.0], NEG)
+    # subnormal targets: an age that small lies below the age at z = 1e12 (refused, -10); the
+    # lookback time and the distances give z = target/t_H or target/D_H to first order (the
+    # next term is below 1e-300 of it), itself subnormal or 0, checked to two of the smallest
+    # subnormal steps (no relative accuracy is promised for a subnormal result). Targets of
+    # 1e-310 (Gyr or Mpc) are refused today with NoConvergence (reported; vectors once fixed).
+    out.status("redshift_at_age_gyr", name, [5e-324], OOD)
+    out.status("redshift_at_age_gyr", name, [1e-310], OOD)
+    with mp.workdps(DPS):
+        for fname, scale, targets in (("redshift_at_lookback_time_gyr", bg.tH, (5e-324,)),
+                                      ("redshift_at_comoving_distance_mpc", bg.DH, (5e-324,)),
+                                      ("redshift_at_luminosity_distance_mpc", bg.DH, (5e-324,))):
+            for t in targets:
+                out.vec(fname, name, [t], f64(mpf(t) / scale), "abs", 1e-323, "mpmath")
     info["age0"] = a0
     info["horizon"] = horizon
 
