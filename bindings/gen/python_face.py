@@ -271,9 +271,9 @@ def _py_function(fn: Function) -> str:
             f'    return _apply_result(_F["{fn.name}"], {receiver}, ({values}), nan_on_error, _results.{cls})\n'
         )
     return (
-        f"def {fn.name}({params}, *, nan_on_error: bool = False) -> Any:\n"
+        f"def {fn.name}({params}, *, nan_on_error: bool = False, out: Any = None) -> Any:\n"
         f"{_docstring(fn, '    ')}\n"
-        f'    return _F["{fn.name}"].apply({receiver}, ({values}), nan_on_error)\n'
+        f'    return _F["{fn.name}"].apply({receiver}, ({values}), nan_on_error, out)\n'
     )
 
 
@@ -288,9 +288,9 @@ def _py_member(fn: Function) -> str:
     params = ", ".join(f"{a}: Any" for a in fn.arg_names)
     values = "".join(f"{a}, " for a in fn.arg_names)
     return (
-        f"    def {fn.name}(self, {params}, *, nan_on_error: bool = False) -> Any:\n"
+        f"    def {fn.name}(self, {params}, *, nan_on_error: bool = False, out: Any = None) -> Any:\n"
         f"{_docstring(fn, '        ')}\n"
-        f'        return _F["{fn.name}"].apply(self, ({values}), nan_on_error)\n'
+        f'        return _F["{fn.name}"].apply(self, ({values}), nan_on_error, out)\n'
     )
 
 
@@ -583,7 +583,10 @@ def _stub_overloads(fn: Function, indent: str) -> list[str]:
             params.append(f"{fn.receiver}: {python_class(fn.receiver)}")
         params += [f"{a}: {kind}" for a in fn.arg_names]
         out += [f"{indent}@overload",
-                f"{indent}def {fn.name}({', '.join(params)}, *, nan_on_error: bool = False) -> {result}: ...{note}"]
+                f"{indent}def {fn.name}({', '.join(params)}, *, nan_on_error: bool = False, out: None = None) -> {result}: ...{note}"]
+    # with out= (an array of the broadcast shape and the result's dtype): that array
+    out += [f"{indent}@overload",
+            f"{indent}def {fn.name}({', '.join(params)}, *, nan_on_error: bool = False, out: _Array) -> _Array: ..."]
     return out
 
 

@@ -78,3 +78,50 @@ def test_scalars_in_give_python_floats_and_arrays_keep_their_shape(u):
     assert got.shape == (2, 3) and got.dtype == np.float64
     zero_d = S(np.array(1e-5), 300.0)
     assert isinstance(zero_d, np.ndarray) and zero_d.shape == ()
+
+
+def test_out_receives_the_result_and_is_returned(u):
+    lam = np.geomspace(1e-6, 1e-4, 12).reshape(3, 4)
+    want = S(lam, 500.0)
+    out = np.full((3, 4), -1.0)
+    assert S(lam, 500.0, out=out) is out
+    assert out.tobytes() == want.tobytes()
+    # a float32 out of a float64 call: rounded as numpy's same_kind cast does
+    out32 = np.empty((3, 4), dtype=np.float32)
+    S(lam, 500.0, out=out32)
+    assert out32.tobytes() == want.astype(np.float32).tobytes()
+    # scalars into a 0-d out
+    zero_d = np.empty(())
+    assert u.age_gyr(1.0, out=zero_d) is zero_d and zero_d[()] == u.age_gyr(1.0)
+    # a non-contiguous out (a view) gets the values in place
+    base = np.zeros((3, 8))
+    S(lam, 500.0, out=base[:, ::2])
+    assert np.array_equal(base[:, ::2], want) and not base[:, 1::2].any()
+    # nan_on_error with out
+    t = np.array([300.0, -1.0, 400.0])
+    o = np.empty(3)
+    S(1e-5, t, nan_on_error=True, out=o)
+    assert np.isnan(o[1]) and o[0] == S(1e-5, 300.0)
+
+
+@pytest.mark.parametrize(
+    "out, why",
+    [
+        (np.empty(5), "shape"),
+        (np.empty((3, 4), dtype=np.int64), "dtype"),
+        ([0.0] * 12, "numpy array"),
+    ],
+)
+def test_a_bad_out_is_refused_naming_out(out, why):
+    lam = np.geomspace(1e-6, 1e-4, 12).reshape(3, 4)
+    with pytest.raises(relicore.RelicoreError) as info:
+        S(lam, 500.0, out=out)
+    assert info.value.argument == "out" and info.value.function == "spectral_radiance_wavelength"
+    assert why in str(info.value)
+
+
+def test_a_read_only_out_is_refused():
+    out = np.empty(2)
+    out.flags.writeable = False
+    with pytest.raises(relicore.RelicoreError, match="read-only"):
+        S(np.array([1e-5, 2e-5]), 300.0, out=out)

@@ -80,7 +80,7 @@ def test_every_core_method_has_a_python_method(name):
     positional = [p.name for p in params if p.kind is inspect.Parameter.POSITIONAL_OR_KEYWORD]
     assert positional == ["self", *ELEMENTWISE[name]], f"{name}: Python {positional}, core {ELEMENTWISE[name]}"
     keywords = {p.name: p.default for p in params if p.kind is inspect.Parameter.KEYWORD_ONLY}
-    assert keywords == {"nan_on_error": False}
+    assert keywords == {"nan_on_error": False, "out": None}
 
 
 @pytest.mark.parametrize("name", CONSTANTS)
@@ -168,12 +168,13 @@ def test_stub_names_exactly_the_public_members():
 @pytest.mark.parametrize("name", sorted(ELEMENTWISE))
 def test_stub_signatures_match_the_methods(name):
     defs = [n for n in stub_class().body if isinstance(n, ast.FunctionDef) and n.name == name]
-    assert len(defs) == 2, f"{name}: want a scalar and an array overload"
+    assert len(defs) == 3, f"{name}: want a scalar, an array and an out= overload"
     for d in defs:
         assert any(isinstance(x, ast.Name) and x.id == "overload" for x in d.decorator_list)
         assert [a.arg for a in d.args.args] == ["self", *ELEMENTWISE[name]]
         kw = {a.arg: ast.literal_eval(v) for a, v in zip(d.args.kwonlyargs, d.args.kw_defaults) if v is not None}
-        assert kw == {"nan_on_error": False}
+        assert {k: v for k, v in kw.items() if k != "out"} == {"nan_on_error": False}
+        assert [a.arg for a in d.args.kwonlyargs] == ["nan_on_error", "out"]
 
 
 def test_stub_constructor_matches_the_runtime():

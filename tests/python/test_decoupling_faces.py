@@ -85,7 +85,7 @@ def test_every_core_function_has_a_python_function(name):
     params = list(inspect.signature(fn).parameters.values())
     positional = [p.name for p in params if p.kind is inspect.Parameter.POSITIONAL_OR_KEYWORD]
     assert positional == FUNCTIONS[name], f"{name}: Python {positional}, core {FUNCTIONS[name]}"
-    assert {p.name: p.default for p in params if p.kind is inspect.Parameter.KEYWORD_ONLY} == {"nan_on_error": False}
+    assert {p.name: p.default for p in params if p.kind is inspect.Parameter.KEYWORD_ONLY} == {"nan_on_error": False, "out": None}
 
 
 def test_native_argument_names_are_the_cores():
@@ -110,7 +110,7 @@ def test_every_core_query_is_a_method(name):
     params = list(inspect.signature(fn).parameters.values())
     positional = [p.name for p in params if p.kind is inspect.Parameter.POSITIONAL_OR_KEYWORD]
     assert positional == ["self", *QUERIES[name]]
-    assert {p.name: p.default for p in params if p.kind is inspect.Parameter.KEYWORD_ONLY} == {"nan_on_error": False}
+    assert {p.name: p.default for p in params if p.kind is inspect.Parameter.KEYWORD_ONLY} == {"nan_on_error": False, "out": None}
 
 
 @pytest.mark.parametrize("name", SUMMARY)
@@ -161,22 +161,24 @@ def test_stub_names_exactly_the_module_and_the_class():
 @pytest.mark.parametrize("name", sorted(FUNCTIONS))
 def test_stub_signatures_of_the_functions(name):
     defs = [n for n in stub_tree().body if isinstance(n, ast.FunctionDef) and n.name == name]
-    assert len(defs) == 2, f"{name}: want a scalar and an array overload"
+    assert len(defs) == 3, f"{name}: want a scalar, an array and an out= overload"
     for d in defs:
         assert any(isinstance(x, ast.Name) and x.id == "overload" for x in d.decorator_list)
         assert [a.arg for a in d.args.args] == FUNCTIONS[name]
         kw = {a.arg: ast.literal_eval(v) for a, v in zip(d.args.kwonlyargs, d.args.kw_defaults) if v is not None}
-        assert kw == {"nan_on_error": False}
+        assert {k: v for k, v in kw.items() if k != "out"} == {"nan_on_error": False}
+        assert [a.arg for a in d.args.kwonlyargs] == ["nan_on_error", "out"]
 
 
 @pytest.mark.parametrize("name", sorted(QUERIES))
 def test_stub_signatures_of_the_queries(name):
     defs = [n for n in stub_class().body if isinstance(n, ast.FunctionDef) and n.name == name]
-    assert len(defs) == 2, f"{name}: want a scalar and an array overload"
+    assert len(defs) == 3, f"{name}: want a scalar, an array and an out= overload"
     for d in defs:
         assert [a.arg for a in d.args.args] == ["self", *QUERIES[name]]
         kw = {a.arg: ast.literal_eval(v) for a, v in zip(d.args.kwonlyargs, d.args.kw_defaults) if v is not None}
-        assert kw == {"nan_on_error": False}
+        assert {k: v for k, v in kw.items() if k != "out"} == {"nan_on_error": False}
+        assert [a.arg for a in d.args.kwonlyargs] == ["nan_on_error", "out"]
 
 
 def test_stub_constructor_and_properties_match_the_runtime():

@@ -633,6 +633,9 @@ fn apply_native<'py, P: Receiver>(
 /// and dtype checks of arguments the native path does not take.
 static PYTHON_APPLY: PyOnceLock<Py<PyAny>> = PyOnceLock::new();
 
+/// The `out=` form of `Function.apply` (relicore._elementwise.apply_out).
+static PYTHON_APPLY_OUT: PyOnceLock<Py<PyAny>> = PyOnceLock::new();
+
 /// A regular function of one of the generated tables.
 #[derive(Clone, Copy)]
 enum Entry {
@@ -852,14 +855,30 @@ impl Function {
     /// where the core's single-precision twin computes float32 input. Plain float64 (float32)
     /// arrays and Python numbers are handled here in one native call; anything else goes
     /// through the Python path (relicore._elementwise.apply), which converts and checks it.
-    #[pyo3(signature = (receiver, args, nan_on_error=false))]
+    ///
+    /// With `out` (an array) the result is written into it (relicore._elementwise.apply_out:
+    /// computed as above, then copied) and `out` is returned.
+    #[pyo3(signature = (receiver, args, nan_on_error=false, out=None))]
     fn apply<'py>(
         slf: &Bound<'py, Self>,
         receiver: &Bound<'py, PyAny>,
         args: &Bound<'py, PyTuple>,
         nan_on_error: bool,
+        out: Option<&Bound<'py, PyAny>>,
     ) -> PyResult<Bound<'py, PyAny>> {
         let py = slf.py();
+        if let Some(out) = out.filter(|o| !o.is_none()) {
+            let python = PYTHON_APPLY_OUT.get_or_try_init(py, || {
+                Ok::<_, PyErr>(
+                    py.import("relicore._elementwise")?
+                        .getattr("apply_out")?
+                        .unbind(),
+                )
+            })?;
+            return python
+                .bind(py)
+                .call1((slf, receiver, args, nan_on_error, out));
+        }
         let done = with_receiver!(slf.get().entry, receiver, |spec, r| apply_native(
             py,
             spec,

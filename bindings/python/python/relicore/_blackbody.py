@@ -16,7 +16,7 @@ from relicore._elementwise import apply_result as _apply_result
 __all__ = ['spectral_radiance_wavelength', 'spectral_radiance_frequency', 'spectral_radiance_wavenumber', 'photon_radiance_wavelength', 'photon_radiance_frequency', 'photon_radiance_wavenumber', 'radiance_temperature_derivative_wavelength', 'radiance_temperature_derivative_frequency', 'radiant_exitance', 'photon_exitance', 'photon_number_density', 'radiation_energy_density', 'peak_wavelength', 'peak_frequency', 'peak_wavenumber', 'photon_peak_wavelength', 'photon_peak_frequency', 'temperature_from_peak_wavelength', 'temperature_from_peak_frequency', 'band_fraction_wavelength', 'band_radiance_wavelength', 'band_photon_radiance_wavelength', 'band_radiance_frequency', 'temperature_from_band_radiance_wavelength', 'brightness_temperature_wavelength', 'brightness_temperature_frequency', 'rayleigh_jeans_temperature', 'ratio_temperature', 'thermodynamic_to_rayleigh_jeans_factor', 'kcmb_to_mjy_per_sr', 'thermal_sz_spectral_shape', 'thermal_sz_temperature_shape', 'thermal_sz_null_frequency', 'measured_spectral_radiance_wavelength', 'measured_spectral_radiance_frequency', 'measured_band_radiance_wavelength', 'object_temperature_wavelength', 'object_temperature_frequency', 'object_temperature_band', 'band_radiance_temperature_derivative_wavelength', 'brightness_temperature_wavelength_with_uncertainty', 'brightness_temperature_frequency_with_uncertainty', 'object_temperature_wavelength_with_uncertainty', 'object_temperature_frequency_with_uncertainty', 'object_temperature_band_with_uncertainty', 'calibrated_temperature_with_uncertainty']
 
 
-def spectral_radiance_wavelength(wavelength_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def spectral_radiance_wavelength(wavelength_m: Any, temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Planck spectral radiance per unit wavelength, B_λ = 2hc²/λ⁵ / (e^(hc/λkT) − 1).
 
     * `wavelength_m`: wavelength λ in m, finite and > 0.
@@ -28,10 +28,10 @@ def spectral_radiance_wavelength(wavelength_m: Any, temperature_k: Any, *, nan_o
 
     Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath; see the module documentation.
     """
-    return _F["spectral_radiance_wavelength"].apply(None, (wavelength_m, temperature_k, ), nan_on_error)
+    return _F["spectral_radiance_wavelength"].apply(None, (wavelength_m, temperature_k, ), nan_on_error, out)
 
 
-def spectral_radiance_frequency(frequency_hz: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def spectral_radiance_frequency(frequency_hz: Any, temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Planck spectral radiance per unit frequency, B_ν = (2hν³/c²) / (e^(hν/kT) − 1).
 
     * `frequency_hz`: frequency ν in Hz, finite and > 0.
@@ -40,10 +40,10 @@ def spectral_radiance_frequency(frequency_hz: Any, temperature_k: Any, *, nan_on
     Returns W m⁻² sr⁻¹ Hz⁻¹, ≥ 0. Errors as `spectral_radiance_wavelength`.
     Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
     """
-    return _F["spectral_radiance_frequency"].apply(None, (frequency_hz, temperature_k, ), nan_on_error)
+    return _F["spectral_radiance_frequency"].apply(None, (frequency_hz, temperature_k, ), nan_on_error, out)
 
 
-def spectral_radiance_wavenumber(wavenumber_per_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def spectral_radiance_wavenumber(wavenumber_per_m: Any, temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Planck spectral radiance per unit wavenumber, B_ṽ = 2hc²ṽ³ / (e^(hcṽ/kT) − 1).
 
     * `wavenumber_per_m`: wavenumber ṽ = 1/λ in m⁻¹ (not cm⁻¹), finite and > 0.
@@ -52,10 +52,10 @@ def spectral_radiance_wavenumber(wavenumber_per_m: Any, temperature_k: Any, *, n
     Returns W m⁻² sr⁻¹ per m⁻¹ (that is W m⁻¹ sr⁻¹), ≥ 0. Errors as
     `spectral_radiance_wavelength`. Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
     """
-    return _F["spectral_radiance_wavenumber"].apply(None, (wavenumber_per_m, temperature_k, ), nan_on_error)
+    return _F["spectral_radiance_wavenumber"].apply(None, (wavenumber_per_m, temperature_k, ), nan_on_error, out)
 
 
-def photon_radiance_wavelength(wavelength_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def photon_radiance_wavelength(wavelength_m: Any, temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Photon spectral radiance per unit wavelength, N_λ = B_λ/(hc/λ) = (2c/λ⁴) / (e^x − 1).
 
     * `wavelength_m`: m, > 0; `temperature_k`: K, > 0.
@@ -63,10 +63,10 @@ def photon_radiance_wavelength(wavelength_m: Any, temperature_k: Any, *, nan_on_
     Returns photons s⁻¹ m⁻² sr⁻¹ m⁻¹. Errors as `spectral_radiance_wavelength`.
     Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
     """
-    return _F["photon_radiance_wavelength"].apply(None, (wavelength_m, temperature_k, ), nan_on_error)
+    return _F["photon_radiance_wavelength"].apply(None, (wavelength_m, temperature_k, ), nan_on_error, out)
 
 
-def photon_radiance_frequency(frequency_hz: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def photon_radiance_frequency(frequency_hz: Any, temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Photon spectral radiance per unit frequency, N_ν = B_ν/(hν) = (2ν²/c²) / (e^(hν/kT) − 1).
 
     * `frequency_hz`: Hz, > 0; `temperature_k`: K, > 0.
@@ -74,10 +74,10 @@ def photon_radiance_frequency(frequency_hz: Any, temperature_k: Any, *, nan_on_e
     Returns photons s⁻¹ m⁻² sr⁻¹ Hz⁻¹. Errors as `spectral_radiance_wavelength`.
     Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
     """
-    return _F["photon_radiance_frequency"].apply(None, (frequency_hz, temperature_k, ), nan_on_error)
+    return _F["photon_radiance_frequency"].apply(None, (frequency_hz, temperature_k, ), nan_on_error, out)
 
 
-def photon_radiance_wavenumber(wavenumber_per_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def photon_radiance_wavenumber(wavenumber_per_m: Any, temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Photon spectral radiance per unit wavenumber, N_ṽ = 2cṽ² / (e^(hcṽ/kT) − 1).
 
     * `wavenumber_per_m`: m⁻¹, > 0; `temperature_k`: K, > 0.
@@ -85,10 +85,10 @@ def photon_radiance_wavenumber(wavenumber_per_m: Any, temperature_k: Any, *, nan
     Returns photons s⁻¹ m⁻² sr⁻¹ per m⁻¹. Errors as `spectral_radiance_wavelength`.
     Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
     """
-    return _F["photon_radiance_wavenumber"].apply(None, (wavenumber_per_m, temperature_k, ), nan_on_error)
+    return _F["photon_radiance_wavenumber"].apply(None, (wavenumber_per_m, temperature_k, ), nan_on_error, out)
 
 
-def radiance_temperature_derivative_wavelength(wavelength_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def radiance_temperature_derivative_wavelength(wavelength_m: Any, temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Temperature derivative of B_λ: ∂B_λ/∂T = B_λ · (x/T) / (1 − e^−x), x = hc/(λkT).
 
     * `wavelength_m`: m, > 0; `temperature_k`: K, > 0.
@@ -98,10 +98,10 @@ def radiance_temperature_derivative_wavelength(wavelength_m: Any, temperature_k:
     Method: B_λ·x(1 + E)/(T E) with E = e^x − 1, the one exponential B_λ needs (the
     overflow-safe form B_λ·(x/T)/(1 − e^−x) where an intermediate is not a normal number).
     """
-    return _F["radiance_temperature_derivative_wavelength"].apply(None, (wavelength_m, temperature_k, ), nan_on_error)
+    return _F["radiance_temperature_derivative_wavelength"].apply(None, (wavelength_m, temperature_k, ), nan_on_error, out)
 
 
-def radiance_temperature_derivative_frequency(frequency_hz: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def radiance_temperature_derivative_frequency(frequency_hz: Any, temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Temperature derivative of B_ν: ∂B_ν/∂T = B_ν · (x/T) / (1 − e^−x), x = hν/(kT).
 
     * `frequency_hz`: Hz, > 0; `temperature_k`: K, > 0.
@@ -109,10 +109,10 @@ def radiance_temperature_derivative_frequency(frequency_hz: Any, temperature_k: 
     Returns W m⁻² sr⁻¹ Hz⁻¹ K⁻¹, ≥ 0. Errors as `spectral_radiance_wavelength`.
     Accuracy: ≤ 8 ulp (`f64`, normal results) against mpmath.
     """
-    return _F["radiance_temperature_derivative_frequency"].apply(None, (frequency_hz, temperature_k, ), nan_on_error)
+    return _F["radiance_temperature_derivative_frequency"].apply(None, (frequency_hz, temperature_k, ), nan_on_error, out)
 
 
-def radiant_exitance(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def radiant_exitance(temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Radiant exitance of a blackbody, M = σT⁴ (Stefan 1879, Boltzmann 1884).
 
     * `temperature_k`: K, finite and > 0.
@@ -120,10 +120,10 @@ def radiant_exitance(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
     Returns W m⁻². Errors: `NonFinite(0)`, `NonPositive(0)`.
     Accuracy: ≤ 2 ulp (`f64`) against mpmath (T⁴ is formed to double length).
     """
-    return _F["radiant_exitance"].apply(None, (temperature_k, ), nan_on_error)
+    return _F["radiant_exitance"].apply(None, (temperature_k, ), nan_on_error, out)
 
 
-def photon_exitance(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def photon_exitance(temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Photon exitance of a blackbody, M_p = 4πζ(3)k³T³/(h³c²).
 
     * `temperature_k`: K, finite and > 0.
@@ -131,10 +131,10 @@ def photon_exitance(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
     Returns photons s⁻¹ m⁻². Errors: `NonFinite(0)`, `NonPositive(0)`.
     Accuracy: ≤ 2 ulp (`f64`) against mpmath.
     """
-    return _F["photon_exitance"].apply(None, (temperature_k, ), nan_on_error)
+    return _F["photon_exitance"].apply(None, (temperature_k, ), nan_on_error, out)
 
 
-def photon_number_density(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def photon_number_density(temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Photon number density of blackbody radiation at temperature T (isotropic, in equilibrium),
     n = 16πζ(3)(kT/hc)³ = 4M_p/c, M_p the photon exitance.
 
@@ -148,10 +148,10 @@ def photon_number_density(temperature_k: Any, *, nan_on_error: bool = False) -> 
     Reference: Planck's law integrated over frequency and solid angle, ∫ 8πν²/c³ /(e^(hν/kT) − 1) dν
     (e.g. Rybicki & Lightman, Radiative Processes in Astrophysics, 1979, ch. 1).
     """
-    return _F["photon_number_density"].apply(None, (temperature_k, ), nan_on_error)
+    return _F["photon_number_density"].apply(None, (temperature_k, ), nan_on_error, out)
 
 
-def radiation_energy_density(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def radiation_energy_density(temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Energy density of blackbody radiation at temperature T, u = aT⁴ = 4σT⁴/c, with the radiation
     density constant a = 8π⁵k⁴/(15h³c³).
 
@@ -165,80 +165,80 @@ def radiation_energy_density(temperature_k: Any, *, nan_on_error: bool = False) 
     Reference: Stefan 1879, Boltzmann 1884; u = 4M/c for isotropic radiation (e.g. Rybicki &
     Lightman 1979, ch. 1).
     """
-    return _F["radiation_energy_density"].apply(None, (temperature_k, ), nan_on_error)
+    return _F["radiation_energy_density"].apply(None, (temperature_k, ), nan_on_error, out)
 
 
-def peak_wavelength(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def peak_wavelength(temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Wavelength of the maximum of B_λ, λ_max = b/T with b = c₂/x₅ (Wien's displacement law).
 
     * `temperature_k`: K, > 0. Returns m. Errors: `NonFinite(0)`, `NonPositive(0)`.
 
     Accuracy: ≤ 1 ulp (`f64`) against mpmath.
     """
-    return _F["peak_wavelength"].apply(None, (temperature_k, ), nan_on_error)
+    return _F["peak_wavelength"].apply(None, (temperature_k, ), nan_on_error, out)
 
 
-def peak_frequency(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def peak_frequency(temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Frequency of the maximum of B_ν, ν_max = x₃kT/h.
 
     * `temperature_k`: K, > 0. Returns Hz. Errors: `NonFinite(0)`, `NonPositive(0)`.
 
     Accuracy: ≤ 1 ulp (`f64`) against mpmath.
     """
-    return _F["peak_frequency"].apply(None, (temperature_k, ), nan_on_error)
+    return _F["peak_frequency"].apply(None, (temperature_k, ), nan_on_error, out)
 
 
-def peak_wavenumber(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def peak_wavenumber(temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Wavenumber of the maximum of B_ṽ, ṽ_max = x₃T/c₂ (same x as the frequency form).
 
     * `temperature_k`: K, > 0. Returns m⁻¹. Errors: `NonFinite(0)`, `NonPositive(0)`.
 
     Accuracy: ≤ 1 ulp (`f64`) against mpmath.
     """
-    return _F["peak_wavenumber"].apply(None, (temperature_k, ), nan_on_error)
+    return _F["peak_wavenumber"].apply(None, (temperature_k, ), nan_on_error, out)
 
 
-def photon_peak_wavelength(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def photon_peak_wavelength(temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Wavelength of the maximum of the photon radiance N_λ (and of λB_λ), c₂/(x₄T).
 
     * `temperature_k`: K, > 0. Returns m. Errors: `NonFinite(0)`, `NonPositive(0)`.
 
     Accuracy: ≤ 1 ulp (`f64`) against mpmath.
     """
-    return _F["photon_peak_wavelength"].apply(None, (temperature_k, ), nan_on_error)
+    return _F["photon_peak_wavelength"].apply(None, (temperature_k, ), nan_on_error, out)
 
 
-def photon_peak_frequency(temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def photon_peak_frequency(temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Frequency of the maximum of the photon radiance N_ν, x₂kT/h.
 
     * `temperature_k`: K, > 0. Returns Hz. Errors: `NonFinite(0)`, `NonPositive(0)`.
 
     Accuracy: ≤ 1 ulp (`f64`) against mpmath.
     """
-    return _F["photon_peak_frequency"].apply(None, (temperature_k, ), nan_on_error)
+    return _F["photon_peak_frequency"].apply(None, (temperature_k, ), nan_on_error, out)
 
 
-def temperature_from_peak_wavelength(wavelength_m: Any, *, nan_on_error: bool = False) -> Any:
+def temperature_from_peak_wavelength(wavelength_m: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Temperature whose B_λ peaks at the given wavelength, T = b/λ_max.
 
     * `wavelength_m`: m, > 0. Returns K. Errors: `NonFinite(0)`, `NonPositive(0)`.
 
     Accuracy: ≤ 1 ulp (`f64`) against mpmath.
     """
-    return _F["temperature_from_peak_wavelength"].apply(None, (wavelength_m, ), nan_on_error)
+    return _F["temperature_from_peak_wavelength"].apply(None, (wavelength_m, ), nan_on_error, out)
 
 
-def temperature_from_peak_frequency(frequency_hz: Any, *, nan_on_error: bool = False) -> Any:
+def temperature_from_peak_frequency(frequency_hz: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Temperature whose B_ν peaks at the given frequency, T = hν_max/(x₃k).
 
     * `frequency_hz`: Hz, > 0. Returns K. Errors: `NonFinite(0)`, `NonPositive(0)`.
 
     Accuracy: ≤ 1 ulp (`f64`) against mpmath.
     """
-    return _F["temperature_from_peak_frequency"].apply(None, (frequency_hz, ), nan_on_error)
+    return _F["temperature_from_peak_frequency"].apply(None, (frequency_hz, ), nan_on_error, out)
 
 
-def band_fraction_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def band_fraction_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Fraction of the total blackbody radiance emitted between two wavelengths,
     F = ∫_{λ₁}^{λ₂} B_λ dλ / (σT⁴/π).
 
@@ -251,10 +251,10 @@ def band_fraction_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, 
 
     Accuracy: within 1e-15 absolute (`f64`) against mpmath quadrature; see the module docs.
     """
-    return _F["band_fraction_wavelength"].apply(None, (lower_m, upper_m, temperature_k, ), nan_on_error)
+    return _F["band_fraction_wavelength"].apply(None, (lower_m, upper_m, temperature_k, ), nan_on_error, out)
 
 
-def band_radiance_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def band_radiance_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Band radiance between two wavelengths, L = ∫_{λ₁}^{λ₂} B_λ(λ, T) dλ.
 
     * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
@@ -263,10 +263,10 @@ def band_radiance_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, 
     Returns W m⁻² sr⁻¹. Errors as `band_fraction_wavelength`.
     Accuracy: within max(1e-14·L, 1e-15·σT⁴/π) (`f64`) against mpmath quadrature.
     """
-    return _F["band_radiance_wavelength"].apply(None, (lower_m, upper_m, temperature_k, ), nan_on_error)
+    return _F["band_radiance_wavelength"].apply(None, (lower_m, upper_m, temperature_k, ), nan_on_error, out)
 
 
-def band_photon_radiance_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def band_photon_radiance_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Band photon radiance between two wavelengths, ∫_{λ₁}^{λ₂} N_λ(λ, T) dλ.
 
     * `lower_m`, `upper_m`: band edges in m, 0 ≤ λ₁ < λ₂ ≤ +∞.
@@ -275,10 +275,10 @@ def band_photon_radiance_wavelength(lower_m: Any, upper_m: Any, temperature_k: A
     Returns photons s⁻¹ m⁻² sr⁻¹. Errors as `band_fraction_wavelength`.
     Accuracy: within max(1e-14·N, 1e-15·N_total) (`f64`) against mpmath quadrature.
     """
-    return _F["band_photon_radiance_wavelength"].apply(None, (lower_m, upper_m, temperature_k, ), nan_on_error)
+    return _F["band_photon_radiance_wavelength"].apply(None, (lower_m, upper_m, temperature_k, ), nan_on_error, out)
 
 
-def band_radiance_frequency(lower_hz: Any, upper_hz: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def band_radiance_frequency(lower_hz: Any, upper_hz: Any, temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Band radiance between two frequencies, L = ∫_{ν₁}^{ν₂} B_ν(ν, T) dν.
 
     * `lower_hz`: ν₁ in Hz, finite and ≥ 0; `upper_hz`: ν₂ > ν₁, +∞ allowed.
@@ -287,10 +287,10 @@ def band_radiance_frequency(lower_hz: Any, upper_hz: Any, temperature_k: Any, *,
     Returns W m⁻² sr⁻¹. Errors as `band_fraction_wavelength`.
     Accuracy: within max(1e-14·L, 1e-15·σT⁴/π) (`f64`) against mpmath quadrature.
     """
-    return _F["band_radiance_frequency"].apply(None, (lower_hz, upper_hz, temperature_k, ), nan_on_error)
+    return _F["band_radiance_frequency"].apply(None, (lower_hz, upper_hz, temperature_k, ), nan_on_error, out)
 
 
-def temperature_from_band_radiance_wavelength(lower_m: Any, upper_m: Any, radiance: Any, *, nan_on_error: bool = False) -> Any:
+def temperature_from_band_radiance_wavelength(lower_m: Any, upper_m: Any, radiance: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Temperature of the blackbody whose band radiance between two wavelengths equals the given
     value: the inverse in T of `band_radiance_wavelength`.
 
@@ -306,10 +306,10 @@ def temperature_from_band_radiance_wavelength(lower_m: Any, upper_m: Any, radian
     brightness temperature of the mean spectral radiance at the band centre.
     Accuracy: round trip within 1e-14 relative (`f64`) against mpmath root finding.
     """
-    return _F["temperature_from_band_radiance_wavelength"].apply(None, (lower_m, upper_m, radiance, ), nan_on_error)
+    return _F["temperature_from_band_radiance_wavelength"].apply(None, (lower_m, upper_m, radiance, ), nan_on_error, out)
 
 
-def brightness_temperature_wavelength(wavelength_m: Any, spectral_radiance: Any, *, nan_on_error: bool = False) -> Any:
+def brightness_temperature_wavelength(wavelength_m: Any, spectral_radiance: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Brightness temperature at a wavelength: the T of the blackbody whose B_λ equals the given
     spectral radiance, T = c₂ / (λ ln(1 + 2hc²/(λ⁵ L))).
 
@@ -321,10 +321,10 @@ def brightness_temperature_wavelength(wavelength_m: Any, spectral_radiance: Any,
     within 1e-14 relative (`f64`) against mpmath.
     Reference: Planck's law solved for T (closed form).
     """
-    return _F["brightness_temperature_wavelength"].apply(None, (wavelength_m, spectral_radiance, ), nan_on_error)
+    return _F["brightness_temperature_wavelength"].apply(None, (wavelength_m, spectral_radiance, ), nan_on_error, out)
 
 
-def brightness_temperature_frequency(frequency_hz: Any, spectral_radiance: Any, *, nan_on_error: bool = False) -> Any:
+def brightness_temperature_frequency(frequency_hz: Any, spectral_radiance: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Brightness temperature at a frequency: T = (hν/k) / ln(1 + 2hν³/(c² L)).
 
     * `frequency_hz`: Hz, finite and > 0.
@@ -334,10 +334,10 @@ def brightness_temperature_frequency(frequency_hz: Any, spectral_radiance: Any, 
     Accuracy: round trip within 1e-14 relative (`f64`) against mpmath; where 2hν³/c² is below
     the normal range (ν below about 1e-95 Hz in `f64`) within 5e-13 (`tests/blackbody_edges.rs`).
     """
-    return _F["brightness_temperature_frequency"].apply(None, (frequency_hz, spectral_radiance, ), nan_on_error)
+    return _F["brightness_temperature_frequency"].apply(None, (frequency_hz, spectral_radiance, ), nan_on_error, out)
 
 
-def rayleigh_jeans_temperature(frequency_hz: Any, spectral_radiance: Any, *, nan_on_error: bool = False) -> Any:
+def rayleigh_jeans_temperature(frequency_hz: Any, spectral_radiance: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Rayleigh-Jeans temperature: T_RJ = c² L / (2kν²), the temperature the long-wavelength limit
     of Planck's law assigns to a spectral radiance (the radio astronomer's "brightness
     temperature"; below the Planck brightness temperature by about hν/2k).
@@ -345,14 +345,21 @@ def rayleigh_jeans_temperature(frequency_hz: Any, spectral_radiance: Any, *, nan
     * `frequency_hz`: Hz, finite and > 0.
     * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
 
-    Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`. Accuracy: ≤ 2 ulp (`f64`) against
-    mpmath (formed to double length with exact power-of-two scalings, so `f32` does not
-    overflow).
+    Returns K. Errors: `NonFinite(i)`, `NonPositive(i)` (and `NonFinite(1)` when the result
+    overflows). Accuracy: ≤ 2 ulp (`f64` and `f32`) against mpmath whenever the result is a
+    normal number, subnormal radiances and frequencies included (`tests/data/blackbody.txt`);
+    a subnormal result carries the rounding of its fewer bits.
+
+    Method: ν = 2^m f and L = 2^n g with f, g in [√½, √2) (a subnormal input first scaled up
+    exactly by 2^p), the double-length quotient (c²/2k)·2^-120 · g/f² of numbers near 1, then
+    one exact scaling by 2^(120 + n − 2m) in steps that round at most once. Forming c²L/2k
+    directly lost the bits a subnormal L lacks (3e-12 relative at L = 1.5e-316, where the
+    result 5.4e-308 K is normal).
     """
-    return _F["rayleigh_jeans_temperature"].apply(None, (frequency_hz, spectral_radiance, ), nan_on_error)
+    return _F["rayleigh_jeans_temperature"].apply(None, (frequency_hz, spectral_radiance, ), nan_on_error, out)
 
 
-def ratio_temperature(wavelength_1_m: Any, wavelength_2_m: Any, radiance_ratio: Any, emissivity_ratio: Any, *, nan_on_error: bool = False) -> Any:
+def ratio_temperature(wavelength_1_m: Any, wavelength_2_m: Any, radiance_ratio: Any, emissivity_ratio: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Two-colour (ratio) temperature: the T at which ε₁B_λ(λ₁,T) / (ε₂B_λ(λ₂,T)) equals the
     measured radiance ratio, with the exact Planck law (not Wien's approximation).
 
@@ -371,10 +378,10 @@ def ratio_temperature(wavelength_1_m: Any, wavelength_2_m: Any, radiance_ratio: 
     Reference: two-colour pyrometry, e.g. DeWitt & Nutter (eds.), Theory and Practice of
     Radiation Thermometry, Wiley 1988, ch. 6. Cautions as in the module documentation.
     """
-    return _F["ratio_temperature"].apply(None, (wavelength_1_m, wavelength_2_m, radiance_ratio, emissivity_ratio, ), nan_on_error)
+    return _F["ratio_temperature"].apply(None, (wavelength_1_m, wavelength_2_m, radiance_ratio, emissivity_ratio, ), nan_on_error, out)
 
 
-def thermodynamic_to_rayleigh_jeans_factor(frequency_hz: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def thermodynamic_to_rayleigh_jeans_factor(frequency_hz: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Thermodynamic-to-Rayleigh-Jeans conversion factor dT_RJ/dT_CMB = x²eˣ/(eˣ − 1)².
 
     * `frequency_hz`: Hz, finite and > 0.
@@ -383,10 +390,10 @@ def thermodynamic_to_rayleigh_jeans_factor(frequency_hz: Any, cmb_temperature_k:
     Returns a number in (0, 1). Errors: `NonFinite(i)`, `NonPositive(i)`.
     Accuracy: ≤ 8 ulp (`f64`) against mpmath.
     """
-    return _F["thermodynamic_to_rayleigh_jeans_factor"].apply(None, (frequency_hz, cmb_temperature_k, ), nan_on_error)
+    return _F["thermodynamic_to_rayleigh_jeans_factor"].apply(None, (frequency_hz, cmb_temperature_k, ), nan_on_error, out)
 
 
-def kcmb_to_mjy_per_sr(frequency_hz: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def kcmb_to_mjy_per_sr(frequency_hz: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """dB_ν/dT at the CMB temperature, in MJy sr⁻¹ per K_CMB: converts a CMB temperature
     fluctuation to a specific-intensity fluctuation.
 
@@ -396,10 +403,10 @@ def kcmb_to_mjy_per_sr(frequency_hz: Any, cmb_temperature_k: Any, *, nan_on_erro
     Returns MJy sr⁻¹ K⁻¹ (1e20 × the SI value in W m⁻² sr⁻¹ Hz⁻¹ K⁻¹). Errors: `NonFinite(i)`,
     `NonPositive(i)`. Accuracy: ≤ 8 ulp (`f64`) against mpmath.
     """
-    return _F["kcmb_to_mjy_per_sr"].apply(None, (frequency_hz, cmb_temperature_k, ), nan_on_error)
+    return _F["kcmb_to_mjy_per_sr"].apply(None, (frequency_hz, cmb_temperature_k, ), nan_on_error, out)
 
 
-def thermal_sz_spectral_shape(frequency_hz: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def thermal_sz_spectral_shape(frequency_hz: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Thermal SZ intensity shape g(x) = x⁴eˣ/(eˣ − 1)² (x coth(x/2) − 4) (ΔI/I₀ = y g(x)).
 
     * `frequency_hz`: Hz, finite and > 0; `cmb_temperature_k`: T₀ in K, finite and > 0.
@@ -407,10 +414,10 @@ def thermal_sz_spectral_shape(frequency_hz: Any, cmb_temperature_k: Any, *, nan_
     Returns a pure number (negative below the null, positive above). Errors: `NonFinite(i)`,
     `NonPositive(i)`. Accuracy: within 1e-15·(x + 4)·x⁴eˣ/(eˣ − 1)² absolute (`f64`).
     """
-    return _F["thermal_sz_spectral_shape"].apply(None, (frequency_hz, cmb_temperature_k, ), nan_on_error)
+    return _F["thermal_sz_spectral_shape"].apply(None, (frequency_hz, cmb_temperature_k, ), nan_on_error, out)
 
 
-def thermal_sz_temperature_shape(frequency_hz: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def thermal_sz_temperature_shape(frequency_hz: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Thermal SZ temperature shape f(x) = x coth(x/2) − 4 (ΔT_CMB/T₀ = y f(x)).
 
     * `frequency_hz`: Hz, finite and > 0; `cmb_temperature_k`: T₀ in K, finite and > 0.
@@ -419,10 +426,10 @@ def thermal_sz_temperature_shape(frequency_hz: Any, cmb_temperature_k: Any, *, n
     T₀ = 2.72548 K), growing like x − 4 at high frequency. Errors: `NonFinite(i)`,
     `NonPositive(i)`. Accuracy: within 1e-15·(x + 4) absolute (`f64`) against mpmath.
     """
-    return _F["thermal_sz_temperature_shape"].apply(None, (frequency_hz, cmb_temperature_k, ), nan_on_error)
+    return _F["thermal_sz_temperature_shape"].apply(None, (frequency_hz, cmb_temperature_k, ), nan_on_error, out)
 
 
-def thermal_sz_null_frequency(cmb_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def thermal_sz_null_frequency(cmb_temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Frequency of the thermal SZ null, ν₀ = x₀kT₀/h with x₀ coth(x₀/2) = 4 (x₀ = 3.830016…).
 
     * `cmb_temperature_k`: T₀ in K, finite and > 0.
@@ -431,10 +438,10 @@ def thermal_sz_null_frequency(cmb_temperature_k: Any, *, nan_on_error: bool = Fa
     Accuracy: ≤ 2 ulp (`f64`) against mpmath (non-relativistic limit; relativistic corrections
     move the null upward with cluster temperature and are not included).
     """
-    return _F["thermal_sz_null_frequency"].apply(None, (cmb_temperature_k, ), nan_on_error)
+    return _F["thermal_sz_null_frequency"].apply(None, (cmb_temperature_k, ), nan_on_error, out)
 
 
-def measured_spectral_radiance_wavelength(wavelength_m: Any, object_temperature_k: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def measured_spectral_radiance_wavelength(wavelength_m: Any, object_temperature_k: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Measured spectral radiance at one wavelength of a scene (the forward measurement equation):
     L_meas = τ[ε B_λ(T_obj) + (1 − ε) B_λ(T_refl)] + (1 − τ) B_λ(T_path).
 
@@ -452,10 +459,10 @@ def measured_spectral_radiance_wavelength(wavelength_m: Any, object_temperature_
     Accuracy: within 1e-14 relative (`f64`) against mpmath (a sum of non-negative terms, each
     within 4 ulp). Reference: the measurement equation of radiation thermometry (module docs).
     """
-    return _F["measured_spectral_radiance_wavelength"].apply(None, (wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+    return _F["measured_spectral_radiance_wavelength"].apply(None, (wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error, out)
 
 
-def measured_spectral_radiance_frequency(frequency_hz: Any, object_temperature_k: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def measured_spectral_radiance_frequency(frequency_hz: Any, object_temperature_k: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Measured spectral radiance at one frequency of a scene:
     L_meas = τ[ε B_ν(T_obj) + (1 − ε) B_ν(T_refl)] + (1 − τ) B_ν(T_path).
 
@@ -465,10 +472,10 @@ def measured_spectral_radiance_frequency(frequency_hz: Any, object_temperature_k
     Returns W m⁻² sr⁻¹ Hz⁻¹, ≥ 0. Errors as `measured_spectral_radiance_wavelength`.
     Accuracy: within 1e-14 relative (`f64`) against mpmath.
     """
-    return _F["measured_spectral_radiance_frequency"].apply(None, (frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+    return _F["measured_spectral_radiance_frequency"].apply(None, (frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error, out)
 
 
-def measured_band_radiance_wavelength(lower_m: Any, upper_m: Any, object_temperature_k: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def measured_band_radiance_wavelength(lower_m: Any, upper_m: Any, object_temperature_k: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Measured band radiance between two wavelengths of a scene: the measurement equation with
     L = `band_radiance_wavelength`.
 
@@ -481,10 +488,10 @@ def measured_band_radiance_wavelength(lower_m: Any, upper_m: Any, object_tempera
     errors of `measured_spectral_radiance_wavelength` at positions 2 to 6.
     Accuracy: within 1e-14 relative (`f64`) against mpmath quadrature.
     """
-    return _F["measured_band_radiance_wavelength"].apply(None, (lower_m, upper_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+    return _F["measured_band_radiance_wavelength"].apply(None, (lower_m, upper_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error, out)
 
 
-def object_temperature_wavelength(wavelength_m: Any, signal: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def object_temperature_wavelength(wavelength_m: Any, signal: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Object temperature from the spectral radiance measured at one wavelength (the inverse
     measurement equation): the brightness temperature of the corrected object radiance
     L_obj = ([L_meas − (1 − τ)B_λ(T_path)]/τ − (1 − ε)B_λ(T_refl))/ε.
@@ -504,10 +511,10 @@ def object_temperature_wavelength(wavelength_m: Any, signal: Any, emissivity: An
     κ ≤ 20 (module docs); ε = τ = 1 gives `brightness_temperature_wavelength` bit for bit.
     Reference: the measurement equation (module docs), Planck's law solved for T.
     """
-    return _F["object_temperature_wavelength"].apply(None, (wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+    return _F["object_temperature_wavelength"].apply(None, (wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error, out)
 
 
-def object_temperature_frequency(frequency_hz: Any, signal: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def object_temperature_frequency(frequency_hz: Any, signal: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Object temperature from the spectral radiance measured at one frequency: the brightness
     temperature (`brightness_temperature_frequency`) of the corrected object radiance.
 
@@ -518,10 +525,10 @@ def object_temperature_frequency(frequency_hz: Any, signal: Any, emissivity: Any
     Returns T_obj in K. Errors as `object_temperature_wavelength`. Accuracy: within 1e-13
     relative (`f64`) against mpmath for κ ≤ 20.
     """
-    return _F["object_temperature_frequency"].apply(None, (frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+    return _F["object_temperature_frequency"].apply(None, (frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error, out)
 
 
-def object_temperature_band(lower_m: Any, upper_m: Any, signal: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def object_temperature_band(lower_m: Any, upper_m: Any, signal: Any, emissivity: Any, reflected_temperature_k: Any, transmittance: Any, path_temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Object temperature from the band radiance measured between two wavelengths: the
     temperature (`temperature_from_band_radiance_wavelength`, the shared root finder) of the
     corrected object band radiance.
@@ -536,10 +543,10 @@ def object_temperature_band(lower_m: Any, upper_m: Any, signal: Any, emissivity:
     `NoConvergence` (seen only far outside physical arguments).
     Accuracy: within 1e-13 relative (`f64`) against mpmath for κ ≤ 20.
     """
-    return _F["object_temperature_band"].apply(None, (lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error)
+    return _F["object_temperature_band"].apply(None, (lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, ), nan_on_error, out)
 
 
-def band_radiance_temperature_derivative_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def band_radiance_temperature_derivative_wavelength(lower_m: Any, upper_m: Any, temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Temperature derivative of the band radiance between two wavelengths, dL/dT with
     L = `band_radiance_wavelength`: dL/dT = (4L + K T⁴ (x₁ f(x₁) − x₂ f(x₂)))/T,
     f(t) = t³/(eᵗ − 1), x = c₂/(λT) at the band edges, K = 2k⁴/(h³c²) (the derivative of
@@ -552,7 +559,7 @@ def band_radiance_temperature_derivative_wavelength(lower_m: Any, upper_m: Any, 
     Accuracy: within 1e-13 relative (`f64`) against mpmath quadrature of ∂B_λ/∂T over the band
     for x at the long-wave edge ≥ 0.05 (below, 4L and the edge terms cancel as 4/x).
     """
-    return _F["band_radiance_temperature_derivative_wavelength"].apply(None, (lower_m, upper_m, temperature_k, ), nan_on_error)
+    return _F["band_radiance_temperature_derivative_wavelength"].apply(None, (lower_m, upper_m, temperature_k, ), nan_on_error, out)
 
 
 def brightness_temperature_wavelength_with_uncertainty(wavelength_m: Any, spectral_radiance: Any, spectral_radiance_uncertainty: Any, *, nan_on_error: bool = False) -> _results.TemperatureUncertainty:

@@ -51,7 +51,7 @@ class UniverseFunctions:
         """
         return _F["matter_radiation_equality_redshift"].call(self, ())
 
-    def dimensionless_hubble(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def dimensionless_hubble(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Dimensionless Hubble rate E(z) = H(z)/H0, from the Friedmann equation
         E² = Ω_cb(1+z)³ + Ω_r(1+z)⁴ + Σ ρ_ν,i(z)/ρ_c + Ω_k(1+z)² + Ω_de f_de(z), with massive
         neutrinos by the exact Fermi-Dirac energy integral and f_de of the w0–wa model.
@@ -61,52 +61,52 @@ class UniverseFunctions:
         Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-14 relative (`f64`) against
         mpmath (`tests/data/cosmology.txt`).
         """
-        return _F["dimensionless_hubble"].apply(self, (z, ), nan_on_error)
+        return _F["dimensionless_hubble"].apply(self, (z, ), nan_on_error, out)
 
-    def hubble_parameter_km_s_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def hubble_parameter_km_s_mpc(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Hubble parameter H(z) = H0 E(z), km s⁻¹ Mpc⁻¹. Errors and accuracy as
         `dimensionless_hubble`.
         """
-        return _F["hubble_parameter_km_s_mpc"].apply(self, (z, ), nan_on_error)
+        return _F["hubble_parameter_km_s_mpc"].apply(self, (z, ), nan_on_error, out)
 
-    def omega_matter_at(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def omega_matter_at(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Matter density parameter at z (cold dark matter, baryons and massive neutrinos, the
         same bookkeeping as `omega_matter` today), in [0, 1] for flat models. Errors as
         `dimensionless_hubble`.
         """
-        return _F["omega_matter_at"].apply(self, (z, ), nan_on_error)
+        return _F["omega_matter_at"].apply(self, (z, ), nan_on_error, out)
 
-    def omega_radiation_at(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def omega_radiation_at(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Radiation density parameter at z (photons and massless neutrino species). Errors as
         `dimensionless_hubble`.
         """
-        return _F["omega_radiation_at"].apply(self, (z, ), nan_on_error)
+        return _F["omega_radiation_at"].apply(self, (z, ), nan_on_error, out)
 
-    def omega_dark_energy_at(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def omega_dark_energy_at(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Dark-energy density parameter at z. Errors as
         `dimensionless_hubble`.
         """
-        return _F["omega_dark_energy_at"].apply(self, (z, ), nan_on_error)
+        return _F["omega_dark_energy_at"].apply(self, (z, ), nan_on_error, out)
 
-    def omega_curvature_at(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def omega_curvature_at(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Curvature density parameter at z, Ω_k(1+z)²/E². Errors as
         `dimensionless_hubble`.
         """
-        return _F["omega_curvature_at"].apply(self, (z, ), nan_on_error)
+        return _F["omega_curvature_at"].apply(self, (z, ), nan_on_error, out)
 
-    def critical_density_kg_m3(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def critical_density_kg_m3(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Critical density at z, ρ_c(z) = 3H(z)²/(8πG), kg m⁻³ (G from CODATA 2022). Errors as
         `dimensionless_hubble`.
         """
-        return _F["critical_density_kg_m3"].apply(self, (z, ), nan_on_error)
+        return _F["critical_density_kg_m3"].apply(self, (z, ), nan_on_error, out)
 
-    def cmb_temperature_at_k(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def cmb_temperature_at_k(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """CMB temperature at z, T0(1+z), K. Errors: `NonFinite(0)`, `Negative(0)`. Exact to one
         rounding.
         """
-        return _F["cmb_temperature_at_k"].apply(self, (z, ), nan_on_error)
+        return _F["cmb_temperature_at_k"].apply(self, (z, ), nan_on_error, out)
 
-    def comoving_distance_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def comoving_distance_mpc(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Line-of-sight comoving distance D_C = (c/H0) ∫₀^z dz'/E(z'), Mpc (Hogg 1999 eq. 15).
 
         * `z`: redshift, finite and ≥ 0.
@@ -118,36 +118,36 @@ class UniverseFunctions:
         neutrinos). Method: the per-universe table (see `table.rs`) for z ≤ 16383, the shared
         quadrature in s = √a beyond.
         """
-        return _F["comoving_distance_mpc"].apply(self, (z, ), nan_on_error)
+        return _F["comoving_distance_mpc"].apply(self, (z, ), nan_on_error, out)
 
-    def transverse_comoving_distance_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def transverse_comoving_distance_mpc(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Transverse comoving distance D_M, Mpc (Hogg 1999 eq. 16: equal to D_C when flat, the
         sinh/sin form when open/closed). Errors and accuracy as
         `comoving_distance_mpc`.
         """
-        return _F["transverse_comoving_distance_mpc"].apply(self, (z, ), nan_on_error)
+        return _F["transverse_comoving_distance_mpc"].apply(self, (z, ), nan_on_error, out)
 
-    def angular_diameter_distance_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def angular_diameter_distance_mpc(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Angular-diameter distance D_A = D_M/(1+z), Mpc (Hogg 1999 eq. 18). Errors and accuracy
         as `comoving_distance_mpc`.
         """
-        return _F["angular_diameter_distance_mpc"].apply(self, (z, ), nan_on_error)
+        return _F["angular_diameter_distance_mpc"].apply(self, (z, ), nan_on_error, out)
 
-    def luminosity_distance_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def luminosity_distance_mpc(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Luminosity distance D_L = (1+z) D_M, Mpc (Hogg 1999 eq. 21). Errors and accuracy as
         `comoving_distance_mpc`.
         """
-        return _F["luminosity_distance_mpc"].apply(self, (z, ), nan_on_error)
+        return _F["luminosity_distance_mpc"].apply(self, (z, ), nan_on_error, out)
 
-    def distance_modulus(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def distance_modulus(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Distance modulus 5 log10(D_L / 10 pc), magnitudes (Hogg 1999 eq. 25).
 
         Errors: `NonFinite(0)`, `Negative(0)`, `NonPositive(0)` at z = 0 (D_L = 0).
         Accuracy: within 1e-12 absolute (`f64`) against mpmath.
         """
-        return _F["distance_modulus"].apply(self, (z, ), nan_on_error)
+        return _F["distance_modulus"].apply(self, (z, ), nan_on_error, out)
 
-    def comoving_volume_gpc3(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def comoving_volume_gpc3(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Comoving volume inside redshift z over the whole sky, Gpc³ (Hogg 1999 eq. 29), written
         as V = 2πχ³ Σₙ 4ⁿ⁺¹ wⁿ/(2n+3)!, w = Ω_k (χ/D_H)², which is exact for open, flat and
         closed models and free of the cancellation of the closed forms at small w (the closed
@@ -155,21 +155,21 @@ class UniverseFunctions:
 
         Errors and accuracy as `comoving_distance_mpc`.
         """
-        return _F["comoving_volume_gpc3"].apply(self, (z, ), nan_on_error)
+        return _F["comoving_volume_gpc3"].apply(self, (z, ), nan_on_error, out)
 
-    def differential_comoving_volume_mpc3_sr(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def differential_comoving_volume_mpc3_sr(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Differential comoving volume dV_C/dz/dΩ = D_H D_M²/E(z), Mpc³ sr⁻¹ (Hogg 1999 eq. 28).
         Errors and accuracy as `comoving_distance_mpc`.
         """
-        return _F["differential_comoving_volume_mpc3_sr"].apply(self, (z, ), nan_on_error)
+        return _F["differential_comoving_volume_mpc3_sr"].apply(self, (z, ), nan_on_error, out)
 
-    def transverse_scale_kpc_per_arcsec(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def transverse_scale_kpc_per_arcsec(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Proper transverse size per arcsecond at z, D_A·π/648000, kpc per arcsec. Errors and
         accuracy as `comoving_distance_mpc`.
         """
-        return _F["transverse_scale_kpc_per_arcsec"].apply(self, (z, ), nan_on_error)
+        return _F["transverse_scale_kpc_per_arcsec"].apply(self, (z, ), nan_on_error, out)
 
-    def lookback_time_gyr(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def lookback_time_gyr(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Lookback time t(0) − t(z) = (1/H0) ∫₀^z dz'/((1+z')E(z')), Gyr (Hogg 1999 eq. 30).
 
         * `z`: redshift, finite and ≥ 0.
@@ -177,9 +177,9 @@ class UniverseFunctions:
         Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-12 relative (`f64`) for z up
         to 1e4 against mpmath.
         """
-        return _F["lookback_time_gyr"].apply(self, (z, ), nan_on_error)
+        return _F["lookback_time_gyr"].apply(self, (z, ), nan_on_error, out)
 
-    def age_gyr(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def age_gyr(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Age of the universe at redshift z, (1/H0) ∫_z^∞ dz'/((1+z')E(z')), Gyr.
 
         * `z`: redshift, finite and ≥ 0 (z = 0: the age today).
@@ -192,9 +192,9 @@ class UniverseFunctions:
         (`f64`) for z up to 1e8 against mpmath; the Einstein-de Sitter and flat ΛCDM closed forms
         are among the vectors.
         """
-        return _F["age_gyr"].apply(self, (z, ), nan_on_error)
+        return _F["age_gyr"].apply(self, (z, ), nan_on_error, out)
 
-    def conformal_time_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def conformal_time_mpc(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Conformal time at z times c, c·η(z) = (c/H0) ∫_z^∞ dz'/E(z'), Mpc: the comoving horizon.
 
         * `z`: redshift, finite and ≥ 0.
@@ -203,18 +203,18 @@ class UniverseFunctions:
         neither radiation nor matter, e.g. the empty Milne model). Accuracy: within 1e-12
         relative (`f64`) for z up to 1e8 against mpmath.
         """
-        return _F["conformal_time_mpc"].apply(self, (z, ), nan_on_error)
+        return _F["conformal_time_mpc"].apply(self, (z, ), nan_on_error, out)
 
-    def angular_diameter_distance_between_mpc(self, z1: Any, z2: Any, *, nan_on_error: bool = False) -> Any:
+    def angular_diameter_distance_between_mpc(self, z1: Any, z2: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Angular-diameter distance of an object at z2 seen from z1 ≤ z2, D_M(χ2 − χ1)/(1 + z2),
         Mpc (Hogg 1999 eq. 19, and its sin form for closed models).
 
         Errors: `NonFinite(i)`, `Negative(i)`, `EmptyInterval(0)` when z2 < z1.
         Accuracy: within 1e-12 relative (`f64`) unless z2 − z1 is so small that χ2 − χ1 cancels.
         """
-        return _F["angular_diameter_distance_between_mpc"].apply(self, (z1, z2, ), nan_on_error)
+        return _F["angular_diameter_distance_between_mpc"].apply(self, (z1, z2, ), nan_on_error, out)
 
-    def redshift_at_age_gyr(self, age_gyr: Any, *, nan_on_error: bool = False) -> Any:
+    def redshift_at_age_gyr(self, age_gyr: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Redshift at which the age of the universe equals `age_gyr`.
 
         * `age_gyr`: Gyr, finite and > 0, at most the age today.
@@ -223,9 +223,9 @@ class UniverseFunctions:
         below the age at z = 1e12 (or at the largest redshift below it at which the age can be
         computed). Accuracy: round trip within 1e-12 relative (`f64`).
         """
-        return _F["redshift_at_age_gyr"].apply(self, (age_gyr, ), nan_on_error)
+        return _F["redshift_at_age_gyr"].apply(self, (age_gyr, ), nan_on_error, out)
 
-    def redshift_at_lookback_time_gyr(self, lookback_gyr: Any, *, nan_on_error: bool = False) -> Any:
+    def redshift_at_lookback_time_gyr(self, lookback_gyr: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Redshift at which the lookback time equals `lookback_gyr`.
 
         * `lookback_gyr`: Gyr, finite and ≥ 0, below the age today.
@@ -243,9 +243,9 @@ class UniverseFunctions:
         largest redshift below it at which the lookback time can be computed.
         Accuracy: round trip within 1e-12 relative (`f64`).
         """
-        return _F["redshift_at_lookback_time_gyr"].apply(self, (lookback_gyr, ), nan_on_error)
+        return _F["redshift_at_lookback_time_gyr"].apply(self, (lookback_gyr, ), nan_on_error, out)
 
-    def redshift_at_comoving_distance_mpc(self, distance_mpc: Any, *, nan_on_error: bool = False) -> Any:
+    def redshift_at_comoving_distance_mpc(self, distance_mpc: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Redshift at which the line-of-sight comoving distance equals `distance_mpc`.
 
         * `distance_mpc`: Mpc, finite and ≥ 0.
@@ -254,9 +254,9 @@ class UniverseFunctions:
         by z = 1e12 (the particle horizon), or, where the distance cannot be computed up to
         z = 1e12, beyond the largest redshift at which it can. Accuracy: round trip within 1e-12 relative (`f64`).
         """
-        return _F["redshift_at_comoving_distance_mpc"].apply(self, (distance_mpc, ), nan_on_error)
+        return _F["redshift_at_comoving_distance_mpc"].apply(self, (distance_mpc, ), nan_on_error, out)
 
-    def redshift_at_luminosity_distance_mpc(self, distance_mpc: Any, *, nan_on_error: bool = False) -> Any:
+    def redshift_at_luminosity_distance_mpc(self, distance_mpc: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Redshift at which the luminosity distance equals `distance_mpc`.
 
         * `distance_mpc`: Mpc, finite and ≥ 0.
@@ -266,9 +266,9 @@ class UniverseFunctions:
         is below 1e12). Accuracy: round trip within 1e-12 relative (`f64`). (In a closed model D_L
         need not be monotone; the root in the bracket found is returned.)
         """
-        return _F["redshift_at_luminosity_distance_mpc"].apply(self, (distance_mpc, ), nan_on_error)
+        return _F["redshift_at_luminosity_distance_mpc"].apply(self, (distance_mpc, ), nan_on_error, out)
 
-    def hubble_distance_at_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def hubble_distance_at_mpc(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Hubble distance at z, D_H(z) = c/H(z), Mpc.
 
         * `z`: redshift, finite and ≥ 0.
@@ -276,9 +276,9 @@ class UniverseFunctions:
         Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-14 relative (`f64`) of mpmath,
         as E(z).
         """
-        return _F["hubble_distance_at_mpc"].apply(self, (z, ), nan_on_error)
+        return _F["hubble_distance_at_mpc"].apply(self, (z, ), nan_on_error, out)
 
-    def volume_averaged_distance_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def volume_averaged_distance_mpc(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Volume-averaged distance D_V(z) = [z D_M² D_H(z)]^⅓, Mpc (Eisenstein et al. 2005, ApJ
         633, 560, eq. 2), 0 at z = 0.
 
@@ -287,9 +287,9 @@ class UniverseFunctions:
         Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-12 relative (`f64`) of mpmath
         (that of D_M).
         """
-        return _F["volume_averaged_distance_mpc"].apply(self, (z, ), nan_on_error)
+        return _F["volume_averaged_distance_mpc"].apply(self, (z, ), nan_on_error, out)
 
-    def transverse_comoving_distance_over_sound_horizon(self, z: Any, sound_horizon_drag_mpc: Any, *, nan_on_error: bool = False) -> Any:
+    def transverse_comoving_distance_over_sound_horizon(self, z: Any, sound_horizon_drag_mpc: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """D_M(z)/r_d: the transverse comoving distance over the drag-epoch sound horizon.
 
         * `z`: redshift, finite and ≥ 0.
@@ -298,21 +298,21 @@ class UniverseFunctions:
         Errors: `NonFinite(i)`, `Negative(0)`, `NonPositive(1)`. Accuracy: within 1e-12 relative
         (`f64`) of mpmath.
         """
-        return _F["transverse_comoving_distance_over_sound_horizon"].apply(self, (z, sound_horizon_drag_mpc, ), nan_on_error)
+        return _F["transverse_comoving_distance_over_sound_horizon"].apply(self, (z, sound_horizon_drag_mpc, ), nan_on_error, out)
 
-    def hubble_distance_over_sound_horizon(self, z: Any, sound_horizon_drag_mpc: Any, *, nan_on_error: bool = False) -> Any:
+    def hubble_distance_over_sound_horizon(self, z: Any, sound_horizon_drag_mpc: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """D_H(z)/r_d = c/(H(z) r_d). Arguments and errors as
         `transverse_comoving_distance_over_sound_horizon`.
         Accuracy: within 1e-14 relative (`f64`) of mpmath.
         """
-        return _F["hubble_distance_over_sound_horizon"].apply(self, (z, sound_horizon_drag_mpc, ), nan_on_error)
+        return _F["hubble_distance_over_sound_horizon"].apply(self, (z, sound_horizon_drag_mpc, ), nan_on_error, out)
 
-    def volume_averaged_distance_over_sound_horizon(self, z: Any, sound_horizon_drag_mpc: Any, *, nan_on_error: bool = False) -> Any:
+    def volume_averaged_distance_over_sound_horizon(self, z: Any, sound_horizon_drag_mpc: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """D_V(z)/r_d. Arguments and errors as
         `transverse_comoving_distance_over_sound_horizon`.
         Accuracy: within 1e-12 relative (`f64`) of mpmath.
         """
-        return _F["volume_averaged_distance_over_sound_horizon"].apply(self, (z, sound_horizon_drag_mpc, ), nan_on_error)
+        return _F["volume_averaged_distance_over_sound_horizon"].apply(self, (z, sound_horizon_drag_mpc, ), nan_on_error, out)
 
 
 _publish(UniverseFunctions, 'relicore.cosmology', 'Universe')

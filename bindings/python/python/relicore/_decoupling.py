@@ -14,7 +14,7 @@ from relicore._elementwise import publish as _publish
 __all__ = ['saha_ionized_fraction', 'last_scattering_redshift_fit', 'drag_redshift_fit', 'ThermalHistoryFunctions']
 
 
-def saha_ionized_fraction(universe: Any, z: Any, *, nan_on_error: bool = False) -> Any:
+def saha_ionized_fraction(universe: Any, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Ionised fraction x_e = n_e/n_H in Saha equilibrium at redshift z: hydrogen and both helium
     stages (He I → He II → He III) in equilibrium with the radiation at T_r = T0 (1+z), coupled
     through the electron density (equations: the module doc of `decoupling`). It exceeds
@@ -34,10 +34,10 @@ def saha_ionized_fraction(universe: Any, z: Any, *, nan_on_error: bool = False) 
     Reference: Saha 1920, Phil. Mag. 40, 472; for the cosmological form, e.g. Peebles 1993,
     Principles of Physical Cosmology, §6.
     """
-    return _F["saha_ionized_fraction"].apply(universe, (z, ), nan_on_error)
+    return _F["saha_ionized_fraction"].apply(universe, (z, ), nan_on_error, out)
 
 
-def last_scattering_redshift_fit(omega_baryon_h2: Any, omega_matter_h2: Any, *, nan_on_error: bool = False) -> Any:
+def last_scattering_redshift_fit(omega_baryon_h2: Any, omega_matter_h2: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Redshift of last scattering by the fit of Hu & Sugiyama 1996 (ApJ 471, 542, eqs. E1–E2;
     coefficients from memory):
     z* = 1048 [1 + 0.00124 ω_b^−0.738] [1 + g₁ ω_m^g₂], g₁ = 0.0783 ω_b^−0.238/(1 + 39.5 ω_b^0.763),
@@ -50,10 +50,10 @@ def last_scattering_redshift_fit(omega_baryon_h2: Any, omega_matter_h2: Any, *, 
     own, about 1% against full recombination calculations (as its authors state; from memory);
     the formula itself is evaluated to a few ulp (mpmath vectors).
     """
-    return _F["last_scattering_redshift_fit"].apply(None, (omega_baryon_h2, omega_matter_h2, ), nan_on_error)
+    return _F["last_scattering_redshift_fit"].apply(None, (omega_baryon_h2, omega_matter_h2, ), nan_on_error, out)
 
 
-def drag_redshift_fit(omega_baryon_h2: Any, omega_matter_h2: Any, *, nan_on_error: bool = False) -> Any:
+def drag_redshift_fit(omega_baryon_h2: Any, omega_matter_h2: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """Redshift of the drag epoch by the fit of Eisenstein & Hu 1998 (ApJ 496, 605, eq. 4;
     coefficients from memory):
     z_d = 1291 ω_m^0.251/(1 + 0.659 ω_m^0.828) [1 + b₁ ω_b^b₂],
@@ -66,7 +66,7 @@ def drag_redshift_fit(omega_baryon_h2: Any, omega_matter_h2: Any, *, nan_on_erro
     own (its authors quote a few per cent or better over the usual parameter range; from
     memory); the formula itself is evaluated to a few ulp (mpmath vectors).
     """
-    return _F["drag_redshift_fit"].apply(None, (omega_baryon_h2, omega_matter_h2, ), nan_on_error)
+    return _F["drag_redshift_fit"].apply(None, (omega_baryon_h2, omega_matter_h2, ), nan_on_error, out)
 
 
 class ThermalHistoryFunctions:
@@ -74,7 +74,7 @@ class ThermalHistoryFunctions:
 
     __slots__ = ()
 
-    def ionized_fraction(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def ionized_fraction(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Ionised fraction x_e = n_e/n_H at redshift z (reionisation included when it was
         requested; above 1 while helium is ionised).
 
@@ -84,34 +84,34 @@ class ThermalHistoryFunctions:
         within 1e-5 relative from z = 1600 to 50 against scipy `solve_ivp` on the same
         equations; cubic Hermite interpolation in ln(1+z) between nodes.
         """
-        return _F["ionized_fraction"].apply(self, (z, ), nan_on_error)
+        return _F["ionized_fraction"].apply(self, (z, ), nan_on_error, out)
 
-    def matter_temperature_k(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def matter_temperature_k(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Matter (gas) temperature T_m at redshift z, K (reionisation heating is not modelled).
 
         Errors and accuracy as `ionized_fraction`.
         """
-        return _F["matter_temperature_k"].apply(self, (z, ), nan_on_error)
+        return _F["matter_temperature_k"].apply(self, (z, ), nan_on_error, out)
 
-    def optical_depth(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def optical_depth(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Thomson optical depth from today to redshift z, τ = ∫₀^z n_e σ_T c dz'/((1+z')H),
         dimensionless (reionisation included when it was requested).
 
         Errors as `ionized_fraction`. Accuracy: within 1e-5 relative
         against scipy `solve_ivp` on the same equations.
         """
-        return _F["optical_depth"].apply(self, (z, ), nan_on_error)
+        return _F["optical_depth"].apply(self, (z, ), nan_on_error, out)
 
-    def visibility(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def visibility(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Visibility function per unit conformal distance, g = −dτ/dη e^{−τ} = n_e σ_T a e^{−τ},
         in Mpc⁻¹ (its integral over comoving conformal distance is 1 − e^{−τ}).
 
         Errors as `ionized_fraction`. Accuracy: within 1e-5 relative
         against scipy `solve_ivp` near the peak.
         """
-        return _F["visibility"].apply(self, (z, ), nan_on_error)
+        return _F["visibility"].apply(self, (z, ), nan_on_error, out)
 
-    def sound_horizon_mpc(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def sound_horizon_mpc(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Comoving sound horizon r_s(z) = ∫_z^∞ c_s dz'/H(z'), c_s = c/√(3(1+R)),
         R = 3ρ_b/(4ρ_γ), in Mpc.
 
@@ -119,7 +119,7 @@ class ThermalHistoryFunctions:
 
         Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-12 relative against mpmath.
         """
-        return _F["sound_horizon_mpc"].apply(self, (z, ), nan_on_error)
+        return _F["sound_horizon_mpc"].apply(self, (z, ), nan_on_error, out)
 
     @property
     def last_scattering_redshift(self) -> float:

@@ -116,6 +116,26 @@ def apply(function: Any, receiver: Any, args: tuple[Any, ...], nan_on_error: boo
     return out[()] if scalars else out
 
 
+def apply_out(function: Any, receiver: Any, args: tuple[Any, ...], nan_on_error: bool, out: Any) -> Any:
+    """`function.apply` with `out=`: the result, computed as without it, written into `out`, an
+    ndarray of the broadcast shape into whose dtype the result's casts by numpy's "same_kind"
+    rule (a float64 result into float32 rounds); returns `out`. Raises RelicoreError naming
+    `out` otherwise. (The result is computed into a new array and copied: out= saves the
+    caller an array, not the computation one.)"""
+    label = function.label
+    if not isinstance(out, np.ndarray):
+        raise _error(f"{label}: out must be a numpy array, not {type(out).__name__}", label, "out")
+    result = np.asarray(function.apply(receiver, args, nan_on_error))
+    if out.shape != result.shape:
+        raise _error(f"{label}: out has shape {out.shape}, the result has shape {result.shape}", label, "out")
+    if not np.can_cast(result.dtype, out.dtype, casting="same_kind"):
+        raise _error(f"{label}: out has dtype {out.dtype}, the result {result.dtype} cannot be cast to it", label, "out")
+    if not out.flags.writeable:
+        raise _error(f"{label}: out is read-only", label, "out")
+    np.copyto(out, result, casting="same_kind")
+    return out
+
+
 def publish(members: Any, module: str, owner: str | None = None) -> None:
     """Gives generated functions (a list) or the members of a generated mixin class the
     `__module__` and `__qualname__` of the public module and class they belong to."""

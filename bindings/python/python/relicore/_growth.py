@@ -14,7 +14,7 @@ from relicore._elementwise import publish as _publish
 __all__ = ['eisenstein_hu_transfer_function', 'eisenstein_hu_no_wiggle_transfer_function', 'LinearGrowthFunctions', 'LinearPowerSpectrumFunctions']
 
 
-def eisenstein_hu_transfer_function(wavenumber_per_mpc: Any, omega_matter_h2: Any, omega_baryon_h2: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def eisenstein_hu_transfer_function(wavenumber_per_mpc: Any, omega_matter_h2: Any, omega_baryon_h2: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """The transfer function of cold dark matter and baryons with baryon acoustic oscillations, by
     the fitting formula of Eisenstein & Hu 1998 (ApJ 496, 605, eqs. 2–24 as recalled from
     memory: T = (Ω_b/Ω_0) T_b + (Ω_c/Ω_0) T_c with the sound horizon of eq. 6, the Silk scale of
@@ -35,10 +35,10 @@ def eisenstein_hu_transfer_function(wavenumber_per_mpc: Any, omega_matter_h2: An
     mpmath evaluation of the same formulae (`tests/data/growth.txt`), except near the zeros of
     T_b's oscillation where the absolute error stays within 1e-14.
     """
-    return _F["eisenstein_hu_transfer_function"].apply(None, (wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, cmb_temperature_k, ), nan_on_error)
+    return _F["eisenstein_hu_transfer_function"].apply(None, (wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, cmb_temperature_k, ), nan_on_error, out)
 
 
-def eisenstein_hu_no_wiggle_transfer_function(wavenumber_per_mpc: Any, omega_matter_h2: Any, omega_baryon_h2: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False) -> Any:
+def eisenstein_hu_no_wiggle_transfer_function(wavenumber_per_mpc: Any, omega_matter_h2: Any, omega_baryon_h2: Any, cmb_temperature_k: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
     """The transfer function without baryon acoustic oscillations of Eisenstein & Hu 1998 (ApJ
     496, 605, section 4.2, eqs. 26–31 as recalled from memory): T0(q) = L0/(L0 + C0 q²),
     L0 = ln(2e + 1.8q), C0 = 14.2 + 731/(1 + 62.5q), q = k Θ²/(Γ_eff h), with the shape
@@ -56,7 +56,7 @@ def eisenstein_hu_no_wiggle_transfer_function(wavenumber_per_mpc: Any, omega_mat
     `eisenstein_hu_transfer_function`; the evaluation is within 1e-13 relative (`f64`) of an
     mpmath evaluation of the same formulae (`tests/data/growth.txt`).
     """
-    return _F["eisenstein_hu_no_wiggle_transfer_function"].apply(None, (wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, cmb_temperature_k, ), nan_on_error)
+    return _F["eisenstein_hu_no_wiggle_transfer_function"].apply(None, (wavenumber_per_mpc, omega_matter_h2, omega_baryon_h2, cmb_temperature_k, ), nan_on_error, out)
 
 
 class LinearGrowthFunctions:
@@ -64,7 +64,7 @@ class LinearGrowthFunctions:
 
     __slots__ = ()
 
-    def leapfrog_drift_factor_gyr(self, start_scale_factor: Any, end_scale_factor: Any, *, nan_on_error: bool = False) -> Any:
+    def leapfrog_drift_factor_gyr(self, start_scale_factor: Any, end_scale_factor: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Drift factor of a comoving leapfrog step, ∫_{a1}^{a2} da/(a³H), Gyr (Quinn, Katz, Stadel
         & Lake 1997): the time a drift multiplies the canonical momentum p = a²ẋ by.
 
@@ -77,16 +77,16 @@ class LinearGrowthFunctions:
         Accuracy: within 1e-12 relative (`f64`) of an mpmath quadrature (`tests/data/growth.txt`).
         Cost: tens of nanoseconds on the table (a ≥ 2⁻²⁰), a quadrature below.
         """
-        return _F["leapfrog_drift_factor_gyr"].apply(self, (start_scale_factor, end_scale_factor, ), nan_on_error)
+        return _F["leapfrog_drift_factor_gyr"].apply(self, (start_scale_factor, end_scale_factor, ), nan_on_error, out)
 
-    def leapfrog_kick_factor_gyr(self, start_scale_factor: Any, end_scale_factor: Any, *, nan_on_error: bool = False) -> Any:
+    def leapfrog_kick_factor_gyr(self, start_scale_factor: Any, end_scale_factor: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Kick factor of a comoving leapfrog step, ∫_{a1}^{a2} da/(a²H), Gyr (Quinn, Katz, Stadel
         & Lake 1997): the time a kick multiplies the comoving force by. Arguments, errors,
         accuracy and cost as `leapfrog_drift_factor_gyr`.
         """
-        return _F["leapfrog_kick_factor_gyr"].apply(self, (start_scale_factor, end_scale_factor, ), nan_on_error)
+        return _F["leapfrog_kick_factor_gyr"].apply(self, (start_scale_factor, end_scale_factor, ), nan_on_error, out)
 
-    def growth_factor(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def growth_factor(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Linear growth factor D(z) = D_u(a)/D_u(1), normalised to 1 today (module doc of
         `growth`).
 
@@ -98,9 +98,9 @@ class LinearGrowthFunctions:
         (1977, MNRAS 179, 351) integral D ∝ E ∫ da/(aE)³ for w = −1 without radiation;
         D = a in the Einstein-de Sitter model (`tests/data/growth.txt`).
         """
-        return _F["growth_factor"].apply(self, (z, ), nan_on_error)
+        return _F["growth_factor"].apply(self, (z, ), nan_on_error, out)
 
-    def growth_rate(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def growth_rate(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Linear growth rate f(z) = d ln D/d ln a (module doc of `growth`).
 
         * `z`: redshift, finite and ≥ 0.
@@ -110,9 +110,9 @@ class LinearGrowthFunctions:
         Accuracy: within 1e-10 relative (`f64`) of an independent scipy `solve_ivp` integration
         and of the Heath (1977) closed form (`tests/data/growth.txt`).
         """
-        return _F["growth_rate"].apply(self, (z, ), nan_on_error)
+        return _F["growth_rate"].apply(self, (z, ), nan_on_error, out)
 
-    def unnormalized_growth_factor(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def unnormalized_growth_factor(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """Unnormalised growth factor D_u(a), a = 1/(1+z): the growing mode of the growth equation
         with D_u → a + (2/3) a_eq as a → 0, a_eq = Ω_r,early/Ω_cb counting photons and all N_eff
         species as massless (without radiation D_u → a); module doc of `growth`.
@@ -124,7 +124,7 @@ class LinearGrowthFunctions:
         control when the integration to z fails (not seen). Accuracy: within 1e-10 relative (`f64`)
         of an independent scipy `solve_ivp` integration (`tests/data/growth.txt`).
         """
-        return _F["unnormalized_growth_factor"].apply(self, (z, ), nan_on_error)
+        return _F["unnormalized_growth_factor"].apply(self, (z, ), nan_on_error, out)
 
 
 class LinearPowerSpectrumFunctions:
@@ -132,7 +132,7 @@ class LinearPowerSpectrumFunctions:
 
     __slots__ = ()
 
-    def transfer_function(self, wavenumber_per_mpc: Any, *, nan_on_error: bool = False) -> Any:
+    def transfer_function(self, wavenumber_per_mpc: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """The transfer function T(k) of the chosen form (Eisenstein & Hu 1998; see
         `eisenstein_hu_transfer_function` and
         `eisenstein_hu_no_wiggle_transfer_function`
@@ -142,9 +142,9 @@ class LinearPowerSpectrumFunctions:
 
         Errors: `NonFinite(0)`, `NonPositive(0)`.
         """
-        return _F["transfer_function"].apply(self, (wavenumber_per_mpc, ), nan_on_error)
+        return _F["transfer_function"].apply(self, (wavenumber_per_mpc, ), nan_on_error, out)
 
-    def linear_power_spectrum_mpc3(self, wavenumber_per_mpc: Any, z: Any, *, nan_on_error: bool = False) -> Any:
+    def linear_power_spectrum_mpc3(self, wavenumber_per_mpc: Any, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """The linear matter power spectrum P(k, z) = (2π²/k³) A_s (k/k_p)^(n_s − 1 + ½ α_s ln(k/k_p))
         · [(2/5) (ck/H0)² T(k) D_u(a)/Ω_m]², Mpc³ (module doc of `growth`).
 
@@ -155,9 +155,9 @@ class LinearPowerSpectrumFunctions:
         representable (k beyond about 1e70 Mpc⁻¹). Accuracy: that of T(k) (1e-13 of the
         formula), doubled, plus that of D_u (1e-10), doubled.
         """
-        return _F["linear_power_spectrum_mpc3"].apply(self, (wavenumber_per_mpc, z, ), nan_on_error)
+        return _F["linear_power_spectrum_mpc3"].apply(self, (wavenumber_per_mpc, z, ), nan_on_error, out)
 
-    def density_rms_in_sphere(self, radius_mpc: Any, z: Any, *, nan_on_error: bool = False) -> Any:
+    def density_rms_in_sphere(self, radius_mpc: Any, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """σ(R, z): the r.m.s. linear density contrast in a top-hat sphere of radius R,
         σ² = ∫ k² P(k, z) W(kR)² dk/2π², W(x) = 3(sin x − x cos x)/x³ (module doc of
         `growth`).
@@ -171,16 +171,16 @@ class LinearPowerSpectrumFunctions:
         (`tests/data/growth.txt`). Cost: about a thousand evaluations of P (a fraction of a
         millisecond); `sigma8` is stored.
         """
-        return _F["density_rms_in_sphere"].apply(self, (radius_mpc, z, ), nan_on_error)
+        return _F["density_rms_in_sphere"].apply(self, (radius_mpc, z, ), nan_on_error, out)
 
-    def growth_rate_times_sigma8(self, z: Any, *, nan_on_error: bool = False) -> Any:
+    def growth_rate_times_sigma8(self, z: Any, *, nan_on_error: bool = False, out: Any = None) -> Any:
         """fσ8(z) = f(z) σ(8 h⁻¹ Mpc, z) = f(z) D(z) σ8.
 
         * `z`: redshift, finite and ≥ 0.
 
         Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: that of f and D (1e-10) and σ8 (1e-9).
         """
-        return _F["growth_rate_times_sigma8"].apply(self, (z, ), nan_on_error)
+        return _F["growth_rate_times_sigma8"].apply(self, (z, ), nan_on_error, out)
 
     @property
     def sigma8(self) -> float:
