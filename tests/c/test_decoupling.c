@@ -57,8 +57,8 @@ _Static_assert(sizeof(struct relicore_thermal_history) == 163848,
                "the header states 163848 bytes for struct relicore_thermal_history");
 _Static_assert(_Alignof(struct relicore_thermal_history) == _Alignof(uint64_t),
                "struct relicore_thermal_history is aligned like uint64_t");
-_Static_assert(sizeof(struct relicore_thermal_history_options) == 24,
-               "struct relicore_thermal_history_options: int32_t (padded) and two doubles");
+_Static_assert(sizeof(struct relicore_thermal_history_options) == 40,
+               "struct relicore_thermal_history_options: int32_t (padded) and four doubles");
 
 /* ------------------------------------------------------------------------------------------ */
 /* Dispatch table: every decoupling function.                                                  */
