@@ -97,7 +97,7 @@ miri:
 # unsafe code; the checks are the contract's); c_abi, the C face with arbitrary structs, under
 # AddressSanitizer. The `make test` step fuzz-quick builds and runs every target in
 # FUZZ_BUDGET seconds in all (build included; it skips, saying why, when the build does not
-# fit, e.g. a cold fuzz/target), from the committed corpus with a fixed seed. Both say
+# fit, e.g. a cold fuzz/target), from 64 committed seeds each, with a fixed seed. Both say
 # plainly that they skipped where no nightly toolchain is installed, as `make miri` does, and
 # install cargo-fuzz (cargo install cargo-fuzz --locked) where nightly is present and it is not.
 FUZZ_SECONDS ?= 60

@@ -60,23 +60,64 @@ impl<T: Real> Universe<T> {
                 }
             }
         }
-        if lo.is_nan() || hi.is_nan() || (lo > T::zero()) == (hi > T::zero()) && lo != T::zero() {
+        // a target equal to the value at either end is reached there (at the top: a distance
+        // or lookback time flat to the last bit toward z = 1e12)
+        let same_side = (lo > T::zero()) == (hi > T::zero());
+        if lo.is_nan() || hi.is_nan() || same_side && lo != T::zero() && hi != T::zero() {
             return Err(Error::OutOfDomain(0));
         }
         Ok(top)
+    }
+
+    /// Redshift at which the conformal time c·η equals `eta` (in units of D_H, > 0): the
+    /// inversion of the comoving distance near the particle horizon, as the age for the
+    /// lookback time.
+    fn redshift_at_conformal_unit(&self, eta: T) -> Result<T> {
+        let ln_eta = eta.ln();
+        let f = |u: T| {
+            let z = u.exp_m1();
+            let v = self
+                .conformal_time_mpc(z)
+                .map(|x| x / self.hubble_distance_mpc)
+                .unwrap_or(T::nan());
+            let a = T::one() / (T::one() + z);
+            // d ln η/du = −((1+z)/E)/η = −(a/q)/η
+            (v.ln() - ln_eta, -(a / self.q_squared(a).sqrt()) / v)
+        };
+        let top = Self::check_reachable(f)?;
+        self.solve_u(f, top)
     }
 
     /// Redshift at which the line-of-sight comoving distance equals `distance_mpc`.
     ///
     /// * `distance_mpc`: Mpc, finite and ≥ 0.
     ///
-    /// Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` beyond the distance reachable
-    /// by z = 1e12 (the particle horizon), or, where the distance cannot be computed up to
-    /// z = 1e12, beyond the largest redshift at which it can. Accuracy: round trip within 1e-12 relative (`f64`).
+    /// From half the particle horizon (the conformal time today c·η0, where it is finite) on,
+    /// the redshift is that of the conformal time c·η0 minus the target (an exact difference
+    /// there): near the horizon the distance is flat to the last bit over decades of z, where
+    /// inverting it directly is decided by rounding noise; elsewhere by the distance itself.
+    ///
+    /// Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` at or beyond the particle
+    /// horizon, or beyond the distance reached at z = 1e12 (or, where the distance cannot be
+    /// computed up to z = 1e12, at the largest redshift at which it can). Accuracy: round trip
+    /// within 1e-12 relative (`f64`).
     pub fn redshift_at_comoving_distance_mpc(&self, distance_mpc: T) -> Result<T> {
-        let d = non_negative(distance_mpc, 0)? / self.hubble_distance_mpc;
+        let distance = non_negative(distance_mpc, 0)?;
+        let d = distance / self.hubble_distance_mpc;
         if d == T::zero() {
             return Ok(T::zero());
+        }
+        if let Ok(horizon) = self.conformal_time_mpc(T::zero()) {
+            if distance >= horizon {
+                return Err(Error::OutOfDomain(0));
+            }
+            if distance >= T::c(0.5) * horizon {
+                // horizon − distance is exact here (Sterbenz, Floating-Point Computation, 1974)
+                let rest = (horizon - distance) / self.hubble_distance_mpc;
+                if let Ok(z) = self.redshift_at_conformal_unit(rest) {
+                    return Ok(z);
+                }
+            }
         }
         let f = |u: T| {
             let z = u.exp_m1();
