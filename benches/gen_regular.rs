@@ -252,8 +252,8 @@ fn regular(c: &mut Criterion) {
     g.bench_function("rayleigh_jeans_temperature", |b| {
         b.iter(|| {
             relicore::blackbody::rayleigh_jeans_temperature(
-                black_box(5147397832560646.0_f64),
-                black_box(4.916429693267486e-07_f64),
+                black_box(28621551.72680105_f64),
+                black_box(2.9182557566475884e-16_f64),
             )
         })
     });
@@ -713,7 +713,7 @@ fn regular(c: &mut Criterion) {
     g.bench_function("redshift_at_lookback_time_gyr", |b| {
         b.iter(|| {
             let r = &u;
-            r.redshift_at_lookback_time_gyr(black_box(10.592157274978465_f64))
+            r.redshift_at_lookback_time_gyr(black_box(11.755600186149533_f64))
         })
     });
     g.bench_function("redshift_at_comoving_distance_mpc", |b| {

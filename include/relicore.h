@@ -1991,9 +1991,16 @@ int32_t relicore_brightness_temperature_frequency_array(double frequency_hz,
  * * `frequency_hz`: Hz, finite and > 0.
  * * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
  *
- * Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`. Accuracy: ≤ 2 ulp (`f64`) against
- * mpmath (formed to double length with exact power-of-two scalings, so `f32` does not
- * overflow).
+ * Returns K. Errors: `NonFinite(i)`, `NonPositive(i)` (and `NonFinite(1)` when the result
+ * overflows). Accuracy: ≤ 2 ulp (`f64` and `f32`) against mpmath whenever the result is a
+ * normal number, subnormal radiances and frequencies included (`tests/data/blackbody.txt`);
+ * a subnormal result carries the rounding of its fewer bits.
+ *
+ * Method: ν = 2^m f and L = 2^n g with f, g in [√½, √2) (a subnormal input first scaled up
+ * exactly by 2^p), the double-length quotient (c²/2k)·2^-120 · g/f² of numbers near 1, then
+ * one exact scaling by 2^(120 + n − 2m) in steps that round at most once. Forming c²L/2k
+ * directly lost the bits a subnormal L lacks (3e-12 relative at L = 1.5e-316, where the
+ * result 5.4e-308 K is normal).
  *
  * Arguments of the C function:
  * * `frequency_hz`: frequency in Hz, > 0.
@@ -5558,15 +5565,10 @@ int32_t relicore_redshift_at_lookback_time_gyr_array(const struct relicore_unive
  *
  * * `distance_mpc`: Mpc, finite and ≥ 0.
  *
- * From half the particle horizon (the conformal time today c·η0, where it is finite) on,
- * the redshift is that of the conformal time c·η0 minus the target (an exact difference
- * there): near the horizon the distance is flat to the last bit over decades of z, where
- * inverting it directly is decided by rounding noise; elsewhere by the distance itself.
- *
- * Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` at or beyond the particle
- * horizon, or beyond the distance reached at z = 1e12 (or, where the distance cannot be
- * computed up to z = 1e12, at the largest redshift at which it can). Accuracy: round trip
- * within 1e-12 relative (`f64`).
+ * Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` beyond the distance reachable
+ * by z = 1e12 (the particle horizon), or, where the distance cannot be computed up to
+ * z = 1e12, beyond the largest redshift at which it can. Accuracy: round trip within 1e-12
+ * relative (`f64`).
  *
  * Arguments of the C function:
  * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.

@@ -1630,9 +1630,16 @@ pub unsafe extern "C" fn relicore_brightness_temperature_frequency_array(
 /// * `frequency_hz`: Hz, finite and > 0.
 /// * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
 ///
-/// Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`. Accuracy: ≤ 2 ulp (`f64`) against
-/// mpmath (formed to double length with exact power-of-two scalings, so `f32` does not
-/// overflow).
+/// Returns K. Errors: `NonFinite(i)`, `NonPositive(i)` (and `NonFinite(1)` when the result
+/// overflows). Accuracy: ≤ 2 ulp (`f64` and `f32`) against mpmath whenever the result is a
+/// normal number, subnormal radiances and frequencies included (`tests/data/blackbody.txt`);
+/// a subnormal result carries the rounding of its fewer bits.
+///
+/// Method: ν = 2^m f and L = 2^n g with f, g in [√½, √2) (a subnormal input first scaled up
+/// exactly by 2^p), the double-length quotient (c²/2k)·2^-120 · g/f² of numbers near 1, then
+/// one exact scaling by 2^(120 + n − 2m) in steps that round at most once. Forming c²L/2k
+/// directly lost the bits a subnormal L lacks (3e-12 relative at L = 1.5e-316, where the
+/// result 5.4e-308 K is normal).
 ///
 /// Arguments of the C function:
 /// * `frequency_hz`: frequency in Hz, > 0.
