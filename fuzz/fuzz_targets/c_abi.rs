@@ -157,16 +157,7 @@ fn templates() -> &'static Templates {
         // SAFETY: a readable parameter struct and a writable universe of exactly its size.
         let s = unsafe { relicore_universe_init(&params, universe.as_mut_ptr().cast()) };
         assert_eq!(s, RELICORE_OK, "template universe");
-        let mut options = relicore_thermal_history_options {
-            reionization: 0,
-            reionization_redshift: 0.0,
-            highest_redshift: 0.0,
-        };
-        // SAFETY: a writable options struct.
-        assert_eq!(
-            unsafe { relicore_thermal_history_options_default(&mut options) },
-            RELICORE_OK
-        );
+        let options = default_options();
         let mut history = vec![0u64; H_WORDS];
         // SAFETY: a valid universe, readable options, a writable history of exactly its size.
         let s = unsafe {
@@ -179,6 +170,16 @@ fn templates() -> &'static Templates {
         assert_eq!(s, RELICORE_OK, "template history");
         Templates { universe, history }
     })
+}
+
+/// The default options of a thermal history (every field, those added later included).
+fn default_options() -> relicore_thermal_history_options {
+    // SAFETY: the struct is plain old data (integers and floats): all-zero bits are a value.
+    let mut options: relicore_thermal_history_options = unsafe { core::mem::zeroed() };
+    // SAFETY: a writable options struct.
+    let s = unsafe { relicore_thermal_history_options_default(&mut options) };
+    assert_eq!(s, RELICORE_OK, "relicore_thermal_history_options_default");
+    options
 }
 
 /// What every call on a struct must return, before any physics: NULL, invalid, or either.
@@ -492,11 +493,14 @@ fn history_calls(input: &mut Input<'_>, h: *const H, expect: Expect) {
 /// `relicore_thermal_history_compute` of the universe under test with fuzzed options into a
 /// struct of exactly its size: the status, and a cleared output on failure.
 fn compute_history(input: &mut Input<'_>, u: *const U, expect: Expect, out: &mut [u64]) -> i32 {
-    let options = relicore_thermal_history_options {
-        reionization: i32::from(input.byte() % 4) - 1,
-        reionization_redshift: input.real(-2.0, 3.0),
-        highest_redshift: input.real(3.3, 4.3),
-    };
+    let mut options = default_options();
+    options.reionization = i32::from(input.byte() % 4) - 1;
+    options.reionization_redshift = input.real(-2.0, 3.0);
+    options.highest_redshift = input.real(3.3, 4.3);
+    if input.byte() % 4 == 0 {
+        options.helium_reionization_redshift = input.real(-2.0, 2.0);
+        options.helium_reionization_width = input.real(-2.0, 2.0);
+    }
     let null_options = input.byte() % 16 == 0;
     let o = if null_options {
         core::ptr::null()
