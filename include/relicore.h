@@ -5565,10 +5565,15 @@ int32_t relicore_redshift_at_lookback_time_gyr_array(const struct relicore_unive
  *
  * * `distance_mpc`: Mpc, finite and ≥ 0.
  *
- * Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` beyond the distance reachable
- * by z = 1e12 (the particle horizon), or, where the distance cannot be computed up to
- * z = 1e12, beyond the largest redshift at which it can. Accuracy: round trip within 1e-12
- * relative (`f64`).
+ * From half the particle horizon (the conformal time today c·η0, where it is finite) on,
+ * the redshift is that of the conformal time c·η0 minus the target (an exact difference
+ * there): near the horizon the distance is flat to the last bit over decades of z, where
+ * inverting it directly is decided by rounding noise; elsewhere by the distance itself.
+ *
+ * Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` at or beyond the particle
+ * horizon, or beyond the distance reached at z = 1e12 (or, where the distance cannot be
+ * computed up to z = 1e12, at the largest redshift at which it can). Accuracy: round trip
+ * within 1e-12 relative (`f64`).
  *
  * Arguments of the C function:
  * * `universe`: a `struct relicore_universe` filled by `relicore_universe_init`.
