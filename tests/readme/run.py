@@ -243,6 +243,9 @@ def main(argv: list[str]) -> int:
     ap.add_argument("--python", default=str(ROOT / ".venv" / "bin" / "python"))
     ap.add_argument("--names", nargs="*", help="only these marked blocks (the marker check still runs)")
     args = ap.parse_args(argv[1:])
+    # the blocks run in a temporary folder: a path to the interpreter must not stay relative
+    if os.sep in args.python:
+        args.python = os.path.abspath(args.python)
     blocks, problems = readme_blocks(README.read_text())
     passed = failed = 0
     print(f"=== README.md: {len(blocks)} marked Python and Rust blocks")
