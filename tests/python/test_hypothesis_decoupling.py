@@ -350,5 +350,9 @@ def test_the_tables_cover_the_module():
     fits = native_signatures("decoupling", "none")
     assert fits == {k: v for k, v in FUNCTIONS.items() if k != "saha_ionized_fraction"}
     public = {n for n in dir(dc.ThermalHistory) if not n.startswith("_")}
-    assert public == set(QUERIES) | set(SUMMARY) | {"universe", "reionization_redshift", "highest_redshift"}
+    # the options a history was computed with (properties; their values are tested in
+    # tests/python/test_decoupling_api.py)
+    options = {"universe", "reionization_redshift", "highest_redshift",
+               "helium_reionization_redshift", "helium_reionization_width"}
+    assert public == set(QUERIES) | set(SUMMARY) | options
     assert {n for n in dc.__all__ if callable(getattr(dc, n)) and n != "ThermalHistory"} == set(FUNCTIONS)
