@@ -4,7 +4,7 @@
 
 //! The C exports of the regular cosmology functions: for each function of the table its `double` form, its `float` twin (`_f32`) and its array forms (`_array`, `_array_f32`) where the table lists them.
 
-use crate::stored::{stored_array, stored_scalar, stored_through_array};
+use crate::stored::{stored_array, stored_scalar, stored_summary, stored_through_array};
 use crate::universe::relicore_universe;
 use relicore::ArrayResult;
 use relicore::cosmology::Universe;
@@ -30,7 +30,7 @@ pub unsafe extern "C" fn relicore_hubble_distance_mpc(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { stored_scalar(universe, out, |r| Ok(r.hubble_distance_mpc())) }
+    unsafe { stored_summary(universe, out, |r| r.hubble_distance_mpc()) }
 }
 
 /// Hubble time 1/H0, Gyr (Julian years of 365.25 days; 13.97 Gyr for H0 = 70).
@@ -53,7 +53,7 @@ pub unsafe extern "C" fn relicore_hubble_time_gyr(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { stored_scalar(universe, out, |r| Ok(r.hubble_time_gyr())) }
+    unsafe { stored_summary(universe, out, |r| r.hubble_time_gyr()) }
 }
 
 /// Radiation density parameter today: photons plus massless neutrino species (massive
@@ -77,7 +77,7 @@ pub unsafe extern "C" fn relicore_omega_radiation(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { stored_scalar(universe, out, |r| Ok(r.omega_radiation())) }
+    unsafe { stored_summary(universe, out, |r| r.omega_radiation()) }
 }
 
 /// Dark-energy density parameter today, 1 − Ω_m − Ω_r − Ω_k.
@@ -100,7 +100,7 @@ pub unsafe extern "C" fn relicore_omega_dark_energy(
     out: *mut f64,
 ) -> i32 {
     // SAFETY: the pointers are NULL or valid (this function's contract).
-    unsafe { stored_scalar(universe, out, |r| Ok(r.omega_dark_energy())) }
+    unsafe { stored_summary(universe, out, |r| r.omega_dark_energy()) }
 }
 
 /// Redshift of matter-radiation equality, Ω_cb/Ω_r − 1, with Ω_cb = cold dark matter plus
