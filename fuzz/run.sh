@@ -92,8 +92,8 @@ run() {
   took=$(($(date +%s) - began))
   execs=$(grep -h 'stat::number_of_executed_units' "$log" | tail -1 | awk '{print $2}')
   cov=$(grep -hoE '(DONE|INITED|pulse|NEW|REDUCE) +cov: [0-9]+' "$log" | tail -1 | awk '{print $NF}')
-  ft=$(grep -hoE 'ft: [0-9]+' "$log" | tail -1 | awk '{print $2}')
-  corp=$(grep -hoE 'corp: [0-9]+' "$log" | tail -1 | awk '{print $2}')
+  ft=$(grep -hoE 'cov: [0-9]+ ft: [0-9]+' "$log" | tail -1 | awk '{print $4}')
+  corp=$(grep -hoE 'ft: [0-9]+ corp: [0-9]+' "$log" | tail -1 | awk '{print $4}')
   printf '%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n' "$(date -u +%Y-%m-%dT%H:%M)" "$t" "$took" \
     "${execs:-?}" "${cov:-?}" "${ft:-?}" "${corp:-?}" "$result" "$note" >>target/logs/runs.tsv
   echo "fuzz: $t: ${execs:-?} executions in ${took} s (limit $secs s, cargo build check included), cov ${cov:-?}, ft ${ft:-?}, corpus ${corp:-?}: $result"
