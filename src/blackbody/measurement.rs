@@ -311,6 +311,22 @@ struct Scene<T> {
     path_derivative: T,
 }
 
+impl<T: Real> Scene<T> {
+    /// The scene of one pixel of a frame whose surroundings and path are shared:
+    /// `[L(T_refl), L′(T_refl), L(T_path), L′(T_path)]` as [`shared_scene`] gives them.
+    #[inline(always)]
+    fn shared(emissivity: T, transmittance: T, [r, rd, p, pd]: [T; 4]) -> Self {
+        Scene {
+            emissivity,
+            transmittance,
+            reflected: r,
+            path: p,
+            reflected_derivative: rd,
+            path_derivative: pd,
+        }
+    }
+}
+
 /// Checks ε, T_refl, τ, T_path (positions `first + 1 … first + 4`) in that order.
 fn check_scene<T: Real>(first: u8, e: T, tr: T, tau: T, tp: T) -> Result<(T, T, T, T)> {
     let e = unit_interval(e, first + 1)?;
@@ -1244,21 +1260,14 @@ fn object_array<T: Real, Q: Quantity<T>>(
         let sc = cache.get(&q, key, false)?;
         Ok([solve(&q, &sc, s)?.0])
     };
-    if let (Some(k), Some([r, rd, p, pd])) = (q.frame_constants(), shared_scene(&q, tr, tp)) {
+    if let (Some(k), Some(shared)) = (q.frame_constants(), shared_scene(&q, tr, tp)) {
         return frame_blocks(
             n,
             [signals, e, tau],
             [out],
             #[inline(always)]
             |[s, e, tau]: [T; 3]| {
-                let sc = Scene {
-                    emissivity: e,
-                    transmittance: tau,
-                    reflected: r,
-                    path: p,
-                    reflected_derivative: rd,
-                    path_derivative: pd,
-                };
+                let sc = Scene::shared(e, tau, shared);
                 let (t, _, inside) = object_fast(&k, &sc, s);
                 ([t], inside)
             },
@@ -1341,21 +1350,14 @@ fn object_uncertainty_array<T: Real, Q: Quantity<T>>(
         let v = solve_with_uncertainty(&q, &sc, s, us)?;
         Ok([v.temperature_k, v.combined_standard_uncertainty_k])
     };
-    if let (Some(k), Some([r, rd, p, pd])) = (q.frame_constants(), shared_scene(&q, tr, tp)) {
+    if let (Some(k), Some(shared)) = (q.frame_constants(), shared_scene(&q, tr, tp)) {
         return frame_blocks(
             n,
             [signals, e, tau, u0, u1, u2, u3, u4],
             [out_t, out_u],
             #[inline(always)]
             |[s, e, tau, v0, v1, v2, v3, v4]: [T; 8]| {
-                let sc = Scene {
-                    emissivity: e,
-                    transmittance: tau,
-                    reflected: r,
-                    path: p,
-                    reflected_derivative: rd,
-                    path_derivative: pd,
-                };
+                let sc = Scene::shared(e, tau, shared);
                 object_uncertainty_fast(&k, &sc, s, [v0, v1, v2, v3, v4])
             },
             |[_, ss]| sqrt_lanes(ss),
