@@ -215,6 +215,58 @@ fn frames(c: &mut Criterion) {
                 )
             })
         });
+        let blank64 = bb::TemperatureUncertainty {
+            temperature_k: 0.0f64,
+            combined_standard_uncertainty_k: 0.0,
+            sensitivity_coefficients: [0.0; 5],
+            inputs: 0,
+        };
+        let mut budgets64 = vec![blank64; n];
+        let mut budgets32 = vec![
+            bb::TemperatureUncertainty {
+                temperature_k: 0.0f32,
+                combined_standard_uncertainty_k: 0.0,
+                sensitivity_coefficients: [0.0; 5],
+                inputs: 0,
+            };
+            n
+        ];
+        g.bench_function(format!("budget_f64_{tag}"), |b| {
+            b.iter(|| {
+                bb::object_temperature_wavelength_budget_array(
+                    10e-6,
+                    &sig,
+                    &eps,
+                    &[295.0],
+                    &[0.92],
+                    &[290.0],
+                    &[1e4],
+                    &[0.02],
+                    &[2.0],
+                    &[0.01],
+                    &[2.0],
+                    &mut budgets64,
+                )
+            })
+        });
+        g.bench_function(format!("budget_f32_{tag}"), |b| {
+            b.iter(|| {
+                bb::object_temperature_wavelength_budget_array(
+                    10e-6f32,
+                    &sig32,
+                    &eps32,
+                    &[295.0],
+                    &[0.92],
+                    &[290.0],
+                    &[1e4],
+                    &[0.02],
+                    &[2.0],
+                    &[0.01],
+                    &[2.0],
+                    &mut budgets32,
+                )
+            })
+        });
         g.bench_function(format!("temperature_only_f32_{tag}"), |b| {
             b.iter(|| {
                 bb::object_temperature_wavelength_array(

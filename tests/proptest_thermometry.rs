@@ -317,8 +317,14 @@ proptest! {
         let r = bb::object_temperature_wavelength_array(l, &sig, &e, &tr, &tau, &tp, &mut out);
         let ru = bb::object_temperature_wavelength_with_uncertainty_array(l, &sig, &e, &tr, &tau,
             &tp, &us[0], &us[1], &us[2], &us[3], &us[4], &mut out_t, &mut out_u);
+        let blank = bb::TemperatureUncertainty { temperature_k: 0.0, combined_standard_uncertainty_k: 0.0,
+            sensitivity_coefficients: [0.0; 5], inputs: 9 };
+        let mut budgets = vec![blank; n];
+        let rb = bb::object_temperature_wavelength_budget_array(l, &sig, &e, &tr, &tau, &tp, &us[0], &us[1],
+            &us[2], &us[3], &us[4], &mut budgets);
         let g = |v: &Vec<f64>, i: usize| if v.len() == 1 { v[0] } else { v[i] };
         let mut first = None;
+        let mut first_u = None;
         for i in 0..n {
             let want = bb::object_temperature_wavelength(l, sig[i], g(&e, i), g(&tr, i), g(&tau, i), g(&tp, i));
             let wu = bb::object_temperature_wavelength_with_uncertainty(l, sig[i], g(&e, i),
@@ -328,14 +334,30 @@ proptest! {
                     prop_assert_eq!(out[i].to_bits(), w.to_bits());
                     prop_assert_eq!(out_t[i].to_bits(), wu.temperature_k.to_bits());
                     prop_assert_eq!(out_u[i].to_bits(), wu.combined_standard_uncertainty_k.to_bits());
+                    let b = budgets[i];
+                    prop_assert_eq!(b.temperature_k.to_bits(), wu.temperature_k.to_bits());
+                    prop_assert_eq!(b.combined_standard_uncertainty_k.to_bits(),
+                        wu.combined_standard_uncertainty_k.to_bits());
+                    for k in 0..5 {
+                        prop_assert_eq!(b.sensitivity_coefficients[k].to_bits(),
+                            wu.sensitivity_coefficients[k].to_bits());
+                    }
+                    prop_assert_eq!(b.inputs, 5);
                 }
                 (Err(err), _) => {
                     prop_assert!(out[i].is_nan());
+                    prop_assert!(budgets[i].temperature_k.is_nan() && budgets[i].inputs == 0);
                     if first.is_none() { first = Some((i, err)); }
+                    if first_u.is_none() { first_u = Some(i); }
                 }
-                (Ok(_), Err(_)) => prop_assert!(out_t[i].is_nan()),
+                (Ok(_), Err(_)) => {
+                    prop_assert!(out_t[i].is_nan());
+                    prop_assert!(budgets[i].temperature_k.is_nan() && budgets[i].inputs == 0);
+                    if first_u.is_none() { first_u = Some(i); }
+                }
             }
         }
+        prop_assert_eq!(rb.err().map(|x| x.index), first_u);
         match first {
             None => prop_assert!(r.is_ok() && ru.is_ok()),
             Some((i, err)) => {

@@ -1083,6 +1083,90 @@ fn load<T: Real>(buf: &mut [T; FRAME_BLOCK], s: &[T], start: usize, m: usize) {
     }
 }
 
+/// Where a frame loop stores the O results of a pixel: separate output slices, or one slice of
+/// [`TemperatureUncertainty`] values.
+trait FrameSink<T, const O: usize> {
+    /// Checks that every output holds n pixels; otherwise fills the outputs with NaN and
+    /// returns the error naming the first short or long output (positions from `first`).
+    fn check(&mut self, n: usize, first: u8) -> ArrayResult;
+    /// Stores the results of pixel i (NaN everywhere for a failing pixel).
+    fn put(&mut self, i: usize, v: [T; O]);
+    /// Fills every output with NaN (a failure of the whole call).
+    fn fail_all(&mut self);
+}
+
+impl<T: Real, const O: usize> FrameSink<T, O> for [&mut [T]; O] {
+    fn check(&mut self, n: usize, first: u8) -> ArrayResult {
+        let bad = self
+            .iter()
+            .enumerate()
+            .find(|(_, o)| o.len() != n)
+            .map(|(k, o)| ElementError {
+                index: n.min(o.len()),
+                error: Error::LengthMismatch(first + k as u8),
+            });
+        match bad {
+            None => Ok(()),
+            Some(e) => {
+                self.fail_all();
+                Err(e)
+            }
+        }
+    }
+    #[inline(always)]
+    fn put(&mut self, i: usize, v: [T; O]) {
+        for (o, vi) in self.iter_mut().zip(v) {
+            if let Some(slot) = o.get_mut(i) {
+                *slot = vi;
+            }
+        }
+    }
+    fn fail_all(&mut self) {
+        for o in self.iter_mut() {
+            o.fill(T::nan());
+        }
+    }
+}
+
+/// The uncertainty budget of each pixel: results [T, u_c, c₁ … c₅] stored as one
+/// [`TemperatureUncertainty`] (five inputs; a failing pixel is NaN with `inputs` 0).
+struct Budgets<'a, T>(&'a mut [TemperatureUncertainty<T>]);
+
+impl<T: Real> FrameSink<T, 7> for Budgets<'_, T> {
+    fn check(&mut self, n: usize, first: u8) -> ArrayResult {
+        if self.0.len() == n {
+            return Ok(());
+        }
+        self.fail_all();
+        Err(ElementError {
+            index: n.min(self.0.len()),
+            error: Error::LengthMismatch(first),
+        })
+    }
+    #[inline(always)]
+    fn put(&mut self, i: usize, v: [T; 7]) {
+        let [t, u, c0, c1, c2, c3, c4] = v;
+        if let Some(slot) = self.0.get_mut(i) {
+            *slot = TemperatureUncertainty {
+                temperature_k: t,
+                combined_standard_uncertainty_k: u,
+                sensitivity_coefficients: [c0, c1, c2, c3, c4],
+                inputs: if t.is_nan() { 0 } else { 5 },
+            };
+        }
+    }
+    fn fail_all(&mut self) {
+        for slot in self.0.iter_mut() {
+            *slot = TemperatureUncertainty {
+                temperature_k: T::nan(),
+                combined_standard_uncertainty_k: T::nan(),
+                sensitivity_coefficients: [T::nan(); SENSITIVITY_CAPACITY],
+                inputs: 0,
+            };
+        }
+    }
+}
+
 /// The frame loop of the one-wavelength forms: blocks of [`FRAME_BLOCK`] pixels through the
 /// branch-free `fast(inputs) -> (outputs before `finish`, inside)`, which the compiler turns
 /// into SIMD instructions (callers pass it as an `#[inline(always)]` closure: a closure left to
@@ -1095,13 +1179,12 @@ fn load<T: Real>(buf: &mut [T; FRAME_BLOCK], s: &[T], start: usize, m: usize) {
 fn frame_blocks<T: Real, const P: usize, const O: usize>(
     n: usize,
     inputs: [&[T]; P],
-    outs: [&mut [T]; O],
+    mut outs: impl FrameSink<T, O>,
     fast: impl Fn([T; P]) -> ([T; O], bool),
     finish: impl Fn(&mut [[T; FRAME_BLOCK]; O]),
     mut scalar: impl FnMut(usize) -> Result<[T; O]>,
 ) -> ArrayResult {
     let mut first = None;
-    let mut outs = outs;
     let mut start = 0;
     while start < n {
         let m = (n - start).min(FRAME_BLOCK);
@@ -1124,12 +1207,7 @@ fn frame_blocks<T: Real, const P: usize, const O: usize>(
         let all_in = ins.iter().take(m).all(|&b| b);
         finish(&mut res);
         for k in 0..m {
-            let v = res.each_ref().map(|r| lane(r, k));
-            for (o, vi) in outs.iter_mut().zip(v) {
-                if let Some(slot) = o.get_mut(start + k) {
-                    *slot = vi;
-                }
-            }
+            outs.put(start + k, res.each_ref().map(|r| lane(r, k)));
         }
         if !all_in {
             for i in start..start + m {
@@ -1137,11 +1215,7 @@ fn frame_blocks<T: Real, const P: usize, const O: usize>(
                     note(&mut first, i, err);
                     [T::nan(); O]
                 });
-                for (o, vi) in outs.iter_mut().zip(v) {
-                    if let Some(slot) = o.get_mut(i) {
-                        *slot = vi;
-                    }
-                }
+                outs.put(i, v);
             }
         }
         start += m;
@@ -1185,16 +1259,17 @@ fn object_fast<T: Real>(k: &FrameConstants<T>, sc: &Scene<T>, signal: T) -> (T, 
     (t, l, ok & valid)
 }
 
-/// T_obj and the sum of squares of u_c of one pixel as straight-line code (the operations of
-/// [`solve_with_uncertainty`], whose result is T and the square root of the sum), and whether
-/// the pixel is inside the common case.
+/// T_obj, the sum of squares of u_c and the five sensitivity coefficients of one pixel as
+/// straight-line code (the operations of [`solve_with_uncertainty`], whose result is T, the
+/// square root of the sum and the coefficients), and whether the pixel is inside the common
+/// case.
 #[inline(always)]
 fn object_uncertainty_fast<T: Real>(
     k: &FrameConstants<T>,
     sc: &Scene<T>,
     signal: T,
     u: [T; 5],
-) -> ([T; 2], bool) {
+) -> (T, T, [T; 5], bool) {
     let (t, l, ok_t) = object_fast(k, sc, signal);
     let (e, tau) = (sc.emissivity, sc.transmittance);
     let dt = derivative_at_brightness(k.c2_over_l, k.inv_a, t, l);
@@ -1216,7 +1291,7 @@ fn object_uncertainty_fast<T: Real>(
         ok_c &= (ci.abs() <= T::max_value()) & (ui >= T::zero()) & (ui <= T::max_value());
     }
     let inside = ok_t & ok_d & (d >= T::min_positive_value()) & ok_c & sum_of_squares_is_safe(ss);
-    ([t, ss], inside)
+    (t, ss, c, inside)
 }
 
 #[allow(clippy::too_many_arguments)]
@@ -1288,41 +1363,54 @@ fn object_array<T: Real, Q: Quantity<T>>(
     first.map_or(Ok(()), Err)
 }
 
-#[allow(clippy::too_many_arguments)]
+/// The parameter slices' lengths: `Some` error naming the first that holds neither 1 nor `n`
+/// values.
+fn check_params<T>(n: usize, params: &[(&[T], u8)]) -> Option<ElementError> {
+    params
+        .iter()
+        .find(|(s, _)| s.len() != 1 && s.len() != n)
+        .map(|&(s, arg)| ElementError {
+            index: n.min(s.len()),
+            error: Error::LengthMismatch(arg),
+        })
+}
+
+/// The frame loop of the `_with_uncertainty` forms: `shape(T, u_c or its square, c)` gives
+/// the O results a pixel stores in `outs` (u_c's square is replaced by its root while storing
+/// on the branch-free path; the element loop passes u_c itself).
 #[inline(always)]
-fn object_uncertainty_array<T: Real, Q: Quantity<T>>(
+fn object_uncertainty_array<T: Real, Q: Quantity<T>, const O: usize>(
     q: Result<Q>,
     signals: &[T],
     scene_params: [&[T]; 4],
     u: [&[T]; 5],
-    out_t: &mut [T],
-    out_u: &mut [T],
+    mut outs: impl FrameSink<T, O>,
+    shape: impl Fn(T, T, [T; 5]) -> [T; O] + Copy,
 ) -> ArrayResult {
     let a = Q::FIRST;
     let n = signals.len();
     let [e, tr, tau, tp] = scene_params;
     let [u0, u1, u2, u3, u4] = u;
-    check_lengths(
-        n,
-        &[
-            (e, a + 1),
-            (tr, a + 2),
-            (tau, a + 3),
-            (tp, a + 4),
-            (u0, a + 5),
-            (u1, a + 6),
-            (u2, a + 7),
-            (u3, a + 8),
-            (u4, a + 9),
-        ],
-        &mut [&mut *out_t, &mut *out_u],
-        a + 10,
-    )?;
+    let params = [
+        (e, a + 1),
+        (tr, a + 2),
+        (tau, a + 3),
+        (tp, a + 4),
+        (u0, a + 5),
+        (u1, a + 6),
+        (u2, a + 7),
+        (u3, a + 8),
+        (u4, a + 9),
+    ];
+    if let Some(err) = check_params(n, &params) {
+        outs.fail_all();
+        return Err(err);
+    }
+    outs.check(n, a + 10)?;
     let q = match q {
         Ok(q) => q,
         Err(err) => {
-            out_t.fill(T::nan());
-            out_u.fill(T::nan());
+            outs.fail_all();
             return if n == 0 {
                 Ok(())
             } else {
@@ -1334,7 +1422,7 @@ fn object_uncertainty_array<T: Real, Q: Quantity<T>>(
         }
     };
     let mut cache = SceneCache::new();
-    let mut element = |i: usize| -> Result<[T; 2]> {
+    let mut element = |i: usize| -> Result<[T; O]> {
         let s = signals.get(i).copied().unwrap_or(T::nan());
         let key = [pick(e, i), pick(tr, i), pick(tau, i), pick(tp, i)];
         let us = [
@@ -1348,37 +1436,55 @@ fn object_uncertainty_array<T: Real, Q: Quantity<T>>(
         let sc = cache.get(&q, key, true)?;
         let us = check_uncertainties(a + 5, us)?;
         let v = solve_with_uncertainty(&q, &sc, s, us)?;
-        Ok([v.temperature_k, v.combined_standard_uncertainty_k])
+        Ok(shape(
+            v.temperature_k,
+            v.combined_standard_uncertainty_k,
+            v.sensitivity_coefficients,
+        ))
     };
     if let (Some(k), Some(shared)) = (q.frame_constants(), shared_scene(&q, tr, tp)) {
         return frame_blocks(
             n,
             [signals, e, tau, u0, u1, u2, u3, u4],
-            [out_t, out_u],
+            outs,
             #[inline(always)]
             |[s, e, tau, v0, v1, v2, v3, v4]: [T; 8]| {
                 let sc = Scene::shared(e, tau, shared);
-                object_uncertainty_fast(&k, &sc, s, [v0, v1, v2, v3, v4])
+                let (t, ss, c, inside) = object_uncertainty_fast(&k, &sc, s, [v0, v1, v2, v3, v4]);
+                (shape(t, ss, c), inside)
             },
-            |[_, ss]| sqrt_lanes(ss),
+            |res| {
+                if let Some(ss) = res.get_mut(1) {
+                    sqrt_lanes(ss);
+                }
+            },
             element,
         );
     }
     let mut first = None;
-    for (i, (ot, ou)) in out_t.iter_mut().zip(out_u.iter_mut()).enumerate() {
+    for i in 0..n {
         match element(i) {
-            Ok([t, uc]) => {
-                *ot = t;
-                *ou = uc;
-            }
+            Ok(v) => outs.put(i, v),
             Err(err) => {
-                *ot = T::nan();
-                *ou = T::nan();
+                outs.put(i, [T::nan(); O]);
                 note(&mut first, i, err);
             }
         }
     }
     first.map_or(Ok(()), Err)
+}
+
+/// (T, u_c) of a pixel: the results of the `_with_uncertainty_array` forms.
+#[inline(always)]
+fn temperature_and_uncertainty<T>(t: T, u: T, _c: [T; 5]) -> [T; 2] {
+    [t, u]
+}
+
+/// (T, u_c, c₁ … c₅) of a pixel: the results of the `_budget_array` forms.
+#[inline(always)]
+fn budget<T>(t: T, u: T, c: [T; 5]) -> [T; 7] {
+    let [c0, c1, c2, c3, c4] = c;
+    [t, u, c0, c1, c2, c3, c4]
 }
 
 /// [`object_temperature_wavelength`] over a frame of signals (an image), with per-pixel or
@@ -1525,8 +1631,8 @@ pub fn object_temperature_wavelength_with_uncertainty_array<T: Real>(
             transmittance_uncertainty,
             path_temperature_uncertainty_k,
         ],
-        out_temperature,
-        out_uncertainty,
+        [out_temperature, out_uncertainty],
+        temperature_and_uncertainty,
     )
 }
 
@@ -1565,8 +1671,8 @@ pub fn object_temperature_frequency_with_uncertainty_array<T: Real>(
             transmittance_uncertainty,
             path_temperature_uncertainty_k,
         ],
-        out_temperature,
-        out_uncertainty,
+        [out_temperature, out_uncertainty],
+        temperature_and_uncertainty,
     )
 }
 
@@ -1607,7 +1713,148 @@ pub fn object_temperature_band_with_uncertainty_array<T: Real>(
             transmittance_uncertainty,
             path_temperature_uncertainty_k,
         ],
-        out_temperature,
-        out_uncertainty,
+        [out_temperature, out_uncertainty],
+        temperature_and_uncertainty,
+    )
+}
+
+/// [`object_temperature_wavelength_with_uncertainty`] over a frame of signals (an image), with
+/// the whole uncertainty budget of each pixel: `out[i]` is the [`TemperatureUncertainty`] of
+/// the scalar function for pixel i (T_obj, u_c and the five sensitivity coefficients ∂T/∂L_meas,
+/// ∂T/∂ε, ∂T/∂T_refl, ∂T/∂τ, ∂T/∂T_path), bit for bit.
+///
+/// * `wavelength_m` (argument 0), `signals` (1), `emissivity`, `reflected_temperature_k`,
+///   `transmittance`, `path_temperature_k` (2 to 5), the five standard uncertainties (6 to 10):
+///   as [`object_temperature_wavelength_with_uncertainty_array`], each parameter a slice of
+///   length n (per pixel) or 1 (shared).
+/// * `out` (11): n values.
+///
+/// Returns `Ok(())` when every pixel succeeded; otherwise each failing pixel holds NaN in every
+/// real field and `inputs` 0, the others are computed, and the error names the first failing
+/// index and the scalar function's error. `LengthMismatch(i)` when a parameter slice has
+/// neither 1 nor n values or `out` is not of length n (then every `out` value is the failed
+/// one). Allocates nothing.
+///
+/// Accuracy: that of [`object_temperature_wavelength_with_uncertainty`] (the same bits).
+/// Method: as [`object_temperature_wavelength_with_uncertainty_array`]; the coefficients are
+/// the intermediate values of the same straight-line code.
+#[allow(clippy::too_many_arguments)]
+#[inline(always)]
+pub fn object_temperature_wavelength_budget_array<T: Real>(
+    wavelength_m: T,
+    signals: &[T],
+    emissivity: &[T],
+    reflected_temperature_k: &[T],
+    transmittance: &[T],
+    path_temperature_k: &[T],
+    signal_uncertainty: &[T],
+    emissivity_uncertainty: &[T],
+    reflected_temperature_uncertainty_k: &[T],
+    transmittance_uncertainty: &[T],
+    path_temperature_uncertainty_k: &[T],
+    out: &mut [TemperatureUncertainty<T>],
+) -> ArrayResult {
+    object_uncertainty_array(
+        wavelength(wavelength_m),
+        signals,
+        [
+            emissivity,
+            reflected_temperature_k,
+            transmittance,
+            path_temperature_k,
+        ],
+        [
+            signal_uncertainty,
+            emissivity_uncertainty,
+            reflected_temperature_uncertainty_k,
+            transmittance_uncertainty,
+            path_temperature_uncertainty_k,
+        ],
+        Budgets(out),
+        budget,
+    )
+}
+
+/// [`object_temperature_frequency_with_uncertainty`] over a frame of signals with the whole
+/// uncertainty budget of each pixel; arguments, result and errors as
+/// [`object_temperature_wavelength_budget_array`] with the frequency ν in Hz first. Accuracy:
+/// that of the scalar function, bit for bit. Method: an element loop that reuses the radiances
+/// of the surroundings and the path while the parameters repeat.
+#[allow(clippy::too_many_arguments)]
+pub fn object_temperature_frequency_budget_array<T: Real>(
+    frequency_hz: T,
+    signals: &[T],
+    emissivity: &[T],
+    reflected_temperature_k: &[T],
+    transmittance: &[T],
+    path_temperature_k: &[T],
+    signal_uncertainty: &[T],
+    emissivity_uncertainty: &[T],
+    reflected_temperature_uncertainty_k: &[T],
+    transmittance_uncertainty: &[T],
+    path_temperature_uncertainty_k: &[T],
+    out: &mut [TemperatureUncertainty<T>],
+) -> ArrayResult {
+    object_uncertainty_array(
+        frequency(frequency_hz),
+        signals,
+        [
+            emissivity,
+            reflected_temperature_k,
+            transmittance,
+            path_temperature_k,
+        ],
+        [
+            signal_uncertainty,
+            emissivity_uncertainty,
+            reflected_temperature_uncertainty_k,
+            transmittance_uncertainty,
+            path_temperature_uncertainty_k,
+        ],
+        Budgets(out),
+        budget,
+    )
+}
+
+/// [`object_temperature_band_with_uncertainty`] over a frame of signals with the whole
+/// uncertainty budget of each pixel; arguments as [`object_temperature_wavelength_budget_array`]
+/// with the band edges first (arguments 0, 1), the signals argument 2, the scene 3 to 6, the
+/// uncertainties 7 to 11 and `out` 12. Accuracy: that of the scalar function, bit for bit.
+/// Method: an element loop that reuses the band radiances of the surroundings and the path
+/// while the parameters repeat.
+#[allow(clippy::too_many_arguments)]
+pub fn object_temperature_band_budget_array<T: Real>(
+    lower_m: T,
+    upper_m: T,
+    signals: &[T],
+    emissivity: &[T],
+    reflected_temperature_k: &[T],
+    transmittance: &[T],
+    path_temperature_k: &[T],
+    signal_uncertainty: &[T],
+    emissivity_uncertainty: &[T],
+    reflected_temperature_uncertainty_k: &[T],
+    transmittance_uncertainty: &[T],
+    path_temperature_uncertainty_k: &[T],
+    out: &mut [TemperatureUncertainty<T>],
+) -> ArrayResult {
+    object_uncertainty_array(
+        band(lower_m, upper_m),
+        signals,
+        [
+            emissivity,
+            reflected_temperature_k,
+            transmittance,
+            path_temperature_k,
+        ],
+        [
+            signal_uncertainty,
+            emissivity_uncertainty,
+            reflected_temperature_uncertainty_k,
+            transmittance_uncertainty,
+            path_temperature_uncertainty_k,
+        ],
+        Budgets(out),
+        budget,
     )
 }
