@@ -367,6 +367,44 @@ fn face_forms(c: &mut Criterion) {
             })
         },
     );
+    let mut budgets = vec![bb::TemperatureUncertainty::default(); 64 * 64];
+    g.bench_function("object_temperature_frequency_budget_array_64x64", |b| {
+        b.iter(|| {
+            bb::object_temperature_frequency_budget_array(
+                3e13,
+                black_box(&sig),
+                &[0.9],
+                &[295.0],
+                &[0.95],
+                &[290.0],
+                &[1e-14],
+                &[0.01],
+                &[1.0],
+                &[0.01],
+                &[1.0],
+                &mut budgets,
+            )
+        })
+    });
+    g.bench_function("object_temperature_band_budget_array_64x64", |b| {
+        b.iter(|| {
+            bb::object_temperature_band_budget_array(
+                8e-6,
+                1.4e-5,
+                black_box(&sigb),
+                &[0.9],
+                &[295.0],
+                &[0.95],
+                &[290.0],
+                &[1.0],
+                &[0.01],
+                &[1.0],
+                &[0.01],
+                &[1.0],
+                &mut budgets,
+            )
+        })
+    });
     g.bench_function(
         "object_temperature_band_with_uncertainty_array_64x64",
         |b| {

@@ -426,6 +426,19 @@ proptest! {
                 |v| v.temperature_k.to_bits() == ot[k].to_bits()
                     && v.combined_standard_uncertainty_k.to_bits() == ou[k].to_bits()));
         }
+        let mut budgets = [bb::TemperatureUncertainty::default(); 3];
+        let _ = bb::object_temperature_frequency_budget_array(3e13, &signals, &[e], &[tr], &[tau], &[tp],
+            &[u], &[u], &[u], &[u], &[u], &mut budgets);
+        for (k, &x) in signals.iter().enumerate() {
+            let want = bb::object_temperature_frequency_with_uncertainty(3e13, x, e, tr, tau, tp, u, u, u, u, u);
+            prop_assert!(same_budget(want, &budgets[k]));
+        }
+        let _ = bb::object_temperature_band_budget_array(8e-6, 1.4e-5, &signals, &[e], &[tr], &[tau], &[tp],
+            &[u], &[u], &[u], &[u], &[u], &mut budgets);
+        for (k, &x) in signals.iter().enumerate() {
+            let want = bb::object_temperature_band_with_uncertainty(8e-6, 1.4e-5, x, e, tr, tau, tp, u, u, u, u, u);
+            prop_assert!(same_budget(want, &budgets[k]));
+        }
         let _ = bb::object_temperature_band_with_uncertainty_array(8e-6, 1.4e-5, &signals, &[e], &[tr], &[tau],
             &[tp], &[u], &[u], &[u], &[u], &[u], &mut ot, &mut ou);
         for (k, &x) in signals.iter().enumerate() {
@@ -433,6 +446,31 @@ proptest! {
             prop_assert!(want.map_or(ot[k].is_nan() && ou[k].is_nan(),
                 |v| v.temperature_k.to_bits() == ot[k].to_bits()
                     && v.combined_standard_uncertainty_k.to_bits() == ou[k].to_bits()));
+        }
+    }
+}
+
+/// Whether a budget frame's value is the scalar function's result bit for bit (or the failed
+/// value, NaN with no inputs, where the scalar function fails).
+fn same_budget(
+    want: relicore::Result<bb::TemperatureUncertainty<f64>>,
+    got: &bb::TemperatureUncertainty<f64>,
+) -> bool {
+    match want {
+        Ok(w) => {
+            w.temperature_k.to_bits() == got.temperature_k.to_bits()
+                && w.combined_standard_uncertainty_k.to_bits()
+                    == got.combined_standard_uncertainty_k.to_bits()
+                && w.sensitivity_coefficients
+                    .iter()
+                    .zip(got.sensitivity_coefficients.iter())
+                    .all(|(a, b)| a.to_bits() == b.to_bits())
+                && w.inputs == got.inputs
+        }
+        Err(_) => {
+            got.temperature_k.is_nan()
+                && got.inputs == 0
+                && got.sensitivity_coefficients.iter().all(|c| c.is_nan())
         }
     }
 }

@@ -556,6 +556,43 @@ fn thermometry_frame_calls() -> Vec<Box<dyn Fn() -> Outcome + Send + Sync>> {
                 array_outcome(r, &t)
             }));
         }
+        // the budget frames: every field of each pixel's value
+        for kind in 0..3 {
+            let s = signals.clone();
+            let e = e.clone();
+            calls.push(Box::new(move || {
+                let mut b = vec![bb::TemperatureUncertainty::default(); 64];
+                let us: [&[f64]; 5] = [&[1e4], &[0.01], &[1.0], &[0.01], &[1.0]];
+                let scene: [&[f64]; 3] = [&[293.0], &[0.9], &[280.0]];
+                let r = match kind {
+                    0 => bb::object_temperature_wavelength_budget_array(
+                        1e-5, &s, &e, scene[0], scene[1], scene[2], us[0], us[1], us[2], us[3],
+                        us[4], &mut b,
+                    ),
+                    1 => bb::object_temperature_frequency_budget_array(
+                        3e13, &s, &e, scene[0], scene[1], scene[2], us[0], us[1], us[2], us[3],
+                        us[4], &mut b,
+                    ),
+                    _ => bb::object_temperature_band_budget_array(
+                        8e-6, 1.4e-5, &s, &e, scene[0], scene[1], scene[2], us[0], us[1], us[2],
+                        us[3], us[4], &mut b,
+                    ),
+                };
+                let flat: Vec<f64> = b
+                    .iter()
+                    .flat_map(|v| {
+                        [
+                            v.temperature_k,
+                            v.combined_standard_uncertainty_k,
+                            f64::from(v.inputs),
+                        ]
+                        .into_iter()
+                        .chain(v.sensitivity_coefficients)
+                    })
+                    .collect();
+                array_outcome(r, &flat)
+            }));
+        }
     }
     // the response-table forms and the combined standard uncertainty
     let w = [8e-6, 9e-6, 11e-6, 13e-6, 14e-6];

@@ -68,34 +68,56 @@ def _slice_call(fn: Function, call: str) -> str:
 
 def _row_function(rt, real: str = "f64") -> str:
     """`<result>_row` (`_row_f32`): a result value as one row of f64 (f32) (the fields in order; a
-    count as a float)."""
-    parts = []
+    count as a float), by one pattern over the row (straight stores, no iterator chain: the frame
+    forms write a million rows)."""
+    slots, stores = [], []
     for f in rt.fields:
         if f.kind == "count":
-            parts.append(f"[f64::from(v.{f.name})]" if real == "f64" else f"[v.{f.name} as f32]")
+            slots.append(f"{f.name}")
+            value = f"f64::from(v.{f.name})" if real == "f64" else f"v.{f.name} as f32"
+            stores.append(f"*{f.name} = {value};")
         elif f.length > 1:
-            parts.append(f"v.{f.name}")
+            names = [f"{f.name}_{k}" for k in range(f.length)]
+            slots += names
+            stores.append(f"[{', '.join('*' + n for n in names)}] = v.{f.name};")
         else:
-            parts.append(f"[v.{f.name}]")
-    chain = parts[0] + ".into_iter()" + "".join(f".chain({p})" for p in parts[1:])
+            slots.append(f.name)
+            stores.append(f"*{f.name} = v.{f.name};")
     suffix = "" if real == "f64" else "_f32"
+    body = "\n".join(f"        {x}" for x in stores)
     return (
         f"/// A `{rt.core_type}` as one row of {rt.width} {real} (its fields in order; `inputs` as a float).\n"
+        f"#[inline(always)]\n"
         f"fn {rt.name}_row{suffix}(v: {rt.core_path}<{real}>, out: &mut [{real}]) {{\n"
-        f"    for (o, x) in out.iter_mut().zip({chain}) {{\n        *o = x;\n    }}\n}}"
+        f"    if let [{', '.join(slots)}] = out {{\n{body}\n    }}\n}}"
     )
 
 
-def _rust_frame(fn: Function) -> str:
-    """The frame wrapper of `fn`: its first `frame` arguments single values, the others slices."""
+def _rust_frame(fn: Function, real: str = "f64") -> str:
+    """The frame wrapper of `fn` in `real`: its first `frame` arguments single values, the others
+    slices; the core's frame form in the widest SIMD compilation. A function with a result type
+    writes rows through `rows_frame` (the core's frame form fills one value per element)."""
     k = fn.frame
-    lines = [f"fn {fn.name}_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {{"]
-    lines.append(f"    let &[{', '.join(fn.arg_names)}] = x else {{")
+    suffix = "" if real == "f64" else "_f32"
+    names = fn.arg_names
+    lines = [f"fn {fn.name}_frame{suffix}(x: &[&[{real}]], out: &mut [{real}]) -> ArrayResult {{"]
+    lines.append(f"    let &[{', '.join(names)}] = x else {{")
     lines.append("        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });")
     lines.append("    };")
-    for a in fn.arg_names[:k]:
-        lines.append(f"    let {a} = {a}.first().copied().unwrap_or(f64::NAN);")
-    lines.append(f"    {CORE_PATH[fn.topic]}::{fn.name}_array({', '.join(fn.arg_names)}, out)")
+    for a in names[:k]:
+        lines.append(f"    let {a} = {a}.first().copied().unwrap_or({real}::NAN);")
+    core = f"{CORE_PATH[fn.topic]}::{fn.frame_function}"
+    params = [f"{a}: {real}" for a in names[:k]] + [f"{a}: &[{real}]" for a in names[k:]]
+    rt = fn.result_type
+    if rt:
+        params.append(f"o: &mut [{rt.core_path}<{real}>]")
+        sliced = ", ".join(names[k:])
+        lines.append(f"    rows_frame([{sliced}], out, {rt.width}, |[{sliced}], o| {{")
+        lines.append(f"        widest!(|{', '.join(params)}| -> ArrayResult {{ {core}({', '.join(names)}, o) }})")
+        lines.append(f"    }}, {rt.name}_row{suffix})")
+    else:
+        params.append(f"out: &mut [{real}]")
+        lines.append(f"    widest!(|{', '.join(params)}| -> ArrayResult {{ {core}({', '.join(names)}, out) }})")
     lines.append("}")
     return "\n".join(lines)
 
@@ -174,11 +196,14 @@ def _rust_single(fn: Function) -> str:
     if not has_single(fn):
         return "None"
     call = f"{CORE_PATH[fn.topic]}::{fn.name}({', '.join(fn.arg_names)})"
+    frame = f"Some({fn.name}_frame_f32)" if fn.frame else "None"
     if fn.result_type:
         call += f".map(|v| {fn.result_type.name}_row_f32(v, out))"
-        return f"Some(Single {{ body: SingleBody::Row(|x, out| {_slice_call(fn, call)}), array: None }})"
+        return (f"Some(Single {{ body: SingleBody::Row(|x, out| {_slice_call(fn, call)}), array: None, "
+                f"frame: {frame} }})")
     array = f"Some({fn.name}_array_f32)" if fn.array_f32 and fn.array and fn.array.simd else "None"
-    return f"Some(Single {{ body: SingleBody::Number(|x| {_slice_call(fn, call)}), array: {array} }})"
+    return (f"Some(Single {{ body: SingleBody::Number(|x| {_slice_call(fn, call)}), array: {array}, "
+            f"frame: {frame} }})")
 
 
 def _rust_spec(fn: Function) -> str:
@@ -212,6 +237,7 @@ def rust(fns: list[Function]) -> str:
         "use relicore_dispatch::widest;",
         "",
         "use crate::functions::{Body, G, H, Lift, S, Single, SingleBody, Spec, U};",
+        "use crate::kernels::rows_frame;",
     ]
     for receiver, static, core in (("none", "PLAIN", "()"), ("universe", "UNIVERSE", "U"), ("history", "HISTORY", "H"),
                                    ("growth", "GROWTH", "G"), ("power_spectrum", "SPECTRUM", "S")):
@@ -230,8 +256,10 @@ def rust(fns: list[Function]) -> str:
                     _rust_array_f32(f)]
     for f in fns:
         if f.frame:
-            out += ["", f"/// `{f.name}_array` of the core (a frame: the first {f.frame} argument(s) single values, "
+            out += ["", f"/// `{f.frame_function}` of the core (a frame: the first {f.frame} argument(s) single values, "
                     "the others slices of the chunk's length or of one value).", _rust_frame(f)]
+            if has_single(f):
+                out += ["", f"/// `{f.frame_function}` of the core in single precision.", _rust_frame(f, "f32")]
     for rt in dict.fromkeys(f.result_type for f in fns if f.result_type):
         out += ["", _row_function(rt)]
     for rt in dict.fromkeys(f.result_type for f in fns if f.result_type and has_single(f)):
@@ -677,7 +705,8 @@ def results_module(fns: list[Function]) -> tuple[str, str]:
                "        for _, start, length, kind in cls._LAYOUT:",
                "            piece = rows[..., start : start + length]",
                '            if kind == "count":',
-               "                values.append(np.nan_to_num(piece[..., 0], nan=0.0).astype(np.int64))",
+               "                # NaN (a failed element) to 0 and the float to int64 in one pass",
+               "                values.append(np.fmax(piece[..., 0], 0.0, out=np.empty(piece.shape[:-1], np.int64), casting=\"unsafe\"))",
                "            elif length == 1:",
                "                values.append(piece[..., 0])",
                "            else:",

@@ -107,6 +107,12 @@ class Function:
     order: int = field(compare=False)
     returns: str | None = None
     frame: int | None = None  # leading single-value arguments of the core's frame form
+    frame_core: str | None = None  # the core's frame form when it is not `<name>_array`
+
+    @property
+    def frame_function(self) -> str:
+        """The core's frame form (a function of the topic's module)."""
+        return self.frame_core or f"{self.name}_array"
 
     @property
     def recv(self) -> Receiver | None:
@@ -201,13 +207,17 @@ def load(path: Path = TABLE) -> list[Function]:
             order=i,
             returns=e.get("returns"),
             frame=int(e["frame"]["scalars"]) if "frame" in e else None,
+            frame_core=e["frame"].get("core") if "frame" in e else None,
         )
         if fn.returns and fn.returns not in RESULTS:
             raise TableError(f"{where}: returns must be one of {sorted(RESULTS)}")
         if fn.returns and (fn.array or fn.receiver != "none" or fn.python != "function"):
             raise TableError(f"{where}: a function with a result type is a plain function without array form")
-        if fn.frame is not None and not (0 < fn.frame < len(fn.args) and not fn.returns and not fn.array):
+        if fn.frame is not None and not (0 < fn.frame < len(fn.args) and not fn.array):
             raise TableError(f"{where}: frame scalars must leave the signal and the scene as slices")
+        if fn.frame is not None and bool(fn.returns) != bool(fn.frame_core):
+            raise TableError(f"{where}: a frame form of a function with a result type (and only such) names its core "
+                             "function (frame.core), which writes one result value per element")
         if fn.topic not in TOPICS:
             raise TableError(f"{where}: topic must be one of {TOPICS}")
         if fn.receiver != "none" and fn.receiver not in RECEIVERS:

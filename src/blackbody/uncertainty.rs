@@ -38,7 +38,7 @@ pub const SENSITIVITY_CAPACITY: usize = 5;
 /// signal, emissivity, reflected temperature, path transmittance, path temperature), in K per
 /// unit of that input; the first `inputs` entries are used, the others are 0.
 #[repr(C)]
-#[derive(Debug, Clone, Copy, PartialEq)]
+#[derive(Debug, Clone, Copy, PartialEq, Default)]
 pub struct TemperatureUncertainty<T> {
     /// The inferred temperature, K.
     pub temperature_k: T,

@@ -31,8 +31,10 @@ BLACKBODY = _args("none", "function", "blackbody")
 #: uncertainty) -> element-wise parameters
 BLACKBODY_RESULTS = _args("none", "function", "blackbody", results=True)
 #: (name, number of leading single-value arguments) of the functions whose image path is the
-#: core's frame form (`<name>_array`)
+#: core's frame form (`<name>_array`, or the budget form a function with a result type names)
 FRAMES = [(f.name, f.frame) for f in FUNCTIONS if f.frame]
+#: the core's frame form of each function of FRAMES
+FRAME_FUNCTIONS = {f.name: f.frame_function for f in FUNCTIONS if f.frame}
 #: methods of relicore.Universe -> parameters after self
 UNIVERSE_METHODS = _args("universe", "method")
 #: read-only properties of relicore.Universe computed by the core (constants of a universe)

@@ -50,8 +50,9 @@ pub(crate) enum Body<R: 'static> {
 }
 
 /// A core frame function: (the inputs of one chunk, each of the chunk's length or of one
-/// value, the chunk's output).
-pub(crate) type FrameFn = fn(&[&[f64]], &mut [f64]) -> ArrayResult;
+/// value, the chunk's output: one float per element, or a row of `Spec::width` floats for a
+/// result value).
+pub(crate) type FrameFn<T = f64> = fn(&[&[T]], &mut [T]) -> ArrayResult;
 
 /// A core array function (SIMD-dispatched): (receiver, the values of the first argument, the
 /// single values of the others in order, out).
@@ -67,6 +68,8 @@ pub(crate) type SingleArrayFn = fn(&[f32], &[f32], &mut [f32]) -> ArrayResult;
 pub(crate) struct Single {
     pub(crate) body: SingleBody,
     pub(crate) array: Option<SingleArrayFn>,
+    /// The core's frame form in single precision (its leading single values as `Spec::frame`).
+    pub(crate) frame: Option<FrameFn<f32>>,
 }
 
 /// How a single-precision twin is called: on a slice of the function's arity, returning a
@@ -277,16 +280,12 @@ fn map_slices<P: Receiver>(
         }
         _ => None,
     };
-    let frame_path = match spec.frame {
-        Some((k, f))
-            if x.iter().take(k).all(|s| s.len() == 1) && x.get(k).is_some_and(|s| s.len() == n) =>
-        {
-            Some(f)
-        }
-        _ => None,
-    };
+    let frame_path = spec
+        .frame
+        .filter(|&(k, _)| frame_fits(x, k, n))
+        .map(|(_, f)| f);
     let failed = if let Some(f) = frame_path {
-        loop_over(py, calls, || run_frame(x, out, nan_on_error, f))
+        loop_over(py, calls, || run_frame(x, out, width, nan_on_error, f))
     } else {
         match (array_path, &spec.body, x) {
             (_, Body::AN(f), _) => loop_over(py, calls, || {
@@ -345,6 +344,14 @@ fn map_single<P: Receiver>(
     }
     let keep = |e: Error| is_element_error(spec, e);
     let calls = n.saturating_mul(CALL_WORK);
+    let frame_path = match (spec.frame, single.frame) {
+        (Some((k, _)), Some(f)) if frame_fits(x, k, n) => Some(f),
+        _ => None,
+    };
+    if let Some(f) = frame_path {
+        let failed = loop_over(py, calls, || run_frame(x, out, width, nan_on_error, f));
+        return raise_first(py, spec, receiver, x, shape, failed);
+    }
     let failed = match (single.array, x.split_first()) {
         (Some(f), Some((first, rest))) if first.len() == n && single_values(rest) => {
             let values: Vec<f32> = rest.iter().filter_map(|s| s.first().copied()).collect();
@@ -367,6 +374,12 @@ fn map_single<P: Receiver>(
         },
     };
     raise_first(py, spec, receiver, x, shape, failed)
+}
+
+/// Whether a frame form fits the operands: its first `k` arguments single values and the next
+/// one (the signals) of one value per element.
+fn frame_fits<T>(x: &[&[T]], k: usize, n: usize) -> bool {
+    x.iter().take(k).all(|s| s.len() == 1) && x.get(k).is_some_and(|s| s.len() == n)
 }
 
 /// The error of the first failing element of a loop (its inputs in the message), if any.

@@ -9,6 +9,7 @@ use relicore::{ArrayResult, ElementError, Error};
 use relicore_dispatch::widest;
 
 use crate::functions::{Body, G, H, Lift, S, Single, SingleBody, Spec, U};
+use crate::kernels::rows_frame;
 
 /// The regular functions called on nothing.
 pub(crate) static PLAIN: &[Spec<()>] = &[
@@ -22,7 +23,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: Some(spectral_radiance_wavelength_array),
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, temperature_k] => relicore::blackbody::spectral_radiance_wavelength(wavelength_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: Some(spectral_radiance_wavelength_array_f32) }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, temperature_k] => relicore::blackbody::spectral_radiance_wavelength(wavelength_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: Some(spectral_radiance_wavelength_array_f32), frame: None }),
     },
     Spec {
         name: "spectral_radiance_frequency",
@@ -34,7 +35,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: Some(spectral_radiance_frequency_array),
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, temperature_k] => relicore::blackbody::spectral_radiance_frequency(frequency_hz, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: Some(spectral_radiance_frequency_array_f32) }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, temperature_k] => relicore::blackbody::spectral_radiance_frequency(frequency_hz, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: Some(spectral_radiance_frequency_array_f32), frame: None }),
     },
     Spec {
         name: "spectral_radiance_wavenumber",
@@ -46,7 +47,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: Some(spectral_radiance_wavenumber_array),
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavenumber_per_m, temperature_k] => relicore::blackbody::spectral_radiance_wavenumber(wavenumber_per_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: Some(spectral_radiance_wavenumber_array_f32) }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavenumber_per_m, temperature_k] => relicore::blackbody::spectral_radiance_wavenumber(wavenumber_per_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: Some(spectral_radiance_wavenumber_array_f32), frame: None }),
     },
     Spec {
         name: "photon_radiance_wavelength",
@@ -142,7 +143,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [temperature_k] => relicore::blackbody::photon_number_density(temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [temperature_k] => relicore::blackbody::photon_number_density(temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: None }),
     },
     Spec {
         name: "radiation_energy_density",
@@ -154,7 +155,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [temperature_k] => relicore::blackbody::radiation_energy_density(temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [temperature_k] => relicore::blackbody::radiation_energy_density(temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: None }),
     },
     Spec {
         name: "peak_wavelength",
@@ -262,7 +263,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [lower_m, upper_m, temperature_k] => relicore::blackbody::band_radiance_wavelength(lower_m, upper_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [lower_m, upper_m, temperature_k] => relicore::blackbody::band_radiance_wavelength(lower_m, upper_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: None }),
     },
     Spec {
         name: "band_photon_radiance_wavelength",
@@ -310,7 +311,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, spectral_radiance] => relicore::blackbody::brightness_temperature_wavelength(wavelength_m, spectral_radiance), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, spectral_radiance] => relicore::blackbody::brightness_temperature_wavelength(wavelength_m, spectral_radiance), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: None }),
     },
     Spec {
         name: "brightness_temperature_frequency",
@@ -322,7 +323,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, spectral_radiance] => relicore::blackbody::brightness_temperature_frequency(frequency_hz, spectral_radiance), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, spectral_radiance] => relicore::blackbody::brightness_temperature_frequency(frequency_hz, spectral_radiance), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: None }),
     },
     Spec {
         name: "rayleigh_jeans_temperature",
@@ -418,7 +419,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: None }),
     },
     Spec {
         name: "measured_spectral_radiance_frequency",
@@ -430,7 +431,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: None }),
     },
     Spec {
         name: "measured_band_radiance_wavelength",
@@ -454,7 +455,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: Some((1, object_temperature_wavelength_frame)),
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_wavelength(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_wavelength(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: Some(object_temperature_wavelength_frame_f32) }),
     },
     Spec {
         name: "object_temperature_frequency",
@@ -466,7 +467,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: Some((1, object_temperature_frequency_frame)),
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_frequency(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_frequency(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: Some(object_temperature_frequency_frame_f32) }),
     },
     Spec {
         name: "object_temperature_band",
@@ -524,9 +525,9 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::Row(|_, x, out| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_wavelength_with_uncertainty(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
         array: None,
-        frame: None,
+        frame: Some((1, object_temperature_wavelength_with_uncertainty_frame)),
         width: 8,
-        single: Some(Single { body: SingleBody::Row(|x, out| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_wavelength_with_uncertainty(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row_f32(v, out)), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Row(|x, out| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_wavelength_with_uncertainty(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row_f32(v, out)), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: Some(object_temperature_wavelength_with_uncertainty_frame_f32) }),
     },
     Spec {
         name: "object_temperature_frequency_with_uncertainty",
@@ -536,9 +537,9 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::Row(|_, x, out| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_frequency_with_uncertainty(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
         array: None,
-        frame: None,
+        frame: Some((1, object_temperature_frequency_with_uncertainty_frame)),
         width: 8,
-        single: Some(Single { body: SingleBody::Row(|x, out| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_frequency_with_uncertainty(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row_f32(v, out)), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Row(|x, out| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_frequency_with_uncertainty(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row_f32(v, out)), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: Some(object_temperature_frequency_with_uncertainty_frame_f32) }),
     },
     Spec {
         name: "object_temperature_band_with_uncertainty",
@@ -548,7 +549,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         free: false,
         body: Body::Row(|_, x, out| match *x { [lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_band_with_uncertainty(lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
         array: None,
-        frame: None,
+        frame: Some((2, object_temperature_band_with_uncertainty_frame)),
         width: 8,
         single: None,
     },
@@ -1474,7 +1475,16 @@ fn object_temperature_wavelength_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayRe
         return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
     };
     let wavelength_m = wavelength_m.first().copied().unwrap_or(f64::NAN);
-    relicore::blackbody::object_temperature_wavelength_array(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out)
+    widest!(|wavelength_m: f64, signal: &[f64], emissivity: &[f64], reflected_temperature_k: &[f64], transmittance: &[f64], path_temperature_k: &[f64], out: &mut [f64]| -> ArrayResult { relicore::blackbody::object_temperature_wavelength_array(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out) })
+}
+
+/// `object_temperature_wavelength_array` of the core in single precision.
+fn object_temperature_wavelength_frame_f32(x: &[&[f32]], out: &mut [f32]) -> ArrayResult {
+    let &[wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+    };
+    let wavelength_m = wavelength_m.first().copied().unwrap_or(f32::NAN);
+    widest!(|wavelength_m: f32, signal: &[f32], emissivity: &[f32], reflected_temperature_k: &[f32], transmittance: &[f32], path_temperature_k: &[f32], out: &mut [f32]| -> ArrayResult { relicore::blackbody::object_temperature_wavelength_array(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out) })
 }
 
 /// `object_temperature_frequency_array` of the core (a frame: the first 1 argument(s) single values, the others slices of the chunk's length or of one value).
@@ -1483,7 +1493,16 @@ fn object_temperature_frequency_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayRes
         return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
     };
     let frequency_hz = frequency_hz.first().copied().unwrap_or(f64::NAN);
-    relicore::blackbody::object_temperature_frequency_array(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out)
+    widest!(|frequency_hz: f64, signal: &[f64], emissivity: &[f64], reflected_temperature_k: &[f64], transmittance: &[f64], path_temperature_k: &[f64], out: &mut [f64]| -> ArrayResult { relicore::blackbody::object_temperature_frequency_array(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out) })
+}
+
+/// `object_temperature_frequency_array` of the core in single precision.
+fn object_temperature_frequency_frame_f32(x: &[&[f32]], out: &mut [f32]) -> ArrayResult {
+    let &[frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+    };
+    let frequency_hz = frequency_hz.first().copied().unwrap_or(f32::NAN);
+    widest!(|frequency_hz: f32, signal: &[f32], emissivity: &[f32], reflected_temperature_k: &[f32], transmittance: &[f32], path_temperature_k: &[f32], out: &mut [f32]| -> ArrayResult { relicore::blackbody::object_temperature_frequency_array(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out) })
 }
 
 /// `object_temperature_band_array` of the core (a frame: the first 2 argument(s) single values, the others slices of the chunk's length or of one value).
@@ -1493,19 +1512,83 @@ fn object_temperature_band_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
     };
     let lower_m = lower_m.first().copied().unwrap_or(f64::NAN);
     let upper_m = upper_m.first().copied().unwrap_or(f64::NAN);
-    relicore::blackbody::object_temperature_band_array(lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out)
+    widest!(|lower_m: f64, upper_m: f64, signal: &[f64], emissivity: &[f64], reflected_temperature_k: &[f64], transmittance: &[f64], path_temperature_k: &[f64], out: &mut [f64]| -> ArrayResult { relicore::blackbody::object_temperature_band_array(lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out) })
+}
+
+/// `object_temperature_wavelength_budget_array` of the core (a frame: the first 1 argument(s) single values, the others slices of the chunk's length or of one value).
+fn object_temperature_wavelength_with_uncertainty_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
+    let &[wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] = x else {
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+    };
+    let wavelength_m = wavelength_m.first().copied().unwrap_or(f64::NAN);
+    rows_frame([signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], out, 8, |[signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], o| {
+        widest!(|wavelength_m: f64, signal: &[f64], emissivity: &[f64], reflected_temperature_k: &[f64], transmittance: &[f64], path_temperature_k: &[f64], signal_uncertainty: &[f64], emissivity_uncertainty: &[f64], reflected_temperature_uncertainty_k: &[f64], transmittance_uncertainty: &[f64], path_temperature_uncertainty_k: &[f64], o: &mut [relicore::blackbody::TemperatureUncertainty<f64>]| -> ArrayResult { relicore::blackbody::object_temperature_wavelength_budget_array(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k, o) })
+    }, temperature_uncertainty_row)
+}
+
+/// `object_temperature_wavelength_budget_array` of the core in single precision.
+fn object_temperature_wavelength_with_uncertainty_frame_f32(x: &[&[f32]], out: &mut [f32]) -> ArrayResult {
+    let &[wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] = x else {
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+    };
+    let wavelength_m = wavelength_m.first().copied().unwrap_or(f32::NAN);
+    rows_frame([signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], out, 8, |[signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], o| {
+        widest!(|wavelength_m: f32, signal: &[f32], emissivity: &[f32], reflected_temperature_k: &[f32], transmittance: &[f32], path_temperature_k: &[f32], signal_uncertainty: &[f32], emissivity_uncertainty: &[f32], reflected_temperature_uncertainty_k: &[f32], transmittance_uncertainty: &[f32], path_temperature_uncertainty_k: &[f32], o: &mut [relicore::blackbody::TemperatureUncertainty<f32>]| -> ArrayResult { relicore::blackbody::object_temperature_wavelength_budget_array(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k, o) })
+    }, temperature_uncertainty_row_f32)
+}
+
+/// `object_temperature_frequency_budget_array` of the core (a frame: the first 1 argument(s) single values, the others slices of the chunk's length or of one value).
+fn object_temperature_frequency_with_uncertainty_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
+    let &[frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] = x else {
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+    };
+    let frequency_hz = frequency_hz.first().copied().unwrap_or(f64::NAN);
+    rows_frame([signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], out, 8, |[signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], o| {
+        widest!(|frequency_hz: f64, signal: &[f64], emissivity: &[f64], reflected_temperature_k: &[f64], transmittance: &[f64], path_temperature_k: &[f64], signal_uncertainty: &[f64], emissivity_uncertainty: &[f64], reflected_temperature_uncertainty_k: &[f64], transmittance_uncertainty: &[f64], path_temperature_uncertainty_k: &[f64], o: &mut [relicore::blackbody::TemperatureUncertainty<f64>]| -> ArrayResult { relicore::blackbody::object_temperature_frequency_budget_array(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k, o) })
+    }, temperature_uncertainty_row)
+}
+
+/// `object_temperature_frequency_budget_array` of the core in single precision.
+fn object_temperature_frequency_with_uncertainty_frame_f32(x: &[&[f32]], out: &mut [f32]) -> ArrayResult {
+    let &[frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] = x else {
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+    };
+    let frequency_hz = frequency_hz.first().copied().unwrap_or(f32::NAN);
+    rows_frame([signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], out, 8, |[signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], o| {
+        widest!(|frequency_hz: f32, signal: &[f32], emissivity: &[f32], reflected_temperature_k: &[f32], transmittance: &[f32], path_temperature_k: &[f32], signal_uncertainty: &[f32], emissivity_uncertainty: &[f32], reflected_temperature_uncertainty_k: &[f32], transmittance_uncertainty: &[f32], path_temperature_uncertainty_k: &[f32], o: &mut [relicore::blackbody::TemperatureUncertainty<f32>]| -> ArrayResult { relicore::blackbody::object_temperature_frequency_budget_array(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k, o) })
+    }, temperature_uncertainty_row_f32)
+}
+
+/// `object_temperature_band_budget_array` of the core (a frame: the first 2 argument(s) single values, the others slices of the chunk's length or of one value).
+fn object_temperature_band_with_uncertainty_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
+    let &[lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] = x else {
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+    };
+    let lower_m = lower_m.first().copied().unwrap_or(f64::NAN);
+    let upper_m = upper_m.first().copied().unwrap_or(f64::NAN);
+    rows_frame([signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], out, 8, |[signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], o| {
+        widest!(|lower_m: f64, upper_m: f64, signal: &[f64], emissivity: &[f64], reflected_temperature_k: &[f64], transmittance: &[f64], path_temperature_k: &[f64], signal_uncertainty: &[f64], emissivity_uncertainty: &[f64], reflected_temperature_uncertainty_k: &[f64], transmittance_uncertainty: &[f64], path_temperature_uncertainty_k: &[f64], o: &mut [relicore::blackbody::TemperatureUncertainty<f64>]| -> ArrayResult { relicore::blackbody::object_temperature_band_budget_array(lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k, o) })
+    }, temperature_uncertainty_row)
 }
 
 /// A `TemperatureUncertainty` as one row of 8 f64 (its fields in order; `inputs` as a float).
+#[inline(always)]
 fn temperature_uncertainty_row(v: relicore::blackbody::TemperatureUncertainty<f64>, out: &mut [f64]) {
-    for (o, x) in out.iter_mut().zip([v.temperature_k].into_iter().chain([v.combined_standard_uncertainty_k]).chain(v.sensitivity_coefficients).chain([f64::from(v.inputs)])) {
-        *o = x;
+    if let [temperature_k, combined_standard_uncertainty_k, sensitivity_coefficients_0, sensitivity_coefficients_1, sensitivity_coefficients_2, sensitivity_coefficients_3, sensitivity_coefficients_4, inputs] = out {
+        *temperature_k = v.temperature_k;
+        *combined_standard_uncertainty_k = v.combined_standard_uncertainty_k;
+        [*sensitivity_coefficients_0, *sensitivity_coefficients_1, *sensitivity_coefficients_2, *sensitivity_coefficients_3, *sensitivity_coefficients_4] = v.sensitivity_coefficients;
+        *inputs = f64::from(v.inputs);
     }
 }
 
 /// A `TemperatureUncertainty` as one row of 8 f32 (its fields in order; `inputs` as a float).
+#[inline(always)]
 fn temperature_uncertainty_row_f32(v: relicore::blackbody::TemperatureUncertainty<f32>, out: &mut [f32]) {
-    for (o, x) in out.iter_mut().zip([v.temperature_k].into_iter().chain([v.combined_standard_uncertainty_k]).chain(v.sensitivity_coefficients).chain([v.inputs as f32])) {
-        *o = x;
+    if let [temperature_k, combined_standard_uncertainty_k, sensitivity_coefficients_0, sensitivity_coefficients_1, sensitivity_coefficients_2, sensitivity_coefficients_3, sensitivity_coefficients_4, inputs] = out {
+        *temperature_k = v.temperature_k;
+        *combined_standard_uncertainty_k = v.combined_standard_uncertainty_k;
+        [*sensitivity_coefficients_0, *sensitivity_coefficients_1, *sensitivity_coefficients_2, *sensitivity_coefficients_3, *sensitivity_coefficients_4] = v.sensitivity_coefficients;
+        *inputs = v.inputs as f32;
     }
 }

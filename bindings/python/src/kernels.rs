@@ -7,7 +7,7 @@
 use numpy::PyReadonlyArray1;
 use pyo3::exceptions::PyValueError;
 use pyo3::prelude::*;
-use relicore::{ArrayResult, Error, Result};
+use relicore::{ArrayResult, ElementError, Error, Result};
 
 /// Calls `f` once per element: input k is read at the element index when it has `n`
 /// elements and at 0 when it has one (a broadcast scalar). On failure the element gets NaN
@@ -165,24 +165,27 @@ pub(crate) fn run_rows<T: Element>(
 /// [`run`]; every element is the core's frame element, which is bit for bit the scalar
 /// function's. Returns the first failing element; with `nan_on_error` the call succeeds with its
 /// NaN.
-pub(crate) fn run_frame(
-    inputs: &[&[f64]],
-    out: &mut [f64],
+pub(crate) fn run_frame<T: Element>(
+    inputs: &[&[T]],
+    out: &mut [T],
+    width: usize,
     nan_on_error: bool,
-    f: impl Fn(&[&[f64]], &mut [f64]) -> ArrayResult + Sync,
+    f: impl Fn(&[&[T]], &mut [T]) -> ArrayResult + Sync,
 ) -> Option<(usize, Error)> {
     let m = inputs.len();
     if m > MAX_ARGS {
         return Some((0, Error::LengthMismatch(0)));
     }
-    let n = out.len();
-    let first = split(out, |start, part| {
-        let mut chunk: [&[f64]; MAX_ARGS] = [&[]; MAX_ARGS];
+    let width = width.max(1);
+    let n = out.len() / width;
+    let first = split_rows(out, width, |start, part| {
+        let rows = part.len() / width;
+        let mut chunk: [&[T]; MAX_ARGS] = [&[]; MAX_ARGS];
         for (c, s) in chunk.iter_mut().zip(inputs) {
             *c = if s.len() == 1 && n != 1 {
                 s
             } else {
-                match s.get(start..start + part.len()) {
+                match s.get(start..start + rows) {
                     Some(piece) => piece,
                     None => return Some((start, Error::LengthMismatch(0))),
                 }
@@ -194,6 +197,50 @@ pub(crate) fn run_frame(
     });
     if nan_on_error { None } else { first }
 }
+
+/// A core frame form whose results are values (a struct per element), writing rows of `width`
+/// floats: the element-wise `inputs` (each of the rows' count or of one value) go to `call` in
+/// pieces of [`ROWS_PIECE`] elements through one buffer of values, which `row` turns into
+/// rows. Every value is the core's (the scalar function's bits); a failing element's row is
+/// `row` of the core's failed value (NaN fields, zero counts). Returns the first failure, its
+/// index counted from the start of `out`.
+pub(crate) fn rows_frame<T: Element, V: Copy + Default, const K: usize>(
+    inputs: [&[T]; K],
+    out: &mut [T],
+    width: usize,
+    call: impl Fn([&[T]; K], &mut [V]) -> ArrayResult,
+    row: impl Fn(V, &mut [T]),
+) -> ArrayResult {
+    let width = width.max(1);
+    let n = out.len() / width;
+    let mut values = vec![V::default(); ROWS_PIECE.min(n)];
+    let mut first = None;
+    let mut start = 0;
+    for rows in out.chunks_mut(ROWS_PIECE * width) {
+        let m = rows.len() / width;
+        let mut piece = inputs;
+        for (p, s) in piece.iter_mut().zip(inputs) {
+            if s.len() != 1 || n == 1 {
+                *p = s.get(start..start + m).unwrap_or(&[]);
+            }
+        }
+        let buffer = values.get_mut(..m).unwrap_or(&mut []);
+        if let Err(e) = call(piece, buffer) {
+            first.get_or_insert(ElementError {
+                index: start + e.index,
+                error: e.error,
+            });
+        }
+        for (v, r) in buffer.iter().zip(rows.chunks_exact_mut(width)) {
+            row(*v, r);
+        }
+        start += m;
+    }
+    first.map_or(Ok(()), Err)
+}
+
+/// Elements per call of a core frame form in [`rows_frame`] (a buffer of this many values).
+const ROWS_PIECE: usize = 4096;
 
 /// Arrays shorter than this are computed on the calling thread (thread start-up, tens of
 /// microseconds, would not pay off).

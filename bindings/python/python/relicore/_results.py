@@ -59,7 +59,8 @@ class TemperatureUncertainty(NamedTuple):
         for _, start, length, kind in cls._LAYOUT:
             piece = rows[..., start : start + length]
             if kind == "count":
-                values.append(np.nan_to_num(piece[..., 0], nan=0.0).astype(np.int64))
+                # NaN (a failed element) to 0 and the float to int64 in one pass
+                values.append(np.fmax(piece[..., 0], 0.0, out=np.empty(piece.shape[:-1], np.int64), casting="unsafe"))
             elif length == 1:
                 values.append(piece[..., 0])
             else:
