@@ -100,7 +100,8 @@ def _rust_frame(fn: Function, real: str = "f64") -> str:
     k = fn.frame
     suffix = "" if real == "f64" else "_f32"
     names = fn.arg_names
-    lines = [f"fn {fn.name}_frame{suffix}(x: &[&[{real}]], out: &mut [{real}]) -> ArrayResult {{"]
+    lines = ["#[allow(clippy::too_many_arguments)]",
+             f"fn {fn.name}_frame{suffix}(x: &[&[{real}]], out: &mut [{real}]) -> ArrayResult {{"]
     lines.append(f"    let &[{', '.join(names)}] = x else {{")
     lines.append("        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });")
     lines.append("    };")

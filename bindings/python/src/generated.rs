@@ -1470,6 +1470,7 @@ fn spectral_radiance_wavenumber_array_f32(x: &[f32], rest: &[f32], out: &mut [f3
 }
 
 /// `object_temperature_wavelength_array` of the core (a frame: the first 1 argument(s) single values, the others slices of the chunk's length or of one value).
+#[allow(clippy::too_many_arguments)]
 fn object_temperature_wavelength_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
     let &[wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
         return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
@@ -1479,6 +1480,7 @@ fn object_temperature_wavelength_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayRe
 }
 
 /// `object_temperature_wavelength_array` of the core in single precision.
+#[allow(clippy::too_many_arguments)]
 fn object_temperature_wavelength_frame_f32(x: &[&[f32]], out: &mut [f32]) -> ArrayResult {
     let &[wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
         return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
@@ -1488,6 +1490,7 @@ fn object_temperature_wavelength_frame_f32(x: &[&[f32]], out: &mut [f32]) -> Arr
 }
 
 /// `object_temperature_frequency_array` of the core (a frame: the first 1 argument(s) single values, the others slices of the chunk's length or of one value).
+#[allow(clippy::too_many_arguments)]
 fn object_temperature_frequency_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
     let &[frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
         return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
@@ -1497,6 +1500,7 @@ fn object_temperature_frequency_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayRes
 }
 
 /// `object_temperature_frequency_array` of the core in single precision.
+#[allow(clippy::too_many_arguments)]
 fn object_temperature_frequency_frame_f32(x: &[&[f32]], out: &mut [f32]) -> ArrayResult {
     let &[frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
         return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
@@ -1506,6 +1510,7 @@ fn object_temperature_frequency_frame_f32(x: &[&[f32]], out: &mut [f32]) -> Arra
 }
 
 /// `object_temperature_band_array` of the core (a frame: the first 2 argument(s) single values, the others slices of the chunk's length or of one value).
+#[allow(clippy::too_many_arguments)]
 fn object_temperature_band_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
     let &[lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
         return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
@@ -1516,6 +1521,7 @@ fn object_temperature_band_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
 }
 
 /// `object_temperature_wavelength_budget_array` of the core (a frame: the first 1 argument(s) single values, the others slices of the chunk's length or of one value).
+#[allow(clippy::too_many_arguments)]
 fn object_temperature_wavelength_with_uncertainty_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
     let &[wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] = x else {
         return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
@@ -1527,6 +1533,7 @@ fn object_temperature_wavelength_with_uncertainty_frame(x: &[&[f64]], out: &mut 
 }
 
 /// `object_temperature_wavelength_budget_array` of the core in single precision.
+#[allow(clippy::too_many_arguments)]
 fn object_temperature_wavelength_with_uncertainty_frame_f32(x: &[&[f32]], out: &mut [f32]) -> ArrayResult {
     let &[wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] = x else {
         return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
@@ -1538,6 +1545,7 @@ fn object_temperature_wavelength_with_uncertainty_frame_f32(x: &[&[f32]], out: &
 }
 
 /// `object_temperature_frequency_budget_array` of the core (a frame: the first 1 argument(s) single values, the others slices of the chunk's length or of one value).
+#[allow(clippy::too_many_arguments)]
 fn object_temperature_frequency_with_uncertainty_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
     let &[frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] = x else {
         return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
@@ -1549,6 +1557,7 @@ fn object_temperature_frequency_with_uncertainty_frame(x: &[&[f64]], out: &mut [
 }
 
 /// `object_temperature_frequency_budget_array` of the core in single precision.
+#[allow(clippy::too_many_arguments)]
 fn object_temperature_frequency_with_uncertainty_frame_f32(x: &[&[f32]], out: &mut [f32]) -> ArrayResult {
     let &[frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] = x else {
         return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
@@ -1560,6 +1569,7 @@ fn object_temperature_frequency_with_uncertainty_frame_f32(x: &[&[f32]], out: &m
 }
 
 /// `object_temperature_band_budget_array` of the core (a frame: the first 2 argument(s) single values, the others slices of the chunk's length or of one value).
+#[allow(clippy::too_many_arguments)]
 fn object_temperature_band_with_uncertainty_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
     let &[lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] = x else {
         return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
