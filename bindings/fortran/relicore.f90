@@ -637,35 +637,35 @@ module relicore
       relicore_response_weighted_radiance_temperature_derivative, &
       relicore_response_weighted_radiance_temperature_derivative_s, &
       relicore_response_weighted_radiance_temperature_derivative_f32, &
-           relicore_combined_standard_uncertainty, relicore_combined_standard_uncertainty_s, &
+      relicore_combined_standard_uncertainty, relicore_combined_standard_uncertainty_s, &
       relicore_combined_standard_uncertainty_correlated, &
-      relicore_combined_standard_uncertainty_correlated_s, &
-      relicore_object_temperature_wavelength_array, &
-      relicore_object_temperature_wavelength_array_f32, &
-      relicore_object_temperature_wavelength_with_uncertainty_array, &
-           relicore_object_temperature_frequency_array, relicore_object_temperature_frequency_array_f32, &
-      relicore_object_temperature_frequency_with_uncertainty_array, &
-           relicore_object_temperature_band_array, relicore_object_temperature_band_array_f32, &
-      relicore_object_temperature_band_with_uncertainty_array, &
-      relicore_object_temperature_band_with_uncertainty_array_f32
-  ! relicore_object_temperature_frequency_with_uncertainty_array_f32 (more than 63 characters)
-  ! is the real(c_float) form of the generic name
-  ! relicore_object_temperature_frequency_with_uncertainty_array
-  interface relicore_object_temperature_frequency_with_uncertainty_array
-    module procedure relicore_object_temperature_frequency_with_uncertainty_array, thermometry_f32_1
-  end interface relicore_object_temperature_frequency_with_uncertainty_array
+      relicore_combined_standard_uncertainty_correlated_s
   ! relicore_response_weighted_radiance_temperature_derivative_f32_s (more than 63 characters)
   ! is the real(c_float) form of the generic name
   ! relicore_response_weighted_radiance_temperature_derivative_s
   interface relicore_response_weighted_radiance_temperature_derivative_s
     module procedure relicore_response_weighted_radiance_temperature_derivative_s, thermometry_f32_2
   end interface relicore_response_weighted_radiance_temperature_derivative_s
-  ! relicore_object_temperature_wavelength_with_uncertainty_array_f32 (more than 63 characters)
-  ! is the real(c_float) form of the generic name
+  public :: relicore_object_temperature_wavelength_array, &
+      relicore_object_temperature_wavelength_array_f32, &
+      relicore_object_temperature_wavelength_with_uncertainty_array, &
+      relicore_object_temperature_frequency_array, relicore_object_temperature_frequency_array_f32, &
+      relicore_object_temperature_frequency_with_uncertainty_array, &
+      relicore_object_temperature_band_array, relicore_object_temperature_band_array_f32, &
+      relicore_object_temperature_band_with_uncertainty_array, &
+      relicore_object_temperature_band_with_uncertainty_array_f32
+  ! relicore_object_temperature_wavelength_with_uncertainty_array_f32 (more than 63 characters) is
+  ! the real(c_float) form of the generic name
   ! relicore_object_temperature_wavelength_with_uncertainty_array
   interface relicore_object_temperature_wavelength_with_uncertainty_array
-    module procedure relicore_object_temperature_wavelength_with_uncertainty_array, thermometry_f32_3
+    module procedure relicore_object_temperature_wavelength_with_uncertainty_array, frame_f32_1
   end interface relicore_object_temperature_wavelength_with_uncertainty_array
+  ! relicore_object_temperature_frequency_with_uncertainty_array_f32 (more than 63 characters) is
+  ! the real(c_float) form of the generic name
+  ! relicore_object_temperature_frequency_with_uncertainty_array
+  interface relicore_object_temperature_frequency_with_uncertainty_array
+    module procedure relicore_object_temperature_frequency_with_uncertainty_array, frame_f32_2
+  end interface relicore_object_temperature_frequency_with_uncertainty_array
   ! ---------------------------------------------------------------- types
   ! struct relicore_two_load_calibration { double frequency_hz; double gain; double offset; };
   ! The gain and offset of a two-load calibration at one frequency: reading = gain * J +
@@ -9284,11 +9284,10 @@ contains
     call report(code, 'relicore_object_temperature_wavelength_with_uncertainty_array', stat)
   end subroutine relicore_object_temperature_wavelength_with_uncertainty_array
 
-  subroutine thermometry_f32_3(wavelength_m, &
-      signals, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
-      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
-      transmittance_uncertainty, path_temperature_uncertainty_k, out_temperature, out_uncertainty, &
-      stat)
+  subroutine frame_f32_1(wavelength_m, signals, emissivity, reflected_temperature_k, transmittance, &
+      path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+      reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+      path_temperature_uncertainty_k, out_temperature, out_uncertainty, stat)
     real(c_float), intent(in) :: wavelength_m
     real(c_float), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
         transmittance(:), path_temperature_k(:), signal_uncertainty(:), emissivity_uncertainty(:), &
@@ -9340,7 +9339,7 @@ contains
       out_uncertainty = nan32()
     end if
     call report(code, 'relicore_object_temperature_wavelength_with_uncertainty_array_f32', stat)
-  end subroutine thermometry_f32_3
+  end subroutine frame_f32_1
 
   subroutine relicore_object_temperature_frequency_array(frequency_hz, signals, emissivity, &
       reflected_temperature_k, transmittance, path_temperature_k, out, stat)
@@ -9477,11 +9476,10 @@ contains
     call report(code, 'relicore_object_temperature_frequency_with_uncertainty_array', stat)
   end subroutine relicore_object_temperature_frequency_with_uncertainty_array
 
-  subroutine thermometry_f32_1(frequency_hz, &
-      signals, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
-      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
-      transmittance_uncertainty, path_temperature_uncertainty_k, out_temperature, out_uncertainty, &
-      stat)
+  subroutine frame_f32_2(frequency_hz, signals, emissivity, reflected_temperature_k, transmittance, &
+      path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+      reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+      path_temperature_uncertainty_k, out_temperature, out_uncertainty, stat)
     real(c_float), intent(in) :: frequency_hz
     real(c_float), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
         transmittance(:), path_temperature_k(:), signal_uncertainty(:), emissivity_uncertainty(:), &
@@ -9533,7 +9531,7 @@ contains
       out_uncertainty = nan32()
     end if
     call report(code, 'relicore_object_temperature_frequency_with_uncertainty_array_f32', stat)
-  end subroutine thermometry_f32_1
+  end subroutine frame_f32_2
 
   subroutine relicore_object_temperature_band_array(lower_m, upper_m, signals, emissivity, &
       reflected_temperature_k, transmittance, path_temperature_k, out, stat)

@@ -20,15 +20,15 @@ C_SRC = ROOT / "bindings" / "c" / "src"
 SHORT = {"blackbody": "bb", "cosmology": "cosmo", "decoupling": "dc", "growth": "gr"}
 
 
-def _doc(lines: list[str]) -> list[str]:
+def _doc(lines: list[str], width: int = 96) -> list[str]:
     """Doc comment lines, long ones wrapped at 100 columns (bullets keep a hanging indent)."""
     out = []
     for line in lines:
-        if len(line) <= 96:
+        if len(line) <= width:
             out.append(f"/// {line}".rstrip())
             continue
         indent = "  " if line.lstrip().startswith("* ") else ""
-        for piece in textwrap.wrap(line, 96, subsequent_indent=indent, break_on_hyphens=False):
+        for piece in textwrap.wrap(line, width, subsequent_indent=indent, break_on_hyphens=False):
             out.append(f"/// {piece}")
     return out
 
@@ -296,4 +296,126 @@ def _prune(use: str, text: str) -> str:
 
 
 def outputs(fns: list[Function]) -> dict[Path, str]:
-    return {C_SRC / f"gen_{topic}.rs": module(topic, fns) for topic in TOPICS}
+    out = {C_SRC / f"gen_{topic}.rs": module(topic, fns) for topic in TOPICS}
+    out[C_SRC / "gen_frames.rs"] = frames_module(fns)
+    return out
+
+
+# ---------------------------------------------------------------------------- frame forms
+_SUPERSCRIPT = str.maketrans("0123456789", "⁰¹²³⁴⁵⁶⁷⁸⁹")
+
+
+def _unicode_unit(unit: str) -> str:
+    """'W m-2 sr-1' -> 'W m⁻² sr⁻¹' (the C docs' spelling of the table's units)."""
+    return re.sub(r"(?<=[A-Za-z])-(\d+)", lambda m: "⁻" + m.group(1).translate(_SUPERSCRIPT), unit)
+
+
+def _frame_params(fn: Function) -> tuple[list[str], str, list[str], list[str]]:
+    """(single values, the signal, the scene parameters, the standard uncertainties) of a frame."""
+    ff = fn.frame_form
+    names = fn.arg_names
+    k, s = ff.scalars, len(ff.domains)
+    return names[:k], names[k], names[k + 1 : k + 1 + s], names[k + 1 + s :]
+
+
+def frame_export(fn: Function, ty: str) -> str:
+    """The C frame (image) form `<name>_array` (or `_array_f32`) of a table entry."""
+    ff = fn.frame_form
+    assert ff
+    c_ty = "double" if ty == "f64" else "float"
+    name = fn.c_name + ("_array" if ty == "f64" else "_array_f32")
+    singles, signal, scene, uncertain = _frame_params(fn)
+    base = fn.name.removesuffix("_with_uncertainty")
+    what = "the " + rustdoc.summary(rustdoc.find(next(f for f in FUNCTIONS if f.name == base))[1]).split(" from ")[0].lower()
+    if ty == "f32":
+        head = [f"`float` twin of `{fn.c_name}_array` for firmware and single-precision frames: the same "
+                "core function in `float`."]
+    elif len(ff.outputs) == 1:
+        head = [f"`{fn.c_name}` over a frame of signals (an image): {ff.outputs[0][0]}[i] = {what} of "
+                f"{signal}s[i], bit for bit that of the scalar function, with per-pixel or shared scene "
+                "parameters."]
+    else:
+        head = [f"`{fn.c_name}` over a frame of signals (an image): {what} and its combined standard "
+                "uncertainty per pixel, bit for bit those of the scalar function, with per-pixel or "
+                "shared scene parameters and standard uncertainties."]
+    quoted = ", ".join(f"`{a}`" for a in singles)
+    they = "it is" if len(singles) == 1 else "they are"
+    unit = _unicode_unit(fn.args[len(singles)].meaning.split(" in ", 1)[1].split(",")[0])
+    lines = [
+        "///",
+        f"/// * {quoted}: {ff.scalars_doc} (when {they} not, every pixel fails).",
+        f"/// * `{signal}s`, `n`: the n measured {signal}s L_meas in {unit}, finite.",
+    ]
+    items = ", ".join(f"`{a}`, `n_{a}` ({d})" for a, d in zip(scene, ff.domains))
+    bullets = [f"* {items}: n or 1 values each."]
+    if uncertain:
+        bullets.append(f"* the standard uncertainties {', '.join(f'`{a}`' for a in uncertain)}, each "
+                       "followed by its length (n or 1): finite, >= 0.")
+    bullets.append("* " + "; ".join(f"`{o}`: n values of {m}" for o, m in ff.outputs) + ".")
+    tail = [
+        "",
+        "Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one "
+        "value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0 "
+        "included). When some pixels fail, their outputs are NaN, the others are computed, and the "
+        "code of the first failing pixel is returned (the errors of the scalar function). "
+        "`RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1 values (every output "
+        "NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a length 0; every "
+        "non-NULL output NaN). The radiances of the surroundings and the path are computed once for "
+        "shared parameters (and reused while per-pixel parameters repeat). Allocates nothing.",
+        "",
+        "# Safety",
+        f"Each input pointer is NULL or points to its length of readable `{c_ty}`; each output is NULL "
+        f"or points to n writable `{c_ty}` and overlaps no other buffer.",
+    ]
+    doc = _doc(head, 92) + lines + _doc(bullets + tail, 92)
+    slices = [signal] + scene + uncertain
+    params = [f"{a}: {ty}" for a in singles] + [f"{signal}s: *const {ty}", "n: usize"]
+    params += [p for a in slices[1:] for p in (f"{a}: *const {ty}", f"n_{a}: usize")]
+    params += [f"{o}: *mut {ty}" for o, _ in ff.outputs]
+    pairs = [f"({signal}s, n)"] + [f"({a}, n_{a})" for a in slices[1:]]
+    s_names = [f"s{i}" for i in range(len(slices))]
+    o_names = [f"o{i}" for i in range(len(ff.outputs))]
+    call = f"bb::{fn.name}_array({', '.join(singles + s_names + o_names)})"
+    if ff.simd:
+        sig = [f"{a}: {ty}" for a in singles] + [f"{s}: &[{ty}]" for s in s_names]
+        sig += [f"{o}: &mut [{ty}]" for o in o_names]
+        call = f"widest!(|{', '.join(sig)}| -> ArrayResult {{ {call} }})"
+    return "\n".join(doc + [
+        "#[allow(clippy::too_many_arguments)]",
+        "#[unsafe(no_mangle)]",
+        f"pub unsafe extern \"C\" fn {name}({', '.join(params)}) -> i32 {{",
+        f"    let params = [{', '.join(pairs)}];",
+        "    // SAFETY: the pointers are NULL or valid for their lengths, the outputs for n writes and",
+        "    // disjoint from the inputs (this function's contract).",
+        f"    unsafe {{ frame_call(n, params, [{', '.join(o for o, _ in ff.outputs)}], "
+        f"|&[{', '.join(s_names)}], [{', '.join(o_names)}]| {{ {call} }}) }}",
+        "}",
+    ])
+
+
+FUNCTIONS: list[Function] = []
+
+
+def frames_module(fns: list[Function]) -> str:
+    """bindings/c/src/gen_frames.rs: the frame forms, each entry's with-uncertainty form after it."""
+    FUNCTIONS[:] = fns
+    framed = [f for f in fns if f.frame_form]
+    order = {f.name: f.order for f in fns}
+    framed.sort(key=lambda f: (order[f.name.removesuffix("_with_uncertainty")], f.order))
+    body = []
+    for fn in framed:
+        body.append(frame_export(fn, "f64"))
+        if fn.frame_form.f32:
+            body.append(frame_export(fn, "f32"))
+    head = [
+        banner("//", "the C frame (image) forms of radiation thermometry"),
+        "//! The C frame (image) forms of the table's entries with a `frame`: one call over n signals "
+        "with per-pixel or shared scene parameters (a pointer and a length of n or 1 each), through "
+        "`thermometry::frame_call`.\n",
+        "use crate::thermometry::frame_call;",
+        "use relicore::ArrayResult;",
+        "use relicore::blackbody as bb;",
+        "use relicore_dispatch::widest;",
+        "",
+    ]
+    return rustfmt("\n".join(head) + "\n" + "\n\n".join(body) + "\n")

@@ -385,6 +385,8 @@ def module_text(fns: list[Function]) -> str:
 
     types, nan_helpers = result_types(fns)
     parts = part_sections()
+    for key, lines in frame_sections(fns).items():
+        parts[key] = parts[key] + lines
     procs = [line for _, body in nan_helpers for line in [""] + body] + procs
     inserts = {"coverage": coverage, "public": public, "interfaces": interfaces,
                "procedures": procs, "constants": constants_face.fortran_lines(WIDTH, ascii_text),
@@ -683,3 +685,110 @@ def outputs(fns: list[Function]) -> dict[Path, str]:
         what = "a dispatch list of the Fortran vector tests"
         out[TESTS / f"{key}.inc"] = banner("!", what) + "\n".join(lines) + "\n"
     return out
+
+
+# ---------------------------------------------------------------------------- frame forms
+FRAME_NOTE = (
+    "Object temperature over a frame (an image) of signals: signals(n) and the scene parameters "
+    "emissivity, reflected_temperature_k, transmittance, path_temperature_k (and, for the "
+    "_with_uncertainty forms, the five standard uncertainties), each of size n (per pixel) or 1 "
+    "(shared). One C call for the whole frame; every pixel bit for bit the scalar function's. out "
+    "(out_temperature, out_uncertainty) of size n; failing pixels NaN and stat = the first failing "
+    "pixel's code; RELICORE_ERROR_LENGTH_MISMATCH (every output NaN) when a parameter has neither n "
+    "nor 1 elements or an output is not of size n. Pass an image as a rank-1 view (reshape, or "
+    "pointer remapping of a contiguous 2-D array)."
+)
+
+
+@dataclass(frozen=True)
+class Frame:
+    """One C frame form (`<name>_array`, `_array_f32`) and its Fortran subroutine."""
+
+    fn: Function
+    f32: bool
+
+    @property
+    def kind(self) -> str:
+        return "c_float" if self.f32 else "c_double"
+
+    @property
+    def c_name(self) -> str:
+        return f"relicore_{self.fn.name}_array" + ("_f32" if self.f32 else "")
+
+    @property
+    def generic(self) -> str | None:
+        """The generic name (the double form's) when the C name is too long for Fortran."""
+        return self.c_name.removesuffix("_f32") if len(self.c_name) > 63 else None
+
+    def parts(self) -> tuple[list[str], list[str], list[str], list[str]]:
+        """(single values, slices, their lengths' names, outputs)."""
+        ff = self.fn.frame_form
+        names = self.fn.arg_names
+        slices = [names[ff.scalars] + "s"] + names[ff.scalars + 1:]
+        return names[: ff.scalars], slices, ["n"] + [f"n_{a}" for a in slices[1:]], [o for o, _ in ff.outputs]
+
+
+def frames(fns: list[Function]) -> list[Frame]:
+    order = {f.name: f.order for f in fns}
+    framed = sorted((f for f in fns if f.frame_form),
+                    key=lambda f: (order[f.name.removesuffix("_with_uncertainty")], f.order))
+    return [Frame(f, s) for f in framed for s in (False, True) if not s or f.frame_form.f32]
+
+
+def frame_sections(fns: list[Function]) -> dict[str, list[str]]:
+    """The public names, bind(C) interfaces and subroutines of the frame forms."""
+    all_frames = frames(fns)
+    private = {fr.c_name: f"frame_f32_{k}" for k, fr in enumerate((f for f in all_frames if f.generic), 1)}
+    public = statement("  ", "public :: " + ", ".join(f.c_name for f in all_frames if not f.generic))
+    interfaces: list[str] = []
+    procs: list[str] = [""] + comment(FRAME_NOTE) + [""]
+    for fr in all_frames:
+        singles, slices, lengths, outs = fr.parts()
+        ctype = "float" if fr.f32 else "double"
+        if fr.generic:
+            public += comment(f"{fr.c_name} (more than 63 characters) is the real({fr.kind}) form of the "
+                              f"generic name {fr.generic}")
+            public += [f"  interface {fr.generic}",
+                       f"    module procedure {fr.generic}, {private[fr.c_name]}",
+                       f"  end interface {fr.generic}"]
+        c_params = [f"{ctype} {a}" for a in singles]
+        c_params += [p for s, n in zip(slices, lengths) for p in (f"const {ctype} *{s}", f"size_t {n}")]
+        c_params += [f"{ctype} *{o}" for o in outs]
+        raw = "c_" + fr.c_name.removeprefix("relicore_")
+        actual = singles + [p for s, n in zip(slices, lengths) for p in (s, n)] + outs
+        interfaces += comment(f"int32_t {fr.c_name}({', '.join(c_params)});", indent="    ", hang="    ")
+        interfaces += statement("    ", f"function {raw}({', '.join(actual)}) &")
+        interfaces += [f"        bind(C, name='{fr.c_name}') result(status)",
+                       f"      import :: {fr.kind}, c_int32_t, c_size_t",
+                       f"      real({fr.kind}), value :: {', '.join(singles)}"]
+        interfaces += statement("      ", f"real({fr.kind}), intent(in) :: {', '.join(s + '(*)' for s in slices)}")
+        interfaces += statement("      ", f"integer(c_size_t), value :: {', '.join(lengths)}")
+        interfaces += [f"      real({fr.kind}), intent(out) :: {', '.join(o + '(*)' for o in outs)}",
+                       "      integer(c_int32_t) :: status", f"    end function {raw}"]
+        name = private.get(fr.c_name, fr.c_name)
+        scene = slices[1:]
+        nan = "nan32()" if fr.f32 else "nan64()"
+        call = singles + [p for s in slices for p in (s, f"size({s}, kind=c_size_t)")] + outs
+        lines = statement("  ", f"subroutine {name}({', '.join(singles + slices + outs + ['stat'])})")
+        lines += [f"    real({fr.kind}), intent(in) :: {', '.join(singles)}"]
+        lines += statement("    ", f"real({fr.kind}), intent(in) :: {', '.join(s + '(:)' for s in slices)}")
+        lines += [f"    real({fr.kind}), intent(out) :: {', '.join(o + '(:)' for o in outs)}",
+                  "    integer(c_int32_t), intent(out), optional :: stat",
+                  "    integer(c_int32_t) :: code", "    integer :: n", f"    n = size({slices[0]})",
+                  f"    if (.not. ({' .and. '.join(f'size({o}) == n' for o in outs)})) then",
+                  "      code = RELICORE_ERROR_LENGTH_MISMATCH", "    else if (n == 0) then",
+                  "      ! nothing to compute (a parameter of size 0 or 1 is then valid)",
+                  "      code = RELICORE_OK", "      do_check: block", f"        integer :: sizes({len(scene)})"]
+        lines += statement("        ", f"sizes = [{', '.join(f'size({s})' for s in scene)}]")
+        lines += ["        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH",
+                  "      end block do_check"]
+        lines += [("    else if (" if k == 0 else "        ") + f"size({s}) == 0"
+                  + (" .or. &" if k + 1 < len(scene) else ") then") for k, s in enumerate(scene)]
+        lines += ["      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)",
+                  "      code = RELICORE_ERROR_LENGTH_MISMATCH", "    else"]
+        lines += statement("      ", f"code = {raw}({', '.join(call)})")
+        lines += ["    end if", "    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then"]
+        lines += [f"      {o} = {nan}" for o in outs]
+        lines += ["    end if", f"    call report(code, '{fr.c_name}', stat)", f"  end subroutine {name}"]
+        procs += lines + [""]
+    return {"public": public, "interfaces": interfaces, "procedures": procs[:-1]}

@@ -19,6 +19,7 @@ KEYS = {
     "name", "topic", "receiver", "core", "infallible", "args", "result", "f32", "array",
     "array_f32", "python", "returns", "frame",
 }
+FRAME_KEYS = {"scalars", "simd", "f32", "scalars_doc", "domains", "outputs"}
 RESULT_KEYS = {
     "core_type", "core_path", "c_struct", "c_module", "fortran_type", "python_type", "fields",
 }
@@ -92,6 +93,20 @@ class ArrayForm:
 
 
 @dataclass(frozen=True)
+class FrameForm:
+    """The C and Fortran frame (image) form `<name>_array` of an entry: the first `scalars`
+    arguments single values, the signal n values, every later argument n values or 1 (shared);
+    `outputs` are (name, meaning) of the n-value outputs."""
+
+    scalars: int
+    simd: bool  # through the SIMD dispatch (`widest!`) in C
+    f32: bool  # a `float` twin `<name>_array_f32`
+    scalars_doc: str  # what the single values are, with their domain (C docs)
+    domains: tuple[str, ...]  # short domain of each scene parameter after the signal (C docs)
+    outputs: tuple[tuple[str, str], ...]
+
+
+@dataclass(frozen=True)
 class Function:
     name: str
     topic: str
@@ -106,7 +121,8 @@ class Function:
     python: str
     order: int = field(compare=False)
     returns: str | None = None
-    frame: int | None = None  # leading single-value arguments of the core's frame form
+    frame: int | None = None  # leading single values of the frame form that Python's array path calls
+    frame_form: FrameForm | None = None  # the C and Fortran frame form
 
     @property
     def recv(self) -> Receiver | None:
@@ -186,6 +202,17 @@ def load(path: Path = TABLE) -> list[Function]:
         receiver = e.get("receiver", "none")
         arr = e.get("array")
         array = ArrayForm(arr["arg"], arr["name"], bool(arr.get("simd", False))) if arr else None
+        frame_form = None
+        if "frame" in e:
+            fr = e["frame"]
+            if set(fr) - FRAME_KEYS or "scalars" not in fr:
+                raise TableError(f"{where}: frame needs scalars and takes only {sorted(FRAME_KEYS)}")
+            outs = fr.get("outputs", [f"out: {e['result'].split(',')[0]}"])
+            frame_form = FrameForm(
+                scalars=int(fr["scalars"]), simd=bool(fr.get("simd", False)), f32=bool(fr.get("f32", False)),
+                scalars_doc=fr.get("scalars_doc", ""), domains=tuple(fr.get("domains", ())),
+                outputs=tuple(tuple(o.split(": ", 1)) for o in outs),
+            )
         fn = Function(
             name=e["name"],
             topic=e["topic"],
@@ -200,14 +227,20 @@ def load(path: Path = TABLE) -> list[Function]:
             python=e["python"],
             order=i,
             returns=e.get("returns"),
-            frame=int(e["frame"]["scalars"]) if "frame" in e else None,
+            # a result type's frame form gives T and u_c only: Python loops the scalar function
+            frame=frame_form.scalars if frame_form and not e.get("returns") else None,
+            frame_form=frame_form,
         )
         if fn.returns and fn.returns not in RESULTS:
             raise TableError(f"{where}: returns must be one of {sorted(RESULTS)}")
         if fn.returns and (fn.array or fn.receiver != "none" or fn.python != "function"):
             raise TableError(f"{where}: a function with a result type is a plain function without array form")
-        if fn.frame is not None and not (0 < fn.frame < len(fn.args) and not fn.returns and not fn.array):
+        ff = fn.frame_form
+        if ff and not (0 < ff.scalars < len(fn.args) and not fn.array and fn.receiver == "none"):
             raise TableError(f"{where}: frame scalars must leave the signal and the scene as slices")
+        if ff and not (0 < len(ff.domains) <= len(fn.args) - ff.scalars - 1 and ff.outputs):
+            raise TableError(f"{where}: frame needs the domains of the scene (the parameters after the "
+                             "signal; any later ones are standard uncertainties) and its outputs")
         if fn.topic not in TOPICS:
             raise TableError(f"{where}: topic must be one of {TOPICS}")
         if fn.receiver != "none" and fn.receiver not in RECEIVERS:
