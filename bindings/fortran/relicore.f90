@@ -636,16 +636,16 @@ module relicore
       relicore_object_temperature_response_with_uncertainty_f32_s, &
       relicore_response_weighted_radiance_temperature_derivative, &
       relicore_response_weighted_radiance_temperature_derivative_s, &
-      relicore_response_weighted_radiance_temperature_derivative_f32, &
-      relicore_combined_standard_uncertainty, relicore_combined_standard_uncertainty_s, &
-      relicore_combined_standard_uncertainty_correlated, &
-      relicore_combined_standard_uncertainty_correlated_s
-  ! relicore_response_weighted_radiance_temperature_derivative_f32_s (more than 63 characters)
-  ! is the real(c_float) form of the generic name
+      relicore_response_weighted_radiance_temperature_derivative_f32
+  ! relicore_response_weighted_radiance_temperature_derivative_f32_s (more than 63 characters) is
+  ! the real(c_float) form of the generic name
   ! relicore_response_weighted_radiance_temperature_derivative_s
   interface relicore_response_weighted_radiance_temperature_derivative_s
-    module procedure relicore_response_weighted_radiance_temperature_derivative_s, thermometry_f32_2
+    module procedure relicore_response_weighted_radiance_temperature_derivative_s, table_f32_1
   end interface relicore_response_weighted_radiance_temperature_derivative_s
+  public :: relicore_combined_standard_uncertainty, relicore_combined_standard_uncertainty_s, &
+      relicore_combined_standard_uncertainty_correlated, &
+      relicore_combined_standard_uncertainty_correlated_s
   public :: relicore_object_temperature_wavelength_array, &
       relicore_object_temperature_wavelength_array_f32, &
       relicore_object_temperature_wavelength_with_uncertainty_array, &
@@ -9022,8 +9022,7 @@ contains
     if (code /= RELICORE_OK) res = nan32()
   end function relicore_response_weighted_radiance_temperature_derivative_f32
 
-  subroutine thermometry_f32_2(wavelengths_m, &
-      response_table, temperature_k, out, stat)
+  subroutine table_f32_1(wavelengths_m, response_table, temperature_k, out, stat)
     real(c_float), intent(in) :: wavelengths_m(:), response_table(:)
     real(c_float), intent(in) :: temperature_k
     real(c_float), intent(out) :: out
@@ -9033,7 +9032,7 @@ contains
         response_table, temperature_k, out)
     if (code /= RELICORE_OK) out = nan32()
     call report(code, 'relicore_response_weighted_radiance_temperature_derivative_f32', stat)
-  end subroutine thermometry_f32_2
+  end subroutine table_f32_1
 
   ! Calls relicore_response_weighted_radiance_temperature_derivative_f32 with the table copied to
   ! buffers of at least one element, so that a zero-size table reaches the C library as a valid

@@ -13,7 +13,7 @@ from pathlib import Path
 
 from . import rustdoc
 from .common import banner
-from .table import ROOT, TOPICS, Function
+from .table import ROOT, TOPICS, Function, TableFunction, table_functions
 
 C_SRC = ROOT / "bindings" / "c" / "src"
 
@@ -298,6 +298,7 @@ def _prune(use: str, text: str) -> str:
 def outputs(fns: list[Function]) -> dict[Path, str]:
     out = {C_SRC / f"gen_{topic}.rs": module(topic, fns) for topic in TOPICS}
     out[C_SRC / "gen_frames.rs"] = frames_module(fns)
+    out[C_SRC / "gen_tables.rs"] = tables_module()
     return out
 
 
@@ -416,6 +417,64 @@ def frames_module(fns: list[Function]) -> str:
         "use relicore::ArrayResult;",
         "use relicore::blackbody as bb;",
         "use relicore_dispatch::widest;",
+        "",
+    ]
+    return rustfmt("\n".join(head) + "\n" + "\n\n".join(body) + "\n")
+
+
+# ---------------------------------------------------------------------------- response tables
+def table_export(tf: TableFunction, ty: str) -> str:
+    """The C export of a response-table function (`_f32` for `float`), through
+    `thermometry::table_call`."""
+    c_ty = "double" if ty == "f64" else "float"
+    name = f"relicore_{tf.name}" + ("" if ty == "f64" else "_f32")
+    paragraphs = tf.c_doc.split("\n\n")
+    if ty == "f32":
+        paragraphs[0] = "\n".join(_doc([
+            f"`float` twin of `relicore_{tf.name}` for firmware: the same core function computed in "
+            "single precision (table, arguments and result `float`)."], 92))
+        k = next(i for i, p in enumerate(paragraphs) if p.startswith("Accuracy:"))
+        paragraphs[k] = "\n".join(_doc([
+            "Accuracy: that of the core function in f32 (a few f32 ulp of the f64 result where the "
+            "inputs are representable). Allocates nothing."], 92))
+    doc = [line if line.startswith("///") else f"/// {line}".rstrip()
+           for line in "\n\n".join(paragraphs).split("\n")]
+    rt = tf.result_type
+    out_ty = f"struct {rt.c_struct}{'' if ty == 'f64' else '_f32'}" if rt else c_ty
+    sfx = "" if ty == "f64" else "_f32"
+    safety = _doc([
+        f"`wavelengths_m` is NULL or points to `n_wavelengths` readable `{c_ty}`, `response_table` NULL "
+        f"or to `n_response_table` readable `{c_ty}`; `out` is NULL or points to a writable "
+        f"`{'struct ' + rt.c_struct + sfx if rt else c_ty}`."], 96 if ty == "f64" else 98)
+    doc += ["///", "/// # Safety"] + safety
+    params = [f"wavelengths_m: *const {ty}", "n_wavelengths: usize", f"response_table: *const {ty}",
+              "n_response_table: usize"] + [f"{a}: {ty}" for a in tf.args]
+    params.append(f"out: *mut {out_ty.removeprefix('struct ') if rt else ty}")
+    call = f"bb::{tf.name}(w, r, {', '.join(tf.args)})"
+    if rt:
+        call += f".map({out_ty.removeprefix('struct ')}::from)"
+    return "\n".join(doc + (["#[allow(clippy::too_many_arguments)]"] if len(params) > 7 else []) + [
+        "#[unsafe(no_mangle)]",
+        f"pub unsafe extern \"C\" fn {name}({', '.join(params)}) -> i32 {{",
+        "    // SAFETY: the pointers are NULL or valid for their lengths (this function's contract).",
+        "    unsafe { table_call(wavelengths_m, n_wavelengths, response_table, n_response_table, out, "
+        f"|w, r| {{ {call} }}) }}",
+        "}",
+    ])
+
+
+def tables_module() -> str:
+    """bindings/c/src/gen_tables.rs: the response-table functions and their `float` twins."""
+    tfs = table_functions()
+    body = [table_export(tf, ty) for tf in tfs for ty in ("f64", "f32")]
+    structs = sorted({tf.result_type.c_struct for tf in tfs if tf.result_type})
+    head = [
+        banner("//", "the C exports of the response-table functions of radiation thermometry"),
+        "//! The C exports of the table's response-table functions ([[table_function]]): a tabulated "
+        "spectral response (two caller buffers with their lengths) and single values, through "
+        "`thermometry::table_call`; each with its `float` twin.\n",
+        f"use crate::thermometry::{{{', '.join(['table_call'] + [s + sfx for s in structs for sfx in ('', '_f32')])}}};",
+        "use relicore::blackbody as bb;",
         "",
     ]
     return rustfmt("\n".join(head) + "\n" + "\n\n".join(body) + "\n")

@@ -36,7 +36,7 @@ from pathlib import Path
 
 from . import constants_face, rustdoc
 from .common import banner
-from .table import ROOT, Function, thermometry_names
+from .table import ROOT, Function, table_functions, thermometry_names
 
 TEMPLATE = ROOT / "bindings" / "fortran" / "relicore.in.f90"
 MODULE = ROOT / "bindings" / "fortran" / "relicore.f90"
@@ -450,8 +450,10 @@ def result_types(fns: list[Function]) -> tuple[list[str], list[tuple[str, list[s
 
 
 def part_sections() -> dict[str, list[str]]:
-    """The sections of the hand-kept parts (bindings/fortran/parts/*.f90), in file order."""
+    """The sections of the hand-kept parts (bindings/fortran/parts/*.f90), in file order; a line
+    `!@ tables` in a section is replaced by that section of the response-table functions."""
     out: dict[str, list[str]] = {"public": [], "interfaces": [], "procedures": []}
+    tables = table_sections()
     for path in sorted(PARTS.glob("*.f90")):
         section = None
         for line in path.read_text().splitlines():
@@ -462,6 +464,9 @@ def part_sections() -> dict[str, list[str]]:
                     raise FortranFaceError(f"{path.name}: unknown section {line!r}")
                 continue
             if line.startswith("!!"):
+                continue
+            if line.strip() == "!@ tables" and section is not None:
+                out[section] += tables[section]
                 continue
             if section is None:
                 if line.strip():
@@ -792,3 +797,98 @@ def frame_sections(fns: list[Function]) -> dict[str, list[str]]:
         lines += ["    end if", f"    call report(code, '{fr.c_name}', stat)", f"  end subroutine {name}"]
         procs += lines + [""]
     return {"public": public, "interfaces": interfaces, "procedures": procs[:-1]}
+
+
+# ---------------------------------------------------------------------------- response tables
+TABLE_NOTE = (
+    "with the table copied to buffers of at least one element, so that a zero-size table reaches "
+    "the C library as a valid buffer of length 0 (which it judges: RELICORE_ERROR_ARRAY_TOO_SHORT), "
+    "never as a NULL pointer."
+)
+
+
+def table_sections() -> dict[str, list[str]]:
+    """The public names, bind(C) interfaces and procedures of the response-table functions
+    ([[table_function]]): per function and precision the function, the `_s` subroutine and the
+    private `table_` helper that passes the table to C."""
+    public_names: list[str] = []
+    generics: list[str] = []
+    interfaces: list[str] = []
+    procs: list[str] = []
+    long_names = 0
+    for tf in table_functions():
+        rt = tf.result_type
+        args = list(tf.args)
+        if rt:
+            result = (f"type({rt.fortran_type}) (_f32 twin), every real field NaN and inputs 0 on "
+                      "failure")
+        else:
+            result = tf.fortran_result
+        procs += [""] + comment(tf.fortran_doc)
+        procs += ["  ! wavelengths_m(:), response_table(:): the response table (as "
+                  "relicore_response_weighted_radiance)"]
+        procs += comment(f"{', '.join(args)}: scalars", hang="    ")
+        procs += comment(f"Result: {result}. Forms: relicore_{tf.name}, _s, and the real(c_float) "
+                         "twins _f32, _f32_s.", hang="  ")
+        for f32 in (False, True):
+            kind, ctype, sfx = ("c_float", "float", "_f32") if f32 else ("c_double", "double", "")
+            c_name = f"relicore_{tf.name}{sfx}"
+            raw, helper = f"c_{tf.name}{sfx}", f"table_{tf.name}{sfx}"
+            rtype = f"type({rt.fortran_type}{sfx})" if rt else f"real({kind})"
+            nan = f"nan_{rt.fortran_type}{sfx}()" if rt else ("nan32()" if f32 else "nan64()")
+            sub = c_name + "_s"
+            public_names.append(c_name)
+            private = sub
+            if len(sub) > 63:  # reached through the generic name of the double form
+                long_names += 1
+                private, generic = f"table_f32_{long_names}", sub.replace("_f32", "", 1)
+                generics += comment(f"{sub} (more than 63 characters) is the real({kind}) form of the "
+                                    f"generic name {generic}")
+                generics += [f"  interface {generic}", f"    module procedure {generic}, {private}",
+                             f"  end interface {generic}"]
+            else:
+                public_names.append(sub)
+            # the C prototype and its interface
+            struct = f"struct {rt.c_struct}{sfx} *out" if rt else f"{ctype} *out"
+            proto = (f"int32_t {c_name}(const {ctype} *wavelengths_m, size_t n_wavelengths, const {ctype} "
+                     f"*response_table, size_t n_response_table, "
+                     + "".join(f"{ctype} {a}, " for a in args) + f"{struct});")
+            interfaces += comment(proto, indent="    ", hang="    ")
+            interfaces += statement("    ", f"function {raw}(wavelengths_m, n_wavelengths, response_table, "
+                                    f"n_response_table, {', '.join(args)}, out) &")
+            interfaces += [f"        bind(C, name='{c_name}') result(status)"]
+            interfaces += statement("      ", f"import :: {kind}, c_int32_t, c_size_t"
+                                    + (f", {rt.fortran_type}{sfx}" if rt else ""))
+            interfaces += [f"      real({kind}), intent(in) :: wavelengths_m(*)",
+                           "      integer(c_size_t), value :: n_wavelengths",
+                           f"      real({kind}), intent(in) :: response_table(*)",
+                           "      integer(c_size_t), value :: n_response_table"]
+            interfaces += statement("      ", f"real({kind}), value :: {', '.join(args)}")
+            interfaces += [f"      {rtype}, intent(out) :: out", "      integer(c_int32_t) :: status",
+                           f"    end function {raw}"]
+            # the Fortran procedures
+            dummies = ["wavelengths_m", "response_table"] + args
+            decl = [f"    real({kind}), intent(in) :: wavelengths_m(:), response_table(:)"]
+            decl += statement("    ", f"real({kind}), intent(in) :: {', '.join(args)}")
+            procs += [""] + statement("  ", f"function {c_name}({', '.join(dummies)}) result(res)")
+            procs += decl + [f"    {rtype} :: res", "    integer(c_int32_t) :: code"]
+            procs += statement("    ", f"code = {helper}({', '.join(dummies + ['res'])})")
+            procs += [f"    if (code /= RELICORE_OK) res = {nan}", f"  end function {c_name}", ""]
+            procs += statement("  ", f"subroutine {private}({', '.join(dummies + ['out', 'stat'])})")
+            procs += decl + [f"    {rtype}, intent(out) :: out",
+                             "    integer(c_int32_t), intent(out), optional :: stat",
+                             "    integer(c_int32_t) :: code"]
+            procs += statement("    ", f"code = {helper}({', '.join(dummies + ['out'])})")
+            procs += [f"    if (code /= RELICORE_OK) out = {nan}",
+                      f"    call report(code, '{c_name}', stat)", f"  end subroutine {private}", ""]
+            procs += comment(f"Calls {c_name} {TABLE_NOTE}")
+            procs += statement("  ", f"function {helper}({', '.join(dummies + ['out'])}) result(code)")
+            procs += decl + [f"    {rtype}, intent(out) :: out", "    integer(c_int32_t) :: code",
+                             f"    real({kind}) :: w(max(1, size(wavelengths_m))), r(max(1, size(response_table)))",
+                             "    w = 0", "    r = 0", "    w(1:size(wavelengths_m)) = wavelengths_m",
+                             "    r(1:size(response_table)) = response_table"]
+            procs += statement("    ", f"code = {raw}(w, size(wavelengths_m, kind=c_size_t), r, "
+                               f"size(response_table, kind=c_size_t), {', '.join(args)}, out)")
+            procs += [f"  end function {helper}"]
+    public = statement("  ", "public :: " + ", ".join(public_names)) + generics
+    return {"public": public, "interfaces": interfaces, "procedures": procs}

@@ -158,6 +158,44 @@ class TableError(Exception):
     pass
 
 
+TABLE_FUNCTION_KEYS = {"name", "args", "returns", "c_doc", "fortran_doc", "fortran_result"}
+
+
+@dataclass(frozen=True)
+class TableFunction:
+    """A response-table function ([[table_function]]): the response table (wavelengths_m,
+    response_table) first, then the single values `args`; a `float` twin; blackbody topic."""
+
+    name: str
+    args: tuple[str, ...]
+    returns: str | None
+    c_doc: str
+    fortran_doc: str
+    fortran_result: str | None
+
+    @property
+    def result_type(self) -> ResultType | None:
+        return RESULTS.get(self.returns) if self.returns else None
+
+
+def table_functions(path: Path = TABLE) -> list[TableFunction]:
+    """The [[table_function]] entries (not part of `load()`: no harness list takes them)."""
+    with open(path, "rb") as f:
+        raw = tomllib.load(f)
+    out = []
+    for e in raw.get("table_function", []):
+        where = f"{path.name}: table_function {e.get('name')!r}"
+        if set(e) - TABLE_FUNCTION_KEYS or not {"name", "args", "c_doc", "fortran_doc"} <= set(e):
+            raise TableError(f"{where}: keys are {sorted(TABLE_FUNCTION_KEYS)} (returns, fortran_result optional)")
+        if bool(e.get("returns")) == bool(e.get("fortran_result")):
+            raise TableError(f"{where}: give returns (a result type) or fortran_result, not both")
+        if e.get("returns") and e["returns"] not in raw.get("result", {}):
+            raise TableError(f"{where}: returns must name a [result.<name>]")
+        out.append(TableFunction(e["name"], tuple(e["args"]), e.get("returns"), e["c_doc"].strip("\n"),
+                                 e["fortran_doc"], e.get("fortran_result")))
+    return out
+
+
 def load(path: Path = TABLE) -> list[Function]:
     with open(path, "rb") as f:
         raw = tomllib.load(f)

@@ -24,7 +24,7 @@
 //! struct, its init function and parameters),
 //! `decoupling` (the thermal-history struct and its compute function), `growth` (the
 //! linear-growth and power-spectrum structs, the spectrum's options and the compute functions), and the generated
-//! `gen_blackbody`, `gen_frames`, `gen_cosmology`, `gen_decoupling`, `gen_growth`: the exports of every regular function of
+//! `gen_blackbody`, `gen_tables` (response-table functions), `gen_frames`, `gen_cosmology`, `gen_decoupling`, `gen_growth`: the exports of every regular function of
 //! `bindings/functions.toml` (`double`, `float` twins, array and frame forms), written by
 //! `bindings/generate.py` from that table and the core's rustdoc.
 
@@ -54,6 +54,8 @@ pub mod gen_blackbody;
 pub mod calibration;
 
 pub mod response;
+
+pub mod gen_tables;
 
 pub mod thermometry;
 
