@@ -967,8 +967,8 @@ module relicore
     ! int32_t relicore_temperature_from_response_weighted_radiance_f32(
     !     const float *wavelengths_m, size_t n_wavelengths, const float *response,
     !     size_t n_response, float radiance, float *out);
-    function c_temperature_from_response_weighted_radiance_f32(wavelengths_m, &
-        n_wavelengths, response, n_response, radiance, out) &
+    function c_temperature_from_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, &
+        response, n_response, radiance, out) &
         bind(C, name='relicore_temperature_from_response_weighted_radiance_f32') result(status)
       import :: c_float, c_int32_t, c_size_t
       real(c_float), intent(in) :: wavelengths_m(*)
@@ -3759,8 +3759,8 @@ contains
 
   ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
   ! without stat a failure stops with its message.
-  subroutine relicore_response_weighted_radiance_f32_s(wavelengths_m, response, &
-      temperature_k, out, stat)
+  subroutine relicore_response_weighted_radiance_f32_s(wavelengths_m, response, temperature_k, &
+      out, stat)
     real(c_float), intent(in) :: wavelengths_m(:), response(:)
     real(c_float), intent(in) :: temperature_k
     real(c_float), intent(out) :: out
@@ -3786,11 +3786,11 @@ contains
     n_wavelengths = size(wavelengths_m, kind=c_size_t)
     n_response = size(response, kind=c_size_t)
     if (n_wavelengths > 0 .and. n_response > 0) then
-      code = c_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, response, &
-          n_response, temperature_k, out)
+      code = c_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, response, n_response, &
+          temperature_k, out)
     else if (n_wavelengths > 0) then
-      code = c_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, empty, &
-          n_response, temperature_k, out)
+      code = c_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, empty, n_response, &
+          temperature_k, out)
     else if (n_response > 0) then
       code = c_response_weighted_radiance_f32(empty, n_wavelengths, response, n_response, &
           temperature_k, out)
@@ -3807,8 +3807,8 @@ contains
   !             linear between the points and zero outside
   !   radiance: response-weighted radiance in W m-2 sr-1, > 0
   ! Result: K; NaN on failure.
-  function relicore_temperature_from_response_weighted_radiance_f32(wavelengths_m, &
-      response, radiance) result(res)
+  function relicore_temperature_from_response_weighted_radiance_f32(wavelengths_m, response, &
+      radiance) result(res)
     real(c_float), intent(in) :: wavelengths_m(:), response(:)
     real(c_float), intent(in) :: radiance
     real(c_float) :: res
@@ -3853,8 +3853,8 @@ contains
       code = c_temperature_from_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, &
           empty, n_response, radiance, out)
     else if (n_response > 0) then
-      code = c_temperature_from_response_weighted_radiance_f32(empty, n_wavelengths, &
-          response, n_response, radiance, out)
+      code = c_temperature_from_response_weighted_radiance_f32(empty, n_wavelengths, response, &
+          n_response, radiance, out)
     else
       code = c_temperature_from_response_weighted_radiance_f32(empty, n_wavelengths, empty, &
           n_response, radiance, out)
@@ -3965,8 +3965,8 @@ contains
     real(c_float), intent(in) :: frequency_hz, reading_hot, temperature_hot_k, &
         reading_cold, temperature_cold_k
     type(relicore_two_load_calibration_f32) :: res
-    if (c_two_load_calibration_f32(frequency_hz, reading_hot, temperature_hot_k, &
-        reading_cold, temperature_cold_k, res) /= RELICORE_OK) &
+    if (c_two_load_calibration_f32(frequency_hz, reading_hot, temperature_hot_k, reading_cold, &
+        temperature_cold_k, res) /= RELICORE_OK) &
         res = relicore_two_load_calibration_f32(nan32(), nan32(), nan32())
   end function make_two_load_calibration_f32
 
@@ -3979,10 +3979,10 @@ contains
     type(relicore_two_load_calibration_f32), intent(out) :: calibration
     integer(c_int32_t), intent(out), optional :: stat
     integer(c_int32_t) :: code
-    code = c_two_load_calibration_f32(frequency_hz, reading_hot, temperature_hot_k, &
-        reading_cold, temperature_cold_k, calibration)
-    if (code /= RELICORE_OK) calibration = relicore_two_load_calibration_f32(nan32(), &
-        nan32(), nan32())
+    code = c_two_load_calibration_f32(frequency_hz, reading_hot, temperature_hot_k, reading_cold, &
+        temperature_cold_k, calibration)
+    if (code /= RELICORE_OK) calibration = relicore_two_load_calibration_f32(nan32(), nan32(), &
+        nan32())
     call report(code, 'relicore_two_load_calibration_f32', stat)
   end subroutine relicore_two_load_calibration_f32_s
 
@@ -3990,8 +3990,7 @@ contains
   !   calibration: from relicore_two_load_calibration_f32
   !   reading: raw reading, finite
   ! Result: K, > 0; NaN on failure.
-  impure elemental function relicore_calibrated_temperature_f32(calibration, &
-      reading) result(res)
+  impure elemental function relicore_calibrated_temperature_f32(calibration, reading) result(res)
     type(relicore_two_load_calibration_f32), intent(in) :: calibration
     real(c_float), intent(in) :: reading
     real(c_float) :: res
@@ -4000,8 +3999,7 @@ contains
 
   ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
   ! without stat a failure stops with its message.
-  impure elemental subroutine relicore_calibrated_temperature_f32_s(calibration, reading, &
-      out, stat)
+  impure elemental subroutine relicore_calibrated_temperature_f32_s(calibration, reading, out, stat)
     type(relicore_two_load_calibration_f32), intent(in) :: calibration
     real(c_float), intent(in) :: reading
     real(c_float), intent(out) :: out

@@ -17,6 +17,14 @@ table. The template's marker lines are replaced:
                     in their own files (radiation thermometry); a part's sections start with
                     the lines `!@@ public`, `!@@ interfaces`, `!@@ procedures`
 
+Template blocks between the lines `!@ twin` and `!@ end twin` are written twice: as they are and
+as their real(c_float) twin (c_double, double, nan64() and the names relicore_x, c_x, make_x,
+table_x become c_float, float, nan32() and x_f32, x_f32_s for x_s); a line starting `!@64 ` or
+`!@32 ` is only in the double or the float copy (the words the two differ in).
+
+Also generated into the parts' `!@ tables` markers: the response-table functions
+([[table_function]]); and after the parts: the frame (image) forms of the entries with `frame`.
+
 Each procedure's comment is the core's rustdoc summary plus the table's argument meanings and
 result; the conventions every wrapper shares (NaN on failure, stat, the stop message) are said
 once, in the template's module header. Template lines starting with `!!` describe the template
@@ -358,8 +366,55 @@ def doc_comment(fn: Function) -> list[str]:
     return lines
 
 
+# Kinds and intrinsics of iso_c_binding, never renamed in a single-precision twin.
+_C_NAMES = {"c_float", "c_double", "c_int32_t", "c_int64_t", "c_size_t", "c_ptr", "c_char",
+            "c_null_char", "c_null_ptr", "c_f_pointer", "c_associated", "c_loc", "c_int", "c_bool"}
+
+
+def _float_twin(line: str) -> str:
+    """The real(c_float) twin of a template line: c_double, double and nan64() become c_float,
+    float and nan32(); a name relicore_x, c_x, make_x or table_x becomes x_f32 (x_f32_s for x_s)."""
+    line = line.replace("c_double", "c_float").replace("nan64()", "nan32()")
+    line = re.sub(r"\bdouble\b", "float", line)
+
+    def rename(m: re.Match[str]) -> str:
+        word = m.group(0)
+        if word in _C_NAMES:
+            return word
+        return word[:-2] + "_f32_s" if word.endswith("_s") else word + "_f32"
+
+    return re.sub(r"\b(?:relicore|c|make|table)_\w+", rename, line)
+
+
+def expand_twins(lines: list[str]) -> list[str]:
+    """Template blocks between `!@ twin` and `!@ end twin`, written twice: as they are, then their
+    real(c_float) twin (`_float_twin`). A line starting `!@64 ` is only in the double copy and one
+    starting `!@32 ` only in the float copy, as written (the wording the two copies differ in)."""
+    out: list[str] = []
+    block: list[str] | None = None
+    for line in lines:
+        if line.strip() == "!@ twin":
+            if block is not None:
+                raise FortranFaceError(f"{TEMPLATE.name}: nested '!@ twin'")
+            block = []
+        elif line.strip() == "!@ end twin":
+            if block is None:
+                raise FortranFaceError(f"{TEMPLATE.name}: '!@ end twin' without '!@ twin'")
+            out += [b[5:] if b.startswith("!@64 ") else b for b in block if not b.startswith("!@32 ")]
+            out += [b[5:] if b.startswith("!@32 ") else _float_twin(b) for b in block
+                    if not b.startswith("!@64 ")]
+            block = None
+        elif block is not None:
+            block.append(line)
+        else:
+            out.append(line)
+    if block is not None:
+        raise FortranFaceError(f"{TEMPLATE.name}: '!@ twin' without '!@ end twin'")
+    return out
+
+
 def module_text(fns: list[Function]) -> str:
-    template = TEMPLATE.read_text().splitlines()
+    template = expand_twins(TEMPLATE.read_text().splitlines())
     all_forms = [form for fn in fns for form in forms(fn)]
 
     coverage = []
