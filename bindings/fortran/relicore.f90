@@ -636,36 +636,36 @@ module relicore
       relicore_object_temperature_response_with_uncertainty_f32_s, &
       relicore_response_weighted_radiance_temperature_derivative, &
       relicore_response_weighted_radiance_temperature_derivative_s, &
-      relicore_response_weighted_radiance_temperature_derivative_f32, &
-           relicore_combined_standard_uncertainty, relicore_combined_standard_uncertainty_s, &
-      relicore_combined_standard_uncertainty_correlated, &
-      relicore_combined_standard_uncertainty_correlated_s, &
-      relicore_object_temperature_wavelength_array, &
-      relicore_object_temperature_wavelength_array_f32, &
-      relicore_object_temperature_wavelength_with_uncertainty_array, &
-           relicore_object_temperature_frequency_array, relicore_object_temperature_frequency_array_f32, &
-      relicore_object_temperature_frequency_with_uncertainty_array, &
-           relicore_object_temperature_band_array, relicore_object_temperature_band_array_f32, &
-      relicore_object_temperature_band_with_uncertainty_array, &
-      relicore_object_temperature_band_with_uncertainty_array_f32
-  ! relicore_object_temperature_frequency_with_uncertainty_array_f32 (more than 63 characters)
-  ! is the real(c_float) form of the generic name
-  ! relicore_object_temperature_frequency_with_uncertainty_array
-  interface relicore_object_temperature_frequency_with_uncertainty_array
-    module procedure relicore_object_temperature_frequency_with_uncertainty_array, thermometry_f32_1
-  end interface relicore_object_temperature_frequency_with_uncertainty_array
-  ! relicore_response_weighted_radiance_temperature_derivative_f32_s (more than 63 characters)
-  ! is the real(c_float) form of the generic name
+      relicore_response_weighted_radiance_temperature_derivative_f32
+  ! relicore_response_weighted_radiance_temperature_derivative_f32_s (more than 63 characters) is
+  ! the real(c_float) form of the generic name
   ! relicore_response_weighted_radiance_temperature_derivative_s
   interface relicore_response_weighted_radiance_temperature_derivative_s
-    module procedure relicore_response_weighted_radiance_temperature_derivative_s, thermometry_f32_2
+    module procedure relicore_response_weighted_radiance_temperature_derivative_s, table_f32_1
   end interface relicore_response_weighted_radiance_temperature_derivative_s
-  ! relicore_object_temperature_wavelength_with_uncertainty_array_f32 (more than 63 characters)
-  ! is the real(c_float) form of the generic name
+  public :: relicore_combined_standard_uncertainty, relicore_combined_standard_uncertainty_s, &
+      relicore_combined_standard_uncertainty_correlated, &
+      relicore_combined_standard_uncertainty_correlated_s
+  public :: relicore_object_temperature_wavelength_array, &
+      relicore_object_temperature_wavelength_array_f32, &
+      relicore_object_temperature_wavelength_with_uncertainty_array, &
+      relicore_object_temperature_frequency_array, relicore_object_temperature_frequency_array_f32, &
+      relicore_object_temperature_frequency_with_uncertainty_array, &
+      relicore_object_temperature_band_array, relicore_object_temperature_band_array_f32, &
+      relicore_object_temperature_band_with_uncertainty_array, &
+      relicore_object_temperature_band_with_uncertainty_array_f32
+  ! relicore_object_temperature_wavelength_with_uncertainty_array_f32 (more than 63 characters) is
+  ! the real(c_float) form of the generic name
   ! relicore_object_temperature_wavelength_with_uncertainty_array
   interface relicore_object_temperature_wavelength_with_uncertainty_array
-    module procedure relicore_object_temperature_wavelength_with_uncertainty_array, thermometry_f32_3
+    module procedure relicore_object_temperature_wavelength_with_uncertainty_array, frame_f32_1
   end interface relicore_object_temperature_wavelength_with_uncertainty_array
+  ! relicore_object_temperature_frequency_with_uncertainty_array_f32 (more than 63 characters) is
+  ! the real(c_float) form of the generic name
+  ! relicore_object_temperature_frequency_with_uncertainty_array
+  interface relicore_object_temperature_frequency_with_uncertainty_array
+    module procedure relicore_object_temperature_frequency_with_uncertainty_array, frame_f32_2
+  end interface relicore_object_temperature_frequency_with_uncertainty_array
   ! ---------------------------------------------------------------- types
   ! struct relicore_two_load_calibration { double frequency_hz; double gain; double offset; };
   ! The gain and offset of a two-load calibration at one frequency: reading = gain * J +
@@ -967,8 +967,8 @@ module relicore
     ! int32_t relicore_temperature_from_response_weighted_radiance_f32(
     !     const float *wavelengths_m, size_t n_wavelengths, const float *response,
     !     size_t n_response, float radiance, float *out);
-    function c_temperature_from_response_weighted_radiance_f32(wavelengths_m, &
-        n_wavelengths, response, n_response, radiance, out) &
+    function c_temperature_from_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, &
+        response, n_response, radiance, out) &
         bind(C, name='relicore_temperature_from_response_weighted_radiance_f32') result(status)
       import :: c_float, c_int32_t, c_size_t
       real(c_float), intent(in) :: wavelengths_m(*)
@@ -3759,8 +3759,8 @@ contains
 
   ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
   ! without stat a failure stops with its message.
-  subroutine relicore_response_weighted_radiance_f32_s(wavelengths_m, response, &
-      temperature_k, out, stat)
+  subroutine relicore_response_weighted_radiance_f32_s(wavelengths_m, response, temperature_k, &
+      out, stat)
     real(c_float), intent(in) :: wavelengths_m(:), response(:)
     real(c_float), intent(in) :: temperature_k
     real(c_float), intent(out) :: out
@@ -3786,11 +3786,11 @@ contains
     n_wavelengths = size(wavelengths_m, kind=c_size_t)
     n_response = size(response, kind=c_size_t)
     if (n_wavelengths > 0 .and. n_response > 0) then
-      code = c_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, response, &
-          n_response, temperature_k, out)
+      code = c_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, response, n_response, &
+          temperature_k, out)
     else if (n_wavelengths > 0) then
-      code = c_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, empty, &
-          n_response, temperature_k, out)
+      code = c_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, empty, n_response, &
+          temperature_k, out)
     else if (n_response > 0) then
       code = c_response_weighted_radiance_f32(empty, n_wavelengths, response, n_response, &
           temperature_k, out)
@@ -3807,8 +3807,8 @@ contains
   !             linear between the points and zero outside
   !   radiance: response-weighted radiance in W m-2 sr-1, > 0
   ! Result: K; NaN on failure.
-  function relicore_temperature_from_response_weighted_radiance_f32(wavelengths_m, &
-      response, radiance) result(res)
+  function relicore_temperature_from_response_weighted_radiance_f32(wavelengths_m, response, &
+      radiance) result(res)
     real(c_float), intent(in) :: wavelengths_m(:), response(:)
     real(c_float), intent(in) :: radiance
     real(c_float) :: res
@@ -3853,8 +3853,8 @@ contains
       code = c_temperature_from_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, &
           empty, n_response, radiance, out)
     else if (n_response > 0) then
-      code = c_temperature_from_response_weighted_radiance_f32(empty, n_wavelengths, &
-          response, n_response, radiance, out)
+      code = c_temperature_from_response_weighted_radiance_f32(empty, n_wavelengths, response, &
+          n_response, radiance, out)
     else
       code = c_temperature_from_response_weighted_radiance_f32(empty, n_wavelengths, empty, &
           n_response, radiance, out)
@@ -3965,8 +3965,8 @@ contains
     real(c_float), intent(in) :: frequency_hz, reading_hot, temperature_hot_k, &
         reading_cold, temperature_cold_k
     type(relicore_two_load_calibration_f32) :: res
-    if (c_two_load_calibration_f32(frequency_hz, reading_hot, temperature_hot_k, &
-        reading_cold, temperature_cold_k, res) /= RELICORE_OK) &
+    if (c_two_load_calibration_f32(frequency_hz, reading_hot, temperature_hot_k, reading_cold, &
+        temperature_cold_k, res) /= RELICORE_OK) &
         res = relicore_two_load_calibration_f32(nan32(), nan32(), nan32())
   end function make_two_load_calibration_f32
 
@@ -3979,10 +3979,10 @@ contains
     type(relicore_two_load_calibration_f32), intent(out) :: calibration
     integer(c_int32_t), intent(out), optional :: stat
     integer(c_int32_t) :: code
-    code = c_two_load_calibration_f32(frequency_hz, reading_hot, temperature_hot_k, &
-        reading_cold, temperature_cold_k, calibration)
-    if (code /= RELICORE_OK) calibration = relicore_two_load_calibration_f32(nan32(), &
-        nan32(), nan32())
+    code = c_two_load_calibration_f32(frequency_hz, reading_hot, temperature_hot_k, reading_cold, &
+        temperature_cold_k, calibration)
+    if (code /= RELICORE_OK) calibration = relicore_two_load_calibration_f32(nan32(), nan32(), &
+        nan32())
     call report(code, 'relicore_two_load_calibration_f32', stat)
   end subroutine relicore_two_load_calibration_f32_s
 
@@ -3990,8 +3990,7 @@ contains
   !   calibration: from relicore_two_load_calibration_f32
   !   reading: raw reading, finite
   ! Result: K, > 0; NaN on failure.
-  impure elemental function relicore_calibrated_temperature_f32(calibration, &
-      reading) result(res)
+  impure elemental function relicore_calibrated_temperature_f32(calibration, reading) result(res)
     type(relicore_two_load_calibration_f32), intent(in) :: calibration
     real(c_float), intent(in) :: reading
     real(c_float) :: res
@@ -4000,8 +3999,7 @@ contains
 
   ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
   ! without stat a failure stops with its message.
-  impure elemental subroutine relicore_calibrated_temperature_f32_s(calibration, reading, &
-      out, stat)
+  impure elemental subroutine relicore_calibrated_temperature_f32_s(calibration, reading, out, stat)
     type(relicore_two_load_calibration_f32), intent(in) :: calibration
     real(c_float), intent(in) :: reading
     real(c_float), intent(out) :: out
@@ -9022,8 +9020,7 @@ contains
     if (code /= RELICORE_OK) res = nan32()
   end function relicore_response_weighted_radiance_temperature_derivative_f32
 
-  subroutine thermometry_f32_2(wavelengths_m, &
-      response_table, temperature_k, out, stat)
+  subroutine table_f32_1(wavelengths_m, response_table, temperature_k, out, stat)
     real(c_float), intent(in) :: wavelengths_m(:), response_table(:)
     real(c_float), intent(in) :: temperature_k
     real(c_float), intent(out) :: out
@@ -9033,7 +9030,7 @@ contains
         response_table, temperature_k, out)
     if (code /= RELICORE_OK) out = nan32()
     call report(code, 'relicore_response_weighted_radiance_temperature_derivative_f32', stat)
-  end subroutine thermometry_f32_2
+  end subroutine table_f32_1
 
   ! Calls relicore_response_weighted_radiance_temperature_derivative_f32 with the table copied to
   ! buffers of at least one element, so that a zero-size table reaches the C library as a valid
@@ -9284,11 +9281,10 @@ contains
     call report(code, 'relicore_object_temperature_wavelength_with_uncertainty_array', stat)
   end subroutine relicore_object_temperature_wavelength_with_uncertainty_array
 
-  subroutine thermometry_f32_3(wavelength_m, &
-      signals, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
-      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
-      transmittance_uncertainty, path_temperature_uncertainty_k, out_temperature, out_uncertainty, &
-      stat)
+  subroutine frame_f32_1(wavelength_m, signals, emissivity, reflected_temperature_k, transmittance, &
+      path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+      reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+      path_temperature_uncertainty_k, out_temperature, out_uncertainty, stat)
     real(c_float), intent(in) :: wavelength_m
     real(c_float), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
         transmittance(:), path_temperature_k(:), signal_uncertainty(:), emissivity_uncertainty(:), &
@@ -9340,7 +9336,7 @@ contains
       out_uncertainty = nan32()
     end if
     call report(code, 'relicore_object_temperature_wavelength_with_uncertainty_array_f32', stat)
-  end subroutine thermometry_f32_3
+  end subroutine frame_f32_1
 
   subroutine relicore_object_temperature_frequency_array(frequency_hz, signals, emissivity, &
       reflected_temperature_k, transmittance, path_temperature_k, out, stat)
@@ -9477,11 +9473,10 @@ contains
     call report(code, 'relicore_object_temperature_frequency_with_uncertainty_array', stat)
   end subroutine relicore_object_temperature_frequency_with_uncertainty_array
 
-  subroutine thermometry_f32_1(frequency_hz, &
-      signals, emissivity, reflected_temperature_k, transmittance, path_temperature_k, &
-      signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, &
-      transmittance_uncertainty, path_temperature_uncertainty_k, out_temperature, out_uncertainty, &
-      stat)
+  subroutine frame_f32_2(frequency_hz, signals, emissivity, reflected_temperature_k, transmittance, &
+      path_temperature_k, signal_uncertainty, emissivity_uncertainty, &
+      reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+      path_temperature_uncertainty_k, out_temperature, out_uncertainty, stat)
     real(c_float), intent(in) :: frequency_hz
     real(c_float), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
         transmittance(:), path_temperature_k(:), signal_uncertainty(:), emissivity_uncertainty(:), &
@@ -9533,7 +9528,7 @@ contains
       out_uncertainty = nan32()
     end if
     call report(code, 'relicore_object_temperature_frequency_with_uncertainty_array_f32', stat)
-  end subroutine thermometry_f32_1
+  end subroutine frame_f32_2
 
   subroutine relicore_object_temperature_band_array(lower_m, upper_m, signals, emissivity, &
       reflected_temperature_k, transmittance, path_temperature_k, out, stat)

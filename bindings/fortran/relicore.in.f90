@@ -5,7 +5,9 @@
 !! and their wrappers. What stays here is what the table cannot describe: the module header,
 !! kinds, the status codes and storage sizes, types, the status message and version, the report
 !! and NaN helpers, the calibration and response-table procedures, and the construction of
-!! universes and thermal histories. Lines starting with `!!` are not copied.
+!! universes and thermal histories. Lines starting with `!!` are not copied. A block between
+!! `!@ twin` and `!@ end twin` is written twice, the second time as its real(c_float) twin (the
+!! rule is in fortran_face.py); `!@64 ` and `!@32 ` start lines of only one of the two copies.
 ! relicore: the Fortran face of relicore (blackbody radiometry, the cosmological background and
 ! decoupling), a thin binding of the C ABI declared in include/relicore.h. Physics lives only in
 ! the Rust core; this module binds the C functions, converts, checks sizes and turns status
@@ -186,22 +188,17 @@ module relicore
   ! The hand-kept parts (bindings/fortran/parts/*.f90).
 !@ parts public
   ! ---------------------------------------------------------------- types
+!@ twin
   ! struct relicore_two_load_calibration { double frequency_hz; double gain; double offset; };
-  ! The gain and offset of a two-load calibration at one frequency: reading = gain * J +
-  ! offset, J the Rayleigh-Jeans brightness temperature in K. A plain value the caller owns.
+!@64   ! The gain and offset of a two-load calibration at one frequency: reading = gain * J +
+!@64   ! offset, J the Rayleigh-Jeans brightness temperature in K. A plain value the caller owns.
   type, bind(C), public :: relicore_two_load_calibration
     real(c_double) :: frequency_hz  ! channel frequency in Hz
     real(c_double) :: gain          ! reading units per K of brightness temperature J
     real(c_double) :: offset        ! reading units (the reading for J = 0)
   end type relicore_two_load_calibration
 
-  ! struct relicore_two_load_calibration_f32 { float frequency_hz; float gain; float offset; };
-  type, bind(C), public :: relicore_two_load_calibration_f32
-    real(c_float) :: frequency_hz  ! channel frequency in Hz
-    real(c_float) :: gain          ! reading units per K of brightness temperature J
-    real(c_float) :: offset        ! reading units (the reading for J = 0)
-  end type relicore_two_load_calibration_f32
-
+!@ end twin
   ! struct relicore_universe_parameters { double h0_km_s_mpc; double omega_matter;
   !     double omega_baryon; double omega_curvature; double cmb_temperature_k; double n_eff;
   !     double neutrino_masses_ev[3]; double w0; double wa; double helium_mass_fraction; };
@@ -341,6 +338,7 @@ module relicore
       type(c_ptr) :: version
     end function c_version
 
+!@ twin
     ! int32_t relicore_two_load_calibration(double frequency_hz, double reading_hot,
     !     double temperature_hot_k, double reading_cold, double temperature_cold_k,
     !     struct relicore_two_load_calibration *out);
@@ -375,43 +373,13 @@ module relicore
       real(c_double), intent(out) :: out
       integer(c_int32_t) :: status
     end function c_calibrated_brightness_temperature
-    ! int32_t relicore_two_load_calibration_f32(float frequency_hz, float reading_hot,
-    !     float temperature_hot_k, float reading_cold, float temperature_cold_k,
-    !     struct relicore_two_load_calibration_f32 *out);
-    function c_two_load_calibration_f32(frequency_hz, reading_hot, temperature_hot_k, &
-        reading_cold, temperature_cold_k, out) &
-        bind(C, name='relicore_two_load_calibration_f32') result(status)
-      import :: c_float, c_int32_t, relicore_two_load_calibration_f32
-      real(c_float), value :: frequency_hz, reading_hot, temperature_hot_k, reading_cold, &
-          temperature_cold_k
-      type(relicore_two_load_calibration_f32), intent(out) :: out
-      integer(c_int32_t) :: status
-    end function c_two_load_calibration_f32
-    ! int32_t relicore_calibrated_temperature_f32(
-    !     const struct relicore_two_load_calibration_f32 *calibration, float reading,
-    !     float *out);
-    function c_calibrated_temperature_f32(calibration, reading, out) &
-        bind(C, name='relicore_calibrated_temperature_f32') result(status)
-      import :: c_float, c_int32_t, relicore_two_load_calibration_f32
-      type(relicore_two_load_calibration_f32), intent(in) :: calibration
-      real(c_float), value :: reading
-      real(c_float), intent(out) :: out
-      integer(c_int32_t) :: status
-    end function c_calibrated_temperature_f32
-    ! int32_t relicore_calibrated_brightness_temperature_f32(
-    !     const struct relicore_two_load_calibration_f32 *calibration, float reading,
-    !     float *out);
-    function c_calibrated_brightness_temperature_f32(calibration, reading, out) &
-        bind(C, name='relicore_calibrated_brightness_temperature_f32') result(status)
-      import :: c_float, c_int32_t, relicore_two_load_calibration_f32
-      type(relicore_two_load_calibration_f32), intent(in) :: calibration
-      real(c_float), value :: reading
-      real(c_float), intent(out) :: out
-      integer(c_int32_t) :: status
-    end function c_calibrated_brightness_temperature_f32
+!@ end twin
+!@ twin
     ! int32_t relicore_response_weighted_radiance(const double *wavelengths_m,
-    !     size_t n_wavelengths, const double *response, size_t n_response,
-    !     double temperature_k, double *out);
+!@64     !     size_t n_wavelengths, const double *response, size_t n_response,
+!@64     !     double temperature_k, double *out);
+!@32     !     size_t n_wavelengths, const float *response, size_t n_response, float temperature_k,
+!@32     !     float *out);
     function c_response_weighted_radiance(wavelengths_m, n_wavelengths, response, &
         n_response, temperature_k, out) &
         bind(C, name='relicore_response_weighted_radiance') result(status)
@@ -439,36 +407,7 @@ module relicore
       real(c_double), intent(out) :: out
       integer(c_int32_t) :: status
     end function c_temperature_from_response_weighted_radiance
-    ! int32_t relicore_response_weighted_radiance_f32(const float *wavelengths_m,
-    !     size_t n_wavelengths, const float *response, size_t n_response, float temperature_k,
-    !     float *out);
-    function c_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, response, &
-        n_response, temperature_k, out) &
-        bind(C, name='relicore_response_weighted_radiance_f32') result(status)
-      import :: c_float, c_int32_t, c_size_t
-      real(c_float), intent(in) :: wavelengths_m(*)
-      integer(c_size_t), value :: n_wavelengths
-      real(c_float), intent(in) :: response(*)
-      integer(c_size_t), value :: n_response
-      real(c_float), value :: temperature_k
-      real(c_float), intent(out) :: out
-      integer(c_int32_t) :: status
-    end function c_response_weighted_radiance_f32
-    ! int32_t relicore_temperature_from_response_weighted_radiance_f32(
-    !     const float *wavelengths_m, size_t n_wavelengths, const float *response,
-    !     size_t n_response, float radiance, float *out);
-    function c_temperature_from_response_weighted_radiance_f32(wavelengths_m, &
-        n_wavelengths, response, n_response, radiance, out) &
-        bind(C, name='relicore_temperature_from_response_weighted_radiance_f32') result(status)
-      import :: c_float, c_int32_t, c_size_t
-      real(c_float), intent(in) :: wavelengths_m(*)
-      integer(c_size_t), value :: n_wavelengths
-      real(c_float), intent(in) :: response(*)
-      integer(c_size_t), value :: n_response
-      real(c_float), value :: radiance
-      real(c_float), intent(out) :: out
-      integer(c_int32_t) :: status
-    end function c_temperature_from_response_weighted_radiance_f32
+!@ end twin
 
     ! int32_t relicore_universe_parameters_default(double h0_km_s_mpc, double omega_matter,
     !     struct relicore_universe_parameters *out);
@@ -632,8 +571,10 @@ contains
 
   ! ================================================================ response-weighted radiance
 
+!@ twin
   ! Response-weighted radiance: the integral of response(lambda) B_lambda(lambda, T) over the
-  ! table.
+!@64   ! table.
+!@32   ! table. Single-precision twin (real(c_float)).
   !   wavelengths_m: strictly increasing wavelengths in m (> 0), at least 2
   !   response: relative spectral response at those wavelengths (>= 0), same size;
   !             linear between the points and zero outside
@@ -663,9 +604,12 @@ contains
     call report(code, 'relicore_response_weighted_radiance', stat)
   end subroutine relicore_response_weighted_radiance_s
 
-  ! Calls relicore_response_weighted_radiance; a zero-size table is passed as a valid buffer of
-  ! length 0, so the C library judges the sizes (RELICORE_ERROR_ARRAY_TOO_SHORT), never a NULL
-  ! pointer.
+!@64   ! Calls relicore_response_weighted_radiance; a zero-size table is passed as a valid buffer of
+!@64   ! length 0, so the C library judges the sizes (RELICORE_ERROR_ARRAY_TOO_SHORT), never a NULL
+!@64   ! pointer.
+!@32   ! Calls relicore_response_weighted_radiance_f32; a zero-size table is passed as a valid buffer
+!@32   ! of length 0, so the C library judges the sizes (RELICORE_ERROR_ARRAY_TOO_SHORT), never a
+!@32   ! NULL pointer.
   function table_response_weighted_radiance(wavelengths_m, response, temperature_k, &
       out) result(code)
     real(c_double), intent(in) :: wavelengths_m(:), response(:)
@@ -693,7 +637,8 @@ contains
   end function table_response_weighted_radiance
 
   ! Temperature whose response-weighted radiance is the given one (inverse of
-  ! relicore_response_weighted_radiance).
+!@64   ! relicore_response_weighted_radiance).
+!@32   ! relicore_response_weighted_radiance). Single-precision twin (real(c_float)).
   !   wavelengths_m: strictly increasing wavelengths in m (> 0), at least 2
   !   response: relative spectral response at those wavelengths (>= 0), same size;
   !             linear between the points and zero outside
@@ -724,8 +669,10 @@ contains
     call report(code, 'relicore_temperature_from_response_weighted_radiance', stat)
   end subroutine relicore_temperature_from_response_weighted_radiance_s
 
-  ! Calls relicore_temperature_from_response_weighted_radiance; a zero-size table is passed as a
-  ! valid buffer of length 0, so the C library judges the sizes
+!@64   ! Calls relicore_temperature_from_response_weighted_radiance; a zero-size table is passed as a
+!@64   ! valid buffer of length 0, so the C library judges the sizes
+!@32   ! Calls relicore_temperature_from_response_weighted_radiance_f32; a zero-size table is passed
+!@32   ! as a valid buffer of length 0, so the C library judges the sizes
   ! (RELICORE_ERROR_ARRAY_TOO_SHORT), never a NULL pointer.
   function table_temperature_from_response_weighted_radiance(wavelengths_m, response, &
       radiance, out) result(code)
@@ -753,139 +700,24 @@ contains
     end if
   end function table_temperature_from_response_weighted_radiance
 
-  ! Response-weighted radiance: the integral of response(lambda) B_lambda(lambda, T) over the
-  ! table. Single-precision twin (real(c_float)).
-  !   wavelengths_m: strictly increasing wavelengths in m (> 0), at least 2
-  !   response: relative spectral response at those wavelengths (>= 0), same size;
-  !             linear between the points and zero outside
-  !   temperature_k: temperature in K, > 0
-  ! Result: W m-2 sr-1 (times the unit of the response); NaN on failure.
-  function relicore_response_weighted_radiance_f32(wavelengths_m, response, &
-      temperature_k) result(res)
-    real(c_float), intent(in) :: wavelengths_m(:), response(:)
-    real(c_float), intent(in) :: temperature_k
-    real(c_float) :: res
-    if (table_response_weighted_radiance_f32(wavelengths_m, response, temperature_k, &
-        res) /= RELICORE_OK) &
-        res = nan32()
-  end function relicore_response_weighted_radiance_f32
-
-  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
-  ! without stat a failure stops with its message.
-  subroutine relicore_response_weighted_radiance_f32_s(wavelengths_m, response, &
-      temperature_k, out, stat)
-    real(c_float), intent(in) :: wavelengths_m(:), response(:)
-    real(c_float), intent(in) :: temperature_k
-    real(c_float), intent(out) :: out
-    integer(c_int32_t), intent(out), optional :: stat
-    integer(c_int32_t) :: code
-    code = table_response_weighted_radiance_f32(wavelengths_m, response, temperature_k, out)
-    if (code /= RELICORE_OK) out = nan32()
-    call report(code, 'relicore_response_weighted_radiance_f32', stat)
-  end subroutine relicore_response_weighted_radiance_f32_s
-
-  ! Calls relicore_response_weighted_radiance_f32; a zero-size table is passed as a valid buffer
-  ! of length 0, so the C library judges the sizes (RELICORE_ERROR_ARRAY_TOO_SHORT), never a
-  ! NULL pointer.
-  function table_response_weighted_radiance_f32(wavelengths_m, response, temperature_k, &
-      out) result(code)
-    real(c_float), intent(in) :: wavelengths_m(:), response(:)
-    real(c_float), intent(in) :: temperature_k
-    real(c_float), intent(out) :: out
-    integer(c_int32_t) :: code
-    real(c_float) :: empty(1)
-    integer(c_size_t) :: n_wavelengths, n_response
-    empty = 0
-    n_wavelengths = size(wavelengths_m, kind=c_size_t)
-    n_response = size(response, kind=c_size_t)
-    if (n_wavelengths > 0 .and. n_response > 0) then
-      code = c_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, response, &
-          n_response, temperature_k, out)
-    else if (n_wavelengths > 0) then
-      code = c_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, empty, &
-          n_response, temperature_k, out)
-    else if (n_response > 0) then
-      code = c_response_weighted_radiance_f32(empty, n_wavelengths, response, n_response, &
-          temperature_k, out)
-    else
-      code = c_response_weighted_radiance_f32(empty, n_wavelengths, empty, n_response, &
-          temperature_k, out)
-    end if
-  end function table_response_weighted_radiance_f32
-
-  ! Temperature whose response-weighted radiance is the given one (inverse of
-  ! relicore_response_weighted_radiance). Single-precision twin (real(c_float)).
-  !   wavelengths_m: strictly increasing wavelengths in m (> 0), at least 2
-  !   response: relative spectral response at those wavelengths (>= 0), same size;
-  !             linear between the points and zero outside
-  !   radiance: response-weighted radiance in W m-2 sr-1, > 0
-  ! Result: K; NaN on failure.
-  function relicore_temperature_from_response_weighted_radiance_f32(wavelengths_m, &
-      response, radiance) result(res)
-    real(c_float), intent(in) :: wavelengths_m(:), response(:)
-    real(c_float), intent(in) :: radiance
-    real(c_float) :: res
-    if (table_temperature_from_response_weighted_radiance_f32(wavelengths_m, response, &
-        radiance, res) /= RELICORE_OK) &
-        res = nan32()
-  end function relicore_temperature_from_response_weighted_radiance_f32
-
-  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
-  ! without stat a failure stops with its message.
-  subroutine relicore_temperature_from_response_weighted_radiance_f32_s(wavelengths_m, &
-      response, radiance, out, stat)
-    real(c_float), intent(in) :: wavelengths_m(:), response(:)
-    real(c_float), intent(in) :: radiance
-    real(c_float), intent(out) :: out
-    integer(c_int32_t), intent(out), optional :: stat
-    integer(c_int32_t) :: code
-    code = table_temperature_from_response_weighted_radiance_f32(wavelengths_m, response, &
-        radiance, out)
-    if (code /= RELICORE_OK) out = nan32()
-    call report(code, 'relicore_temperature_from_response_weighted_radiance_f32', stat)
-  end subroutine relicore_temperature_from_response_weighted_radiance_f32_s
-
-  ! Calls relicore_temperature_from_response_weighted_radiance_f32; a zero-size table is passed
-  ! as a valid buffer of length 0, so the C library judges the sizes
-  ! (RELICORE_ERROR_ARRAY_TOO_SHORT), never a NULL pointer.
-  function table_temperature_from_response_weighted_radiance_f32(wavelengths_m, response, &
-      radiance, out) result(code)
-    real(c_float), intent(in) :: wavelengths_m(:), response(:)
-    real(c_float), intent(in) :: radiance
-    real(c_float), intent(out) :: out
-    integer(c_int32_t) :: code
-    real(c_float) :: empty(1)
-    integer(c_size_t) :: n_wavelengths, n_response
-    empty = 0
-    n_wavelengths = size(wavelengths_m, kind=c_size_t)
-    n_response = size(response, kind=c_size_t)
-    if (n_wavelengths > 0 .and. n_response > 0) then
-      code = c_temperature_from_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, &
-          response, n_response, radiance, out)
-    else if (n_wavelengths > 0) then
-      code = c_temperature_from_response_weighted_radiance_f32(wavelengths_m, n_wavelengths, &
-          empty, n_response, radiance, out)
-    else if (n_response > 0) then
-      code = c_temperature_from_response_weighted_radiance_f32(empty, n_wavelengths, &
-          response, n_response, radiance, out)
-    else
-      code = c_temperature_from_response_weighted_radiance_f32(empty, n_wavelengths, empty, &
-          n_response, radiance, out)
-    end if
-  end function table_temperature_from_response_weighted_radiance_f32
-
+!@ end twin
   ! ================================================================ two-load calibration
 
-  ! Two-load calibration of a radiometer channel: fits
+!@ twin
+!@64   ! Two-load calibration of a radiometer channel: fits
+!@32   ! Two-load calibration of a radiometer channel (single precision): fits
   ! reading = gain * J + offset, J the Rayleigh-Jeans brightness temperature of each load.
   !   frequency_hz: channel frequency in Hz, > 0
   !   reading_hot: raw reading on the hot load (counts, volts: any linear unit)
   !   temperature_hot_k: physical temperature of the hot load in K, > temperature_cold_k
   !   reading_cold: raw reading on the cold load, /= reading_hot
   !   temperature_cold_k: physical temperature of the cold load in K, > 0
-  ! Result: type(relicore_two_load_calibration); every field NaN on failure. Referenced through
-  ! the generic name relicore_two_load_calibration, which also names the type (whose structure
-  ! constructor takes the three fields).
+!@64   ! Result: type(relicore_two_load_calibration); every field NaN on failure. Referenced through
+!@64   ! the generic name relicore_two_load_calibration, which also names the type (whose structure
+!@64   ! constructor takes the three fields).
+!@32   ! Result: type(relicore_two_load_calibration_f32); every field NaN on failure. Referenced
+!@32   ! through the generic name relicore_two_load_calibration_f32, which also names the type (whose
+!@32   ! structure constructor takes the three fields).
   impure elemental function make_two_load_calibration(frequency_hz, reading_hot, &
       temperature_hot_k, reading_cold, temperature_cold_k) result(res)
     real(c_double), intent(in) :: frequency_hz, reading_hot, temperature_hot_k, &
@@ -912,7 +744,8 @@ contains
     call report(code, 'relicore_two_load_calibration', stat)
   end subroutine relicore_two_load_calibration_s
 
-  ! Physical temperature of a blackbody scene from a raw reading.
+!@64   ! Physical temperature of a blackbody scene from a raw reading.
+!@32   ! Physical temperature of a blackbody scene from a raw reading. Single-precision twin.
   !   calibration: from relicore_two_load_calibration
   !   reading: raw reading, finite
   ! Result: K, > 0; NaN on failure.
@@ -936,7 +769,9 @@ contains
     call report(code, 'relicore_calibrated_temperature', stat)
   end subroutine relicore_calibrated_temperature_s
 
-  ! Rayleigh-Jeans brightness temperature J = (reading - offset)/gain of the scene.
+!@64   ! Rayleigh-Jeans brightness temperature J = (reading - offset)/gain of the scene.
+!@32   ! Rayleigh-Jeans brightness temperature J = (reading - offset)/gain of the scene. Single-
+!@32   ! precision twin.
   !   calibration: from relicore_two_load_calibration
   !   reading: raw reading, finite
   ! Result: K (may be <= 0 below the zero-radiance level); NaN on failure.
@@ -963,96 +798,7 @@ contains
     call report(code, 'relicore_calibrated_brightness_temperature', stat)
   end subroutine relicore_calibrated_brightness_temperature_s
 
-  ! Two-load calibration of a radiometer channel (single precision): fits
-  ! reading = gain * J + offset, J the Rayleigh-Jeans brightness temperature of each load.
-  !   frequency_hz: channel frequency in Hz, > 0
-  !   reading_hot: raw reading on the hot load (counts, volts: any linear unit)
-  !   temperature_hot_k: physical temperature of the hot load in K, > temperature_cold_k
-  !   reading_cold: raw reading on the cold load, /= reading_hot
-  !   temperature_cold_k: physical temperature of the cold load in K, > 0
-  ! Result: type(relicore_two_load_calibration_f32); every field NaN on failure. Referenced
-  ! through the generic name relicore_two_load_calibration_f32, which also names the type (whose
-  ! structure constructor takes the three fields).
-  impure elemental function make_two_load_calibration_f32(frequency_hz, reading_hot, &
-      temperature_hot_k, reading_cold, temperature_cold_k) result(res)
-    real(c_float), intent(in) :: frequency_hz, reading_hot, temperature_hot_k, &
-        reading_cold, temperature_cold_k
-    type(relicore_two_load_calibration_f32) :: res
-    if (c_two_load_calibration_f32(frequency_hz, reading_hot, temperature_hot_k, &
-        reading_cold, temperature_cold_k, res) /= RELICORE_OK) &
-        res = relicore_two_load_calibration_f32(nan32(), nan32(), nan32())
-  end function make_two_load_calibration_f32
-
-  ! Status form: calibration = the fit (every field NaN on failure), stat = RELICORE_OK or
-  ! RELICORE_ERROR_*; without stat a failure stops with its message.
-  impure elemental subroutine relicore_two_load_calibration_f32_s(frequency_hz, reading_hot, &
-      temperature_hot_k, reading_cold, temperature_cold_k, calibration, stat)
-    real(c_float), intent(in) :: frequency_hz, reading_hot, temperature_hot_k, &
-        reading_cold, temperature_cold_k
-    type(relicore_two_load_calibration_f32), intent(out) :: calibration
-    integer(c_int32_t), intent(out), optional :: stat
-    integer(c_int32_t) :: code
-    code = c_two_load_calibration_f32(frequency_hz, reading_hot, temperature_hot_k, &
-        reading_cold, temperature_cold_k, calibration)
-    if (code /= RELICORE_OK) calibration = relicore_two_load_calibration_f32(nan32(), &
-        nan32(), nan32())
-    call report(code, 'relicore_two_load_calibration_f32', stat)
-  end subroutine relicore_two_load_calibration_f32_s
-
-  ! Physical temperature of a blackbody scene from a raw reading. Single-precision twin.
-  !   calibration: from relicore_two_load_calibration_f32
-  !   reading: raw reading, finite
-  ! Result: K, > 0; NaN on failure.
-  impure elemental function relicore_calibrated_temperature_f32(calibration, &
-      reading) result(res)
-    type(relicore_two_load_calibration_f32), intent(in) :: calibration
-    real(c_float), intent(in) :: reading
-    real(c_float) :: res
-    if (c_calibrated_temperature_f32(calibration, reading, res) /= RELICORE_OK) res = nan32()
-  end function relicore_calibrated_temperature_f32
-
-  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
-  ! without stat a failure stops with its message.
-  impure elemental subroutine relicore_calibrated_temperature_f32_s(calibration, reading, &
-      out, stat)
-    type(relicore_two_load_calibration_f32), intent(in) :: calibration
-    real(c_float), intent(in) :: reading
-    real(c_float), intent(out) :: out
-    integer(c_int32_t), intent(out), optional :: stat
-    integer(c_int32_t) :: code
-    code = c_calibrated_temperature_f32(calibration, reading, out)
-    if (code /= RELICORE_OK) out = nan32()
-    call report(code, 'relicore_calibrated_temperature_f32', stat)
-  end subroutine relicore_calibrated_temperature_f32_s
-
-  ! Rayleigh-Jeans brightness temperature J = (reading - offset)/gain of the scene. Single-
-  ! precision twin.
-  !   calibration: from relicore_two_load_calibration_f32
-  !   reading: raw reading, finite
-  ! Result: K (may be <= 0 below the zero-radiance level); NaN on failure.
-  impure elemental function relicore_calibrated_brightness_temperature_f32(calibration, &
-      reading) result(res)
-    type(relicore_two_load_calibration_f32), intent(in) :: calibration
-    real(c_float), intent(in) :: reading
-    real(c_float) :: res
-    if (c_calibrated_brightness_temperature_f32(calibration, reading, &
-        res) /= RELICORE_OK) res = nan32()
-  end function relicore_calibrated_brightness_temperature_f32
-
-  ! Status form: out = the result (NaN on failure), stat = RELICORE_OK or RELICORE_ERROR_*;
-  ! without stat a failure stops with its message.
-  impure elemental subroutine relicore_calibrated_brightness_temperature_f32_s(calibration, &
-      reading, out, stat)
-    type(relicore_two_load_calibration_f32), intent(in) :: calibration
-    real(c_float), intent(in) :: reading
-    real(c_float), intent(out) :: out
-    integer(c_int32_t), intent(out), optional :: stat
-    integer(c_int32_t) :: code
-    code = c_calibrated_brightness_temperature_f32(calibration, reading, out)
-    if (code /= RELICORE_OK) out = nan32()
-    call report(code, 'relicore_calibrated_brightness_temperature_f32', stat)
-  end subroutine relicore_calibrated_brightness_temperature_f32_s
-
+!@ end twin
 
   ! ================================================================ the universe
 

@@ -13,22 +13,22 @@ from pathlib import Path
 
 from . import rustdoc
 from .common import banner
-from .table import ROOT, TOPICS, Function
+from .table import ROOT, TOPICS, Function, TableFunction, table_functions
 
 C_SRC = ROOT / "bindings" / "c" / "src"
 
 SHORT = {"blackbody": "bb", "cosmology": "cosmo", "decoupling": "dc", "growth": "gr"}
 
 
-def _doc(lines: list[str]) -> list[str]:
+def _doc(lines: list[str], width: int = 96) -> list[str]:
     """Doc comment lines, long ones wrapped at 100 columns (bullets keep a hanging indent)."""
     out = []
     for line in lines:
-        if len(line) <= 96:
+        if len(line) <= width:
             out.append(f"/// {line}".rstrip())
             continue
         indent = "  " if line.lstrip().startswith("* ") else ""
-        for piece in textwrap.wrap(line, 96, subsequent_indent=indent, break_on_hyphens=False):
+        for piece in textwrap.wrap(line, width, subsequent_indent=indent, break_on_hyphens=False):
             out.append(f"/// {piece}")
     return out
 
@@ -296,4 +296,185 @@ def _prune(use: str, text: str) -> str:
 
 
 def outputs(fns: list[Function]) -> dict[Path, str]:
-    return {C_SRC / f"gen_{topic}.rs": module(topic, fns) for topic in TOPICS}
+    out = {C_SRC / f"gen_{topic}.rs": module(topic, fns) for topic in TOPICS}
+    out[C_SRC / "gen_frames.rs"] = frames_module(fns)
+    out[C_SRC / "gen_tables.rs"] = tables_module()
+    return out
+
+
+# ---------------------------------------------------------------------------- frame forms
+_SUPERSCRIPT = str.maketrans("0123456789", "⁰¹²³⁴⁵⁶⁷⁸⁹")
+
+
+def _unicode_unit(unit: str) -> str:
+    """'W m-2 sr-1' -> 'W m⁻² sr⁻¹' (the C docs' spelling of the table's units)."""
+    return re.sub(r"(?<=[A-Za-z])-(\d+)", lambda m: "⁻" + m.group(1).translate(_SUPERSCRIPT), unit)
+
+
+def _frame_params(fn: Function) -> tuple[list[str], str, list[str], list[str]]:
+    """(single values, the signal, the scene parameters, the standard uncertainties) of a frame."""
+    ff = fn.frame_form
+    names = fn.arg_names
+    k, s = ff.scalars, len(ff.domains)
+    return names[:k], names[k], names[k + 1 : k + 1 + s], names[k + 1 + s :]
+
+
+def frame_export(fn: Function, ty: str) -> str:
+    """The C frame (image) form `<name>_array` (or `_array_f32`) of a table entry."""
+    ff = fn.frame_form
+    assert ff
+    c_ty = "double" if ty == "f64" else "float"
+    name = fn.c_name + ("_array" if ty == "f64" else "_array_f32")
+    singles, signal, scene, uncertain = _frame_params(fn)
+    base = fn.name.removesuffix("_with_uncertainty")
+    what = "the " + rustdoc.summary(rustdoc.find(next(f for f in FUNCTIONS if f.name == base))[1]).split(" from ")[0].lower()
+    if ty == "f32":
+        head = [f"`float` twin of `{fn.c_name}_array` for firmware and single-precision frames: the same "
+                "core function in `float`."]
+    elif len(ff.outputs) == 1:
+        head = [f"`{fn.c_name}` over a frame of signals (an image): {ff.outputs[0][0]}[i] = {what} of "
+                f"{signal}s[i], bit for bit that of the scalar function, with per-pixel or shared scene "
+                "parameters."]
+    else:
+        head = [f"`{fn.c_name}` over a frame of signals (an image): {what} and its combined standard "
+                "uncertainty per pixel, bit for bit those of the scalar function, with per-pixel or "
+                "shared scene parameters and standard uncertainties."]
+    quoted = ", ".join(f"`{a}`" for a in singles)
+    they = "it is" if len(singles) == 1 else "they are"
+    unit = _unicode_unit(fn.args[len(singles)].meaning.split(" in ", 1)[1].split(",")[0])
+    lines = [
+        "///",
+        f"/// * {quoted}: {ff.scalars_doc} (when {they} not, every pixel fails).",
+        f"/// * `{signal}s`, `n`: the n measured {signal}s L_meas in {unit}, finite.",
+    ]
+    items = ", ".join(f"`{a}`, `n_{a}` ({d})" for a, d in zip(scene, ff.domains))
+    bullets = [f"* {items}: n or 1 values each."]
+    if uncertain:
+        bullets.append(f"* the standard uncertainties {', '.join(f'`{a}`' for a in uncertain)}, each "
+                       "followed by its length (n or 1): finite, >= 0.")
+    bullets.append("* " + "; ".join(f"`{o}`: n values of {m}" for o, m in ff.outputs) + ".")
+    tail = [
+        "",
+        "Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one "
+        "value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0 "
+        "included). When some pixels fail, their outputs are NaN, the others are computed, and the "
+        "code of the first failing pixel is returned (the errors of the scalar function). "
+        "`RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1 values (every output "
+        "NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a length 0; every "
+        "non-NULL output NaN). The radiances of the surroundings and the path are computed once for "
+        "shared parameters (and reused while per-pixel parameters repeat). Allocates nothing.",
+        "",
+        "# Safety",
+        f"Each input pointer is NULL or points to its length of readable `{c_ty}`; each output is NULL "
+        f"or points to n writable `{c_ty}` and overlaps no other buffer.",
+    ]
+    doc = _doc(head, 92) + lines + _doc(bullets + tail, 92)
+    slices = [signal] + scene + uncertain
+    params = [f"{a}: {ty}" for a in singles] + [f"{signal}s: *const {ty}", "n: usize"]
+    params += [p for a in slices[1:] for p in (f"{a}: *const {ty}", f"n_{a}: usize")]
+    params += [f"{o}: *mut {ty}" for o, _ in ff.outputs]
+    pairs = [f"({signal}s, n)"] + [f"({a}, n_{a})" for a in slices[1:]]
+    s_names = [f"s{i}" for i in range(len(slices))]
+    o_names = [f"o{i}" for i in range(len(ff.outputs))]
+    call = f"bb::{fn.name}_array({', '.join(singles + s_names + o_names)})"
+    if ff.simd:
+        sig = [f"{a}: {ty}" for a in singles] + [f"{s}: &[{ty}]" for s in s_names]
+        sig += [f"{o}: &mut [{ty}]" for o in o_names]
+        call = f"widest!(|{', '.join(sig)}| -> ArrayResult {{ {call} }})"
+    return "\n".join(doc + [
+        "#[allow(clippy::too_many_arguments)]",
+        "#[unsafe(no_mangle)]",
+        f"pub unsafe extern \"C\" fn {name}({', '.join(params)}) -> i32 {{",
+        f"    let params = [{', '.join(pairs)}];",
+        "    // SAFETY: the pointers are NULL or valid for their lengths, the outputs for n writes and",
+        "    // disjoint from the inputs (this function's contract).",
+        f"    unsafe {{ frame_call(n, params, [{', '.join(o for o, _ in ff.outputs)}], "
+        f"|&[{', '.join(s_names)}], [{', '.join(o_names)}]| {{ {call} }}) }}",
+        "}",
+    ])
+
+
+FUNCTIONS: list[Function] = []
+
+
+def frames_module(fns: list[Function]) -> str:
+    """bindings/c/src/gen_frames.rs: the frame forms, each entry's with-uncertainty form after it."""
+    FUNCTIONS[:] = fns
+    framed = [f for f in fns if f.frame_form]
+    order = {f.name: f.order for f in fns}
+    framed.sort(key=lambda f: (order[f.name.removesuffix("_with_uncertainty")], f.order))
+    body = []
+    for fn in framed:
+        body.append(frame_export(fn, "f64"))
+        if fn.frame_form.f32:
+            body.append(frame_export(fn, "f32"))
+    head = [
+        banner("//", "the C frame (image) forms of radiation thermometry"),
+        "//! The C frame (image) forms of the table's entries with a `frame`: one call over n signals "
+        "with per-pixel or shared scene parameters (a pointer and a length of n or 1 each), through "
+        "`thermometry::frame_call`.\n",
+        "use crate::thermometry::frame_call;",
+        "use relicore::ArrayResult;",
+        "use relicore::blackbody as bb;",
+        "use relicore_dispatch::widest;",
+        "",
+    ]
+    return rustfmt("\n".join(head) + "\n" + "\n\n".join(body) + "\n")
+
+
+# ---------------------------------------------------------------------------- response tables
+def table_export(tf: TableFunction, ty: str) -> str:
+    """The C export of a response-table function (`_f32` for `float`), through
+    `thermometry::table_call`."""
+    c_ty = "double" if ty == "f64" else "float"
+    name = f"relicore_{tf.name}" + ("" if ty == "f64" else "_f32")
+    paragraphs = tf.c_doc.split("\n\n")
+    if ty == "f32":
+        paragraphs[0] = "\n".join(_doc([
+            f"`float` twin of `relicore_{tf.name}` for firmware: the same core function computed in "
+            "single precision (table, arguments and result `float`)."], 92))
+        k = next(i for i, p in enumerate(paragraphs) if p.startswith("Accuracy:"))
+        paragraphs[k] = "\n".join(_doc([
+            "Accuracy: that of the core function in f32 (a few f32 ulp of the f64 result where the "
+            "inputs are representable). Allocates nothing."], 92))
+    doc = [line if line.startswith("///") else f"/// {line}".rstrip()
+           for line in "\n\n".join(paragraphs).split("\n")]
+    rt = tf.result_type
+    out_ty = f"struct {rt.c_struct}{'' if ty == 'f64' else '_f32'}" if rt else c_ty
+    sfx = "" if ty == "f64" else "_f32"
+    safety = _doc([
+        f"`wavelengths_m` is NULL or points to `n_wavelengths` readable `{c_ty}`, `response_table` NULL "
+        f"or to `n_response_table` readable `{c_ty}`; `out` is NULL or points to a writable "
+        f"`{'struct ' + rt.c_struct + sfx if rt else c_ty}`."], 96 if ty == "f64" else 98)
+    doc += ["///", "/// # Safety"] + safety
+    params = [f"wavelengths_m: *const {ty}", "n_wavelengths: usize", f"response_table: *const {ty}",
+              "n_response_table: usize"] + [f"{a}: {ty}" for a in tf.args]
+    params.append(f"out: *mut {out_ty.removeprefix('struct ') if rt else ty}")
+    call = f"bb::{tf.name}(w, r, {', '.join(tf.args)})"
+    if rt:
+        call += f".map({out_ty.removeprefix('struct ')}::from)"
+    return "\n".join(doc + (["#[allow(clippy::too_many_arguments)]"] if len(params) > 7 else []) + [
+        "#[unsafe(no_mangle)]",
+        f"pub unsafe extern \"C\" fn {name}({', '.join(params)}) -> i32 {{",
+        "    // SAFETY: the pointers are NULL or valid for their lengths (this function's contract).",
+        "    unsafe { table_call(wavelengths_m, n_wavelengths, response_table, n_response_table, out, "
+        f"|w, r| {{ {call} }}) }}",
+        "}",
+    ])
+
+
+def tables_module() -> str:
+    """bindings/c/src/gen_tables.rs: the response-table functions and their `float` twins."""
+    tfs = table_functions()
+    body = [table_export(tf, ty) for tf in tfs for ty in ("f64", "f32")]
+    structs = sorted({tf.result_type.c_struct for tf in tfs if tf.result_type})
+    head = [
+        banner("//", "the C exports of the response-table functions of radiation thermometry"),
+        "//! The C exports of the table's response-table functions ([[table_function]]): a tabulated "
+        "spectral response (two caller buffers with their lengths) and single values, through "
+        "`thermometry::table_call`; each with its `float` twin.\n",
+        f"use crate::thermometry::{{{', '.join(['table_call'] + [s + sfx for s in structs for sfx in ('', '_f32')])}}};",
+        "use relicore::blackbody as bb;",
+        "",
+    ]
+    return rustfmt("\n".join(head) + "\n" + "\n\n".join(body) + "\n")

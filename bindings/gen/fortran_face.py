@@ -17,6 +17,14 @@ table. The template's marker lines are replaced:
                     in their own files (radiation thermometry); a part's sections start with
                     the lines `!@@ public`, `!@@ interfaces`, `!@@ procedures`
 
+Template blocks between the lines `!@ twin` and `!@ end twin` are written twice: as they are and
+as their real(c_float) twin (c_double, double, nan64() and the names relicore_x, c_x, make_x,
+table_x become c_float, float, nan32() and x_f32, x_f32_s for x_s); a line starting `!@64 ` or
+`!@32 ` is only in the double or the float copy (the words the two differ in).
+
+Also generated into the parts' `!@ tables` markers: the response-table functions
+([[table_function]]); and after the parts: the frame (image) forms of the entries with `frame`.
+
 Each procedure's comment is the core's rustdoc summary plus the table's argument meanings and
 result; the conventions every wrapper shares (NaN on failure, stat, the stop message) are said
 once, in the template's module header. Template lines starting with `!!` describe the template
@@ -36,7 +44,7 @@ from pathlib import Path
 
 from . import constants_face, rustdoc
 from .common import banner
-from .table import ROOT, Function, thermometry_names
+from .table import ROOT, Function, table_functions, thermometry_names
 
 TEMPLATE = ROOT / "bindings" / "fortran" / "relicore.in.f90"
 MODULE = ROOT / "bindings" / "fortran" / "relicore.f90"
@@ -358,8 +366,55 @@ def doc_comment(fn: Function) -> list[str]:
     return lines
 
 
+# Kinds and intrinsics of iso_c_binding, never renamed in a single-precision twin.
+_C_NAMES = {"c_float", "c_double", "c_int32_t", "c_int64_t", "c_size_t", "c_ptr", "c_char",
+            "c_null_char", "c_null_ptr", "c_f_pointer", "c_associated", "c_loc", "c_int", "c_bool"}
+
+
+def _float_twin(line: str) -> str:
+    """The real(c_float) twin of a template line: c_double, double and nan64() become c_float,
+    float and nan32(); a name relicore_x, c_x, make_x or table_x becomes x_f32 (x_f32_s for x_s)."""
+    line = line.replace("c_double", "c_float").replace("nan64()", "nan32()")
+    line = re.sub(r"\bdouble\b", "float", line)
+
+    def rename(m: re.Match[str]) -> str:
+        word = m.group(0)
+        if word in _C_NAMES:
+            return word
+        return word[:-2] + "_f32_s" if word.endswith("_s") else word + "_f32"
+
+    return re.sub(r"\b(?:relicore|c|make|table)_\w+", rename, line)
+
+
+def expand_twins(lines: list[str]) -> list[str]:
+    """Template blocks between `!@ twin` and `!@ end twin`, written twice: as they are, then their
+    real(c_float) twin (`_float_twin`). A line starting `!@64 ` is only in the double copy and one
+    starting `!@32 ` only in the float copy, as written (the wording the two copies differ in)."""
+    out: list[str] = []
+    block: list[str] | None = None
+    for line in lines:
+        if line.strip() == "!@ twin":
+            if block is not None:
+                raise FortranFaceError(f"{TEMPLATE.name}: nested '!@ twin'")
+            block = []
+        elif line.strip() == "!@ end twin":
+            if block is None:
+                raise FortranFaceError(f"{TEMPLATE.name}: '!@ end twin' without '!@ twin'")
+            out += [b[5:] if b.startswith("!@64 ") else b for b in block if not b.startswith("!@32 ")]
+            out += [b[5:] if b.startswith("!@32 ") else _float_twin(b) for b in block
+                    if not b.startswith("!@64 ")]
+            block = None
+        elif block is not None:
+            block.append(line)
+        else:
+            out.append(line)
+    if block is not None:
+        raise FortranFaceError(f"{TEMPLATE.name}: '!@ twin' without '!@ end twin'")
+    return out
+
+
 def module_text(fns: list[Function]) -> str:
-    template = TEMPLATE.read_text().splitlines()
+    template = expand_twins(TEMPLATE.read_text().splitlines())
     all_forms = [form for fn in fns for form in forms(fn)]
 
     coverage = []
@@ -385,6 +440,8 @@ def module_text(fns: list[Function]) -> str:
 
     types, nan_helpers = result_types(fns)
     parts = part_sections()
+    for key, lines in frame_sections(fns).items():
+        parts[key] = parts[key] + lines
     procs = [line for _, body in nan_helpers for line in [""] + body] + procs
     inserts = {"coverage": coverage, "public": public, "interfaces": interfaces,
                "procedures": procs, "constants": constants_face.fortran_lines(WIDTH, ascii_text),
@@ -448,8 +505,10 @@ def result_types(fns: list[Function]) -> tuple[list[str], list[tuple[str, list[s
 
 
 def part_sections() -> dict[str, list[str]]:
-    """The sections of the hand-kept parts (bindings/fortran/parts/*.f90), in file order."""
+    """The sections of the hand-kept parts (bindings/fortran/parts/*.f90), in file order; a line
+    `!@ tables` in a section is replaced by that section of the response-table functions."""
     out: dict[str, list[str]] = {"public": [], "interfaces": [], "procedures": []}
+    tables = table_sections()
     for path in sorted(PARTS.glob("*.f90")):
         section = None
         for line in path.read_text().splitlines():
@@ -460,6 +519,9 @@ def part_sections() -> dict[str, list[str]]:
                     raise FortranFaceError(f"{path.name}: unknown section {line!r}")
                 continue
             if line.startswith("!!"):
+                continue
+            if line.strip() == "!@ tables" and section is not None:
+                out[section] += tables[section]
                 continue
             if section is None:
                 if line.strip():
@@ -683,3 +745,205 @@ def outputs(fns: list[Function]) -> dict[Path, str]:
         what = "a dispatch list of the Fortran vector tests"
         out[TESTS / f"{key}.inc"] = banner("!", what) + "\n".join(lines) + "\n"
     return out
+
+
+# ---------------------------------------------------------------------------- frame forms
+FRAME_NOTE = (
+    "Object temperature over a frame (an image) of signals: signals(n) and the scene parameters "
+    "emissivity, reflected_temperature_k, transmittance, path_temperature_k (and, for the "
+    "_with_uncertainty forms, the five standard uncertainties), each of size n (per pixel) or 1 "
+    "(shared). One C call for the whole frame; every pixel bit for bit the scalar function's. out "
+    "(out_temperature, out_uncertainty) of size n; failing pixels NaN and stat = the first failing "
+    "pixel's code; RELICORE_ERROR_LENGTH_MISMATCH (every output NaN) when a parameter has neither n "
+    "nor 1 elements or an output is not of size n. Pass an image as a rank-1 view (reshape, or "
+    "pointer remapping of a contiguous 2-D array)."
+)
+
+
+@dataclass(frozen=True)
+class Frame:
+    """One C frame form (`<name>_array`, `_array_f32`) and its Fortran subroutine."""
+
+    fn: Function
+    f32: bool
+
+    @property
+    def kind(self) -> str:
+        return "c_float" if self.f32 else "c_double"
+
+    @property
+    def c_name(self) -> str:
+        return f"relicore_{self.fn.name}_array" + ("_f32" if self.f32 else "")
+
+    @property
+    def generic(self) -> str | None:
+        """The generic name (the double form's) when the C name is too long for Fortran."""
+        return self.c_name.removesuffix("_f32") if len(self.c_name) > 63 else None
+
+    def parts(self) -> tuple[list[str], list[str], list[str], list[str]]:
+        """(single values, slices, their lengths' names, outputs)."""
+        ff = self.fn.frame_form
+        names = self.fn.arg_names
+        slices = [names[ff.scalars] + "s"] + names[ff.scalars + 1:]
+        return names[: ff.scalars], slices, ["n"] + [f"n_{a}" for a in slices[1:]], [o for o, _ in ff.outputs]
+
+
+def frames(fns: list[Function]) -> list[Frame]:
+    order = {f.name: f.order for f in fns}
+    framed = sorted((f for f in fns if f.frame_form),
+                    key=lambda f: (order[f.name.removesuffix("_with_uncertainty")], f.order))
+    return [Frame(f, s) for f in framed for s in (False, True) if not s or f.frame_form.f32]
+
+
+def frame_sections(fns: list[Function]) -> dict[str, list[str]]:
+    """The public names, bind(C) interfaces and subroutines of the frame forms."""
+    all_frames = frames(fns)
+    private = {fr.c_name: f"frame_f32_{k}" for k, fr in enumerate((f for f in all_frames if f.generic), 1)}
+    public = statement("  ", "public :: " + ", ".join(f.c_name for f in all_frames if not f.generic))
+    interfaces: list[str] = []
+    procs: list[str] = [""] + comment(FRAME_NOTE) + [""]
+    for fr in all_frames:
+        singles, slices, lengths, outs = fr.parts()
+        ctype = "float" if fr.f32 else "double"
+        if fr.generic:
+            public += comment(f"{fr.c_name} (more than 63 characters) is the real({fr.kind}) form of the "
+                              f"generic name {fr.generic}")
+            public += [f"  interface {fr.generic}",
+                       f"    module procedure {fr.generic}, {private[fr.c_name]}",
+                       f"  end interface {fr.generic}"]
+        c_params = [f"{ctype} {a}" for a in singles]
+        c_params += [p for s, n in zip(slices, lengths) for p in (f"const {ctype} *{s}", f"size_t {n}")]
+        c_params += [f"{ctype} *{o}" for o in outs]
+        raw = "c_" + fr.c_name.removeprefix("relicore_")
+        actual = singles + [p for s, n in zip(slices, lengths) for p in (s, n)] + outs
+        interfaces += comment(f"int32_t {fr.c_name}({', '.join(c_params)});", indent="    ", hang="    ")
+        interfaces += statement("    ", f"function {raw}({', '.join(actual)}) &")
+        interfaces += [f"        bind(C, name='{fr.c_name}') result(status)",
+                       f"      import :: {fr.kind}, c_int32_t, c_size_t",
+                       f"      real({fr.kind}), value :: {', '.join(singles)}"]
+        interfaces += statement("      ", f"real({fr.kind}), intent(in) :: {', '.join(s + '(*)' for s in slices)}")
+        interfaces += statement("      ", f"integer(c_size_t), value :: {', '.join(lengths)}")
+        interfaces += [f"      real({fr.kind}), intent(out) :: {', '.join(o + '(*)' for o in outs)}",
+                       "      integer(c_int32_t) :: status", f"    end function {raw}"]
+        name = private.get(fr.c_name, fr.c_name)
+        scene = slices[1:]
+        nan = "nan32()" if fr.f32 else "nan64()"
+        call = singles + [p for s in slices for p in (s, f"size({s}, kind=c_size_t)")] + outs
+        lines = statement("  ", f"subroutine {name}({', '.join(singles + slices + outs + ['stat'])})")
+        lines += [f"    real({fr.kind}), intent(in) :: {', '.join(singles)}"]
+        lines += statement("    ", f"real({fr.kind}), intent(in) :: {', '.join(s + '(:)' for s in slices)}")
+        lines += [f"    real({fr.kind}), intent(out) :: {', '.join(o + '(:)' for o in outs)}",
+                  "    integer(c_int32_t), intent(out), optional :: stat",
+                  "    integer(c_int32_t) :: code", "    integer :: n", f"    n = size({slices[0]})",
+                  f"    if (.not. ({' .and. '.join(f'size({o}) == n' for o in outs)})) then",
+                  "      code = RELICORE_ERROR_LENGTH_MISMATCH", "    else if (n == 0) then",
+                  "      ! nothing to compute (a parameter of size 0 or 1 is then valid)",
+                  "      code = RELICORE_OK", "      do_check: block", f"        integer :: sizes({len(scene)})"]
+        lines += statement("        ", f"sizes = [{', '.join(f'size({s})' for s in scene)}]")
+        lines += ["        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH",
+                  "      end block do_check"]
+        lines += [("    else if (" if k == 0 else "        ") + f"size({s}) == 0"
+                  + (" .or. &" if k + 1 < len(scene) else ") then") for k, s in enumerate(scene)]
+        lines += ["      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)",
+                  "      code = RELICORE_ERROR_LENGTH_MISMATCH", "    else"]
+        lines += statement("      ", f"code = {raw}({', '.join(call)})")
+        lines += ["    end if", "    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then"]
+        lines += [f"      {o} = {nan}" for o in outs]
+        lines += ["    end if", f"    call report(code, '{fr.c_name}', stat)", f"  end subroutine {name}"]
+        procs += lines + [""]
+    return {"public": public, "interfaces": interfaces, "procedures": procs[:-1]}
+
+
+# ---------------------------------------------------------------------------- response tables
+TABLE_NOTE = (
+    "with the table copied to buffers of at least one element, so that a zero-size table reaches "
+    "the C library as a valid buffer of length 0 (which it judges: RELICORE_ERROR_ARRAY_TOO_SHORT), "
+    "never as a NULL pointer."
+)
+
+
+def table_sections() -> dict[str, list[str]]:
+    """The public names, bind(C) interfaces and procedures of the response-table functions
+    ([[table_function]]): per function and precision the function, the `_s` subroutine and the
+    private `table_` helper that passes the table to C."""
+    public_names: list[str] = []
+    generics: list[str] = []
+    interfaces: list[str] = []
+    procs: list[str] = []
+    long_names = 0
+    for tf in table_functions():
+        rt = tf.result_type
+        args = list(tf.args)
+        if rt:
+            result = (f"type({rt.fortran_type}) (_f32 twin), every real field NaN and inputs 0 on "
+                      "failure")
+        else:
+            result = tf.fortran_result
+        procs += [""] + comment(tf.fortran_doc)
+        procs += ["  ! wavelengths_m(:), response_table(:): the response table (as "
+                  "relicore_response_weighted_radiance)"]
+        procs += comment(f"{', '.join(args)}: scalars", hang="    ")
+        procs += comment(f"Result: {result}. Forms: relicore_{tf.name}, _s, and the real(c_float) "
+                         "twins _f32, _f32_s.", hang="  ")
+        for f32 in (False, True):
+            kind, ctype, sfx = ("c_float", "float", "_f32") if f32 else ("c_double", "double", "")
+            c_name = f"relicore_{tf.name}{sfx}"
+            raw, helper = f"c_{tf.name}{sfx}", f"table_{tf.name}{sfx}"
+            rtype = f"type({rt.fortran_type}{sfx})" if rt else f"real({kind})"
+            nan = f"nan_{rt.fortran_type}{sfx}()" if rt else ("nan32()" if f32 else "nan64()")
+            sub = c_name + "_s"
+            public_names.append(c_name)
+            private = sub
+            if len(sub) > 63:  # reached through the generic name of the double form
+                long_names += 1
+                private, generic = f"table_f32_{long_names}", sub.replace("_f32", "", 1)
+                generics += comment(f"{sub} (more than 63 characters) is the real({kind}) form of the "
+                                    f"generic name {generic}")
+                generics += [f"  interface {generic}", f"    module procedure {generic}, {private}",
+                             f"  end interface {generic}"]
+            else:
+                public_names.append(sub)
+            # the C prototype and its interface
+            struct = f"struct {rt.c_struct}{sfx} *out" if rt else f"{ctype} *out"
+            proto = (f"int32_t {c_name}(const {ctype} *wavelengths_m, size_t n_wavelengths, const {ctype} "
+                     f"*response_table, size_t n_response_table, "
+                     + "".join(f"{ctype} {a}, " for a in args) + f"{struct});")
+            interfaces += comment(proto, indent="    ", hang="    ")
+            interfaces += statement("    ", f"function {raw}(wavelengths_m, n_wavelengths, response_table, "
+                                    f"n_response_table, {', '.join(args)}, out) &")
+            interfaces += [f"        bind(C, name='{c_name}') result(status)"]
+            interfaces += statement("      ", f"import :: {kind}, c_int32_t, c_size_t"
+                                    + (f", {rt.fortran_type}{sfx}" if rt else ""))
+            interfaces += [f"      real({kind}), intent(in) :: wavelengths_m(*)",
+                           "      integer(c_size_t), value :: n_wavelengths",
+                           f"      real({kind}), intent(in) :: response_table(*)",
+                           "      integer(c_size_t), value :: n_response_table"]
+            interfaces += statement("      ", f"real({kind}), value :: {', '.join(args)}")
+            interfaces += [f"      {rtype}, intent(out) :: out", "      integer(c_int32_t) :: status",
+                           f"    end function {raw}"]
+            # the Fortran procedures
+            dummies = ["wavelengths_m", "response_table"] + args
+            decl = [f"    real({kind}), intent(in) :: wavelengths_m(:), response_table(:)"]
+            decl += statement("    ", f"real({kind}), intent(in) :: {', '.join(args)}")
+            procs += [""] + statement("  ", f"function {c_name}({', '.join(dummies)}) result(res)")
+            procs += decl + [f"    {rtype} :: res", "    integer(c_int32_t) :: code"]
+            procs += statement("    ", f"code = {helper}({', '.join(dummies + ['res'])})")
+            procs += [f"    if (code /= RELICORE_OK) res = {nan}", f"  end function {c_name}", ""]
+            procs += statement("  ", f"subroutine {private}({', '.join(dummies + ['out', 'stat'])})")
+            procs += decl + [f"    {rtype}, intent(out) :: out",
+                             "    integer(c_int32_t), intent(out), optional :: stat",
+                             "    integer(c_int32_t) :: code"]
+            procs += statement("    ", f"code = {helper}({', '.join(dummies + ['out'])})")
+            procs += [f"    if (code /= RELICORE_OK) out = {nan}",
+                      f"    call report(code, '{c_name}', stat)", f"  end subroutine {private}", ""]
+            procs += comment(f"Calls {c_name} {TABLE_NOTE}")
+            procs += statement("  ", f"function {helper}({', '.join(dummies + ['out'])}) result(code)")
+            procs += decl + [f"    {rtype}, intent(out) :: out", "    integer(c_int32_t) :: code",
+                             f"    real({kind}) :: w(max(1, size(wavelengths_m))), r(max(1, size(response_table)))",
+                             "    w = 0", "    r = 0", "    w(1:size(wavelengths_m)) = wavelengths_m",
+                             "    r(1:size(response_table)) = response_table"]
+            procs += statement("    ", f"code = {raw}(w, size(wavelengths_m, kind=c_size_t), r, "
+                               f"size(response_table, kind=c_size_t), {', '.join(args)}, out)")
+            procs += [f"  end function {helper}"]
+    public = statement("  ", "public :: " + ", ".join(public_names)) + generics
+    return {"public": public, "interfaces": interfaces, "procedures": procs}

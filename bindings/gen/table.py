@@ -19,6 +19,7 @@ KEYS = {
     "name", "topic", "receiver", "core", "infallible", "args", "result", "f32", "array",
     "array_f32", "python", "returns", "frame",
 }
+FRAME_KEYS = {"scalars", "simd", "f32", "scalars_doc", "domains", "outputs", "budget"}
 RESULT_KEYS = {
     "core_type", "core_path", "c_struct", "c_module", "fortran_type", "python_type", "fields",
 }
@@ -92,6 +93,21 @@ class ArrayForm:
 
 
 @dataclass(frozen=True)
+class FrameForm:
+    """The C and Fortran frame (image) form `<name>_array` of an entry: the first `scalars`
+    arguments single values, the signal n values, every later argument n values or 1 (shared);
+    `outputs` are (name, meaning) of the n-value outputs."""
+
+    scalars: int
+    simd: bool  # through the SIMD dispatch (`widest!`) in C
+    f32: bool  # a `float` twin `<name>_array_f32`
+    scalars_doc: str  # what the single values are, with their domain (C docs)
+    domains: tuple[str, ...]  # short domain of each scene parameter after the signal (C docs)
+    outputs: tuple[tuple[str, str], ...]
+    budget: str | None = None  # a result type's core frame form that fills one result value per element
+
+
+@dataclass(frozen=True)
 class Function:
     name: str
     topic: str
@@ -106,12 +122,17 @@ class Function:
     python: str
     order: int = field(compare=False)
     returns: str | None = None
-    frame: int | None = None  # leading single-value arguments of the core's frame form
-    frame_core: str | None = None  # the core's frame form when it is not `<name>_array`
+    frame: int | None = None  # leading single values of the frame form that Python's array path calls
+    frame_form: FrameForm | None = None  # the C and Fortran frame form
+
+    @property
+    def frame_core(self) -> str | None:
+        """The core's budget frame form of a function with a result type (one value per element)."""
+        return self.frame_form.budget if self.frame_form else None
 
     @property
     def frame_function(self) -> str:
-        """The core's frame form (a function of the topic's module)."""
+        """The core's frame form that Python's array path calls (a function of the topic's module)."""
         return self.frame_core or f"{self.name}_array"
 
     @property
@@ -146,6 +167,44 @@ class Function:
 
 class TableError(Exception):
     pass
+
+
+TABLE_FUNCTION_KEYS = {"name", "args", "returns", "c_doc", "fortran_doc", "fortran_result"}
+
+
+@dataclass(frozen=True)
+class TableFunction:
+    """A response-table function ([[table_function]]): the response table (wavelengths_m,
+    response_table) first, then the single values `args`; a `float` twin; blackbody topic."""
+
+    name: str
+    args: tuple[str, ...]
+    returns: str | None
+    c_doc: str
+    fortran_doc: str
+    fortran_result: str | None
+
+    @property
+    def result_type(self) -> ResultType | None:
+        return RESULTS.get(self.returns) if self.returns else None
+
+
+def table_functions(path: Path = TABLE) -> list[TableFunction]:
+    """The [[table_function]] entries (not part of `load()`: no harness list takes them)."""
+    with open(path, "rb") as f:
+        raw = tomllib.load(f)
+    out = []
+    for e in raw.get("table_function", []):
+        where = f"{path.name}: table_function {e.get('name')!r}"
+        if set(e) - TABLE_FUNCTION_KEYS or not {"name", "args", "c_doc", "fortran_doc"} <= set(e):
+            raise TableError(f"{where}: keys are {sorted(TABLE_FUNCTION_KEYS)} (returns, fortran_result optional)")
+        if bool(e.get("returns")) == bool(e.get("fortran_result")):
+            raise TableError(f"{where}: give returns (a result type) or fortran_result, not both")
+        if e.get("returns") and e["returns"] not in raw.get("result", {}):
+            raise TableError(f"{where}: returns must name a [result.<name>]")
+        out.append(TableFunction(e["name"], tuple(e["args"]), e.get("returns"), e["c_doc"].strip("\n"),
+                                 e["fortran_doc"], e.get("fortran_result")))
+    return out
 
 
 def load(path: Path = TABLE) -> list[Function]:
@@ -192,6 +251,18 @@ def load(path: Path = TABLE) -> list[Function]:
         receiver = e.get("receiver", "none")
         arr = e.get("array")
         array = ArrayForm(arr["arg"], arr["name"], bool(arr.get("simd", False))) if arr else None
+        frame_form = None
+        if "frame" in e:
+            fr = e["frame"]
+            if set(fr) - FRAME_KEYS or "scalars" not in fr:
+                raise TableError(f"{where}: frame needs scalars and takes only {sorted(FRAME_KEYS)}")
+            outs = fr.get("outputs", [f"out: {e['result'].split(',')[0]}"])
+            frame_form = FrameForm(
+                scalars=int(fr["scalars"]), simd=bool(fr.get("simd", False)), f32=bool(fr.get("f32", False)),
+                scalars_doc=fr.get("scalars_doc", ""), domains=tuple(fr.get("domains", ())),
+                outputs=tuple(tuple(o.split(": ", 1)) for o in outs),
+                budget=fr.get("budget"),
+            )
         fn = Function(
             name=e["name"],
             topic=e["topic"],
@@ -206,18 +277,24 @@ def load(path: Path = TABLE) -> list[Function]:
             python=e["python"],
             order=i,
             returns=e.get("returns"),
-            frame=int(e["frame"]["scalars"]) if "frame" in e else None,
-            frame_core=e["frame"].get("core") if "frame" in e else None,
+            # a result type's frame form gives T and u_c only: Python's array path calls its
+            # budget form (the whole result value per element)
+            frame=frame_form.scalars if frame_form and (frame_form.budget or not e.get("returns")) else None,
+            frame_form=frame_form,
         )
         if fn.returns and fn.returns not in RESULTS:
             raise TableError(f"{where}: returns must be one of {sorted(RESULTS)}")
         if fn.returns and (fn.array or fn.receiver != "none" or fn.python != "function"):
             raise TableError(f"{where}: a function with a result type is a plain function without array form")
-        if fn.frame is not None and not (0 < fn.frame < len(fn.args) and not fn.array):
+        ff = fn.frame_form
+        if ff and not (0 < ff.scalars < len(fn.args) and not fn.array and fn.receiver == "none"):
             raise TableError(f"{where}: frame scalars must leave the signal and the scene as slices")
-        if fn.frame is not None and bool(fn.returns) != bool(fn.frame_core):
-            raise TableError(f"{where}: a frame form of a function with a result type (and only such) names its core "
-                             "function (frame.core), which writes one result value per element")
+        if ff and bool(ff.budget) != bool(fn.returns):
+            raise TableError(f"{where}: the frame of a function with a result type (and only such) names its "
+                             "budget form (frame.budget), the core function that writes one result value per element")
+        if ff and not (0 < len(ff.domains) <= len(fn.args) - ff.scalars - 1 and ff.outputs):
+            raise TableError(f"{where}: frame needs the domains of the scene (the parameters after the "
+                             "signal; any later ones are standard uncertainties) and its outputs")
         if fn.topic not in TOPICS:
             raise TableError(f"{where}: topic must be one of {TOPICS}")
         if fn.receiver != "none" and fn.receiver not in RECEIVERS:

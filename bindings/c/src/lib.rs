@@ -20,12 +20,12 @@
 //! constants, from `src/constants.rs`),
 //! `boundary` (plumbing), `calibration` (two-load calibration), `response` (response-weighted
 //! radiance), `thermometry` (the temperature-with-uncertainty struct, the response-table,
-//! combined-uncertainty and frame forms of radiation thermometry), `universe` (the universe
+//! combined-uncertainty forms of radiation thermometry and the body of its frame forms), `universe` (the universe
 //! struct, its init function and parameters),
 //! `decoupling` (the thermal-history struct and its compute function), `growth` (the
 //! linear-growth and power-spectrum structs, the spectrum's options and the compute functions), and the generated
-//! `gen_blackbody`, `gen_cosmology`, `gen_decoupling`, `gen_growth`: the exports of every regular function of
-//! `bindings/functions.toml` (`double`, `float` twins, array forms), written by
+//! `gen_blackbody`, `gen_tables` (response-table functions), `gen_frames`, `gen_cosmology`, `gen_decoupling`, `gen_growth`: the exports of every regular function of
+//! `bindings/functions.toml` (`double`, `float` twins, array and frame forms), written by
 //! `bindings/generate.py` from that table and the core's rustdoc.
 
 #![deny(missing_docs)]
@@ -55,7 +55,11 @@ pub mod calibration;
 
 pub mod response;
 
+pub mod gen_tables;
+
 pub mod thermometry;
+
+pub mod gen_frames;
 
 pub mod universe;
 
