@@ -4199,6 +4199,326 @@ int32_t relicore_object_temperature_band_with_uncertainty_array_f32(float lower_
                                                                     float *out_uncertainty);
 
 /**
+ * `relicore_object_temperature_wavelength_with_uncertainty` over a frame of signals (an image)
+ * with the whole uncertainty budget of each pixel: out[i] is the `struct
+ * relicore_temperature_uncertainty` the scalar function writes for pixel i (the object
+ * temperature, its combined standard uncertainty and the five sensitivity coefficients), bit
+ * for bit, with per-pixel or shared scene parameters and standard uncertainties.
+ *
+ * * `wavelength_m`: wavelength in m, finite and > 0 (when it is not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹ m⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+ *   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+ *   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+ * * `out`: n values of struct relicore_temperature_uncertainty.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN (every real field, and `inputs` 0),
+ * the others are computed, and the code of the first failing pixel is returned (the errors of
+ * the scalar function). `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1
+ * values (every output NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a
+ * length 0; every non-NULL output NaN). The radiances of the surroundings and the path are
+ * computed once for shared parameters (and reused while per-pixel parameters repeat).
+ * Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `double`; each output is NULL
+ * or points to n writable `relicore_temperature_uncertainty` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_wavelength_budget_array(double wavelength_m,
+                                                            const double *signals,
+                                                            size_t n,
+                                                            const double *emissivity,
+                                                            size_t n_emissivity,
+                                                            const double *reflected_temperature_k,
+                                                            size_t n_reflected_temperature_k,
+                                                            const double *transmittance,
+                                                            size_t n_transmittance,
+                                                            const double *path_temperature_k,
+                                                            size_t n_path_temperature_k,
+                                                            const double *signal_uncertainty,
+                                                            size_t n_signal_uncertainty,
+                                                            const double *emissivity_uncertainty,
+                                                            size_t n_emissivity_uncertainty,
+                                                            const double *reflected_temperature_uncertainty_k,
+                                                            size_t n_reflected_temperature_uncertainty_k,
+                                                            const double *transmittance_uncertainty,
+                                                            size_t n_transmittance_uncertainty,
+                                                            const double *path_temperature_uncertainty_k,
+                                                            size_t n_path_temperature_uncertainty_k,
+                                                            struct relicore_temperature_uncertainty *out);
+
+/**
+ * `float` twin of `relicore_object_temperature_wavelength_budget_array` for firmware and
+ * single-precision frames: the same core function in `float`, writing `struct
+ * relicore_temperature_uncertainty_f32`.
+ *
+ * * `wavelength_m`: wavelength in m, finite and > 0 (when it is not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹ m⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+ *   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+ *   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+ * * `out`: n values of struct relicore_temperature_uncertainty_f32.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN (every real field, and `inputs` 0),
+ * the others are computed, and the code of the first failing pixel is returned (the errors of
+ * the scalar function). `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1
+ * values (every output NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a
+ * length 0; every non-NULL output NaN). The radiances of the surroundings and the path are
+ * computed once for shared parameters (and reused while per-pixel parameters repeat).
+ * Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `float`; each output is NULL
+ * or points to n writable `relicore_temperature_uncertainty_f32` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_wavelength_budget_array_f32(float wavelength_m,
+                                                                const float *signals,
+                                                                size_t n,
+                                                                const float *emissivity,
+                                                                size_t n_emissivity,
+                                                                const float *reflected_temperature_k,
+                                                                size_t n_reflected_temperature_k,
+                                                                const float *transmittance,
+                                                                size_t n_transmittance,
+                                                                const float *path_temperature_k,
+                                                                size_t n_path_temperature_k,
+                                                                const float *signal_uncertainty,
+                                                                size_t n_signal_uncertainty,
+                                                                const float *emissivity_uncertainty,
+                                                                size_t n_emissivity_uncertainty,
+                                                                const float *reflected_temperature_uncertainty_k,
+                                                                size_t n_reflected_temperature_uncertainty_k,
+                                                                const float *transmittance_uncertainty,
+                                                                size_t n_transmittance_uncertainty,
+                                                                const float *path_temperature_uncertainty_k,
+                                                                size_t n_path_temperature_uncertainty_k,
+                                                                struct relicore_temperature_uncertainty_f32 *out);
+
+/**
+ * `relicore_object_temperature_frequency_with_uncertainty` over a frame of signals (an image)
+ * with the whole uncertainty budget of each pixel: out[i] is the `struct
+ * relicore_temperature_uncertainty` the scalar function writes for pixel i (the object
+ * temperature, its combined standard uncertainty and the five sensitivity coefficients), bit
+ * for bit, with per-pixel or shared scene parameters and standard uncertainties.
+ *
+ * * `frequency_hz`: frequency in Hz, finite and > 0 (when it is not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹ Hz⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+ *   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+ *   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+ * * `out`: n values of struct relicore_temperature_uncertainty.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN (every real field, and `inputs` 0),
+ * the others are computed, and the code of the first failing pixel is returned (the errors of
+ * the scalar function). `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1
+ * values (every output NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a
+ * length 0; every non-NULL output NaN). The radiances of the surroundings and the path are
+ * computed once for shared parameters (and reused while per-pixel parameters repeat).
+ * Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `double`; each output is NULL
+ * or points to n writable `relicore_temperature_uncertainty` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_frequency_budget_array(double frequency_hz,
+                                                           const double *signals,
+                                                           size_t n,
+                                                           const double *emissivity,
+                                                           size_t n_emissivity,
+                                                           const double *reflected_temperature_k,
+                                                           size_t n_reflected_temperature_k,
+                                                           const double *transmittance,
+                                                           size_t n_transmittance,
+                                                           const double *path_temperature_k,
+                                                           size_t n_path_temperature_k,
+                                                           const double *signal_uncertainty,
+                                                           size_t n_signal_uncertainty,
+                                                           const double *emissivity_uncertainty,
+                                                           size_t n_emissivity_uncertainty,
+                                                           const double *reflected_temperature_uncertainty_k,
+                                                           size_t n_reflected_temperature_uncertainty_k,
+                                                           const double *transmittance_uncertainty,
+                                                           size_t n_transmittance_uncertainty,
+                                                           const double *path_temperature_uncertainty_k,
+                                                           size_t n_path_temperature_uncertainty_k,
+                                                           struct relicore_temperature_uncertainty *out);
+
+/**
+ * `float` twin of `relicore_object_temperature_frequency_budget_array` for firmware and
+ * single-precision frames: the same core function in `float`, writing `struct
+ * relicore_temperature_uncertainty_f32`.
+ *
+ * * `frequency_hz`: frequency in Hz, finite and > 0 (when it is not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹ Hz⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+ *   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+ *   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+ * * `out`: n values of struct relicore_temperature_uncertainty_f32.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN (every real field, and `inputs` 0),
+ * the others are computed, and the code of the first failing pixel is returned (the errors of
+ * the scalar function). `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1
+ * values (every output NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a
+ * length 0; every non-NULL output NaN). The radiances of the surroundings and the path are
+ * computed once for shared parameters (and reused while per-pixel parameters repeat).
+ * Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `float`; each output is NULL
+ * or points to n writable `relicore_temperature_uncertainty_f32` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_frequency_budget_array_f32(float frequency_hz,
+                                                               const float *signals,
+                                                               size_t n,
+                                                               const float *emissivity,
+                                                               size_t n_emissivity,
+                                                               const float *reflected_temperature_k,
+                                                               size_t n_reflected_temperature_k,
+                                                               const float *transmittance,
+                                                               size_t n_transmittance,
+                                                               const float *path_temperature_k,
+                                                               size_t n_path_temperature_k,
+                                                               const float *signal_uncertainty,
+                                                               size_t n_signal_uncertainty,
+                                                               const float *emissivity_uncertainty,
+                                                               size_t n_emissivity_uncertainty,
+                                                               const float *reflected_temperature_uncertainty_k,
+                                                               size_t n_reflected_temperature_uncertainty_k,
+                                                               const float *transmittance_uncertainty,
+                                                               size_t n_transmittance_uncertainty,
+                                                               const float *path_temperature_uncertainty_k,
+                                                               size_t n_path_temperature_uncertainty_k,
+                                                               struct relicore_temperature_uncertainty_f32 *out);
+
+/**
+ * `relicore_object_temperature_band_with_uncertainty` over a frame of signals (an image) with
+ * the whole uncertainty budget of each pixel: out[i] is the `struct
+ * relicore_temperature_uncertainty` the scalar function writes for pixel i (the object
+ * temperature, its combined standard uncertainty and the five sensitivity coefficients), bit
+ * for bit, with per-pixel or shared scene parameters and standard uncertainties.
+ *
+ * * `lower_m`, `upper_m`: band edges in m, 0 <= lower < upper <= +Inf (when they are not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+ *   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+ *   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+ * * `out`: n values of struct relicore_temperature_uncertainty.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN (every real field, and `inputs` 0),
+ * the others are computed, and the code of the first failing pixel is returned (the errors of
+ * the scalar function). `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1
+ * values (every output NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a
+ * length 0; every non-NULL output NaN). The radiances of the surroundings and the path are
+ * computed once for shared parameters (and reused while per-pixel parameters repeat).
+ * Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `double`; each output is NULL
+ * or points to n writable `relicore_temperature_uncertainty` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_band_budget_array(double lower_m,
+                                                      double upper_m,
+                                                      const double *signals,
+                                                      size_t n,
+                                                      const double *emissivity,
+                                                      size_t n_emissivity,
+                                                      const double *reflected_temperature_k,
+                                                      size_t n_reflected_temperature_k,
+                                                      const double *transmittance,
+                                                      size_t n_transmittance,
+                                                      const double *path_temperature_k,
+                                                      size_t n_path_temperature_k,
+                                                      const double *signal_uncertainty,
+                                                      size_t n_signal_uncertainty,
+                                                      const double *emissivity_uncertainty,
+                                                      size_t n_emissivity_uncertainty,
+                                                      const double *reflected_temperature_uncertainty_k,
+                                                      size_t n_reflected_temperature_uncertainty_k,
+                                                      const double *transmittance_uncertainty,
+                                                      size_t n_transmittance_uncertainty,
+                                                      const double *path_temperature_uncertainty_k,
+                                                      size_t n_path_temperature_uncertainty_k,
+                                                      struct relicore_temperature_uncertainty *out);
+
+/**
+ * `float` twin of `relicore_object_temperature_band_budget_array` for firmware and
+ * single-precision frames: the same core function in `float`, writing `struct
+ * relicore_temperature_uncertainty_f32`.
+ *
+ * * `lower_m`, `upper_m`: band edges in m, 0 <= lower < upper <= +Inf (when they are not, every pixel fails).
+ * * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹, finite.
+ * * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+ *   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+ *   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+ * * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+ *   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+ *   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+ * * `out`: n values of struct relicore_temperature_uncertainty_f32.
+ *
+ * Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+ * value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+ * included). When some pixels fail, their outputs are NaN (every real field, and `inputs` 0),
+ * the others are computed, and the code of the first failing pixel is returned (the errors of
+ * the scalar function). `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1
+ * values (every output NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a
+ * length 0; every non-NULL output NaN). The radiances of the surroundings and the path are
+ * computed once for shared parameters (and reused while per-pixel parameters repeat).
+ * Allocates nothing.
+ *
+ * # Safety
+ * Each input pointer is NULL or points to its length of readable `float`; each output is NULL
+ * or points to n writable `relicore_temperature_uncertainty_f32` and overlaps no other buffer.
+ */
+int32_t relicore_object_temperature_band_budget_array_f32(float lower_m,
+                                                          float upper_m,
+                                                          const float *signals,
+                                                          size_t n,
+                                                          const float *emissivity,
+                                                          size_t n_emissivity,
+                                                          const float *reflected_temperature_k,
+                                                          size_t n_reflected_temperature_k,
+                                                          const float *transmittance,
+                                                          size_t n_transmittance,
+                                                          const float *path_temperature_k,
+                                                          size_t n_path_temperature_k,
+                                                          const float *signal_uncertainty,
+                                                          size_t n_signal_uncertainty,
+                                                          const float *emissivity_uncertainty,
+                                                          size_t n_emissivity_uncertainty,
+                                                          const float *reflected_temperature_uncertainty_k,
+                                                          size_t n_reflected_temperature_uncertainty_k,
+                                                          const float *transmittance_uncertainty,
+                                                          size_t n_transmittance_uncertainty,
+                                                          const float *path_temperature_uncertainty_k,
+                                                          size_t n_path_temperature_uncertainty_k,
+                                                          struct relicore_temperature_uncertainty_f32 *out);
+
+/**
  * Fills `*out` with the common-practice defaults and the given H0 and Ω_m: Ω_b = 0, Ω_k = 0
  * (flat), T0 = 2.7255 K (Fixsen 2009, ApJ 707, 916, rounded), N_eff = 3.044 (standard-model
  * value with the QED and non-instantaneous decoupling corrections), massless neutrinos,

@@ -653,7 +653,13 @@ module relicore
       relicore_object_temperature_frequency_with_uncertainty_array, &
       relicore_object_temperature_band_array, relicore_object_temperature_band_array_f32, &
       relicore_object_temperature_band_with_uncertainty_array, &
-      relicore_object_temperature_band_with_uncertainty_array_f32
+      relicore_object_temperature_band_with_uncertainty_array_f32, &
+      relicore_object_temperature_wavelength_budget_array, &
+      relicore_object_temperature_wavelength_budget_array_f32, &
+      relicore_object_temperature_frequency_budget_array, &
+      relicore_object_temperature_frequency_budget_array_f32, &
+      relicore_object_temperature_band_budget_array, &
+      relicore_object_temperature_band_budget_array_f32
   ! relicore_object_temperature_wavelength_with_uncertainty_array_f32 (more than 63 characters) is
   ! the real(c_float) form of the generic name
   ! relicore_object_temperature_wavelength_with_uncertainty_array
@@ -3547,6 +3553,192 @@ module relicore
       real(c_float), intent(out) :: out_temperature(*), out_uncertainty(*)
       integer(c_int32_t) :: status
     end function c_object_temperature_band_with_uncertainty_array_f32
+    ! int32_t relicore_object_temperature_wavelength_budget_array(double wavelength_m, const double
+    !     *signals, size_t n, const double *emissivity, size_t n_emissivity, const double
+    !     *reflected_temperature_k, size_t n_reflected_temperature_k, const double *transmittance,
+    !     size_t n_transmittance, const double *path_temperature_k, size_t n_path_temperature_k,
+    !     const double *signal_uncertainty, size_t n_signal_uncertainty, const double
+    !     *emissivity_uncertainty, size_t n_emissivity_uncertainty, const double
+    !     *reflected_temperature_uncertainty_k, size_t n_reflected_temperature_uncertainty_k, const
+    !     double *transmittance_uncertainty, size_t n_transmittance_uncertainty, const double
+    !     *path_temperature_uncertainty_k, size_t n_path_temperature_uncertainty_k, struct
+    !     relicore_temperature_uncertainty *out);
+    function c_object_temperature_wavelength_budget_array(wavelength_m, signals, n, emissivity, &
+        n_emissivity, reflected_temperature_k, n_reflected_temperature_k, transmittance, &
+        n_transmittance, path_temperature_k, n_path_temperature_k, signal_uncertainty, &
+        n_signal_uncertainty, emissivity_uncertainty, n_emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, n_reflected_temperature_uncertainty_k, &
+        transmittance_uncertainty, n_transmittance_uncertainty, path_temperature_uncertainty_k, &
+        n_path_temperature_uncertainty_k, out) &
+        bind(C, name='relicore_object_temperature_wavelength_budget_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_temperature_uncertainty
+      real(c_double), value :: wavelength_m
+      real(c_double), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*), signal_uncertainty(*), &
+          emissivity_uncertainty(*), reflected_temperature_uncertainty_k(*), &
+          transmittance_uncertainty(*), path_temperature_uncertainty_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k, n_signal_uncertainty, n_emissivity_uncertainty, &
+          n_reflected_temperature_uncertainty_k, n_transmittance_uncertainty, &
+          n_path_temperature_uncertainty_k
+      type(relicore_temperature_uncertainty), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_wavelength_budget_array
+    ! int32_t relicore_object_temperature_wavelength_budget_array_f32(float wavelength_m, const
+    !     float *signals, size_t n, const float *emissivity, size_t n_emissivity, const float
+    !     *reflected_temperature_k, size_t n_reflected_temperature_k, const float *transmittance,
+    !     size_t n_transmittance, const float *path_temperature_k, size_t n_path_temperature_k,
+    !     const float *signal_uncertainty, size_t n_signal_uncertainty, const float
+    !     *emissivity_uncertainty, size_t n_emissivity_uncertainty, const float
+    !     *reflected_temperature_uncertainty_k, size_t n_reflected_temperature_uncertainty_k, const
+    !     float *transmittance_uncertainty, size_t n_transmittance_uncertainty, const float
+    !     *path_temperature_uncertainty_k, size_t n_path_temperature_uncertainty_k, struct
+    !     relicore_temperature_uncertainty_f32 *out);
+    function c_object_temperature_wavelength_budget_array_f32(wavelength_m, signals, n, emissivity, &
+        n_emissivity, reflected_temperature_k, n_reflected_temperature_k, transmittance, &
+        n_transmittance, path_temperature_k, n_path_temperature_k, signal_uncertainty, &
+        n_signal_uncertainty, emissivity_uncertainty, n_emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, n_reflected_temperature_uncertainty_k, &
+        transmittance_uncertainty, n_transmittance_uncertainty, path_temperature_uncertainty_k, &
+        n_path_temperature_uncertainty_k, out) &
+        bind(C, name='relicore_object_temperature_wavelength_budget_array_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t, relicore_temperature_uncertainty_f32
+      real(c_float), value :: wavelength_m
+      real(c_float), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*), signal_uncertainty(*), &
+          emissivity_uncertainty(*), reflected_temperature_uncertainty_k(*), &
+          transmittance_uncertainty(*), path_temperature_uncertainty_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k, n_signal_uncertainty, n_emissivity_uncertainty, &
+          n_reflected_temperature_uncertainty_k, n_transmittance_uncertainty, &
+          n_path_temperature_uncertainty_k
+      type(relicore_temperature_uncertainty_f32), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_wavelength_budget_array_f32
+    ! int32_t relicore_object_temperature_frequency_budget_array(double frequency_hz, const double
+    !     *signals, size_t n, const double *emissivity, size_t n_emissivity, const double
+    !     *reflected_temperature_k, size_t n_reflected_temperature_k, const double *transmittance,
+    !     size_t n_transmittance, const double *path_temperature_k, size_t n_path_temperature_k,
+    !     const double *signal_uncertainty, size_t n_signal_uncertainty, const double
+    !     *emissivity_uncertainty, size_t n_emissivity_uncertainty, const double
+    !     *reflected_temperature_uncertainty_k, size_t n_reflected_temperature_uncertainty_k, const
+    !     double *transmittance_uncertainty, size_t n_transmittance_uncertainty, const double
+    !     *path_temperature_uncertainty_k, size_t n_path_temperature_uncertainty_k, struct
+    !     relicore_temperature_uncertainty *out);
+    function c_object_temperature_frequency_budget_array(frequency_hz, signals, n, emissivity, &
+        n_emissivity, reflected_temperature_k, n_reflected_temperature_k, transmittance, &
+        n_transmittance, path_temperature_k, n_path_temperature_k, signal_uncertainty, &
+        n_signal_uncertainty, emissivity_uncertainty, n_emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, n_reflected_temperature_uncertainty_k, &
+        transmittance_uncertainty, n_transmittance_uncertainty, path_temperature_uncertainty_k, &
+        n_path_temperature_uncertainty_k, out) &
+        bind(C, name='relicore_object_temperature_frequency_budget_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_temperature_uncertainty
+      real(c_double), value :: frequency_hz
+      real(c_double), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*), signal_uncertainty(*), &
+          emissivity_uncertainty(*), reflected_temperature_uncertainty_k(*), &
+          transmittance_uncertainty(*), path_temperature_uncertainty_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k, n_signal_uncertainty, n_emissivity_uncertainty, &
+          n_reflected_temperature_uncertainty_k, n_transmittance_uncertainty, &
+          n_path_temperature_uncertainty_k
+      type(relicore_temperature_uncertainty), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_frequency_budget_array
+    ! int32_t relicore_object_temperature_frequency_budget_array_f32(float frequency_hz, const float
+    !     *signals, size_t n, const float *emissivity, size_t n_emissivity, const float
+    !     *reflected_temperature_k, size_t n_reflected_temperature_k, const float *transmittance,
+    !     size_t n_transmittance, const float *path_temperature_k, size_t n_path_temperature_k,
+    !     const float *signal_uncertainty, size_t n_signal_uncertainty, const float
+    !     *emissivity_uncertainty, size_t n_emissivity_uncertainty, const float
+    !     *reflected_temperature_uncertainty_k, size_t n_reflected_temperature_uncertainty_k, const
+    !     float *transmittance_uncertainty, size_t n_transmittance_uncertainty, const float
+    !     *path_temperature_uncertainty_k, size_t n_path_temperature_uncertainty_k, struct
+    !     relicore_temperature_uncertainty_f32 *out);
+    function c_object_temperature_frequency_budget_array_f32(frequency_hz, signals, n, emissivity, &
+        n_emissivity, reflected_temperature_k, n_reflected_temperature_k, transmittance, &
+        n_transmittance, path_temperature_k, n_path_temperature_k, signal_uncertainty, &
+        n_signal_uncertainty, emissivity_uncertainty, n_emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, n_reflected_temperature_uncertainty_k, &
+        transmittance_uncertainty, n_transmittance_uncertainty, path_temperature_uncertainty_k, &
+        n_path_temperature_uncertainty_k, out) &
+        bind(C, name='relicore_object_temperature_frequency_budget_array_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t, relicore_temperature_uncertainty_f32
+      real(c_float), value :: frequency_hz
+      real(c_float), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*), signal_uncertainty(*), &
+          emissivity_uncertainty(*), reflected_temperature_uncertainty_k(*), &
+          transmittance_uncertainty(*), path_temperature_uncertainty_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k, n_signal_uncertainty, n_emissivity_uncertainty, &
+          n_reflected_temperature_uncertainty_k, n_transmittance_uncertainty, &
+          n_path_temperature_uncertainty_k
+      type(relicore_temperature_uncertainty_f32), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_frequency_budget_array_f32
+    ! int32_t relicore_object_temperature_band_budget_array(double lower_m, double upper_m, const
+    !     double *signals, size_t n, const double *emissivity, size_t n_emissivity, const double
+    !     *reflected_temperature_k, size_t n_reflected_temperature_k, const double *transmittance,
+    !     size_t n_transmittance, const double *path_temperature_k, size_t n_path_temperature_k,
+    !     const double *signal_uncertainty, size_t n_signal_uncertainty, const double
+    !     *emissivity_uncertainty, size_t n_emissivity_uncertainty, const double
+    !     *reflected_temperature_uncertainty_k, size_t n_reflected_temperature_uncertainty_k, const
+    !     double *transmittance_uncertainty, size_t n_transmittance_uncertainty, const double
+    !     *path_temperature_uncertainty_k, size_t n_path_temperature_uncertainty_k, struct
+    !     relicore_temperature_uncertainty *out);
+    function c_object_temperature_band_budget_array(lower_m, upper_m, signals, n, emissivity, &
+        n_emissivity, reflected_temperature_k, n_reflected_temperature_k, transmittance, &
+        n_transmittance, path_temperature_k, n_path_temperature_k, signal_uncertainty, &
+        n_signal_uncertainty, emissivity_uncertainty, n_emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, n_reflected_temperature_uncertainty_k, &
+        transmittance_uncertainty, n_transmittance_uncertainty, path_temperature_uncertainty_k, &
+        n_path_temperature_uncertainty_k, out) &
+        bind(C, name='relicore_object_temperature_band_budget_array') result(status)
+      import :: c_double, c_int32_t, c_size_t, relicore_temperature_uncertainty
+      real(c_double), value :: lower_m, upper_m
+      real(c_double), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*), signal_uncertainty(*), &
+          emissivity_uncertainty(*), reflected_temperature_uncertainty_k(*), &
+          transmittance_uncertainty(*), path_temperature_uncertainty_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k, n_signal_uncertainty, n_emissivity_uncertainty, &
+          n_reflected_temperature_uncertainty_k, n_transmittance_uncertainty, &
+          n_path_temperature_uncertainty_k
+      type(relicore_temperature_uncertainty), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_band_budget_array
+    ! int32_t relicore_object_temperature_band_budget_array_f32(float lower_m, float upper_m, const
+    !     float *signals, size_t n, const float *emissivity, size_t n_emissivity, const float
+    !     *reflected_temperature_k, size_t n_reflected_temperature_k, const float *transmittance,
+    !     size_t n_transmittance, const float *path_temperature_k, size_t n_path_temperature_k,
+    !     const float *signal_uncertainty, size_t n_signal_uncertainty, const float
+    !     *emissivity_uncertainty, size_t n_emissivity_uncertainty, const float
+    !     *reflected_temperature_uncertainty_k, size_t n_reflected_temperature_uncertainty_k, const
+    !     float *transmittance_uncertainty, size_t n_transmittance_uncertainty, const float
+    !     *path_temperature_uncertainty_k, size_t n_path_temperature_uncertainty_k, struct
+    !     relicore_temperature_uncertainty_f32 *out);
+    function c_object_temperature_band_budget_array_f32(lower_m, upper_m, signals, n, emissivity, &
+        n_emissivity, reflected_temperature_k, n_reflected_temperature_k, transmittance, &
+        n_transmittance, path_temperature_k, n_path_temperature_k, signal_uncertainty, &
+        n_signal_uncertainty, emissivity_uncertainty, n_emissivity_uncertainty, &
+        reflected_temperature_uncertainty_k, n_reflected_temperature_uncertainty_k, &
+        transmittance_uncertainty, n_transmittance_uncertainty, path_temperature_uncertainty_k, &
+        n_path_temperature_uncertainty_k, out) &
+        bind(C, name='relicore_object_temperature_band_budget_array_f32') result(status)
+      import :: c_float, c_int32_t, c_size_t, relicore_temperature_uncertainty_f32
+      real(c_float), value :: lower_m, upper_m
+      real(c_float), intent(in) :: signals(*), emissivity(*), reflected_temperature_k(*), &
+          transmittance(*), path_temperature_k(*), signal_uncertainty(*), &
+          emissivity_uncertainty(*), reflected_temperature_uncertainty_k(*), &
+          transmittance_uncertainty(*), path_temperature_uncertainty_k(*)
+      integer(c_size_t), value :: n, n_emissivity, n_reflected_temperature_k, n_transmittance, &
+          n_path_temperature_k, n_signal_uncertainty, n_emissivity_uncertainty, &
+          n_reflected_temperature_uncertainty_k, n_transmittance_uncertainty, &
+          n_path_temperature_uncertainty_k
+      type(relicore_temperature_uncertainty_f32), intent(out) :: out(*)
+      integer(c_int32_t) :: status
+    end function c_object_temperature_band_budget_array_f32
   end interface
 
 contains
@@ -9144,7 +9336,9 @@ contains
   ! (out_temperature, out_uncertainty) of size n; failing pixels NaN and stat = the first failing
   ! pixel's code; RELICORE_ERROR_LENGTH_MISMATCH (every output NaN) when a parameter has neither n
   ! nor 1 elements or an output is not of size n. Pass an image as a rank-1 view (reshape, or
-  ! pointer remapping of a contiguous 2-D array).
+  ! pointer remapping of a contiguous 2-D array). The _budget_array forms write the whole
+  ! type(relicore_temperature_uncertainty) value of each pixel (T, u_c and the five sensitivity
+  ! coefficients) into out(n); a failing pixel's value has every real field NaN and inputs 0.
 
   subroutine relicore_object_temperature_wavelength_array(wavelength_m, signals, emissivity, &
       reflected_temperature_k, transmittance, path_temperature_k, out, stat)
@@ -9721,4 +9915,334 @@ contains
     end if
     call report(code, 'relicore_object_temperature_band_with_uncertainty_array_f32', stat)
   end subroutine relicore_object_temperature_band_with_uncertainty_array_f32
+
+  subroutine relicore_object_temperature_wavelength_budget_array(wavelength_m, signals, emissivity, &
+      reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+      emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+      path_temperature_uncertainty_k, out, stat)
+    real(c_double), intent(in) :: wavelength_m
+    real(c_double), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:), signal_uncertainty(:), emissivity_uncertainty(:), &
+        reflected_temperature_uncertainty_k(:), transmittance_uncertainty(:), &
+        path_temperature_uncertainty_k(:)
+    type(relicore_temperature_uncertainty), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(9)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k), size(signal_uncertainty), size(emissivity_uncertainty), &
+            size(reflected_temperature_uncertainty_k), size(transmittance_uncertainty), &
+            size(path_temperature_uncertainty_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0 .or. &
+        size(signal_uncertainty) == 0 .or. &
+        size(emissivity_uncertainty) == 0 .or. &
+        size(reflected_temperature_uncertainty_k) == 0 .or. &
+        size(transmittance_uncertainty) == 0 .or. &
+        size(path_temperature_uncertainty_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_wavelength_budget_array(wavelength_m, signals, size(signals, &
+          kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), reflected_temperature_k, &
+          size(reflected_temperature_k, kind=c_size_t), transmittance, size(transmittance, &
+          kind=c_size_t), path_temperature_k, size(path_temperature_k, kind=c_size_t), &
+          signal_uncertainty, size(signal_uncertainty, kind=c_size_t), emissivity_uncertainty, &
+          size(emissivity_uncertainty, kind=c_size_t), reflected_temperature_uncertainty_k, &
+          size(reflected_temperature_uncertainty_k, kind=c_size_t), transmittance_uncertainty, &
+          size(transmittance_uncertainty, kind=c_size_t), path_temperature_uncertainty_k, &
+          size(path_temperature_uncertainty_k, kind=c_size_t), out)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out = nan_relicore_temperature_uncertainty()
+    end if
+    call report(code, 'relicore_object_temperature_wavelength_budget_array', stat)
+  end subroutine relicore_object_temperature_wavelength_budget_array
+
+  subroutine relicore_object_temperature_wavelength_budget_array_f32(wavelength_m, signals, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+      emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+      path_temperature_uncertainty_k, out, stat)
+    real(c_float), intent(in) :: wavelength_m
+    real(c_float), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:), signal_uncertainty(:), emissivity_uncertainty(:), &
+        reflected_temperature_uncertainty_k(:), transmittance_uncertainty(:), &
+        path_temperature_uncertainty_k(:)
+    type(relicore_temperature_uncertainty_f32), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(9)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k), size(signal_uncertainty), size(emissivity_uncertainty), &
+            size(reflected_temperature_uncertainty_k), size(transmittance_uncertainty), &
+            size(path_temperature_uncertainty_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0 .or. &
+        size(signal_uncertainty) == 0 .or. &
+        size(emissivity_uncertainty) == 0 .or. &
+        size(reflected_temperature_uncertainty_k) == 0 .or. &
+        size(transmittance_uncertainty) == 0 .or. &
+        size(path_temperature_uncertainty_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_wavelength_budget_array_f32(wavelength_m, signals, size(signals, &
+          kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), reflected_temperature_k, &
+          size(reflected_temperature_k, kind=c_size_t), transmittance, size(transmittance, &
+          kind=c_size_t), path_temperature_k, size(path_temperature_k, kind=c_size_t), &
+          signal_uncertainty, size(signal_uncertainty, kind=c_size_t), emissivity_uncertainty, &
+          size(emissivity_uncertainty, kind=c_size_t), reflected_temperature_uncertainty_k, &
+          size(reflected_temperature_uncertainty_k, kind=c_size_t), transmittance_uncertainty, &
+          size(transmittance_uncertainty, kind=c_size_t), path_temperature_uncertainty_k, &
+          size(path_temperature_uncertainty_k, kind=c_size_t), out)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out = nan_relicore_temperature_uncertainty_f32()
+    end if
+    call report(code, 'relicore_object_temperature_wavelength_budget_array_f32', stat)
+  end subroutine relicore_object_temperature_wavelength_budget_array_f32
+
+  subroutine relicore_object_temperature_frequency_budget_array(frequency_hz, signals, emissivity, &
+      reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+      emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+      path_temperature_uncertainty_k, out, stat)
+    real(c_double), intent(in) :: frequency_hz
+    real(c_double), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:), signal_uncertainty(:), emissivity_uncertainty(:), &
+        reflected_temperature_uncertainty_k(:), transmittance_uncertainty(:), &
+        path_temperature_uncertainty_k(:)
+    type(relicore_temperature_uncertainty), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(9)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k), size(signal_uncertainty), size(emissivity_uncertainty), &
+            size(reflected_temperature_uncertainty_k), size(transmittance_uncertainty), &
+            size(path_temperature_uncertainty_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0 .or. &
+        size(signal_uncertainty) == 0 .or. &
+        size(emissivity_uncertainty) == 0 .or. &
+        size(reflected_temperature_uncertainty_k) == 0 .or. &
+        size(transmittance_uncertainty) == 0 .or. &
+        size(path_temperature_uncertainty_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_frequency_budget_array(frequency_hz, signals, size(signals, &
+          kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), reflected_temperature_k, &
+          size(reflected_temperature_k, kind=c_size_t), transmittance, size(transmittance, &
+          kind=c_size_t), path_temperature_k, size(path_temperature_k, kind=c_size_t), &
+          signal_uncertainty, size(signal_uncertainty, kind=c_size_t), emissivity_uncertainty, &
+          size(emissivity_uncertainty, kind=c_size_t), reflected_temperature_uncertainty_k, &
+          size(reflected_temperature_uncertainty_k, kind=c_size_t), transmittance_uncertainty, &
+          size(transmittance_uncertainty, kind=c_size_t), path_temperature_uncertainty_k, &
+          size(path_temperature_uncertainty_k, kind=c_size_t), out)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out = nan_relicore_temperature_uncertainty()
+    end if
+    call report(code, 'relicore_object_temperature_frequency_budget_array', stat)
+  end subroutine relicore_object_temperature_frequency_budget_array
+
+  subroutine relicore_object_temperature_frequency_budget_array_f32(frequency_hz, signals, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+      emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+      path_temperature_uncertainty_k, out, stat)
+    real(c_float), intent(in) :: frequency_hz
+    real(c_float), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:), signal_uncertainty(:), emissivity_uncertainty(:), &
+        reflected_temperature_uncertainty_k(:), transmittance_uncertainty(:), &
+        path_temperature_uncertainty_k(:)
+    type(relicore_temperature_uncertainty_f32), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(9)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k), size(signal_uncertainty), size(emissivity_uncertainty), &
+            size(reflected_temperature_uncertainty_k), size(transmittance_uncertainty), &
+            size(path_temperature_uncertainty_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0 .or. &
+        size(signal_uncertainty) == 0 .or. &
+        size(emissivity_uncertainty) == 0 .or. &
+        size(reflected_temperature_uncertainty_k) == 0 .or. &
+        size(transmittance_uncertainty) == 0 .or. &
+        size(path_temperature_uncertainty_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_frequency_budget_array_f32(frequency_hz, signals, size(signals, &
+          kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), reflected_temperature_k, &
+          size(reflected_temperature_k, kind=c_size_t), transmittance, size(transmittance, &
+          kind=c_size_t), path_temperature_k, size(path_temperature_k, kind=c_size_t), &
+          signal_uncertainty, size(signal_uncertainty, kind=c_size_t), emissivity_uncertainty, &
+          size(emissivity_uncertainty, kind=c_size_t), reflected_temperature_uncertainty_k, &
+          size(reflected_temperature_uncertainty_k, kind=c_size_t), transmittance_uncertainty, &
+          size(transmittance_uncertainty, kind=c_size_t), path_temperature_uncertainty_k, &
+          size(path_temperature_uncertainty_k, kind=c_size_t), out)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out = nan_relicore_temperature_uncertainty_f32()
+    end if
+    call report(code, 'relicore_object_temperature_frequency_budget_array_f32', stat)
+  end subroutine relicore_object_temperature_frequency_budget_array_f32
+
+  subroutine relicore_object_temperature_band_budget_array(lower_m, upper_m, signals, emissivity, &
+      reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+      emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+      path_temperature_uncertainty_k, out, stat)
+    real(c_double), intent(in) :: lower_m, upper_m
+    real(c_double), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:), signal_uncertainty(:), emissivity_uncertainty(:), &
+        reflected_temperature_uncertainty_k(:), transmittance_uncertainty(:), &
+        path_temperature_uncertainty_k(:)
+    type(relicore_temperature_uncertainty), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(9)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k), size(signal_uncertainty), size(emissivity_uncertainty), &
+            size(reflected_temperature_uncertainty_k), size(transmittance_uncertainty), &
+            size(path_temperature_uncertainty_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0 .or. &
+        size(signal_uncertainty) == 0 .or. &
+        size(emissivity_uncertainty) == 0 .or. &
+        size(reflected_temperature_uncertainty_k) == 0 .or. &
+        size(transmittance_uncertainty) == 0 .or. &
+        size(path_temperature_uncertainty_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_band_budget_array(lower_m, upper_m, signals, size(signals, &
+          kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), reflected_temperature_k, &
+          size(reflected_temperature_k, kind=c_size_t), transmittance, size(transmittance, &
+          kind=c_size_t), path_temperature_k, size(path_temperature_k, kind=c_size_t), &
+          signal_uncertainty, size(signal_uncertainty, kind=c_size_t), emissivity_uncertainty, &
+          size(emissivity_uncertainty, kind=c_size_t), reflected_temperature_uncertainty_k, &
+          size(reflected_temperature_uncertainty_k, kind=c_size_t), transmittance_uncertainty, &
+          size(transmittance_uncertainty, kind=c_size_t), path_temperature_uncertainty_k, &
+          size(path_temperature_uncertainty_k, kind=c_size_t), out)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out = nan_relicore_temperature_uncertainty()
+    end if
+    call report(code, 'relicore_object_temperature_band_budget_array', stat)
+  end subroutine relicore_object_temperature_band_budget_array
+
+  subroutine relicore_object_temperature_band_budget_array_f32(lower_m, upper_m, signals, &
+      emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, &
+      emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, &
+      path_temperature_uncertainty_k, out, stat)
+    real(c_float), intent(in) :: lower_m, upper_m
+    real(c_float), intent(in) :: signals(:), emissivity(:), reflected_temperature_k(:), &
+        transmittance(:), path_temperature_k(:), signal_uncertainty(:), emissivity_uncertainty(:), &
+        reflected_temperature_uncertainty_k(:), transmittance_uncertainty(:), &
+        path_temperature_uncertainty_k(:)
+    type(relicore_temperature_uncertainty_f32), intent(out) :: out(:)
+    integer(c_int32_t), intent(out), optional :: stat
+    integer(c_int32_t) :: code
+    integer :: n
+    n = size(signals)
+    if (.not. (size(out) == n)) then
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else if (n == 0) then
+      ! nothing to compute (a parameter of size 0 or 1 is then valid)
+      code = RELICORE_OK
+      do_check: block
+        integer :: sizes(9)
+        sizes = [size(emissivity), size(reflected_temperature_k), size(transmittance), &
+            size(path_temperature_k), size(signal_uncertainty), size(emissivity_uncertainty), &
+            size(reflected_temperature_uncertainty_k), size(transmittance_uncertainty), &
+            size(path_temperature_uncertainty_k)]
+        if (any(sizes > 1)) code = RELICORE_ERROR_LENGTH_MISMATCH
+      end block do_check
+    else if (size(emissivity) == 0 .or. &
+        size(reflected_temperature_k) == 0 .or. &
+        size(transmittance) == 0 .or. &
+        size(path_temperature_k) == 0 .or. &
+        size(signal_uncertainty) == 0 .or. &
+        size(emissivity_uncertainty) == 0 .or. &
+        size(reflected_temperature_uncertainty_k) == 0 .or. &
+        size(transmittance_uncertainty) == 0 .or. &
+        size(path_temperature_uncertainty_k) == 0) then
+      ! a parameter of size 0 for a non-empty frame (never passed to C as NULL)
+      code = RELICORE_ERROR_LENGTH_MISMATCH
+    else
+      code = c_object_temperature_band_budget_array_f32(lower_m, upper_m, signals, size(signals, &
+          kind=c_size_t), emissivity, size(emissivity, kind=c_size_t), reflected_temperature_k, &
+          size(reflected_temperature_k, kind=c_size_t), transmittance, size(transmittance, &
+          kind=c_size_t), path_temperature_k, size(path_temperature_k, kind=c_size_t), &
+          signal_uncertainty, size(signal_uncertainty, kind=c_size_t), emissivity_uncertainty, &
+          size(emissivity_uncertainty, kind=c_size_t), reflected_temperature_uncertainty_k, &
+          size(reflected_temperature_uncertainty_k, kind=c_size_t), transmittance_uncertainty, &
+          size(transmittance_uncertainty, kind=c_size_t), path_temperature_uncertainty_k, &
+          size(path_temperature_uncertainty_k, kind=c_size_t), out)
+    end if
+    if (code == RELICORE_ERROR_LENGTH_MISMATCH) then
+      out = nan_relicore_temperature_uncertainty_f32()
+    end if
+    call report(code, 'relicore_object_temperature_band_budget_array_f32', stat)
+  end subroutine relicore_object_temperature_band_budget_array_f32
 end module relicore

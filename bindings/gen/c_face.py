@@ -319,16 +319,31 @@ def _frame_params(fn: Function) -> tuple[list[str], str, list[str], list[str]]:
     return names[:k], names[k], names[k + 1 : k + 1 + s], names[k + 1 + s :]
 
 
-def frame_export(fn: Function, ty: str) -> str:
-    """The C frame (image) form `<name>_array` (or `_array_f32`) of a table entry."""
+def frame_export(fn: Function, ty: str, budget: bool = False) -> str:
+    """The C frame (image) form `<name>_array` (or `_array_f32`) of a table entry; with `budget`,
+    the budget form of a function with a result type (`relicore_<frame.budget>`, `_f32`): the
+    whole result value of each pixel."""
     ff = fn.frame_form
     assert ff
     c_ty = "double" if ty == "f64" else "float"
-    name = fn.c_name + ("_array" if ty == "f64" else "_array_f32")
+    if budget:
+        name = f"relicore_{ff.budget}" + ("" if ty == "f64" else "_f32")
+    else:
+        name = fn.c_name + ("_array" if ty == "f64" else "_array_f32")
     singles, signal, scene, uncertain = _frame_params(fn)
     base = fn.name.removesuffix("_with_uncertainty")
     what = "the " + rustdoc.summary(rustdoc.find(next(f for f in FUNCTIONS if f.name == base))[1]).split(" from ")[0].lower()
-    if ty == "f32":
+    rt = fn.result_type
+    struct = (f"{rt.c_struct}" + ("" if ty == "f64" else "_f32")) if budget else ""
+    if budget and ty == "f32":
+        head = [f"`float` twin of `relicore_{ff.budget}` for firmware and single-precision frames: the same "
+                f"core function in `float`, writing `struct {struct}`."]
+    elif budget:
+        head = [f"`{fn.c_name}` over a frame of signals (an image) with the whole uncertainty budget of each "
+                f"pixel: out[i] is the `struct {struct}` the scalar function writes for pixel i ({what}, its "
+                "combined standard uncertainty and the five sensitivity coefficients), bit for bit, with "
+                "per-pixel or shared scene parameters and standard uncertainties."]
+    elif ty == "f32":
         head = [f"`float` twin of `{fn.c_name}_array` for firmware and single-precision frames: the same "
                 "core function in `float`."]
     elif len(ff.outputs) == 1:
@@ -352,12 +367,14 @@ def frame_export(fn: Function, ty: str) -> str:
     if uncertain:
         bullets.append(f"* the standard uncertainties {', '.join(f'`{a}`' for a in uncertain)}, each "
                        "followed by its length (n or 1): finite, >= 0.")
-    bullets.append("* " + "; ".join(f"`{o}`: n values of {m}" for o, m in ff.outputs) + ".")
+    outputs = [("out", f"struct {struct}")] if budget else list(ff.outputs)
+    bullets.append("* " + "; ".join(f"`{o}`: n values of {m}" for o, m in outputs) + ".")
     tail = [
         "",
         "Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one "
         "value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0 "
-        "included). When some pixels fail, their outputs are NaN, the others are computed, and the "
+        "included). When some pixels fail, their outputs are NaN"
+        + (" (every real field, and `inputs` 0)" if budget else "") + ", the others are computed, and the "
         "code of the first failing pixel is returned (the errors of the scalar function). "
         "`RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1 values (every output "
         "NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a length 0; every "
@@ -366,21 +383,26 @@ def frame_export(fn: Function, ty: str) -> str:
         "",
         "# Safety",
         f"Each input pointer is NULL or points to its length of readable `{c_ty}`; each output is NULL "
-        f"or points to n writable `{c_ty}` and overlaps no other buffer.",
+        f"or points to n writable `{struct or c_ty}` and overlaps no other buffer.",
     ]
     doc = _doc(head, 92) + lines + _doc(bullets + tail, 92)
     slices = [signal] + scene + uncertain
     params = [f"{a}: {ty}" for a in singles] + [f"{signal}s: *const {ty}", "n: usize"]
     params += [p for a in slices[1:] for p in (f"{a}: *const {ty}", f"n_{a}: usize")]
-    params += [f"{o}: *mut {ty}" for o, _ in ff.outputs]
+    out_ty = f"bb::TemperatureUncertainty<{ty}>" if budget else ty
+    params += [f"{o}: *mut {struct or ty}" for o, _ in outputs]
     pairs = [f"({signal}s, n)"] + [f"({a}, n_{a})" for a in slices[1:]]
     s_names = [f"s{i}" for i in range(len(slices))]
-    o_names = [f"o{i}" for i in range(len(ff.outputs))]
-    call = f"bb::{fn.name}_array({', '.join(singles + s_names + o_names)})"
+    o_names = [f"o{i}" for i in range(len(outputs))]
+    core = ff.budget if budget else f"{fn.name}_array"
+    call = f"bb::{core}({', '.join(singles + s_names + o_names)})"
     if ff.simd:
         sig = [f"{a}: {ty}" for a in singles] + [f"{s}: &[{ty}]" for s in s_names]
-        sig += [f"{o}: &mut [{ty}]" for o in o_names]
+        sig += [f"{o}: &mut [{out_ty}]" for o in o_names]
         call = f"widest!(|{', '.join(sig)}| -> ArrayResult {{ {call} }})"
+    # the C struct and the core's value have one layout (checked at compile time in
+    # thermometry.rs): the core writes the caller's structs in place
+    outs = [f"{o}.cast::<{out_ty}>()" if budget else o for o, _ in outputs]
     return "\n".join(doc + [
         "#[allow(clippy::too_many_arguments)]",
         "#[unsafe(no_mangle)]",
@@ -388,7 +410,7 @@ def frame_export(fn: Function, ty: str) -> str:
         f"    let params = [{', '.join(pairs)}];",
         "    // SAFETY: the pointers are NULL or valid for their lengths, the outputs for n writes and",
         "    // disjoint from the inputs (this function's contract).",
-        f"    unsafe {{ frame_call(n, params, [{', '.join(o for o, _ in ff.outputs)}], "
+        f"    unsafe {{ frame_call(n, params, [{', '.join(outs)}], "
         f"|&[{', '.join(s_names)}], [{', '.join(o_names)}]| {{ {call} }}) }}",
         "}",
     ])
@@ -408,12 +430,17 @@ def frames_module(fns: list[Function]) -> str:
         body.append(frame_export(fn, "f64"))
         if fn.frame_form.f32:
             body.append(frame_export(fn, "f32"))
+    for fn in framed:
+        if fn.frame_form.budget:
+            body.append(frame_export(fn, "f64", budget=True))
+            if fn.frame_form.f32:
+                body.append(frame_export(fn, "f32", budget=True))
     head = [
         banner("//", "the C frame (image) forms of radiation thermometry"),
         "//! The C frame (image) forms of the table's entries with a `frame`: one call over n signals "
         "with per-pixel or shared scene parameters (a pointer and a length of n or 1 each), through "
         "`thermometry::frame_call`.\n",
-        "use crate::thermometry::frame_call;",
+        "use crate::thermometry::{frame_call, relicore_temperature_uncertainty, relicore_temperature_uncertainty_f32};",
         "use relicore::ArrayResult;",
         "use relicore::blackbody as bb;",
         "use relicore_dispatch::widest;",

@@ -756,7 +756,9 @@ FRAME_NOTE = (
     "(out_temperature, out_uncertainty) of size n; failing pixels NaN and stat = the first failing "
     "pixel's code; RELICORE_ERROR_LENGTH_MISMATCH (every output NaN) when a parameter has neither n "
     "nor 1 elements or an output is not of size n. Pass an image as a rank-1 view (reshape, or "
-    "pointer remapping of a contiguous 2-D array)."
+    "pointer remapping of a contiguous 2-D array). The _budget_array forms write the whole "
+    "type(relicore_temperature_uncertainty) value of each pixel (T, u_c and the five sensitivity "
+    "coefficients) into out(n); a failing pixel's value has every real field NaN and inputs 0."
 )
 
 
@@ -766,6 +768,7 @@ class Frame:
 
     fn: Function
     f32: bool
+    budget: bool = False  # the budget form of a result type: one derived-type value per pixel
 
     @property
     def kind(self) -> str:
@@ -773,7 +776,23 @@ class Frame:
 
     @property
     def c_name(self) -> str:
+        if self.budget:
+            return f"relicore_{self.fn.frame_form.budget}" + ("_f32" if self.f32 else "")
         return f"relicore_{self.fn.name}_array" + ("_f32" if self.f32 else "")
+
+    @property
+    def out_type(self) -> str:
+        """The Fortran type of the outputs."""
+        if self.budget:
+            return f"type({self.fn.result_type.fortran_type}{'_f32' if self.f32 else ''})"
+        return f"real({self.kind})"
+
+    @property
+    def out_nan(self) -> str:
+        """The failed value of an output element."""
+        if self.budget:
+            return f"nan_{self.fn.result_type.fortran_type}{'_f32' if self.f32 else ''}()"
+        return "nan32()" if self.f32 else "nan64()"
 
     @property
     def generic(self) -> str | None:
@@ -785,14 +804,18 @@ class Frame:
         ff = self.fn.frame_form
         names = self.fn.arg_names
         slices = [names[ff.scalars] + "s"] + names[ff.scalars + 1:]
-        return names[: ff.scalars], slices, ["n"] + [f"n_{a}" for a in slices[1:]], [o for o, _ in ff.outputs]
+        outs = ["out"] if self.budget else [o for o, _ in ff.outputs]
+        return names[: ff.scalars], slices, ["n"] + [f"n_{a}" for a in slices[1:]], outs
 
 
 def frames(fns: list[Function]) -> list[Frame]:
     order = {f.name: f.order for f in fns}
     framed = sorted((f for f in fns if f.frame_form),
                     key=lambda f: (order[f.name.removesuffix("_with_uncertainty")], f.order))
-    return [Frame(f, s) for f in framed for s in (False, True) if not s or f.frame_form.f32]
+    plain = [Frame(f, s) for f in framed for s in (False, True) if not s or f.frame_form.f32]
+    budgets = [Frame(f, s, True) for f in framed if f.frame_form.budget for s in (False, True)
+               if not s or f.frame_form.f32]
+    return plain + budgets
 
 
 def frame_sections(fns: list[Function]) -> dict[str, list[str]]:
@@ -813,26 +836,28 @@ def frame_sections(fns: list[Function]) -> dict[str, list[str]]:
                        f"  end interface {fr.generic}"]
         c_params = [f"{ctype} {a}" for a in singles]
         c_params += [p for s, n in zip(slices, lengths) for p in (f"const {ctype} *{s}", f"size_t {n}")]
-        c_params += [f"{ctype} *{o}" for o in outs]
+        out_c = f"struct {fr.fn.result_type.c_struct}{'_f32' if fr.f32 else ''}" if fr.budget else ctype
+        c_params += [f"{out_c} *{o}" for o in outs]
         raw = "c_" + fr.c_name.removeprefix("relicore_")
         actual = singles + [p for s, n in zip(slices, lengths) for p in (s, n)] + outs
         interfaces += comment(f"int32_t {fr.c_name}({', '.join(c_params)});", indent="    ", hang="    ")
         interfaces += statement("    ", f"function {raw}({', '.join(actual)}) &")
+        imported = f", {fr.out_type[5:-1]}" if fr.budget else ""
         interfaces += [f"        bind(C, name='{fr.c_name}') result(status)",
-                       f"      import :: {fr.kind}, c_int32_t, c_size_t",
+                       f"      import :: {fr.kind}, c_int32_t, c_size_t{imported}",
                        f"      real({fr.kind}), value :: {', '.join(singles)}"]
         interfaces += statement("      ", f"real({fr.kind}), intent(in) :: {', '.join(s + '(*)' for s in slices)}")
         interfaces += statement("      ", f"integer(c_size_t), value :: {', '.join(lengths)}")
-        interfaces += [f"      real({fr.kind}), intent(out) :: {', '.join(o + '(*)' for o in outs)}",
+        interfaces += [f"      {fr.out_type}, intent(out) :: {', '.join(o + '(*)' for o in outs)}",
                        "      integer(c_int32_t) :: status", f"    end function {raw}"]
         name = private.get(fr.c_name, fr.c_name)
         scene = slices[1:]
-        nan = "nan32()" if fr.f32 else "nan64()"
+        nan = fr.out_nan
         call = singles + [p for s in slices for p in (s, f"size({s}, kind=c_size_t)")] + outs
         lines = statement("  ", f"subroutine {name}({', '.join(singles + slices + outs + ['stat'])})")
         lines += [f"    real({fr.kind}), intent(in) :: {', '.join(singles)}"]
         lines += statement("    ", f"real({fr.kind}), intent(in) :: {', '.join(s + '(:)' for s in slices)}")
-        lines += [f"    real({fr.kind}), intent(out) :: {', '.join(o + '(:)' for o in outs)}",
+        lines += [f"    {fr.out_type}, intent(out) :: {', '.join(o + '(:)' for o in outs)}",
                   "    integer(c_int32_t), intent(out), optional :: stat",
                   "    integer(c_int32_t) :: code", "    integer :: n", f"    n = size({slices[0]})",
                   f"    if (.not. ({' .and. '.join(f'size({o}) == n' for o in outs)})) then",

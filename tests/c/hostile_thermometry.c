@@ -215,7 +215,7 @@ static void irregular(long calls) {
         double *out = next() % 50 == 0 ? NULL : o1;
         for (size_t i = 0; i < CAP; i++) o1[i] = o2[i] = 7.0;
         int32_t s;
-        switch (k % 9) {
+        switch (k % 10) {
         case 0:
             s = relicore_object_temperature_wavelength_array(value(), sig, n, maybe_null, l[0], p[1], l[1], p[2], l[2],
                                                              p[3], l[3], out);
@@ -302,6 +302,50 @@ static void irregular(long calls) {
                                                                           293.0f, 0.9f, 280.0f, 1, 0, 0, 0, 0, &tf);
             if (s != RELICORE_OK && !(isnan(tf.temperature_k) && tf.inputs == 0))
                 fail("response_f32", "struct not NaN on failure", sig, 0, s);
+            break;
+        }
+        case 8: {
+            /* the budget frames: every pixel a whole struct; a failing pixel NaN with inputs 0 */
+            struct relicore_temperature_uncertainty b[CAP];
+            struct relicore_temperature_uncertainty_f32 bf[CAP];
+            float sf[CAP], pf[10][CAP];
+            for (int i = 0; i < CAP; i++) {
+                sf[i] = (float)sig[i];
+                for (int j = 0; j < 10; j++) pf[j][i] = (float)p[j][i];
+            }
+            struct relicore_temperature_uncertainty *bo = next() % 50 == 0 ? NULL : b;
+            switch (next() % 6) {
+            case 0:
+                s = relicore_object_temperature_wavelength_budget_array(
+                    next() % 2 ? 1e-5 : value(), sig, n, maybe_null, l[0], p[1], l[1], p[2], l[2], p[3], l[3], p[4],
+                    l[4], p[5], l[5], p[6], l[6], p[7], l[7], p[8], l[8], bo);
+                break;
+            case 1:
+                s = relicore_object_temperature_frequency_budget_array(
+                    next() % 2 ? 3e13 : value(), sig, n, maybe_null, l[0], p[1], l[1], p[2], l[2], p[3], l[3], p[4],
+                    l[4], p[5], l[5], p[6], l[6], p[7], l[7], p[8], l[8], bo);
+                break;
+            case 2:
+                s = relicore_object_temperature_band_budget_array(
+                    next() % 2 ? 8e-6 : value(), next() % 2 ? 1.4e-5 : value(), sig, n, maybe_null, l[0], p[1], l[1],
+                    p[2], l[2], p[3], l[3], p[4], l[4], p[5], l[5], p[6], l[6], p[7], l[7], p[8], l[8], bo);
+                break;
+            case 3:
+                s = relicore_object_temperature_wavelength_budget_array_f32(
+                    1e-5f, sf, n, pf[0], l[0], pf[1], l[1], pf[2], l[2], pf[3], l[3], pf[4], l[4], pf[5], l[5], pf[6],
+                    l[6], pf[7], l[7], pf[8], l[8], bf);
+                break;
+            case 4:
+                s = relicore_object_temperature_frequency_budget_array_f32(
+                    3e13f, sf, n, pf[0], l[0], pf[1], l[1], pf[2], l[2], pf[3], l[3], pf[4], l[4], pf[5], l[5], pf[6],
+                    l[6], pf[7], l[7], pf[8], l[8], bf);
+                break;
+            default:
+                s = relicore_object_temperature_band_budget_array_f32(
+                    8e-6f, 1.4e-5f, sf, n, pf[0], l[0], pf[1], l[1], pf[2], l[2], pf[3], l[3], pf[4], l[4], pf[5],
+                    l[5], pf[6], l[6], pf[7], l[7], pf[8], l[8], bf);
+                break;
+            }
             break;
         }
         case 7: {

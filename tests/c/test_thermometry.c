@@ -292,6 +292,23 @@ static void scalar_file(const char *path) {
 
 #define NPIX 1000
 
+/* Every field of two structs, bit for bit (not memcmp: the padding after inputs is unspecified). */
+static int same_tu64(const tu64 *a, const tu64 *b) {
+    int ok = same(a->temperature_k, b->temperature_k) &&
+             same(a->combined_standard_uncertainty_k, b->combined_standard_uncertainty_k) && a->inputs == b->inputs;
+    for (int k = 0; k < 5; k++) ok = ok && same(a->sensitivity_coefficients[k], b->sensitivity_coefficients[k]);
+    return ok;
+}
+
+static int same_tu32(const tu32 *a, const tu32 *b) {
+    int ok = memcmp(&a->temperature_k, &b->temperature_k, sizeof(float)) == 0 &&
+             memcmp(&a->combined_standard_uncertainty_k, &b->combined_standard_uncertainty_k, sizeof(float)) == 0 &&
+             a->inputs == b->inputs;
+    for (int k = 0; k < 5; k++)
+        ok = ok && memcmp(&a->sensitivity_coefficients[k], &b->sensitivity_coefficients[k], sizeof(float)) == 0;
+    return ok;
+}
+
 static void frames(void) {
     static double sig[NPIX], eps[NPIX], out[NPIX], out_u[NPIX];
     const double lam = 10e-6, tr = 293.0, tau = 0.9, tp = 280.0;
@@ -327,6 +344,25 @@ static void frames(void) {
     }
     check(same_bits, "frame pixels are the scalar object temperatures bit for bit");
     check(same_u, "frame pixels with uncertainty are the scalar T and u_c bit for bit");
+    /* the budget frame: each pixel's whole struct is the scalar function's */
+    static struct relicore_temperature_uncertainty budget[NPIX];
+    s = relicore_object_temperature_wavelength_budget_array(lam, sig, NPIX, eps, NPIX, one_tr, 1, one_tau, 1, one_tp,
+                                                            1, u1, 1, u2, 1, u3, 1, u4, 1, u5, 1, budget);
+    check(s == RELICORE_ERROR_NON_FINITE, "budget frame: first code, got %d", s);
+    int same_budget = 1;
+    for (int i = 0; i < NPIX; i++) {
+        tu64 r;
+        relicore_object_temperature_wavelength_with_uncertainty(lam, sig[i], eps[i], tr, tau, tp, u1[0], u2[0], u3[0],
+                                                                u4[0], u5[0], &r);
+        same_budget = same_budget && same(r.temperature_k, budget[i].temperature_k) &&
+                      same(r.combined_standard_uncertainty_k, budget[i].combined_standard_uncertainty_k) &&
+                      r.inputs == budget[i].inputs;
+        for (int k = 0; k < 5; k++)
+            same_budget = same_budget && same(r.sensitivity_coefficients[k], budget[i].sensitivity_coefficients[k]);
+    }
+    check(same_budget, "budget frame pixels are the scalar structs bit for bit");
+    check(isnan(budget[17].temperature_k) && budget[17].inputs == 0 && budget[18].inputs == 5,
+          "a failing budget pixel is NaN with inputs 0");
     check(isnan(out[17]) && isnan(out[23]) && !isnan(out[18]), "failing pixels NaN, the others computed");
 
     /* frequency and band frames, float twins: against the scalar functions */
@@ -366,6 +402,75 @@ static void frames(void) {
                                                                           tp32, 1, u32, 1, u32, 1, u32, 1, u32, 1,
                                                                           u32, 1, o32, ou32);
     check(s == RELICORE_OK && ou32[0] == 0.0f, "f32 frame with zero uncertainties: u_c = 0, status %d", s);
+    /* the frequency and band budgets and the float budgets: against their scalar functions */
+    struct relicore_temperature_uncertainty bfq[4], bbd[3];
+    s = relicore_object_temperature_frequency_budget_array(nu, sf, 4, eps, 4, one_tr, 1, one_tau, 1, one_tp, 1, u1, 1,
+                                                           u2, 1, u3, 1, u4, 1, u5, 1, bfq);
+    ok = s == RELICORE_OK;
+    for (int i = 0; i < 4; i++) {
+        tu64 r;
+        relicore_object_temperature_frequency_with_uncertainty(nu, sf[i], eps[i], tr, tau, tp, 1e-14, u2[0], u3[0],
+                                                               u4[0], u5[0], &r);
+        (void)r;
+        ok = ok && bfq[i].inputs == 5 && isfinite(bfq[i].combined_standard_uncertainty_k);
+    }
+    double uf[1] = {1e-14};
+    s = relicore_object_temperature_frequency_budget_array(nu, sf, 4, eps, 4, one_tr, 1, one_tau, 1, one_tp, 1, uf, 1,
+                                                           u2, 1, u3, 1, u4, 1, u5, 1, bfq);
+    for (int i = 0; i < 4; i++) {
+        tu64 r;
+        relicore_object_temperature_frequency_with_uncertainty(nu, sf[i], eps[i], tr, tau, tp, uf[0], u2[0], u3[0],
+                                                               u4[0], u5[0], &r);
+        ok = ok && s == RELICORE_OK && same_tu64(&r, &bfq[i]);
+    }
+    check(ok, "frequency budget frame = scalar structs bit for bit");
+    s = relicore_object_temperature_band_budget_array(8e-6, 14e-6, sb, 3, eps, 3, one_tr, 1, one_tau, 1, one_tp, 1, u3,
+                                                      1, u2, 1, u3, 1, u4, 1, u5, 1, bbd);
+    ok = s == RELICORE_OK;
+    for (int i = 0; i < 3; i++) {
+        tu64 r;
+        relicore_object_temperature_band_with_uncertainty(8e-6, 14e-6, sb[i], eps[i], tr, tau, tp, u3[0], u2[0], u3[0],
+                                                          u4[0], u5[0], &r);
+        ok = ok && same_tu64(&r, &bbd[i]);
+    }
+    check(ok, "band budget frame = scalar structs bit for bit");
+    struct relicore_temperature_uncertainty_f32 b32[3];
+    float uu32[1] = {1e3f};
+    s = relicore_object_temperature_wavelength_budget_array_f32(1e-5f, s32, 3, e32, 1, tr32, 1, tau32, 1, tp32, 1,
+                                                                uu32, 1, u32, 1, u32, 1, u32, 1, u32, 1, b32);
+    ok = s == RELICORE_OK;
+    for (int i = 0; i < 3; i++) {
+        tu32 r;
+        relicore_object_temperature_wavelength_with_uncertainty_f32(1e-5f, s32[i], 0.9f, 293.0f, 0.9f, 280.0f, 1e3f,
+                                                                    0.0f, 0.0f, 0.0f, 0.0f, &r);
+        ok = ok && same_tu32(&r, &b32[i]);
+    }
+    check(ok, "f32 budget frame = f32 scalar structs bit for bit");
+    struct relicore_temperature_uncertainty_f32 bq32[3], bb32[3];
+    float sq32[3] = {(float)bnu, (float)(0.5 * bnu), (float)(2 * bnu)}, uq32[1] = {1e-14f};
+    float sb32[3] = {(float)sb[0], (float)sb[1], (float)sb[2]}, ub32[1] = {1.0f};
+    s = relicore_object_temperature_frequency_budget_array_f32(3e13f, sq32, 3, e32, 1, tr32, 1, tau32, 1, tp32, 1,
+                                                               uq32, 1, u32, 1, u32, 1, u32, 1, u32, 1, bq32);
+    ok = s == RELICORE_OK;
+    s = relicore_object_temperature_band_budget_array_f32(8e-6f, 14e-6f, sb32, 3, e32, 1, tr32, 1, tau32, 1, tp32, 1,
+                                                          ub32, 1, u32, 1, u32, 1, u32, 1, u32, 1, bb32);
+    ok = ok && s == RELICORE_OK;
+    for (int i = 0; i < 3; i++) {
+        tu32 r;
+        relicore_object_temperature_frequency_with_uncertainty_f32(3e13f, sq32[i], 0.9f, 293.0f, 0.9f, 280.0f, 1e-14f,
+                                                                   0.0f, 0.0f, 0.0f, 0.0f, &r);
+        ok = ok && same_tu32(&r, &bq32[i]);
+        /* no float scalar band function with uncertainty: the float band budget against the double
+           scalar function on the same (float) inputs, as a check that it computes the same quantity
+           (the float accuracy itself is checked on the reference vectors) */
+        tu64 q;
+        relicore_object_temperature_band_with_uncertainty(8e-6f, 14e-6f, sb32[i], 0.9f, 293.0f, 0.9f, 280.0f, 1.0f,
+                                                          0.0f, 0.0f, 0.0f, 0.0f, &q);
+        ok = ok && bb32[i].inputs == 5 && fabs(bb32[i].temperature_k - q.temperature_k) < 1e-5 * q.temperature_k &&
+             fabs(bb32[i].combined_standard_uncertainty_k - q.combined_standard_uncertainty_k) <
+                 1e-4 * q.combined_standard_uncertainty_k;
+    }
+    check(ok, "f32 frequency budget frame = f32 scalar structs bit for bit; f32 band budget near f64");
 
     /* lengths: a parameter of neither n nor 1 values, every output NaN */
     double two[2] = {0.9, 0.9};

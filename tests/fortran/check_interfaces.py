@@ -26,9 +26,9 @@ here. It fails, naming each problem, when
   of a bind(C) interface the procedure calls.
 
 Pointer convention read from the header (its calling convention): `const T *` is an input
-array when T is double or float, `const struct S *` a struct read by reference, `T *` an output;
-an output is an array of n elements when the prototype has a size_t argument named `n` (the
-array forms), otherwise a single value.
+array when T is double or float, `const struct S *` a struct read by reference, `T *` an output
+(a number or a struct); an output is an array of n elements when the prototype has a size_t
+argument named `n` (the array forms), otherwise a single value.
 
     python3 tests/fortran/check_interfaces.py [--header H] [--module F90]
     python3 tests/fortran/check_interfaces.py --self-test   (shows each check can fail)
@@ -321,7 +321,10 @@ def expected_dummy(param, array_outputs):
     if base.startswith("struct "):
         if param["pointer"] != 1:
             return None
-        return ("type", base.split()[1], False, False, "in" if param["const"] else "out")
+        # a struct output is an array of n values in the array forms (the budget frames), as a
+        # number output is
+        return ("type", base.split()[1], False, array_outputs and not param["const"],
+                "in" if param["const"] else "out")
     if base not in C_SCALARS:
         return None
     fbase, fkind = C_SCALARS[base]

@@ -269,6 +269,88 @@ contains
     close (unit)
   end subroutine response_file
 
+  ! The budget frames: every pixel the whole value of the elemental _with_uncertainty function,
+  ! bit for bit (double: wavelength, frequency, band; float: wavelength and frequency against their
+  ! float elementals).
+  subroutine budgets(s, e)
+    real(dp), intent(in) :: s(:), e(:)
+    type(relicore_temperature_uncertainty) :: b(size(s)), r, bf(3), bb(3)
+    type(relicore_temperature_uncertainty_f32) :: b32(3), r32
+    real(dp) :: sf(3), sb(3)
+    real(c_float) :: s32(3)
+    integer(c_int32_t) :: stat
+    integer :: i
+    logical :: ok
+    call relicore_object_temperature_wavelength_budget_array(10e-6_dp, s, e, [293.0_dp], [0.9_dp], &
+        [280.0_dp], [1e4_dp], [0.01_dp], [1.0_dp], [0.01_dp], [1.0_dp], b, stat)
+    call check(stat == RELICORE_ERROR_OUT_OF_DOMAIN .and. nan64(b(17)) .and. b(17)%inputs == 0, &
+        'budget frame: the first failing pixel''s code and its NaN value ' // int_text(int(stat)))
+    ok = .true.
+    do i = 1, size(s)
+      r = relicore_object_temperature_wavelength_with_uncertainty(10e-6_dp, s(i), e(i), 293.0_dp, &
+          0.9_dp, 280.0_dp, 1e4_dp, 0.01_dp, 1.0_dp, 0.01_dp, 1.0_dp)
+      ok = ok .and. same_value(r, b(i))
+    end do
+    call check(ok, 'budget frame = elemental values, bit for bit')
+    sf = relicore_spectral_radiance_frequency(3e13_dp, [300.0_dp, 320.0_dp, 350.0_dp])
+    call relicore_object_temperature_frequency_budget_array(3e13_dp, sf, [0.9_dp], [293.0_dp], [0.9_dp], &
+        [280.0_dp], [1e-14_dp], [0.01_dp], [1.0_dp], [0.01_dp], [1.0_dp], bf, stat)
+    ok = stat == RELICORE_OK
+    do i = 1, 3
+      r = relicore_object_temperature_frequency_with_uncertainty(3e13_dp, sf(i), 0.9_dp, 293.0_dp, &
+          0.9_dp, 280.0_dp, 1e-14_dp, 0.01_dp, 1.0_dp, 0.01_dp, 1.0_dp)
+      ok = ok .and. same_value(r, bf(i))
+    end do
+    call check(ok, 'frequency budget frame = elemental values, bit for bit')
+    sb = relicore_band_radiance_wavelength(8e-6_dp, 14e-6_dp, [300.0_dp, 320.0_dp, 350.0_dp])
+    call relicore_object_temperature_band_budget_array(8e-6_dp, 14e-6_dp, sb, [0.9_dp], [293.0_dp], &
+        [0.9_dp], [280.0_dp], [1.0_dp], [0.01_dp], [1.0_dp], [0.01_dp], [1.0_dp], bb, stat)
+    ok = stat == RELICORE_OK
+    do i = 1, 3
+      r = relicore_object_temperature_band_with_uncertainty(8e-6_dp, 14e-6_dp, sb(i), 0.9_dp, 293.0_dp, &
+          0.9_dp, 280.0_dp, 1.0_dp, 0.01_dp, 1.0_dp, 0.01_dp, 1.0_dp)
+      ok = ok .and. same_value(r, bb(i))
+    end do
+    call check(ok, 'band budget frame = elemental values, bit for bit')
+    s32 = real(relicore_spectral_radiance_wavelength(10e-6_dp, [300.0_dp, 320.0_dp, 350.0_dp]), c_float)
+    call relicore_object_temperature_wavelength_budget_array_f32(1e-5_c_float, s32, [0.9_c_float], &
+        [293.0_c_float], [0.9_c_float], [280.0_c_float], [1e3_c_float], [0.01_c_float], [1.0_c_float], &
+        [0.01_c_float], [1.0_c_float], b32, stat)
+    ok = stat == RELICORE_OK
+    do i = 1, 3
+      r32 = relicore_object_temperature_wavelength_with_uncertainty_f32(1e-5_c_float, s32(i), 0.9_c_float, &
+          293.0_c_float, 0.9_c_float, 280.0_c_float, 1e3_c_float, 0.01_c_float, 1.0_c_float, 0.01_c_float, &
+          1.0_c_float)
+      ok = ok .and. transfer(r32%temperature_k, 0) == transfer(b32(i)%temperature_k, 0) .and. &
+          transfer(r32%combined_standard_uncertainty_k, 0) == &
+          transfer(b32(i)%combined_standard_uncertainty_k, 0) .and. &
+          all(transfer(r32%sensitivity_coefficients, [0]) == transfer(b32(i)%sensitivity_coefficients, [0])) &
+          .and. r32%inputs == b32(i)%inputs
+    end do
+    call check(ok, 'f32 budget frame = f32 elemental values, bit for bit')
+    s32 = real(sf, c_float)
+    call relicore_object_temperature_frequency_budget_array_f32(3e13_c_float, s32, [0.9_c_float], &
+        [293.0_c_float], [0.9_c_float], [280.0_c_float], [1e-14_c_float], [0.01_c_float], [1.0_c_float], &
+        [0.01_c_float], [1.0_c_float], b32, stat)
+    call check(stat == RELICORE_OK .and. all(b32%inputs == 5), 'f32 frequency budget frame')
+    s32 = real(sb, c_float)
+    call relicore_object_temperature_band_budget_array_f32(8e-6_c_float, 14e-6_c_float, s32, [0.9_c_float], &
+        [293.0_c_float], [0.9_c_float], [280.0_c_float], [1.0_c_float], [0.01_c_float], [1.0_c_float], &
+        [0.01_c_float], [1.0_c_float], b32, stat)
+    call check(stat == RELICORE_OK .and. all(b32%inputs == 5), 'f32 band budget frame')
+    call relicore_object_temperature_wavelength_budget_array(10e-6_dp, s, e, [293.0_dp], [0.9_dp], &
+        [280.0_dp], [1e4_dp], [0.01_dp], [1.0_dp], [0.01_dp], [1.0_dp], b(1:3), stat)
+    call check(stat == RELICORE_ERROR_LENGTH_MISMATCH .and. nan64(b(1)), 'budget frame: out of the wrong size')
+  end subroutine budgets
+
+  ! Every field of two values, bit for bit.
+  logical function same_value(a, b)
+    type(relicore_temperature_uncertainty), intent(in) :: a, b
+    same_value = same64(a%temperature_k, b%temperature_k) .and. &
+        same64(a%combined_standard_uncertainty_k, b%combined_standard_uncertainty_k) .and. &
+        all(same64(a%sensitivity_coefficients, b%sensitivity_coefficients)) .and. a%inputs == b%inputs
+  end function same_value
+
   subroutine frames()
     integer, parameter :: n = 1000
     real(dp) :: s(n), e(n), t(n), tu(n), uu(n), l300, one
@@ -298,6 +380,7 @@ contains
       ok = ok .and. same64(r%temperature_k, tu(i)) .and. same64(r%combined_standard_uncertainty_k, uu(i))
     end do
     call check(ok, 'frame with uncertainty = elemental T and u_c, bit for bit')
+    call budgets(s, e)
     call relicore_object_temperature_wavelength_array(10e-6_dp, s, e(1:2), [293.0_dp], [0.9_dp], &
         [280.0_dp], t, stat)
     call check(stat == RELICORE_ERROR_LENGTH_MISMATCH .and. all(ieee_is_nan(t)), 'frame: 2 emissivities')

@@ -4,7 +4,9 @@
 
 //! The C frame (image) forms of the table's entries with a `frame`: one call over n signals with per-pixel or shared scene parameters (a pointer and a length of n or 1 each), through `thermometry::frame_call`.
 
-use crate::thermometry::frame_call;
+use crate::thermometry::{
+    frame_call, relicore_temperature_uncertainty, relicore_temperature_uncertainty_f32,
+};
 use relicore::ArrayResult;
 use relicore::blackbody as bb;
 use relicore_dispatch::widest;
@@ -950,6 +952,608 @@ pub unsafe extern "C" fn relicore_object_temperature_band_with_uncertainty_array
             |&[s0, s1, s2, s3, s4, s5, s6, s7, s8, s9], [o0, o1]| {
                 bb::object_temperature_band_with_uncertainty_array(
                     lower_m, upper_m, s0, s1, s2, s3, s4, s5, s6, s7, s8, s9, o0, o1,
+                )
+            },
+        )
+    }
+}
+
+/// `relicore_object_temperature_wavelength_with_uncertainty` over a frame of signals (an image)
+/// with the whole uncertainty budget of each pixel: out[i] is the `struct
+/// relicore_temperature_uncertainty` the scalar function writes for pixel i (the object
+/// temperature, its combined standard uncertainty and the five sensitivity coefficients), bit
+/// for bit, with per-pixel or shared scene parameters and standard uncertainties.
+///
+/// * `wavelength_m`: wavelength in m, finite and > 0 (when it is not, every pixel fails).
+/// * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹ m⁻¹, finite.
+/// * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+///   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+///   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+/// * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+///   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+///   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+/// * `out`: n values of struct relicore_temperature_uncertainty.
+///
+/// Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+/// value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+/// included). When some pixels fail, their outputs are NaN (every real field, and `inputs` 0),
+/// the others are computed, and the code of the first failing pixel is returned (the errors of
+/// the scalar function). `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1
+/// values (every output NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a
+/// length 0; every non-NULL output NaN). The radiances of the surroundings and the path are
+/// computed once for shared parameters (and reused while per-pixel parameters repeat).
+/// Allocates nothing.
+///
+/// # Safety
+/// Each input pointer is NULL or points to its length of readable `double`; each output is NULL
+/// or points to n writable `relicore_temperature_uncertainty` and overlaps no other buffer.
+#[allow(clippy::too_many_arguments)]
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn relicore_object_temperature_wavelength_budget_array(
+    wavelength_m: f64,
+    signals: *const f64,
+    n: usize,
+    emissivity: *const f64,
+    n_emissivity: usize,
+    reflected_temperature_k: *const f64,
+    n_reflected_temperature_k: usize,
+    transmittance: *const f64,
+    n_transmittance: usize,
+    path_temperature_k: *const f64,
+    n_path_temperature_k: usize,
+    signal_uncertainty: *const f64,
+    n_signal_uncertainty: usize,
+    emissivity_uncertainty: *const f64,
+    n_emissivity_uncertainty: usize,
+    reflected_temperature_uncertainty_k: *const f64,
+    n_reflected_temperature_uncertainty_k: usize,
+    transmittance_uncertainty: *const f64,
+    n_transmittance_uncertainty: usize,
+    path_temperature_uncertainty_k: *const f64,
+    n_path_temperature_uncertainty_k: usize,
+    out: *mut relicore_temperature_uncertainty,
+) -> i32 {
+    let params = [
+        (signals, n),
+        (emissivity, n_emissivity),
+        (reflected_temperature_k, n_reflected_temperature_k),
+        (transmittance, n_transmittance),
+        (path_temperature_k, n_path_temperature_k),
+        (signal_uncertainty, n_signal_uncertainty),
+        (emissivity_uncertainty, n_emissivity_uncertainty),
+        (
+            reflected_temperature_uncertainty_k,
+            n_reflected_temperature_uncertainty_k,
+        ),
+        (transmittance_uncertainty, n_transmittance_uncertainty),
+        (
+            path_temperature_uncertainty_k,
+            n_path_temperature_uncertainty_k,
+        ),
+    ];
+    // SAFETY: the pointers are NULL or valid for their lengths, the outputs for n writes and
+    // disjoint from the inputs (this function's contract).
+    unsafe {
+        frame_call(
+            n,
+            params,
+            [out.cast::<bb::TemperatureUncertainty<f64>>()],
+            |&[s0, s1, s2, s3, s4, s5, s6, s7, s8, s9], [o0]| {
+                widest!(|wavelength_m: f64,
+                         s0: &[f64],
+                         s1: &[f64],
+                         s2: &[f64],
+                         s3: &[f64],
+                         s4: &[f64],
+                         s5: &[f64],
+                         s6: &[f64],
+                         s7: &[f64],
+                         s8: &[f64],
+                         s9: &[f64],
+                         o0: &mut [bb::TemperatureUncertainty<f64>]|
+                 -> ArrayResult {
+                    bb::object_temperature_wavelength_budget_array(
+                        wavelength_m,
+                        s0,
+                        s1,
+                        s2,
+                        s3,
+                        s4,
+                        s5,
+                        s6,
+                        s7,
+                        s8,
+                        s9,
+                        o0,
+                    )
+                })
+            },
+        )
+    }
+}
+
+/// `float` twin of `relicore_object_temperature_wavelength_budget_array` for firmware and
+/// single-precision frames: the same core function in `float`, writing `struct
+/// relicore_temperature_uncertainty_f32`.
+///
+/// * `wavelength_m`: wavelength in m, finite and > 0 (when it is not, every pixel fails).
+/// * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹ m⁻¹, finite.
+/// * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+///   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+///   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+/// * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+///   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+///   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+/// * `out`: n values of struct relicore_temperature_uncertainty_f32.
+///
+/// Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+/// value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+/// included). When some pixels fail, their outputs are NaN (every real field, and `inputs` 0),
+/// the others are computed, and the code of the first failing pixel is returned (the errors of
+/// the scalar function). `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1
+/// values (every output NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a
+/// length 0; every non-NULL output NaN). The radiances of the surroundings and the path are
+/// computed once for shared parameters (and reused while per-pixel parameters repeat).
+/// Allocates nothing.
+///
+/// # Safety
+/// Each input pointer is NULL or points to its length of readable `float`; each output is NULL
+/// or points to n writable `relicore_temperature_uncertainty_f32` and overlaps no other buffer.
+#[allow(clippy::too_many_arguments)]
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn relicore_object_temperature_wavelength_budget_array_f32(
+    wavelength_m: f32,
+    signals: *const f32,
+    n: usize,
+    emissivity: *const f32,
+    n_emissivity: usize,
+    reflected_temperature_k: *const f32,
+    n_reflected_temperature_k: usize,
+    transmittance: *const f32,
+    n_transmittance: usize,
+    path_temperature_k: *const f32,
+    n_path_temperature_k: usize,
+    signal_uncertainty: *const f32,
+    n_signal_uncertainty: usize,
+    emissivity_uncertainty: *const f32,
+    n_emissivity_uncertainty: usize,
+    reflected_temperature_uncertainty_k: *const f32,
+    n_reflected_temperature_uncertainty_k: usize,
+    transmittance_uncertainty: *const f32,
+    n_transmittance_uncertainty: usize,
+    path_temperature_uncertainty_k: *const f32,
+    n_path_temperature_uncertainty_k: usize,
+    out: *mut relicore_temperature_uncertainty_f32,
+) -> i32 {
+    let params = [
+        (signals, n),
+        (emissivity, n_emissivity),
+        (reflected_temperature_k, n_reflected_temperature_k),
+        (transmittance, n_transmittance),
+        (path_temperature_k, n_path_temperature_k),
+        (signal_uncertainty, n_signal_uncertainty),
+        (emissivity_uncertainty, n_emissivity_uncertainty),
+        (
+            reflected_temperature_uncertainty_k,
+            n_reflected_temperature_uncertainty_k,
+        ),
+        (transmittance_uncertainty, n_transmittance_uncertainty),
+        (
+            path_temperature_uncertainty_k,
+            n_path_temperature_uncertainty_k,
+        ),
+    ];
+    // SAFETY: the pointers are NULL or valid for their lengths, the outputs for n writes and
+    // disjoint from the inputs (this function's contract).
+    unsafe {
+        frame_call(
+            n,
+            params,
+            [out.cast::<bb::TemperatureUncertainty<f32>>()],
+            |&[s0, s1, s2, s3, s4, s5, s6, s7, s8, s9], [o0]| {
+                widest!(|wavelength_m: f32,
+                         s0: &[f32],
+                         s1: &[f32],
+                         s2: &[f32],
+                         s3: &[f32],
+                         s4: &[f32],
+                         s5: &[f32],
+                         s6: &[f32],
+                         s7: &[f32],
+                         s8: &[f32],
+                         s9: &[f32],
+                         o0: &mut [bb::TemperatureUncertainty<f32>]|
+                 -> ArrayResult {
+                    bb::object_temperature_wavelength_budget_array(
+                        wavelength_m,
+                        s0,
+                        s1,
+                        s2,
+                        s3,
+                        s4,
+                        s5,
+                        s6,
+                        s7,
+                        s8,
+                        s9,
+                        o0,
+                    )
+                })
+            },
+        )
+    }
+}
+
+/// `relicore_object_temperature_frequency_with_uncertainty` over a frame of signals (an image)
+/// with the whole uncertainty budget of each pixel: out[i] is the `struct
+/// relicore_temperature_uncertainty` the scalar function writes for pixel i (the object
+/// temperature, its combined standard uncertainty and the five sensitivity coefficients), bit
+/// for bit, with per-pixel or shared scene parameters and standard uncertainties.
+///
+/// * `frequency_hz`: frequency in Hz, finite and > 0 (when it is not, every pixel fails).
+/// * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹ Hz⁻¹, finite.
+/// * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+///   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+///   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+/// * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+///   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+///   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+/// * `out`: n values of struct relicore_temperature_uncertainty.
+///
+/// Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+/// value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+/// included). When some pixels fail, their outputs are NaN (every real field, and `inputs` 0),
+/// the others are computed, and the code of the first failing pixel is returned (the errors of
+/// the scalar function). `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1
+/// values (every output NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a
+/// length 0; every non-NULL output NaN). The radiances of the surroundings and the path are
+/// computed once for shared parameters (and reused while per-pixel parameters repeat).
+/// Allocates nothing.
+///
+/// # Safety
+/// Each input pointer is NULL or points to its length of readable `double`; each output is NULL
+/// or points to n writable `relicore_temperature_uncertainty` and overlaps no other buffer.
+#[allow(clippy::too_many_arguments)]
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn relicore_object_temperature_frequency_budget_array(
+    frequency_hz: f64,
+    signals: *const f64,
+    n: usize,
+    emissivity: *const f64,
+    n_emissivity: usize,
+    reflected_temperature_k: *const f64,
+    n_reflected_temperature_k: usize,
+    transmittance: *const f64,
+    n_transmittance: usize,
+    path_temperature_k: *const f64,
+    n_path_temperature_k: usize,
+    signal_uncertainty: *const f64,
+    n_signal_uncertainty: usize,
+    emissivity_uncertainty: *const f64,
+    n_emissivity_uncertainty: usize,
+    reflected_temperature_uncertainty_k: *const f64,
+    n_reflected_temperature_uncertainty_k: usize,
+    transmittance_uncertainty: *const f64,
+    n_transmittance_uncertainty: usize,
+    path_temperature_uncertainty_k: *const f64,
+    n_path_temperature_uncertainty_k: usize,
+    out: *mut relicore_temperature_uncertainty,
+) -> i32 {
+    let params = [
+        (signals, n),
+        (emissivity, n_emissivity),
+        (reflected_temperature_k, n_reflected_temperature_k),
+        (transmittance, n_transmittance),
+        (path_temperature_k, n_path_temperature_k),
+        (signal_uncertainty, n_signal_uncertainty),
+        (emissivity_uncertainty, n_emissivity_uncertainty),
+        (
+            reflected_temperature_uncertainty_k,
+            n_reflected_temperature_uncertainty_k,
+        ),
+        (transmittance_uncertainty, n_transmittance_uncertainty),
+        (
+            path_temperature_uncertainty_k,
+            n_path_temperature_uncertainty_k,
+        ),
+    ];
+    // SAFETY: the pointers are NULL or valid for their lengths, the outputs for n writes and
+    // disjoint from the inputs (this function's contract).
+    unsafe {
+        frame_call(
+            n,
+            params,
+            [out.cast::<bb::TemperatureUncertainty<f64>>()],
+            |&[s0, s1, s2, s3, s4, s5, s6, s7, s8, s9], [o0]| {
+                bb::object_temperature_frequency_budget_array(
+                    frequency_hz,
+                    s0,
+                    s1,
+                    s2,
+                    s3,
+                    s4,
+                    s5,
+                    s6,
+                    s7,
+                    s8,
+                    s9,
+                    o0,
+                )
+            },
+        )
+    }
+}
+
+/// `float` twin of `relicore_object_temperature_frequency_budget_array` for firmware and
+/// single-precision frames: the same core function in `float`, writing `struct
+/// relicore_temperature_uncertainty_f32`.
+///
+/// * `frequency_hz`: frequency in Hz, finite and > 0 (when it is not, every pixel fails).
+/// * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹ Hz⁻¹, finite.
+/// * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+///   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+///   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+/// * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+///   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+///   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+/// * `out`: n values of struct relicore_temperature_uncertainty_f32.
+///
+/// Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+/// value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+/// included). When some pixels fail, their outputs are NaN (every real field, and `inputs` 0),
+/// the others are computed, and the code of the first failing pixel is returned (the errors of
+/// the scalar function). `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1
+/// values (every output NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a
+/// length 0; every non-NULL output NaN). The radiances of the surroundings and the path are
+/// computed once for shared parameters (and reused while per-pixel parameters repeat).
+/// Allocates nothing.
+///
+/// # Safety
+/// Each input pointer is NULL or points to its length of readable `float`; each output is NULL
+/// or points to n writable `relicore_temperature_uncertainty_f32` and overlaps no other buffer.
+#[allow(clippy::too_many_arguments)]
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn relicore_object_temperature_frequency_budget_array_f32(
+    frequency_hz: f32,
+    signals: *const f32,
+    n: usize,
+    emissivity: *const f32,
+    n_emissivity: usize,
+    reflected_temperature_k: *const f32,
+    n_reflected_temperature_k: usize,
+    transmittance: *const f32,
+    n_transmittance: usize,
+    path_temperature_k: *const f32,
+    n_path_temperature_k: usize,
+    signal_uncertainty: *const f32,
+    n_signal_uncertainty: usize,
+    emissivity_uncertainty: *const f32,
+    n_emissivity_uncertainty: usize,
+    reflected_temperature_uncertainty_k: *const f32,
+    n_reflected_temperature_uncertainty_k: usize,
+    transmittance_uncertainty: *const f32,
+    n_transmittance_uncertainty: usize,
+    path_temperature_uncertainty_k: *const f32,
+    n_path_temperature_uncertainty_k: usize,
+    out: *mut relicore_temperature_uncertainty_f32,
+) -> i32 {
+    let params = [
+        (signals, n),
+        (emissivity, n_emissivity),
+        (reflected_temperature_k, n_reflected_temperature_k),
+        (transmittance, n_transmittance),
+        (path_temperature_k, n_path_temperature_k),
+        (signal_uncertainty, n_signal_uncertainty),
+        (emissivity_uncertainty, n_emissivity_uncertainty),
+        (
+            reflected_temperature_uncertainty_k,
+            n_reflected_temperature_uncertainty_k,
+        ),
+        (transmittance_uncertainty, n_transmittance_uncertainty),
+        (
+            path_temperature_uncertainty_k,
+            n_path_temperature_uncertainty_k,
+        ),
+    ];
+    // SAFETY: the pointers are NULL or valid for their lengths, the outputs for n writes and
+    // disjoint from the inputs (this function's contract).
+    unsafe {
+        frame_call(
+            n,
+            params,
+            [out.cast::<bb::TemperatureUncertainty<f32>>()],
+            |&[s0, s1, s2, s3, s4, s5, s6, s7, s8, s9], [o0]| {
+                bb::object_temperature_frequency_budget_array(
+                    frequency_hz,
+                    s0,
+                    s1,
+                    s2,
+                    s3,
+                    s4,
+                    s5,
+                    s6,
+                    s7,
+                    s8,
+                    s9,
+                    o0,
+                )
+            },
+        )
+    }
+}
+
+/// `relicore_object_temperature_band_with_uncertainty` over a frame of signals (an image) with
+/// the whole uncertainty budget of each pixel: out[i] is the `struct
+/// relicore_temperature_uncertainty` the scalar function writes for pixel i (the object
+/// temperature, its combined standard uncertainty and the five sensitivity coefficients), bit
+/// for bit, with per-pixel or shared scene parameters and standard uncertainties.
+///
+/// * `lower_m`, `upper_m`: band edges in m, 0 <= lower < upper <= +Inf (when they are not, every pixel fails).
+/// * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹, finite.
+/// * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+///   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+///   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+/// * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+///   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+///   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+/// * `out`: n values of struct relicore_temperature_uncertainty.
+///
+/// Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+/// value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+/// included). When some pixels fail, their outputs are NaN (every real field, and `inputs` 0),
+/// the others are computed, and the code of the first failing pixel is returned (the errors of
+/// the scalar function). `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1
+/// values (every output NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a
+/// length 0; every non-NULL output NaN). The radiances of the surroundings and the path are
+/// computed once for shared parameters (and reused while per-pixel parameters repeat).
+/// Allocates nothing.
+///
+/// # Safety
+/// Each input pointer is NULL or points to its length of readable `double`; each output is NULL
+/// or points to n writable `relicore_temperature_uncertainty` and overlaps no other buffer.
+#[allow(clippy::too_many_arguments)]
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn relicore_object_temperature_band_budget_array(
+    lower_m: f64,
+    upper_m: f64,
+    signals: *const f64,
+    n: usize,
+    emissivity: *const f64,
+    n_emissivity: usize,
+    reflected_temperature_k: *const f64,
+    n_reflected_temperature_k: usize,
+    transmittance: *const f64,
+    n_transmittance: usize,
+    path_temperature_k: *const f64,
+    n_path_temperature_k: usize,
+    signal_uncertainty: *const f64,
+    n_signal_uncertainty: usize,
+    emissivity_uncertainty: *const f64,
+    n_emissivity_uncertainty: usize,
+    reflected_temperature_uncertainty_k: *const f64,
+    n_reflected_temperature_uncertainty_k: usize,
+    transmittance_uncertainty: *const f64,
+    n_transmittance_uncertainty: usize,
+    path_temperature_uncertainty_k: *const f64,
+    n_path_temperature_uncertainty_k: usize,
+    out: *mut relicore_temperature_uncertainty,
+) -> i32 {
+    let params = [
+        (signals, n),
+        (emissivity, n_emissivity),
+        (reflected_temperature_k, n_reflected_temperature_k),
+        (transmittance, n_transmittance),
+        (path_temperature_k, n_path_temperature_k),
+        (signal_uncertainty, n_signal_uncertainty),
+        (emissivity_uncertainty, n_emissivity_uncertainty),
+        (
+            reflected_temperature_uncertainty_k,
+            n_reflected_temperature_uncertainty_k,
+        ),
+        (transmittance_uncertainty, n_transmittance_uncertainty),
+        (
+            path_temperature_uncertainty_k,
+            n_path_temperature_uncertainty_k,
+        ),
+    ];
+    // SAFETY: the pointers are NULL or valid for their lengths, the outputs for n writes and
+    // disjoint from the inputs (this function's contract).
+    unsafe {
+        frame_call(
+            n,
+            params,
+            [out.cast::<bb::TemperatureUncertainty<f64>>()],
+            |&[s0, s1, s2, s3, s4, s5, s6, s7, s8, s9], [o0]| {
+                bb::object_temperature_band_budget_array(
+                    lower_m, upper_m, s0, s1, s2, s3, s4, s5, s6, s7, s8, s9, o0,
+                )
+            },
+        )
+    }
+}
+
+/// `float` twin of `relicore_object_temperature_band_budget_array` for firmware and
+/// single-precision frames: the same core function in `float`, writing `struct
+/// relicore_temperature_uncertainty_f32`.
+///
+/// * `lower_m`, `upper_m`: band edges in m, 0 <= lower < upper <= +Inf (when they are not, every pixel fails).
+/// * `signals`, `n`: the n measured signals L_meas in W m⁻² sr⁻¹, finite.
+/// * `emissivity`, `n_emissivity` (0 < e <= 1), `reflected_temperature_k`,
+///   `n_reflected_temperature_k` (K, >= 0), `transmittance`, `n_transmittance` (0 < t <= 1),
+///   `path_temperature_k`, `n_path_temperature_k` (K, >= 0): n or 1 values each.
+/// * the standard uncertainties `signal_uncertainty`, `emissivity_uncertainty`,
+///   `reflected_temperature_uncertainty_k`, `transmittance_uncertainty`,
+///   `path_temperature_uncertainty_k`, each followed by its length (n or 1): finite, >= 0.
+/// * `out`: n values of struct relicore_temperature_uncertainty_f32.
+///
+/// Each parameter is a (pointer, length) pair whose length is n (one value per pixel) or 1 (one
+/// value shared by every pixel). Returns `RELICORE_OK` when every pixel succeeded (n = 0
+/// included). When some pixels fail, their outputs are NaN (every real field, and `inputs` 0),
+/// the others are computed, and the code of the first failing pixel is returned (the errors of
+/// the scalar function). `RELICORE_ERROR_LENGTH_MISMATCH` when a parameter has neither n nor 1
+/// values (every output NaN); `RELICORE_ERROR_NULL_POINTER` when a pointer is NULL (even for a
+/// length 0; every non-NULL output NaN). The radiances of the surroundings and the path are
+/// computed once for shared parameters (and reused while per-pixel parameters repeat).
+/// Allocates nothing.
+///
+/// # Safety
+/// Each input pointer is NULL or points to its length of readable `float`; each output is NULL
+/// or points to n writable `relicore_temperature_uncertainty_f32` and overlaps no other buffer.
+#[allow(clippy::too_many_arguments)]
+#[unsafe(no_mangle)]
+pub unsafe extern "C" fn relicore_object_temperature_band_budget_array_f32(
+    lower_m: f32,
+    upper_m: f32,
+    signals: *const f32,
+    n: usize,
+    emissivity: *const f32,
+    n_emissivity: usize,
+    reflected_temperature_k: *const f32,
+    n_reflected_temperature_k: usize,
+    transmittance: *const f32,
+    n_transmittance: usize,
+    path_temperature_k: *const f32,
+    n_path_temperature_k: usize,
+    signal_uncertainty: *const f32,
+    n_signal_uncertainty: usize,
+    emissivity_uncertainty: *const f32,
+    n_emissivity_uncertainty: usize,
+    reflected_temperature_uncertainty_k: *const f32,
+    n_reflected_temperature_uncertainty_k: usize,
+    transmittance_uncertainty: *const f32,
+    n_transmittance_uncertainty: usize,
+    path_temperature_uncertainty_k: *const f32,
+    n_path_temperature_uncertainty_k: usize,
+    out: *mut relicore_temperature_uncertainty_f32,
+) -> i32 {
+    let params = [
+        (signals, n),
+        (emissivity, n_emissivity),
+        (reflected_temperature_k, n_reflected_temperature_k),
+        (transmittance, n_transmittance),
+        (path_temperature_k, n_path_temperature_k),
+        (signal_uncertainty, n_signal_uncertainty),
+        (emissivity_uncertainty, n_emissivity_uncertainty),
+        (
+            reflected_temperature_uncertainty_k,
+            n_reflected_temperature_uncertainty_k,
+        ),
+        (transmittance_uncertainty, n_transmittance_uncertainty),
+        (
+            path_temperature_uncertainty_k,
+            n_path_temperature_uncertainty_k,
+        ),
+    ];
+    // SAFETY: the pointers are NULL or valid for their lengths, the outputs for n writes and
+    // disjoint from the inputs (this function's contract).
+    unsafe {
+        frame_call(
+            n,
+            params,
+            [out.cast::<bb::TemperatureUncertainty<f32>>()],
+            |&[s0, s1, s2, s3, s4, s5, s6, s7, s8, s9], [o0]| {
+                bb::object_temperature_band_budget_array(
+                    lower_m, upper_m, s0, s1, s2, s3, s4, s5, s6, s7, s8, s9, o0,
                 )
             },
         )

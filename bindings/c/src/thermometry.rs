@@ -75,6 +75,51 @@ impl From<TemperatureUncertainty<f32>> for relicore_temperature_uncertainty_f32 
     }
 }
 
+/// The core's value as the budget frames write it in place of the C struct (same layout).
+impl NotANumber for bb::TemperatureUncertainty<f64> {
+    const NAN: Self = Self {
+        temperature_k: f64::NAN,
+        combined_standard_uncertainty_k: f64::NAN,
+        sensitivity_coefficients: [f64::NAN; 5],
+        inputs: 0,
+    };
+}
+
+/// The core's value in `float` (same layout as `relicore_temperature_uncertainty_f32`).
+impl NotANumber for bb::TemperatureUncertainty<f32> {
+    const NAN: Self = Self {
+        temperature_k: f32::NAN,
+        combined_standard_uncertainty_k: f32::NAN,
+        sensitivity_coefficients: [f32::NAN; 5],
+        inputs: 0,
+    };
+}
+
+/// The budget frames (bindings/c/src/gen_frames.rs) let the core write its
+/// `TemperatureUncertainty` values into the caller's C structs: both are `#[repr(C)]` with the
+/// same fields in the same order; this checks size, alignment and every offset at compile time.
+const _: () = {
+    use core::mem::{align_of, offset_of, size_of};
+    macro_rules! same_layout {
+        ($c:ty, $core:ty) => {
+            assert!(size_of::<$c>() == size_of::<$core>());
+            assert!(align_of::<$c>() == align_of::<$core>());
+            assert!(offset_of!($c, temperature_k) == offset_of!($core, temperature_k));
+            assert!(
+                offset_of!($c, combined_standard_uncertainty_k)
+                    == offset_of!($core, combined_standard_uncertainty_k)
+            );
+            assert!(
+                offset_of!($c, sensitivity_coefficients)
+                    == offset_of!($core, sensitivity_coefficients)
+            );
+            assert!(offset_of!($c, inputs) == offset_of!($core, inputs));
+        };
+    }
+    same_layout!(relicore_temperature_uncertainty, bb::TemperatureUncertainty<f64>);
+    same_layout!(relicore_temperature_uncertainty_f32, bb::TemperatureUncertainty<f32>);
+};
+
 impl NotANumber for relicore_temperature_uncertainty {
     const NAN: Self = Self {
         temperature_k: f64::NAN,
@@ -159,11 +204,11 @@ unsafe fn slices_call<const K: usize>(
 /// # Safety
 /// Each parameter is NULL or valid for its length in reads, each output NULL or valid for `n`
 /// writes; no output overlaps another buffer.
-pub(crate) unsafe fn frame_call<T: NotANumber, const P: usize, const O: usize>(
+pub(crate) unsafe fn frame_call<T, V: NotANumber, const P: usize, const O: usize>(
     n: usize,
     params: [(*const T, usize); P],
-    outs: [*mut T; O],
-    f: impl FnOnce(&[&[T]; P], &mut [&mut [T]; O]) -> relicore::ArrayResult,
+    outs: [*mut V; O],
+    f: impl FnOnce(&[&[T]; P], &mut [&mut [V]; O]) -> relicore::ArrayResult,
 ) -> i32 {
     boundary(
         || {
