@@ -116,8 +116,14 @@ const _: () = {
             assert!(offset_of!($c, inputs) == offset_of!($core, inputs));
         };
     }
-    same_layout!(relicore_temperature_uncertainty, bb::TemperatureUncertainty<f64>);
-    same_layout!(relicore_temperature_uncertainty_f32, bb::TemperatureUncertainty<f32>);
+    same_layout!(
+        relicore_temperature_uncertainty,
+        bb::TemperatureUncertainty<f64>
+    );
+    same_layout!(
+        relicore_temperature_uncertainty_f32,
+        bb::TemperatureUncertainty<f32>
+    );
 };
 
 impl NotANumber for relicore_temperature_uncertainty {
