@@ -685,19 +685,21 @@ impl<T: Real, const N: usize> Real for Dual<T, N> {
         if !T::partials_within(err.value, total.value, rel, abs) {
             return false;
         }
+        let size = total.value.error_magnitude();
         err.partials
             .iter()
             .zip(total.partials.iter())
             .all(|(&e, &t)| {
-                let tol = abs.max(rel * t.error_magnitude());
+                let tol = abs.max(rel * t.error_magnitude().max(size));
                 e <= tol && T::partials_within(e, t, rel, abs)
             })
     }
     fn partials_error_score(err: Self, total: Self, rel_tol: Self, abs_tol: Self) -> Self {
         let (rel, abs) = (rel_tol.value, abs_tol.value);
+        let size = total.value.error_magnitude();
         let mut score = T::zero();
         for (&e, &t) in err.partials.iter().zip(total.partials.iter()) {
-            let tol = abs.max(rel * t.error_magnitude());
+            let tol = abs.max(rel * t.error_magnitude().max(size));
             let s = if e == T::zero() {
                 T::zero()
             } else if tol > T::zero() {

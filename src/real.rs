@@ -135,12 +135,15 @@ pub trait Real:
     /// for a dual number (its value part is |value|).
     fn error_magnitude(self) -> Self;
     /// Whether the partial derivatives of an integral `total` meet the quadrature tolerance
-    /// max(abs_tol, rel_tol·|part|) part by part, given its summed error estimate `err` (from
-    /// [`Real::error_magnitude`]). Always true for a float (it has no partials).
+    /// part by part, given its summed error estimate `err` (from [`Real::error_magnitude`]):
+    /// err_i ≤ max(abs_tol, rel_tol·max(|total_i|, |total|)), relative to the partial or, where
+    /// the partial is smaller than the value (per unit of its parameter), to the value: a
+    /// partial whose integrand cancels (a − a⁴ near a = 1) carries a rounding noise of the
+    /// value's size that no subdivision removes. Always true for a float (it has no partials).
     fn partials_within(err: Self, total: Self, rel_tol: Self, abs_tol: Self) -> bool;
     /// The share of the tolerance an interval's error estimate `err` of the partials takes, as
-    /// the value part of the result (the largest over the partials of err_i/tol_i with
-    /// tol_i = max(abs_tol, rel_tol·|total_i|)); for a float, `err` itself.
+    /// the value part of the result (the largest over the partials of err_i/tol_i with the
+    /// tol_i of [`Real::partials_within`]); for a float, `err` itself.
     fn partials_error_score(err: Self, total: Self, rel_tol: Self, abs_tol: Self) -> Self;
     /// `self` with its value part replaced by that of `value` (partials kept); a float returns
     /// `value`.

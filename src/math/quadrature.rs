@@ -71,8 +71,8 @@ pub fn gauss_kronrod_15<T: Real, F: FnMut(T) -> T>(f: &mut F, a: T, b: T) -> (T,
 /// finite.
 ///
 /// For a dual number ([`crate::dual::Dual`]) the error estimate is kept part by part and every
-/// partial must meet the tolerance too, relative to itself: |error of ∂I/∂p| ≤ max(abs_tol,
-/// rel_tol·|∂I/∂p|). The value part is the integral of the value's own subdivision, the one a
+/// partial must meet the tolerance too: |error of ∂I/∂p| ≤ max(abs_tol, rel_tol·max(|∂I/∂p|,
+/// |I|)) (see [`Real::partials_within`] for why the value bounds it from below). The value part is the integral of the value's own subdivision, the one a
 /// plain float takes (bit-identical to it); the intervals are bisected further, worst share of
 /// the partials' tolerance first, until the partials meet theirs (`NoConvergence` if they
 /// cannot within [`CAPACITY`]).

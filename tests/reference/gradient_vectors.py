@@ -96,21 +96,37 @@ def fmt(x):
     return "%.17e" % float(x)
 
 
-def partials(f, args):
-    """mpmath.diff of f in each argument at the exact binary values of the double args."""
+def partials(f, args, skip=()):
+    """mpmath.diff of f in each argument at the exact binary values of the double args (None
+    for the indices in `skip`)."""
     xs = [mpf(a) for a in args]
     out = []
     for i in range(len(xs)):
-        order = tuple(1 if j == i else 0 for j in range(len(xs)))
-        out.append(mpmath.diff(f, tuple(xs), order))
+        if i in skip:
+            out.append(None)
+            continue
+
+        def g(t, i=i):
+            ys = list(xs)
+            ys[i] = t
+            return f(*ys)
+
+        d = mpmath.diff(g, xs[i])
+        if isinstance(d, mpmath.mpc):
+            # a parameter at the edge of its domain (Omega_m = 0): one-sided differences
+            d = mpmath.diff(g, xs[i], direction=1)
+        out.append(d)
     return out
 
 
-def lines_for(name, f, args, checks=(), partial_key="partial"):
-    """The value line and one line per partial; `checks` are (index, second-route value)."""
+def lines_for(name, f, args, checks=(), partial_key="partial", skip=()):
+    """The value line and one line per partial; `checks` are (index, second-route value);
+    `skip` are indices whose partial is exactly 0 by the model (written as such, source spec).
+    A partial below 1e-25 of the value (one that vanishes) is checked absolutely, to the
+    partial tolerance times |value| (issue 15: absolute where the derivative crosses zero)."""
     xs = [mpf(a) for a in args]
     v = f(*xs)
-    d = partials(f, args)
+    d = partials(f, args, skip)
     for i, want in checks:
         rel = abs((d[i] - want) / want)
         if rel > mpf("1e-25"):
@@ -121,7 +137,12 @@ def lines_for(name, f, args, checks=(), partial_key="partial"):
     out = [f"{name}@value {n} {argtxt} {fmt(v)} {k} {tv:.0e} mpmath"]
     k, tp, _ = TOL[partial_key]
     for i, di in enumerate(d):
-        out.append(f"{name}@d{i} {n} {argtxt} {fmt(di)} {k} {tp:.0e} mpmath-diff")
+        if di is None:
+            out.append(f"{name}@d{i} {n} {argtxt} {fmt(0.0)} rel 0e+00 spec")
+        elif abs(di) < mpf("1e-25") * abs(v):
+            out.append(f"{name}@d{i} {n} {argtxt} {fmt(di)} abs {float(tp * abs(v)):.3e} mpmath-diff")
+        else:
+            out.append(f"{name}@d{i} {n} {argtxt} {fmt(di)} {k} {tp:.0e} mpmath-diff")
     return out
 
 
