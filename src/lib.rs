@@ -45,11 +45,13 @@ mod check;
 pub mod constants;
 pub mod cosmology;
 pub mod decoupling;
+pub mod dual;
 mod error;
 pub mod growth;
 pub mod math;
 mod real;
 
+pub use dual::Dual;
 pub use error::{ArrayResult, ElementError, Error, Result};
 pub use real::Real;
 

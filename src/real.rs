@@ -13,12 +13,23 @@ mod sealed {
     pub trait Sealed {}
     impl Sealed for f32 {}
     impl Sealed for f64 {}
+    impl<T: super::Real, const N: usize> Sealed for crate::dual::Dual<T, N> {}
 }
 
-/// A real floating-point type the core computes in: `f32` or `f64`, nothing else.
+/// A real floating-point type the core computes in: `f32`, `f64`, or the dual number
+/// [`Dual`](crate::dual::Dual) over one of them (a value with exact partial derivatives).
 ///
 /// The trait is sealed; its methods are thin calls into `libm` (transcendentals) or exact
 /// arithmetic helpers (error-free transformations used for double-length intermediates).
+///
+/// The `kernel_*` methods are the whole numerical kernels of [`crate::math`] that work on the
+/// bits of a float (the table-driven exponential, the logarithm, sine and cosine, the
+/// error-free sums and products). For `f32` and `f64` they are the kernels themselves; a dual
+/// number evaluates the kernel on its value and applies the chain rule with the kernel's own
+/// result, so its partials are the exact derivatives of what the kernel computes. The
+/// quadrature and root-finder methods at the end let the shared numerics control the error of
+/// the partials and differentiate a root at its solution (implicit function theorem); for
+/// `f32` and `f64` they do nothing.
 pub trait Real:
     FloatCore + sealed::Sealed + core::fmt::Debug + core::fmt::Display + Default + Send + Sync + 'static
 {
@@ -30,6 +41,8 @@ pub trait Real:
     const LN_MAX: Self;
     /// −ln of the smallest positive subnormal: beyond this `exp(-x)` is zero.
     const LN_MIN_SUBNORMAL_NEG: Self;
+    /// Zero, as a constant (`FloatCore::zero` is not usable in constants).
+    const ZERO: Self;
 
     /// Converts an `f64` literal, rounding to nearest for `f32`.
     fn c(x: f64) -> Self;
@@ -65,12 +78,6 @@ pub trait Real:
     /// with it `malloc`, into a static C link. This one is `libm`'s.)
     fn floor_libm(self) -> Self;
 
-    /// 2^(j/256) for j = 0, …, 255 as double-length pairs `[hi, lo]` (about 106 bits in `f64`,
-    /// 48 in `f32`): the table of the exponential kernel [`crate::math::exp`].
-    const EXP2_TABLE: &'static [[Self; 2]; 256];
-    /// ln2/256 = L1 + L2 + L3, the split constant of the argument reduction of
-    /// [`crate::math::exp`]: k·L1 (and in `f32` also k·L2) is exact for every k the kernel uses.
-    const LN2_OVER_256: [Self; 3];
     /// Smallest exponent m of a normal number 2^m (−1022 or −126).
     const MIN_NORMAL_EXPONENT: i32;
     /// Largest exponent m of a finite number 2^m (1023 or 127).
@@ -98,14 +105,79 @@ pub trait Real:
     /// operations on the bits (no branch, no library call). Another x gives unspecified values
     /// (never a panic).
     fn split_sqrt2(self) -> (Self, Self, i32);
+
+    /// [`crate::math::exp::exp_dd`]: e^(xh + xl) for a double-length argument.
+    fn kernel_exp_dd(xh: Self, xl: Self) -> Self;
+    /// The common case of [`crate::math::exp::exp`]: (e^x, inside).
+    fn kernel_exp_fast(x: Self) -> (Self, bool);
+    /// e^(xh + xl) − 1 for −40 < xh < ln(MAX) − 1 (not checked).
+    fn kernel_exp_m1_in_range(xh: Self, xl: Self) -> Self;
+    /// e^(xh + xl) − 1 for 0 ≤ xh < ln(MAX) − 1 (not checked; the same bits, shorter).
+    fn kernel_exp_m1_nonnegative_in_range(xh: Self, xl: Self) -> Self;
+    /// The common case of [`crate::math::log::ln`]: (ln x, inside).
+    fn kernel_ln_fast(x: Self) -> (Self, bool);
+    /// The common case of [`crate::math::log::ln_1p`]: (ln(1 + x), inside).
+    fn kernel_ln_1p_fast(x: Self) -> (Self, bool);
+    /// The common case of [`crate::math::trig::sin_cos`]: (sin x, cos x, inside).
+    fn kernel_sin_cos_fast(x: Self) -> (Self, Self, bool);
+    /// [`crate::math::dd::two_sum`]: (s, e) with s + e = a + b exactly.
+    fn kernel_two_sum(a: Self, b: Self) -> (Self, Self);
+    /// [`crate::math::dd::fast_two_sum`]: as `kernel_two_sum` for |a| ≥ |b|.
+    fn kernel_fast_two_sum(a: Self, b: Self) -> (Self, Self);
+    /// [`crate::math::dd::two_prod`]: (p, e) with p + e = a·b exactly.
+    fn kernel_two_prod(a: Self, b: Self) -> (Self, Self);
+    /// [`crate::math::dd::two_prod_masked`]: (p, e) with p + e = a·b (to 2^-103 in `f64`).
+    fn kernel_two_prod_masked(a: Self, b: Self) -> (Self, Self);
+
+    /// Whether the type carries partial derivatives (true for a dual number only).
+    const HAS_PARTIALS: bool;
+    /// The size of a quadrature error estimate: |x| for a float, every part's absolute value
+    /// for a dual number (its value part is |value|).
+    fn error_magnitude(self) -> Self;
+    /// Whether the partial derivatives of an integral `total` meet the quadrature tolerance
+    /// part by part, given its summed error estimate `err` (from [`Real::error_magnitude`]):
+    /// err_i ≤ max(abs_tol, rel_tol·max(|total_i|, |total|)), relative to the partial or, where
+    /// the partial is smaller than the value (per unit of its parameter), to the value: a
+    /// partial whose integrand cancels (a − a⁴ near a = 1) carries a rounding noise of the
+    /// value's size that no subdivision removes. Always true for a float (it has no partials).
+    fn partials_within(err: Self, total: Self, rel_tol: Self, abs_tol: Self) -> bool;
+    /// The share of the tolerance an interval's error estimate `err` of the partials takes, as
+    /// the value part of the result (the largest over the partials of err_i/tol_i with the
+    /// tol_i of [`Real::partials_within`]); for a float, `err` itself.
+    fn partials_error_score(err: Self, total: Self, rel_tol: Self, abs_tol: Self) -> Self;
+    /// `self` with its value part replaced by that of `value` (partials kept); a float returns
+    /// `value`.
+    fn with_value_of(self, value: Self) -> Self;
+    /// The value alone, partials set to 0 (a float returns itself).
+    fn detach(self) -> Self;
+    /// The root x of f(x; p) = 0 with its partials by the implicit function theorem, from the
+    /// converged value `x` and one evaluation at it, f = f(x) and dfdx = ∂f/∂x (value parts):
+    /// ∂x/∂p = −(∂f/∂p)/(∂f/∂x). A float returns `x`.
+    fn implicit_root(x: Self, f: Self, dfdx: Self) -> Self;
+}
+
+/// The primitive floats `f32` and `f64`: the constants of the bit-level kernels, which only
+/// ever run on a primitive (a dual number runs them on its value).
+pub(crate) trait Primitive: Real {
+    /// 2^(j/256) for j = 0, …, 255 as double-length pairs `[hi, lo]` (about 106 bits in `f64`,
+    /// 48 in `f32`): the table of the exponential kernel [`crate::math::exp`].
+    const EXP2_TABLE: &'static [[Self; 2]; 256];
+    /// ln2/256 = L1 + L2 + L3, the split constant of the argument reduction of
+    /// [`crate::math::exp`]: k·L1 (and in `f32` also k·L2) is exact for every k the kernel uses.
+    const LN2_OVER_256: [Self; 3];
 }
 
 macro_rules! impl_real {
     ($t:ty, $digits:expr, $split:expr, $lnmax:expr, $lnmin:expr,
      $exp:path, $expm1:path, $log:path, $log1p:path, $sqrt:path, $cbrt:path, $sinh:path, $tanh:path, $floor:path, $cosh:path, $sin:path, $cos:path,
      $table:expr, $ln2n:expr, $emin:expr, $emax:expr, $shift:expr, $bits:ty, $sqrt_half_bits:expr) => {
+        impl Primitive for $t {
+            const EXP2_TABLE: &'static [[Self; 2]; 256] = &$table;
+            const LN2_OVER_256: [Self; 3] = $ln2n;
+        }
         impl Real for $t {
             const MANTISSA_DIGITS: u32 = $digits;
+            const ZERO: Self = 0.0;
             const SPLITTER: Self = $split;
             const LN_MAX: Self = $lnmax;
             const LN_MIN_SUBNORMAL_NEG: Self = $lnmin;
@@ -171,8 +243,6 @@ macro_rules! impl_real {
             fn cos(self) -> Self {
                 $cos(self)
             }
-            const EXP2_TABLE: &'static [[Self; 2]; 256] = &$table;
-            const LN2_OVER_256: [Self; 3] = $ln2n;
             const MIN_NORMAL_EXPONENT: i32 = $emin;
             const MAX_EXPONENT: i32 = $emax;
             #[inline(always)]
@@ -212,6 +282,80 @@ macro_rules! impl_real {
                 let mask: $bits = (1 << ($digits - 1)) - 1;
                 let f = <$t>::from_bits((t & mask).wrapping_add($sqrt_half_bits));
                 (f, Self::small_integer(e) - Self::c($emax as f64), e - $emax)
+            }
+            #[inline(always)]
+            fn kernel_exp_dd(xh: Self, xl: Self) -> Self {
+                crate::math::exp::exp_dd_primitive(xh, xl)
+            }
+            #[inline(always)]
+            fn kernel_exp_fast(x: Self) -> (Self, bool) {
+                crate::math::exp::exp_fast_primitive(x)
+            }
+            #[inline(always)]
+            fn kernel_exp_m1_in_range(xh: Self, xl: Self) -> Self {
+                crate::math::exp::exp_m1_core::<Self, false>(xh, xl)
+            }
+            #[inline(always)]
+            fn kernel_exp_m1_nonnegative_in_range(xh: Self, xl: Self) -> Self {
+                crate::math::exp::exp_m1_core::<Self, true>(xh, xl)
+            }
+            #[inline(always)]
+            fn kernel_ln_fast(x: Self) -> (Self, bool) {
+                crate::math::log::ln_fast_primitive(x)
+            }
+            #[inline(always)]
+            fn kernel_ln_1p_fast(x: Self) -> (Self, bool) {
+                crate::math::log::ln_1p_fast_primitive(x)
+            }
+            #[inline(always)]
+            fn kernel_sin_cos_fast(x: Self) -> (Self, Self, bool) {
+                crate::math::trig::sin_cos_fast_primitive(x)
+            }
+            #[inline(always)]
+            fn kernel_two_sum(a: Self, b: Self) -> (Self, Self) {
+                crate::math::dd::two_sum_primitive(a, b)
+            }
+            #[inline(always)]
+            fn kernel_fast_two_sum(a: Self, b: Self) -> (Self, Self) {
+                crate::math::dd::fast_two_sum_primitive(a, b)
+            }
+            #[inline(always)]
+            fn kernel_two_prod(a: Self, b: Self) -> (Self, Self) {
+                crate::math::dd::two_prod_primitive(a, b)
+            }
+            #[inline(always)]
+            fn kernel_two_prod_masked(a: Self, b: Self) -> (Self, Self) {
+                crate::math::dd::two_prod_masked_primitive(a, b)
+            }
+            const HAS_PARTIALS: bool = false;
+            #[inline(always)]
+            fn error_magnitude(self) -> Self {
+                FloatCore::abs(self)
+            }
+            #[inline(always)]
+            fn partials_within(_err: Self, _total: Self, _rel_tol: Self, _abs_tol: Self) -> bool {
+                true
+            }
+            #[inline(always)]
+            fn partials_error_score(
+                err: Self,
+                _total: Self,
+                _rel_tol: Self,
+                _abs_tol: Self,
+            ) -> Self {
+                err
+            }
+            #[inline(always)]
+            fn with_value_of(self, value: Self) -> Self {
+                value
+            }
+            #[inline(always)]
+            fn detach(self) -> Self {
+                self
+            }
+            #[inline(always)]
+            fn implicit_root(x: Self, _f: Self, _dfdx: Self) -> Self {
+                x
             }
         }
     };

@@ -37,6 +37,7 @@
 mod band;
 mod calibration;
 mod exitance;
+mod gradient;
 mod inverse;
 pub(crate) mod kernel;
 mod measurement;
@@ -48,6 +49,7 @@ mod uncertainty;
 pub use band::*;
 pub use calibration::*;
 pub use exitance::*;
+pub use gradient::*;
 pub use inverse::*;
 pub use measurement::*;
 pub use microwave::*;

@@ -105,7 +105,8 @@ impl<T: Real> Universe<T> {
         let distance = non_negative(distance_mpc, 0)?;
         let d = distance / self.hubble_distance_mpc;
         if d == T::zero() {
-            return Ok(T::zero());
+            // a dual number keeps the slope at 0: z = d to first order (E(0) = 1)
+            return Ok(if T::HAS_PARTIALS { d } else { T::zero() });
         }
         if let Ok(horizon) = self.conformal_time_mpc(T::zero()) {
             if distance >= horizon {
@@ -141,7 +142,8 @@ impl<T: Real> Universe<T> {
     pub fn redshift_at_luminosity_distance_mpc(&self, distance_mpc: T) -> Result<T> {
         let d = non_negative(distance_mpc, 0)? / self.hubble_distance_mpc;
         if d == T::zero() {
-            return Ok(T::zero());
+            // a dual number keeps the slope at 0: z = d to first order (E(0) = 1)
+            return Ok(if T::HAS_PARTIALS { d } else { T::zero() });
         }
         let f = |u: T| {
             let z = u.exp_m1();
@@ -178,7 +180,8 @@ impl<T: Real> Universe<T> {
         let lookback = non_negative(lookback_gyr, 0)?;
         let t = lookback / self.hubble_time_gyr;
         if t == T::zero() {
-            return Ok(T::zero());
+            // a dual number keeps the slope at 0: z = t to first order (E(0) = 1)
+            return Ok(if T::HAS_PARTIALS { t } else { T::zero() });
         }
         if let Ok(age) = self.age_gyr(T::zero()) {
             if lookback >= age {

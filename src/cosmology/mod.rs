@@ -24,6 +24,7 @@
 mod bao;
 mod distance;
 mod expansion;
+mod gradient;
 mod inverse;
 mod neutrino;
 #[rustfmt::skip]
@@ -32,4 +33,5 @@ mod table;
 mod time;
 mod universe;
 
+pub use gradient::*;
 pub use universe::{Universe, UniverseParameters};

@@ -206,6 +206,18 @@ impl<T: Real> DistanceTable<T> {
                 if !(tail <= T::c(TAIL_LIMIT).max(T::epsilon() * T::c(40.0)) * big) {
                     ok = false;
                 }
+                // a dual number: the partials' dropped coefficients against the sum of their
+                // magnitudes, part by part (always true for a float)
+                if T::HAS_PARTIALS {
+                    let size = cs.iter().fold(T::zero(), |m, c| m + c.error_magnitude());
+                    let dropped = cs
+                        .iter()
+                        .skip(NCOEF)
+                        .fold(T::zero(), |m, c| m + c.error_magnitude());
+                    if !T::partials_within(dropped, size, T::c(TAIL_LIMIT), T::zero()) {
+                        ok = false;
+                    }
+                }
                 let mut kept = [T::zero(); NCOEF];
                 for (k, c) in kept.iter_mut().zip(cs.iter()) {
                     *k = *c;

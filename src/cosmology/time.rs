@@ -82,7 +82,12 @@ impl<T: Real> Universe<T> {
     pub fn lookback_time_gyr(&self, z: T) -> Result<T> {
         let z = check_redshift(z, 0)?;
         if z == T::zero() {
-            return Ok(T::zero());
+            // a dual number keeps the slope at z = 0: dt/dz = t_H/E(0) = t_H
+            return Ok(if T::HAS_PARTIALS {
+                self.hubble_time_gyr * z
+            } else {
+                T::zero()
+            });
         }
         // integrate over v = 1 − s' ∈ [0, 1 − s], with 1 − s formed from z without
         // cancellation, so a small redshift keeps full relative accuracy

@@ -272,15 +272,41 @@ impl<T: Real> Universe<T> {
     #[inline]
     pub(crate) fn dark_energy_term(&self, a: T) -> T {
         if self.omega_de == T::zero() {
+            if T::HAS_PARTIALS {
+                // a dual number: Ω_de = 0 exactly, but not its partials (∂Ω_de/∂Ω_m = −1):
+                // the term is 0·a⁴f_de, with the partials Ω_de'·a⁴f_de (where that is finite)
+                let f = self.dark_energy_shape(a);
+                if f.is_finite() {
+                    return self.omega_de * f;
+                }
+            }
             return T::zero();
         }
         if self.de_power == T::zero() && self.params.wa == T::zero() {
             let a2 = a * a;
+            if T::HAS_PARTIALS {
+                // a dual number: w0 = −1 and wa = 0 exactly, but the partials of a⁴f_de with
+                // respect to w0 and wa are not 0: a⁴f_de = a⁴ e^ε with ε = −3(1 + w0 + wa) ln a
+                // − 3 wa (1 − a) = 0 in value, so a⁴(1 + ε) has the value a⁴ and the partials
+                return self.omega_de * a2 * a2 * (T::one() + self.dark_energy_exponent(a));
+            }
             return self.omega_de * a2 * a2;
         }
+        self.omega_de * self.dark_energy_shape(a)
+    }
+
+    /// a⁴ f_de(a) = e^((4 − 3(1+w0+wa)) ln a − 3 wa (1 − a)).
+    #[inline]
+    fn dark_energy_shape(&self, a: T) -> T {
         let exponent =
             (T::c(4.0) + self.de_power) * a.ln() - T::c(3.0) * self.params.wa * (T::one() - a);
-        self.omega_de * exponent.exp()
+        exponent.exp()
+    }
+
+    /// ln f_de(a) = −3(1+w0+wa) ln a − 3 wa (1 − a).
+    #[inline]
+    fn dark_energy_exponent(&self, a: T) -> T {
+        self.de_power * a.ln() - T::c(3.0) * self.params.wa * (T::one() - a)
     }
 
     /// q(s²) for the integrands in s = √a.

@@ -8,10 +8,17 @@
 //! intermediate overflows (|a| < MAX / SPLITTER).
 
 use crate::Real;
+use crate::real::Primitive;
 
 /// Exact sum: returns (s, e) with s = fl(a + b) and a + b = s + e exactly (Knuth's TwoSum).
 #[inline(always)]
 pub fn two_sum<T: Real>(a: T, b: T) -> (T, T) {
+    T::kernel_two_sum(a, b)
+}
+
+/// [`two_sum`] of a primitive float (the transformation itself).
+#[inline(always)]
+pub(crate) fn two_sum_primitive<T: Primitive>(a: T, b: T) -> (T, T) {
     let s = a + b;
     let bb = s - a;
     let e = (a - (s - bb)) + (b - bb);
@@ -21,13 +28,19 @@ pub fn two_sum<T: Real>(a: T, b: T) -> (T, T) {
 /// Exact sum when |a| ≥ |b| (Dekker's FastTwoSum).
 #[inline(always)]
 pub fn fast_two_sum<T: Real>(a: T, b: T) -> (T, T) {
+    T::kernel_fast_two_sum(a, b)
+}
+
+/// [`fast_two_sum`] of a primitive float (the transformation itself).
+#[inline(always)]
+pub(crate) fn fast_two_sum_primitive<T: Primitive>(a: T, b: T) -> (T, T) {
     let s = a + b;
     let e = b - (s - a);
     (s, e)
 }
 
 #[inline(always)]
-fn split<T: Real>(a: T) -> (T, T) {
+fn split<T: Primitive>(a: T) -> (T, T) {
     let t = T::SPLITTER * a;
     let hi = t - (t - a);
     (hi, a - hi)
@@ -43,6 +56,12 @@ fn split<T: Real>(a: T) -> (T, T) {
 /// arrives last (or that varies in a loop) first.
 #[inline(always)]
 pub fn two_prod<T: Real>(a: T, b: T) -> (T, T) {
+    T::kernel_two_prod(a, b)
+}
+
+/// [`two_prod`] of a primitive float (the transformation itself).
+#[inline(always)]
+pub(crate) fn two_prod_primitive<T: Primitive>(a: T, b: T) -> (T, T) {
     let p = a * b;
     let ah = a.split_high();
     let al = a - ah;
@@ -59,6 +78,12 @@ pub fn two_prod<T: Real>(a: T, b: T) -> (T, T) {
 /// working precision (the double-length Planck exponent needs about 65).
 #[inline(always)]
 pub fn two_prod_masked<T: Real>(a: T, b: T) -> (T, T) {
+    T::kernel_two_prod_masked(a, b)
+}
+
+/// [`two_prod_masked`] of a primitive float (the transformation itself).
+#[inline(always)]
+pub(crate) fn two_prod_masked_primitive<T: Primitive>(a: T, b: T) -> (T, T) {
     let p = a * b;
     let ah = a.split_high();
     let al = a - ah;

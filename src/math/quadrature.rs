@@ -61,7 +61,7 @@ pub fn gauss_kronrod_15<T: Real, F: FnMut(T) -> T>(f: &mut F, a: T, b: T) -> (T,
             g = g + s * T::c(wg);
         }
     }
-    (k * h, ((k - g) * h).abs())
+    (k * h, ((k - g) * h).error_magnitude())
 }
 
 /// ∫ₐᵇ f(x) dx to |error| ≤ max(abs_tol, rel_tol·|result|), by adaptive bisection.
@@ -69,6 +69,13 @@ pub fn gauss_kronrod_15<T: Real, F: FnMut(T) -> T>(f: &mut F, a: T, b: T) -> (T,
 /// Finite limits only (substitute to map infinite ones). `Error::NoConvergence` when the
 /// tolerance cannot be met within [`CAPACITY`] subintervals or an integrand value is not
 /// finite.
+///
+/// For a dual number ([`crate::dual::Dual`]) the error estimate is kept part by part and every
+/// partial must meet the tolerance too: |error of ∂I/∂p| ≤ max(abs_tol, rel_tol·max(|∂I/∂p|,
+/// |I|)) (see [`Real::partials_within`] for why the value bounds it from below). The value part is the integral of the value's own subdivision, the one a
+/// plain float takes (bit-identical to it); the intervals are bisected further, worst share of
+/// the partials' tolerance first, until the partials meet theirs (`NoConvergence` if they
+/// cannot within [`CAPACITY`]).
 pub fn integrate<T: Real, F: FnMut(T) -> T>(
     mut f: F,
     a: T,
@@ -89,6 +96,10 @@ pub fn integrate<T: Real, F: FnMut(T) -> T>(
     val[0] = v0;
     err[0] = e0;
     let mut n = 1usize;
+    // a dual number: the value part once it met the tolerance, with the subdivision of a plain
+    // float (so that it is bit-identical to the float's integral); the intervals are then
+    // bisected further by the error of the partials until they meet the tolerance too
+    let mut value_done: Option<T> = None;
     loop {
         let mut total = T::zero();
         let mut total_err = T::zero();
@@ -111,8 +122,17 @@ pub fn integrate<T: Real, F: FnMut(T) -> T>(
             return Err(Error::NoConvergence);
         }
         let tol = abs_tol.max(rel_tol * total.abs());
-        if total_err <= tol {
-            return Ok(total);
+        if total_err <= tol || value_done.is_some() {
+            if T::partials_within(total_err, total, rel_tol, abs_tol) {
+                return Ok(match value_done {
+                    Some(v) => total.with_value_of(v),
+                    None => total,
+                });
+            }
+            if value_done.is_none() {
+                value_done = Some(total);
+            }
+            worst = worst_partials(err.get(..n).unwrap_or(&[]), total, rel_tol, abs_tol);
         }
         if n >= CAPACITY {
             return Err(Error::NoConvergence);
@@ -145,6 +165,22 @@ pub fn integrate<T: Real, F: FnMut(T) -> T>(
         }
         n += 1;
     }
+}
+
+/// The interval whose error estimate of the partials takes the largest share of their
+/// tolerance (a dual number's integral once its value has converged).
+#[cold]
+fn worst_partials<T: Real>(err: &[T], total: T, rel_tol: T, abs_tol: T) -> usize {
+    let mut worst = 0usize;
+    let mut worst_score = -T::one();
+    for (i, &e) in err.iter().enumerate() {
+        let s = T::partials_error_score(e, total, rel_tol, abs_tol);
+        if s > worst_score {
+            worst_score = s;
+            worst = i;
+        }
+    }
+    worst
 }
 
 #[cfg(test)]

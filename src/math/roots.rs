@@ -2,6 +2,12 @@
 //! Recipes, 3rd ed., 2007, §9.4 "rtsafe"). Converges quadratically near a simple root and
 //! never leaves the bracket: a Newton step that would, or that shrinks the bracket too slowly,
 //! is replaced by bisection.
+//!
+//! Dual numbers ([`crate::dual::Dual`]): the iteration runs on values only (every point is
+//! evaluated with its partials set to 0, so the iterates are those of the plain float), and
+//! the partials of the root come from the implicit function theorem at the converged root x*:
+//! with f(x; p) = 0, ∂x*/∂p = −(∂f/∂p)/(∂f/∂x), from one more evaluation of f at x*. The
+//! iteration history is never differentiated.
 
 use crate::{Error, Real, Result};
 
@@ -64,12 +70,13 @@ where
             v < T::zero()
         }
     };
+    let guess = guess.detach();
     let f0 = f(guess).0;
     if f0.is_nan() {
         return Err(Error::NoConvergence);
     }
     if f0 == T::zero() {
-        return Ok(guess);
+        return Ok(with_root_partials(&mut f, guess));
     }
     let (mut lo, mut hi) = (guess, guess);
     // every doubling from the smallest subnormal to past the largest float, and no more (a
@@ -77,7 +84,7 @@ where
     let cap = 2 * (T::MAX_EXPONENT - T::MIN_NORMAL_EXPONENT) as u32 + 2 * T::MANTISSA_DIGITS;
     let mut n = 0u32;
     if root_above(f0) {
-        while root_above(f(hi).0) {
+        while root_above(f(hi.detach()).0) {
             lo = hi;
             hi = hi * T::c(2.0);
             n += 1;
@@ -86,7 +93,7 @@ where
             }
         }
     } else {
-        while root_below(f(lo).0) {
+        while root_below(f(lo.detach()).0) {
             hi = lo;
             lo = lo * T::c(0.5);
             n += 1;
@@ -103,6 +110,32 @@ where
     F: FnMut(T) -> (T, T),
     G: Fn(T) -> T,
 {
+    let x = newton_iterate(&mut f, lo, hi, tol, max_iter)?;
+    Ok(with_root_partials(&mut f, x))
+}
+
+/// The root x with the partials of the implicit function theorem (one evaluation of f at x;
+/// nothing for a float).
+#[inline(always)]
+fn with_root_partials<T: Real, F: FnMut(T) -> (T, T)>(f: &mut F, x: T) -> T {
+    if T::HAS_PARTIALS {
+        let x0 = x.detach();
+        let (fx, dfdx) = f(x0);
+        T::implicit_root(x0, fx, dfdx)
+    } else {
+        x
+    }
+}
+
+fn newton_iterate<T: Real, F, G>(f: &mut F, lo: T, hi: T, tol: G, max_iter: u32) -> Result<T>
+where
+    F: FnMut(T) -> (T, T),
+    G: Fn(T) -> T,
+{
+    let lo = lo.detach();
+    let hi = hi.detach();
+    // the iterates carry no partials (see the module documentation)
+    let mut f = |x: T| f(x.detach());
     if !lo.is_finite() || !hi.is_finite() {
         // an infinite or NaN end is no bracket (the midpoint would be ±∞ or NaN)
         return Err(Error::NoConvergence);
