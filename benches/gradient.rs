@@ -11,6 +11,9 @@ use std::hint::black_box;
 
 const N: usize = 1_000_000;
 
+/// The universes of one central difference: +h and -h, the step h, and whether the parameter is varied.
+type Perturbed = (Box<Universe<f64>>, Box<Universe<f64>>, f64, bool);
+
 fn parameters() -> UniverseParameters<f64> {
     let mut p = UniverseParameters::new(67.4, 0.315);
     p.omega_baryon = 0.049;
@@ -60,7 +63,7 @@ fn bench(c: &mut Criterion) {
     let z: Vec<f64> = (0..N).map(|i| 1e-3 + 5.0 * (i as f64) / N as f64).collect();
     let mut values = vec![0.0; N];
     let mut gradients = vec![[0.0; GRADIENT_LEN]; N];
-    let fd_universes: Vec<(Box<Universe<f64>>, Box<Universe<f64>>, f64, bool)> = (0..12)
+    let fd_universes: Vec<Perturbed> = (0..12)
         .map(|i| {
             let (qp, h) = perturbed(&p, i, 1.0);
             let (qm, _) = perturbed(&p, i, -1.0);

@@ -200,6 +200,8 @@ impl<T: Real, const N: usize> Sub for Dual<T, N> {
 
 impl<T: Real, const N: usize> Mul for Dual<T, N> {
     type Output = Self;
+    // the product rule adds the two partial products
+    #[allow(clippy::suspicious_arithmetic_impl)]
     #[inline(always)]
     fn mul(self, o: Self) -> Self {
         let (a, b) = (self.value, o.value);

@@ -1,5 +1,5 @@
 //! Gradients of the blackbody functions by dual numbers (`relicore::blackbody::*_gradient`):
-//! the partials against mpmath (`tests/data/blackbody_gradient.txt`: mpmath.diff at 40 digits
+//! the partials against mpmath (`tests/data/gradients/blackbody.txt`: mpmath.diff at 40 digits
 //! of independent mpmath implementations, `tests/reference/gradient_vectors.py`), the value part
 //! against the plain function bit for bit, the temperature partial of B against the library's
 //! closed-form ∂B/∂T, and the errors against the plain function's.
@@ -55,7 +55,7 @@ fn plain(name: &str, a: &[f64]) -> Result<f64> {
 
 #[test]
 fn gradients_match_mpmath_and_values_match_the_plain_functions() {
-    let text = data("blackbody_gradient.txt");
+    let text = data("gradients/blackbody.txt");
     let mut worst: std::collections::BTreeMap<String, f64> = Default::default();
     let mut n = 0;
     for line in text.lines() {

@@ -1,6 +1,6 @@
 //! Gradients of the background by dual numbers (`relicore::cosmology::GradientUniverse`): the
 //! partials with respect to z and every parameter against mpmath
-//! (`tests/data/cosmology_gradient.txt`: mpmath.diff at 40 digits of an independent mpmath
+//! (`tests/data/gradients/cosmology.txt`: mpmath.diff at 40 digits of an independent mpmath
 //! background, closed forms of the Einstein-de Sitter and Milne models and the flat ΛCDM age
 //! as second routes; `tests/reference/gradient_vectors.py`), the value part against the plain
 //! `f64` universe bit for bit, the inversion's partials by the implicit function theorem
@@ -13,6 +13,9 @@ use relicore::cosmology::{
 use relicore::{Error, Result};
 use std::collections::{BTreeMap, HashMap};
 use std::path::PathBuf;
+
+/// A model's gradient universe and its plain universe.
+type Pair = (Box<GradientUniverse<f64>>, Box<Universe<f64>>);
 
 fn data(name: &str) -> String {
     let p = PathBuf::from(env!("CARGO_MANIFEST_DIR"))
@@ -69,9 +72,8 @@ fn big_stack(f: impl FnOnce() + Send + 'static) {
 #[test]
 fn gradients_match_mpmath_and_values_match_the_plain_universe() {
     big_stack(|| {
-        let text = data("cosmology_gradient.txt");
-        let mut universes: HashMap<String, (Box<GradientUniverse<f64>>, Box<Universe<f64>>)> =
-            HashMap::new();
+        let text = data("gradients/cosmology.txt");
+        let mut universes: HashMap<String, Pair> = HashMap::new();
         let mut worst: BTreeMap<String, f64> = BTreeMap::new();
         let mut n = 0;
         for line in text.lines() {

@@ -13,7 +13,7 @@
 //!
 //! Accuracy of the partials (`f64`): within 1e-12 relative against mpmath (`mpmath.diff` at 40
 //! digits of independent mpmath implementations of Planck's law, its closed-form inverse and
-//! its band integral by `mpmath.quad`; `tests/data/blackbody_gradient.txt`, script
+//! its band integral by `mpmath.quad`; `tests/data/gradients/blackbody.txt`, script
 //! `tests/reference/gradient_vectors.py`); measured worst errors are printed by
 //! `tests/dual_blackbody.rs`. The temperature partial of B_λ and B_ν equals the library's
 //! closed-form ∂B/∂T ([`radiance_temperature_derivative_wavelength`](super::radiance_temperature_derivative_wavelength))

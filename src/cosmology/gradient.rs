@@ -19,7 +19,7 @@
 //!
 //! Accuracy (`f64`): partials within 1e-12 relative (or absolute for a partial that crosses 0)
 //! against mpmath (`mpmath.diff` at 40 digits of an independent mpmath background,
-//! `tests/data/cosmology_gradient.txt`; closed forms of the Einstein-de Sitter and Milne
+//! `tests/data/gradients/cosmology.txt`; closed forms of the Einstein-de Sitter and Milne
 //! models and the flat ΛCDM age as second routes), for models with massless neutrinos; the
 //! partials with respect to a non-zero neutrino mass are not yet checked against an outside
 //! source.

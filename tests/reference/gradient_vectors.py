@@ -6,7 +6,7 @@ Run from anywhere:
     python3 tests/reference/gradient_vectors.py            # both files
     python3 tests/reference/gradient_vectors.py blackbody  # one of them
 
-Writes tests/data/blackbody_gradient.txt and tests/data/cosmology_gradient.txt in the format of
+Writes tests/data/gradients/blackbody.txt and tests/data/gradients/cosmology.txt in the format of
 tests/data/FORMAT.md (section "Gradient files").
 
 Independence: every expected partial derivative is mpmath.diff (numerical differentiation at
@@ -217,10 +217,10 @@ def write(name, lines):
 def main():
     which = sys.argv[1:] or ["blackbody", "cosmology"]
     if "blackbody" in which:
-        write("blackbody_gradient.txt", blackbody())
+        write("gradients/blackbody.txt", blackbody())
     if "cosmology" in which:
         import gradient_cosmology  # noqa: E402  (the cosmology half, same conventions)
-        write("cosmology_gradient.txt", gradient_cosmology.vectors(lines_for, fmt, TOL))
+        write("gradients/cosmology.txt", gradient_cosmology.vectors(lines_for, fmt, TOL))
 
 
 if __name__ == "__main__":
