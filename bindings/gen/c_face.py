@@ -452,7 +452,7 @@ def frames_module(fns: list[Function]) -> str:
 # ---------------------------------------------------------------------------- response tables
 def table_export(tf: TableFunction, ty: str) -> str:
     """The C export of a response-table function (`_f32` for `float`), through
-    `thermometry::table_call`."""
+    `boundary::table_call`."""
     c_ty = "double" if ty == "f64" else "float"
     name = f"relicore_{tf.name}" + ("" if ty == "f64" else "_f32")
     paragraphs = tf.c_doc.split("\n\n")
@@ -499,8 +499,9 @@ def tables_module() -> str:
         banner("//", "the C exports of the response-table functions of radiation thermometry"),
         "//! The C exports of the table's response-table functions ([[table_function]]): a tabulated "
         "spectral response (two caller buffers with their lengths) and single values, through "
-        "`thermometry::table_call`; each with its `float` twin.\n",
-        f"use crate::thermometry::{{{', '.join(['table_call'] + [s + sfx for s in structs for sfx in ('', '_f32')])}}};",
+        "`boundary::table_call`; each with its `float` twin.\n",
+        "use crate::boundary::table_call;",
+        f"use crate::thermometry::{{{', '.join(s + sfx for s in structs for sfx in ('', '_f32'))}}};",
         "use relicore::blackbody as bb;",
         "",
     ]

@@ -17,7 +17,7 @@ import re
 
 from .common import banner
 from .rustdoc import find
-from .table import RECEIVERS, ROOT, Function
+from .table import RECEIVERS, ROOT, Function, table_functions
 
 PY = ROOT / "bindings" / "python"
 PACKAGE = PY / "python" / "relicore"
@@ -239,6 +239,7 @@ def rust(fns: list[Function]) -> str:
         "",
         "use crate::functions::{Body, G, H, Lift, S, Single, SingleBody, Spec, U};",
         "use crate::kernels::rows_frame;",
+        "use crate::thermometry::TableRowFn;",
     ]
     for receiver, static, core in (("none", "PLAIN", "()"), ("universe", "UNIVERSE", "U"), ("history", "HISTORY", "H"),
                                    ("growth", "GROWTH", "G"), ("power_spectrum", "SPECTRUM", "S")):
@@ -263,9 +264,64 @@ def rust(fns: list[Function]) -> str:
                 out += ["", f"/// `{f.frame_function}` of the core in single precision.", _rust_frame(f, "f32")]
     for rt in dict.fromkeys(f.result_type for f in fns if f.result_type):
         out += ["", _row_function(rt)]
+    out += _rust_tables()
     for rt in dict.fromkeys(f.result_type for f in fns if f.result_type and has_single(f)):
         out += ["", _row_function(rt, "f32")]
     return "\n".join(out) + "\n"
+
+
+def _rust_tables() -> list[str]:
+    """The response-table functions ([[table_function]]) as `thermometry.rs` calls them: name,
+    element-wise parameters (after the two tables), floats per element, the core call."""
+    out = []
+    for tf in table_functions():
+        rt = tf.result_type
+        put = f"{rt.name}_row(v, out)" if rt else "if let Some(o) = out.first_mut() { *o = v }"
+        out += ["", f"/// `relicore::blackbody::{tf.name}` on the two tables and one element's values.",
+                f"fn {tf.name}_table(w: &[f64], r: &[f64], x: &[f64], out: &mut [f64]) -> relicore::Result<()> {{",
+                f"    match *x {{ [{', '.join(tf.args)}] => relicore::blackbody::{tf.name}(w, r, {', '.join(tf.args)})"
+                f".map(|v| {put}), _ => Err(Error::LengthMismatch(2)) }}", "}"]
+    rows = [f'    ("{tf.name}", &[{", ".join(chr(34) + a + chr(34) for a in tf.args)}], '
+            f"{tf.result_type.width if tf.result_type else 1}, {tf.name}_table)," for tf in table_functions()]
+    return out + ["", "/// The response-table functions: name, element-wise parameters (after the two tables), floats",
+                  "/// per element, the core call.",
+                  "#[allow(clippy::type_complexity)]",
+                  "pub(crate) static TABLE_FUNCTIONS: &[(&str, &[&str], usize, TableRowFn)] = &["] + rows + ["];"]
+
+
+def tables_python() -> str:
+    """relicore/_tables.py: the Python wrappers of the response-table functions."""
+    out = [banner("#", "the response-table functions of relicore.blackbody"),
+           '"""The response-table functions of relicore.blackbody ([[table_function]] entries of the '
+           'table), imported by relicore._thermometry."""', "", "from __future__ import annotations", "",
+           "from typing import Any", "", "from relicore._elementwise import table_call as _table_call",
+           "from relicore._results import TemperatureUncertainty", "",
+           f"__all__ = {[tf.name for tf in table_functions()]!r}"]
+    for tf in table_functions():
+        params = ["wavelengths_m: Any", "response_table: Any"] + [f"{a}: Any" for a in tf.args]
+        width = tf.result_type.width if tf.result_type else 1
+        ret = tf.result_type.python_type if tf.result_type else "Any"
+        out += ["", "", f"def {tf.name}(", f"    {', '.join(params)}, *, nan_on_error: bool = False,",
+                f") -> {ret}:", f'    """{tf.python_doc}"""',
+                f"    return _table_call({tf.name!r}, {tuple(tf.args)!r}, wavelengths_m, response_table, "
+                f"({', '.join(tf.args)},), nan_on_error, {width})"]
+    return "\n".join(out) + "\n"
+
+
+def tables_stub() -> list[str]:
+    """The stubs of the response-table functions (scalar and array overloads; one signature for
+    a result type)."""
+    out = []
+    for tf in table_functions():
+        head = f"def {tf.name}(wavelengths_m: ArrayLike, response_table: ArrayLike, "
+        if tf.result_type:
+            args = ", ".join(f"{a}: ArrayLike" for a in tf.args)
+            out.append(f"{head}{args}, *, nan_on_error: bool = False) -> {tf.result_type.python_type}: ...")
+            continue
+        for kind, result, tail in (("_Scalar", "float", "  # type: ignore[overload-overlap]"), ("ArrayLike", "_Array", "")):
+            args = ", ".join(f"{a}: {kind}" for a in tf.args)
+            out += ["@overload", f"{head}{args}, *, nan_on_error: bool = False) -> {result}: ...{tail}"]
+    return out
 
 
 # ------------------------------------------------------------------------------- Python
@@ -434,19 +490,7 @@ def response_weighted_radiance(wavelengths_m: ArrayLike, response: ArrayLike, te
 def temperature_from_response_weighted_radiance(wavelengths_m: ArrayLike, response: ArrayLike, radiance: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
 @overload
 def temperature_from_response_weighted_radiance(wavelengths_m: ArrayLike, response: ArrayLike, radiance: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
-@overload
-def measured_response_weighted_radiance(wavelengths_m: ArrayLike, response_table: ArrayLike, object_temperature_k: _Scalar, emissivity: _Scalar, reflected_temperature_k: _Scalar, transmittance: _Scalar, path_temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
-@overload
-def measured_response_weighted_radiance(wavelengths_m: ArrayLike, response_table: ArrayLike, object_temperature_k: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
-@overload
-def object_temperature_response(wavelengths_m: ArrayLike, response_table: ArrayLike, signal: _Scalar, emissivity: _Scalar, reflected_temperature_k: _Scalar, transmittance: _Scalar, path_temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
-@overload
-def object_temperature_response(wavelengths_m: ArrayLike, response_table: ArrayLike, signal: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
-def object_temperature_response_with_uncertainty(wavelengths_m: ArrayLike, response_table: ArrayLike, signal: ArrayLike, emissivity: ArrayLike, reflected_temperature_k: ArrayLike, transmittance: ArrayLike, path_temperature_k: ArrayLike, signal_uncertainty: ArrayLike, emissivity_uncertainty: ArrayLike, reflected_temperature_uncertainty_k: ArrayLike, transmittance_uncertainty: ArrayLike, path_temperature_uncertainty_k: ArrayLike, *, nan_on_error: bool = False) -> TemperatureUncertainty: ...
-@overload
-def response_weighted_radiance_temperature_derivative(wavelengths_m: ArrayLike, response_table: ArrayLike, temperature_k: _Scalar, *, nan_on_error: bool = False) -> float: ...  # type: ignore[overload-overlap]
-@overload
-def response_weighted_radiance_temperature_derivative(wavelengths_m: ArrayLike, response_table: ArrayLike, temperature_k: ArrayLike, *, nan_on_error: bool = False) -> _Array: ...
+{tables}
 def combined_standard_uncertainty(sensitivity_coefficients: ArrayLike, standard_uncertainties: ArrayLike) -> float: ...
 def combined_standard_uncertainty_correlated(sensitivity_coefficients: ArrayLike, standard_uncertainties: ArrayLike, correlation: ArrayLike) -> float: ...
 '''
@@ -634,7 +678,7 @@ def stub(topic: str, fns: list[Function]) -> str:
     mine = [f for f in fns if home(f) == topic]
     out = [banner("#", f"the type stubs of relicore.{topic}"), head.rstrip("\n")]
     if topic == "blackbody":
-        out.append(BLACKBODY_STUB.rstrip("\n"))
+        out.append(BLACKBODY_STUB.replace("{tables}", "\n".join(tables_stub())).rstrip("\n"))
     for f in mine:
         if f.python == "function":
             out += _stub_overloads(f, "")
@@ -732,4 +776,5 @@ def outputs(fns: list[Function]) -> dict:
     for topic in ("blackbody", "cosmology", "decoupling", "growth"):
         files[PACKAGE / f"_{topic}.py"] = python_module(topic, fns)
         files[PACKAGE / f"{topic}.pyi"] = stub(topic, fns)
+    files[PACKAGE / "_tables.py"] = tables_python()
     return files

@@ -169,7 +169,7 @@ class TableError(Exception):
     pass
 
 
-TABLE_FUNCTION_KEYS = {"name", "args", "returns", "c_doc", "fortran_doc", "fortran_result"}
+TABLE_FUNCTION_KEYS = {"name", "args", "returns", "c_doc", "fortran_doc", "fortran_result", "python_doc"}
 
 
 @dataclass(frozen=True)
@@ -183,6 +183,7 @@ class TableFunction:
     c_doc: str
     fortran_doc: str
     fortran_result: str | None
+    python_doc: str
 
     @property
     def result_type(self) -> ResultType | None:
@@ -196,14 +197,14 @@ def table_functions(path: Path = TABLE) -> list[TableFunction]:
     out = []
     for e in raw.get("table_function", []):
         where = f"{path.name}: table_function {e.get('name')!r}"
-        if set(e) - TABLE_FUNCTION_KEYS or not {"name", "args", "c_doc", "fortran_doc"} <= set(e):
+        if set(e) - TABLE_FUNCTION_KEYS or not {"name", "args", "c_doc", "fortran_doc", "python_doc"} <= set(e):
             raise TableError(f"{where}: keys are {sorted(TABLE_FUNCTION_KEYS)} (returns, fortran_result optional)")
         if bool(e.get("returns")) == bool(e.get("fortran_result")):
             raise TableError(f"{where}: give returns (a result type) or fortran_result, not both")
         if e.get("returns") and e["returns"] not in raw.get("result", {}):
             raise TableError(f"{where}: returns must name a [result.<name>]")
         out.append(TableFunction(e["name"], tuple(e["args"]), e.get("returns"), e["c_doc"].strip("\n"),
-                                 e["fortran_doc"], e.get("fortran_result")))
+                                 e["fortran_doc"], e.get("fortran_result"), e["python_doc"]))
     return out
 
 

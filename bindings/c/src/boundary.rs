@@ -269,6 +269,37 @@ unsafe fn through_array_in_place<T: NotANumber>(
     first.map_or(Ok(()), Err)
 }
 
+/// Runs a response-table function on the caller's two buffers and writes its value to `*out`
+/// (NaN, or a struct of NaN, on failure).
+///
+/// # Safety
+/// `wavelengths_m` is NULL or valid for `n_wavelengths` reads, `response` NULL or valid for
+/// `n_response` reads, `out` NULL or valid for one write.
+pub(crate) unsafe fn table_call<T: Copy, O: NotANumber>(
+    wavelengths_m: *const T,
+    n_wavelengths: usize,
+    response: *const T,
+    n_response: usize,
+    out: *mut O,
+    f: impl FnOnce(&[T], &[T]) -> relicore::Result<O>,
+) -> i32 {
+    boundary(
+        || {
+            non_null(out)?;
+            // SAFETY: NULL or valid for the given lengths (caller's contract).
+            let w = unsafe { input_slice(wavelengths_m, n_wavelengths) }?;
+            // SAFETY: as above.
+            let r = unsafe { input_slice(response, n_response) }?;
+            let v = f(w, r)?;
+            // SAFETY: non-NULL and writable (caller's contract).
+            unsafe { out.write(v) };
+            Ok(())
+        },
+        // SAFETY: out is NULL or writable.
+        || unsafe { put(out, O::NAN) },
+    )
+}
+
 /// A caller's (pointer, length) buffer as a slice; NULL is `RELICORE_ERROR_NULL_POINTER`
 /// (also for n = 0).
 ///

@@ -2,11 +2,10 @@
 // rustdoc: the C exports of the response-table functions of radiation thermometry. Do not edit; change the table or the core's docs and run
 // `python3 bindings/generate.py --write` (`make test` fails when this file is not current).
 
-//! The C exports of the table's response-table functions ([[table_function]]): a tabulated spectral response (two caller buffers with their lengths) and single values, through `thermometry::table_call`; each with its `float` twin.
+//! The C exports of the table's response-table functions ([[table_function]]): a tabulated spectral response (two caller buffers with their lengths) and single values, through `boundary::table_call`; each with its `float` twin.
 
-use crate::thermometry::{
-    relicore_temperature_uncertainty, relicore_temperature_uncertainty_f32, table_call,
-};
+use crate::boundary::table_call;
+use crate::thermometry::{relicore_temperature_uncertainty, relicore_temperature_uncertainty_f32};
 use relicore::blackbody as bb;
 
 /// Measured response-weighted radiance of a scene (the forward measurement equation with the

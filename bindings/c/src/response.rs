@@ -2,38 +2,8 @@
 //! temperature: what a radiometer channel or an infrared thermometer measures. The table is
 //! given as two caller buffers, each followed by its length.
 
-use crate::boundary::{NotANumber, boundary, input_slice, non_null, put};
+use crate::boundary::table_call;
 use relicore::blackbody as bb;
-
-/// Runs a table function on the caller's two buffers and writes the result to `*out`.
-///
-/// # Safety
-/// `wavelengths_m` is NULL or valid for `n_wavelengths` reads, `response` NULL or valid for
-/// `n_response` reads, `out` NULL or valid for one write.
-unsafe fn table_call<T: NotANumber>(
-    wavelengths_m: *const T,
-    n_wavelengths: usize,
-    response: *const T,
-    n_response: usize,
-    out: *mut T,
-    f: impl FnOnce(&[T], &[T]) -> relicore::Result<T>,
-) -> i32 {
-    boundary(
-        || {
-            non_null(out)?;
-            // SAFETY: NULL or valid for the given lengths (caller's contract).
-            let w = unsafe { input_slice(wavelengths_m, n_wavelengths) }?;
-            // SAFETY: as above.
-            let r = unsafe { input_slice(response, n_response) }?;
-            let v = f(w, r)?;
-            // SAFETY: non-NULL and writable (caller's contract).
-            unsafe { out.write(v) };
-            Ok(())
-        },
-        // SAFETY: out is NULL or writable.
-        || unsafe { put(out, T::NAN) },
-    )
-}
 
 /// Response-weighted radiance, L_r = ∫ r(λ) B_λ(λ, T) dλ, with the relative spectral response
 /// r linear between the table points and zero outside.

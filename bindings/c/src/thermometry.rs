@@ -1,10 +1,10 @@
 //! Radiation thermometry in C: the result struct of every `_with_uncertainty` function (a
 //! temperature with its combined standard uncertainty and sensitivity coefficients), the
-//! combined standard uncertainty of caller arrays (JCGM 100:2008 eqs. 10 and 13), and the bodies
-//! of the generated forms: `table_call` (the response-table functions, `gen_tables.rs`) and
-//! `frame_call` (the frame (image) forms with per-pixel or shared parameters, `gen_frames.rs`).
-//! The regular thermometry functions are generated into `gen_blackbody.rs`; all three from
-//! `bindings/functions.toml`.
+//! combined standard uncertainty of caller arrays (JCGM 100:2008 eqs. 10 and 13), and
+//! `frame_call`, the body of the frame (image) forms with per-pixel or shared parameters. From
+//! `bindings/functions.toml` the regular thermometry functions are generated into
+//! `gen_blackbody.rs`, the response-table functions into `gen_tables.rs` (through
+//! `boundary::table_call`) and the frame forms into `gen_frames.rs`.
 //!
 //! Radiation thermometry can hurt someone when it is trusted beyond its emissivity and
 //! calibration: fever screening, furnaces, molten metal and fire safety follow the applicable
@@ -142,37 +142,6 @@ impl NotANumber for relicore_temperature_uncertainty_f32 {
         sensitivity_coefficients: [f32::NAN; 5],
         inputs: 0,
     };
-}
-
-/// Runs a response-table function on the caller's two buffers and writes its value to `*out`
-/// (NaN, or a struct of NaN, on failure).
-///
-/// # Safety
-/// `wavelengths_m` is NULL or valid for `n_wavelengths` reads, `response` NULL or valid for
-/// `n_response` reads, `out` NULL or valid for one write.
-pub(crate) unsafe fn table_call<T: Copy, O: NotANumber>(
-    wavelengths_m: *const T,
-    n_wavelengths: usize,
-    response: *const T,
-    n_response: usize,
-    out: *mut O,
-    f: impl FnOnce(&[T], &[T]) -> relicore::Result<O>,
-) -> i32 {
-    boundary(
-        || {
-            non_null(out)?;
-            // SAFETY: NULL or valid for the given lengths (caller's contract).
-            let w = unsafe { input_slice(wavelengths_m, n_wavelengths) }?;
-            // SAFETY: as above.
-            let r = unsafe { input_slice(response, n_response) }?;
-            let v = f(w, r)?;
-            // SAFETY: non-NULL and writable (caller's contract).
-            unsafe { out.write(v) };
-            Ok(())
-        },
-        // SAFETY: out is NULL or writable.
-        || unsafe { put(out, O::NAN) },
-    )
 }
 
 /// Runs a slice function (the combined standard uncertainty) on caller buffers.

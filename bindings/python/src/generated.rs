@@ -10,6 +10,7 @@ use relicore_dispatch::widest;
 
 use crate::functions::{Body, G, H, Lift, S, Single, SingleBody, Spec, U};
 use crate::kernels::rows_frame;
+use crate::thermometry::TableRowFn;
 
 /// The regular functions called on nothing.
 pub(crate) static PLAIN: &[Spec<()>] = &[
@@ -1591,6 +1592,36 @@ fn temperature_uncertainty_row(v: relicore::blackbody::TemperatureUncertainty<f6
         *inputs = f64::from(v.inputs);
     }
 }
+
+/// `relicore::blackbody::measured_response_weighted_radiance` on the two tables and one element's values.
+fn measured_response_weighted_radiance_table(w: &[f64], r: &[f64], x: &[f64], out: &mut [f64]) -> relicore::Result<()> {
+    match *x { [object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_response_weighted_radiance(w, r, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k).map(|v| if let Some(o) = out.first_mut() { *o = v }), _ => Err(Error::LengthMismatch(2)) }
+}
+
+/// `relicore::blackbody::object_temperature_response` on the two tables and one element's values.
+fn object_temperature_response_table(w: &[f64], r: &[f64], x: &[f64], out: &mut [f64]) -> relicore::Result<()> {
+    match *x { [signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_response(w, r, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k).map(|v| if let Some(o) = out.first_mut() { *o = v }), _ => Err(Error::LengthMismatch(2)) }
+}
+
+/// `relicore::blackbody::object_temperature_response_with_uncertainty` on the two tables and one element's values.
+fn object_temperature_response_with_uncertainty_table(w: &[f64], r: &[f64], x: &[f64], out: &mut [f64]) -> relicore::Result<()> {
+    match *x { [signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_response_with_uncertainty(w, r, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(2)) }
+}
+
+/// `relicore::blackbody::response_weighted_radiance_temperature_derivative` on the two tables and one element's values.
+fn response_weighted_radiance_temperature_derivative_table(w: &[f64], r: &[f64], x: &[f64], out: &mut [f64]) -> relicore::Result<()> {
+    match *x { [temperature_k] => relicore::blackbody::response_weighted_radiance_temperature_derivative(w, r, temperature_k).map(|v| if let Some(o) = out.first_mut() { *o = v }), _ => Err(Error::LengthMismatch(2)) }
+}
+
+/// The response-table functions: name, element-wise parameters (after the two tables), floats
+/// per element, the core call.
+#[allow(clippy::type_complexity)]
+pub(crate) static TABLE_FUNCTIONS: &[(&str, &[&str], usize, TableRowFn)] = &[
+    ("measured_response_weighted_radiance", &["object_temperature_k", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"], 1, measured_response_weighted_radiance_table),
+    ("object_temperature_response", &["signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"], 1, object_temperature_response_table),
+    ("object_temperature_response_with_uncertainty", &["signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k", "signal_uncertainty", "emissivity_uncertainty", "reflected_temperature_uncertainty_k", "transmittance_uncertainty", "path_temperature_uncertainty_k"], 8, object_temperature_response_with_uncertainty_table),
+    ("response_weighted_radiance_temperature_derivative", &["temperature_k"], 1, response_weighted_radiance_temperature_derivative_table),
+];
 
 /// A `TemperatureUncertainty` as one row of 8 f32 (its fields in order; `inputs` as a float).
 #[inline(always)]

@@ -3,7 +3,7 @@
 //! element-wise scene arguments, a number or a temperature with its uncertainty per element)
 //! and the combined standard uncertainty of caller arrays (JCGM 100:2008 eqs. 10 and 13).
 //! The regular thermometry functions (and their image path through the core's frame forms)
-//! are generated into `generated.rs`.
+//! and the list of the response-table functions are generated into `generated.rs`.
 
 use numpy::{
     PyArray1, PyArrayMethods, PyReadonlyArray1, PyReadonlyArrayDyn, PyUntypedArrayMethods,
@@ -14,131 +14,13 @@ use relicore::blackbody as bb;
 use relicore::{Error, Result};
 
 use crate::errors::{Arg, Site, core_error, shape_error};
+use crate::generated::TABLE_FUNCTIONS;
 use crate::kernels::{check_shape, elements, run_rows};
 
-/// Floats per element of a temperature with its uncertainty: temperature, u_c, the five
-/// coefficients, the number of inputs (the order of the generated `temperature_uncertainty_row`).
-const ROW: usize = 8;
-
-/// A response-table function: the two tables, the element-wise values, the row it writes.
-type TableRowFn = fn(&[f64], &[f64], &[f64], &mut [f64]) -> Result<()>;
-
-const SCENE: [&str; 4] = [
-    "emissivity",
-    "reflected_temperature_k",
-    "transmittance",
-    "path_temperature_k",
-];
-const UNCERTAINTIES: [&str; 5] = [
-    "signal_uncertainty",
-    "emissivity_uncertainty",
-    "reflected_temperature_uncertainty_k",
-    "transmittance_uncertainty",
-    "path_temperature_uncertainty_k",
-];
-
-fn put(out: &mut [f64], v: f64) {
-    if let Some(o) = out.first_mut() {
-        *o = v;
-    }
-}
-
-fn put_row(v: bb::TemperatureUncertainty<f64>, out: &mut [f64]) {
-    let values = [v.temperature_k, v.combined_standard_uncertainty_k]
-        .into_iter()
-        .chain(v.sensitivity_coefficients)
-        .chain([f64::from(v.inputs)]);
-    for (o, x) in out.iter_mut().zip(values) {
-        *o = x;
-    }
-}
-
-/// `f(w, r, a, b, c, d, e)` of a slice of five values.
-macro_rules! five {
-    ($x:expr, |$a:ident, $b:ident, $c:ident, $d:ident, $e:ident| $body:expr) => {
-        match *$x {
-            [$a, $b, $c, $d, $e] => $body,
-            _ => Err(Error::LengthMismatch(2)),
-        }
-    };
-}
-
-fn measured(w: &[f64], r: &[f64], x: &[f64], out: &mut [f64]) -> Result<()> {
-    five!(x, |t, e, tr, tau, tp| {
-        bb::measured_response_weighted_radiance(w, r, t, e, tr, tau, tp).map(|v| put(out, v))
-    })
-}
-
-fn object(w: &[f64], r: &[f64], x: &[f64], out: &mut [f64]) -> Result<()> {
-    five!(x, |s, e, tr, tau, tp| {
-        bb::object_temperature_response(w, r, s, e, tr, tau, tp).map(|v| put(out, v))
-    })
-}
-
-fn object_uncertainty(w: &[f64], r: &[f64], x: &[f64], out: &mut [f64]) -> Result<()> {
-    match *x {
-        [s, e, tr, tau, tp, us, ue, utr, utau, utp] => {
-            bb::object_temperature_response_with_uncertainty(
-                w, r, s, e, tr, tau, tp, us, ue, utr, utau, utp,
-            )
-            .map(|v| put_row(v, out))
-        }
-        _ => Err(Error::LengthMismatch(2)),
-    }
-}
-
-fn derivative(w: &[f64], r: &[f64], x: &[f64], out: &mut [f64]) -> Result<()> {
-    match *x {
-        [t] => bb::response_weighted_radiance_temperature_derivative(w, r, t).map(|v| put(out, v)),
-        _ => Err(Error::LengthMismatch(2)),
-    }
-}
-
-/// The response-table thermometry functions: name, element-wise parameter names (after the
-/// two tables), floats per element, core call.
-static TABLE_FUNCTIONS: [(&str, &[&str], usize, TableRowFn); 4] = [
-    (
-        "measured_response_weighted_radiance",
-        &[
-            "object_temperature_k",
-            SCENE[0],
-            SCENE[1],
-            SCENE[2],
-            SCENE[3],
-        ],
-        1,
-        measured,
-    ),
-    (
-        "object_temperature_response",
-        &["signal", SCENE[0], SCENE[1], SCENE[2], SCENE[3]],
-        1,
-        object,
-    ),
-    (
-        "object_temperature_response_with_uncertainty",
-        &[
-            "signal",
-            SCENE[0],
-            SCENE[1],
-            SCENE[2],
-            SCENE[3],
-            UNCERTAINTIES[0],
-            UNCERTAINTIES[1],
-            UNCERTAINTIES[2],
-            UNCERTAINTIES[3],
-            UNCERTAINTIES[4],
-        ],
-        ROW,
-        object_uncertainty,
-    ),
-    (
-        "response_weighted_radiance_temperature_derivative",
-        &["temperature_k"],
-        1,
-        derivative,
-    ),
-];
+/// A response-table function: the two tables, the element-wise values, the row it writes (the
+/// functions are [[table_function]] entries of `bindings/functions.toml`, listed in
+/// `generated::TABLE_FUNCTIONS`).
+pub(crate) type TableRowFn = fn(&[f64], &[f64], &[f64], &mut [f64]) -> Result<()>;
 
 /// (name, parameters) of the irregular thermometry functions of relicore.blackbody.
 pub(crate) fn signatures() -> Vec<(&'static str, Vec<&'static str>)> {

@@ -166,3 +166,21 @@ def apply_result(function: Any, receiver: Any, args: tuple[Any, ...], nan_on_err
         # numpy float32 scalars in: numpy scalars out (a field of n values a float32 array of n)
         return value._replace(**{k: v[()] for k, v in value._asdict().items() if np.ndim(v) == 0})
     return value
+
+
+def table_call(name: str, names: tuple[str, ...], wavelengths_m: Any, response_table: Any, args: tuple[Any, ...],
+               nan_on_error: bool, width: int) -> Any:
+    """One response-table function (relicore._tables) over broadcast element-wise arguments: a row
+    of `width` floats per element (a float, or a TemperatureUncertainty for width 8)."""
+    from relicore._results import TemperatureUncertainty
+
+    w = contiguous(np.asarray(wavelengths_m, dtype=np.float64))
+    r = contiguous(np.asarray(response_table, dtype=np.float64))
+    scalar = all(isinstance(a, SCALAR_TYPES) for a in args)
+    arrays, shape = float_arrays(name, names, args)
+    rows = np.empty(shape + ((width,) if width > 1 else ()), dtype=np.float64)
+    _native.thermometry_table_map(name, w, r, [operand(a, shape) for a in arrays], rows.reshape(-1),
+                                  list(shape), nan_on_error)
+    if width == 1:
+        return float(rows[()]) if scalar else rows
+    return TemperatureUncertainty._from_row(rows.reshape(-1)) if scalar else TemperatureUncertainty._from_rows(rows)
