@@ -50,7 +50,7 @@ pub mod growth;
 pub mod math;
 mod real;
 
-pub use error::{ArrayResult, ElementError, Error, Result};
+pub use error::{Arg, ArrayResult, ElementError, Error, Result};
 pub use real::Real;
 
 /// Version of the core crate (`major.minor.patch`).

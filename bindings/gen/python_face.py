@@ -63,7 +63,7 @@ def _slice_call(fn: Function, call: str) -> str:
     """A closure body taking the element-wise values as a slice (more than 4 arguments, or a
     row result): the core call when the slice has the function's arity."""
     names = ", ".join(fn.arg_names)
-    return f"match *x {{ [{names}] => {call}, _ => Err(Error::LengthMismatch(0)) }}"
+    return f"match *x {{ [{names}] => {call}, _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }}"
 
 
 def _row_function(rt, real: str = "f64") -> str:
@@ -91,7 +91,7 @@ def _rust_frame(fn: Function) -> str:
     k = fn.frame
     lines = [f"fn {fn.name}_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {{"]
     lines.append(f"    let &[{', '.join(fn.arg_names)}] = x else {{")
-    lines.append("        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });")
+    lines.append("        return Err(ElementError { index: 0, error: Error::LengthMismatch(relicore::arg!(0, arguments)) });")
     lines.append("    };")
     for a in fn.arg_names[:k]:
         lines.append(f"    let {a} = {a}.first().copied().unwrap_or(f64::NAN);")

@@ -10,25 +10,26 @@
 //! `NoConvergence`.
 
 use super::Universe;
+use crate::arg;
 use crate::check::{finite_result, non_negative, positive};
 use crate::math::roots::bracketed_newton_relative;
-use crate::{Error, Real, Result};
+use crate::{Arg, Error, Real, Result};
 
 /// Upper end of the search, z = 1e12.
 const U_MAX: f64 = 27.631_021_115_928_547;
 
 impl<T: Real> Universe<T> {
-    fn solve_u<F: FnMut(T) -> (T, T)>(&self, f: F, top: T) -> Result<T> {
+    fn solve_u<F: FnMut(T) -> (T, T)>(&self, f: F, top: T, target: Arg) -> Result<T> {
         let u = bracketed_newton_relative(f, T::zero(), top, T::epsilon() * T::c(2.0), 1100)?;
-        finite_result(u.exp_m1(), 0)
+        finite_result(u.exp_m1(), target)
     }
 
     /// The top of the search, u = ln(1 + 1e12), when the target lies between the values at
-    /// u = 0 and there; `OutOfDomain(0)` when it does not. Where the function fails at
+    /// u = 0 and there; `OutOfDomain(target)` when it does not. Where the function fails at
     /// u = ln(1 + 1e12) (an integral the quadrature cannot resolve, or a value past the largest
     /// float: a past in which E(z) falls toward 0, found by the fuzzing), the top is the
     /// largest u found to 1e-3 of itself, by halving and then bisection, where it succeeds.
-    fn check_reachable<F: FnMut(T) -> (T, T)>(mut f: F) -> Result<T> {
+    fn check_reachable<F: FnMut(T) -> (T, T)>(mut f: F, target: Arg) -> Result<T> {
         let (lo, _) = f(T::zero());
         let mut top = T::c(U_MAX);
         let (mut hi, _) = f(top);
@@ -45,7 +46,7 @@ impl<T: Real> Universe<T> {
                 failed = top;
             }
             if !found {
-                return Err(Error::OutOfDomain(0));
+                return Err(Error::OutOfDomain(target));
             }
             for _ in 0..32 {
                 if failed - top <= T::c(1e-3) * top {
@@ -64,7 +65,7 @@ impl<T: Real> Universe<T> {
         // or lookback time flat to the last bit toward z = 1e12)
         let same_side = (lo > T::zero()) == (hi > T::zero());
         if lo.is_nan() || hi.is_nan() || same_side && lo != T::zero() && hi != T::zero() {
-            return Err(Error::OutOfDomain(0));
+            return Err(Error::OutOfDomain(target));
         }
         Ok(top)
     }
@@ -84,8 +85,8 @@ impl<T: Real> Universe<T> {
             // d ln η/du = −((1+z)/E)/η = −(a/q)/η
             (v.ln() - ln_eta, -(a / self.q_squared(a).sqrt()) / v)
         };
-        let top = Self::check_reachable(f)?;
-        self.solve_u(f, top)
+        let top = Self::check_reachable(f, arg!(0, distance_mpc))?;
+        self.solve_u(f, top, arg!(0, distance_mpc))
     }
 
     /// Redshift at which the line-of-sight comoving distance equals `distance_mpc`.
@@ -102,14 +103,14 @@ impl<T: Real> Universe<T> {
     /// computed up to z = 1e12, at the largest redshift at which it can). Accuracy: round trip
     /// within 1e-12 relative (`f64`).
     pub fn redshift_at_comoving_distance_mpc(&self, distance_mpc: T) -> Result<T> {
-        let distance = non_negative(distance_mpc, 0)?;
+        let distance = non_negative(distance_mpc, arg!(0, distance_mpc))?;
         let d = distance / self.hubble_distance_mpc;
         if d == T::zero() {
             return Ok(T::zero());
         }
         if let Ok(horizon) = self.conformal_time_mpc(T::zero()) {
             if distance >= horizon {
-                return Err(Error::OutOfDomain(0));
+                return Err(Error::OutOfDomain(arg!(0, distance_mpc)));
             }
             if distance >= T::c(0.5) * horizon {
                 // horizon − distance is exact here (Sterbenz, Floating-Point Computation, 1974)
@@ -126,8 +127,8 @@ impl<T: Real> Universe<T> {
             // dχ/du = (1+z)/E = a/q
             (chi - d, a / self.q_squared(a).sqrt())
         };
-        let top = Self::check_reachable(f)?;
-        self.solve_u(f, top)
+        let top = Self::check_reachable(f, arg!(0, distance_mpc))?;
+        self.solve_u(f, top, arg!(0, distance_mpc))
     }
 
     /// Redshift at which the luminosity distance equals `distance_mpc`.
@@ -139,7 +140,7 @@ impl<T: Real> Universe<T> {
     /// is below 1e12). Accuracy: round trip within 1e-12 relative (`f64`). (In a closed model D_L
     /// need not be monotone; the root in the bracket found is returned.)
     pub fn redshift_at_luminosity_distance_mpc(&self, distance_mpc: T) -> Result<T> {
-        let d = non_negative(distance_mpc, 0)? / self.hubble_distance_mpc;
+        let d = non_negative(distance_mpc, arg!(0, distance_mpc))? / self.hubble_distance_mpc;
         if d == T::zero() {
             return Ok(T::zero());
         }
@@ -154,8 +155,8 @@ impl<T: Real> Universe<T> {
             let slope = opz * (dm + opz * self.transverse_slope(chi) * dchi_dz);
             (opz * dm - d, slope)
         };
-        let top = Self::check_reachable(f)?;
-        self.solve_u(f, top)
+        let top = Self::check_reachable(f, arg!(0, distance_mpc))?;
+        self.solve_u(f, top, arg!(0, distance_mpc))
     }
 
     /// Redshift at which the lookback time equals `lookback_gyr`.
@@ -175,14 +176,14 @@ impl<T: Real> Universe<T> {
     /// largest redshift below it at which the lookback time can be computed.
     /// Accuracy: round trip within 1e-12 relative (`f64`).
     pub fn redshift_at_lookback_time_gyr(&self, lookback_gyr: T) -> Result<T> {
-        let lookback = non_negative(lookback_gyr, 0)?;
+        let lookback = non_negative(lookback_gyr, arg!(0, lookback_gyr))?;
         let t = lookback / self.hubble_time_gyr;
         if t == T::zero() {
             return Ok(T::zero());
         }
         if let Ok(age) = self.age_gyr(T::zero()) {
             if lookback >= age {
-                return Err(Error::OutOfDomain(0));
+                return Err(Error::OutOfDomain(arg!(0, lookback_gyr)));
             }
             if lookback >= T::c(0.5) * age {
                 // age − lookback is exact here (Sterbenz, Floating-Point Computation, 1974)
@@ -201,8 +202,8 @@ impl<T: Real> Universe<T> {
             // dt/du = (1+z) dt/dz = 1/E = a²/q
             (v - t, a * a / self.q_squared(a).sqrt())
         };
-        let top = Self::check_reachable(f)?;
-        self.solve_u(f, top)
+        let top = Self::check_reachable(f, arg!(0, lookback_gyr))?;
+        self.solve_u(f, top, arg!(0, lookback_gyr))
     }
 
     /// Redshift at which the age of the universe equals `age_gyr`.
@@ -213,7 +214,7 @@ impl<T: Real> Universe<T> {
     /// below the age at z = 1e12 (or at the largest redshift below it at which the age can be
     /// computed). Accuracy: round trip within 1e-12 relative (`f64`).
     pub fn redshift_at_age_gyr(&self, age_gyr: T) -> Result<T> {
-        let t = positive(age_gyr, 0)? / self.hubble_time_gyr;
+        let t = positive(age_gyr, arg!(0, age_gyr))? / self.hubble_time_gyr;
         let ln_t = t.ln();
         let f = |u: T| {
             let z = u.exp_m1();
@@ -225,7 +226,7 @@ impl<T: Real> Universe<T> {
             // d ln t/du = −(1/E)/t
             (v.ln() - ln_t, -(a * a / self.q_squared(a).sqrt()) / v)
         };
-        let top = Self::check_reachable(f)?;
-        self.solve_u(f, top)
+        let top = Self::check_reachable(f, arg!(0, age_gyr))?;
+        self.solve_u(f, top, arg!(0, age_gyr))
     }
 }

@@ -3,7 +3,7 @@
 //! never leaves the bracket: a Newton step that would, or that shrinks the bracket too slowly,
 //! is replaced by bisection.
 
-use crate::{Error, Real, Result};
+use crate::{Arg, Error, Real, Result};
 
 /// Finds x in [lo, hi] with f(x) = 0, where `f` returns (f(x), f'(x)).
 ///
@@ -44,7 +44,7 @@ pub fn solve_monotone_positive<T: Real, F>(
     mut f: F,
     guess: T,
     increasing: bool,
-    domain_arg: u8,
+    domain_arg: Arg,
 ) -> Result<T>
 where
     F: FnMut(T) -> (T, T),

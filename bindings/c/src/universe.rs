@@ -249,7 +249,7 @@ pub unsafe extern "C" fn relicore_universe_check_parameters(
                 Ok(_) => (-1, Ok(())),
                 Err(e) => {
                     let which = match e {
-                        Error::InvalidParameter(i) => i32::from(i),
+                        Error::InvalidParameter(i) => i32::from(i.position()),
                         _ => -1,
                     };
                     (which, Err(Failure::Reported(status_of(e))))

@@ -17,7 +17,8 @@ use crate::decoupling::universe_refused;
 use crate::errors::{build, py_repr, shape_error};
 use crate::functions::{Receiver, U};
 
-/// Names of the parameters in the order of the core's `Error::InvalidParameter(i)`.
+/// Names of the parameters in the order of the positions of the core's
+/// `Error::InvalidParameter`.
 pub(crate) const PARAMETER_NAMES: [&str; 10] = [
     "h0_km_s_mpc",
     "omega_matter",
@@ -137,7 +138,8 @@ fn parameter_repr(p: &UniverseParameters<f64>, i: usize) -> String {
 fn construction_error(py: Python<'_>, p: &UniverseParameters<f64>, err: Error) -> PyErr {
     let status = crate::errors::status_code(err);
     match err {
-        Error::InvalidParameter(i) => {
+        Error::InvalidParameter(a) => {
+            let i = a.position();
             let name = PARAMETER_NAMES
                 .get(usize::from(i))
                 .copied()
@@ -390,7 +392,7 @@ impl Receiver for PyUniverse {
                 "undefined for a universe without radiation (cmb_temperature_k = {})",
                 py_repr(self.params().cmb_temperature_k)
             )),
-            ("saha_ionized_fraction", Error::OutOfDomain(1)) => Some(format!(
+            ("saha_ionized_fraction", Error::OutOfDomain(a)) if a.position() == 1 => Some(format!(
                 "must not exceed {} (the highest redshift of the function)",
                 py_repr(relicore::decoupling::SAHA_HIGHEST_REDSHIFT)
             )),
@@ -437,14 +439,23 @@ mod tests {
 
     #[test]
     fn parameter_names_follow_the_core_positions() {
-        // Error::InvalidParameter(i) names the i-th field of UniverseParameters
+        // Error::InvalidParameter names the field of UniverseParameters at its position
         let mut p = UniverseParameters::new(70.0, 0.3);
         p.omega_baryon = 0.5;
-        assert_eq!(U::new(p).err(), Some(Error::InvalidParameter(2)));
+        assert_eq!(
+            U::new(p).err(),
+            Some(Error::InvalidParameter(relicore::arg!(2, omega_baryon)))
+        );
         assert_eq!(PARAMETER_NAMES[2], "omega_baryon");
         let mut p = UniverseParameters::new(70.0, 0.3);
         p.helium_mass_fraction = 1.0;
-        assert_eq!(U::new(p).err(), Some(Error::InvalidParameter(9)));
+        assert_eq!(
+            U::new(p).err(),
+            Some(Error::InvalidParameter(relicore::arg!(
+                9,
+                helium_mass_fraction
+            )))
+        );
         assert_eq!(PARAMETER_NAMES[9], "helium_mass_fraction");
         assert!(parameter_rule(&p, 9).contains("below 1"));
     }

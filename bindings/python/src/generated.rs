@@ -22,7 +22,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: Some(spectral_radiance_wavelength_array),
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, temperature_k] => relicore::blackbody::spectral_radiance_wavelength(wavelength_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: Some(spectral_radiance_wavelength_array_f32) }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, temperature_k] => relicore::blackbody::spectral_radiance_wavelength(wavelength_m, temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: Some(spectral_radiance_wavelength_array_f32) }),
     },
     Spec {
         name: "spectral_radiance_frequency",
@@ -34,7 +34,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: Some(spectral_radiance_frequency_array),
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, temperature_k] => relicore::blackbody::spectral_radiance_frequency(frequency_hz, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: Some(spectral_radiance_frequency_array_f32) }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, temperature_k] => relicore::blackbody::spectral_radiance_frequency(frequency_hz, temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: Some(spectral_radiance_frequency_array_f32) }),
     },
     Spec {
         name: "spectral_radiance_wavenumber",
@@ -46,7 +46,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: Some(spectral_radiance_wavenumber_array),
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavenumber_per_m, temperature_k] => relicore::blackbody::spectral_radiance_wavenumber(wavenumber_per_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: Some(spectral_radiance_wavenumber_array_f32) }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavenumber_per_m, temperature_k] => relicore::blackbody::spectral_radiance_wavenumber(wavenumber_per_m, temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: Some(spectral_radiance_wavenumber_array_f32) }),
     },
     Spec {
         name: "photon_radiance_wavelength",
@@ -142,7 +142,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [temperature_k] => relicore::blackbody::photon_number_density(temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [temperature_k] => relicore::blackbody::photon_number_density(temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None }),
     },
     Spec {
         name: "radiation_energy_density",
@@ -154,7 +154,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [temperature_k] => relicore::blackbody::radiation_energy_density(temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [temperature_k] => relicore::blackbody::radiation_energy_density(temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None }),
     },
     Spec {
         name: "peak_wavelength",
@@ -262,7 +262,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [lower_m, upper_m, temperature_k] => relicore::blackbody::band_radiance_wavelength(lower_m, upper_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [lower_m, upper_m, temperature_k] => relicore::blackbody::band_radiance_wavelength(lower_m, upper_m, temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None }),
     },
     Spec {
         name: "band_photon_radiance_wavelength",
@@ -310,7 +310,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, spectral_radiance] => relicore::blackbody::brightness_temperature_wavelength(wavelength_m, spectral_radiance), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, spectral_radiance] => relicore::blackbody::brightness_temperature_wavelength(wavelength_m, spectral_radiance), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None }),
     },
     Spec {
         name: "brightness_temperature_frequency",
@@ -322,7 +322,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, spectral_radiance] => relicore::blackbody::brightness_temperature_frequency(frequency_hz, spectral_radiance), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, spectral_radiance] => relicore::blackbody::brightness_temperature_frequency(frequency_hz, spectral_radiance), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None }),
     },
     Spec {
         name: "rayleigh_jeans_temperature",
@@ -414,11 +414,11 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "measured_spectral_radiance_wavelength",
         args: &["wavelength_m", "object_temperature_k", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
         free: false,
-        body: Body::AN(|_, x| match *x { [wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::AN(|_, x| match *x { [wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None }),
     },
     Spec {
         name: "measured_spectral_radiance_frequency",
@@ -426,11 +426,11 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "measured_spectral_radiance_frequency",
         args: &["frequency_hz", "object_temperature_k", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
         free: false,
-        body: Body::AN(|_, x| match *x { [frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::AN(|_, x| match *x { [frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None }),
     },
     Spec {
         name: "measured_band_radiance_wavelength",
@@ -438,7 +438,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "measured_band_radiance_wavelength",
         args: &["lower_m", "upper_m", "object_temperature_k", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
         free: false,
-        body: Body::AN(|_, x| match *x { [lower_m, upper_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_band_radiance_wavelength(lower_m, upper_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::AN(|_, x| match *x { [lower_m, upper_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_band_radiance_wavelength(lower_m, upper_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: None,
         width: 1,
@@ -450,11 +450,11 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "object_temperature_wavelength",
         args: &["wavelength_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
         free: false,
-        body: Body::AN(|_, x| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_wavelength(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::AN(|_, x| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_wavelength(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: Some((1, object_temperature_wavelength_frame)),
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_wavelength(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_wavelength(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None }),
     },
     Spec {
         name: "object_temperature_frequency",
@@ -462,11 +462,11 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "object_temperature_frequency",
         args: &["frequency_hz", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
         free: false,
-        body: Body::AN(|_, x| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_frequency(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::AN(|_, x| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_frequency(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: Some((1, object_temperature_frequency_frame)),
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_frequency(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_frequency(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None }),
     },
     Spec {
         name: "object_temperature_band",
@@ -474,7 +474,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "object_temperature_band",
         args: &["lower_m", "upper_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
         free: false,
-        body: Body::AN(|_, x| match *x { [lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_band(lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::AN(|_, x| match *x { [lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_band(lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: Some((2, object_temperature_band_frame)),
         width: 1,
@@ -498,7 +498,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "brightness_temperature_wavelength_with_uncertainty",
         args: &["wavelength_m", "spectral_radiance", "spectral_radiance_uncertainty"],
         free: false,
-        body: Body::Row(|_, x, out| match *x { [wavelength_m, spectral_radiance, spectral_radiance_uncertainty] => relicore::blackbody::brightness_temperature_wavelength_with_uncertainty(wavelength_m, spectral_radiance, spectral_radiance_uncertainty).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::Row(|_, x, out| match *x { [wavelength_m, spectral_radiance, spectral_radiance_uncertainty] => relicore::blackbody::brightness_temperature_wavelength_with_uncertainty(wavelength_m, spectral_radiance, spectral_radiance_uncertainty).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: None,
         width: 8,
@@ -510,7 +510,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "brightness_temperature_frequency_with_uncertainty",
         args: &["frequency_hz", "spectral_radiance", "spectral_radiance_uncertainty"],
         free: false,
-        body: Body::Row(|_, x, out| match *x { [frequency_hz, spectral_radiance, spectral_radiance_uncertainty] => relicore::blackbody::brightness_temperature_frequency_with_uncertainty(frequency_hz, spectral_radiance, spectral_radiance_uncertainty).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::Row(|_, x, out| match *x { [frequency_hz, spectral_radiance, spectral_radiance_uncertainty] => relicore::blackbody::brightness_temperature_frequency_with_uncertainty(frequency_hz, spectral_radiance, spectral_radiance_uncertainty).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: None,
         width: 8,
@@ -522,11 +522,11 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "object_temperature_wavelength_with_uncertainty",
         args: &["wavelength_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k", "signal_uncertainty", "emissivity_uncertainty", "reflected_temperature_uncertainty_k", "transmittance_uncertainty", "path_temperature_uncertainty_k"],
         free: false,
-        body: Body::Row(|_, x, out| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_wavelength_with_uncertainty(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::Row(|_, x, out| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_wavelength_with_uncertainty(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: None,
         width: 8,
-        single: Some(Single { body: SingleBody::Row(|x, out| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_wavelength_with_uncertainty(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row_f32(v, out)), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Row(|x, out| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_wavelength_with_uncertainty(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row_f32(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None }),
     },
     Spec {
         name: "object_temperature_frequency_with_uncertainty",
@@ -534,11 +534,11 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "object_temperature_frequency_with_uncertainty",
         args: &["frequency_hz", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k", "signal_uncertainty", "emissivity_uncertainty", "reflected_temperature_uncertainty_k", "transmittance_uncertainty", "path_temperature_uncertainty_k"],
         free: false,
-        body: Body::Row(|_, x, out| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_frequency_with_uncertainty(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::Row(|_, x, out| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_frequency_with_uncertainty(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: None,
         width: 8,
-        single: Some(Single { body: SingleBody::Row(|x, out| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_frequency_with_uncertainty(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row_f32(v, out)), _ => Err(Error::LengthMismatch(0)) }), array: None }),
+        single: Some(Single { body: SingleBody::Row(|x, out| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_frequency_with_uncertainty(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row_f32(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None }),
     },
     Spec {
         name: "object_temperature_band_with_uncertainty",
@@ -546,7 +546,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "object_temperature_band_with_uncertainty",
         args: &["lower_m", "upper_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k", "signal_uncertainty", "emissivity_uncertainty", "reflected_temperature_uncertainty_k", "transmittance_uncertainty", "path_temperature_uncertainty_k"],
         free: false,
-        body: Body::Row(|_, x, out| match *x { [lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_band_with_uncertainty(lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::Row(|_, x, out| match *x { [lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_band_with_uncertainty(lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: None,
         width: 8,
@@ -558,7 +558,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "calibrated_temperature_with_uncertainty",
         args: &["frequency_hz", "reading_hot", "temperature_hot_k", "reading_cold", "temperature_cold_k", "reading", "reading_hot_uncertainty", "temperature_hot_uncertainty_k", "reading_cold_uncertainty", "temperature_cold_uncertainty_k", "reading_uncertainty"],
         free: false,
-        body: Body::Row(|_, x, out| match *x { [frequency_hz, reading_hot, temperature_hot_k, reading_cold, temperature_cold_k, reading, reading_hot_uncertainty, temperature_hot_uncertainty_k, reading_cold_uncertainty, temperature_cold_uncertainty_k, reading_uncertainty] => relicore::blackbody::calibrated_temperature_with_uncertainty(frequency_hz, reading_hot, temperature_hot_k, reading_cold, temperature_cold_k, reading, reading_hot_uncertainty, temperature_hot_uncertainty_k, reading_cold_uncertainty, temperature_cold_uncertainty_k, reading_uncertainty).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::Row(|_, x, out| match *x { [frequency_hz, reading_hot, temperature_hot_k, reading_cold, temperature_cold_k, reading, reading_hot_uncertainty, temperature_hot_uncertainty_k, reading_cold_uncertainty, temperature_cold_uncertainty_k, reading_uncertainty] => relicore::blackbody::calibrated_temperature_with_uncertainty(frequency_hz, reading_hot, temperature_hot_k, reading_cold, temperature_cold_k, reading, reading_hot_uncertainty, temperature_hot_uncertainty_k, reading_cold_uncertainty, temperature_cold_uncertainty_k, reading_uncertainty).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: None,
         width: 8,
@@ -1471,7 +1471,7 @@ fn spectral_radiance_wavenumber_array_f32(x: &[f32], rest: &[f32], out: &mut [f3
 /// `object_temperature_wavelength_array` of the core (a frame: the first 1 argument(s) single values, the others slices of the chunk's length or of one value).
 fn object_temperature_wavelength_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
     let &[wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
-        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(relicore::arg!(0, arguments)) });
     };
     let wavelength_m = wavelength_m.first().copied().unwrap_or(f64::NAN);
     relicore::blackbody::object_temperature_wavelength_array(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out)
@@ -1480,7 +1480,7 @@ fn object_temperature_wavelength_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayRe
 /// `object_temperature_frequency_array` of the core (a frame: the first 1 argument(s) single values, the others slices of the chunk's length or of one value).
 fn object_temperature_frequency_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
     let &[frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
-        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(relicore::arg!(0, arguments)) });
     };
     let frequency_hz = frequency_hz.first().copied().unwrap_or(f64::NAN);
     relicore::blackbody::object_temperature_frequency_array(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out)
@@ -1489,7 +1489,7 @@ fn object_temperature_frequency_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayRes
 /// `object_temperature_band_array` of the core (a frame: the first 2 argument(s) single values, the others slices of the chunk's length or of one value).
 fn object_temperature_band_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
     let &[lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
-        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(relicore::arg!(0, arguments)) });
     };
     let lower_m = lower_m.first().copied().unwrap_or(f64::NAN);
     let upper_m = upper_m.first().copied().unwrap_or(f64::NAN);

@@ -58,7 +58,7 @@ macro_rules! five {
     ($x:expr, |$a:ident, $b:ident, $c:ident, $d:ident, $e:ident| $body:expr) => {
         match *$x {
             [$a, $b, $c, $d, $e] => $body,
-            _ => Err(Error::LengthMismatch(2)),
+            _ => Err(Error::LengthMismatch(relicore::arg!(2, values))),
         }
     };
 }
@@ -83,14 +83,14 @@ fn object_uncertainty(w: &[f64], r: &[f64], x: &[f64], out: &mut [f64]) -> Resul
             )
             .map(|v| put_row(v, out))
         }
-        _ => Err(Error::LengthMismatch(2)),
+        _ => Err(Error::LengthMismatch(relicore::arg!(2, values))),
     }
 }
 
 fn derivative(w: &[f64], r: &[f64], x: &[f64], out: &mut [f64]) -> Result<()> {
     match *x {
         [t] => bb::response_weighted_radiance_temperature_derivative(w, r, t).map(|v| put(out, v)),
-        _ => Err(Error::LengthMismatch(2)),
+        _ => Err(Error::LengthMismatch(relicore::arg!(2, values))),
     }
 }
 
