@@ -754,7 +754,8 @@ const char *relicore_version(void);
  *
  * Returns W m⁻² sr⁻¹ m⁻¹, ≥ 0 (0 only where the true value is below the smallest subnormal).
  *
- * Errors: `NonFinite(i)` for NaN or ±∞, `NonPositive(i)` for ≤ 0, i the argument position.
+ * Errors: `NonFinite(i)` for NaN or ±∞, `NonPositive(i)` for ≤ 0, i the position of the
+ * argument the error names.
  *
  * Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath; see the module documentation.
  *
@@ -785,7 +786,8 @@ int32_t relicore_spectral_radiance_wavelength(double wavelength_m,
  *
  * Returns W m⁻² sr⁻¹ m⁻¹, ≥ 0 (0 only where the true value is below the smallest subnormal).
  *
- * Errors: `NonFinite(i)` for NaN or ±∞, `NonPositive(i)` for ≤ 0, i the argument position.
+ * Errors: `NonFinite(i)` for NaN or ±∞, `NonPositive(i)` for ≤ 0, i the position of the
+ * argument the error names.
  *
  * Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath; see the module documentation.
  *

@@ -55,7 +55,8 @@ macro_rules! arg {
 /// What was wrong with a call. Small (two words) and `Copy`; the [`Arg`] payload names the
 /// offending argument and gives its zero-based position in the function's parameter list, so
 /// every face can name it (C maps the kind to a status code, Python names the argument in its own
-/// signature, its value and the array index).
+/// signature, its value and the array index). The functions' documentation writes the error
+/// naming the argument at position i as `NonFinite(i)`, `NonPositive(i)`, ….
 #[derive(Debug, Clone, Copy, PartialEq, Eq, thiserror::Error)]
 #[non_exhaustive]
 pub enum Error {

@@ -16,7 +16,8 @@ use relicore_dispatch::widest;
 ///
 /// Returns W m⁻² sr⁻¹ m⁻¹, ≥ 0 (0 only where the true value is below the smallest subnormal).
 ///
-/// Errors: `NonFinite(i)` for NaN or ±∞, `NonPositive(i)` for ≤ 0, i the argument position.
+/// Errors: `NonFinite(i)` for NaN or ±∞, `NonPositive(i)` for ≤ 0, i the position of the
+/// argument the error names.
 ///
 /// Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath; see the module documentation.
 ///
@@ -55,7 +56,8 @@ pub unsafe extern "C" fn relicore_spectral_radiance_wavelength(
 ///
 /// Returns W m⁻² sr⁻¹ m⁻¹, ≥ 0 (0 only where the true value is below the smallest subnormal).
 ///
-/// Errors: `NonFinite(i)` for NaN or ±∞, `NonPositive(i)` for ≤ 0, i the argument position.
+/// Errors: `NonFinite(i)` for NaN or ±∞, `NonPositive(i)` for ≤ 0, i the position of the
+/// argument the error names.
 ///
 /// Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath; see the module documentation.
 ///

@@ -24,7 +24,8 @@ def spectral_radiance_wavelength(wavelength_m: Any, temperature_k: Any, *, nan_o
 
     Returns W m⁻² sr⁻¹ m⁻¹, ≥ 0 (0 only where the true value is below the smallest subnormal).
 
-    Errors: `NonFinite(i)` for NaN or ±∞, `NonPositive(i)` for ≤ 0, i the argument position.
+    Errors: `NonFinite(i)` for NaN or ±∞, `NonPositive(i)` for ≤ 0, i the position of the
+    argument the error names.
 
     Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath; see the module documentation.
     """
