@@ -338,7 +338,8 @@ fn single_input<T: Real>(t: T, d: T, u: T) -> Result<TemperatureUncertainty<T>> 
 /// Returns a [`TemperatureUncertainty`] with `inputs` = 5 and the coefficients in the order
 /// (reading_hot, temperature_hot, reading_cold, temperature_cold, reading), in K per reading
 /// unit or K/K. Errors: those of [`two_load_calibration`] and [`calibrated_temperature`]
-/// (`OutOfDomain(5)` for a reading no blackbody gives); `NonFinite(i)`, `Negative(i)` for
+/// (`OutOfDomain(5)` for a reading no blackbody gives, `DegenerateCalibration(1)` for a gain
+/// that underflows to 0); `NonFinite(i)`, `Negative(i)` for
 /// i = 6…10; `OutOfDomain(5)` when J′(T) is not a positive normal number.
 ///
 /// Accuracy: temperature as [`calibrated_temperature`]; coefficients within 1e-12 relative
@@ -365,9 +366,13 @@ pub fn calibrated_temperature_with_uncertainty<T: Real>(
         reading_cold,
         temperature_cold_k,
     )?;
+    // the calibration is argument 0 of calibrated_temperature, built here from arguments 0 to 4:
+    // a gain that is 0 (the readings' span underflowed against the loads' span) is a degenerate
+    // calibration, named by the reading as two_load_calibration names a gain it cannot form
     let t = calibrated_temperature(&cal, reading).map_err(|e| match e {
         Error::NonFinite(_) => Error::NonFinite(arg!(5, reading)),
         Error::OutOfDomain(_) => Error::OutOfDomain(arg!(5, reading)),
+        Error::DegenerateCalibration(_) => Error::DegenerateCalibration(arg!(1, reading_hot)),
         other => other,
     })?;
     let us = [

@@ -5,11 +5,14 @@
 //! cannot be computed up to z = 1e12: see `check_reachable`), with the exact derivative
 //! (dχ/du = D_H/(q(1+z)), dt/du = t_H/E, …) and a relative tolerance of a few ulp in u.
 //! Up to 1100 iterations: enough for bisection alone to reach a redshift of 1e-300 from the
-//! top of the bracket, so tiny targets converge too; a target so small that the redshift is
-//! below the normal range (a distance or lookback time below about 1e-305 Mpc or Gyr) gives
-//! `NoConvergence`.
+//! top of the bracket, so tiny targets converge too. A target so small that its ratio to D_H
+//! (or to 1/H0) is subnormal (a distance below about 1e-304 Mpc, a lookback time below about
+//! 1e-306 Gyr in `f64`), where no relative tolerance can be met, is inverted by the series of
+//! the function at z = 0 to second order, z = x + k x² with k from E′(0): the third-order term
+//! lies far below the smallest subnormal, so the result is the series' value to its rounding.
 
 use super::Universe;
+use super::neutrino::density_ratio;
 use crate::arg;
 use crate::check::{finite_result, non_negative, positive};
 use crate::math::roots::bracketed_newton_relative;
@@ -19,6 +22,37 @@ use crate::{Arg, Error, Real, Result};
 const U_MAX: f64 = 27.631_021_115_928_547;
 
 impl<T: Real> Universe<T> {
+    /// E′(0) = dE/dz at z = 0, for the series of the inversions at a subnormal target. With
+    /// E²(z) = q²(a)/a⁴ and a = 1/(1+z), dE²/dz = 4q²(1) − dq²/da(1) at z = 0 and
+    /// E′ = (dE²/dz)/(2E). dq²/da(1) = Ω_cb + 2Ω_k + Ω_de (4 + p + 3w_a) (p the exponent of the
+    /// dark-energy term, `de_power`) plus the massive neutrinos' A·d R(y a)/da, the one part taken
+    /// by a central difference (h = 2⁻¹⁰: relative error about 1e-7 of that part, which moves no
+    /// result of the series by a bit).
+    fn slope_today(&self) -> T {
+        let one = T::one();
+        let mut dq2 = self.omega_cb + T::c(2.0) * self.params.omega_curvature;
+        let h = T::c(1.0 / 1024.0);
+        for &(c, ym) in self.massive.iter().take(self.n_massive) {
+            let d = density_ratio(ym * (one + h)) - density_ratio(ym * (one - h));
+            dq2 = dq2 + c * d / (h + h);
+        }
+        if self.omega_de != T::zero() {
+            dq2 = dq2 + self.omega_de * (T::c(4.0) + self.de_power + T::c(3.0) * self.params.wa);
+        }
+        let q2 = self.q_squared(one);
+        (T::c(4.0) * q2 - dq2) / (T::c(2.0) * q2.sqrt())
+    }
+
+    /// The redshift of a subnormal dimensionless target x (a distance in units of D_H, a
+    /// lookback time in units of 1/H0) from the series of the function at z = 0,
+    /// x = z − k z² + O(z³), inverted: z = x + k x² + O(x³) (the O(x³) is far below the smallest
+    /// subnormal). The Newton iteration cannot meet its relative tolerance there: the spacing of
+    /// subnormals is absolute. `None` where the second-order term is not a finite number.
+    fn series_at_subnormal(x: T, k: T) -> Option<T> {
+        let z = x + (k * x) * x;
+        (z.is_finite() && z >= T::zero()).then_some(z)
+    }
+
     fn solve_u<F: FnMut(T) -> (T, T)>(&self, f: F, top: T, target: Arg) -> Result<T> {
         let u = bracketed_newton_relative(f, T::zero(), top, T::epsilon() * T::c(2.0), 1100)?;
         finite_result(u.exp_m1(), target)
@@ -108,6 +142,12 @@ impl<T: Real> Universe<T> {
         if d == T::zero() {
             return Ok(T::zero());
         }
+        // χ = z − E′(0) z²/2 + O(z³)
+        if d < T::min_positive_value() {
+            if let Some(z) = Self::series_at_subnormal(d, T::c(0.5) * self.slope_today()) {
+                return Ok(z);
+            }
+        }
         if let Ok(horizon) = self.conformal_time_mpc(T::zero()) {
             if distance >= horizon {
                 return Err(Error::OutOfDomain(arg!(0, distance_mpc)));
@@ -143,6 +183,13 @@ impl<T: Real> Universe<T> {
         let d = non_negative(distance_mpc, arg!(0, distance_mpc))? / self.hubble_distance_mpc;
         if d == T::zero() {
             return Ok(T::zero());
+        }
+        // D_L/D_H = (1+z) D_M/D_H = z + (1 − E′(0)/2) z² + O(z³) (D_M = χ + O(χ³))
+        if d < T::min_positive_value() {
+            let k = T::c(0.5) * self.slope_today() - T::one();
+            if let Some(z) = Self::series_at_subnormal(d, k) {
+                return Ok(z);
+            }
         }
         let f = |u: T| {
             let z = u.exp_m1();
@@ -180,6 +227,13 @@ impl<T: Real> Universe<T> {
         let t = lookback / self.hubble_time_gyr;
         if t == T::zero() {
             return Ok(T::zero());
+        }
+        // H0 t = z − (1 + E′(0)) z²/2 + O(z³)
+        if t < T::min_positive_value() {
+            let k = T::c(0.5) * (T::one() + self.slope_today());
+            if let Some(z) = Self::series_at_subnormal(t, k) {
+                return Ok(z);
+            }
         }
         if let Ok(age) = self.age_gyr(T::zero()) {
             if lookback >= age {
