@@ -112,7 +112,7 @@ impl<T: Real> Universe<T> {
     /// density overflows, Ω_m < 0, Ω_b < 0 or Ω_b > Ω_m, T0 < 0, N_eff < 0, a negative mass, a
     /// positive mass with T0 = 0 (no neutrino background), massive neutrinos denser today than
     /// Ω_m, Y_p outside [0, 1); `NoBigBang` when E(z)² ≤ 0 somewhere between today and a → 0
-    /// (checked on the 4096 points of a logarithmic grid in a from 1e-30 to 1 and on every node
+    /// (checked on the 4097 points of a logarithmic grid in a from 1e-30 to 1 and on every node
     /// of the distance table); `InvalidParameter(7)` (w0, with wa) when the dark-energy density
     /// overflows the type somewhere on that grid, so that E(z) has no value there: an equation
     /// of state far from physical ones (for `f64`, w0 above about 3.8, or w0 + wa, the

@@ -71,7 +71,13 @@ fn parameter_rule(p: &UniverseParameters<f64>, i: u8) -> String {
                 "must be positive".into()
             }
         }),
-        1 => finite(p.omega_matter).unwrap_or_else(|| "must not be negative".into()),
+        1 => finite(p.omega_matter).unwrap_or_else(|| {
+            if p.omega_matter < 0.0 {
+                "must not be negative".into()
+            } else {
+                "so large that E(z)^2 overflows on the way back".into()
+            }
+        }),
         2 => finite(p.omega_baryon).unwrap_or_else(|| {
             if p.omega_baryon < 0.0 {
                 "must not be negative".into()
@@ -109,6 +115,12 @@ fn parameter_rule(p: &UniverseParameters<f64>, i: u8) -> String {
                 )
             }
         }
+        // the core names w0 (with wa) when the dark-energy density overflows on the way back
+        7 | 8 => finite(if i == 7 { p.w0 } else { p.wa }).unwrap_or_else(|| {
+            "with wa, an equation of state so far from physical ones that the dark-energy \
+             density overflows on the way back (w0 + wa is the early-time w)"
+                .into()
+        }),
         9 => finite(p.helium_mass_fraction)
             .unwrap_or_else(|| "must be at least 0 and below 1".into()),
         _ => "must be finite".into(),
