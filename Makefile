@@ -205,10 +205,12 @@ install-tools:
 install-test: deps install-tools
 	bash tests/install/run.sh
 
-# The README snippet test (tests/readme/run.py): every ```python and ```rust block of README.md,
-# read from the file after its `<!-- readme-test: NAME -->` line (the install test's convention),
-# run as written: Python in the venv with the package just built, Rust as the body of a main
-# returning Result<_, relicore::Error> in a temporary package depending on the core (offline).
+# The README snippet test (tests/readme/run.py): every ```python, ```rust, ```c and ```fortran
+# block of README.md, read from the file after its `<!-- readme-test: NAME -->` line (the install
+# test's convention), run as written: Python in the venv with the package just built, Rust as the
+# body of a main returning Result<_, relicore::Error> in a temporary package depending on the
+# core (offline), C as the body of main and Fortran in a program (or as the whole program it is),
+# both linked with the release-c librelicore.a.
 .PHONY: readme-test
 readme-test: deps python-build
 	$(PY) tests/readme/run.py --python $(PY)

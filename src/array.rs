@@ -10,7 +10,7 @@
 //! is the scalar function's result bit for bit (the property tests check it), and the first
 //! failing element is reported as the scalar function would report it.
 
-use crate::{ArrayResult, ElementError, Error, Real, Result};
+use crate::{Arg, ArrayResult, ElementError, Error, Real, Result};
 
 /// Elements per block: long enough for SIMD loops to run at full speed, short enough that a
 /// block recomputed by the scalar path costs little and stays in the L1 cache.
@@ -26,7 +26,7 @@ pub(crate) const BLOCK: usize = 64;
 pub(crate) fn blockwise<T: Real>(
     x: &[T],
     out: &mut [T],
-    out_arg: u8,
+    out_arg: Arg,
     fast: impl Fn(T) -> (T, bool),
     scalar: impl Fn(T) -> Result<T>,
 ) -> ArrayResult {
@@ -74,7 +74,7 @@ fn redo_block<T: Real>(
 
 /// `Ok` when the output has the input's length; otherwise `out` is filled with NaN and the error
 /// is `LengthMismatch(out_arg)` at the shorter length.
-fn same_length<T: Real>(n: usize, out: &mut [T], out_arg: u8) -> ArrayResult {
+fn same_length<T: Real>(n: usize, out: &mut [T], out_arg: Arg) -> ArrayResult {
     if n == out.len() {
         return Ok(());
     }

@@ -52,7 +52,7 @@ pub mod math;
 mod real;
 
 pub use dual::Dual;
-pub use error::{ArrayResult, ElementError, Error, Result};
+pub use error::{Arg, ArrayResult, ElementError, Error, Result};
 pub use real::Real;
 
 /// Version of the core crate (`major.minor.patch`).

@@ -5,9 +5,9 @@
 //! `relicore::decoupling`), f_He · ½[tanh((z_He − z)/Δz_He) − tanh((3.5 − z)/0.5)], with f_He
 //! computed here from Y_p and the atom masses printed in that doc (AME 2020, from memory).
 
-use relicore::Error;
 use relicore::cosmology::{Universe, UniverseParameters};
 use relicore::decoupling::{HistoryOptions, ThermalHistory};
+use relicore::{Error, arg};
 
 /// Base ΛCDM parameters of Planck Collaboration 2020 (A&A 641, A6, Table 2; from memory).
 fn planck() -> Universe<f64> {
@@ -101,13 +101,41 @@ fn a_later_or_earlier_helium_reionisation_moves_the_late_time_ionisation() {
 fn the_options_are_checked() {
     let u = planck();
     let cases = [
-        (f64::NAN, 0.5, Error::NonFinite(3)),
-        (-0.1, 0.5, Error::Negative(3)),
-        (20.5, 0.5, Error::OutOfDomain(3)),
-        (3.5, f64::INFINITY, Error::NonFinite(4)),
-        (3.5, 0.05, Error::OutOfDomain(4)),
-        (3.5, 10.5, Error::OutOfDomain(4)),
-        (3.5, -1.0, Error::OutOfDomain(4)),
+        (
+            f64::NAN,
+            0.5,
+            Error::NonFinite(arg!(3, helium_reionization_redshift)),
+        ),
+        (
+            -0.1,
+            0.5,
+            Error::Negative(arg!(3, helium_reionization_redshift)),
+        ),
+        (
+            20.5,
+            0.5,
+            Error::OutOfDomain(arg!(3, helium_reionization_redshift)),
+        ),
+        (
+            3.5,
+            f64::INFINITY,
+            Error::NonFinite(arg!(4, helium_reionization_width)),
+        ),
+        (
+            3.5,
+            0.05,
+            Error::OutOfDomain(arg!(4, helium_reionization_width)),
+        ),
+        (
+            3.5,
+            10.5,
+            Error::OutOfDomain(arg!(4, helium_reionization_width)),
+        ),
+        (
+            3.5,
+            -1.0,
+            Error::OutOfDomain(arg!(4, helium_reionization_width)),
+        ),
     ];
     for (hz, hw, want) in cases {
         let mut h = Box::new(ThermalHistory::<f64>::new(&u, HistoryOptions::default()).unwrap());

@@ -2,7 +2,8 @@
 // rustdoc: the property and threads tests of every regular function. Do not edit; change the table or the core's docs and run
 // `python3 bindings/generate.py --write` (`make test` fails when this file is not current).
 //! Every regular function of the table against its contract on arbitrary bit patterns
-//! (no panic; `Ok` holds a finite value; a NaN argument is refused), and the functions
+//! (no panic; `Ok` holds a finite value; a NaN argument is refused; an error names the
+//! argument at its position by the table's name, the core's parameter name), and the functions
 //! without a receiver called from several threads at once give the serial bits.
 
 use proptest::prelude::*;
@@ -42,8 +43,9 @@ proptest! {
     fn contract_spectral_radiance_wavelength_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::spectral_radiance_wavelength(x0, x1) {
-            prop_assert!(v.is_finite(), "spectral_radiance_wavelength({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "spectral_radiance_wavelength: NaN accepted");
+        match relicore::blackbody::spectral_radiance_wavelength(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "spectral_radiance_wavelength({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "spectral_radiance_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["wavelength_m", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "spectral_radiance_wavelength: {:?}", e); },
         }
     }
 }
@@ -53,8 +55,9 @@ proptest! {
     fn contract_spectral_radiance_wavelength_f32(x0 in any::<u32>(), x1 in any::<u32>()) {
         let x0 = f32::from_bits(x0); let x1 = f32::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::spectral_radiance_wavelength(x0, x1) {
-            prop_assert!(v.is_finite(), "spectral_radiance_wavelength({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "spectral_radiance_wavelength: NaN accepted");
+        match relicore::blackbody::spectral_radiance_wavelength(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "spectral_radiance_wavelength({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "spectral_radiance_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["wavelength_m", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "spectral_radiance_wavelength: {:?}", e); },
         }
     }
 }
@@ -64,8 +67,9 @@ proptest! {
     fn contract_spectral_radiance_frequency_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::spectral_radiance_frequency(x0, x1) {
-            prop_assert!(v.is_finite(), "spectral_radiance_frequency({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "spectral_radiance_frequency: NaN accepted");
+        match relicore::blackbody::spectral_radiance_frequency(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "spectral_radiance_frequency({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "spectral_radiance_frequency: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["frequency_hz", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "spectral_radiance_frequency: {:?}", e); },
         }
     }
 }
@@ -75,8 +79,9 @@ proptest! {
     fn contract_spectral_radiance_frequency_f32(x0 in any::<u32>(), x1 in any::<u32>()) {
         let x0 = f32::from_bits(x0); let x1 = f32::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::spectral_radiance_frequency(x0, x1) {
-            prop_assert!(v.is_finite(), "spectral_radiance_frequency({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "spectral_radiance_frequency: NaN accepted");
+        match relicore::blackbody::spectral_radiance_frequency(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "spectral_radiance_frequency({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "spectral_radiance_frequency: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["frequency_hz", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "spectral_radiance_frequency: {:?}", e); },
         }
     }
 }
@@ -86,8 +91,9 @@ proptest! {
     fn contract_spectral_radiance_wavenumber_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::spectral_radiance_wavenumber(x0, x1) {
-            prop_assert!(v.is_finite(), "spectral_radiance_wavenumber({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "spectral_radiance_wavenumber: NaN accepted");
+        match relicore::blackbody::spectral_radiance_wavenumber(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "spectral_radiance_wavenumber({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "spectral_radiance_wavenumber: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["wavenumber_per_m", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "spectral_radiance_wavenumber: {:?}", e); },
         }
     }
 }
@@ -97,8 +103,9 @@ proptest! {
     fn contract_spectral_radiance_wavenumber_f32(x0 in any::<u32>(), x1 in any::<u32>()) {
         let x0 = f32::from_bits(x0); let x1 = f32::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::spectral_radiance_wavenumber(x0, x1) {
-            prop_assert!(v.is_finite(), "spectral_radiance_wavenumber({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "spectral_radiance_wavenumber: NaN accepted");
+        match relicore::blackbody::spectral_radiance_wavenumber(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "spectral_radiance_wavenumber({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "spectral_radiance_wavenumber: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["wavenumber_per_m", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "spectral_radiance_wavenumber: {:?}", e); },
         }
     }
 }
@@ -108,8 +115,9 @@ proptest! {
     fn contract_photon_radiance_wavelength_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::photon_radiance_wavelength(x0, x1) {
-            prop_assert!(v.is_finite(), "photon_radiance_wavelength({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "photon_radiance_wavelength: NaN accepted");
+        match relicore::blackbody::photon_radiance_wavelength(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "photon_radiance_wavelength({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "photon_radiance_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["wavelength_m", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "photon_radiance_wavelength: {:?}", e); },
         }
     }
 }
@@ -119,8 +127,9 @@ proptest! {
     fn contract_photon_radiance_frequency_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::photon_radiance_frequency(x0, x1) {
-            prop_assert!(v.is_finite(), "photon_radiance_frequency({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "photon_radiance_frequency: NaN accepted");
+        match relicore::blackbody::photon_radiance_frequency(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "photon_radiance_frequency({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "photon_radiance_frequency: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["frequency_hz", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "photon_radiance_frequency: {:?}", e); },
         }
     }
 }
@@ -130,8 +139,9 @@ proptest! {
     fn contract_photon_radiance_wavenumber_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::photon_radiance_wavenumber(x0, x1) {
-            prop_assert!(v.is_finite(), "photon_radiance_wavenumber({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "photon_radiance_wavenumber: NaN accepted");
+        match relicore::blackbody::photon_radiance_wavenumber(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "photon_radiance_wavenumber({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "photon_radiance_wavenumber: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["wavenumber_per_m", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "photon_radiance_wavenumber: {:?}", e); },
         }
     }
 }
@@ -141,8 +151,9 @@ proptest! {
     fn contract_radiance_temperature_derivative_wavelength_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::radiance_temperature_derivative_wavelength(x0, x1) {
-            prop_assert!(v.is_finite(), "radiance_temperature_derivative_wavelength({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "radiance_temperature_derivative_wavelength: NaN accepted");
+        match relicore::blackbody::radiance_temperature_derivative_wavelength(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "radiance_temperature_derivative_wavelength({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "radiance_temperature_derivative_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["wavelength_m", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "radiance_temperature_derivative_wavelength: {:?}", e); },
         }
     }
 }
@@ -152,8 +163,9 @@ proptest! {
     fn contract_radiance_temperature_derivative_frequency_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::radiance_temperature_derivative_frequency(x0, x1) {
-            prop_assert!(v.is_finite(), "radiance_temperature_derivative_frequency({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "radiance_temperature_derivative_frequency: NaN accepted");
+        match relicore::blackbody::radiance_temperature_derivative_frequency(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "radiance_temperature_derivative_frequency({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "radiance_temperature_derivative_frequency: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["frequency_hz", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "radiance_temperature_derivative_frequency: {:?}", e); },
         }
     }
 }
@@ -163,8 +175,9 @@ proptest! {
     fn contract_radiant_exitance_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let any_nan = x0.is_nan();
-        if let Ok(v) = relicore::blackbody::radiant_exitance(x0) {
-            prop_assert!(v.is_finite(), "radiant_exitance({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "radiant_exitance: NaN accepted");
+        match relicore::blackbody::radiant_exitance(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "radiant_exitance({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "radiant_exitance: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "radiant_exitance: {:?}", e); },
         }
     }
 }
@@ -174,8 +187,9 @@ proptest! {
     fn contract_photon_exitance_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let any_nan = x0.is_nan();
-        if let Ok(v) = relicore::blackbody::photon_exitance(x0) {
-            prop_assert!(v.is_finite(), "photon_exitance({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "photon_exitance: NaN accepted");
+        match relicore::blackbody::photon_exitance(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "photon_exitance({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "photon_exitance: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "photon_exitance: {:?}", e); },
         }
     }
 }
@@ -185,8 +199,9 @@ proptest! {
     fn contract_photon_number_density_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let any_nan = x0.is_nan();
-        if let Ok(v) = relicore::blackbody::photon_number_density(x0) {
-            prop_assert!(v.is_finite(), "photon_number_density({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "photon_number_density: NaN accepted");
+        match relicore::blackbody::photon_number_density(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "photon_number_density({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "photon_number_density: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "photon_number_density: {:?}", e); },
         }
     }
 }
@@ -196,8 +211,9 @@ proptest! {
     fn contract_photon_number_density_f32(x0 in any::<u32>()) {
         let x0 = f32::from_bits(x0);
         let any_nan = x0.is_nan();
-        if let Ok(v) = relicore::blackbody::photon_number_density(x0) {
-            prop_assert!(v.is_finite(), "photon_number_density({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "photon_number_density: NaN accepted");
+        match relicore::blackbody::photon_number_density(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "photon_number_density({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "photon_number_density: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "photon_number_density: {:?}", e); },
         }
     }
 }
@@ -207,8 +223,9 @@ proptest! {
     fn contract_radiation_energy_density_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let any_nan = x0.is_nan();
-        if let Ok(v) = relicore::blackbody::radiation_energy_density(x0) {
-            prop_assert!(v.is_finite(), "radiation_energy_density({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "radiation_energy_density: NaN accepted");
+        match relicore::blackbody::radiation_energy_density(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "radiation_energy_density({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "radiation_energy_density: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "radiation_energy_density: {:?}", e); },
         }
     }
 }
@@ -218,8 +235,9 @@ proptest! {
     fn contract_radiation_energy_density_f32(x0 in any::<u32>()) {
         let x0 = f32::from_bits(x0);
         let any_nan = x0.is_nan();
-        if let Ok(v) = relicore::blackbody::radiation_energy_density(x0) {
-            prop_assert!(v.is_finite(), "radiation_energy_density({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "radiation_energy_density: NaN accepted");
+        match relicore::blackbody::radiation_energy_density(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "radiation_energy_density({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "radiation_energy_density: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "radiation_energy_density: {:?}", e); },
         }
     }
 }
@@ -229,8 +247,9 @@ proptest! {
     fn contract_peak_wavelength_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let any_nan = x0.is_nan();
-        if let Ok(v) = relicore::blackbody::peak_wavelength(x0) {
-            prop_assert!(v.is_finite(), "peak_wavelength({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "peak_wavelength: NaN accepted");
+        match relicore::blackbody::peak_wavelength(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "peak_wavelength({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "peak_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "peak_wavelength: {:?}", e); },
         }
     }
 }
@@ -240,8 +259,9 @@ proptest! {
     fn contract_peak_frequency_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let any_nan = x0.is_nan();
-        if let Ok(v) = relicore::blackbody::peak_frequency(x0) {
-            prop_assert!(v.is_finite(), "peak_frequency({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "peak_frequency: NaN accepted");
+        match relicore::blackbody::peak_frequency(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "peak_frequency({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "peak_frequency: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "peak_frequency: {:?}", e); },
         }
     }
 }
@@ -251,8 +271,9 @@ proptest! {
     fn contract_peak_wavenumber_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let any_nan = x0.is_nan();
-        if let Ok(v) = relicore::blackbody::peak_wavenumber(x0) {
-            prop_assert!(v.is_finite(), "peak_wavenumber({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "peak_wavenumber: NaN accepted");
+        match relicore::blackbody::peak_wavenumber(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "peak_wavenumber({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "peak_wavenumber: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "peak_wavenumber: {:?}", e); },
         }
     }
 }
@@ -262,8 +283,9 @@ proptest! {
     fn contract_photon_peak_wavelength_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let any_nan = x0.is_nan();
-        if let Ok(v) = relicore::blackbody::photon_peak_wavelength(x0) {
-            prop_assert!(v.is_finite(), "photon_peak_wavelength({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "photon_peak_wavelength: NaN accepted");
+        match relicore::blackbody::photon_peak_wavelength(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "photon_peak_wavelength({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "photon_peak_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "photon_peak_wavelength: {:?}", e); },
         }
     }
 }
@@ -273,8 +295,9 @@ proptest! {
     fn contract_photon_peak_frequency_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let any_nan = x0.is_nan();
-        if let Ok(v) = relicore::blackbody::photon_peak_frequency(x0) {
-            prop_assert!(v.is_finite(), "photon_peak_frequency({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "photon_peak_frequency: NaN accepted");
+        match relicore::blackbody::photon_peak_frequency(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "photon_peak_frequency({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "photon_peak_frequency: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "photon_peak_frequency: {:?}", e); },
         }
     }
 }
@@ -284,8 +307,9 @@ proptest! {
     fn contract_temperature_from_peak_wavelength_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let any_nan = x0.is_nan();
-        if let Ok(v) = relicore::blackbody::temperature_from_peak_wavelength(x0) {
-            prop_assert!(v.is_finite(), "temperature_from_peak_wavelength({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "temperature_from_peak_wavelength: NaN accepted");
+        match relicore::blackbody::temperature_from_peak_wavelength(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "temperature_from_peak_wavelength({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "temperature_from_peak_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["wavelength_m"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "temperature_from_peak_wavelength: {:?}", e); },
         }
     }
 }
@@ -295,8 +319,9 @@ proptest! {
     fn contract_temperature_from_peak_frequency_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let any_nan = x0.is_nan();
-        if let Ok(v) = relicore::blackbody::temperature_from_peak_frequency(x0) {
-            prop_assert!(v.is_finite(), "temperature_from_peak_frequency({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "temperature_from_peak_frequency: NaN accepted");
+        match relicore::blackbody::temperature_from_peak_frequency(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "temperature_from_peak_frequency({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "temperature_from_peak_frequency: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["frequency_hz"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "temperature_from_peak_frequency: {:?}", e); },
         }
     }
 }
@@ -306,8 +331,9 @@ proptest! {
     fn contract_band_fraction_wavelength_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan();
-        if let Ok(v) = relicore::blackbody::band_fraction_wavelength(x0, x1, x2) {
-            prop_assert!(v.is_finite(), "band_fraction_wavelength({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "band_fraction_wavelength: NaN accepted");
+        match relicore::blackbody::band_fraction_wavelength(x0, x1, x2) {
+            Ok(v) => { prop_assert!(v.is_finite(), "band_fraction_wavelength({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "band_fraction_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 3] = ["lower_m", "upper_m", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "band_fraction_wavelength: {:?}", e); },
         }
     }
 }
@@ -317,8 +343,9 @@ proptest! {
     fn contract_band_radiance_wavelength_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan();
-        if let Ok(v) = relicore::blackbody::band_radiance_wavelength(x0, x1, x2) {
-            prop_assert!(v.is_finite(), "band_radiance_wavelength({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "band_radiance_wavelength: NaN accepted");
+        match relicore::blackbody::band_radiance_wavelength(x0, x1, x2) {
+            Ok(v) => { prop_assert!(v.is_finite(), "band_radiance_wavelength({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "band_radiance_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 3] = ["lower_m", "upper_m", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "band_radiance_wavelength: {:?}", e); },
         }
     }
 }
@@ -328,8 +355,9 @@ proptest! {
     fn contract_band_radiance_wavelength_f32(x0 in any::<u32>(), x1 in any::<u32>(), x2 in any::<u32>()) {
         let x0 = f32::from_bits(x0); let x1 = f32::from_bits(x1); let x2 = f32::from_bits(x2);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan();
-        if let Ok(v) = relicore::blackbody::band_radiance_wavelength(x0, x1, x2) {
-            prop_assert!(v.is_finite(), "band_radiance_wavelength({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "band_radiance_wavelength: NaN accepted");
+        match relicore::blackbody::band_radiance_wavelength(x0, x1, x2) {
+            Ok(v) => { prop_assert!(v.is_finite(), "band_radiance_wavelength({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "band_radiance_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 3] = ["lower_m", "upper_m", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "band_radiance_wavelength: {:?}", e); },
         }
     }
 }
@@ -339,8 +367,9 @@ proptest! {
     fn contract_band_photon_radiance_wavelength_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan();
-        if let Ok(v) = relicore::blackbody::band_photon_radiance_wavelength(x0, x1, x2) {
-            prop_assert!(v.is_finite(), "band_photon_radiance_wavelength({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "band_photon_radiance_wavelength: NaN accepted");
+        match relicore::blackbody::band_photon_radiance_wavelength(x0, x1, x2) {
+            Ok(v) => { prop_assert!(v.is_finite(), "band_photon_radiance_wavelength({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "band_photon_radiance_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 3] = ["lower_m", "upper_m", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "band_photon_radiance_wavelength: {:?}", e); },
         }
     }
 }
@@ -350,8 +379,9 @@ proptest! {
     fn contract_band_radiance_frequency_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan();
-        if let Ok(v) = relicore::blackbody::band_radiance_frequency(x0, x1, x2) {
-            prop_assert!(v.is_finite(), "band_radiance_frequency({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "band_radiance_frequency: NaN accepted");
+        match relicore::blackbody::band_radiance_frequency(x0, x1, x2) {
+            Ok(v) => { prop_assert!(v.is_finite(), "band_radiance_frequency({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "band_radiance_frequency: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 3] = ["lower_hz", "upper_hz", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "band_radiance_frequency: {:?}", e); },
         }
     }
 }
@@ -361,8 +391,9 @@ proptest! {
     fn contract_temperature_from_band_radiance_wavelength_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan();
-        if let Ok(v) = relicore::blackbody::temperature_from_band_radiance_wavelength(x0, x1, x2) {
-            prop_assert!(v.is_finite(), "temperature_from_band_radiance_wavelength({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "temperature_from_band_radiance_wavelength: NaN accepted");
+        match relicore::blackbody::temperature_from_band_radiance_wavelength(x0, x1, x2) {
+            Ok(v) => { prop_assert!(v.is_finite(), "temperature_from_band_radiance_wavelength({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "temperature_from_band_radiance_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 3] = ["lower_m", "upper_m", "radiance"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "temperature_from_band_radiance_wavelength: {:?}", e); },
         }
     }
 }
@@ -372,8 +403,9 @@ proptest! {
     fn contract_brightness_temperature_wavelength_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::brightness_temperature_wavelength(x0, x1) {
-            prop_assert!(v.is_finite(), "brightness_temperature_wavelength({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "brightness_temperature_wavelength: NaN accepted");
+        match relicore::blackbody::brightness_temperature_wavelength(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "brightness_temperature_wavelength({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "brightness_temperature_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["wavelength_m", "spectral_radiance"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "brightness_temperature_wavelength: {:?}", e); },
         }
     }
 }
@@ -383,8 +415,9 @@ proptest! {
     fn contract_brightness_temperature_wavelength_f32(x0 in any::<u32>(), x1 in any::<u32>()) {
         let x0 = f32::from_bits(x0); let x1 = f32::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::brightness_temperature_wavelength(x0, x1) {
-            prop_assert!(v.is_finite(), "brightness_temperature_wavelength({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "brightness_temperature_wavelength: NaN accepted");
+        match relicore::blackbody::brightness_temperature_wavelength(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "brightness_temperature_wavelength({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "brightness_temperature_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["wavelength_m", "spectral_radiance"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "brightness_temperature_wavelength: {:?}", e); },
         }
     }
 }
@@ -394,8 +427,9 @@ proptest! {
     fn contract_brightness_temperature_frequency_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::brightness_temperature_frequency(x0, x1) {
-            prop_assert!(v.is_finite(), "brightness_temperature_frequency({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "brightness_temperature_frequency: NaN accepted");
+        match relicore::blackbody::brightness_temperature_frequency(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "brightness_temperature_frequency({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "brightness_temperature_frequency: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["frequency_hz", "spectral_radiance"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "brightness_temperature_frequency: {:?}", e); },
         }
     }
 }
@@ -405,8 +439,9 @@ proptest! {
     fn contract_brightness_temperature_frequency_f32(x0 in any::<u32>(), x1 in any::<u32>()) {
         let x0 = f32::from_bits(x0); let x1 = f32::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::brightness_temperature_frequency(x0, x1) {
-            prop_assert!(v.is_finite(), "brightness_temperature_frequency({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "brightness_temperature_frequency: NaN accepted");
+        match relicore::blackbody::brightness_temperature_frequency(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "brightness_temperature_frequency({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "brightness_temperature_frequency: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["frequency_hz", "spectral_radiance"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "brightness_temperature_frequency: {:?}", e); },
         }
     }
 }
@@ -416,8 +451,9 @@ proptest! {
     fn contract_rayleigh_jeans_temperature_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::rayleigh_jeans_temperature(x0, x1) {
-            prop_assert!(v.is_finite(), "rayleigh_jeans_temperature({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "rayleigh_jeans_temperature: NaN accepted");
+        match relicore::blackbody::rayleigh_jeans_temperature(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "rayleigh_jeans_temperature({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "rayleigh_jeans_temperature: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["frequency_hz", "spectral_radiance"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "rayleigh_jeans_temperature: {:?}", e); },
         }
     }
 }
@@ -427,8 +463,9 @@ proptest! {
     fn contract_ratio_temperature_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>(), x3 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2); let x3 = f64::from_bits(x3);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan();
-        if let Ok(v) = relicore::blackbody::ratio_temperature(x0, x1, x2, x3) {
-            prop_assert!(v.is_finite(), "ratio_temperature({:?}) = Ok({:?})", (x0, x1, x2, x3), v); prop_assert!(!any_nan, "ratio_temperature: NaN accepted");
+        match relicore::blackbody::ratio_temperature(x0, x1, x2, x3) {
+            Ok(v) => { prop_assert!(v.is_finite(), "ratio_temperature({:?}) = Ok({:?})", (x0, x1, x2, x3), v); prop_assert!(!any_nan, "ratio_temperature: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 4] = ["wavelength_1_m", "wavelength_2_m", "radiance_ratio", "emissivity_ratio"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "ratio_temperature: {:?}", e); },
         }
     }
 }
@@ -438,8 +475,9 @@ proptest! {
     fn contract_thermodynamic_to_rayleigh_jeans_factor_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::thermodynamic_to_rayleigh_jeans_factor(x0, x1) {
-            prop_assert!(v.is_finite(), "thermodynamic_to_rayleigh_jeans_factor({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "thermodynamic_to_rayleigh_jeans_factor: NaN accepted");
+        match relicore::blackbody::thermodynamic_to_rayleigh_jeans_factor(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "thermodynamic_to_rayleigh_jeans_factor({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "thermodynamic_to_rayleigh_jeans_factor: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["frequency_hz", "cmb_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "thermodynamic_to_rayleigh_jeans_factor: {:?}", e); },
         }
     }
 }
@@ -449,8 +487,9 @@ proptest! {
     fn contract_kcmb_to_mjy_per_sr_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::kcmb_to_mjy_per_sr(x0, x1) {
-            prop_assert!(v.is_finite(), "kcmb_to_mjy_per_sr({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "kcmb_to_mjy_per_sr: NaN accepted");
+        match relicore::blackbody::kcmb_to_mjy_per_sr(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "kcmb_to_mjy_per_sr({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "kcmb_to_mjy_per_sr: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["frequency_hz", "cmb_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "kcmb_to_mjy_per_sr: {:?}", e); },
         }
     }
 }
@@ -460,8 +499,9 @@ proptest! {
     fn contract_thermal_sz_spectral_shape_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::thermal_sz_spectral_shape(x0, x1) {
-            prop_assert!(v.is_finite(), "thermal_sz_spectral_shape({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "thermal_sz_spectral_shape: NaN accepted");
+        match relicore::blackbody::thermal_sz_spectral_shape(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "thermal_sz_spectral_shape({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "thermal_sz_spectral_shape: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["frequency_hz", "cmb_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "thermal_sz_spectral_shape: {:?}", e); },
         }
     }
 }
@@ -471,8 +511,9 @@ proptest! {
     fn contract_thermal_sz_temperature_shape_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::blackbody::thermal_sz_temperature_shape(x0, x1) {
-            prop_assert!(v.is_finite(), "thermal_sz_temperature_shape({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "thermal_sz_temperature_shape: NaN accepted");
+        match relicore::blackbody::thermal_sz_temperature_shape(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "thermal_sz_temperature_shape({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "thermal_sz_temperature_shape: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["frequency_hz", "cmb_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "thermal_sz_temperature_shape: {:?}", e); },
         }
     }
 }
@@ -482,8 +523,9 @@ proptest! {
     fn contract_thermal_sz_null_frequency_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let any_nan = x0.is_nan();
-        if let Ok(v) = relicore::blackbody::thermal_sz_null_frequency(x0) {
-            prop_assert!(v.is_finite(), "thermal_sz_null_frequency({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "thermal_sz_null_frequency: NaN accepted");
+        match relicore::blackbody::thermal_sz_null_frequency(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "thermal_sz_null_frequency({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "thermal_sz_null_frequency: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["cmb_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "thermal_sz_null_frequency: {:?}", e); },
         }
     }
 }
@@ -493,8 +535,9 @@ proptest! {
     fn contract_measured_spectral_radiance_wavelength_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>(), x3 in any::<u64>(), x4 in any::<u64>(), x5 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2); let x3 = f64::from_bits(x3); let x4 = f64::from_bits(x4); let x5 = f64::from_bits(x5);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan() || x4.is_nan() || x5.is_nan();
-        if let Ok(v) = relicore::blackbody::measured_spectral_radiance_wavelength(x0, x1, x2, x3, x4, x5) {
-            prop_assert!(v.is_finite(), "measured_spectral_radiance_wavelength({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5), v); prop_assert!(!any_nan, "measured_spectral_radiance_wavelength: NaN accepted");
+        match relicore::blackbody::measured_spectral_radiance_wavelength(x0, x1, x2, x3, x4, x5) {
+            Ok(v) => { prop_assert!(v.is_finite(), "measured_spectral_radiance_wavelength({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5), v); prop_assert!(!any_nan, "measured_spectral_radiance_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 6] = ["wavelength_m", "object_temperature_k", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "measured_spectral_radiance_wavelength: {:?}", e); },
         }
     }
 }
@@ -504,8 +547,9 @@ proptest! {
     fn contract_measured_spectral_radiance_wavelength_f32(x0 in any::<u32>(), x1 in any::<u32>(), x2 in any::<u32>(), x3 in any::<u32>(), x4 in any::<u32>(), x5 in any::<u32>()) {
         let x0 = f32::from_bits(x0); let x1 = f32::from_bits(x1); let x2 = f32::from_bits(x2); let x3 = f32::from_bits(x3); let x4 = f32::from_bits(x4); let x5 = f32::from_bits(x5);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan() || x4.is_nan() || x5.is_nan();
-        if let Ok(v) = relicore::blackbody::measured_spectral_radiance_wavelength(x0, x1, x2, x3, x4, x5) {
-            prop_assert!(v.is_finite(), "measured_spectral_radiance_wavelength({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5), v); prop_assert!(!any_nan, "measured_spectral_radiance_wavelength: NaN accepted");
+        match relicore::blackbody::measured_spectral_radiance_wavelength(x0, x1, x2, x3, x4, x5) {
+            Ok(v) => { prop_assert!(v.is_finite(), "measured_spectral_radiance_wavelength({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5), v); prop_assert!(!any_nan, "measured_spectral_radiance_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 6] = ["wavelength_m", "object_temperature_k", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "measured_spectral_radiance_wavelength: {:?}", e); },
         }
     }
 }
@@ -515,8 +559,9 @@ proptest! {
     fn contract_measured_spectral_radiance_frequency_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>(), x3 in any::<u64>(), x4 in any::<u64>(), x5 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2); let x3 = f64::from_bits(x3); let x4 = f64::from_bits(x4); let x5 = f64::from_bits(x5);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan() || x4.is_nan() || x5.is_nan();
-        if let Ok(v) = relicore::blackbody::measured_spectral_radiance_frequency(x0, x1, x2, x3, x4, x5) {
-            prop_assert!(v.is_finite(), "measured_spectral_radiance_frequency({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5), v); prop_assert!(!any_nan, "measured_spectral_radiance_frequency: NaN accepted");
+        match relicore::blackbody::measured_spectral_radiance_frequency(x0, x1, x2, x3, x4, x5) {
+            Ok(v) => { prop_assert!(v.is_finite(), "measured_spectral_radiance_frequency({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5), v); prop_assert!(!any_nan, "measured_spectral_radiance_frequency: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 6] = ["frequency_hz", "object_temperature_k", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "measured_spectral_radiance_frequency: {:?}", e); },
         }
     }
 }
@@ -526,8 +571,9 @@ proptest! {
     fn contract_measured_spectral_radiance_frequency_f32(x0 in any::<u32>(), x1 in any::<u32>(), x2 in any::<u32>(), x3 in any::<u32>(), x4 in any::<u32>(), x5 in any::<u32>()) {
         let x0 = f32::from_bits(x0); let x1 = f32::from_bits(x1); let x2 = f32::from_bits(x2); let x3 = f32::from_bits(x3); let x4 = f32::from_bits(x4); let x5 = f32::from_bits(x5);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan() || x4.is_nan() || x5.is_nan();
-        if let Ok(v) = relicore::blackbody::measured_spectral_radiance_frequency(x0, x1, x2, x3, x4, x5) {
-            prop_assert!(v.is_finite(), "measured_spectral_radiance_frequency({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5), v); prop_assert!(!any_nan, "measured_spectral_radiance_frequency: NaN accepted");
+        match relicore::blackbody::measured_spectral_radiance_frequency(x0, x1, x2, x3, x4, x5) {
+            Ok(v) => { prop_assert!(v.is_finite(), "measured_spectral_radiance_frequency({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5), v); prop_assert!(!any_nan, "measured_spectral_radiance_frequency: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 6] = ["frequency_hz", "object_temperature_k", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "measured_spectral_radiance_frequency: {:?}", e); },
         }
     }
 }
@@ -537,8 +583,9 @@ proptest! {
     fn contract_measured_band_radiance_wavelength_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>(), x3 in any::<u64>(), x4 in any::<u64>(), x5 in any::<u64>(), x6 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2); let x3 = f64::from_bits(x3); let x4 = f64::from_bits(x4); let x5 = f64::from_bits(x5); let x6 = f64::from_bits(x6);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan() || x4.is_nan() || x5.is_nan() || x6.is_nan();
-        if let Ok(v) = relicore::blackbody::measured_band_radiance_wavelength(x0, x1, x2, x3, x4, x5, x6) {
-            prop_assert!(v.is_finite(), "measured_band_radiance_wavelength({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5, x6), v); prop_assert!(!any_nan, "measured_band_radiance_wavelength: NaN accepted");
+        match relicore::blackbody::measured_band_radiance_wavelength(x0, x1, x2, x3, x4, x5, x6) {
+            Ok(v) => { prop_assert!(v.is_finite(), "measured_band_radiance_wavelength({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5, x6), v); prop_assert!(!any_nan, "measured_band_radiance_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 7] = ["lower_m", "upper_m", "object_temperature_k", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "measured_band_radiance_wavelength: {:?}", e); },
         }
     }
 }
@@ -548,8 +595,9 @@ proptest! {
     fn contract_object_temperature_wavelength_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>(), x3 in any::<u64>(), x4 in any::<u64>(), x5 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2); let x3 = f64::from_bits(x3); let x4 = f64::from_bits(x4); let x5 = f64::from_bits(x5);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan() || x4.is_nan() || x5.is_nan();
-        if let Ok(v) = relicore::blackbody::object_temperature_wavelength(x0, x1, x2, x3, x4, x5) {
-            prop_assert!(v.is_finite(), "object_temperature_wavelength({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5), v); prop_assert!(!any_nan, "object_temperature_wavelength: NaN accepted");
+        match relicore::blackbody::object_temperature_wavelength(x0, x1, x2, x3, x4, x5) {
+            Ok(v) => { prop_assert!(v.is_finite(), "object_temperature_wavelength({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5), v); prop_assert!(!any_nan, "object_temperature_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 6] = ["wavelength_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "object_temperature_wavelength: {:?}", e); },
         }
     }
 }
@@ -559,8 +607,9 @@ proptest! {
     fn contract_object_temperature_wavelength_f32(x0 in any::<u32>(), x1 in any::<u32>(), x2 in any::<u32>(), x3 in any::<u32>(), x4 in any::<u32>(), x5 in any::<u32>()) {
         let x0 = f32::from_bits(x0); let x1 = f32::from_bits(x1); let x2 = f32::from_bits(x2); let x3 = f32::from_bits(x3); let x4 = f32::from_bits(x4); let x5 = f32::from_bits(x5);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan() || x4.is_nan() || x5.is_nan();
-        if let Ok(v) = relicore::blackbody::object_temperature_wavelength(x0, x1, x2, x3, x4, x5) {
-            prop_assert!(v.is_finite(), "object_temperature_wavelength({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5), v); prop_assert!(!any_nan, "object_temperature_wavelength: NaN accepted");
+        match relicore::blackbody::object_temperature_wavelength(x0, x1, x2, x3, x4, x5) {
+            Ok(v) => { prop_assert!(v.is_finite(), "object_temperature_wavelength({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5), v); prop_assert!(!any_nan, "object_temperature_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 6] = ["wavelength_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "object_temperature_wavelength: {:?}", e); },
         }
     }
 }
@@ -570,8 +619,9 @@ proptest! {
     fn contract_object_temperature_frequency_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>(), x3 in any::<u64>(), x4 in any::<u64>(), x5 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2); let x3 = f64::from_bits(x3); let x4 = f64::from_bits(x4); let x5 = f64::from_bits(x5);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan() || x4.is_nan() || x5.is_nan();
-        if let Ok(v) = relicore::blackbody::object_temperature_frequency(x0, x1, x2, x3, x4, x5) {
-            prop_assert!(v.is_finite(), "object_temperature_frequency({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5), v); prop_assert!(!any_nan, "object_temperature_frequency: NaN accepted");
+        match relicore::blackbody::object_temperature_frequency(x0, x1, x2, x3, x4, x5) {
+            Ok(v) => { prop_assert!(v.is_finite(), "object_temperature_frequency({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5), v); prop_assert!(!any_nan, "object_temperature_frequency: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 6] = ["frequency_hz", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "object_temperature_frequency: {:?}", e); },
         }
     }
 }
@@ -581,8 +631,9 @@ proptest! {
     fn contract_object_temperature_frequency_f32(x0 in any::<u32>(), x1 in any::<u32>(), x2 in any::<u32>(), x3 in any::<u32>(), x4 in any::<u32>(), x5 in any::<u32>()) {
         let x0 = f32::from_bits(x0); let x1 = f32::from_bits(x1); let x2 = f32::from_bits(x2); let x3 = f32::from_bits(x3); let x4 = f32::from_bits(x4); let x5 = f32::from_bits(x5);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan() || x4.is_nan() || x5.is_nan();
-        if let Ok(v) = relicore::blackbody::object_temperature_frequency(x0, x1, x2, x3, x4, x5) {
-            prop_assert!(v.is_finite(), "object_temperature_frequency({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5), v); prop_assert!(!any_nan, "object_temperature_frequency: NaN accepted");
+        match relicore::blackbody::object_temperature_frequency(x0, x1, x2, x3, x4, x5) {
+            Ok(v) => { prop_assert!(v.is_finite(), "object_temperature_frequency({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5), v); prop_assert!(!any_nan, "object_temperature_frequency: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 6] = ["frequency_hz", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "object_temperature_frequency: {:?}", e); },
         }
     }
 }
@@ -592,8 +643,9 @@ proptest! {
     fn contract_object_temperature_band_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>(), x3 in any::<u64>(), x4 in any::<u64>(), x5 in any::<u64>(), x6 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2); let x3 = f64::from_bits(x3); let x4 = f64::from_bits(x4); let x5 = f64::from_bits(x5); let x6 = f64::from_bits(x6);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan() || x4.is_nan() || x5.is_nan() || x6.is_nan();
-        if let Ok(v) = relicore::blackbody::object_temperature_band(x0, x1, x2, x3, x4, x5, x6) {
-            prop_assert!(v.is_finite(), "object_temperature_band({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5, x6), v); prop_assert!(!any_nan, "object_temperature_band: NaN accepted");
+        match relicore::blackbody::object_temperature_band(x0, x1, x2, x3, x4, x5, x6) {
+            Ok(v) => { prop_assert!(v.is_finite(), "object_temperature_band({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5, x6), v); prop_assert!(!any_nan, "object_temperature_band: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 7] = ["lower_m", "upper_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "object_temperature_band: {:?}", e); },
         }
     }
 }
@@ -603,8 +655,9 @@ proptest! {
     fn contract_band_radiance_temperature_derivative_wavelength_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan();
-        if let Ok(v) = relicore::blackbody::band_radiance_temperature_derivative_wavelength(x0, x1, x2) {
-            prop_assert!(v.is_finite(), "band_radiance_temperature_derivative_wavelength({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "band_radiance_temperature_derivative_wavelength: NaN accepted");
+        match relicore::blackbody::band_radiance_temperature_derivative_wavelength(x0, x1, x2) {
+            Ok(v) => { prop_assert!(v.is_finite(), "band_radiance_temperature_derivative_wavelength({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "band_radiance_temperature_derivative_wavelength: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 3] = ["lower_m", "upper_m", "temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "band_radiance_temperature_derivative_wavelength: {:?}", e); },
         }
     }
 }
@@ -614,8 +667,9 @@ proptest! {
     fn contract_brightness_temperature_wavelength_with_uncertainty_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan();
-        if let Ok(v) = relicore::blackbody::brightness_temperature_wavelength_with_uncertainty(x0, x1, x2) {
-            prop_assert!(v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite()), "brightness_temperature_wavelength_with_uncertainty({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "brightness_temperature_wavelength_with_uncertainty: NaN accepted");
+        match relicore::blackbody::brightness_temperature_wavelength_with_uncertainty(x0, x1, x2) {
+            Ok(v) => { prop_assert!(v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite()), "brightness_temperature_wavelength_with_uncertainty({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "brightness_temperature_wavelength_with_uncertainty: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 3] = ["wavelength_m", "spectral_radiance", "spectral_radiance_uncertainty"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "brightness_temperature_wavelength_with_uncertainty: {:?}", e); },
         }
     }
 }
@@ -625,8 +679,9 @@ proptest! {
     fn contract_brightness_temperature_frequency_with_uncertainty_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan();
-        if let Ok(v) = relicore::blackbody::brightness_temperature_frequency_with_uncertainty(x0, x1, x2) {
-            prop_assert!(v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite()), "brightness_temperature_frequency_with_uncertainty({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "brightness_temperature_frequency_with_uncertainty: NaN accepted");
+        match relicore::blackbody::brightness_temperature_frequency_with_uncertainty(x0, x1, x2) {
+            Ok(v) => { prop_assert!(v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite()), "brightness_temperature_frequency_with_uncertainty({:?}) = Ok({:?})", (x0, x1, x2), v); prop_assert!(!any_nan, "brightness_temperature_frequency_with_uncertainty: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 3] = ["frequency_hz", "spectral_radiance", "spectral_radiance_uncertainty"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "brightness_temperature_frequency_with_uncertainty: {:?}", e); },
         }
     }
 }
@@ -636,8 +691,9 @@ proptest! {
     fn contract_object_temperature_wavelength_with_uncertainty_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>(), x3 in any::<u64>(), x4 in any::<u64>(), x5 in any::<u64>(), x6 in any::<u64>(), x7 in any::<u64>(), x8 in any::<u64>(), x9 in any::<u64>(), x10 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2); let x3 = f64::from_bits(x3); let x4 = f64::from_bits(x4); let x5 = f64::from_bits(x5); let x6 = f64::from_bits(x6); let x7 = f64::from_bits(x7); let x8 = f64::from_bits(x8); let x9 = f64::from_bits(x9); let x10 = f64::from_bits(x10);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan() || x4.is_nan() || x5.is_nan() || x6.is_nan() || x7.is_nan() || x8.is_nan() || x9.is_nan() || x10.is_nan();
-        if let Ok(v) = relicore::blackbody::object_temperature_wavelength_with_uncertainty(x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10) {
-            prop_assert!(v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite()), "object_temperature_wavelength_with_uncertainty({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10), v); prop_assert!(!any_nan, "object_temperature_wavelength_with_uncertainty: NaN accepted");
+        match relicore::blackbody::object_temperature_wavelength_with_uncertainty(x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10) {
+            Ok(v) => { prop_assert!(v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite()), "object_temperature_wavelength_with_uncertainty({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10), v); prop_assert!(!any_nan, "object_temperature_wavelength_with_uncertainty: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 11] = ["wavelength_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k", "signal_uncertainty", "emissivity_uncertainty", "reflected_temperature_uncertainty_k", "transmittance_uncertainty", "path_temperature_uncertainty_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "object_temperature_wavelength_with_uncertainty: {:?}", e); },
         }
     }
 }
@@ -647,8 +703,9 @@ proptest! {
     fn contract_object_temperature_wavelength_with_uncertainty_f32(x0 in any::<u32>(), x1 in any::<u32>(), x2 in any::<u32>(), x3 in any::<u32>(), x4 in any::<u32>(), x5 in any::<u32>(), x6 in any::<u32>(), x7 in any::<u32>(), x8 in any::<u32>(), x9 in any::<u32>(), x10 in any::<u32>()) {
         let x0 = f32::from_bits(x0); let x1 = f32::from_bits(x1); let x2 = f32::from_bits(x2); let x3 = f32::from_bits(x3); let x4 = f32::from_bits(x4); let x5 = f32::from_bits(x5); let x6 = f32::from_bits(x6); let x7 = f32::from_bits(x7); let x8 = f32::from_bits(x8); let x9 = f32::from_bits(x9); let x10 = f32::from_bits(x10);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan() || x4.is_nan() || x5.is_nan() || x6.is_nan() || x7.is_nan() || x8.is_nan() || x9.is_nan() || x10.is_nan();
-        if let Ok(v) = relicore::blackbody::object_temperature_wavelength_with_uncertainty(x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10) {
-            prop_assert!(v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite()), "object_temperature_wavelength_with_uncertainty({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10), v); prop_assert!(!any_nan, "object_temperature_wavelength_with_uncertainty: NaN accepted");
+        match relicore::blackbody::object_temperature_wavelength_with_uncertainty(x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10) {
+            Ok(v) => { prop_assert!(v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite()), "object_temperature_wavelength_with_uncertainty({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10), v); prop_assert!(!any_nan, "object_temperature_wavelength_with_uncertainty: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 11] = ["wavelength_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k", "signal_uncertainty", "emissivity_uncertainty", "reflected_temperature_uncertainty_k", "transmittance_uncertainty", "path_temperature_uncertainty_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "object_temperature_wavelength_with_uncertainty: {:?}", e); },
         }
     }
 }
@@ -658,8 +715,9 @@ proptest! {
     fn contract_object_temperature_frequency_with_uncertainty_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>(), x3 in any::<u64>(), x4 in any::<u64>(), x5 in any::<u64>(), x6 in any::<u64>(), x7 in any::<u64>(), x8 in any::<u64>(), x9 in any::<u64>(), x10 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2); let x3 = f64::from_bits(x3); let x4 = f64::from_bits(x4); let x5 = f64::from_bits(x5); let x6 = f64::from_bits(x6); let x7 = f64::from_bits(x7); let x8 = f64::from_bits(x8); let x9 = f64::from_bits(x9); let x10 = f64::from_bits(x10);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan() || x4.is_nan() || x5.is_nan() || x6.is_nan() || x7.is_nan() || x8.is_nan() || x9.is_nan() || x10.is_nan();
-        if let Ok(v) = relicore::blackbody::object_temperature_frequency_with_uncertainty(x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10) {
-            prop_assert!(v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite()), "object_temperature_frequency_with_uncertainty({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10), v); prop_assert!(!any_nan, "object_temperature_frequency_with_uncertainty: NaN accepted");
+        match relicore::blackbody::object_temperature_frequency_with_uncertainty(x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10) {
+            Ok(v) => { prop_assert!(v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite()), "object_temperature_frequency_with_uncertainty({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10), v); prop_assert!(!any_nan, "object_temperature_frequency_with_uncertainty: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 11] = ["frequency_hz", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k", "signal_uncertainty", "emissivity_uncertainty", "reflected_temperature_uncertainty_k", "transmittance_uncertainty", "path_temperature_uncertainty_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "object_temperature_frequency_with_uncertainty: {:?}", e); },
         }
     }
 }
@@ -669,8 +727,9 @@ proptest! {
     fn contract_object_temperature_frequency_with_uncertainty_f32(x0 in any::<u32>(), x1 in any::<u32>(), x2 in any::<u32>(), x3 in any::<u32>(), x4 in any::<u32>(), x5 in any::<u32>(), x6 in any::<u32>(), x7 in any::<u32>(), x8 in any::<u32>(), x9 in any::<u32>(), x10 in any::<u32>()) {
         let x0 = f32::from_bits(x0); let x1 = f32::from_bits(x1); let x2 = f32::from_bits(x2); let x3 = f32::from_bits(x3); let x4 = f32::from_bits(x4); let x5 = f32::from_bits(x5); let x6 = f32::from_bits(x6); let x7 = f32::from_bits(x7); let x8 = f32::from_bits(x8); let x9 = f32::from_bits(x9); let x10 = f32::from_bits(x10);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan() || x4.is_nan() || x5.is_nan() || x6.is_nan() || x7.is_nan() || x8.is_nan() || x9.is_nan() || x10.is_nan();
-        if let Ok(v) = relicore::blackbody::object_temperature_frequency_with_uncertainty(x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10) {
-            prop_assert!(v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite()), "object_temperature_frequency_with_uncertainty({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10), v); prop_assert!(!any_nan, "object_temperature_frequency_with_uncertainty: NaN accepted");
+        match relicore::blackbody::object_temperature_frequency_with_uncertainty(x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10) {
+            Ok(v) => { prop_assert!(v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite()), "object_temperature_frequency_with_uncertainty({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10), v); prop_assert!(!any_nan, "object_temperature_frequency_with_uncertainty: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 11] = ["frequency_hz", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k", "signal_uncertainty", "emissivity_uncertainty", "reflected_temperature_uncertainty_k", "transmittance_uncertainty", "path_temperature_uncertainty_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "object_temperature_frequency_with_uncertainty: {:?}", e); },
         }
     }
 }
@@ -680,8 +739,9 @@ proptest! {
     fn contract_object_temperature_band_with_uncertainty_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>(), x3 in any::<u64>(), x4 in any::<u64>(), x5 in any::<u64>(), x6 in any::<u64>(), x7 in any::<u64>(), x8 in any::<u64>(), x9 in any::<u64>(), x10 in any::<u64>(), x11 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2); let x3 = f64::from_bits(x3); let x4 = f64::from_bits(x4); let x5 = f64::from_bits(x5); let x6 = f64::from_bits(x6); let x7 = f64::from_bits(x7); let x8 = f64::from_bits(x8); let x9 = f64::from_bits(x9); let x10 = f64::from_bits(x10); let x11 = f64::from_bits(x11);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan() || x4.is_nan() || x5.is_nan() || x6.is_nan() || x7.is_nan() || x8.is_nan() || x9.is_nan() || x10.is_nan() || x11.is_nan();
-        if let Ok(v) = relicore::blackbody::object_temperature_band_with_uncertainty(x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10, x11) {
-            prop_assert!(v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite()), "object_temperature_band_with_uncertainty({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10, x11), v); prop_assert!(!any_nan, "object_temperature_band_with_uncertainty: NaN accepted");
+        match relicore::blackbody::object_temperature_band_with_uncertainty(x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10, x11) {
+            Ok(v) => { prop_assert!(v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite()), "object_temperature_band_with_uncertainty({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10, x11), v); prop_assert!(!any_nan, "object_temperature_band_with_uncertainty: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 12] = ["lower_m", "upper_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k", "signal_uncertainty", "emissivity_uncertainty", "reflected_temperature_uncertainty_k", "transmittance_uncertainty", "path_temperature_uncertainty_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "object_temperature_band_with_uncertainty: {:?}", e); },
         }
     }
 }
@@ -691,8 +751,9 @@ proptest! {
     fn contract_calibrated_temperature_with_uncertainty_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>(), x3 in any::<u64>(), x4 in any::<u64>(), x5 in any::<u64>(), x6 in any::<u64>(), x7 in any::<u64>(), x8 in any::<u64>(), x9 in any::<u64>(), x10 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2); let x3 = f64::from_bits(x3); let x4 = f64::from_bits(x4); let x5 = f64::from_bits(x5); let x6 = f64::from_bits(x6); let x7 = f64::from_bits(x7); let x8 = f64::from_bits(x8); let x9 = f64::from_bits(x9); let x10 = f64::from_bits(x10);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan() || x4.is_nan() || x5.is_nan() || x6.is_nan() || x7.is_nan() || x8.is_nan() || x9.is_nan() || x10.is_nan();
-        if let Ok(v) = relicore::blackbody::calibrated_temperature_with_uncertainty(x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10) {
-            prop_assert!(v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite()), "calibrated_temperature_with_uncertainty({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10), v); prop_assert!(!any_nan, "calibrated_temperature_with_uncertainty: NaN accepted");
+        match relicore::blackbody::calibrated_temperature_with_uncertainty(x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10) {
+            Ok(v) => { prop_assert!(v.temperature_k.is_finite() && v.combined_standard_uncertainty_k.is_finite() && v.sensitivity_coefficients.iter().all(|c| c.is_finite()), "calibrated_temperature_with_uncertainty({:?}) = Ok({:?})", (x0, x1, x2, x3, x4, x5, x6, x7, x8, x9, x10), v); prop_assert!(!any_nan, "calibrated_temperature_with_uncertainty: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 11] = ["frequency_hz", "reading_hot", "temperature_hot_k", "reading_cold", "temperature_cold_k", "reading", "reading_hot_uncertainty", "temperature_hot_uncertainty_k", "reading_cold_uncertainty", "temperature_cold_uncertainty_k", "reading_uncertainty"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "calibrated_temperature_with_uncertainty: {:?}", e); },
         }
     }
 }
@@ -747,8 +808,9 @@ proptest! {
     fn contract_dimensionless_hubble_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.dimensionless_hubble(x0) {
-            prop_assert!(v.is_finite(), "dimensionless_hubble({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "dimensionless_hubble: NaN accepted");
+        match r.dimensionless_hubble(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "dimensionless_hubble({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "dimensionless_hubble: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "dimensionless_hubble: {:?}", e); },
         }
     }
 }
@@ -758,8 +820,9 @@ proptest! {
     fn contract_hubble_parameter_km_s_mpc_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.hubble_parameter_km_s_mpc(x0) {
-            prop_assert!(v.is_finite(), "hubble_parameter_km_s_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "hubble_parameter_km_s_mpc: NaN accepted");
+        match r.hubble_parameter_km_s_mpc(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "hubble_parameter_km_s_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "hubble_parameter_km_s_mpc: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "hubble_parameter_km_s_mpc: {:?}", e); },
         }
     }
 }
@@ -769,8 +832,9 @@ proptest! {
     fn contract_omega_matter_at_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.omega_matter_at(x0) {
-            prop_assert!(v.is_finite(), "omega_matter_at({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "omega_matter_at: NaN accepted");
+        match r.omega_matter_at(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "omega_matter_at({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "omega_matter_at: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "omega_matter_at: {:?}", e); },
         }
     }
 }
@@ -780,8 +844,9 @@ proptest! {
     fn contract_omega_radiation_at_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.omega_radiation_at(x0) {
-            prop_assert!(v.is_finite(), "omega_radiation_at({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "omega_radiation_at: NaN accepted");
+        match r.omega_radiation_at(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "omega_radiation_at({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "omega_radiation_at: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "omega_radiation_at: {:?}", e); },
         }
     }
 }
@@ -791,8 +856,9 @@ proptest! {
     fn contract_omega_dark_energy_at_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.omega_dark_energy_at(x0) {
-            prop_assert!(v.is_finite(), "omega_dark_energy_at({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "omega_dark_energy_at: NaN accepted");
+        match r.omega_dark_energy_at(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "omega_dark_energy_at({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "omega_dark_energy_at: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "omega_dark_energy_at: {:?}", e); },
         }
     }
 }
@@ -802,8 +868,9 @@ proptest! {
     fn contract_omega_curvature_at_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.omega_curvature_at(x0) {
-            prop_assert!(v.is_finite(), "omega_curvature_at({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "omega_curvature_at: NaN accepted");
+        match r.omega_curvature_at(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "omega_curvature_at({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "omega_curvature_at: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "omega_curvature_at: {:?}", e); },
         }
     }
 }
@@ -813,8 +880,9 @@ proptest! {
     fn contract_critical_density_kg_m3_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.critical_density_kg_m3(x0) {
-            prop_assert!(v.is_finite(), "critical_density_kg_m3({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "critical_density_kg_m3: NaN accepted");
+        match r.critical_density_kg_m3(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "critical_density_kg_m3({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "critical_density_kg_m3: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "critical_density_kg_m3: {:?}", e); },
         }
     }
 }
@@ -824,8 +892,9 @@ proptest! {
     fn contract_cmb_temperature_at_k_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.cmb_temperature_at_k(x0) {
-            prop_assert!(v.is_finite(), "cmb_temperature_at_k({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "cmb_temperature_at_k: NaN accepted");
+        match r.cmb_temperature_at_k(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "cmb_temperature_at_k({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "cmb_temperature_at_k: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "cmb_temperature_at_k: {:?}", e); },
         }
     }
 }
@@ -835,8 +904,9 @@ proptest! {
     fn contract_comoving_distance_mpc_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.comoving_distance_mpc(x0) {
-            prop_assert!(v.is_finite(), "comoving_distance_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "comoving_distance_mpc: NaN accepted");
+        match r.comoving_distance_mpc(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "comoving_distance_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "comoving_distance_mpc: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "comoving_distance_mpc: {:?}", e); },
         }
     }
 }
@@ -846,8 +916,9 @@ proptest! {
     fn contract_transverse_comoving_distance_mpc_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.transverse_comoving_distance_mpc(x0) {
-            prop_assert!(v.is_finite(), "transverse_comoving_distance_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "transverse_comoving_distance_mpc: NaN accepted");
+        match r.transverse_comoving_distance_mpc(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "transverse_comoving_distance_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "transverse_comoving_distance_mpc: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "transverse_comoving_distance_mpc: {:?}", e); },
         }
     }
 }
@@ -857,8 +928,9 @@ proptest! {
     fn contract_angular_diameter_distance_mpc_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.angular_diameter_distance_mpc(x0) {
-            prop_assert!(v.is_finite(), "angular_diameter_distance_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "angular_diameter_distance_mpc: NaN accepted");
+        match r.angular_diameter_distance_mpc(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "angular_diameter_distance_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "angular_diameter_distance_mpc: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "angular_diameter_distance_mpc: {:?}", e); },
         }
     }
 }
@@ -868,8 +940,9 @@ proptest! {
     fn contract_luminosity_distance_mpc_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.luminosity_distance_mpc(x0) {
-            prop_assert!(v.is_finite(), "luminosity_distance_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "luminosity_distance_mpc: NaN accepted");
+        match r.luminosity_distance_mpc(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "luminosity_distance_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "luminosity_distance_mpc: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "luminosity_distance_mpc: {:?}", e); },
         }
     }
 }
@@ -879,8 +952,9 @@ proptest! {
     fn contract_distance_modulus_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.distance_modulus(x0) {
-            prop_assert!(v.is_finite(), "distance_modulus({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "distance_modulus: NaN accepted");
+        match r.distance_modulus(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "distance_modulus({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "distance_modulus: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "distance_modulus: {:?}", e); },
         }
     }
 }
@@ -890,8 +964,9 @@ proptest! {
     fn contract_comoving_volume_gpc3_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.comoving_volume_gpc3(x0) {
-            prop_assert!(v.is_finite(), "comoving_volume_gpc3({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "comoving_volume_gpc3: NaN accepted");
+        match r.comoving_volume_gpc3(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "comoving_volume_gpc3({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "comoving_volume_gpc3: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "comoving_volume_gpc3: {:?}", e); },
         }
     }
 }
@@ -901,8 +976,9 @@ proptest! {
     fn contract_differential_comoving_volume_mpc3_sr_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.differential_comoving_volume_mpc3_sr(x0) {
-            prop_assert!(v.is_finite(), "differential_comoving_volume_mpc3_sr({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "differential_comoving_volume_mpc3_sr: NaN accepted");
+        match r.differential_comoving_volume_mpc3_sr(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "differential_comoving_volume_mpc3_sr({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "differential_comoving_volume_mpc3_sr: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "differential_comoving_volume_mpc3_sr: {:?}", e); },
         }
     }
 }
@@ -912,8 +988,9 @@ proptest! {
     fn contract_transverse_scale_kpc_per_arcsec_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.transverse_scale_kpc_per_arcsec(x0) {
-            prop_assert!(v.is_finite(), "transverse_scale_kpc_per_arcsec({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "transverse_scale_kpc_per_arcsec: NaN accepted");
+        match r.transverse_scale_kpc_per_arcsec(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "transverse_scale_kpc_per_arcsec({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "transverse_scale_kpc_per_arcsec: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "transverse_scale_kpc_per_arcsec: {:?}", e); },
         }
     }
 }
@@ -923,8 +1000,9 @@ proptest! {
     fn contract_lookback_time_gyr_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.lookback_time_gyr(x0) {
-            prop_assert!(v.is_finite(), "lookback_time_gyr({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "lookback_time_gyr: NaN accepted");
+        match r.lookback_time_gyr(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "lookback_time_gyr({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "lookback_time_gyr: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "lookback_time_gyr: {:?}", e); },
         }
     }
 }
@@ -934,8 +1012,9 @@ proptest! {
     fn contract_age_gyr_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.age_gyr(x0) {
-            prop_assert!(v.is_finite(), "age_gyr({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "age_gyr: NaN accepted");
+        match r.age_gyr(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "age_gyr({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "age_gyr: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "age_gyr: {:?}", e); },
         }
     }
 }
@@ -945,8 +1024,9 @@ proptest! {
     fn contract_conformal_time_mpc_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.conformal_time_mpc(x0) {
-            prop_assert!(v.is_finite(), "conformal_time_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "conformal_time_mpc: NaN accepted");
+        match r.conformal_time_mpc(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "conformal_time_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "conformal_time_mpc: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "conformal_time_mpc: {:?}", e); },
         }
     }
 }
@@ -956,8 +1036,9 @@ proptest! {
     fn contract_angular_diameter_distance_between_mpc_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let r = &*UNIVERSE; let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = r.angular_diameter_distance_between_mpc(x0, x1) {
-            prop_assert!(v.is_finite(), "angular_diameter_distance_between_mpc({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "angular_diameter_distance_between_mpc: NaN accepted");
+        match r.angular_diameter_distance_between_mpc(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "angular_diameter_distance_between_mpc({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "angular_diameter_distance_between_mpc: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["z1", "z2"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "angular_diameter_distance_between_mpc: {:?}", e); },
         }
     }
 }
@@ -967,8 +1048,9 @@ proptest! {
     fn contract_redshift_at_age_gyr_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.redshift_at_age_gyr(x0) {
-            prop_assert!(v.is_finite(), "redshift_at_age_gyr({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "redshift_at_age_gyr: NaN accepted");
+        match r.redshift_at_age_gyr(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "redshift_at_age_gyr({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "redshift_at_age_gyr: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["age_gyr"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "redshift_at_age_gyr: {:?}", e); },
         }
     }
 }
@@ -978,8 +1060,9 @@ proptest! {
     fn contract_redshift_at_lookback_time_gyr_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.redshift_at_lookback_time_gyr(x0) {
-            prop_assert!(v.is_finite(), "redshift_at_lookback_time_gyr({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "redshift_at_lookback_time_gyr: NaN accepted");
+        match r.redshift_at_lookback_time_gyr(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "redshift_at_lookback_time_gyr({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "redshift_at_lookback_time_gyr: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["lookback_gyr"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "redshift_at_lookback_time_gyr: {:?}", e); },
         }
     }
 }
@@ -989,8 +1072,9 @@ proptest! {
     fn contract_redshift_at_comoving_distance_mpc_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.redshift_at_comoving_distance_mpc(x0) {
-            prop_assert!(v.is_finite(), "redshift_at_comoving_distance_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "redshift_at_comoving_distance_mpc: NaN accepted");
+        match r.redshift_at_comoving_distance_mpc(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "redshift_at_comoving_distance_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "redshift_at_comoving_distance_mpc: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["distance_mpc"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "redshift_at_comoving_distance_mpc: {:?}", e); },
         }
     }
 }
@@ -1000,8 +1084,9 @@ proptest! {
     fn contract_redshift_at_luminosity_distance_mpc_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.redshift_at_luminosity_distance_mpc(x0) {
-            prop_assert!(v.is_finite(), "redshift_at_luminosity_distance_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "redshift_at_luminosity_distance_mpc: NaN accepted");
+        match r.redshift_at_luminosity_distance_mpc(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "redshift_at_luminosity_distance_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "redshift_at_luminosity_distance_mpc: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["distance_mpc"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "redshift_at_luminosity_distance_mpc: {:?}", e); },
         }
     }
 }
@@ -1011,8 +1096,9 @@ proptest! {
     fn contract_saha_ionized_fraction_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = relicore::decoupling::saha_ionized_fraction(r, x0) {
-            prop_assert!(v.is_finite(), "saha_ionized_fraction({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "saha_ionized_fraction: NaN accepted");
+        match relicore::decoupling::saha_ionized_fraction(r, x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "saha_ionized_fraction({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "saha_ionized_fraction: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["universe", "z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "saha_ionized_fraction: {:?}", e); },
         }
     }
 }
@@ -1022,8 +1108,9 @@ proptest! {
     fn contract_last_scattering_redshift_fit_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::decoupling::last_scattering_redshift_fit(x0, x1) {
-            prop_assert!(v.is_finite(), "last_scattering_redshift_fit({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "last_scattering_redshift_fit: NaN accepted");
+        match relicore::decoupling::last_scattering_redshift_fit(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "last_scattering_redshift_fit({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "last_scattering_redshift_fit: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["omega_baryon_h2", "omega_matter_h2"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "last_scattering_redshift_fit: {:?}", e); },
         }
     }
 }
@@ -1033,8 +1120,9 @@ proptest! {
     fn contract_drag_redshift_fit_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = relicore::decoupling::drag_redshift_fit(x0, x1) {
-            prop_assert!(v.is_finite(), "drag_redshift_fit({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "drag_redshift_fit: NaN accepted");
+        match relicore::decoupling::drag_redshift_fit(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "drag_redshift_fit({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "drag_redshift_fit: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["omega_baryon_h2", "omega_matter_h2"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "drag_redshift_fit: {:?}", e); },
         }
     }
 }
@@ -1044,8 +1132,9 @@ proptest! {
     fn contract_ionized_fraction_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*HISTORY; let any_nan = x0.is_nan();
-        if let Ok(v) = r.ionized_fraction(x0) {
-            prop_assert!(v.is_finite(), "ionized_fraction({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "ionized_fraction: NaN accepted");
+        match r.ionized_fraction(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "ionized_fraction({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "ionized_fraction: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "ionized_fraction: {:?}", e); },
         }
     }
 }
@@ -1055,8 +1144,9 @@ proptest! {
     fn contract_matter_temperature_k_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*HISTORY; let any_nan = x0.is_nan();
-        if let Ok(v) = r.matter_temperature_k(x0) {
-            prop_assert!(v.is_finite(), "matter_temperature_k({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "matter_temperature_k: NaN accepted");
+        match r.matter_temperature_k(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "matter_temperature_k({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "matter_temperature_k: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "matter_temperature_k: {:?}", e); },
         }
     }
 }
@@ -1066,8 +1156,9 @@ proptest! {
     fn contract_optical_depth_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*HISTORY; let any_nan = x0.is_nan();
-        if let Ok(v) = r.optical_depth(x0) {
-            prop_assert!(v.is_finite(), "optical_depth({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "optical_depth: NaN accepted");
+        match r.optical_depth(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "optical_depth({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "optical_depth: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "optical_depth: {:?}", e); },
         }
     }
 }
@@ -1077,8 +1168,9 @@ proptest! {
     fn contract_visibility_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*HISTORY; let any_nan = x0.is_nan();
-        if let Ok(v) = r.visibility(x0) {
-            prop_assert!(v.is_finite(), "visibility({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "visibility: NaN accepted");
+        match r.visibility(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "visibility({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "visibility: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "visibility: {:?}", e); },
         }
     }
 }
@@ -1088,8 +1180,9 @@ proptest! {
     fn contract_sound_horizon_mpc_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*HISTORY; let any_nan = x0.is_nan();
-        if let Ok(v) = r.sound_horizon_mpc(x0) {
-            prop_assert!(v.is_finite(), "sound_horizon_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "sound_horizon_mpc: NaN accepted");
+        match r.sound_horizon_mpc(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "sound_horizon_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "sound_horizon_mpc: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "sound_horizon_mpc: {:?}", e); },
         }
     }
 }
@@ -1189,8 +1282,9 @@ proptest! {
     fn contract_hubble_distance_at_mpc_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.hubble_distance_at_mpc(x0) {
-            prop_assert!(v.is_finite(), "hubble_distance_at_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "hubble_distance_at_mpc: NaN accepted");
+        match r.hubble_distance_at_mpc(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "hubble_distance_at_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "hubble_distance_at_mpc: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "hubble_distance_at_mpc: {:?}", e); },
         }
     }
 }
@@ -1200,8 +1294,9 @@ proptest! {
     fn contract_volume_averaged_distance_mpc_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &*UNIVERSE; let any_nan = x0.is_nan();
-        if let Ok(v) = r.volume_averaged_distance_mpc(x0) {
-            prop_assert!(v.is_finite(), "volume_averaged_distance_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "volume_averaged_distance_mpc: NaN accepted");
+        match r.volume_averaged_distance_mpc(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "volume_averaged_distance_mpc({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "volume_averaged_distance_mpc: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "volume_averaged_distance_mpc: {:?}", e); },
         }
     }
 }
@@ -1211,8 +1306,9 @@ proptest! {
     fn contract_transverse_comoving_distance_over_sound_horizon_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let r = &*UNIVERSE; let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = r.transverse_comoving_distance_over_sound_horizon(x0, x1) {
-            prop_assert!(v.is_finite(), "transverse_comoving_distance_over_sound_horizon({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "transverse_comoving_distance_over_sound_horizon: NaN accepted");
+        match r.transverse_comoving_distance_over_sound_horizon(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "transverse_comoving_distance_over_sound_horizon({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "transverse_comoving_distance_over_sound_horizon: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["z", "sound_horizon_drag_mpc"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "transverse_comoving_distance_over_sound_horizon: {:?}", e); },
         }
     }
 }
@@ -1222,8 +1318,9 @@ proptest! {
     fn contract_hubble_distance_over_sound_horizon_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let r = &*UNIVERSE; let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = r.hubble_distance_over_sound_horizon(x0, x1) {
-            prop_assert!(v.is_finite(), "hubble_distance_over_sound_horizon({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "hubble_distance_over_sound_horizon: NaN accepted");
+        match r.hubble_distance_over_sound_horizon(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "hubble_distance_over_sound_horizon({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "hubble_distance_over_sound_horizon: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["z", "sound_horizon_drag_mpc"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "hubble_distance_over_sound_horizon: {:?}", e); },
         }
     }
 }
@@ -1233,8 +1330,9 @@ proptest! {
     fn contract_volume_averaged_distance_over_sound_horizon_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let r = &*UNIVERSE; let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = r.volume_averaged_distance_over_sound_horizon(x0, x1) {
-            prop_assert!(v.is_finite(), "volume_averaged_distance_over_sound_horizon({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "volume_averaged_distance_over_sound_horizon: NaN accepted");
+        match r.volume_averaged_distance_over_sound_horizon(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "volume_averaged_distance_over_sound_horizon({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "volume_averaged_distance_over_sound_horizon: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["z", "sound_horizon_drag_mpc"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "volume_averaged_distance_over_sound_horizon: {:?}", e); },
         }
     }
 }
@@ -1244,8 +1342,9 @@ proptest! {
     fn contract_leapfrog_drift_factor_gyr_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let r = &**GROWTH; let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = r.leapfrog_drift_factor_gyr(x0, x1) {
-            prop_assert!(v.is_finite(), "leapfrog_drift_factor_gyr({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "leapfrog_drift_factor_gyr: NaN accepted");
+        match r.leapfrog_drift_factor_gyr(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "leapfrog_drift_factor_gyr({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "leapfrog_drift_factor_gyr: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["start_scale_factor", "end_scale_factor"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "leapfrog_drift_factor_gyr: {:?}", e); },
         }
     }
 }
@@ -1255,8 +1354,9 @@ proptest! {
     fn contract_leapfrog_kick_factor_gyr_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let r = &**GROWTH; let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = r.leapfrog_kick_factor_gyr(x0, x1) {
-            prop_assert!(v.is_finite(), "leapfrog_kick_factor_gyr({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "leapfrog_kick_factor_gyr: NaN accepted");
+        match r.leapfrog_kick_factor_gyr(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "leapfrog_kick_factor_gyr({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "leapfrog_kick_factor_gyr: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["start_scale_factor", "end_scale_factor"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "leapfrog_kick_factor_gyr: {:?}", e); },
         }
     }
 }
@@ -1266,8 +1366,9 @@ proptest! {
     fn contract_growth_factor_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &**GROWTH; let any_nan = x0.is_nan();
-        if let Ok(v) = r.growth_factor(x0) {
-            prop_assert!(v.is_finite(), "growth_factor({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "growth_factor: NaN accepted");
+        match r.growth_factor(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "growth_factor({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "growth_factor: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "growth_factor: {:?}", e); },
         }
     }
 }
@@ -1277,8 +1378,9 @@ proptest! {
     fn contract_growth_rate_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &**GROWTH; let any_nan = x0.is_nan();
-        if let Ok(v) = r.growth_rate(x0) {
-            prop_assert!(v.is_finite(), "growth_rate({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "growth_rate: NaN accepted");
+        match r.growth_rate(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "growth_rate({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "growth_rate: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "growth_rate: {:?}", e); },
         }
     }
 }
@@ -1288,8 +1390,9 @@ proptest! {
     fn contract_unnormalized_growth_factor_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &**GROWTH; let any_nan = x0.is_nan();
-        if let Ok(v) = r.unnormalized_growth_factor(x0) {
-            prop_assert!(v.is_finite(), "unnormalized_growth_factor({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "unnormalized_growth_factor: NaN accepted");
+        match r.unnormalized_growth_factor(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "unnormalized_growth_factor({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "unnormalized_growth_factor: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "unnormalized_growth_factor: {:?}", e); },
         }
     }
 }
@@ -1299,8 +1402,9 @@ proptest! {
     fn contract_transfer_function_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &**SPECTRUM; let any_nan = x0.is_nan();
-        if let Ok(v) = r.transfer_function(x0) {
-            prop_assert!(v.is_finite(), "transfer_function({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "transfer_function: NaN accepted");
+        match r.transfer_function(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "transfer_function({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "transfer_function: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["wavenumber_per_mpc"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "transfer_function: {:?}", e); },
         }
     }
 }
@@ -1310,8 +1414,9 @@ proptest! {
     fn contract_linear_power_spectrum_mpc3_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let r = &**SPECTRUM; let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = r.linear_power_spectrum_mpc3(x0, x1) {
-            prop_assert!(v.is_finite(), "linear_power_spectrum_mpc3({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "linear_power_spectrum_mpc3: NaN accepted");
+        match r.linear_power_spectrum_mpc3(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "linear_power_spectrum_mpc3({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "linear_power_spectrum_mpc3: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["wavenumber_per_mpc", "z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "linear_power_spectrum_mpc3: {:?}", e); },
         }
     }
 }
@@ -1321,8 +1426,9 @@ proptest! {
     fn contract_density_rms_in_sphere_f64(x0 in any::<u64>(), x1 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1);
         let r = &**SPECTRUM; let any_nan = x0.is_nan() || x1.is_nan();
-        if let Ok(v) = r.density_rms_in_sphere(x0, x1) {
-            prop_assert!(v.is_finite(), "density_rms_in_sphere({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "density_rms_in_sphere: NaN accepted");
+        match r.density_rms_in_sphere(x0, x1) {
+            Ok(v) => { prop_assert!(v.is_finite(), "density_rms_in_sphere({:?}) = Ok({:?})", (x0, x1), v); prop_assert!(!any_nan, "density_rms_in_sphere: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 2] = ["radius_mpc", "z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "density_rms_in_sphere: {:?}", e); },
         }
     }
 }
@@ -1332,8 +1438,9 @@ proptest! {
     fn contract_growth_rate_times_sigma8_f64(x0 in any::<u64>()) {
         let x0 = f64::from_bits(x0);
         let r = &**SPECTRUM; let any_nan = x0.is_nan();
-        if let Ok(v) = r.growth_rate_times_sigma8(x0) {
-            prop_assert!(v.is_finite(), "growth_rate_times_sigma8({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "growth_rate_times_sigma8: NaN accepted");
+        match r.growth_rate_times_sigma8(x0) {
+            Ok(v) => { prop_assert!(v.is_finite(), "growth_rate_times_sigma8({:?}) = Ok({:?})", (x0), v); prop_assert!(!any_nan, "growth_rate_times_sigma8: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 1] = ["z"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "growth_rate_times_sigma8: {:?}", e); },
         }
     }
 }
@@ -1370,8 +1477,9 @@ proptest! {
     fn contract_eisenstein_hu_transfer_function_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>(), x3 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2); let x3 = f64::from_bits(x3);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan();
-        if let Ok(v) = relicore::growth::eisenstein_hu_transfer_function(x0, x1, x2, x3) {
-            prop_assert!(v.is_finite(), "eisenstein_hu_transfer_function({:?}) = Ok({:?})", (x0, x1, x2, x3), v); prop_assert!(!any_nan, "eisenstein_hu_transfer_function: NaN accepted");
+        match relicore::growth::eisenstein_hu_transfer_function(x0, x1, x2, x3) {
+            Ok(v) => { prop_assert!(v.is_finite(), "eisenstein_hu_transfer_function({:?}) = Ok({:?})", (x0, x1, x2, x3), v); prop_assert!(!any_nan, "eisenstein_hu_transfer_function: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 4] = ["wavenumber_per_mpc", "omega_matter_h2", "omega_baryon_h2", "cmb_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "eisenstein_hu_transfer_function: {:?}", e); },
         }
     }
 }
@@ -1381,8 +1489,9 @@ proptest! {
     fn contract_eisenstein_hu_no_wiggle_transfer_function_f64(x0 in any::<u64>(), x1 in any::<u64>(), x2 in any::<u64>(), x3 in any::<u64>()) {
         let x0 = f64::from_bits(x0); let x1 = f64::from_bits(x1); let x2 = f64::from_bits(x2); let x3 = f64::from_bits(x3);
         let any_nan = x0.is_nan() || x1.is_nan() || x2.is_nan() || x3.is_nan();
-        if let Ok(v) = relicore::growth::eisenstein_hu_no_wiggle_transfer_function(x0, x1, x2, x3) {
-            prop_assert!(v.is_finite(), "eisenstein_hu_no_wiggle_transfer_function({:?}) = Ok({:?})", (x0, x1, x2, x3), v); prop_assert!(!any_nan, "eisenstein_hu_no_wiggle_transfer_function: NaN accepted");
+        match relicore::growth::eisenstein_hu_no_wiggle_transfer_function(x0, x1, x2, x3) {
+            Ok(v) => { prop_assert!(v.is_finite(), "eisenstein_hu_no_wiggle_transfer_function({:?}) = Ok({:?})", (x0, x1, x2, x3), v); prop_assert!(!any_nan, "eisenstein_hu_no_wiggle_transfer_function: NaN accepted"); }
+            Err(e) => if let Some(p) = e.argument() { let names: [&str; 4] = ["wavenumber_per_mpc", "omega_matter_h2", "omega_baryon_h2", "cmb_temperature_k"]; prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), "eisenstein_hu_no_wiggle_transfer_function: {:?}", e); },
         }
     }
 }

@@ -31,7 +31,7 @@ proptest! {
         let inputs = [lo, hi, c];
         contract("bracketed_newton", &inputs, 3, roots::bracketed_newton(f, lo, hi, tol, 200))?;
         contract("bracketed_newton_relative", &inputs, 3, roots::bracketed_newton_relative(f, lo, hi, tol, 200))?;
-        contract("solve_monotone_positive", &[lo, c], 2, roots::solve_monotone_positive(f, lo, true, 0))?;
+        contract("solve_monotone_positive", &[lo, c], 2, roots::solve_monotone_positive(f, lo, true, relicore::arg!(0, target)))?;
     }
 
     #[test]
@@ -153,7 +153,7 @@ proptest! {
         let got = ok("root", roots::bracketed_newton_relative(f, 0.0, c + 1.0, 4.0 * f64::EPSILON, 200))?;
         close("cube root", got, c.cbrt(), 8.0 * f64::EPSILON * c.cbrt())?;
         // the same root from a guess far away, with the bracket grown by the solver
-        let grown = ok("root", roots::solve_monotone_positive(f, 1e3 * (c + 1.0), true, 0))?;
+        let grown = ok("root", roots::solve_monotone_positive(f, 1e3 * (c + 1.0), true, relicore::arg!(0, target)))?;
         close("cube root (grown bracket)", grown, c.cbrt(), 8.0 * f64::EPSILON * c.cbrt())?;
     }
 }

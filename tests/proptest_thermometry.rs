@@ -367,7 +367,7 @@ proptest! {
         }
         let mut short = vec![0.0; n + 1];
         let lm = bb::object_temperature_wavelength_array(l, &sig, &e, &tr, &tau, &tp, &mut short);
-        prop_assert_eq!(lm.err().map(|x| x.error), Some(Error::LengthMismatch(6)));
+        prop_assert_eq!(lm.err().map(|x| x.error), Some(Error::LengthMismatch(relicore::arg!(6, out))));
         prop_assert!(short.iter().all(|v| v.is_nan()));
     }
 

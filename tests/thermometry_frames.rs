@@ -174,10 +174,10 @@ fn budget_lengths_and_other_quantities() {
         &one(2.0),
         &mut short,
     );
-    assert_eq!(
-        r.err().map(|e| e.error),
-        Some(relicore::Error::LengthMismatch(11))
-    );
+    let e = r.err().map(|e| e.error);
+    assert!(matches!(e, Some(relicore::Error::LengthMismatch(_))));
+    assert_eq!(e.and_then(|e| e.argument()), Some(11));
+    assert_eq!(e.and_then(|e| e.argument_name()), Some("out"));
     assert!(
         short
             .iter()

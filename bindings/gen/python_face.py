@@ -63,7 +63,7 @@ def _slice_call(fn: Function, call: str) -> str:
     """A closure body taking the element-wise values as a slice (more than 4 arguments, or a
     row result): the core call when the slice has the function's arity."""
     names = ", ".join(fn.arg_names)
-    return f"match *x {{ [{names}] => {call}, _ => Err(Error::LengthMismatch(0)) }}"
+    return f"match *x {{ [{names}] => {call}, _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }}"
 
 
 def _row_function(rt, real: str = "f64") -> str:
@@ -103,7 +103,7 @@ def _rust_frame(fn: Function, real: str = "f64") -> str:
     lines = ["#[allow(clippy::too_many_arguments)]",
              f"fn {fn.name}_frame{suffix}(x: &[&[{real}]], out: &mut [{real}]) -> ArrayResult {{"]
     lines.append(f"    let &[{', '.join(names)}] = x else {{")
-    lines.append("        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });")
+    lines.append("        return Err(ElementError { index: 0, error: Error::LengthMismatch(relicore::arg!(0, arguments)) });")
     lines.append("    };")
     for a in names[:k]:
         lines.append(f"    let {a} = {a}.first().copied().unwrap_or({real}::NAN);")
@@ -280,7 +280,7 @@ def _rust_tables() -> list[str]:
         out += ["", f"/// `relicore::blackbody::{tf.name}` on the two tables and one element's values.",
                 f"fn {tf.name}_table(w: &[f64], r: &[f64], x: &[f64], out: &mut [f64]) -> relicore::Result<()> {{",
                 f"    match *x {{ [{', '.join(tf.args)}] => relicore::blackbody::{tf.name}(w, r, {', '.join(tf.args)})"
-                f".map(|v| {put}), _ => Err(Error::LengthMismatch(2)) }}", "}"]
+                f".map(|v| {put}), _ => Err(Error::LengthMismatch(relicore::arg!(2, values))) }}", "}"]
     rows = [f'    ("{tf.name}", &[{", ".join(chr(34) + a + chr(34) for a in tf.args)}], '
             f"{tf.result_type.width if tf.result_type else 1}, {tf.name}_table)," for tf in table_functions()]
     return out + ["", "/// The response-table functions: name, element-wise parameters (after the two tables), floats",

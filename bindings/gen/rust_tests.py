@@ -154,9 +154,17 @@ def bench_outputs(fns: list[Function]) -> str:
     )
 
 
+def _error_names(fn: Function) -> list[str]:
+    """The core's parameter names in the order of its error positions: the table's arguments,
+    after the receiver when the core is a free function taking it first (`core = ...`)."""
+    names = [a.name for a in fn.args]
+    return [fn.receiver] + names if fn.core and fn.receiver != "none" else names
+
+
 def test_outputs(fns: list[Function]) -> str:
     """Property and threads tests of every regular function (the contract: no panic, Ok finite,
-    NaN refused; the same bits from every thread)."""
+    NaN refused, an error names an argument by its name at its position; the same bits from
+    every thread)."""
     props = []
     grid_calls = []
     for fn in fns:
@@ -184,8 +192,11 @@ def test_outputs(fns: list[Function]) -> str:
                 "proptest! {\n    #[test]\n"
                 f"    fn contract_{fn.name}_{ty}({strat}) {{\n"
                 f"        {conv}\n        {recv}let any_nan = {' || '.join(f'{v}.is_nan()' for v in vars_)};\n"
-                f"        if let Ok(v) = {call} {{\n"
-                f"            prop_assert!({ok}, \"{fn.name}({{:?}}) = Ok({{:?}})\", ({', '.join(vars_)}), v); prop_assert!(!any_nan, \"{fn.name}: NaN accepted\");\n"
+                f"        match {call} {{\n"
+                f"            Ok(v) => {{ prop_assert!({ok}, \"{fn.name}({{:?}}) = Ok({{:?}})\", ({', '.join(vars_)}), v); prop_assert!(!any_nan, \"{fn.name}: NaN accepted\"); }}\n"
+                # an error names the argument at its position by the table's (= the core's) name
+                f"            Err(e) => if let Some(p) = e.argument() {{ let names: [&str; {len(_error_names(fn))}] = [{', '.join(chr(34) + a + chr(34) for a in _error_names(fn))}]; "
+                f"prop_assert_eq!(names.get(usize::from(p)).copied(), e.argument_name(), \"{fn.name}: {{:?}}\", e); }},\n"
                 "        }\n    }\n}"
             )
         if fn.receiver == "none":
@@ -196,7 +207,8 @@ def test_outputs(fns: list[Function]) -> str:
     return rustfmt(
         banner("//", "the property and threads tests of every regular function")
         + "//! Every regular function of the table against its contract on arbitrary bit patterns\n"
-        "//! (no panic; `Ok` holds a finite value; a NaN argument is refused), and the functions\n"
+        "//! (no panic; `Ok` holds a finite value; a NaN argument is refused; an error names the\n"
+        "//! argument at its position by the table's name, the core's parameter name), and the functions\n"
         "//! without a receiver called from several threads at once give the serial bits.\n\n"
         "use proptest::prelude::*;\n"
         "use relicore::cosmology::{Universe, UniverseParameters};\n"

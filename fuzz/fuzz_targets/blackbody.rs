@@ -525,7 +525,7 @@ fn arrays<T: Float>(input: &mut Input<'_>) {
     if m != n {
         assert_eq!(
             got.map_err(|e| e.error),
-            Err(Error::LengthMismatch(2)),
+            Err(Error::LengthMismatch(relicore::arg!(2, out))),
             "mismatched out"
         );
         assert!(out.iter().all(|v| v.is_nan()), "mismatched out not all NaN");

@@ -14,10 +14,11 @@
 //! Gauss-Kronrod quadrature instead.
 
 use super::kernel::{K3, K4, PI4_OVER_15, TWO_ZETA3, invert_increasing, x_frequency, x_wavelength};
+use crate::arg;
 use crate::check::{finite_result, non_negative, positive};
 use crate::math::quadrature::integrate;
 use crate::math::{dd, exp, log};
-use crate::{Error, Real, Result};
+use crate::{Arg, Error, Real, Result};
 
 const SWITCH: f64 = 2.0;
 /// Bands with x_b/x_a below this are integrated directly rather than as a difference.
@@ -191,14 +192,19 @@ fn edge_term<T: Real>(p: u32, x: T) -> T {
     super::kernel::planck_quotient(xp * x, x, T::zero())
 }
 
-/// Checks a wavelength or frequency band: lower finite ≥ 0, upper > lower (+∞ allowed).
-pub(crate) fn check_band<T: Real>(lower: T, upper: T) -> Result<(T, T)> {
-    let lower = non_negative(lower, 0)?;
+/// The edges of a wavelength band as the errors name them.
+pub(crate) const WAVELENGTH_BAND: [Arg; 2] = [arg!(0, lower_m), arg!(1, upper_m)];
+
+/// Checks a wavelength or frequency band: lower finite ≥ 0, upper > lower (+∞ allowed);
+/// `args` are the arguments the errors name (the lower edge, then the upper one).
+pub(crate) fn check_band<T: Real>(lower: T, upper: T, args: [Arg; 2]) -> Result<(T, T)> {
+    let [lower_arg, upper_arg] = args;
+    let lower = non_negative(lower, lower_arg)?;
     if upper.is_nan() || upper == T::neg_infinity() {
-        return Err(Error::NonFinite(1));
+        return Err(Error::NonFinite(upper_arg));
     }
     if upper <= lower {
-        return Err(Error::EmptyInterval(0));
+        return Err(Error::EmptyInterval(lower_arg));
     }
     Ok((lower, upper))
 }
@@ -232,10 +238,13 @@ fn x_edges_wavelength<T: Real>(lower: T, upper: T, t: T) -> ((T, T), (T, T)) {
 ///
 /// Accuracy: within 1e-15 absolute (`f64`) against mpmath quadrature; see the module docs.
 pub fn band_fraction_wavelength<T: Real>(lower_m: T, upper_m: T, temperature_k: T) -> Result<T> {
-    let (lo, up) = check_band(lower_m, upper_m)?;
-    let t = positive(temperature_k, 2)?;
+    let (lo, up) = check_band(lower_m, upper_m, WAVELENGTH_BAND)?;
+    let t = positive(temperature_k, arg!(2, temperature_k))?;
     let (a, b) = x_edges_wavelength(lo, up, t);
-    finite_result(planck_band_integral(3, a, b) / T::c(PI4_OVER_15), 2)
+    finite_result(
+        planck_band_integral(3, a, b) / T::c(PI4_OVER_15),
+        arg!(2, temperature_k),
+    )
 }
 
 /// Band radiance between two wavelengths, L = ∫_{λ₁}^{λ₂} B_λ(λ, T) dλ.
@@ -246,9 +255,12 @@ pub fn band_fraction_wavelength<T: Real>(lower_m: T, upper_m: T, temperature_k: 
 /// Returns W m⁻² sr⁻¹. Errors as [`band_fraction_wavelength`].
 /// Accuracy: within max(1e-14·L, 1e-15·σT⁴/π) (`f64`) against mpmath quadrature.
 pub fn band_radiance_wavelength<T: Real>(lower_m: T, upper_m: T, temperature_k: T) -> Result<T> {
-    let (lo, up) = check_band(lower_m, upper_m)?;
-    let t = positive(temperature_k, 2)?;
-    finite_result(band_radiance_wavelength_unchecked(lo, up, t), 2)
+    let (lo, up) = check_band(lower_m, upper_m, WAVELENGTH_BAND)?;
+    let t = positive(temperature_k, arg!(2, temperature_k))?;
+    finite_result(
+        band_radiance_wavelength_unchecked(lo, up, t),
+        arg!(2, temperature_k),
+    )
 }
 
 fn band_radiance_wavelength_unchecked<T: Real>(lo: T, up: T, t: T) -> T {
@@ -269,10 +281,13 @@ pub fn band_photon_radiance_wavelength<T: Real>(
     upper_m: T,
     temperature_k: T,
 ) -> Result<T> {
-    let (lo, up) = check_band(lower_m, upper_m)?;
-    let t = positive(temperature_k, 2)?;
+    let (lo, up) = check_band(lower_m, upper_m, WAVELENGTH_BAND)?;
+    let t = positive(temperature_k, arg!(2, temperature_k))?;
     let (a, b) = x_edges_wavelength(lo, up, t);
-    finite_result((T::c(K3) * (t * t * t)) * planck_band_integral(2, a, b), 2)
+    finite_result(
+        (T::c(K3) * (t * t * t)) * planck_band_integral(2, a, b),
+        arg!(2, temperature_k),
+    )
 }
 
 /// Band radiance between two frequencies, L = ∫_{ν₁}^{ν₂} B_ν(ν, T) dν.
@@ -283,8 +298,8 @@ pub fn band_photon_radiance_wavelength<T: Real>(
 /// Returns W m⁻² sr⁻¹. Errors as [`band_fraction_wavelength`].
 /// Accuracy: within max(1e-14·L, 1e-15·σT⁴/π) (`f64`) against mpmath quadrature.
 pub fn band_radiance_frequency<T: Real>(lower_hz: T, upper_hz: T, temperature_k: T) -> Result<T> {
-    let (lo, up) = check_band(lower_hz, upper_hz)?;
-    let t = positive(temperature_k, 2)?;
+    let (lo, up) = check_band(lower_hz, upper_hz, [arg!(0, lower_hz), arg!(1, upper_hz)])?;
+    let t = positive(temperature_k, arg!(2, temperature_k))?;
     let a = if lo == T::zero() {
         (T::zero(), T::zero())
     } else {
@@ -296,7 +311,10 @@ pub fn band_radiance_frequency<T: Real>(lower_hz: T, upper_hz: T, temperature_k:
         x_frequency(up, t)
     };
     let t2 = t * t;
-    finite_result((T::c(K4) * (t2 * t2)) * planck_band_integral(3, a, b), 2)
+    finite_result(
+        (T::c(K4) * (t2 * t2)) * planck_band_integral(3, a, b),
+        arg!(2, temperature_k),
+    )
 }
 
 /// Temperature of the blackbody whose band radiance between two wavelengths equals the given
@@ -318,8 +336,8 @@ pub fn temperature_from_band_radiance_wavelength<T: Real>(
     upper_m: T,
     radiance: T,
 ) -> Result<T> {
-    let (lo, up) = check_band(lower_m, upper_m)?;
-    let l = positive(radiance, 2)?;
+    let (lo, up) = check_band(lower_m, upper_m, WAVELENGTH_BAND)?;
+    let l = positive(radiance, arg!(2, radiance))?;
     let guess = if lo > T::zero() && up.is_finite() {
         let centre = T::c(0.5) * (lo + up);
         super::inverse::brightness_temperature_wavelength_unchecked(centre, l / (up - lo))
@@ -330,7 +348,10 @@ pub fn temperature_from_band_radiance_wavelength<T: Real>(
             .sqrt()
     };
     let f = |t: T| band_radiance_and_derivative_wavelength_unchecked(lo, up, t);
-    finite_result(invert_increasing(f, l, guess, 2)?, 2)
+    finite_result(
+        invert_increasing(f, l, guess, arg!(2, radiance))?,
+        arg!(2, radiance),
+    )
 }
 
 /// Band radiance between two wavelengths and its temperature derivative, (L, dL/dT), for a band

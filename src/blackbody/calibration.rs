@@ -15,6 +15,7 @@
 //! standards and licensed practice where a reading protects people or plant.
 
 use super::kernel::{planck_quotient, x_frequency};
+use crate::arg;
 use crate::check::{finite, finite_result, positive};
 use crate::constants as k;
 use crate::{Error, Real, Result};
@@ -57,27 +58,27 @@ pub fn two_load_calibration<T: Real>(
     reading_cold: T,
     temperature_cold_k: T,
 ) -> Result<TwoLoadCalibration<T>> {
-    let nu = positive(frequency_hz, 0)?;
-    let rh = finite(reading_hot, 1)?;
-    let th = positive(temperature_hot_k, 2)?;
-    let rc = finite(reading_cold, 3)?;
-    let tc = positive(temperature_cold_k, 4)?;
+    let nu = positive(frequency_hz, arg!(0, frequency_hz))?;
+    let rh = finite(reading_hot, arg!(1, reading_hot))?;
+    let th = positive(temperature_hot_k, arg!(2, temperature_hot_k))?;
+    let rc = finite(reading_cold, arg!(3, reading_cold))?;
+    let tc = positive(temperature_cold_k, arg!(4, temperature_cold_k))?;
     if th <= tc {
-        return Err(Error::DegenerateCalibration(2));
+        return Err(Error::DegenerateCalibration(arg!(2, temperature_hot_k)));
     }
     if rh == rc {
-        return Err(Error::DegenerateCalibration(1));
+        return Err(Error::DegenerateCalibration(arg!(1, reading_hot)));
     }
     let jh = rj_brightness(nu, th);
     let jc = rj_brightness(nu, tc);
     let dj = jh - jc;
     if !(dj > T::zero()) {
-        return Err(Error::DegenerateCalibration(2));
+        return Err(Error::DegenerateCalibration(arg!(2, temperature_hot_k)));
     }
     let gain = (rh - rc) / dj;
     let offset = rh - gain * jh;
     if !gain.is_finite() || !offset.is_finite() {
-        return Err(Error::DegenerateCalibration(1));
+        return Err(Error::DegenerateCalibration(arg!(1, reading_hot)));
     }
     Ok(TwoLoadCalibration {
         frequency_hz: nu,
@@ -87,11 +88,11 @@ pub fn two_load_calibration<T: Real>(
 }
 
 fn check_calibration<T: Real>(cal: &TwoLoadCalibration<T>) -> Result<()> {
-    positive(cal.frequency_hz, 0)?;
-    finite(cal.offset, 0)?;
-    let g = finite(cal.gain, 0)?;
+    positive(cal.frequency_hz, arg!(0, calibration))?;
+    finite(cal.offset, arg!(0, calibration))?;
+    let g = finite(cal.gain, arg!(0, calibration))?;
     if g == T::zero() {
-        return Err(Error::DegenerateCalibration(0));
+        return Err(Error::DegenerateCalibration(arg!(0, calibration)));
     }
     Ok(())
 }
@@ -112,8 +113,11 @@ pub fn calibrated_brightness_temperature<T: Real>(
     reading: T,
 ) -> Result<T> {
     check_calibration(calibration)?;
-    let r = finite(reading, 1)?;
-    finite_result((r - calibration.offset) / calibration.gain, 1)
+    let r = finite(reading, arg!(1, reading))?;
+    finite_result(
+        (r - calibration.offset) / calibration.gain,
+        arg!(1, reading),
+    )
 }
 
 /// Physical temperature of a blackbody scene from a raw reading: J from
@@ -132,8 +136,8 @@ pub fn calibrated_temperature<T: Real>(
 ) -> Result<T> {
     let j = calibrated_brightness_temperature(calibration, reading)?;
     if !(j > T::zero()) {
-        return Err(Error::OutOfDomain(1));
+        return Err(Error::OutOfDomain(arg!(1, reading)));
     }
     let theta = T::c(k::PLANCK_OVER_BOLTZMANN) * calibration.frequency_hz;
-    finite_result(theta / (theta / j).ln_1p(), 1)
+    finite_result(theta / (theta / j).ln_1p(), arg!(1, reading))
 }

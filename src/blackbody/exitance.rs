@@ -7,6 +7,7 @@
 //! mpmath at 40 digits and rounded once (`tests/reference/blackbody_vectors.py` re-derives
 //! them; the core's root finder reproduces the roots in a unit test).
 
+use crate::arg;
 use crate::check::{finite_result, positive};
 use crate::constants as k;
 use crate::math::dd;
@@ -19,12 +20,12 @@ use crate::{Real, Result};
 /// Returns W m⁻². Errors: `NonFinite(0)`, `NonPositive(0)`.
 /// Accuracy: ≤ 2 ulp (`f64`) against mpmath (T⁴ is formed to double length).
 pub fn radiant_exitance<T: Real>(temperature_k: T) -> Result<T> {
-    let t = positive(temperature_k, 0)?;
+    let t = positive(temperature_k, arg!(0, temperature_k))?;
     let (h2, l2) = dd::two_prod(t, t);
     let (h4, l4) = dd::mul_dd_dd(h2, l2, h2, l2);
     finite_result(
         T::c(k::STEFAN_BOLTZMANN) * h4 + T::c(k::STEFAN_BOLTZMANN) * l4,
-        0,
+        arg!(0, temperature_k),
     )
 }
 
@@ -35,12 +36,12 @@ pub fn radiant_exitance<T: Real>(temperature_k: T) -> Result<T> {
 /// Returns photons s⁻¹ m⁻². Errors: `NonFinite(0)`, `NonPositive(0)`.
 /// Accuracy: ≤ 2 ulp (`f64`) against mpmath.
 pub fn photon_exitance<T: Real>(temperature_k: T) -> Result<T> {
-    let t = positive(temperature_k, 0)?;
+    let t = positive(temperature_k, arg!(0, temperature_k))?;
     let (h2, l2) = dd::two_prod(t, t);
     let (h3, l3) = dd::mul_dd_d(h2, l2, t);
     finite_result(
         T::c(k::PHOTON_STEFAN_BOLTZMANN) * h3 + T::c(k::PHOTON_STEFAN_BOLTZMANN) * l3,
-        0,
+        arg!(0, temperature_k),
     )
 }
 
@@ -62,10 +63,13 @@ const PHOTON_DENSITY: f64 = 20_286_846.033_907_05;
 /// Reference: Planck's law integrated over frequency and solid angle, ∫ 8πν²/c³ /(e^(hν/kT) − 1) dν
 /// (e.g. Rybicki & Lightman, Radiative Processes in Astrophysics, 1979, ch. 1).
 pub fn photon_number_density<T: Real>(temperature_k: T) -> Result<T> {
-    let t = positive(temperature_k, 0)?;
+    let t = positive(temperature_k, arg!(0, temperature_k))?;
     let (h2, l2) = dd::two_prod(t, t);
     let (h3, l3) = dd::mul_dd_d(h2, l2, t);
-    finite_result(T::c(PHOTON_DENSITY) * h3 + T::c(PHOTON_DENSITY) * l3, 0)
+    finite_result(
+        T::c(PHOTON_DENSITY) * h3 + T::c(PHOTON_DENSITY) * l3,
+        arg!(0, temperature_k),
+    )
 }
 
 /// Energy density of blackbody radiation at temperature T, u = aT⁴ = 4σT⁴/c, with the radiation
@@ -81,12 +85,12 @@ pub fn photon_number_density<T: Real>(temperature_k: T) -> Result<T> {
 /// Reference: Stefan 1879, Boltzmann 1884; u = 4M/c for isotropic radiation (e.g. Rybicki &
 /// Lightman 1979, ch. 1).
 pub fn radiation_energy_density<T: Real>(temperature_k: T) -> Result<T> {
-    let t = positive(temperature_k, 0)?;
+    let t = positive(temperature_k, arg!(0, temperature_k))?;
     let (h2, l2) = dd::two_prod(t, t);
     let (h4, l4) = dd::mul_dd_dd(h2, l2, h2, l2);
     finite_result(
         T::c(k::RADIATION_DENSITY) * h4 + T::c(k::RADIATION_DENSITY) * l4,
-        0,
+        arg!(0, temperature_k),
     )
 }
 
@@ -96,7 +100,10 @@ pub fn radiation_energy_density<T: Real>(temperature_k: T) -> Result<T> {
 ///
 /// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
 pub fn peak_wavelength<T: Real>(temperature_k: T) -> Result<T> {
-    finite_result(T::c(k::WIEN_WAVELENGTH) / positive(temperature_k, 0)?, 0)
+    finite_result(
+        T::c(k::WIEN_WAVELENGTH) / positive(temperature_k, arg!(0, temperature_k))?,
+        arg!(0, temperature_k),
+    )
 }
 
 /// Frequency of the maximum of B_ν, ν_max = x₃kT/h.
@@ -105,7 +112,10 @@ pub fn peak_wavelength<T: Real>(temperature_k: T) -> Result<T> {
 ///
 /// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
 pub fn peak_frequency<T: Real>(temperature_k: T) -> Result<T> {
-    finite_result(T::c(k::WIEN_FREQUENCY) * positive(temperature_k, 0)?, 0)
+    finite_result(
+        T::c(k::WIEN_FREQUENCY) * positive(temperature_k, arg!(0, temperature_k))?,
+        arg!(0, temperature_k),
+    )
 }
 
 /// Wavenumber of the maximum of B_ṽ, ṽ_max = x₃T/c₂ (same x as the frequency form).
@@ -114,7 +124,10 @@ pub fn peak_frequency<T: Real>(temperature_k: T) -> Result<T> {
 ///
 /// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
 pub fn peak_wavenumber<T: Real>(temperature_k: T) -> Result<T> {
-    finite_result(T::c(k::WIEN_WAVENUMBER) * positive(temperature_k, 0)?, 0)
+    finite_result(
+        T::c(k::WIEN_WAVENUMBER) * positive(temperature_k, arg!(0, temperature_k))?,
+        arg!(0, temperature_k),
+    )
 }
 
 /// Wavelength of the maximum of the photon radiance N_λ (and of λB_λ), c₂/(x₄T).
@@ -124,8 +137,8 @@ pub fn peak_wavenumber<T: Real>(temperature_k: T) -> Result<T> {
 /// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
 pub fn photon_peak_wavelength<T: Real>(temperature_k: T) -> Result<T> {
     finite_result(
-        T::c(k::WIEN_PHOTON_WAVELENGTH) / positive(temperature_k, 0)?,
-        0,
+        T::c(k::WIEN_PHOTON_WAVELENGTH) / positive(temperature_k, arg!(0, temperature_k))?,
+        arg!(0, temperature_k),
     )
 }
 
@@ -136,8 +149,8 @@ pub fn photon_peak_wavelength<T: Real>(temperature_k: T) -> Result<T> {
 /// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
 pub fn photon_peak_frequency<T: Real>(temperature_k: T) -> Result<T> {
     finite_result(
-        T::c(k::WIEN_PHOTON_FREQUENCY) * positive(temperature_k, 0)?,
-        0,
+        T::c(k::WIEN_PHOTON_FREQUENCY) * positive(temperature_k, arg!(0, temperature_k))?,
+        arg!(0, temperature_k),
     )
 }
 
@@ -147,7 +160,10 @@ pub fn photon_peak_frequency<T: Real>(temperature_k: T) -> Result<T> {
 ///
 /// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
 pub fn temperature_from_peak_wavelength<T: Real>(wavelength_m: T) -> Result<T> {
-    finite_result(T::c(k::WIEN_WAVELENGTH) / positive(wavelength_m, 0)?, 0)
+    finite_result(
+        T::c(k::WIEN_WAVELENGTH) / positive(wavelength_m, arg!(0, wavelength_m))?,
+        arg!(0, wavelength_m),
+    )
 }
 
 /// Temperature whose B_ν peaks at the given frequency, T = hν_max/(x₃k).
@@ -157,7 +173,7 @@ pub fn temperature_from_peak_wavelength<T: Real>(wavelength_m: T) -> Result<T> {
 /// Accuracy: ≤ 1 ulp (`f64`) against mpmath.
 pub fn temperature_from_peak_frequency<T: Real>(frequency_hz: T) -> Result<T> {
     finite_result(
-        T::c(k::WIEN_FREQUENCY_INVERSE) * positive(frequency_hz, 0)?,
-        0,
+        T::c(k::WIEN_FREQUENCY_INVERSE) * positive(frequency_hz, arg!(0, frequency_hz))?,
+        arg!(0, frequency_hz),
     )
 }

@@ -8,6 +8,7 @@
 //! and licensed practice require.
 
 use super::kernel::{ln1p_quotient, ln1p_quotient_fast, two_h_nu3_over_c2, x_wavelength};
+use crate::arg;
 use crate::check::{finite_result, positive};
 use crate::constants as k;
 use crate::math::{dd, roots};
@@ -31,9 +32,12 @@ pub fn brightness_temperature_wavelength<T: Real>(
     wavelength_m: T,
     spectral_radiance: T,
 ) -> Result<T> {
-    let l = positive(wavelength_m, 0)?;
-    let b = positive(spectral_radiance, 1)?;
-    finite_result(brightness_temperature_wavelength_unchecked(l, b), 1)
+    let l = positive(wavelength_m, arg!(0, wavelength_m))?;
+    let b = positive(spectral_radiance, arg!(1, spectral_radiance))?;
+    finite_result(
+        brightness_temperature_wavelength_unchecked(l, b),
+        arg!(1, spectral_radiance),
+    )
 }
 
 #[inline(always)]
@@ -87,8 +91,8 @@ pub fn brightness_temperature_frequency<T: Real>(
     frequency_hz: T,
     spectral_radiance: T,
 ) -> Result<T> {
-    let nu = positive(frequency_hz, 0)?;
-    let b = positive(spectral_radiance, 1)?;
+    let nu = positive(frequency_hz, arg!(0, frequency_hz))?;
+    let b = positive(spectral_radiance, arg!(1, spectral_radiance))?;
     let a = two_h_nu3_over_c2(nu);
     let ln_a = || {
         let s = nu * T::c(super::kernel::SCALE_55);
@@ -96,7 +100,10 @@ pub fn brightness_temperature_frequency<T: Real>(
     };
     let (hh, hl) = T::c2(k::PLANCK_OVER_BOLTZMANN, k::PLANCK_OVER_BOLTZMANN_LO);
     let (th, tl) = dd::mul_dd_d(hh, hl, nu);
-    finite_result((th + tl) / ln1p_quotient(a, ln_a, b), 1)
+    finite_result(
+        (th + tl) / ln1p_quotient(a, ln_a, b),
+        arg!(1, spectral_radiance),
+    )
 }
 
 /// Rayleigh-Jeans temperature: T_RJ = c² L / (2kν²), the temperature the long-wavelength limit
@@ -117,8 +124,8 @@ pub fn brightness_temperature_frequency<T: Real>(
 /// directly lost the bits a subnormal L lacks (3e-12 relative at L = 1.5e-316, where the
 /// result 5.4e-308 K is normal).
 pub fn rayleigh_jeans_temperature<T: Real>(frequency_hz: T, spectral_radiance: T) -> Result<T> {
-    let nu = positive(frequency_hz, 0)?;
-    let b = positive(spectral_radiance, 1)?;
+    let nu = positive(frequency_hz, arg!(0, frequency_hz))?;
+    let b = positive(spectral_radiance, arg!(1, spectral_radiance))?;
     let p = T::MANTISSA_DIGITS as i32;
     let normal = |x: T| -> (T, i32) {
         if x < T::min_positive_value() {
@@ -147,7 +154,7 @@ pub fn rayleigh_jeans_temperature<T: Real>(frequency_hz: T, spectral_radiance: T
         q = q * T::pow2i(k);
         e -= k;
     }
-    finite_result(q, 1)
+    finite_result(q, arg!(1, spectral_radiance))
 }
 
 /// ln(eˣ − 1) without overflow.
@@ -182,13 +189,13 @@ pub fn ratio_temperature<T: Real>(
     radiance_ratio: T,
     emissivity_ratio: T,
 ) -> Result<T> {
-    let l1 = positive(wavelength_1_m, 0)?;
-    let l2 = positive(wavelength_2_m, 1)?;
-    let r = positive(radiance_ratio, 2)?;
-    let e = positive(emissivity_ratio, 3)?;
+    let l1 = positive(wavelength_1_m, arg!(0, wavelength_1_m))?;
+    let l2 = positive(wavelength_2_m, arg!(1, wavelength_2_m))?;
+    let r = positive(radiance_ratio, arg!(2, radiance_ratio))?;
+    let e = positive(emissivity_ratio, arg!(3, emissivity_ratio))?;
     if l1 == l2 {
         // two equal wavelengths carry no temperature information
-        return Err(Error::OutOfDomain(1));
+        return Err(Error::OutOfDomain(arg!(1, wavelength_2_m)));
     }
     // target ln(B1/B2) = ln(R/ε)
     let target = r.ln() - e.ln();
@@ -199,7 +206,7 @@ pub fn ratio_temperature<T: Real>(
     if (increasing_in_u_is_down && target >= four_ln)
         || (!increasing_in_u_is_down && target <= four_ln)
     {
-        return Err(Error::OutOfDomain(2));
+        return Err(Error::OutOfDomain(arg!(2, radiance_ratio)));
     }
     let c2 = T::c(k::SECOND_RADIATION);
     let g = |u: T| {
@@ -218,6 +225,7 @@ pub fn ratio_temperature<T: Real>(
         u0 = T::c(1e-3);
     }
     // g(u) = ln ρ(u) − target is monotone in u: decreasing when λ1 < λ2
-    let u = roots::solve_monotone_positive(g, u0, !increasing_in_u_is_down, 2)?;
-    finite_result(T::one() / u, 2)
+    let u =
+        roots::solve_monotone_positive(g, u0, !increasing_in_u_is_down, arg!(2, radiance_ratio))?;
+    finite_result(T::one() / u, arg!(2, radiance_ratio))
 }

@@ -1,8 +1,8 @@
 //! Shared numerical pieces of the Planck function (no validation here).
 
-use crate::Real;
 use crate::constants as k;
 use crate::math::{dd, exp, log};
+use crate::{Arg, Real};
 
 /// 2^-55: exact scaling that keeps ν³-type products inside the `f32` range.
 pub(crate) const SCALE_55: f64 = 2.775_557_561_562_891_4e-17;
@@ -255,7 +255,7 @@ pub(crate) fn invert_increasing<T: Real, F: FnMut(T) -> (T, T)>(
     mut f: F,
     target: T,
     guess: T,
-    domain_arg: u8,
+    domain_arg: Arg,
 ) -> crate::Result<T> {
     let ln_target = target.ln();
     let g = |t: T| {

@@ -66,7 +66,7 @@
 //! screening thermographs), local codes and licensed practice; these functions are not a
 //! certified measurement chain.
 
-use super::band::{band_radiance_and_derivative_wavelength_unchecked, check_band};
+use super::band::{WAVELENGTH_BAND, band_radiance_and_derivative_wavelength_unchecked, check_band};
 use super::inverse::{
     brightness_constants_wavelength, brightness_temperature_frequency,
     brightness_temperature_wavelength, brightness_temperature_wavelength_fast,
@@ -84,21 +84,66 @@ use super::{
     band_radiance_wavelength, response_weighted_radiance,
     temperature_from_band_radiance_wavelength, temperature_from_response_weighted_radiance,
 };
+use crate::arg;
 use crate::check::{finite, finite_result, non_negative, positive, unit_interval};
 use crate::constants as k;
 use crate::math::dd;
-use crate::{ArrayResult, ElementError, Error, Real, Result};
+use crate::{Arg, ArrayResult, ElementError, Error, Real, Result};
 
 // ---------------------------------------------------------------------------------------------
 // The blackbody quantity of each form
 // ---------------------------------------------------------------------------------------------
 
+/// The arguments the errors of the scene functions name, at their positions in the public
+/// functions of a form whose signal (or object temperature) is argument `first`: ε, T_refl, τ,
+/// T_path follow it, then the five standard uncertainties; the frame forms' outputs come after
+/// the scene (`out`) or after the uncertainties (`out_temperature`, `out_uncertainty`, or the
+/// budget forms' `out`).
+#[derive(Clone, Copy)]
+pub(crate) struct SceneArgs {
+    signal: Arg,
+    object_temperature: Arg,
+    scene: [Arg; 4],
+    uncertainties: [Arg; 5],
+    out: Arg,
+    outs_with_uncertainty: [Arg; 2],
+    budget_out: Arg,
+}
+
+macro_rules! scene_args {
+    ($first:literal) => {
+        SceneArgs {
+            signal: arg!($first, signal),
+            object_temperature: arg!($first, object_temperature_k),
+            scene: [
+                arg!($first + 1, emissivity),
+                arg!($first + 2, reflected_temperature_k),
+                arg!($first + 3, transmittance),
+                arg!($first + 4, path_temperature_k),
+            ],
+            uncertainties: [
+                arg!($first + 5, signal_uncertainty),
+                arg!($first + 6, emissivity_uncertainty),
+                arg!($first + 7, reflected_temperature_uncertainty_k),
+                arg!($first + 8, transmittance_uncertainty),
+                arg!($first + 9, path_temperature_uncertainty_k),
+            ],
+            out: arg!($first + 5, out),
+            outs_with_uncertainty: [
+                arg!($first + 10, out_temperature),
+                arg!($first + 11, out_uncertainty),
+            ],
+            budget_out: arg!($first + 10, out),
+        }
+    };
+}
+
 /// The blackbody quantity an instrument measures, L(T), with its derivative and its inverse.
-/// Implementations are built from checked spectral arguments; `first` is the position of the
-/// first scene argument (the signal or the object temperature) in the public functions.
+/// Implementations are built from checked spectral arguments; `ARGS` names the scene arguments
+/// of the public functions (the signal or the object temperature first).
 pub(crate) trait Quantity<T: Real> {
-    /// Position of the signal (or object temperature) argument.
-    const FIRST: u8;
+    /// The scene arguments of the public functions of this form.
+    const ARGS: SceneArgs;
     /// L(T) for T > 0.
     fn radiance(&self, t: T) -> Result<T>;
     /// dL/dT for T > 0.
@@ -162,7 +207,7 @@ struct Band<T>(T, T);
 struct Response<'a, T>(&'a [T], &'a [T]);
 
 impl<T: Real> Quantity<T> for Wavelength<T> {
-    const FIRST: u8 = 1;
+    const ARGS: SceneArgs = scene_args!(1);
     #[inline(always)]
     fn radiance(&self, t: T) -> Result<T> {
         spectral_radiance_wavelength(self.0, t)
@@ -176,9 +221,12 @@ impl<T: Real> Quantity<T> for Wavelength<T> {
         brightness_temperature_wavelength(self.0, l)
     }
     fn radiance_and_derivative(&self, t: T) -> Result<(T, T)> {
-        let t = positive(t, 1)?;
+        let t = positive(t, arg!(1, temperature_k))?;
         let (b, d) = radiance_and_derivative_wavelength_unchecked(self.0, t);
-        Ok((finite_result(b, 0)?, finite_result(d, 0)?))
+        Ok((
+            finite_result(b, arg!(0, wavelength_m))?,
+            finite_result(d, arg!(0, wavelength_m))?,
+        ))
     }
     #[inline(always)]
     fn radiance_and_derivative_pair(&self, t1: T, t2: T) -> Option<[(T, T); 2]> {
@@ -203,16 +251,16 @@ impl<T: Real> Quantity<T> for Wavelength<T> {
         })
     }
     fn temperature_and_derivative(&self, l: T) -> Result<(T, Result<T>)> {
-        let b = positive(l, 1)?;
+        let b = positive(l, arg!(1, spectral_radiance))?;
         let (t, c2_over_l, a) = brightness_temperature_wavelength_parts(self.0, b);
-        let t = finite_result(t, 1)?;
+        let t = finite_result(t, arg!(1, spectral_radiance))?;
         let d = derivative_at_brightness(c2_over_l, T::one() / a, t, b);
-        Ok((t, finite_result(d, 1)))
+        Ok((t, finite_result(d, arg!(1, spectral_radiance))))
     }
 }
 
 impl<T: Real> Quantity<T> for Frequency<T> {
-    const FIRST: u8 = 1;
+    const ARGS: SceneArgs = scene_args!(1);
     #[inline(always)]
     fn radiance(&self, t: T) -> Result<T> {
         spectral_radiance_frequency(self.0, t)
@@ -231,20 +279,20 @@ impl<T: Real> Quantity<T> for Frequency<T> {
         let (th, tl) = dd::mul_dd_d(hh, hl, self.0);
         let a = two_h_nu3_over_c2(self.0);
         let d = derivative_at_brightness(th + tl, T::one() / a, t, l);
-        Ok((t, finite_result(d, 1)))
+        Ok((t, finite_result(d, arg!(1, spectral_radiance))))
     }
 }
 
 impl<T: Real> Quantity<T> for Band<T> {
-    const FIRST: u8 = 2;
+    const ARGS: SceneArgs = scene_args!(2);
     fn radiance(&self, t: T) -> Result<T> {
         band_radiance_wavelength(self.0, self.1, t)
     }
     fn derivative(&self, t: T) -> Result<T> {
-        let t = positive(t, 2)?;
+        let t = positive(t, arg!(2, temperature_k))?;
         finite_result(
             band_radiance_and_derivative_wavelength_unchecked(self.0, self.1, t).1,
-            2,
+            arg!(2, temperature_k),
         )
     }
     fn temperature(&self, l: T) -> Result<T> {
@@ -253,15 +301,15 @@ impl<T: Real> Quantity<T> for Band<T> {
 }
 
 impl<T: Real> Quantity<T> for Response<'_, T> {
-    const FIRST: u8 = 2;
+    const ARGS: SceneArgs = scene_args!(2);
     fn radiance(&self, t: T) -> Result<T> {
         response_weighted_radiance(self.0, self.1, t)
     }
     fn derivative(&self, t: T) -> Result<T> {
-        let t = positive(t, 2)?;
+        let t = positive(t, arg!(2, temperature_k))?;
         finite_result(
             response_weighted_derivative_unchecked(self.0, self.1, t)?,
-            2,
+            arg!(2, temperature_k),
         )
     }
     fn temperature(&self, l: T) -> Result<T> {
@@ -270,26 +318,29 @@ impl<T: Real> Quantity<T> for Response<'_, T> {
 }
 
 fn wavelength<T: Real>(wavelength_m: T) -> Result<Wavelength<T>> {
-    Ok(Wavelength(positive(wavelength_m, 0)?))
+    Ok(Wavelength(positive(wavelength_m, arg!(0, wavelength_m))?))
 }
 
 fn frequency<T: Real>(frequency_hz: T) -> Result<Frequency<T>> {
-    Ok(Frequency(positive(frequency_hz, 0)?))
+    Ok(Frequency(positive(frequency_hz, arg!(0, frequency_hz))?))
 }
 
 fn band<T: Real>(lower_m: T, upper_m: T) -> Result<Band<T>> {
-    let (lo, up) = check_band(lower_m, upper_m)?;
+    let (lo, up) = check_band(lower_m, upper_m, WAVELENGTH_BAND)?;
     Ok(Band(lo, up))
 }
 
 fn response<'a, T: Real>(wavelengths_m: &'a [T], response: &'a [T]) -> Result<Response<'a, T>> {
-    check_table(wavelengths_m, response)?;
+    check_table(wavelengths_m, response).map_err(|e| match e.argument() {
+        Some(1) => e.with_arg(arg!(1, response_table)),
+        _ => e,
+    })?;
     Ok(Response(wavelengths_m, response))
 }
 
 /// An error of evaluating L or L′ at a valid temperature (only overflow or a failed quadrature
 /// can occur) names that temperature's argument; a failed quadrature stays `NoConvergence`.
-fn at(arg: u8) -> impl Fn(Error) -> Error {
+fn at(arg: Arg) -> impl Fn(Error) -> Error {
     move |e| match e {
         Error::NoConvergence => Error::NoConvergence,
         _ => Error::OutOfDomain(arg),
@@ -327,17 +378,18 @@ impl<T: Real> Scene<T> {
     }
 }
 
-/// Checks ε, T_refl, τ, T_path (positions `first + 1 … first + 4`) in that order.
-fn check_scene<T: Real>(first: u8, e: T, tr: T, tau: T, tp: T) -> Result<(T, T, T, T)> {
-    let e = unit_interval(e, first + 1)?;
-    let tr = non_negative(tr, first + 2)?;
-    let tau = unit_interval(tau, first + 3)?;
-    let tp = non_negative(tp, first + 4)?;
+/// Checks ε, T_refl, τ, T_path (the arguments `args`) in that order.
+fn check_scene<T: Real>(args: [Arg; 4], e: T, tr: T, tau: T, tp: T) -> Result<(T, T, T, T)> {
+    let [ae, atr, atau, atp] = args;
+    let e = unit_interval(e, ae)?;
+    let tr = non_negative(tr, atr)?;
+    let tau = unit_interval(tau, atau)?;
+    let tp = non_negative(tp, atp)?;
     Ok((e, tr, tau, tp))
 }
 
 /// L(T) and, when `derivative`, L′(T), for T ≥ 0 (0 and 0 at T = 0).
-fn quantity_at<T: Real, Q: Quantity<T>>(q: &Q, t: T, arg: u8, derivative: bool) -> Result<(T, T)> {
+fn quantity_at<T: Real, Q: Quantity<T>>(q: &Q, t: T, arg: Arg, derivative: bool) -> Result<(T, T)> {
     if t == T::zero() {
         return Ok((T::zero(), T::zero()));
     }
@@ -358,8 +410,8 @@ fn scene<T: Real, Q: Quantity<T>>(
     tp: T,
     derivative: bool,
 ) -> Result<Scene<T>> {
-    let first = Q::FIRST;
-    let (e, tr, tau, tp) = check_scene(first, e, tr, tau, tp)?;
+    let [_, a_tr, _, a_tp] = Q::ARGS.scene;
+    let (e, tr, tau, tp) = check_scene(Q::ARGS.scene, e, tr, tau, tp)?;
     if derivative {
         if let Some([(reflected, reflected_derivative), (path, path_derivative)]) =
             q.radiance_and_derivative_pair(tr, tp)
@@ -375,12 +427,12 @@ fn scene<T: Real, Q: Quantity<T>>(
         }
     }
     let (reflected, reflected_derivative) = if derivative || e < T::one() {
-        quantity_at(q, tr, first + 2, derivative)?
+        quantity_at(q, tr, a_tr, derivative)?
     } else {
         (T::zero(), T::zero())
     };
     let (path, path_derivative) = if derivative || tau < T::one() {
-        quantity_at(q, tp, first + 4, derivative)?
+        quantity_at(q, tp, a_tp, derivative)?
     } else {
         (T::zero(), T::zero())
     };
@@ -411,7 +463,7 @@ fn corrected<T: Real>(s: &Scene<T>, signal: T) -> T {
 
 /// (T_obj, L_obj) of a finite signal.
 fn solve<T: Real, Q: Quantity<T>>(q: &Q, s: &Scene<T>, signal: T) -> Result<(T, T)> {
-    let arg = Q::FIRST;
+    let arg = Q::ARGS.signal;
     let l = corrected(s, signal);
     if !(l > T::zero()) || !l.is_finite() {
         return Err(Error::OutOfDomain(arg));
@@ -428,7 +480,7 @@ fn solve_with_uncertainty<T: Real, Q: Quantity<T>>(
     signal: T,
     u: [T; SENSITIVITY_CAPACITY],
 ) -> Result<TemperatureUncertainty<T>> {
-    let arg = Q::FIRST;
+    let arg = Q::ARGS.signal;
     let l = corrected(s, signal);
     if !(l > T::zero()) || !l.is_finite() {
         return Err(Error::OutOfDomain(arg));
@@ -451,18 +503,18 @@ fn solve_with_uncertainty<T: Real, Q: Quantity<T>>(
     TemperatureUncertainty::from_parts(t, c, u, 5, arg)
 }
 
-/// Checks the five standard uncertainties (positions `first … first + 4`).
-fn check_uncertainties<T: Real>(first: u8, u: [T; 5]) -> Result<[T; 5]> {
+/// Checks the five standard uncertainties (the arguments `args`).
+fn check_uncertainties<T: Real>(args: [Arg; 5], u: [T; 5]) -> Result<[T; 5]> {
     let mut out = [T::zero(); 5];
-    for (k, (o, x)) in out.iter_mut().zip(u).enumerate() {
-        *o = non_negative(x, first + k as u8)?;
+    for ((o, x), a) in out.iter_mut().zip(u).zip(args) {
+        *o = non_negative(x, a)?;
     }
     Ok(out)
 }
 
 fn measured<T: Real, Q: Quantity<T>>(q: Result<Q>, t: T, e: T, tr: T, tau: T, tp: T) -> Result<T> {
     let q = q?;
-    let arg = Q::FIRST;
+    let arg = Q::ARGS.object_temperature;
     let t = positive(t, arg)?;
     let s = scene(&q, e, tr, tau, tp, false)?;
     let l = q.radiance(t).map_err(at(arg))?;
@@ -478,7 +530,7 @@ fn object<T: Real, Q: Quantity<T>>(
     tp: T,
 ) -> Result<T> {
     let q = q?;
-    let signal = finite(signal, Q::FIRST)?;
+    let signal = finite(signal, Q::ARGS.signal)?;
     let s = scene(&q, e, tr, tau, tp, false)?;
     Ok(solve(&q, &s, signal)?.0)
 }
@@ -494,9 +546,9 @@ fn object_with_uncertainty<T: Real, Q: Quantity<T>>(
     u: [T; 5],
 ) -> Result<TemperatureUncertainty<T>> {
     let q = q?;
-    let signal = finite(signal, Q::FIRST)?;
+    let signal = finite(signal, Q::ARGS.signal)?;
     let s = scene(&q, e, tr, tau, tp, true)?;
-    let u = check_uncertainties(Q::FIRST + 5, u)?;
+    let u = check_uncertainties(Q::ARGS.uncertainties, u)?;
     solve_with_uncertainty(&q, &s, signal, u)
 }
 
@@ -978,9 +1030,9 @@ fn pick<T: Real>(s: &[T], i: usize) -> T {
 /// outputs are NaN and the error names the first offending argument.
 fn check_lengths<T: Real>(
     n: usize,
-    params: &[(&[T], u8)],
+    params: &[(&[T], Arg)],
     outs: &mut [&mut [T]],
-    out_first: u8,
+    out_args: &[Arg],
 ) -> ArrayResult {
     let mut bad = None;
     for &(s, arg) in params {
@@ -993,11 +1045,11 @@ fn check_lengths<T: Real>(
         }
     }
     if bad.is_none() {
-        for (k, o) in outs.iter().enumerate() {
+        for (o, &arg) in outs.iter().zip(out_args) {
             if o.len() != n {
                 bad = Some(ElementError {
                     index: n.min(o.len()),
-                    error: Error::LengthMismatch(out_first + k as u8),
+                    error: Error::LengthMismatch(arg),
                 });
                 break;
             }
@@ -1087,8 +1139,10 @@ fn load<T: Real>(buf: &mut [T; FRAME_BLOCK], s: &[T], start: usize, m: usize) {
 /// [`TemperatureUncertainty`] values.
 trait FrameSink<T, const O: usize> {
     /// Checks that every output holds n pixels; otherwise fills the outputs with NaN and
-    /// returns the error naming the first short or long output (positions from `first`).
-    fn check(&mut self, n: usize, first: u8) -> ArrayResult;
+    /// returns the error naming the first short or long output (among the arguments `a` of the
+    /// `_with_uncertainty` frame forms: `out_temperature`, `out_uncertainty` or the budget's
+    /// `out`).
+    fn check(&mut self, n: usize, a: &SceneArgs) -> ArrayResult;
     /// Stores the results of pixel i (NaN everywhere for a failing pixel).
     fn put(&mut self, i: usize, v: [T; O]);
     /// Fills every output with NaN (a failure of the whole call).
@@ -1096,14 +1150,14 @@ trait FrameSink<T, const O: usize> {
 }
 
 impl<T: Real, const O: usize> FrameSink<T, O> for [&mut [T]; O] {
-    fn check(&mut self, n: usize, first: u8) -> ArrayResult {
+    fn check(&mut self, n: usize, a: &SceneArgs) -> ArrayResult {
         let bad = self
             .iter()
-            .enumerate()
-            .find(|(_, o)| o.len() != n)
-            .map(|(k, o)| ElementError {
+            .zip(a.outs_with_uncertainty)
+            .find(|(o, _)| o.len() != n)
+            .map(|(o, arg)| ElementError {
                 index: n.min(o.len()),
-                error: Error::LengthMismatch(first + k as u8),
+                error: Error::LengthMismatch(arg),
             });
         match bad {
             None => Ok(()),
@@ -1133,14 +1187,14 @@ impl<T: Real, const O: usize> FrameSink<T, O> for [&mut [T]; O] {
 struct Budgets<'a, T>(&'a mut [TemperatureUncertainty<T>]);
 
 impl<T: Real> FrameSink<T, 7> for Budgets<'_, T> {
-    fn check(&mut self, n: usize, first: u8) -> ArrayResult {
+    fn check(&mut self, n: usize, a: &SceneArgs) -> ArrayResult {
         if self.0.len() == n {
             return Ok(());
         }
         self.fail_all();
         Err(ElementError {
             index: n.min(self.0.len()),
-            error: Error::LengthMismatch(first),
+            error: Error::LengthMismatch(a.budget_out),
         })
     }
     #[inline(always)]
@@ -1230,11 +1284,11 @@ fn shared_scene<T: Real, Q: Quantity<T>>(q: &Q, tr: &[T], tp: &[T]) -> Option<[T
     let (&[tr], &[tp]) = (tr, tp) else {
         return None;
     };
-    let a = Q::FIRST;
-    let tr = non_negative(tr, a + 2).ok()?;
-    let tp = non_negative(tp, a + 4).ok()?;
-    let (r, rd) = quantity_at(q, tr, a + 2, true).ok()?;
-    let (p, pd) = quantity_at(q, tp, a + 4, true).ok()?;
+    let [_, a_tr, _, a_tp] = Q::ARGS.scene;
+    let tr = non_negative(tr, a_tr).ok()?;
+    let tp = non_negative(tp, a_tp).ok()?;
+    let (r, rd) = quantity_at(q, tr, a_tr, true).ok()?;
+    let (p, pd) = quantity_at(q, tp, a_tp, true).ok()?;
     Some([r, rd, p, pd])
 }
 
@@ -1305,13 +1359,14 @@ fn object_array<T: Real, Q: Quantity<T>>(
     tp: &[T],
     out: &mut [T],
 ) -> ArrayResult {
-    let a = Q::FIRST;
+    let a = Q::ARGS;
+    let [ae, atr, atau, atp] = a.scene;
     let n = signals.len();
     check_lengths(
         n,
-        &[(e, a + 1), (tr, a + 2), (tau, a + 3), (tp, a + 4)],
+        &[(e, ae), (tr, atr), (tau, atau), (tp, atp)],
         &mut [out],
-        a + 5,
+        &[a.out],
     )?;
     let q = match q {
         Ok(q) => q,
@@ -1331,7 +1386,7 @@ fn object_array<T: Real, Q: Quantity<T>>(
     let mut element = |i: usize| -> Result<[T; 1]> {
         let s = signals.get(i).copied().unwrap_or(T::nan());
         let key = [pick(e, i), pick(tr, i), pick(tau, i), pick(tp, i)];
-        let s = finite(s, a)?;
+        let s = finite(s, a.signal)?;
         let sc = cache.get(&q, key, false)?;
         Ok([solve(&q, &sc, s)?.0])
     };
@@ -1365,7 +1420,7 @@ fn object_array<T: Real, Q: Quantity<T>>(
 
 /// The parameter slices' lengths: `Some` error naming the first that holds neither 1 nor `n`
 /// values.
-fn check_params<T>(n: usize, params: &[(&[T], u8)]) -> Option<ElementError> {
+fn check_params<T>(n: usize, params: &[(&[T], Arg)]) -> Option<ElementError> {
     params
         .iter()
         .find(|(s, _)| s.len() != 1 && s.len() != n)
@@ -1387,26 +1442,28 @@ fn object_uncertainty_array<T: Real, Q: Quantity<T>, const O: usize>(
     mut outs: impl FrameSink<T, O>,
     shape: impl Fn(T, T, [T; 5]) -> [T; O] + Copy,
 ) -> ArrayResult {
-    let a = Q::FIRST;
+    let a = Q::ARGS;
+    let [ae, atr, atau, atp] = a.scene;
+    let [au0, au1, au2, au3, au4] = a.uncertainties;
     let n = signals.len();
     let [e, tr, tau, tp] = scene_params;
     let [u0, u1, u2, u3, u4] = u;
     let params = [
-        (e, a + 1),
-        (tr, a + 2),
-        (tau, a + 3),
-        (tp, a + 4),
-        (u0, a + 5),
-        (u1, a + 6),
-        (u2, a + 7),
-        (u3, a + 8),
-        (u4, a + 9),
+        (e, ae),
+        (tr, atr),
+        (tau, atau),
+        (tp, atp),
+        (u0, au0),
+        (u1, au1),
+        (u2, au2),
+        (u3, au3),
+        (u4, au4),
     ];
     if let Some(err) = check_params(n, &params) {
         outs.fail_all();
         return Err(err);
     }
-    outs.check(n, a + 10)?;
+    outs.check(n, &a)?;
     let q = match q {
         Ok(q) => q,
         Err(err) => {
@@ -1432,9 +1489,9 @@ fn object_uncertainty_array<T: Real, Q: Quantity<T>, const O: usize>(
             pick(u3, i),
             pick(u4, i),
         ];
-        let s = finite(s, a)?;
+        let s = finite(s, a.signal)?;
         let sc = cache.get(&q, key, true)?;
-        let us = check_uncertainties(a + 5, us)?;
+        let us = check_uncertainties(a.uncertainties, us)?;
         let v = solve_with_uncertainty(&q, &sc, s, us)?;
         Ok(shape(
             v.temperature_k,

@@ -14,6 +14,7 @@
 //! Present CMB temperature for the callers: 2.72548 ± 0.00057 K (Fixsen 2009, ApJ 707, 916).
 
 use super::kernel::x_frequency;
+use crate::arg;
 use crate::check::{finite_result, positive};
 use crate::{Real, Result};
 
@@ -35,8 +36,8 @@ fn rj_factor<T: Real>(xh: T, xl: T) -> T {
 }
 
 fn checked_x<T: Real>(frequency_hz: T, cmb_temperature_k: T) -> Result<(T, T)> {
-    let nu = positive(frequency_hz, 0)?;
-    let t = positive(cmb_temperature_k, 1)?;
+    let nu = positive(frequency_hz, arg!(0, frequency_hz))?;
+    let t = positive(cmb_temperature_k, arg!(1, cmb_temperature_k))?;
     Ok(x_frequency(nu, t))
 }
 
@@ -52,7 +53,7 @@ pub fn thermodynamic_to_rayleigh_jeans_factor<T: Real>(
     cmb_temperature_k: T,
 ) -> Result<T> {
     let (xh, xl) = checked_x(frequency_hz, cmb_temperature_k)?;
-    finite_result(rj_factor(xh, xl), 0)
+    finite_result(rj_factor(xh, xl), arg!(0, frequency_hz))
 }
 
 /// dB_ν/dT at the CMB temperature, in MJy sr⁻¹ per K_CMB: converts a CMB temperature
@@ -67,7 +68,7 @@ pub fn kcmb_to_mjy_per_sr<T: Real>(frequency_hz: T, cmb_temperature_k: T) -> Res
     let (xh, xl) = checked_x(frequency_hz, cmb_temperature_k)?;
     finite_result(
         ((T::c(KCMB_CONST) * frequency_hz) * frequency_hz) * rj_factor(xh, xl),
-        0,
+        arg!(0, frequency_hz),
     )
 }
 
@@ -84,7 +85,7 @@ fn sz_f<T: Real>(x: T) -> T {
 /// `NonPositive(i)`. Accuracy: within 1e-15·(x + 4) absolute (`f64`) against mpmath.
 pub fn thermal_sz_temperature_shape<T: Real>(frequency_hz: T, cmb_temperature_k: T) -> Result<T> {
     let (xh, _) = checked_x(frequency_hz, cmb_temperature_k)?;
-    finite_result(sz_f(xh), 0)
+    finite_result(sz_f(xh), arg!(0, frequency_hz))
 }
 
 /// Thermal SZ intensity shape g(x) = x⁴eˣ/(eˣ − 1)² (x coth(x/2) − 4) (ΔI/I₀ = y g(x)).
@@ -95,7 +96,10 @@ pub fn thermal_sz_temperature_shape<T: Real>(frequency_hz: T, cmb_temperature_k:
 /// `NonPositive(i)`. Accuracy: within 1e-15·(x + 4)·x⁴eˣ/(eˣ − 1)² absolute (`f64`).
 pub fn thermal_sz_spectral_shape<T: Real>(frequency_hz: T, cmb_temperature_k: T) -> Result<T> {
     let (xh, xl) = checked_x(frequency_hz, cmb_temperature_k)?;
-    finite_result(xh * xh * rj_factor(xh, xl) * sz_f(xh), 0)
+    finite_result(
+        xh * xh * rj_factor(xh, xl) * sz_f(xh),
+        arg!(0, frequency_hz),
+    )
 }
 
 /// Frequency of the thermal SZ null, ν₀ = x₀kT₀/h with x₀ coth(x₀/2) = 4 (x₀ = 3.830016…).
@@ -106,5 +110,8 @@ pub fn thermal_sz_spectral_shape<T: Real>(frequency_hz: T, cmb_temperature_k: T)
 /// Accuracy: ≤ 2 ulp (`f64`) against mpmath (non-relativistic limit; relativistic corrections
 /// move the null upward with cluster temperature and are not included).
 pub fn thermal_sz_null_frequency<T: Real>(cmb_temperature_k: T) -> Result<T> {
-    finite_result(T::c(SZ_NULL_PER_K) * positive(cmb_temperature_k, 0)?, 0)
+    finite_result(
+        T::c(SZ_NULL_PER_K) * positive(cmb_temperature_k, arg!(0, cmb_temperature_k))?,
+        arg!(0, cmb_temperature_k),
+    )
 }

@@ -17,6 +17,7 @@ use super::kernel::{
     x_frequency_pair, x_frequency_pair_with_inverse, x_wavelength, x_wavelength_pair,
     x_wavenumber_pair, x_wavenumber_pair_with_inverse,
 };
+use crate::arg;
 use crate::array::blockwise;
 use crate::check::{finite_result, positive};
 use crate::constants as k;
@@ -30,13 +31,17 @@ use crate::{ArrayResult, Real, Result};
 ///
 /// Returns W m⁻² sr⁻¹ m⁻¹, ≥ 0 (0 only where the true value is below the smallest subnormal).
 ///
-/// Errors: `NonFinite(i)` for NaN or ±∞, `NonPositive(i)` for ≤ 0, i the argument position.
+/// Errors: `NonFinite(i)` for NaN or ±∞, `NonPositive(i)` for ≤ 0, i the position of the
+/// argument the error names.
 ///
 /// Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath; see the module documentation.
 pub fn spectral_radiance_wavelength<T: Real>(wavelength_m: T, temperature_k: T) -> Result<T> {
-    let l = positive(wavelength_m, 0)?;
-    let t = positive(temperature_k, 1)?;
-    finite_result(spectral_radiance_wavelength_unchecked(l, t), 0)
+    let l = positive(wavelength_m, arg!(0, wavelength_m))?;
+    let t = positive(temperature_k, arg!(1, temperature_k))?;
+    finite_result(
+        spectral_radiance_wavelength_unchecked(l, t),
+        arg!(0, wavelength_m),
+    )
 }
 
 #[inline(always)]
@@ -95,11 +100,11 @@ fn planck_array<T: Real, F: Fn(T) -> (T, bool)>(
     fast_at: impl FnOnce(T) -> Option<F>,
     scalar: impl Fn(T, T) -> Result<T>,
 ) -> ArrayResult {
-    let Ok(t) = positive(temperature_k, 1) else {
+    let Ok(t) = positive(temperature_k, arg!(1, temperature_k)) else {
         return blockwise(
             x,
             out,
-            2,
+            arg!(2, out),
             |_| (T::nan(), false),
             |v| scalar(v, temperature_k),
         );
@@ -108,7 +113,7 @@ fn planck_array<T: Real, F: Fn(T) -> (T, bool)>(
         Some(fast) => blockwise(
             x,
             out,
-            2,
+            arg!(2, out),
             |v| {
                 let (b, inside) = fast(v);
                 let valid = (v > T::zero()) & (v <= T::max_value()) & (b <= T::max_value());
@@ -116,7 +121,13 @@ fn planck_array<T: Real, F: Fn(T) -> (T, bool)>(
             },
             |v| scalar(v, t),
         ),
-        None => blockwise(x, out, 2, |_| (T::nan(), false), |v| scalar(v, t)),
+        None => blockwise(
+            x,
+            out,
+            arg!(2, out),
+            |_| (T::nan(), false),
+            |v| scalar(v, t),
+        ),
     }
 }
 
@@ -128,9 +139,12 @@ fn planck_array<T: Real, F: Fn(T) -> (T, bool)>(
 /// Returns W m⁻² sr⁻¹ Hz⁻¹, ≥ 0. Errors as [`spectral_radiance_wavelength`].
 /// Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
 pub fn spectral_radiance_frequency<T: Real>(frequency_hz: T, temperature_k: T) -> Result<T> {
-    let nu = positive(frequency_hz, 0)?;
-    let t = positive(temperature_k, 1)?;
-    finite_result(spectral_radiance_frequency_unchecked(nu, t), 0)
+    let nu = positive(frequency_hz, arg!(0, frequency_hz))?;
+    let t = positive(temperature_k, arg!(1, temperature_k))?;
+    finite_result(
+        spectral_radiance_frequency_unchecked(nu, t),
+        arg!(0, frequency_hz),
+    )
 }
 
 #[inline(always)]
@@ -147,10 +161,13 @@ pub(crate) fn spectral_radiance_frequency_unchecked<T: Real>(nu: T, t: T) -> T {
 /// Returns W m⁻² sr⁻¹ per m⁻¹ (that is W m⁻¹ sr⁻¹), ≥ 0. Errors as
 /// [`spectral_radiance_wavelength`]. Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
 pub fn spectral_radiance_wavenumber<T: Real>(wavenumber_per_m: T, temperature_k: T) -> Result<T> {
-    let v = positive(wavenumber_per_m, 0)?;
-    let t = positive(temperature_k, 1)?;
+    let v = positive(wavenumber_per_m, arg!(0, wavenumber_per_m))?;
+    let t = positive(temperature_k, arg!(1, temperature_k))?;
     let (xh, xl) = x_wavenumber_pair(v, t);
-    finite_result(planck_quotient(wavenumber_prefactor(v), xh, xl), 0)
+    finite_result(
+        planck_quotient(wavenumber_prefactor(v), xh, xl),
+        arg!(0, wavenumber_per_m),
+    )
 }
 
 /// 2hc²ṽ³, by products.
@@ -228,11 +245,14 @@ pub fn spectral_radiance_wavenumber_array<T: Real>(
 /// Returns photons s⁻¹ m⁻² sr⁻¹ m⁻¹. Errors as [`spectral_radiance_wavelength`].
 /// Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
 pub fn photon_radiance_wavelength<T: Real>(wavelength_m: T, temperature_k: T) -> Result<T> {
-    let l = positive(wavelength_m, 0)?;
-    let t = positive(temperature_k, 1)?;
+    let l = positive(wavelength_m, arg!(0, wavelength_m))?;
+    let t = positive(temperature_k, arg!(1, temperature_k))?;
     let (xh, xl) = x_wavelength_pair(l, t);
     let l2 = l * l;
-    finite_result(planck_ratio(T::c(TWO_C), l2 * l2, xh, xl), 0)
+    finite_result(
+        planck_ratio(T::c(TWO_C), l2 * l2, xh, xl),
+        arg!(0, wavelength_m),
+    )
 }
 
 /// Photon spectral radiance per unit frequency, N_ν = B_ν/(hν) = (2ν²/c²) / (e^(hν/kT) − 1).
@@ -242,11 +262,11 @@ pub fn photon_radiance_wavelength<T: Real>(wavelength_m: T, temperature_k: T) ->
 /// Returns photons s⁻¹ m⁻² sr⁻¹ Hz⁻¹. Errors as [`spectral_radiance_wavelength`].
 /// Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
 pub fn photon_radiance_frequency<T: Real>(frequency_hz: T, temperature_k: T) -> Result<T> {
-    let nu = positive(frequency_hz, 0)?;
-    let t = positive(temperature_k, 1)?;
+    let nu = positive(frequency_hz, arg!(0, frequency_hz))?;
+    let t = positive(temperature_k, arg!(1, temperature_k))?;
     let (xh, xl) = x_frequency_pair(nu, t);
     let p = (T::c(TWO_OVER_C2) * nu) * nu;
-    finite_result(planck_quotient(p, xh, xl), 0)
+    finite_result(planck_quotient(p, xh, xl), arg!(0, frequency_hz))
 }
 
 /// Photon spectral radiance per unit wavenumber, N_ṽ = 2cṽ² / (e^(hcṽ/kT) − 1).
@@ -256,11 +276,11 @@ pub fn photon_radiance_frequency<T: Real>(frequency_hz: T, temperature_k: T) -> 
 /// Returns photons s⁻¹ m⁻² sr⁻¹ per m⁻¹. Errors as [`spectral_radiance_wavelength`].
 /// Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath.
 pub fn photon_radiance_wavenumber<T: Real>(wavenumber_per_m: T, temperature_k: T) -> Result<T> {
-    let v = positive(wavenumber_per_m, 0)?;
-    let t = positive(temperature_k, 1)?;
+    let v = positive(wavenumber_per_m, arg!(0, wavenumber_per_m))?;
+    let t = positive(temperature_k, arg!(1, temperature_k))?;
     let (xh, xl) = x_wavenumber_pair(v, t);
     let p = (T::c(TWO_C) * v) * v;
-    finite_result(planck_quotient(p, xh, xl), 0)
+    finite_result(planck_quotient(p, xh, xl), arg!(0, wavenumber_per_m))
 }
 
 /// Temperature derivative of B_λ: ∂B_λ/∂T = B_λ · (x/T) / (1 − e^−x), x = hc/(λkT).
@@ -275,11 +295,11 @@ pub fn radiance_temperature_derivative_wavelength<T: Real>(
     wavelength_m: T,
     temperature_k: T,
 ) -> Result<T> {
-    let l = positive(wavelength_m, 0)?;
-    let t = positive(temperature_k, 1)?;
+    let l = positive(wavelength_m, arg!(0, wavelength_m))?;
+    let t = positive(temperature_k, arg!(1, temperature_k))?;
     finite_result(
         radiance_temperature_derivative_wavelength_unchecked(l, t),
-        0,
+        arg!(0, wavelength_m),
     )
 }
 
@@ -346,9 +366,9 @@ pub fn radiance_temperature_derivative_frequency<T: Real>(
     frequency_hz: T,
     temperature_k: T,
 ) -> Result<T> {
-    let nu = positive(frequency_hz, 0)?;
-    let t = positive(temperature_k, 1)?;
+    let nu = positive(frequency_hz, arg!(0, frequency_hz))?;
+    let t = positive(temperature_k, arg!(1, temperature_k))?;
     let (xh, xl) = x_frequency(nu, t);
     let p = two_h_nu3_over_c2(nu) * ((xh + xl) / one_minus_exp_neg(xh)) / t;
-    finite_result(planck_quotient(p, xh, xl), 0)
+    finite_result(planck_quotient(p, xh, xl), arg!(0, frequency_hz))
 }

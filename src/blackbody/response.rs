@@ -14,32 +14,33 @@ use super::kernel::invert_increasing;
 use super::planck::{
     radiance_temperature_derivative_wavelength_unchecked, spectral_radiance_wavelength_unchecked,
 };
+use crate::arg;
 use crate::check::{finite_result, positive};
 use crate::math::quadrature::integrate;
 use crate::{Error, Real, Result};
 
 pub(crate) fn check_table<T: Real>(wavelengths_m: &[T], response: &[T]) -> Result<()> {
     if wavelengths_m.len() < 2 {
-        return Err(Error::ArrayTooShort(0));
+        return Err(Error::ArrayTooShort(arg!(0, wavelengths_m)));
     }
     if response.len() != wavelengths_m.len() {
-        return Err(Error::LengthMismatch(1));
+        return Err(Error::LengthMismatch(arg!(1, response)));
     }
     for &l in wavelengths_m {
-        positive(l, 0)?;
+        positive(l, arg!(0, wavelengths_m))?;
     }
     for &r in response {
         if !r.is_finite() {
-            return Err(Error::NonFinite(1));
+            return Err(Error::NonFinite(arg!(1, response)));
         }
         if r < T::zero() {
-            return Err(Error::Negative(1));
+            return Err(Error::Negative(arg!(1, response)));
         }
     }
     for w in wavelengths_m.windows(2) {
         if let [a, b] = w {
             if b <= a {
-                return Err(Error::NotIncreasing(0));
+                return Err(Error::NotIncreasing(arg!(0, wavelengths_m)));
             }
         }
     }
@@ -91,11 +92,11 @@ pub fn response_weighted_radiance<T: Real>(
     temperature_k: T,
 ) -> Result<T> {
     check_table(wavelengths_m, response)?;
-    let t = positive(temperature_k, 2)?;
+    let t = positive(temperature_k, arg!(2, temperature_k))?;
     let v = weighted(wavelengths_m, response, |l| {
         spectral_radiance_wavelength_unchecked(l, t)
     })?;
-    finite_result(v, 2)
+    finite_result(v, arg!(2, temperature_k))
 }
 
 /// Temperature of the blackbody whose response-weighted radiance equals the given value: the
@@ -118,7 +119,7 @@ pub fn temperature_from_response_weighted_radiance<T: Real>(
     radiance: T,
 ) -> Result<T> {
     check_table(wavelengths_m, response)?;
-    let target = positive(radiance, 2)?;
+    let target = positive(radiance, arg!(2, radiance))?;
     // response area and centroid by the trapezoid rule (exact for the linear response)
     let mut area = T::zero();
     let mut moment = T::zero();
@@ -131,7 +132,7 @@ pub fn temperature_from_response_weighted_radiance<T: Real>(
         }
     }
     if !(area > T::zero()) {
-        return Err(Error::OutOfDomain(1));
+        return Err(Error::OutOfDomain(arg!(1, response)));
     }
     let centre = moment / area;
     let guess = super::inverse::brightness_temperature_wavelength_unchecked(centre, target / area);
@@ -151,9 +152,9 @@ pub fn temperature_from_response_weighted_radiance<T: Real>(
             }
         }
     };
-    let res = invert_increasing(f, target, guess, 2);
+    let res = invert_increasing(f, target, guess, arg!(2, radiance));
     match (res, failure) {
-        (Ok(t), _) => finite_result(t, 2),
+        (Ok(t), _) => finite_result(t, arg!(2, radiance)),
         (Err(_), Some(e)) => Err(e),
         (Err(e), None) => Err(e),
     }

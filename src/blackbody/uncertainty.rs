@@ -22,8 +22,9 @@
 use super::measurement::{Frequency, Quantity, Wavelength};
 use super::microwave::thermodynamic_to_rayleigh_jeans_factor;
 use super::{calibrated_temperature, two_load_calibration};
+use crate::arg;
 use crate::check::{finite, finite_result, non_negative, positive};
-use crate::{Error, Real, Result};
+use crate::{Arg, Error, Real, Result};
 
 /// The number of sensitivity coefficients a [`TemperatureUncertainty`] can hold.
 pub const SENSITIVITY_CAPACITY: usize = 5;
@@ -57,7 +58,7 @@ impl<T: Real> TemperatureUncertainty<T> {
         coefficients: [T; SENSITIVITY_CAPACITY],
         uncertainties: [T; SENSITIVITY_CAPACITY],
         n: usize,
-        result_arg: u8,
+        result_arg: Arg,
     ) -> Result<Self> {
         let mut c = [T::zero(); SENSITIVITY_CAPACITY];
         for (d, s) in c.iter_mut().zip(coefficients.iter()).take(n) {
@@ -76,7 +77,7 @@ impl<T: Real> TemperatureUncertainty<T> {
 /// (Σ (cᵢuᵢ)²)^½ over the common length: the plain sum where it is safe
 /// ([`sum_of_squares_is_safe`]), otherwise scaled by the largest |cᵢuᵢ| so that no square
 /// overflows or underflows early (in `f32` the products span many decades).
-fn root_sum_of_squares<T: Real>(c: &[T], u: &[T], result_arg: u8) -> Result<T> {
+fn root_sum_of_squares<T: Real>(c: &[T], u: &[T], result_arg: Arg) -> Result<T> {
     let mut s = T::zero();
     for (&ci, &ui) in c.iter().zip(u.iter()) {
         let y = ci * ui;
@@ -99,7 +100,7 @@ pub(crate) fn sum_of_squares_is_safe<T: Real>(s: T) -> bool {
 /// u_c by squares scaled by the largest |cᵢuᵢ| (no overflow or underflow of the squares).
 #[cold]
 #[inline(never)]
-fn root_sum_of_squares_scaled<T: Real>(c: &[T], u: &[T], result_arg: u8) -> Result<T> {
+fn root_sum_of_squares_scaled<T: Real>(c: &[T], u: &[T], result_arg: Arg) -> Result<T> {
     let mut m = T::zero();
     for (&ci, &ui) in c.iter().zip(u.iter()) {
         m = m.max((ci * ui).abs());
@@ -120,13 +121,13 @@ fn root_sum_of_squares_scaled<T: Real>(c: &[T], u: &[T], result_arg: u8) -> Resu
 /// same length.
 fn check_coefficients<T: Real>(c: &[T], u: &[T]) -> Result<()> {
     if u.len() != c.len() {
-        return Err(Error::LengthMismatch(1));
+        return Err(Error::LengthMismatch(arg!(1, standard_uncertainties)));
     }
     for &ci in c {
-        finite(ci, 0)?;
+        finite(ci, arg!(0, sensitivity_coefficients))?;
     }
     for &ui in u {
-        non_negative(ui, 1)?;
+        non_negative(ui, arg!(1, standard_uncertainties))?;
     }
     Ok(())
 }
@@ -148,7 +149,11 @@ pub fn combined_standard_uncertainty<T: Real>(
     standard_uncertainties: &[T],
 ) -> Result<T> {
     check_coefficients(sensitivity_coefficients, standard_uncertainties)?;
-    root_sum_of_squares(sensitivity_coefficients, standard_uncertainties, 0)
+    root_sum_of_squares(
+        sensitivity_coefficients,
+        standard_uncertainties,
+        arg!(0, sensitivity_coefficients),
+    )
 }
 
 /// Combined standard uncertainty of correlated inputs,
@@ -180,12 +185,12 @@ pub fn combined_standard_uncertainty_correlated<T: Real>(
     check_coefficients(c, u)?;
     let n = c.len();
     if n.checked_mul(n) != Some(correlation.len()) {
-        return Err(Error::LengthMismatch(2));
+        return Err(Error::LengthMismatch(arg!(2, correlation)));
     }
     for &r in correlation {
-        let r = finite(r, 2)?;
+        let r = finite(r, arg!(2, correlation))?;
         if r.abs() > T::one() {
-            return Err(Error::OutOfDomain(2));
+            return Err(Error::OutOfDomain(arg!(2, correlation)));
         }
     }
     for i in 0..n {
@@ -198,7 +203,7 @@ pub fn combined_standard_uncertainty_correlated<T: Real>(
                 rij == rji
             };
             if !ok {
-                return Err(Error::OutOfDomain(2));
+                return Err(Error::OutOfDomain(arg!(2, correlation)));
             }
         }
     }
@@ -207,7 +212,7 @@ pub fn combined_standard_uncertainty_correlated<T: Real>(
     for (&ci, &ui) in c.iter().zip(u.iter()) {
         m = m.max((ci * ui).abs());
     }
-    let m = finite_result(m, 0)?;
+    let m = finite_result(m, arg!(0, sensitivity_coefficients))?;
     if m == T::zero() {
         return Ok(T::zero());
     }
@@ -226,11 +231,11 @@ pub fn combined_standard_uncertainty_correlated<T: Real>(
     if sum < T::zero() {
         let n2 = T::c((n * n) as f64);
         if -sum > T::c(4.0) * n2 * T::epsilon() * size {
-            return Err(Error::OutOfDomain(2));
+            return Err(Error::OutOfDomain(arg!(2, correlation)));
         }
         return Ok(T::zero());
     }
-    finite_result(m * sum.sqrt(), 0)
+    finite_result(m * sum.sqrt(), arg!(0, sensitivity_coefficients))
 }
 
 /// Brightness temperature at a wavelength with its uncertainty: T from
@@ -256,10 +261,17 @@ pub fn brightness_temperature_wavelength_with_uncertainty<T: Real>(
     spectral_radiance: T,
     spectral_radiance_uncertainty: T,
 ) -> Result<TemperatureUncertainty<T>> {
-    let l = positive(wavelength_m, 0)?;
+    let l = positive(wavelength_m, arg!(0, wavelength_m))?;
     let (t, d) = Wavelength(l).temperature_and_derivative(spectral_radiance)?;
-    let u = non_negative(spectral_radiance_uncertainty, 2)?;
-    single_input(t, d.map_err(|_| Error::OutOfDomain(1))?, u)
+    let u = non_negative(
+        spectral_radiance_uncertainty,
+        arg!(2, spectral_radiance_uncertainty),
+    )?;
+    single_input(
+        t,
+        d.map_err(|_| Error::OutOfDomain(arg!(1, spectral_radiance)))?,
+        u,
+    )
 }
 
 /// Brightness temperature at a frequency with its uncertainty: T from
@@ -281,13 +293,20 @@ pub fn brightness_temperature_frequency_with_uncertainty<T: Real>(
     spectral_radiance_uncertainty: T,
 ) -> Result<TemperatureUncertainty<T>> {
     let (t, d) = Frequency(frequency_hz).temperature_and_derivative(spectral_radiance)?;
-    let u = non_negative(spectral_radiance_uncertainty, 2)?;
-    single_input(t, d.map_err(|_| Error::OutOfDomain(1))?, u)
+    let u = non_negative(
+        spectral_radiance_uncertainty,
+        arg!(2, spectral_radiance_uncertainty),
+    )?;
+    single_input(
+        t,
+        d.map_err(|_| Error::OutOfDomain(arg!(1, spectral_radiance)))?,
+        u,
+    )
 }
 
 fn single_input<T: Real>(t: T, d: T, u: T) -> Result<TemperatureUncertainty<T>> {
     if !(d >= T::min_positive_value()) {
-        return Err(Error::OutOfDomain(1));
+        return Err(Error::OutOfDomain(arg!(1, spectral_radiance)));
     }
     let mut c = [T::zero(); SENSITIVITY_CAPACITY];
     let mut us = [T::zero(); SENSITIVITY_CAPACITY];
@@ -295,7 +314,7 @@ fn single_input<T: Real>(t: T, d: T, u: T) -> Result<TemperatureUncertainty<T>> 
         *c0 = T::one() / d;
         *u0 = u;
     }
-    TemperatureUncertainty::from_parts(t, c, us, 1, 1)
+    TemperatureUncertainty::from_parts(t, c, us, 1, arg!(1, spectral_radiance))
 }
 
 /// Two-load calibrated temperature with its uncertainty: T from [`two_load_calibration`] and
@@ -319,7 +338,8 @@ fn single_input<T: Real>(t: T, d: T, u: T) -> Result<TemperatureUncertainty<T>> 
 /// Returns a [`TemperatureUncertainty`] with `inputs` = 5 and the coefficients in the order
 /// (reading_hot, temperature_hot, reading_cold, temperature_cold, reading), in K per reading
 /// unit or K/K. Errors: those of [`two_load_calibration`] and [`calibrated_temperature`]
-/// (`OutOfDomain(5)` for a reading no blackbody gives); `NonFinite(i)`, `Negative(i)` for
+/// (`OutOfDomain(5)` for a reading no blackbody gives, `DegenerateCalibration(1)` for a gain
+/// that underflows to 0); `NonFinite(i)`, `Negative(i)` for
 /// i = 6…10; `OutOfDomain(5)` when J′(T) is not a positive normal number.
 ///
 /// Accuracy: temperature as [`calibrated_temperature`]; coefficients within 1e-12 relative
@@ -346,25 +366,35 @@ pub fn calibrated_temperature_with_uncertainty<T: Real>(
         reading_cold,
         temperature_cold_k,
     )?;
+    // the calibration is argument 0 of calibrated_temperature, built here from arguments 0 to 4:
+    // a gain that is 0 (the readings' span underflowed against the loads' span) is a degenerate
+    // calibration, named by the reading as two_load_calibration names a gain it cannot form
     let t = calibrated_temperature(&cal, reading).map_err(|e| match e {
-        Error::NonFinite(_) => Error::NonFinite(5),
-        Error::OutOfDomain(_) => Error::OutOfDomain(5),
+        Error::NonFinite(_) => Error::NonFinite(arg!(5, reading)),
+        Error::OutOfDomain(_) => Error::OutOfDomain(arg!(5, reading)),
+        Error::DegenerateCalibration(_) => Error::DegenerateCalibration(arg!(1, reading_hot)),
         other => other,
     })?;
     let us = [
-        non_negative(reading_hot_uncertainty, 6)?,
-        non_negative(temperature_hot_uncertainty_k, 7)?,
-        non_negative(reading_cold_uncertainty, 8)?,
-        non_negative(temperature_cold_uncertainty_k, 9)?,
-        non_negative(reading_uncertainty, 10)?,
+        non_negative(reading_hot_uncertainty, arg!(6, reading_hot_uncertainty))?,
+        non_negative(
+            temperature_hot_uncertainty_k,
+            arg!(7, temperature_hot_uncertainty_k),
+        )?,
+        non_negative(reading_cold_uncertainty, arg!(8, reading_cold_uncertainty))?,
+        non_negative(
+            temperature_cold_uncertainty_k,
+            arg!(9, temperature_cold_uncertainty_k),
+        )?,
+        non_negative(reading_uncertainty, arg!(10, reading_uncertainty))?,
     ];
     let nu = cal.frequency_hz;
-    let domain = |_| Error::OutOfDomain(5);
+    let domain = |_| Error::OutOfDomain(arg!(5, reading));
     let jt = thermodynamic_to_rayleigh_jeans_factor(nu, t).map_err(domain)?;
     let jh = thermodynamic_to_rayleigh_jeans_factor(nu, temperature_hot_k).map_err(domain)?;
     let jc = thermodynamic_to_rayleigh_jeans_factor(nu, temperature_cold_k).map_err(domain)?;
     if !(jt >= T::min_positive_value()) {
-        return Err(Error::OutOfDomain(5));
+        return Err(Error::OutOfDomain(arg!(5, reading)));
     }
     let span = reading_hot - reading_cold;
     let w = (reading - reading_cold) / span;
@@ -377,5 +407,5 @@ pub fn calibrated_temperature_with_uncertainty<T: Real>(
         w_cold * jc / jt,
         per_reading,
     ];
-    TemperatureUncertainty::from_parts(t, c, us, 5, 5)
+    TemperatureUncertainty::from_parts(t, c, us, 5, arg!(5, reading))
 }

@@ -5,6 +5,7 @@
 use super::Universe;
 use super::table::A_MIN;
 use super::universe::check_redshift;
+use crate::arg;
 use crate::array::blockwise;
 use crate::check::finite_result;
 use crate::math::quadrature::integrate;
@@ -98,7 +99,7 @@ impl<T: Real> Universe<T> {
             blockwise(
                 redshifts,
                 out,
-                1,
+                arg!(1, out),
                 |z| {
                     let (chi, inside) = self.comoving_unit_fast(z);
                     let (v, ok) = distance(dh * chi, z);
@@ -110,7 +111,7 @@ impl<T: Real> Universe<T> {
             blockwise(
                 redshifts,
                 out,
-                1,
+                arg!(1, out),
                 |z| {
                     let (chi, inside) = self.comoving_unit_fast(z);
                     let (v, ok) = distance(dh * self.transverse_unit(chi), z);
@@ -196,18 +197,21 @@ impl<T: Real> Universe<T> {
     /// neutrinos). Method: the per-universe table (see `table.rs`) for z ≤ 16383, the shared
     /// quadrature in s = √a beyond.
     pub fn comoving_distance_mpc(&self, z: T) -> Result<T> {
-        let z = check_redshift(z, 0)?;
-        finite_result(self.hubble_distance_mpc * self.comoving_unit(z)?, 0)
+        let z = check_redshift(z, arg!(0, z))?;
+        finite_result(
+            self.hubble_distance_mpc * self.comoving_unit(z)?,
+            arg!(0, z),
+        )
     }
 
     /// Transverse comoving distance D_M, Mpc (Hogg 1999 eq. 16: equal to D_C when flat, the
     /// sinh/sin form when open/closed). Errors and accuracy as
     /// [`comoving_distance_mpc`](Self::comoving_distance_mpc).
     pub fn transverse_comoving_distance_mpc(&self, z: T) -> Result<T> {
-        let z = check_redshift(z, 0)?;
+        let z = check_redshift(z, arg!(0, z))?;
         finite_result(
             self.hubble_distance_mpc * self.transverse_unit(self.comoving_unit(z)?),
-            0,
+            arg!(0, z),
         )
     }
 
@@ -216,7 +220,7 @@ impl<T: Real> Universe<T> {
     pub fn angular_diameter_distance_mpc(&self, z: T) -> Result<T> {
         finite_result(
             self.transverse_comoving_distance_mpc(z)? / (T::one() + z),
-            0,
+            arg!(0, z),
         )
     }
 
@@ -226,15 +230,15 @@ impl<T: Real> Universe<T> {
     /// Errors: `NonFinite(i)`, `Negative(i)`, `EmptyInterval(0)` when z2 < z1.
     /// Accuracy: within 1e-12 relative (`f64`) unless z2 − z1 is so small that χ2 − χ1 cancels.
     pub fn angular_diameter_distance_between_mpc(&self, z1: T, z2: T) -> Result<T> {
-        let z1 = check_redshift(z1, 0)?;
-        let z2 = check_redshift(z2, 1)?;
+        let z1 = check_redshift(z1, arg!(0, z1))?;
+        let z2 = check_redshift(z2, arg!(1, z2))?;
         if z2 < z1 {
-            return Err(Error::EmptyInterval(0));
+            return Err(Error::EmptyInterval(arg!(0, z1)));
         }
         let d = self.comoving_unit(z2)? - self.comoving_unit(z1)?;
         finite_result(
             self.hubble_distance_mpc * self.transverse_unit(d) / (T::one() + z2),
-            1,
+            arg!(1, z2),
         )
     }
 
@@ -243,7 +247,7 @@ impl<T: Real> Universe<T> {
     pub fn luminosity_distance_mpc(&self, z: T) -> Result<T> {
         finite_result(
             self.transverse_comoving_distance_mpc(z)? * (T::one() + z),
-            0,
+            arg!(0, z),
         )
     }
 
@@ -267,7 +271,7 @@ impl<T: Real> Universe<T> {
         blockwise(
             redshifts,
             out,
-            1,
+            arg!(1, out),
             |z| {
                 let (chi, inside) = self.comoving_unit_fast(z);
                 let v = dh * chi;
@@ -333,14 +337,14 @@ impl<T: Real> Universe<T> {
     /// Errors: `NonFinite(0)`, `Negative(0)`, `NonPositive(0)` at z = 0 (D_L = 0).
     /// Accuracy: within 1e-12 absolute (`f64`) against mpmath.
     pub fn distance_modulus(&self, z: T) -> Result<T> {
-        let z = check_redshift(z, 0)?;
+        let z = check_redshift(z, arg!(0, z))?;
         if z == T::zero() {
-            return Err(Error::NonPositive(0));
+            return Err(Error::NonPositive(arg!(0, z)));
         }
         let dl = self.luminosity_distance_mpc(z)?;
         finite_result(
             T::c(5.0 / core::f64::consts::LN_10) * dl.ln() + T::c(25.0),
-            0,
+            arg!(0, z),
         )
     }
 
@@ -351,7 +355,7 @@ impl<T: Real> Universe<T> {
     ///
     /// Errors and accuracy as [`comoving_distance_mpc`](Self::comoving_distance_mpc).
     pub fn comoving_volume_gpc3(&self, z: T) -> Result<T> {
-        let z = check_redshift(z, 0)?;
+        let z = check_redshift(z, arg!(0, z))?;
         let x = self.comoving_unit(z)?;
         let dh = self.hubble_distance_mpc;
         let ok = self.params.omega_curvature;
@@ -383,7 +387,7 @@ impl<T: Real> Universe<T> {
             let scale = dh / r;
             two_pi * scale * scale * scale * (phi - phi.sin() * phi.cos())
         };
-        finite_result(v * mpc3_to_gpc3, 0)
+        finite_result(v * mpc3_to_gpc3, arg!(0, z))
     }
 
     /// Differential comoving volume dV_C/dz/dΩ = D_H D_M²/E(z), Mpc³ sr⁻¹ (Hogg 1999 eq. 28).
@@ -391,7 +395,7 @@ impl<T: Real> Universe<T> {
     pub fn differential_comoving_volume_mpc3_sr(&self, z: T) -> Result<T> {
         let dm = self.transverse_comoving_distance_mpc(z)?;
         let e = self.dimensionless_hubble(z)?;
-        finite_result(self.hubble_distance_mpc * dm * dm / e, 0)
+        finite_result(self.hubble_distance_mpc * dm * dm / e, arg!(0, z))
     }
 
     /// Proper transverse size per arcsecond at z, D_A·π/648000, kpc per arcsec. Errors and
@@ -399,7 +403,7 @@ impl<T: Real> Universe<T> {
     pub fn transverse_scale_kpc_per_arcsec(&self, z: T) -> Result<T> {
         finite_result(
             self.angular_diameter_distance_mpc(z)? * T::c(1000.0 * RAD_PER_ARCSEC),
-            0,
+            arg!(0, z),
         )
     }
 }

@@ -3,6 +3,7 @@
 
 use super::Universe;
 use super::universe::check_redshift;
+use crate::arg;
 use crate::check::finite_result;
 use crate::{Error, Real, Result};
 
@@ -10,7 +11,7 @@ impl<T: Real> Universe<T> {
     /// a = 1/(1+z) and q² = a⁴E² at a validated redshift.
     #[inline]
     fn at(&self, z: T) -> Result<(T, T)> {
-        let z = check_redshift(z, 0)?;
+        let z = check_redshift(z, arg!(0, z))?;
         let a = T::one() / (T::one() + z);
         Ok((a, self.q_squared(a)))
     }
@@ -25,13 +26,16 @@ impl<T: Real> Universe<T> {
     /// mpmath (`tests/data/cosmology.txt`).
     pub fn dimensionless_hubble(&self, z: T) -> Result<T> {
         let (a, q2) = self.at(z)?;
-        finite_result(q2.sqrt() / (a * a), 0)
+        finite_result(q2.sqrt() / (a * a), arg!(0, z))
     }
 
     /// Hubble parameter H(z) = H0 E(z), km s⁻¹ Mpc⁻¹. Errors and accuracy as
     /// [`dimensionless_hubble`](Self::dimensionless_hubble).
     pub fn hubble_parameter_km_s_mpc(&self, z: T) -> Result<T> {
-        finite_result(self.params.h0_km_s_mpc * self.dimensionless_hubble(z)?, 0)
+        finite_result(
+            self.params.h0_km_s_mpc * self.dimensionless_hubble(z)?,
+            arg!(0, z),
+        )
     }
 
     /// Matter density parameter at z (cold dark matter, baryons and massive neutrinos, the
@@ -43,42 +47,42 @@ impl<T: Real> Universe<T> {
         for &(c, ym) in self.massive.iter().take(self.n_massive) {
             m = m + c * super::neutrino::density_ratio(ym * a);
         }
-        finite_result(m / q2, 0)
+        finite_result(m / q2, arg!(0, z))
     }
 
     /// Radiation density parameter at z (photons and massless neutrino species). Errors as
     /// [`dimensionless_hubble`](Self::dimensionless_hubble).
     pub fn omega_radiation_at(&self, z: T) -> Result<T> {
         let (_, q2) = self.at(z)?;
-        finite_result(self.omega_radiation / q2, 0)
+        finite_result(self.omega_radiation / q2, arg!(0, z))
     }
 
     /// Dark-energy density parameter at z. Errors as
     /// [`dimensionless_hubble`](Self::dimensionless_hubble).
     pub fn omega_dark_energy_at(&self, z: T) -> Result<T> {
         let (a, q2) = self.at(z)?;
-        finite_result(self.dark_energy_term(a) / q2, 0)
+        finite_result(self.dark_energy_term(a) / q2, arg!(0, z))
     }
 
     /// Curvature density parameter at z, Ω_k(1+z)²/E². Errors as
     /// [`dimensionless_hubble`](Self::dimensionless_hubble).
     pub fn omega_curvature_at(&self, z: T) -> Result<T> {
         let (a, q2) = self.at(z)?;
-        finite_result(self.params.omega_curvature * a * a / q2, 0)
+        finite_result(self.params.omega_curvature * a * a / q2, arg!(0, z))
     }
 
     /// Critical density at z, ρ_c(z) = 3H(z)²/(8πG), kg m⁻³ (G from CODATA 2022). Errors as
     /// [`dimensionless_hubble`](Self::dimensionless_hubble).
     pub fn critical_density_kg_m3(&self, z: T) -> Result<T> {
         let e = self.dimensionless_hubble(z)?;
-        finite_result(self.critical_density * e * e, 0)
+        finite_result(self.critical_density * e * e, arg!(0, z))
     }
 
     /// CMB temperature at z, T0(1+z), K. Errors: `NonFinite(0)`, `Negative(0)`. Exact to one
     /// rounding.
     pub fn cmb_temperature_at_k(&self, z: T) -> Result<T> {
-        let z = check_redshift(z, 0)?;
-        finite_result(self.params.cmb_temperature_k * (T::one() + z), 0)
+        let z = check_redshift(z, arg!(0, z))?;
+        finite_result(self.params.cmb_temperature_k * (T::one() + z), arg!(0, z))
     }
 
     /// Hubble distance c/H0, Mpc.
@@ -109,11 +113,11 @@ impl<T: Real> Universe<T> {
     /// Errors: `OutOfDomain(0)` for a universe without radiation (T0 = 0).
     pub fn matter_radiation_equality_redshift(&self) -> Result<T> {
         if !(self.omega_radiation_all_massless > T::zero()) {
-            return Err(Error::OutOfDomain(0));
+            return Err(Error::OutOfDomain(arg!(0, universe)));
         }
         finite_result(
             self.omega_cb / self.omega_radiation_all_massless - T::one(),
-            0,
+            arg!(0, universe),
         )
     }
 }

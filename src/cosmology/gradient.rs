@@ -234,7 +234,7 @@ impl<T: Real> GradientUniverse<T> {
     ///
     /// Returns `Ok(())` when every element succeeded; otherwise the failing elements are NaN
     /// and the error names the first failing index and the scalar method's error;
-    /// `LengthMismatch(1)` or `(2)` when `values` or `gradients` has another length (then
+    /// `LengthMismatch` naming `values` or `gradients` when one has another length (then
     /// nothing is computed). Accuracy: that of the scalar method.
     pub fn luminosity_distance_mpc_gradient_array(
         &self,
@@ -243,7 +243,10 @@ impl<T: Real> GradientUniverse<T> {
         gradients: &mut [[T; GRADIENT_LEN]],
     ) -> ArrayResult {
         let n = redshifts.len();
-        for (len, arg) in [(values.len(), 1u8), (gradients.len(), 2u8)] {
+        for (len, arg) in [
+            (values.len(), crate::arg!(1, values)),
+            (gradients.len(), crate::arg!(2, gradients)),
+        ] {
             if len != n {
                 return Err(ElementError {
                     index: n.min(len),

@@ -4,6 +4,7 @@
 
 use super::Universe;
 use super::universe::check_redshift;
+use crate::arg;
 use crate::check::finite_result;
 use crate::math::quadrature::integrate;
 use crate::{Error, Real, Result};
@@ -21,7 +22,7 @@ use crate::{Error, Real, Result};
 fn integrate_time<T: Real, F: FnMut(T) -> T>(mut f: F, lo: T, hi: T) -> Result<T> {
     integrate(&mut f, lo, hi, T::epsilon() * T::c(4.0), T::zero())
         .or_else(|_| integrate(&mut f, lo, hi, T::epsilon() * T::c(64.0), T::zero()))
-        .map_err(|_| Error::OutOfDomain(0))
+        .map_err(|_| Error::OutOfDomain(arg!(0, z)))
 }
 
 impl<T: Real> Universe<T> {
@@ -64,12 +65,12 @@ impl<T: Real> Universe<T> {
             }
             (previous, previous_ratio) = (piece, r);
         }
-        Err(Error::OutOfDomain(0))
+        Err(Error::OutOfDomain(arg!(0, z)))
     }
 
     /// s = (1+z)^(−1/2) at a validated redshift.
     fn s_of(&self, z: T) -> Result<T> {
-        let z = check_redshift(z, 0)?;
+        let z = check_redshift(z, arg!(0, z))?;
         Ok(T::one() / (T::one() + z).sqrt())
     }
 
@@ -80,7 +81,7 @@ impl<T: Real> Universe<T> {
     /// Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-12 relative (`f64`) for z up
     /// to 1e4 against mpmath.
     pub fn lookback_time_gyr(&self, z: T) -> Result<T> {
-        let z = check_redshift(z, 0)?;
+        let z = check_redshift(z, arg!(0, z))?;
         if z == T::zero() {
             // a dual number keeps the slope at z = 0: dt/dz = t_H/E(0) = t_H
             return Ok(if T::HAS_PARTIALS {
@@ -102,7 +103,7 @@ impl<T: Real> Universe<T> {
             T::zero(),
             width,
         )?;
-        finite_result(self.hubble_time_gyr * v, 0)
+        finite_result(self.hubble_time_gyr * v, arg!(0, z))
     }
 
     /// Age of the universe at redshift z, (1/H0) ∫_z^∞ dz'/((1+z')E(z')), Gyr.
@@ -118,7 +119,7 @@ impl<T: Real> Universe<T> {
     /// are among the vectors.
     pub fn age_gyr(&self, z: T) -> Result<T> {
         let s = self.s_of(z)?;
-        finite_result(self.hubble_time_gyr * self.age_integral(s)?, 0)
+        finite_result(self.hubble_time_gyr * self.age_integral(s)?, arg!(0, z))
     }
 
     /// Conformal time at z times c, c·η(z) = (c/H0) ∫_z^∞ dz'/E(z'), Mpc: the comoving horizon.
@@ -131,9 +132,9 @@ impl<T: Real> Universe<T> {
     pub fn conformal_time_mpc(&self, z: T) -> Result<T> {
         let s = self.s_of(z)?;
         if self.omega_radiation == T::zero() && self.omega_cb == T::zero() && self.n_massive == 0 {
-            return Err(Error::OutOfDomain(0));
+            return Err(Error::OutOfDomain(arg!(0, z)));
         }
         let v = integrate_time(|x: T| T::c(2.0) * x / self.q_of_s(x), T::zero(), s)?;
-        finite_result(self.hubble_distance_mpc * v, 0)
+        finite_result(self.hubble_distance_mpc * v, arg!(0, z))
     }
 }

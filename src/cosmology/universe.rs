@@ -3,9 +3,10 @@
 
 use super::neutrino::density_ratio;
 use super::table::DistanceTable;
+use crate::arg;
 use crate::check::non_negative;
 use crate::constants as k;
-use crate::{Error, Real, Result};
+use crate::{Arg, Error, Real, Result};
 
 /// (7/8)(4/11)^(4/3): energy density of one massless neutrino species per photon energy density.
 pub(crate) const NEUTRINO_PER_PHOTON: f64 = 0.227_107_317_660_238_95;
@@ -94,7 +95,7 @@ pub struct Universe<T> {
     pub(crate) table: DistanceTable<T>,
 }
 
-fn finite_param<T: Real>(x: T, i: u8) -> Result<T> {
+fn finite_param<T: Real>(x: T, i: Arg) -> Result<T> {
     if x.is_finite() {
         Ok(x)
     } else {
@@ -111,7 +112,7 @@ impl<T: Real> Universe<T> {
     /// density overflows, Ω_m < 0, Ω_b < 0 or Ω_b > Ω_m, T0 < 0, N_eff < 0, a negative mass, a
     /// positive mass with T0 = 0 (no neutrino background), massive neutrinos denser today than
     /// Ω_m, Y_p outside [0, 1); `NoBigBang` when E(z)² ≤ 0 somewhere between today and a → 0
-    /// (checked on the 4096 points of a logarithmic grid in a from 1e-30 to 1 and on every node
+    /// (checked on the 4097 points of a logarithmic grid in a from 1e-30 to 1 and on every node
     /// of the distance table); `InvalidParameter(7)` (w0, with wa) when the dark-energy density
     /// overflows the type somewhere on that grid, so that E(z) has no value there: an equation
     /// of state far from physical ones (for `f64`, w0 above about 3.8, or w0 + wa, the
@@ -126,38 +127,38 @@ impl<T: Real> Universe<T> {
     /// (Chevallier & Polarski 2001, Int. J. Mod. Phys. D 10, 213; Linder 2003, PRL 90, 091301).
     pub fn new(params: UniverseParameters<T>) -> Result<Self> {
         let p = params;
-        let h0 = finite_param(p.h0_km_s_mpc, 0)?;
+        let h0 = finite_param(p.h0_km_s_mpc, arg!(0, h0_km_s_mpc))?;
         if !(h0 > T::zero()) {
-            return Err(Error::InvalidParameter(0));
+            return Err(Error::InvalidParameter(arg!(0, h0_km_s_mpc)));
         }
-        let om = finite_param(p.omega_matter, 1)?;
+        let om = finite_param(p.omega_matter, arg!(1, omega_matter))?;
         if om < T::zero() {
-            return Err(Error::InvalidParameter(1));
+            return Err(Error::InvalidParameter(arg!(1, omega_matter)));
         }
-        let ob = finite_param(p.omega_baryon, 2)?;
+        let ob = finite_param(p.omega_baryon, arg!(2, omega_baryon))?;
         if ob < T::zero() || ob > om {
-            return Err(Error::InvalidParameter(2));
+            return Err(Error::InvalidParameter(arg!(2, omega_baryon)));
         }
-        let ok = finite_param(p.omega_curvature, 3)?;
-        let t0 = finite_param(p.cmb_temperature_k, 4)?;
+        let ok = finite_param(p.omega_curvature, arg!(3, omega_curvature))?;
+        let t0 = finite_param(p.cmb_temperature_k, arg!(4, cmb_temperature_k))?;
         if t0 < T::zero() {
-            return Err(Error::InvalidParameter(4));
+            return Err(Error::InvalidParameter(arg!(4, cmb_temperature_k)));
         }
-        let n_eff = finite_param(p.n_eff, 5)?;
+        let n_eff = finite_param(p.n_eff, arg!(5, n_eff))?;
         if n_eff < T::zero() {
-            return Err(Error::InvalidParameter(5));
+            return Err(Error::InvalidParameter(arg!(5, n_eff)));
         }
         for &m in &p.neutrino_masses_ev {
-            let m = finite_param(m, 6)?;
+            let m = finite_param(m, arg!(6, neutrino_masses_ev))?;
             if m < T::zero() || (m > T::zero() && t0 == T::zero()) {
-                return Err(Error::InvalidParameter(6));
+                return Err(Error::InvalidParameter(arg!(6, neutrino_masses_ev)));
             }
         }
-        let w0 = finite_param(p.w0, 7)?;
-        let wa = finite_param(p.wa, 8)?;
-        let y = finite_param(p.helium_mass_fraction, 9)?;
+        let w0 = finite_param(p.w0, arg!(7, w0))?;
+        let wa = finite_param(p.wa, arg!(8, wa))?;
+        let y = finite_param(p.helium_mass_fraction, arg!(9, helium_mass_fraction))?;
         if y < T::zero() || y >= T::one() {
-            return Err(Error::InvalidParameter(9));
+            return Err(Error::InvalidParameter(arg!(9, helium_mass_fraction)));
         }
 
         // H0 in s⁻¹ and the critical density 3H0²/(8πG)
@@ -170,7 +171,7 @@ impl<T: Real> Universe<T> {
         // of the type (for f64: H0 below about 1e-147 or above 1e169 km/s/Mpc)
         for derived in [rho_crit, hubble_distance_mpc, hubble_time_gyr] {
             if !(derived > T::zero() && derived.is_finite()) {
-                return Err(Error::InvalidParameter(0));
+                return Err(Error::InvalidParameter(arg!(0, h0_km_s_mpc)));
             }
         }
         // photons: ρ_γ = a_rad T⁴/c² (mass density)
@@ -180,11 +181,11 @@ impl<T: Real> Universe<T> {
             / rho_crit;
         if !omega_photon.is_finite() {
             // T0 so large that Ω_γ overflows
-            return Err(Error::InvalidParameter(4));
+            return Err(Error::InvalidParameter(arg!(4, cmb_temperature_k)));
         }
         let per_species = n_eff / T::c(3.0) * T::c(NEUTRINO_PER_PHOTON) * omega_photon;
         if !per_species.is_finite() {
-            return Err(Error::InvalidParameter(5));
+            return Err(Error::InvalidParameter(arg!(5, n_eff)));
         }
         let mut massive = [(T::zero(), T::zero()); 3];
         let mut n_massive = 0usize;
@@ -205,7 +206,7 @@ impl<T: Real> Universe<T> {
         }
         let omega_cb = om - omega_nu_massive;
         if omega_cb < T::zero() {
-            return Err(Error::InvalidParameter(6));
+            return Err(Error::InvalidParameter(arg!(6, neutrino_masses_ev)));
         }
         let omega_de = T::one() - om - omega_radiation - ok;
         let mut u = Universe {
@@ -237,9 +238,9 @@ impl<T: Real> Universe<T> {
             }
             if !q2.is_finite() {
                 let culprit = if u.dark_energy_term(a).is_finite() {
-                    1
+                    arg!(1, omega_matter)
                 } else {
-                    7
+                    arg!(7, w0)
                 };
                 return Err(Error::InvalidParameter(culprit));
             }
@@ -317,6 +318,6 @@ impl<T: Real> Universe<T> {
 }
 
 /// Checks a redshift: finite and ≥ 0.
-pub(crate) fn check_redshift<T: Real>(z: T, arg: u8) -> Result<T> {
+pub(crate) fn check_redshift<T: Real>(z: T, arg: Arg) -> Result<T> {
     non_negative(z, arg)
 }

@@ -1,5 +1,6 @@
 //! The published fitting formulas for the last-scattering and drag redshifts.
 
+use crate::arg;
 use crate::check::{finite_result, positive};
 use crate::{Real, Result};
 
@@ -21,14 +22,14 @@ fn pow<T: Real>(x: T, p: f64) -> T {
 /// own, about 1% against full recombination calculations (as its authors state; from memory);
 /// the formula itself is evaluated to a few ulp (mpmath vectors).
 pub fn last_scattering_redshift_fit<T: Real>(omega_baryon_h2: T, omega_matter_h2: T) -> Result<T> {
-    let wb = positive(omega_baryon_h2, 0)?;
-    let wm = positive(omega_matter_h2, 1)?;
+    let wb = positive(omega_baryon_h2, arg!(0, omega_baryon_h2))?;
+    let wm = positive(omega_matter_h2, arg!(1, omega_matter_h2))?;
     let g1 = T::c(0.0783) * pow(wb, -0.238) / (T::one() + T::c(39.5) * pow(wb, 0.763));
     let g2 = T::c(0.560) / (T::one() + T::c(21.1) * pow(wb, 1.81));
     let z = T::c(1048.0)
         * (T::one() + T::c(0.00124) * pow(wb, -0.738))
         * (T::one() + g1 * (g2 * wm.ln()).exp());
-    finite_result(z, 0)
+    finite_result(z, arg!(0, omega_baryon_h2))
 }
 
 /// Redshift of the drag epoch by the fit of Eisenstein & Hu 1998 (ApJ 496, 605, eq. 4;
@@ -43,11 +44,11 @@ pub fn last_scattering_redshift_fit<T: Real>(omega_baryon_h2: T, omega_matter_h2
 /// own (its authors quote a few per cent or better over the usual parameter range; from
 /// memory); the formula itself is evaluated to a few ulp (mpmath vectors).
 pub fn drag_redshift_fit<T: Real>(omega_baryon_h2: T, omega_matter_h2: T) -> Result<T> {
-    let wb = positive(omega_baryon_h2, 0)?;
-    let wm = positive(omega_matter_h2, 1)?;
+    let wb = positive(omega_baryon_h2, arg!(0, omega_baryon_h2))?;
+    let wm = positive(omega_matter_h2, arg!(1, omega_matter_h2))?;
     let b1 = T::c(0.313) * pow(wm, -0.419) * (T::one() + T::c(0.607) * pow(wm, 0.674));
     let b2 = T::c(0.238) * pow(wm, 0.223);
     let z = T::c(1291.0) * pow(wm, 0.251) / (T::one() + T::c(0.659) * pow(wm, 0.828))
         * (T::one() + b1 * (b2 * wb.ln()).exp());
-    finite_result(z, 0)
+    finite_result(z, arg!(0, omega_baryon_h2))
 }

@@ -12,13 +12,14 @@
 //! of the shared quadrature per interval.
 
 use super::species::{Balance, Hydrogen, Species, electron_balance, proton_balance};
+use crate::arg;
 use crate::check::finite_result;
 use crate::cosmology::Universe;
 use crate::math::exp::exp;
 use crate::math::ode::StiffStepper;
 use crate::math::quadrature::{gauss_kronrod_15, integrate};
 use crate::math::roots::bracketed_newton;
-use crate::{Error, Real, Result};
+use crate::{Arg, Error, Real, Result};
 
 /// Number of nodes of the table in every face (C, Fortran, Python use
 /// `ThermalHistory<f64, HISTORY_NODES>`): a node spacing of 0.0045 in ln(1+z) up to z = 10⁴.
@@ -294,13 +295,13 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
     fn compute(&mut self, options: HistoryOptions<T>) -> Result<()> {
         if let Some(zr) = options.reionization_redshift {
             if !zr.is_finite() {
-                return Err(Error::NonFinite(1));
+                return Err(Error::NonFinite(arg!(1, reionization_redshift)));
             }
             if zr < T::zero() {
-                return Err(Error::Negative(1));
+                return Err(Error::Negative(arg!(1, reionization_redshift)));
             }
             if zr > T::c(HIGHEST_REIONIZATION_REDSHIFT) {
-                return Err(Error::OutOfDomain(1));
+                return Err(Error::OutOfDomain(arg!(1, reionization_redshift)));
             }
             self.reion_on = 1;
             self.reion_z = zr;
@@ -310,36 +311,36 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
         }
         let top = options.highest_redshift;
         if !top.is_finite() {
-            return Err(Error::NonFinite(2));
+            return Err(Error::NonFinite(arg!(2, highest_redshift)));
         }
         if !(top >= T::c(LOWEST_HIGHEST_REDSHIFT)) {
-            return Err(Error::OutOfDomain(2));
+            return Err(Error::OutOfDomain(arg!(2, highest_redshift)));
         }
         if N < 5 {
-            return Err(Error::CapacityTooSmall(2));
+            return Err(Error::CapacityTooSmall(arg!(2, highest_redshift)));
         }
         let top_u = top.ln_1p();
         let spacing = top_u / T::c((N - 1) as f64);
         if spacing > T::c(max_spacing() * (1.0 + 1e-12)) {
-            return Err(Error::CapacityTooSmall(2));
+            return Err(Error::CapacityTooSmall(arg!(2, highest_redshift)));
         }
         let hz = options.helium_reionization_redshift;
         if !hz.is_finite() {
-            return Err(Error::NonFinite(3));
+            return Err(Error::NonFinite(arg!(3, helium_reionization_redshift)));
         }
         if hz < T::zero() {
-            return Err(Error::Negative(3));
+            return Err(Error::Negative(arg!(3, helium_reionization_redshift)));
         }
         if hz > T::c(HIGHEST_HELIUM_REIONIZATION_REDSHIFT) {
-            return Err(Error::OutOfDomain(3));
+            return Err(Error::OutOfDomain(arg!(3, helium_reionization_redshift)));
         }
         let hw = options.helium_reionization_width;
         if !hw.is_finite() {
-            return Err(Error::NonFinite(4));
+            return Err(Error::NonFinite(arg!(4, helium_reionization_width)));
         }
         let [w_lo, w_hi] = HELIUM_REIONIZATION_WIDTH_RANGE;
         if !(hw >= T::c(w_lo)) || hw > T::c(w_hi) {
-            return Err(Error::OutOfDomain(4));
+            return Err(Error::OutOfDomain(arg!(4, helium_reionization_width)));
         }
         self.helium_z = hz;
         self.helium_width = hw;
@@ -818,7 +819,7 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
             T::epsilon() * T::c(4.0),
             T::zero(),
         )?;
-        finite_result(self.universe.hubble_distance_mpc() * v, 0)
+        finite_result(self.universe.hubble_distance_mpc() * v, arg!(0, z))
     }
 
     fn summarise(&mut self) -> Result<()> {
@@ -907,7 +908,7 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
 
     /// u = ln(1+z) of a query redshift (argument position `arg`), checked against the table.
     #[inline]
-    fn query_u(&self, z: T, arg: u8) -> Result<T> {
+    fn query_u(&self, z: T, arg: Arg) -> Result<T> {
         if !z.is_finite() {
             return Err(Error::NonFinite(arg));
         }
@@ -929,18 +930,18 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
     /// within 1e-5 relative from z = 1600 to 50 against scipy `solve_ivp` on the same
     /// equations; cubic Hermite interpolation in ln(1+z) between nodes.
     pub fn ionized_fraction(&self, z: T) -> Result<T> {
-        let u = self.query_u(z, 0)?;
+        let u = self.query_u(z, arg!(0, z))?;
         let (x, _) = self.xe_rec(u);
-        finite_result(x + self.reion_excess(z, x), 0)
+        finite_result(x + self.reion_excess(z, x), arg!(0, z))
     }
 
     /// Matter (gas) temperature T_m at redshift z, K (reionisation heating is not modelled).
     ///
     /// Errors and accuracy as [`ionized_fraction`](Self::ionized_fraction).
     pub fn matter_temperature_k(&self, z: T) -> Result<T> {
-        let u = self.query_u(z, 0)?;
+        let u = self.query_u(z, arg!(0, z))?;
         let (l, _, _) = self.interp(&self.ln_tm, &self.dln_tm, u);
-        finite_result(crate::math::exp::exp(l), 0)
+        finite_result(crate::math::exp::exp(l), arg!(0, z))
     }
 
     /// τ of the reionisation excess from 0 to u (exact quadrature from the node below).
@@ -970,9 +971,9 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
     /// Errors as [`ionized_fraction`](Self::ionized_fraction). Accuracy: within 1e-5 relative
     /// against scipy `solve_ivp` on the same equations.
     pub fn optical_depth(&self, z: T) -> Result<T> {
-        let u = self.query_u(z, 0)?;
+        let u = self.query_u(z, arg!(0, z))?;
         let (t, _) = self.depth(false, u);
-        finite_result(t + self.tau_reion_at(u)?, 0)
+        finite_result(t + self.tau_reion_at(u)?, arg!(0, z))
     }
 
     /// Visibility function per unit conformal distance, g = −dτ/dη e^{−τ} = n_e σ_T a e^{−τ},
@@ -981,13 +982,16 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
     /// Errors as [`ionized_fraction`](Self::ionized_fraction). Accuracy: within 1e-5 relative
     /// against scipy `solve_ivp` near the peak.
     pub fn visibility(&self, z: T) -> Result<T> {
-        let u = self.query_u(z, 0)?;
+        let u = self.query_u(z, arg!(0, z))?;
         let (x, _) = self.xe_rec(u);
         let xe = x + self.reion_excess(z, x);
         let (t, _) = self.depth(false, u);
         let tau = t + self.tau_reion_at(u)?;
         let zp1 = u.exp();
-        finite_result(self.species.thomson_mpc0 * xe * zp1 * zp1 * (-tau).exp(), 0)
+        finite_result(
+            self.species.thomson_mpc0 * xe * zp1 * zp1 * (-tau).exp(),
+            arg!(0, z),
+        )
     }
 
     /// Comoving sound horizon r_s(z) = ∫_z^∞ c_s dz'/H(z'), c_s = c/√(3(1+R)),
@@ -998,10 +1002,10 @@ impl<T: Real, const N: usize> ThermalHistory<T, N> {
     /// Errors: `NonFinite(0)`, `Negative(0)`. Accuracy: within 1e-12 relative against mpmath.
     pub fn sound_horizon_mpc(&self, z: T) -> Result<T> {
         if !z.is_finite() {
-            return Err(Error::NonFinite(0));
+            return Err(Error::NonFinite(arg!(0, z)));
         }
         if z < T::zero() {
-            return Err(Error::Negative(0));
+            return Err(Error::Negative(arg!(0, z)));
         }
         self.sound_horizon_at(z)
     }

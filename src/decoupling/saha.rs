@@ -1,6 +1,7 @@
 //! Saha equilibrium of hydrogen and both helium stages.
 
 use super::species::{Hydrogen, Species, electron_balance};
+use crate::arg;
 use crate::check::finite_result;
 use crate::cosmology::Universe;
 use crate::{Error, Real, Result};
@@ -29,18 +30,18 @@ pub const SAHA_HIGHEST_REDSHIFT: f64 = 1e8;
 /// Principles of Physical Cosmology, §6.
 pub fn saha_ionized_fraction<T: Real>(universe: &Universe<T>, z: T) -> Result<T> {
     if !z.is_finite() {
-        return Err(Error::NonFinite(1));
+        return Err(Error::NonFinite(arg!(1, z)));
     }
     if z < T::zero() {
-        return Err(Error::Negative(1));
+        return Err(Error::Negative(arg!(1, z)));
     }
     if z > T::c(SAHA_HIGHEST_REDSHIFT) {
-        return Err(Error::OutOfDomain(1));
+        return Err(Error::OutOfDomain(arg!(1, z)));
     }
     let s = Species::new(universe)?;
     let u = z.ln_1p();
     let ln_s = s.ln_saha_factors(u);
     let [ln_sh, _, _] = ln_s;
     let b = electron_balance(s.f_he, Hydrogen::Saha(ln_sh), ln_s)?;
-    finite_result(b.x_e, 1)
+    finite_result(b.x_e, arg!(1, z))
 }

@@ -3,6 +3,7 @@
 //! coefficient and the rates of the Peebles atom. Equations: the module doc of
 //! [`crate::decoupling`].
 
+use crate::arg;
 use crate::constants as k;
 use crate::cosmology::Universe;
 use crate::math::exp::exp;
@@ -62,10 +63,10 @@ impl<T: Real> Species<T> {
     pub fn new(u: &Universe<T>) -> Result<Self> {
         let p = u.parameters();
         if !(p.omega_baryon > T::zero()) {
-            return Err(Error::InvalidParameter(2));
+            return Err(Error::InvalidParameter(arg!(2, omega_baryon)));
         }
         if !(p.cmb_temperature_k > T::zero()) {
-            return Err(Error::InvalidParameter(4));
+            return Err(Error::InvalidParameter(arg!(4, cmb_temperature_k)));
         }
         let y = p.helium_mass_fraction;
         let m_h = T::c(k::HYDROGEN_ATOM_MASS_U * k::ATOMIC_MASS_UNIT);
@@ -112,7 +113,7 @@ impl<T: Real> Species<T> {
             s.thomson_mpc0,
         ] {
             if !v.is_finite() || !(v.abs() > T::zero()) {
-                return Err(Error::InvalidParameter(2));
+                return Err(Error::InvalidParameter(arg!(2, omega_baryon)));
             }
         }
         Ok(s)

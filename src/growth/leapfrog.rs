@@ -18,6 +18,7 @@
 //! (drift = t_H ∫ dN/q, kick = t_H ∫ a dN/q, smooth over any range).
 
 use super::linear::{LinearGrowth, NCOEF, SUB, coefficients_of, locate_inside, piece_bounds};
+use crate::arg;
 use crate::check::{finite_result, unit_interval};
 use crate::cosmology::Universe;
 use crate::math::quadrature::{gauss_kronrod_15, integrate};
@@ -149,8 +150,8 @@ impl<T: Real> LinearGrowth<T> {
     /// t_H ∫_{a1}^{a2} (drift: da/(a q), kick: da/q), signed, through the tables where they
     /// apply.
     fn step_factor(&self, start: T, end: T, drift: bool) -> Result<T> {
-        let a1 = unit_interval(start, 0)?;
-        let a2 = unit_interval(end, 1)?;
+        let a1 = unit_interval(start, arg!(0, start_scale_factor))?;
+        let a2 = unit_interval(end, arg!(1, end_scale_factor))?;
         let (lo, hi, sign) = if a1 <= a2 {
             (a1, a2, T::one())
         } else {
@@ -162,7 +163,10 @@ impl<T: Real> LinearGrowth<T> {
         let (table, valid) = self.step_table(drift);
         if valid && lo >= T::c(A_STEP_MIN) {
             let u = self.universe();
-            return finite_result(u.hubble_time_gyr * (sign * table.integral(lo, hi)), 0);
+            return finite_result(
+                u.hubble_time_gyr * (sign * table.integral(lo, hi)),
+                arg!(0, start_scale_factor),
+            );
         }
         self.step_factor_outside(a1, a2, drift)
     }
@@ -236,8 +240,8 @@ impl<T: Real> Universe<T> {
                 T::epsilon() * T::c(8.0),
                 T::zero(),
             )
-            .map_err(|_| Error::OutOfDomain(0))?
+            .map_err(|_| Error::OutOfDomain(arg!(0, start_scale_factor)))?
         };
-        finite_result(self.hubble_time_gyr * value, 0)
+        finite_result(self.hubble_time_gyr * value, arg!(0, start_scale_factor))
     }
 }

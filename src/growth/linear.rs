@@ -20,6 +20,7 @@
 //! query integrates the equation from the start to its a (slow, same accuracy).
 
 use super::leapfrog::StepTable;
+use crate::arg;
 use crate::check::finite_result;
 use crate::cosmology::Universe;
 use crate::math::ode::StiffStepper;
@@ -247,14 +248,14 @@ impl<T: Real> LinearGrowth<T> {
         let u = &self.universe;
         let ocb = u.omega_cb;
         if !(ocb > T::zero()) {
-            return Err(Error::OutOfDomain(0));
+            return Err(Error::OutOfDomain(arg!(0, universe)));
         }
         let a0 = T::pow2i(START_EXPONENT);
         let q2 = u.q_squared(a0);
         let meszaros = u.omega_radiation_all_massless + ocb * a0;
         let limit = T::c(START_LIMIT).max(T::epsilon() * T::c(16.0));
         if !((q2 - meszaros).abs() <= limit * meszaros) {
-            return Err(Error::OutOfDomain(0));
+            return Err(Error::OutOfDomain(arg!(0, universe)));
         }
         let d0 = a0 + T::c(2.0 / 3.0) * self.a_eq;
         // D′ = a for the Mészáros mode, P = q D′
@@ -393,7 +394,7 @@ impl<T: Real> LinearGrowth<T> {
     /// (D_u, f) at a validated redshift.
     #[inline]
     fn at(&self, z: T) -> Result<(T, T)> {
-        let z = crate::check::non_negative(z, 0)?;
+        let z = crate::check::non_negative(z, arg!(0, z))?;
         let a = T::one() / (T::one() + z);
         match self.eval_fast(a) {
             (d, f, true) => Ok((d, f)),
@@ -435,7 +436,7 @@ impl<T: Real> LinearGrowth<T> {
     /// control when the integration to z fails (not seen). Accuracy: within 1e-10 relative (`f64`)
     /// of an independent scipy `solve_ivp` integration (`tests/data/growth.txt`).
     pub fn unnormalized_growth_factor(&self, z: T) -> Result<T> {
-        finite_result(self.at(z)?.0, 0)
+        finite_result(self.at(z)?.0, arg!(0, z))
     }
 
     /// Linear growth factor D(z) = D_u(a)/D_u(1), normalised to 1 today (module doc of
@@ -449,7 +450,7 @@ impl<T: Real> LinearGrowth<T> {
     /// (1977, MNRAS 179, 351) integral D ∝ E ∫ da/(aE)³ for w = −1 without radiation;
     /// D = a in the Einstein-de Sitter model (`tests/data/growth.txt`).
     pub fn growth_factor(&self, z: T) -> Result<T> {
-        finite_result(self.at(z)?.0 / self.du_today, 0)
+        finite_result(self.at(z)?.0 / self.du_today, arg!(0, z))
     }
 
     /// Linear growth rate f(z) = d ln D/d ln a (module doc of [`crate::growth`]).
@@ -461,7 +462,7 @@ impl<T: Real> LinearGrowth<T> {
     /// Accuracy: within 1e-10 relative (`f64`) of an independent scipy `solve_ivp` integration
     /// and of the Heath (1977) closed form (`tests/data/growth.txt`).
     pub fn growth_rate(&self, z: T) -> Result<T> {
-        finite_result(self.at(z)?.1, 0)
+        finite_result(self.at(z)?.1, arg!(0, z))
     }
 
     /// D_u(1), the unnormalised growth factor today.
@@ -487,7 +488,7 @@ impl<T: Real> LinearGrowth<T> {
         crate::array::blockwise(
             redshifts,
             out,
-            1,
+            arg!(1, out),
             |z| {
                 let a = T::one() / (T::one() + z);
                 let (d, _, inside) = self.eval_fast(a);
@@ -504,7 +505,7 @@ impl<T: Real> LinearGrowth<T> {
         crate::array::blockwise(
             redshifts,
             out,
-            1,
+            arg!(1, out),
             |z| {
                 let a = T::one() / (T::one() + z);
                 let (_, f, inside) = self.eval_fast(a);

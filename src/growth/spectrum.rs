@@ -11,9 +11,10 @@
 
 use super::linear::LinearGrowth;
 use super::transfer::{self, EisensteinHu};
+use crate::arg;
 use crate::check::{finite, finite_result, positive};
 use crate::math::quadrature::integrate;
-use crate::{Error, Real, Result};
+use crate::{Arg, Error, Real, Result};
 
 /// The pivot scale of the primordial spectrum, k_p = 0.05 Mpc⁻¹.
 pub const PIVOT_WAVENUMBER_PER_MPC: f64 = 0.05;
@@ -140,11 +141,11 @@ impl<T: Real> LinearPowerSpectrum<T> {
         spectral_index: T,
         running: T,
     ) -> Result<()> {
-        let a_s = positive(scalar_amplitude, 2)?;
+        let a_s = positive(scalar_amplitude, arg!(2, scalar_amplitude))?;
         self.setup(growth, form, spectral_index, running)?;
         self.set_amplitude(a_s);
-        let s = self.sigma_today(self.r8_mpc)?;
-        self.sigma8 = finite_result(s, 0)?;
+        let s = self.sigma_today(self.r8_mpc, arg!(0, growth))?;
+        self.sigma8 = finite_result(s, arg!(0, growth))?;
         Ok(())
     }
 
@@ -157,17 +158,17 @@ impl<T: Real> LinearPowerSpectrum<T> {
         spectral_index: T,
         running: T,
     ) -> Result<()> {
-        let s8 = positive(sigma8, 2)?;
+        let s8 = positive(sigma8, arg!(2, sigma8))?;
         self.setup(growth, form, spectral_index, running)?;
         self.set_amplitude(T::one());
-        let unit = self.sigma_today(self.r8_mpc)?;
+        let unit = self.sigma_today(self.r8_mpc, arg!(0, growth))?;
         if !(unit > T::zero() && unit.is_finite()) {
-            return Err(Error::OutOfDomain(0));
+            return Err(Error::OutOfDomain(arg!(0, growth)));
         }
         let ratio = s8 / unit;
-        let a_s = finite_result(ratio * ratio, 2)?;
+        let a_s = finite_result(ratio * ratio, arg!(2, sigma8))?;
         if !(a_s > T::zero()) {
-            return Err(Error::OutOfDomain(2));
+            return Err(Error::OutOfDomain(arg!(2, sigma8)));
         }
         self.set_amplitude(a_s);
         self.sigma8 = s8;
@@ -181,22 +182,22 @@ impl<T: Real> LinearPowerSpectrum<T> {
         spectral_index: T,
         running: T,
     ) -> Result<()> {
-        let ns = finite(spectral_index, 3)?;
-        let alpha = finite(running, 4)?;
+        let ns = finite(spectral_index, arg!(3, spectral_index))?;
+        let alpha = finite(running, arg!(4, running))?;
         let u = growth.universe();
         let p = u.parameters();
         let h = p.h0_km_s_mpc / T::c(100.0);
         let h2 = h * h;
         if !(p.cmb_temperature_k > T::zero()) {
-            return Err(Error::InvalidParameter(4));
+            return Err(Error::InvalidParameter(arg!(4, cmb_temperature_k)));
         }
         if form == TransferForm::BaryonOscillations && !(p.omega_baryon > T::zero()) {
-            return Err(Error::InvalidParameter(2));
+            return Err(Error::InvalidParameter(arg!(2, omega_baryon)));
         }
         let wm = p.omega_matter * h2;
         let wb = p.omega_baryon * h2;
-        let transfer =
-            EisensteinHu::new(wm, wb, p.cmb_temperature_k, 0).map_err(|_| Error::OutOfDomain(0))?;
+        let transfer = EisensteinHu::new(wm, wb, p.cmb_temperature_k, [arg!(0, growth); 3])
+            .map_err(|_| Error::OutOfDomain(arg!(0, growth)))?;
         self.growth.clone_from(growth);
         self.transfer = transfer;
         self.form = match form {
@@ -302,7 +303,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
     }
 
     /// σ(R) today, by the quadrature of the module doc.
-    fn sigma_today(&self, r: T) -> Result<T> {
+    fn sigma_today(&self, r: T, at: Arg) -> Result<T> {
         let du1 = self.growth.unnormalized_growth_factor_today();
         let du2 = du1 * du1;
         let d2 = |x: T| self.delta2_per_du2(x / r) * du2;
@@ -344,7 +345,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
             T::zero(),
         )?;
         if !(part_a > T::zero()) {
-            return Err(Error::OutOfDomain(0));
+            return Err(Error::OutOfDomain(at));
         }
         let abs_tol = part_a * T::c(1e-11);
         // (B) x from there to 100 in chunks of 4π (the period of W² is π), or of 8 periods 2πR/s
@@ -403,7 +404,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
             - hp * s2 / T::c(4.0);
         let total = part_a + part_b + smooth + osc;
         if !(total > T::zero()) || !total.is_finite() {
-            return Err(Error::OutOfDomain(0));
+            return Err(Error::OutOfDomain(at));
         }
         Ok(total.sqrt())
     }
@@ -428,8 +429,8 @@ impl<T: Real> LinearPowerSpectrum<T> {
     ///
     /// Errors: `NonFinite(0)`, `NonPositive(0)`.
     pub fn transfer_function(&self, wavenumber_per_mpc: T) -> Result<T> {
-        let k = positive(wavenumber_per_mpc, 0)?;
-        finite_result(self.transfer_at(k), 0)
+        let k = positive(wavenumber_per_mpc, arg!(0, wavenumber_per_mpc))?;
+        finite_result(self.transfer_at(k), arg!(0, wavenumber_per_mpc))
     }
 
     /// [`transfer_function`](Self::transfer_function) over many wavenumbers:
@@ -458,7 +459,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
             crate::array::blockwise(
                 x,
                 out,
-                1,
+                arg!(1, out),
                 #[inline(always)]
                 |k| check(k, self.transfer_form::<true>(k)),
                 scalar,
@@ -467,7 +468,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
             crate::array::blockwise(
                 x,
                 out,
-                1,
+                arg!(1, out),
                 #[inline(always)]
                 |k| check(k, self.transfer_form::<false>(k)),
                 scalar,
@@ -485,17 +486,20 @@ impl<T: Real> LinearPowerSpectrum<T> {
     /// representable (k beyond about 1e70 Mpc⁻¹). Accuracy: that of T(k) (1e-13 of the
     /// formula), doubled, plus that of D_u (1e-10), doubled.
     pub fn linear_power_spectrum_mpc3(&self, wavenumber_per_mpc: T, z: T) -> Result<T> {
-        let k = positive(wavenumber_per_mpc, 0)?;
-        let z = crate::check::non_negative(z, 1)?;
+        let k = positive(wavenumber_per_mpc, arg!(0, wavenumber_per_mpc))?;
+        let z = crate::check::non_negative(z, arg!(1, z))?;
         let du = self
             .growth
             .unnormalized_growth_factor(z)
             .map_err(|e| match e {
-                Error::NonFinite(_) => Error::NonFinite(1),
-                Error::Negative(_) => Error::Negative(1),
+                Error::NonFinite(_) => Error::NonFinite(arg!(1, z)),
+                Error::Negative(_) => Error::Negative(arg!(1, z)),
                 other => other,
             })?;
-        finite_result(self.power_with::<false>(k, du).0, 0)
+        finite_result(
+            self.power_with::<false>(k, du).0,
+            arg!(0, wavenumber_per_mpc),
+        )
     }
 
     /// [`linear_power_spectrum_mpc3`](Self::linear_power_spectrum_mpc3) at one redshift over
@@ -519,7 +523,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
         z: T,
         out: &mut [T],
     ) -> crate::ArrayResult {
-        let du = match crate::check::non_negative(z, 1)
+        let du = match crate::check::non_negative(z, arg!(1, z))
             .and_then(|z| self.growth.unnormalized_growth_factor(z))
         {
             Ok(du) => du,
@@ -532,7 +536,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
             crate::array::blockwise(
                 x,
                 out,
-                2,
+                arg!(2, out),
                 #[inline(always)]
                 |k| {
                     let t = self.transfer_form::<true>(k);
@@ -545,7 +549,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
             crate::array::blockwise(
                 x,
                 out,
-                2,
+                arg!(2, out),
                 #[inline(always)]
                 |k| {
                     let t = self.transfer_form::<false>(k);
@@ -570,17 +574,19 @@ impl<T: Real> LinearPowerSpectrum<T> {
     /// (`tests/data/growth.txt`). Cost: about a thousand evaluations of P (a fraction of a
     /// millisecond); [`sigma8`](Self::sigma8) is stored.
     pub fn density_rms_in_sphere(&self, radius_mpc: T, z: T) -> Result<T> {
-        let r = positive(radius_mpc, 0)?;
-        let z = crate::check::non_negative(z, 1)?;
+        let r = positive(radius_mpc, arg!(0, radius_mpc))?;
+        let z = crate::check::non_negative(z, arg!(1, z))?;
         let d = self
             .growth
             .growth_factor(z)
-            .map_err(|_| Error::OutOfDomain(1))?;
-        let s = self.sigma_today(r).map_err(|e| match e {
-            Error::NoConvergence => Error::NoConvergence,
-            _ => Error::OutOfDomain(0),
-        })?;
-        finite_result(s * d, 0)
+            .map_err(|_| Error::OutOfDomain(arg!(1, z)))?;
+        let s = self
+            .sigma_today(r, arg!(0, radius_mpc))
+            .map_err(|e| match e {
+                Error::NoConvergence => Error::NoConvergence,
+                _ => Error::OutOfDomain(arg!(0, radius_mpc)),
+            })?;
+        finite_result(s * d, arg!(0, radius_mpc))
     }
 
     /// σ8 = σ(8 h⁻¹ Mpc, z = 0): the given one, or the one computed from A_s at construction
@@ -602,7 +608,7 @@ impl<T: Real> LinearPowerSpectrum<T> {
     pub fn growth_rate_times_sigma8(&self, z: T) -> Result<T> {
         let d = self.growth.growth_factor(z)?;
         let f = self.growth.growth_rate(z)?;
-        finite_result(f * d * self.sigma8, 0)
+        finite_result(f * d * self.sigma8, arg!(0, z))
     }
 }
 

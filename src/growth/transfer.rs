@@ -4,9 +4,10 @@
 //! from memory; the formulae are checked against an mpmath evaluation written from the paper
 //! (`tests/reference/growth_vectors.py`).
 
+use crate::arg;
 use crate::check::{finite, finite_result, non_negative, positive};
 use crate::math::{exp, log, trig};
-use crate::{Error, Real, Result};
+use crate::{Arg, Error, Real, Result};
 
 /// x^p for x > 0.
 #[inline]
@@ -48,15 +49,16 @@ pub(crate) struct EisensteinHu<T> {
 }
 
 impl<T: Real> EisensteinHu<T> {
-    /// Coefficients from ω_m = Ω_m h², ω_b = Ω_b h² and T0 (argument positions `first`,
-    /// `first` + 1, `first` + 2 in the errors). ω_b may be 0 (only the no-wiggle form is then
+    /// Coefficients from ω_m = Ω_m h², ω_b = Ω_b h² and T0 (`args`: the arguments the errors
+    /// name for each of the three). ω_b may be 0 (only the no-wiggle form is then
     /// available).
-    pub(crate) fn new(omega_m: T, omega_b: T, t0: T, first: u8) -> Result<Self> {
-        let wm = positive(omega_m, first)?;
-        let wb = non_negative(omega_b, first + 1)?;
-        let t0 = positive(t0, first + 2)?;
+    pub(crate) fn new(omega_m: T, omega_b: T, t0: T, args: [Arg; 3]) -> Result<Self> {
+        let [arg_m, arg_b, arg_t0] = args;
+        let wm = positive(omega_m, arg_m)?;
+        let wb = non_negative(omega_b, arg_b)?;
+        let t0 = positive(t0, arg_t0)?;
         if wb > wm {
-            return Err(Error::OutOfDomain(first + 1));
+            return Err(Error::OutOfDomain(arg_b));
         }
         let c = |x: f64| T::c(x);
         let theta = t0 / c(2.7);
@@ -142,7 +144,7 @@ impl<T: Real> EisensteinHu<T> {
             e.c_alpha,
         ] {
             if !v.is_finite() {
-                return Err(Error::OutOfDomain(first));
+                return Err(Error::OutOfDomain(arg_m));
             }
         }
         Ok(e)
@@ -327,10 +329,19 @@ pub fn eisenstein_hu_transfer_function<T: Real>(
     omega_baryon_h2: T,
     cmb_temperature_k: T,
 ) -> Result<T> {
-    let k = positive(wavenumber_per_mpc, 0)?;
-    let wb = positive(omega_baryon_h2, 2)?;
-    let e = EisensteinHu::new(omega_matter_h2, wb, cmb_temperature_k, 1)?;
-    finite_result(e.transfer(k), 0)
+    let k = positive(wavenumber_per_mpc, arg!(0, wavenumber_per_mpc))?;
+    let wb = positive(omega_baryon_h2, arg!(2, omega_baryon_h2))?;
+    let e = EisensteinHu::new(
+        omega_matter_h2,
+        wb,
+        cmb_temperature_k,
+        [
+            arg!(1, omega_matter_h2),
+            arg!(2, omega_baryon_h2),
+            arg!(3, cmb_temperature_k),
+        ],
+    )?;
+    finite_result(e.transfer(k), arg!(0, wavenumber_per_mpc))
 }
 
 /// The transfer function without baryon acoustic oscillations of Eisenstein & Hu 1998 (ApJ
@@ -355,8 +366,17 @@ pub fn eisenstein_hu_no_wiggle_transfer_function<T: Real>(
     omega_baryon_h2: T,
     cmb_temperature_k: T,
 ) -> Result<T> {
-    let k = positive(wavenumber_per_mpc, 0)?;
-    let _ = finite(omega_baryon_h2, 2)?;
-    let e = EisensteinHu::new(omega_matter_h2, omega_baryon_h2, cmb_temperature_k, 1)?;
-    finite_result(e.no_wiggle(k), 0)
+    let k = positive(wavenumber_per_mpc, arg!(0, wavenumber_per_mpc))?;
+    let _ = finite(omega_baryon_h2, arg!(2, omega_baryon_h2))?;
+    let e = EisensteinHu::new(
+        omega_matter_h2,
+        omega_baryon_h2,
+        cmb_temperature_k,
+        [
+            arg!(1, omega_matter_h2),
+            arg!(2, omega_baryon_h2),
+            arg!(3, cmb_temperature_k),
+        ],
+    )?;
+    finite_result(e.no_wiggle(k), arg!(0, wavenumber_per_mpc))
 }

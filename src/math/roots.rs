@@ -9,7 +9,7 @@
 //! with f(x; p) = 0, ∂x*/∂p = −(∂f/∂p)/(∂f/∂x), from one more evaluation of f at x*. The
 //! iteration history is never differentiated.
 
-use crate::{Error, Real, Result};
+use crate::{Arg, Error, Real, Result};
 
 /// Finds x in [lo, hi] with f(x) = 0, where `f` returns (f(x), f'(x)).
 ///
@@ -50,7 +50,7 @@ pub fn solve_monotone_positive<T: Real, F>(
     mut f: F,
     guess: T,
     increasing: bool,
-    domain_arg: u8,
+    domain_arg: Arg,
 ) -> Result<T>
 where
     F: FnMut(T) -> (T, T),

@@ -318,6 +318,18 @@ def test_invalid_parameters_raise_naming_the_parameter_and_value(change, name, s
     assert str(err).startswith(f"Universe: {name} = {shown}: "), str(err)
 
 
+@pytest.mark.parametrize("w0, wa", [(5.0, 0.0), (2.0, 3.0)])
+def test_dark_energy_that_overflows_names_w0_and_says_why(w0, wa):
+    # the core's documented refusal (src/cosmology/universe.rs, Universe::new): the dark-energy
+    # density overflows on the way back to a = 1e-30 for w0, or the early-time w0 + wa, above
+    # about 3.8 to 4.8; (1e-30)^(-3(1 + 5)) = 1e540 overflows a double (common practice)
+    with pytest.raises(RelicoreError) as info:
+        Universe(70.0, 0.3, w0=w0, wa=wa)
+    err = info.value
+    assert err.argument == "w0" and err.status == -14
+    assert "dark-energy density overflows" in str(err) and "must be finite" not in str(err), str(err)
+
+
 @pytest.mark.parametrize("masses", [(0.1,), (0.1, 0.0), (0.0, 0.0, 0.0, 0.0), 0.06, ()])
 def test_neutrino_masses_must_be_three(masses):
     with pytest.raises(RelicoreError) as info:

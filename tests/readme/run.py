@@ -1,10 +1,13 @@
 #!/usr/bin/env python3
-"""README snippet test of relicore: the Python and Rust code blocks of README.md, run as written.
+"""README snippet test of relicore: the Python, Rust, C and Fortran code blocks of README.md, run
+as written.
 
-Every fenced ```python and ```rust block of README.md must follow a marker line
-`<!-- readme-test: NAME -->` (NAME ends in .py or .rs; the sibling of tests/install/run.sh's
-`<!-- install-test: NAME -->`, read the same way: the marker, then the fenced block on the next
-line). A block without a marker fails the test, so a new snippet cannot go untested. The blocks
+Every fenced ```python, ```rust, ```c and ```fortran block of README.md must follow a marker line
+`<!-- readme-test: NAME -->` (NAME ends in .py, .rs, .c or .f90; the sibling of
+tests/install/run.sh's `<!-- install-test: NAME -->`, read the same way: the marker, then the
+fenced block on the next line), or an install-test marker (those C and Fortran programs are built
+and run by the install test). A block without a marker fails the test, so a new snippet cannot go
+untested. The blocks
 are read from README.md (never copied here), so the test fails when the README drifts from the
 library:
 
@@ -18,6 +21,15 @@ library:
     repository's core by path (edition 2024, offline, the workspace's Cargo.lock as the
     starting lock), one binary per block, compiled with warnings about unused names allowed
     and run; its INPUTS come before and its CHECKS after the block.
+  * C: each block becomes the body of `int main(void)` (as the README says the C lines run)
+    after `#include <relicore.h>` (and stdio, stdint, math), its INPUTS before and its CHECKS
+    after it, compiled with gcc -std=c11 -Wall -Wextra -Wpedantic -Werror against include/ and
+    linked with the release-c librelicore.a (built here by cargo), and run.
+  * Fortran: a block that is a whole program (it has `end program`) is compiled as it is, with
+    its CHECKS inserted before its `end program` line; any other block becomes the body of a
+    program (its INPUTS after its first INPUTS_AFTER_LINES lines, the `use` and declarations,
+    and its CHECKS after it). Compiled with gfortran against the module built from
+    bindings/fortran/relicore.f90 and the same librelicore.a, and run.
 
 The CHECKS are facts independent of relicore (Planck's law from the exact SI constants, round
 trips that must return the input) or numbers the README's text states beside the block (so the
@@ -44,6 +56,9 @@ from pathlib import Path
 ROOT = Path(__file__).resolve().parents[2]
 README = ROOT / "README.md"
 MARKER = re.compile(r"^<!-- readme-test: (\S+) -->$")
+INSTALL_MARKER = re.compile(r"^<!-- install-test: (\S+) -->$")
+# the suffix a marker's name has for each language of block
+SUFFIX = {"python": ".py", "rust": ".rs", "c": ".c", "fortran": ".f90"}
 FENCE = re.compile(r"^```(\w*)\s*$")
 
 # exact SI values (SI Brochure, 9th edition, BIPM 2019), for Planck's law in the checks
@@ -72,9 +87,36 @@ let mut t_obj = [0.0_f64; 3];
 let mut u_c = [0.0_f64; 3];
 """,
 }
+INPUTS |= {
+    "thermometry.c": """
+enum { n = 3 };
+double signals[n], eps[n], u_eps[n], t_obj[n], u_c[n];
+for (int i = 0; i < n; i++) {
+    relicore_measured_spectral_radiance_wavelength(10e-6, 318.0, 0.95, 303.0, 0.85, 296.0, &signals[i]);
+    eps[i] = 0.95;
+    u_eps[i] = 0.01;
+}
+""",
+    "decoupling.c": """
+static struct relicore_universe u;
+struct relicore_universe_parameters up;
+relicore_universe_parameters_default(67.36, 0.3153, &up);
+up.omega_baryon = 0.0493;
+if (relicore_universe_init(&up, &u) != RELICORE_OK) return 1;
+""",
+    # declarations after the block's own (`use relicore` and two declarations), then the values
+    "thermometry.f90": """
+real(c_double) :: signals(3), eps(3), u_eps(3), t_obj(3), u_c(3)
+signals = relicore_measured_spectral_radiance_wavelength(10e-6_c_double, 318.0_c_double, &
+    0.95_c_double, 303.0_c_double, 0.85_c_double, 296.0_c_double)
+eps = 0.95_c_double
+u_eps = 0.01_c_double
+""",
+}
 # The inputs go before the block, or after its first N lines where they need a name the block
-# binds (the thermometry block imports relicore.blackbody as bb in its first line).
-INPUTS_AFTER_LINES = {"thermometry.py": 1}
+# binds (the thermometry block imports relicore.blackbody as bb in its first line; the Fortran
+# block's first three lines are its `use` and declarations).
+INPUTS_AFTER_LINES = {"thermometry.py": 1, "thermometry.f90": 3}
 
 # Checks run after a block, in its namespace (Python) or its function (Rust).
 CHECKS = {
@@ -128,6 +170,49 @@ assert!(a_s > 0.0 && pk > 0.0 && kick > 0.0, "A_s = {a_s}, P = {pk}, kick = {kic
 }
 
 
+CHECKS |= {
+    "thermometry.c": """
+if (s != RELICORE_OK) { printf("status %d\\n", (int)s); return 1; }
+if (fabs(r.temperature_k - 318.0) > 1e-9) { printf("T_obj = %.17g\\n", r.temperature_k); return 1; }
+if (round(r.combined_standard_uncertainty_k * 1000.0) != 337.0) {   /* README: 0.337 K */
+    printf("u_c = %.17g\\n", r.combined_standard_uncertainty_k); return 1;
+}
+for (int i = 0; i < n; i++)
+    if (fabs(t_obj[i] - 318.0) > 1e-9 || u_c[i] != r.combined_standard_uncertainty_k) {
+        printf("pixel %d: %.17g %.17g\\n", i, t_obj[i], u_c[i]); return 1;
+    }
+""",
+    "universe.c": """
+/* D_L = (1+z) D_M (an identity of the definitions, common practice) at z = 1 */
+double dm = 0.0;
+if (relicore_transverse_comoving_distance_mpc(&u, 1.0, &dm) != RELICORE_OK) return 1;
+if (!(d > 0.0) || fabs(d - 2.0 * dm) > 1e-12 * d) { printf("D_L = %.17g, 2 D_M = %.17g\\n", d, 2.0 * dm); return 1; }
+""",
+    "decoupling.c": """
+if (!(zs > 1000.0 && zs < 1200.0) || !(xe > 0.0 && xe < 1.2)) { printf("z* = %g, x_e = %g\\n", zs, xe); return 1; }
+""",
+    "growth.c": """
+/* sigma8 is the normalisation asked for; D and f in their ranges (D(z = 99) ~ 1/100) */
+if (fabs(s8 - 0.81) > 1e-12 || !(d > 0.0 && d < 0.02) || !(f > 0.9 && f <= 1.0) || !(p > 0.0) || !(drift > 0.0)) {
+    printf("s8 = %.17g, D = %g, f = %g, P = %g, drift = %g\\n", s8, d, f, p, drift); return 1;
+}
+""",
+    "thermometry.f90": """
+if (abs(r%temperature_k - 318.0_c_double) > 1e-9_c_double) error stop 'T_obj'
+if (nint(r%combined_standard_uncertainty_k * 1000) /= 337) error stop 'u_c (README: 0.337 K)'
+if (any(abs(t_obj - 318.0_c_double) > 1e-9_c_double)) error stop 't_obj'
+if (any(u_c /= r%combined_standard_uncertainty_k)) error stop 'u_c of the pixels'
+""",
+    # sigma8 of A_s = 2.1e-9, n_s = 0.965 in a Planck-like model: about 0.81 (from memory);
+    # D(z = 0) = 1 by the normalisation the README states for the growth factor
+    "growth.f90": """
+if (relicore_sigma8(ps) < 0.7d0 .or. relicore_sigma8(ps) > 0.9d0) error stop 'sigma8'
+if (abs(relicore_growth_factor(g, 0.0d0) - 1.0d0) > 1d-12) error stop 'D(0)'
+if (.not. relicore_leapfrog_kick_factor_gyr(g, 0.01d0, 0.011d0) > 0.0d0) error stop 'kick'
+""",
+}
+
+
 def readme_blocks(text: str) -> tuple[dict[str, tuple[str, str, int]], list[str]]:
     """The marked blocks {name: (language, code, line)} and the problems found."""
     lines = text.splitlines()
@@ -135,11 +220,16 @@ def readme_blocks(text: str) -> tuple[dict[str, tuple[str, str, int]], list[str]
     problems: list[str] = []
     i = 0
     pending = None  # (name, line) of a marker waiting for its block
+    installed = None  # line of an install-test marker waiting for its block
     while i < len(lines):
         line = lines[i]
         m = MARKER.match(line)
         if m:
             pending = (m.group(1), i + 1)
+            i += 1
+            continue
+        if INSTALL_MARKER.match(line):
+            installed = i + 1
             i += 1
             continue
         f = FENCE.match(line)
@@ -149,13 +239,15 @@ def readme_blocks(text: str) -> tuple[dict[str, tuple[str, str, int]], list[str]
             while j < len(lines) and not lines[j].startswith("```"):
                 j += 1
             code = "\n".join(lines[i + 1 : j]) + "\n"
-            if lang in ("python", "rust"):
+            if lang in ("c", "fortran") and installed == i and (pending is None or pending[1] != i):
+                pass  # built and run by the install test
+            elif lang in SUFFIX:
                 if pending is None or pending[1] != i:
                     problems.append(f"README.md:{i + 1}: a ```{lang} block without a "
                                     "<!-- readme-test: NAME --> line right above it")
                 else:
                     name = pending[0]
-                    want = ".py" if lang == "python" else ".rs"
+                    want = SUFFIX[lang]
                     if not name.endswith(want):
                         problems.append(f"README.md:{i + 1}: marker {name} on a ```{lang} block (want *{want})")
                     elif name in blocks:
@@ -165,6 +257,7 @@ def readme_blocks(text: str) -> tuple[dict[str, tuple[str, str, int]], list[str]
             elif pending is not None and pending[1] == i:
                 problems.append(f"README.md:{i + 1}: readme-test marker {pending[0]} on a ```{lang} block")
             pending = None
+            installed = None
             i = j + 1
             continue
         i += 1
@@ -238,6 +331,81 @@ def run_rust(blocks: dict[str, tuple[str, str, int]], work: Path) -> dict[str, b
     return results
 
 
+def c_library(work: Path) -> Path | None:
+    """librelicore.a of the release-c profile (cargo build, offline), or None (printed why)."""
+    target = Path(os.environ.get("CARGO_TARGET_DIR") or ROOT / "target")
+    build = subprocess.run(["cargo", "build", "--offline", "--quiet", "-p", "relicore-capi", "--profile", "release-c"],
+                           cwd=ROOT, capture_output=True, text=True)
+    if build.returncode != 0:
+        print("the C library does not build:\n" + build.stdout[-3000:] + build.stderr[-3000:])
+        return None
+    return target / "release-c" / "librelicore.a"
+
+
+def c_source(name: str, code: str) -> str:
+    body = INPUTS.get(name, "") + code + CHECKS.get(name, "")
+    indented = "".join("    " + line if line.strip() else line for line in body.splitlines(keepends=True))
+    return ("/* README.md block " + name + ", as the body of main, with the test's inputs before it\n"
+            "   and checks after it */\n#include <math.h>\n#include <stdint.h>\n#include <stdio.h>\n"
+            "#include <relicore.h>\n\nint main(void) {\n" + indented + '    printf("ok\\n");\n    return 0;\n}\n')
+
+
+def fortran_source(name: str, code: str) -> str:
+    lines = code.splitlines(keepends=True)
+    checks = CHECKS.get(name, "") + "print '(a)', 'ok'\n"
+    end = [k for k, line in enumerate(lines) if re.match(r"\s*end\s+program\b", line, re.I)]
+    if end:  # a whole program: the checks go before its end
+        k = end[-1]
+        return "".join(lines[:k]) + "! --- the test's checks\n" + checks + "".join(lines[k:])
+    n = INPUTS_AFTER_LINES.get(name, 0)
+    return ("program readme_snippet\n" + "".join(lines[:n]) + "! --- the test's inputs\n" + INPUTS.get(name, "")
+            + "! --- README.md block, continued\n" + "".join(lines[n:]) + "! --- the test's checks\n" + checks
+            + "end program readme_snippet\n")
+
+
+def run_native(blocks: dict[str, tuple[str, str, int]], work: Path) -> dict[str, bool]:
+    """Compiles every C and Fortran block against librelicore.a and runs it; {name: passed}."""
+    lib = c_library(work)
+    results: dict[str, bool] = {}
+    module = work / "fortran-module"
+    module.mkdir()
+    module_ok = False
+    if lib is not None and any(b[0] == "fortran" for b in blocks.values()):
+        r = subprocess.run(["gfortran", "-c", str(ROOT / "bindings/fortran/relicore.f90"), "-J", str(module),
+                            "-o", str(module / "relicore.o")], capture_output=True, text=True)
+        module_ok = r.returncode == 0
+        if not module_ok:
+            print("bindings/fortran/relicore.f90 does not compile:\n" + r.stderr[-3000:])
+    for name, (lang, code, _) in blocks.items():
+        stem = re.sub(r"[^A-Za-z0-9_]", "_", name)
+        exe = work / stem
+        if lib is None or (lang == "fortran" and not module_ok):
+            results[name] = False
+            continue
+        if lang == "c":
+            path = work / name
+            path.write_text(c_source(name, code))
+            cmd = ["gcc", "-std=c11", "-Wall", "-Wextra", "-Wpedantic", "-Werror", "-I", str(ROOT / "include"),
+                   str(path), str(lib), "-lm", "-o", str(exe)]
+        else:
+            path = work / name
+            path.write_text(fortran_source(name, code))
+            cmd = ["gfortran", "-I", str(module), str(path), str(module / "relicore.o"), str(lib), "-lm", "-o", str(exe)]
+        build = subprocess.run(cmd, cwd=work, capture_output=True, text=True)
+        if build.returncode != 0:
+            print(f"{name}: does not compile:\n" + build.stdout[-6000:] + build.stderr[-6000:])
+            print(f"(the program is {path})")
+            results[name] = False
+            continue
+        r = subprocess.run([str(exe)], cwd=work, capture_output=True, text=True, timeout=600)
+        ok = r.returncode == 0 and r.stdout.strip().splitlines()[-1:] == ["ok"]
+        if not ok:
+            print(f"{name}: " + r.stdout[-3000:] + r.stderr[-3000:])
+            print(f"(the program is {path})")
+        results[name] = ok
+    return results
+
+
 def main(argv: list[str]) -> int:
     ap = argparse.ArgumentParser(description=__doc__.splitlines()[0])
     ap.add_argument("--python", default=str(ROOT / ".venv" / "bin" / "python"))
@@ -248,15 +416,15 @@ def main(argv: list[str]) -> int:
         args.python = os.path.abspath(args.python)
     blocks, problems = readme_blocks(README.read_text())
     passed = failed = 0
-    print(f"=== README.md: {len(blocks)} marked Python and Rust blocks")
+    print(f"=== README.md: {len(blocks)} marked Python, Rust, C and Fortran blocks")
     for p in problems:
         print(p)
     if problems:
         failed += 1
-        print("--- FAILED: every ```python and ```rust block of README.md is marked")
+        print("--- FAILED: every ```python, ```rust, ```c and ```fortran block of README.md is marked")
     else:
         passed += 1
-        print("--- ok: every ```python and ```rust block of README.md is marked")
+        print("--- ok: every ```python, ```rust, ```c and ```fortran block of README.md is marked")
     chosen = {n: b for n, b in blocks.items() if not args.names or n in args.names}
     keep = False
     with tempfile.TemporaryDirectory(prefix="relicore-readme-test.") as tmp:
@@ -283,6 +451,16 @@ def main(argv: list[str]) -> int:
                 failed += not ok
                 keep = keep or not ok
             print(f"    ({time.monotonic() - start:.1f} s for the Rust blocks)")
+        native = {n: b for n, b in chosen.items() if b[0] in ("c", "fortran")}
+        if native:
+            start = time.monotonic()
+            print(f"=== README.md: {', '.join(native)} (C and Fortran, against librelicore.a of release-c)")
+            for name, ok in run_native(native, work).items():
+                print(f"--- {'ok' if ok else 'FAILED'}: {name} (line {native[name][2]})")
+                passed += ok
+                failed += not ok
+                keep = keep or not ok
+            print(f"    ({time.monotonic() - start:.1f} s for the C and Fortran blocks)")
         if keep:
             kept = Path(tempfile.mkdtemp(prefix="relicore-readme-test-failed."))
             shutil.copytree(work, kept, dirs_exist_ok=True, ignore=shutil.ignore_patterns("target"))

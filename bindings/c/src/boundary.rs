@@ -357,7 +357,7 @@ mod tests {
         );
         assert_eq!(filled.get(), 0);
         let code = boundary(
-            || Err(Error::NonPositive(1).into()),
+            || Err(Error::NonPositive(relicore::arg!(1, x)).into()),
             || filled.set(filled.get() + 1),
         );
         assert_eq!(code, RELICORE_ERROR_NON_POSITIVE);
@@ -411,9 +411,9 @@ mod tests {
         let mut out = [0.0_f64; 5];
         let f = |v: f64| {
             if v.is_nan() {
-                Err(Error::NonFinite(0))
+                Err(Error::NonFinite(relicore::arg!(0, x)))
             } else if v < 0.0 {
-                Err(Error::NonPositive(0))
+                Err(Error::NonPositive(relicore::arg!(0, x)))
             } else {
                 Ok(v * 2.0)
             }

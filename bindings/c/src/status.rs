@@ -201,23 +201,50 @@ mod tests {
     #[test]
     fn every_core_error_maps_to_its_code() {
         let cases = [
-            (Error::NonFinite(1), RELICORE_ERROR_NON_FINITE),
-            (Error::NonPositive(0), RELICORE_ERROR_NON_POSITIVE),
-            (Error::Negative(1), RELICORE_ERROR_NEGATIVE),
-            (Error::EmptyInterval(0), RELICORE_ERROR_EMPTY_INTERVAL),
-            (Error::ArrayTooShort(0), RELICORE_ERROR_ARRAY_TOO_SHORT),
-            (Error::LengthMismatch(1), RELICORE_ERROR_LENGTH_MISMATCH),
-            (Error::NotIncreasing(0), RELICORE_ERROR_NOT_INCREASING),
             (
-                Error::DegenerateCalibration(2),
+                Error::NonFinite(relicore::arg!(1, x)),
+                RELICORE_ERROR_NON_FINITE,
+            ),
+            (
+                Error::NonPositive(relicore::arg!(0, x)),
+                RELICORE_ERROR_NON_POSITIVE,
+            ),
+            (
+                Error::Negative(relicore::arg!(1, x)),
+                RELICORE_ERROR_NEGATIVE,
+            ),
+            (
+                Error::EmptyInterval(relicore::arg!(0, x)),
+                RELICORE_ERROR_EMPTY_INTERVAL,
+            ),
+            (
+                Error::ArrayTooShort(relicore::arg!(0, x)),
+                RELICORE_ERROR_ARRAY_TOO_SHORT,
+            ),
+            (
+                Error::LengthMismatch(relicore::arg!(1, x)),
+                RELICORE_ERROR_LENGTH_MISMATCH,
+            ),
+            (
+                Error::NotIncreasing(relicore::arg!(0, x)),
+                RELICORE_ERROR_NOT_INCREASING,
+            ),
+            (
+                Error::DegenerateCalibration(relicore::arg!(2, x)),
                 RELICORE_ERROR_DEGENERATE_CALIBRATION,
             ),
-            (Error::OutOfDomain(2), RELICORE_ERROR_OUT_OF_DOMAIN),
+            (
+                Error::OutOfDomain(relicore::arg!(2, x)),
+                RELICORE_ERROR_OUT_OF_DOMAIN,
+            ),
             (Error::NoConvergence, RELICORE_ERROR_NO_CONVERGENCE),
-            (Error::InvalidParameter(3), RELICORE_ERROR_INVALID_PARAMETER),
+            (
+                Error::InvalidParameter(relicore::arg!(3, x)),
+                RELICORE_ERROR_INVALID_PARAMETER,
+            ),
             (Error::NoBigBang, RELICORE_ERROR_NO_BIG_BANG),
             (
-                Error::CapacityTooSmall(2),
+                Error::CapacityTooSmall(relicore::arg!(2, x)),
                 RELICORE_ERROR_CAPACITY_TOO_SMALL,
             ),
         ];
@@ -225,19 +252,19 @@ mod tests {
             assert_eq!(status_of(e), c, "{e:?}");
         }
         assert_eq!(
-            status_of_struct_call(Error::NonFinite(0)),
+            status_of_struct_call(Error::NonFinite(relicore::arg!(0, x))),
             RELICORE_ERROR_INVALID_STRUCT
         );
         assert_eq!(
-            status_of_struct_call(Error::DegenerateCalibration(0)),
+            status_of_struct_call(Error::DegenerateCalibration(relicore::arg!(0, x))),
             RELICORE_ERROR_INVALID_STRUCT
         );
         assert_eq!(
-            status_of_struct_call(Error::NonFinite(1)),
+            status_of_struct_call(Error::NonFinite(relicore::arg!(1, x))),
             RELICORE_ERROR_NON_FINITE
         );
         assert_eq!(
-            status_of_struct_call(Error::OutOfDomain(1)),
+            status_of_struct_call(Error::OutOfDomain(relicore::arg!(1, x))),
             RELICORE_ERROR_OUT_OF_DOMAIN
         );
     }

@@ -174,8 +174,13 @@ pub unsafe extern "C" fn relicore_universe_parameters_default(
 /// `RELICORE_ERROR_NULL_POINTER` when `params` or `out` is NULL;
 /// `RELICORE_ERROR_INVALID_PARAMETER` for a non-finite parameter, H0 ≤ 0, Ω_m < 0, Ω_b < 0 or
 /// Ω_b > Ω_m, T0 < 0, N_eff < 0, a negative neutrino mass, a positive mass with T0 = 0,
-/// massive neutrinos denser today than Ω_m, Y_p outside [0, 1) (which parameter:
-/// `relicore_universe_check_parameters`); `RELICORE_ERROR_NO_BIG_BANG` when E(z)² ≤ 0
+/// massive neutrinos denser today than Ω_m, Y_p outside [0, 1), and for values that make a
+/// derived quantity or E(z) overflow: H0 so far from physical values that c/H0, 1/H0 or the
+/// critical density is not a positive finite number, T0 or N_eff so large that the radiation
+/// density overflows, w0 (with wa) when the dark-energy density overflows somewhere on the grid
+/// below (w0, or the early-time w0 + wa, above about 3.8 to 4.8 in double precision), Ω_m when
+/// E(z)² overflows otherwise (which parameter: `relicore_universe_check_parameters`);
+/// `RELICORE_ERROR_NO_BIG_BANG` when E(z)² ≤ 0
 /// somewhere between today and a → 0 (checked on 4097 points of a logarithmic grid in a from
 /// 1e-30 to 1 and on every node of the distance table); `RELICORE_ERROR_NO_CONVERGENCE` if a
 /// quadrature of the table fails (seen only for parameters far outside physical ones, such as
@@ -249,7 +254,7 @@ pub unsafe extern "C" fn relicore_universe_check_parameters(
                 Ok(_) => (-1, Ok(())),
                 Err(e) => {
                     let which = match e {
-                        Error::InvalidParameter(i) => i32::from(i),
+                        Error::InvalidParameter(i) => i32::from(i.position()),
                         _ => -1,
                     };
                     (which, Err(Failure::Reported(status_of(e))))

@@ -17,7 +17,8 @@ use crate::decoupling::universe_refused;
 use crate::errors::{build, py_repr, shape_error};
 use crate::functions::{Receiver, U};
 
-/// Names of the parameters in the order of the core's `Error::InvalidParameter(i)`.
+/// Names of the parameters in the order of the positions of the core's
+/// `Error::InvalidParameter`.
 pub(crate) const PARAMETER_NAMES: [&str; 10] = [
     "h0_km_s_mpc",
     "omega_matter",
@@ -70,7 +71,13 @@ fn parameter_rule(p: &UniverseParameters<f64>, i: u8) -> String {
                 "must be positive".into()
             }
         }),
-        1 => finite(p.omega_matter).unwrap_or_else(|| "must not be negative".into()),
+        1 => finite(p.omega_matter).unwrap_or_else(|| {
+            if p.omega_matter < 0.0 {
+                "must not be negative".into()
+            } else {
+                "so large that E(z)^2 overflows on the way back".into()
+            }
+        }),
         2 => finite(p.omega_baryon).unwrap_or_else(|| {
             if p.omega_baryon < 0.0 {
                 "must not be negative".into()
@@ -108,6 +115,12 @@ fn parameter_rule(p: &UniverseParameters<f64>, i: u8) -> String {
                 )
             }
         }
+        // the core names w0 (with wa) when the dark-energy density overflows on the way back
+        7 | 8 => finite(if i == 7 { p.w0 } else { p.wa }).unwrap_or_else(|| {
+            "with wa, an equation of state so far from physical ones that the dark-energy \
+             density overflows on the way back (w0 + wa is the early-time w)"
+                .into()
+        }),
         9 => finite(p.helium_mass_fraction)
             .unwrap_or_else(|| "must be at least 0 and below 1".into()),
         _ => "must be finite".into(),
@@ -137,7 +150,8 @@ fn parameter_repr(p: &UniverseParameters<f64>, i: usize) -> String {
 fn construction_error(py: Python<'_>, p: &UniverseParameters<f64>, err: Error) -> PyErr {
     let status = crate::errors::status_code(err);
     match err {
-        Error::InvalidParameter(i) => {
+        Error::InvalidParameter(a) => {
+            let i = a.position();
             let name = PARAMETER_NAMES
                 .get(usize::from(i))
                 .copied()
@@ -390,7 +404,7 @@ impl Receiver for PyUniverse {
                 "undefined for a universe without radiation (cmb_temperature_k = {})",
                 py_repr(self.params().cmb_temperature_k)
             )),
-            ("saha_ionized_fraction", Error::OutOfDomain(1)) => Some(format!(
+            ("saha_ionized_fraction", Error::OutOfDomain(a)) if a.position() == 1 => Some(format!(
                 "must not exceed {} (the highest redshift of the function)",
                 py_repr(relicore::decoupling::SAHA_HIGHEST_REDSHIFT)
             )),
@@ -437,14 +451,23 @@ mod tests {
 
     #[test]
     fn parameter_names_follow_the_core_positions() {
-        // Error::InvalidParameter(i) names the i-th field of UniverseParameters
+        // Error::InvalidParameter names the field of UniverseParameters at its position
         let mut p = UniverseParameters::new(70.0, 0.3);
         p.omega_baryon = 0.5;
-        assert_eq!(U::new(p).err(), Some(Error::InvalidParameter(2)));
+        assert_eq!(
+            U::new(p).err(),
+            Some(Error::InvalidParameter(relicore::arg!(2, omega_baryon)))
+        );
         assert_eq!(PARAMETER_NAMES[2], "omega_baryon");
         let mut p = UniverseParameters::new(70.0, 0.3);
         p.helium_mass_fraction = 1.0;
-        assert_eq!(U::new(p).err(), Some(Error::InvalidParameter(9)));
+        assert_eq!(
+            U::new(p).err(),
+            Some(Error::InvalidParameter(relicore::arg!(
+                9,
+                helium_mass_fraction
+            )))
+        );
         assert_eq!(PARAMETER_NAMES[9], "helium_mass_fraction");
         assert!(parameter_rule(&p, 9).contains("below 1"));
     }

@@ -38,7 +38,7 @@ pub(crate) fn universe_refused(
     err: Error,
 ) -> PyErr {
     let i = match err {
-        Error::InvalidParameter(i) => usize::from(i),
+        Error::InvalidParameter(i) => usize::from(i.position()),
         _ => usize::MAX,
     };
     let name = PARAMETER_NAMES.get(i).copied().unwrap_or("a parameter");
@@ -124,24 +124,24 @@ fn construction_error(py: Python<'_>, u: &U, options: HistoryOptions<f64>, err: 
         return universe_refused(py, F, u.parameters(), err);
     }
     let because = match err {
-        Error::OutOfDomain(1) => Some(format!(
+        Error::OutOfDomain(a) if a.position() == 1 => Some(format!(
             "must not exceed {} (the reionisation must end well after recombination)",
             py_repr(dc::HIGHEST_REIONIZATION_REDSHIFT)
         )),
-        Error::OutOfDomain(2) => Some(format!(
+        Error::OutOfDomain(a) if a.position() == 2 => Some(format!(
             "must be at least {} (the history starts where hydrogen is in Saha equilibrium)",
             py_repr(dc::LOWEST_HIGHEST_REDSHIFT)
         )),
-        Error::CapacityTooSmall(2) => Some(format!(
+        Error::CapacityTooSmall(a) if a.position() == 2 => Some(format!(
             "more than the {} nodes of the table can cover (at most {})",
             dc::HISTORY_NODES,
             py_repr(dc::DEFAULT_HIGHEST_REDSHIFT)
         )),
-        Error::OutOfDomain(3) => Some(format!(
+        Error::OutOfDomain(a) if a.position() == 3 => Some(format!(
             "must not exceed {}",
             py_repr(dc::HIGHEST_HELIUM_REIONIZATION_REDSHIFT)
         )),
-        Error::OutOfDomain(4) => Some(format!(
+        Error::OutOfDomain(a) if a.position() == 4 => Some(format!(
             "must lie between {} and {}",
             py_repr(dc::HELIUM_REIONIZATION_WIDTH_RANGE[0]),
             py_repr(dc::HELIUM_REIONIZATION_WIDTH_RANGE[1])
@@ -344,7 +344,7 @@ impl Receiver for PyThermalHistory {
 
     fn because(&self, _name: &str, err: Error) -> Option<String> {
         match err {
-            Error::OutOfDomain(0) => Some(format!(
+            Error::OutOfDomain(a) if a.position() == 0 => Some(format!(
                 "above the highest redshift of the history ({})",
                 py_repr(self.options.highest_redshift)
             )),
@@ -364,9 +364,9 @@ mod tests {
         p.omega_baryon = 0.0;
         let u = U::new(p).unwrap();
         let e = dc::saha_ionized_fraction(&u, 1000.0).unwrap_err();
-        assert_eq!(e, Error::InvalidParameter(2));
+        assert_eq!(e, Error::InvalidParameter(relicore::arg!(2, omega_baryon)));
         assert!(!is_element_error(e));
-        assert!(is_element_error(Error::Negative(1)));
+        assert!(is_element_error(Error::Negative(relicore::arg!(1, z))));
         assert!(is_element_error(Error::NoConvergence));
         // the core's positions for the history: options argument 1 and 2
         p.omega_baryon = 0.05;
@@ -376,27 +376,48 @@ mod tests {
             highest_redshift: 1e4,
             ..HistoryOptions::default()
         };
-        assert_eq!(H::new(&u, o).err(), Some(Error::Negative(1)));
+        assert_eq!(
+            H::new(&u, o).err(),
+            Some(Error::Negative(relicore::arg!(1, reionization_redshift)))
+        );
         assert_eq!(HISTORY_ARGS[1], "reionization_redshift");
         let o = HistoryOptions {
             reionization_redshift: None,
             highest_redshift: 2e4,
             ..HistoryOptions::default()
         };
-        assert_eq!(H::new(&u, o).err(), Some(Error::CapacityTooSmall(2)));
+        assert_eq!(
+            H::new(&u, o).err(),
+            Some(Error::CapacityTooSmall(relicore::arg!(2, highest_redshift)))
+        );
         assert_eq!(HISTORY_ARGS[2], "highest_redshift");
         let o = HistoryOptions {
             helium_reionization_redshift: -1.0,
             ..HistoryOptions::default()
         };
-        assert_eq!(H::new(&u, o).err(), Some(Error::Negative(3)));
+        assert_eq!(
+            H::new(&u, o).err(),
+            Some(Error::Negative(relicore::arg!(
+                3,
+                helium_reionization_redshift
+            )))
+        );
         assert_eq!(HISTORY_ARGS[3], "helium_reionization_redshift");
         let o = HistoryOptions {
             helium_reionization_width: 0.0,
             ..HistoryOptions::default()
         };
-        assert_eq!(H::new(&u, o).err(), Some(Error::OutOfDomain(4)));
+        assert_eq!(
+            H::new(&u, o).err(),
+            Some(Error::OutOfDomain(relicore::arg!(
+                4,
+                helium_reionization_width
+            )))
+        );
         assert_eq!(HISTORY_ARGS[4], "helium_reionization_width");
-        assert_eq!(dc::saha_ionized_fraction(&u, -1.0), Err(Error::Negative(1)));
+        assert_eq!(
+            dc::saha_ionized_fraction(&u, -1.0),
+            Err(Error::Negative(relicore::arg!(1, z)))
+        );
     }
 }

@@ -212,10 +212,10 @@ pub(crate) fn core_error_because(
         (Some(n), Some(Arg::Value(v))) => match err {
             Error::EmptyInterval(p) => {
                 let upper_name = names
-                    .get(usize::from(p) + 1)
+                    .get(usize::from(p.position()) + 1)
                     .copied()
                     .unwrap_or("upper bound");
-                let upper = match args.get(usize::from(p) + 1) {
+                let upper = match args.get(usize::from(p.position()) + 1) {
                     Some(Arg::Value(u)) => py_repr(*u),
                     _ => "?".into(),
                 };

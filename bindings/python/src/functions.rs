@@ -955,7 +955,7 @@ mod tests {
         let f = |[z]: [f64; 1]| u.luminosity_distance_mpc(z);
         assert_eq!(
             run([&z], &mut out, false, |_| true, f),
-            Some((1, Error::Negative(0)))
+            Some((1, Error::Negative(relicore::arg!(0, z))))
         );
         assert_eq!(run([&z], &mut out, true, |_| true, f), None);
         assert!(out[1].is_nan());

@@ -24,7 +24,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: Some(spectral_radiance_wavelength_array),
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, temperature_k] => relicore::blackbody::spectral_radiance_wavelength(wavelength_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: Some(spectral_radiance_wavelength_array_f32), frame: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, temperature_k] => relicore::blackbody::spectral_radiance_wavelength(wavelength_m, temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: Some(spectral_radiance_wavelength_array_f32), frame: None }),
     },
     Spec {
         name: "spectral_radiance_frequency",
@@ -36,7 +36,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: Some(spectral_radiance_frequency_array),
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, temperature_k] => relicore::blackbody::spectral_radiance_frequency(frequency_hz, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: Some(spectral_radiance_frequency_array_f32), frame: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, temperature_k] => relicore::blackbody::spectral_radiance_frequency(frequency_hz, temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: Some(spectral_radiance_frequency_array_f32), frame: None }),
     },
     Spec {
         name: "spectral_radiance_wavenumber",
@@ -48,7 +48,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: Some(spectral_radiance_wavenumber_array),
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavenumber_per_m, temperature_k] => relicore::blackbody::spectral_radiance_wavenumber(wavenumber_per_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: Some(spectral_radiance_wavenumber_array_f32), frame: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavenumber_per_m, temperature_k] => relicore::blackbody::spectral_radiance_wavenumber(wavenumber_per_m, temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: Some(spectral_radiance_wavenumber_array_f32), frame: None }),
     },
     Spec {
         name: "photon_radiance_wavelength",
@@ -144,7 +144,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [temperature_k] => relicore::blackbody::photon_number_density(temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [temperature_k] => relicore::blackbody::photon_number_density(temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None, frame: None }),
     },
     Spec {
         name: "radiation_energy_density",
@@ -156,7 +156,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [temperature_k] => relicore::blackbody::radiation_energy_density(temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [temperature_k] => relicore::blackbody::radiation_energy_density(temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None, frame: None }),
     },
     Spec {
         name: "peak_wavelength",
@@ -264,7 +264,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [lower_m, upper_m, temperature_k] => relicore::blackbody::band_radiance_wavelength(lower_m, upper_m, temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [lower_m, upper_m, temperature_k] => relicore::blackbody::band_radiance_wavelength(lower_m, upper_m, temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None, frame: None }),
     },
     Spec {
         name: "band_photon_radiance_wavelength",
@@ -312,7 +312,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, spectral_radiance] => relicore::blackbody::brightness_temperature_wavelength(wavelength_m, spectral_radiance), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, spectral_radiance] => relicore::blackbody::brightness_temperature_wavelength(wavelength_m, spectral_radiance), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None, frame: None }),
     },
     Spec {
         name: "brightness_temperature_frequency",
@@ -324,7 +324,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, spectral_radiance] => relicore::blackbody::brightness_temperature_frequency(frequency_hz, spectral_radiance), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, spectral_radiance] => relicore::blackbody::brightness_temperature_frequency(frequency_hz, spectral_radiance), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None, frame: None }),
     },
     Spec {
         name: "rayleigh_jeans_temperature",
@@ -416,11 +416,11 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "measured_spectral_radiance_wavelength",
         args: &["wavelength_m", "object_temperature_k", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
         free: false,
-        body: Body::AN(|_, x| match *x { [wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::AN(|_, x| match *x { [wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_wavelength(wavelength_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None, frame: None }),
     },
     Spec {
         name: "measured_spectral_radiance_frequency",
@@ -428,11 +428,11 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "measured_spectral_radiance_frequency",
         args: &["frequency_hz", "object_temperature_k", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
         free: false,
-        body: Body::AN(|_, x| match *x { [frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::AN(|_, x| match *x { [frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: None,
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: None }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_spectral_radiance_frequency(frequency_hz, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None, frame: None }),
     },
     Spec {
         name: "measured_band_radiance_wavelength",
@@ -440,7 +440,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "measured_band_radiance_wavelength",
         args: &["lower_m", "upper_m", "object_temperature_k", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
         free: false,
-        body: Body::AN(|_, x| match *x { [lower_m, upper_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_band_radiance_wavelength(lower_m, upper_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::AN(|_, x| match *x { [lower_m, upper_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_band_radiance_wavelength(lower_m, upper_m, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: None,
         width: 1,
@@ -452,11 +452,11 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "object_temperature_wavelength",
         args: &["wavelength_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
         free: false,
-        body: Body::AN(|_, x| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_wavelength(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::AN(|_, x| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_wavelength(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: Some((1, object_temperature_wavelength_frame)),
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_wavelength(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: Some(object_temperature_wavelength_frame_f32) }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_wavelength(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None, frame: Some(object_temperature_wavelength_frame_f32) }),
     },
     Spec {
         name: "object_temperature_frequency",
@@ -464,11 +464,11 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "object_temperature_frequency",
         args: &["frequency_hz", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
         free: false,
-        body: Body::AN(|_, x| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_frequency(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::AN(|_, x| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_frequency(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: Some((1, object_temperature_frequency_frame)),
         width: 1,
-        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_frequency(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: Some(object_temperature_frequency_frame_f32) }),
+        single: Some(Single { body: SingleBody::Number(|x| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_frequency(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None, frame: Some(object_temperature_frequency_frame_f32) }),
     },
     Spec {
         name: "object_temperature_band",
@@ -476,7 +476,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "object_temperature_band",
         args: &["lower_m", "upper_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k"],
         free: false,
-        body: Body::AN(|_, x| match *x { [lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_band(lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::AN(|_, x| match *x { [lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_band(lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: Some((2, object_temperature_band_frame)),
         width: 1,
@@ -500,7 +500,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "brightness_temperature_wavelength_with_uncertainty",
         args: &["wavelength_m", "spectral_radiance", "spectral_radiance_uncertainty"],
         free: false,
-        body: Body::Row(|_, x, out| match *x { [wavelength_m, spectral_radiance, spectral_radiance_uncertainty] => relicore::blackbody::brightness_temperature_wavelength_with_uncertainty(wavelength_m, spectral_radiance, spectral_radiance_uncertainty).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::Row(|_, x, out| match *x { [wavelength_m, spectral_radiance, spectral_radiance_uncertainty] => relicore::blackbody::brightness_temperature_wavelength_with_uncertainty(wavelength_m, spectral_radiance, spectral_radiance_uncertainty).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: None,
         width: 8,
@@ -512,7 +512,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "brightness_temperature_frequency_with_uncertainty",
         args: &["frequency_hz", "spectral_radiance", "spectral_radiance_uncertainty"],
         free: false,
-        body: Body::Row(|_, x, out| match *x { [frequency_hz, spectral_radiance, spectral_radiance_uncertainty] => relicore::blackbody::brightness_temperature_frequency_with_uncertainty(frequency_hz, spectral_radiance, spectral_radiance_uncertainty).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::Row(|_, x, out| match *x { [frequency_hz, spectral_radiance, spectral_radiance_uncertainty] => relicore::blackbody::brightness_temperature_frequency_with_uncertainty(frequency_hz, spectral_radiance, spectral_radiance_uncertainty).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: None,
         width: 8,
@@ -524,11 +524,11 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "object_temperature_wavelength_with_uncertainty",
         args: &["wavelength_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k", "signal_uncertainty", "emissivity_uncertainty", "reflected_temperature_uncertainty_k", "transmittance_uncertainty", "path_temperature_uncertainty_k"],
         free: false,
-        body: Body::Row(|_, x, out| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_wavelength_with_uncertainty(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::Row(|_, x, out| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_wavelength_with_uncertainty(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: Some((1, object_temperature_wavelength_with_uncertainty_frame)),
         width: 8,
-        single: Some(Single { body: SingleBody::Row(|x, out| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_wavelength_with_uncertainty(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row_f32(v, out)), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: Some(object_temperature_wavelength_with_uncertainty_frame_f32) }),
+        single: Some(Single { body: SingleBody::Row(|x, out| match *x { [wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_wavelength_with_uncertainty(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row_f32(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None, frame: Some(object_temperature_wavelength_with_uncertainty_frame_f32) }),
     },
     Spec {
         name: "object_temperature_frequency_with_uncertainty",
@@ -536,11 +536,11 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "object_temperature_frequency_with_uncertainty",
         args: &["frequency_hz", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k", "signal_uncertainty", "emissivity_uncertainty", "reflected_temperature_uncertainty_k", "transmittance_uncertainty", "path_temperature_uncertainty_k"],
         free: false,
-        body: Body::Row(|_, x, out| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_frequency_with_uncertainty(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::Row(|_, x, out| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_frequency_with_uncertainty(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: Some((1, object_temperature_frequency_with_uncertainty_frame)),
         width: 8,
-        single: Some(Single { body: SingleBody::Row(|x, out| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_frequency_with_uncertainty(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row_f32(v, out)), _ => Err(Error::LengthMismatch(0)) }), array: None, frame: Some(object_temperature_frequency_with_uncertainty_frame_f32) }),
+        single: Some(Single { body: SingleBody::Row(|x, out| match *x { [frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_frequency_with_uncertainty(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row_f32(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }), array: None, frame: Some(object_temperature_frequency_with_uncertainty_frame_f32) }),
     },
     Spec {
         name: "object_temperature_band_with_uncertainty",
@@ -548,7 +548,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "object_temperature_band_with_uncertainty",
         args: &["lower_m", "upper_m", "signal", "emissivity", "reflected_temperature_k", "transmittance", "path_temperature_k", "signal_uncertainty", "emissivity_uncertainty", "reflected_temperature_uncertainty_k", "transmittance_uncertainty", "path_temperature_uncertainty_k"],
         free: false,
-        body: Body::Row(|_, x, out| match *x { [lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_band_with_uncertainty(lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::Row(|_, x, out| match *x { [lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_band_with_uncertainty(lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: Some((2, object_temperature_band_with_uncertainty_frame)),
         width: 8,
@@ -560,7 +560,7 @@ pub(crate) static PLAIN: &[Spec<()>] = &[
         label: "calibrated_temperature_with_uncertainty",
         args: &["frequency_hz", "reading_hot", "temperature_hot_k", "reading_cold", "temperature_cold_k", "reading", "reading_hot_uncertainty", "temperature_hot_uncertainty_k", "reading_cold_uncertainty", "temperature_cold_uncertainty_k", "reading_uncertainty"],
         free: false,
-        body: Body::Row(|_, x, out| match *x { [frequency_hz, reading_hot, temperature_hot_k, reading_cold, temperature_cold_k, reading, reading_hot_uncertainty, temperature_hot_uncertainty_k, reading_cold_uncertainty, temperature_cold_uncertainty_k, reading_uncertainty] => relicore::blackbody::calibrated_temperature_with_uncertainty(frequency_hz, reading_hot, temperature_hot_k, reading_cold, temperature_cold_k, reading, reading_hot_uncertainty, temperature_hot_uncertainty_k, reading_cold_uncertainty, temperature_cold_uncertainty_k, reading_uncertainty).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(0)) }),
+        body: Body::Row(|_, x, out| match *x { [frequency_hz, reading_hot, temperature_hot_k, reading_cold, temperature_cold_k, reading, reading_hot_uncertainty, temperature_hot_uncertainty_k, reading_cold_uncertainty, temperature_cold_uncertainty_k, reading_uncertainty] => relicore::blackbody::calibrated_temperature_with_uncertainty(frequency_hz, reading_hot, temperature_hot_k, reading_cold, temperature_cold_k, reading, reading_hot_uncertainty, temperature_hot_uncertainty_k, reading_cold_uncertainty, temperature_cold_uncertainty_k, reading_uncertainty).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(0, arguments))) }),
         array: None,
         frame: None,
         width: 8,
@@ -1474,7 +1474,7 @@ fn spectral_radiance_wavenumber_array_f32(x: &[f32], rest: &[f32], out: &mut [f3
 #[allow(clippy::too_many_arguments)]
 fn object_temperature_wavelength_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
     let &[wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
-        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(relicore::arg!(0, arguments)) });
     };
     let wavelength_m = wavelength_m.first().copied().unwrap_or(f64::NAN);
     widest!(|wavelength_m: f64, signal: &[f64], emissivity: &[f64], reflected_temperature_k: &[f64], transmittance: &[f64], path_temperature_k: &[f64], out: &mut [f64]| -> ArrayResult { relicore::blackbody::object_temperature_wavelength_array(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out) })
@@ -1484,7 +1484,7 @@ fn object_temperature_wavelength_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayRe
 #[allow(clippy::too_many_arguments)]
 fn object_temperature_wavelength_frame_f32(x: &[&[f32]], out: &mut [f32]) -> ArrayResult {
     let &[wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
-        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(relicore::arg!(0, arguments)) });
     };
     let wavelength_m = wavelength_m.first().copied().unwrap_or(f32::NAN);
     widest!(|wavelength_m: f32, signal: &[f32], emissivity: &[f32], reflected_temperature_k: &[f32], transmittance: &[f32], path_temperature_k: &[f32], out: &mut [f32]| -> ArrayResult { relicore::blackbody::object_temperature_wavelength_array(wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out) })
@@ -1494,7 +1494,7 @@ fn object_temperature_wavelength_frame_f32(x: &[&[f32]], out: &mut [f32]) -> Arr
 #[allow(clippy::too_many_arguments)]
 fn object_temperature_frequency_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
     let &[frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
-        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(relicore::arg!(0, arguments)) });
     };
     let frequency_hz = frequency_hz.first().copied().unwrap_or(f64::NAN);
     widest!(|frequency_hz: f64, signal: &[f64], emissivity: &[f64], reflected_temperature_k: &[f64], transmittance: &[f64], path_temperature_k: &[f64], out: &mut [f64]| -> ArrayResult { relicore::blackbody::object_temperature_frequency_array(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out) })
@@ -1504,7 +1504,7 @@ fn object_temperature_frequency_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayRes
 #[allow(clippy::too_many_arguments)]
 fn object_temperature_frequency_frame_f32(x: &[&[f32]], out: &mut [f32]) -> ArrayResult {
     let &[frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
-        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(relicore::arg!(0, arguments)) });
     };
     let frequency_hz = frequency_hz.first().copied().unwrap_or(f32::NAN);
     widest!(|frequency_hz: f32, signal: &[f32], emissivity: &[f32], reflected_temperature_k: &[f32], transmittance: &[f32], path_temperature_k: &[f32], out: &mut [f32]| -> ArrayResult { relicore::blackbody::object_temperature_frequency_array(frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, out) })
@@ -1514,7 +1514,7 @@ fn object_temperature_frequency_frame_f32(x: &[&[f32]], out: &mut [f32]) -> Arra
 #[allow(clippy::too_many_arguments)]
 fn object_temperature_band_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
     let &[lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] = x else {
-        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(relicore::arg!(0, arguments)) });
     };
     let lower_m = lower_m.first().copied().unwrap_or(f64::NAN);
     let upper_m = upper_m.first().copied().unwrap_or(f64::NAN);
@@ -1525,7 +1525,7 @@ fn object_temperature_band_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
 #[allow(clippy::too_many_arguments)]
 fn object_temperature_wavelength_with_uncertainty_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
     let &[wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] = x else {
-        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(relicore::arg!(0, arguments)) });
     };
     let wavelength_m = wavelength_m.first().copied().unwrap_or(f64::NAN);
     rows_frame([signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], out, 8, |[signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], o| {
@@ -1537,7 +1537,7 @@ fn object_temperature_wavelength_with_uncertainty_frame(x: &[&[f64]], out: &mut 
 #[allow(clippy::too_many_arguments)]
 fn object_temperature_wavelength_with_uncertainty_frame_f32(x: &[&[f32]], out: &mut [f32]) -> ArrayResult {
     let &[wavelength_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] = x else {
-        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(relicore::arg!(0, arguments)) });
     };
     let wavelength_m = wavelength_m.first().copied().unwrap_or(f32::NAN);
     rows_frame([signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], out, 8, |[signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], o| {
@@ -1549,7 +1549,7 @@ fn object_temperature_wavelength_with_uncertainty_frame_f32(x: &[&[f32]], out: &
 #[allow(clippy::too_many_arguments)]
 fn object_temperature_frequency_with_uncertainty_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
     let &[frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] = x else {
-        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(relicore::arg!(0, arguments)) });
     };
     let frequency_hz = frequency_hz.first().copied().unwrap_or(f64::NAN);
     rows_frame([signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], out, 8, |[signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], o| {
@@ -1561,7 +1561,7 @@ fn object_temperature_frequency_with_uncertainty_frame(x: &[&[f64]], out: &mut [
 #[allow(clippy::too_many_arguments)]
 fn object_temperature_frequency_with_uncertainty_frame_f32(x: &[&[f32]], out: &mut [f32]) -> ArrayResult {
     let &[frequency_hz, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] = x else {
-        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(relicore::arg!(0, arguments)) });
     };
     let frequency_hz = frequency_hz.first().copied().unwrap_or(f32::NAN);
     rows_frame([signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], out, 8, |[signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k], o| {
@@ -1573,7 +1573,7 @@ fn object_temperature_frequency_with_uncertainty_frame_f32(x: &[&[f32]], out: &m
 #[allow(clippy::too_many_arguments)]
 fn object_temperature_band_with_uncertainty_frame(x: &[&[f64]], out: &mut [f64]) -> ArrayResult {
     let &[lower_m, upper_m, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] = x else {
-        return Err(ElementError { index: 0, error: Error::LengthMismatch(0) });
+        return Err(ElementError { index: 0, error: Error::LengthMismatch(relicore::arg!(0, arguments)) });
     };
     let lower_m = lower_m.first().copied().unwrap_or(f64::NAN);
     let upper_m = upper_m.first().copied().unwrap_or(f64::NAN);
@@ -1595,22 +1595,22 @@ fn temperature_uncertainty_row(v: relicore::blackbody::TemperatureUncertainty<f6
 
 /// `relicore::blackbody::measured_response_weighted_radiance` on the two tables and one element's values.
 fn measured_response_weighted_radiance_table(w: &[f64], r: &[f64], x: &[f64], out: &mut [f64]) -> relicore::Result<()> {
-    match *x { [object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_response_weighted_radiance(w, r, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k).map(|v| if let Some(o) = out.first_mut() { *o = v }), _ => Err(Error::LengthMismatch(2)) }
+    match *x { [object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::measured_response_weighted_radiance(w, r, object_temperature_k, emissivity, reflected_temperature_k, transmittance, path_temperature_k).map(|v| if let Some(o) = out.first_mut() { *o = v }), _ => Err(Error::LengthMismatch(relicore::arg!(2, values))) }
 }
 
 /// `relicore::blackbody::object_temperature_response` on the two tables and one element's values.
 fn object_temperature_response_table(w: &[f64], r: &[f64], x: &[f64], out: &mut [f64]) -> relicore::Result<()> {
-    match *x { [signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_response(w, r, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k).map(|v| if let Some(o) = out.first_mut() { *o = v }), _ => Err(Error::LengthMismatch(2)) }
+    match *x { [signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k] => relicore::blackbody::object_temperature_response(w, r, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k).map(|v| if let Some(o) = out.first_mut() { *o = v }), _ => Err(Error::LengthMismatch(relicore::arg!(2, values))) }
 }
 
 /// `relicore::blackbody::object_temperature_response_with_uncertainty` on the two tables and one element's values.
 fn object_temperature_response_with_uncertainty_table(w: &[f64], r: &[f64], x: &[f64], out: &mut [f64]) -> relicore::Result<()> {
-    match *x { [signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_response_with_uncertainty(w, r, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(2)) }
+    match *x { [signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k] => relicore::blackbody::object_temperature_response_with_uncertainty(w, r, signal, emissivity, reflected_temperature_k, transmittance, path_temperature_k, signal_uncertainty, emissivity_uncertainty, reflected_temperature_uncertainty_k, transmittance_uncertainty, path_temperature_uncertainty_k).map(|v| temperature_uncertainty_row(v, out)), _ => Err(Error::LengthMismatch(relicore::arg!(2, values))) }
 }
 
 /// `relicore::blackbody::response_weighted_radiance_temperature_derivative` on the two tables and one element's values.
 fn response_weighted_radiance_temperature_derivative_table(w: &[f64], r: &[f64], x: &[f64], out: &mut [f64]) -> relicore::Result<()> {
-    match *x { [temperature_k] => relicore::blackbody::response_weighted_radiance_temperature_derivative(w, r, temperature_k).map(|v| if let Some(o) = out.first_mut() { *o = v }), _ => Err(Error::LengthMismatch(2)) }
+    match *x { [temperature_k] => relicore::blackbody::response_weighted_radiance_temperature_derivative(w, r, temperature_k).map(|v| if let Some(o) = out.first_mut() { *o = v }), _ => Err(Error::LengthMismatch(relicore::arg!(2, values))) }
 }
 
 /// The response-table functions: name, element-wise parameters (after the two tables), floats

@@ -90,7 +90,7 @@ impl PyLinearGrowth {
             }),
             Err(e) => {
                 let because = match e {
-                    Error::OutOfDomain(0) => Some(
+                    Error::OutOfDomain(a) if a.position() == 0 => Some(
                         "has no clustering matter, or its curvature, dark energy or neutrino \
                          masses matter at a = 2^-47 (the growing mode is not known there)",
                     ),
@@ -214,7 +214,7 @@ fn spectrum_error(py: Python<'_>, g: &G, i: SpectrumInputs, err: Error) -> PyErr
     };
     match err {
         // the oscillating form in a universe without baryons: the form is what to change
-        Error::InvalidParameter(2) => {
+        Error::InvalidParameter(a) if a.position() == 2 => {
             let message = format!(
                 "{F}: transfer_form = 'baryon_oscillations': needs baryons, and growth.universe.\
                  omega_baryon = {} (use transfer_form='no_wiggle' or a universe with baryons)",
@@ -309,7 +309,7 @@ impl PyLinearPowerSpectrum {
                     F,
                     Some("transfer_form"),
                     None,
-                    status_code(Error::OutOfDomain(1)),
+                    status_code(Error::OutOfDomain(relicore::arg!(1, z))),
                 ));
             }
         };
@@ -418,10 +418,10 @@ impl Receiver for PyLinearPowerSpectrum {
 
     fn because(&self, name: &str, err: Error) -> Option<String> {
         match (name, err) {
-            ("linear_power_spectrum_mpc3", Error::OutOfDomain(0)) => Some(
+            ("linear_power_spectrum_mpc3", Error::OutOfDomain(a)) if a.position() == 0 => Some(
                 "P is not representable at this wavenumber (k beyond about 1e70 Mpc^-1)".into(),
             ),
-            ("density_rms_in_sphere", Error::OutOfDomain(0)) => {
+            ("density_rms_in_sphere", Error::OutOfDomain(a)) if a.position() == 0 => {
                 Some("so extreme that sigma is not representable".into())
             }
             _ => None,

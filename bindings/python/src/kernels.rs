@@ -41,7 +41,7 @@ pub(crate) fn run_array<T: Element>(
 ) -> Option<(usize, Error)> {
     let first = split(out, |start, part| {
         let Some(xs) = x.get(start..start + part.len()) else {
-            return Some((start, Error::LengthMismatch(0)));
+            return Some((start, Error::LengthMismatch(relicore::arg!(0, arrays))));
         };
         f(xs, part).err().map(|e| (start + e.index, e.error))
     });
@@ -136,7 +136,7 @@ pub(crate) fn run_rows<T: Element>(
 ) -> Option<(usize, Error)> {
     let m = inputs.len();
     if m > MAX_ARGS {
-        return Some((0, Error::LengthMismatch(0)));
+        return Some((0, Error::LengthMismatch(relicore::arg!(0, arrays))));
     }
     let width = width.max(1);
     split_rows(out, width, |start, part| {
@@ -174,7 +174,7 @@ pub(crate) fn run_frame<T: Element>(
 ) -> Option<(usize, Error)> {
     let m = inputs.len();
     if m > MAX_ARGS {
-        return Some((0, Error::LengthMismatch(0)));
+        return Some((0, Error::LengthMismatch(relicore::arg!(0, arrays))));
     }
     let width = width.max(1);
     let n = out.len() / width;
@@ -187,7 +187,7 @@ pub(crate) fn run_frame<T: Element>(
             } else {
                 match s.get(start..start + rows) {
                     Some(piece) => piece,
-                    None => return Some((start, Error::LengthMismatch(0))),
+                    None => return Some((start, Error::LengthMismatch(relicore::arg!(0, arrays)))),
                 }
             };
         }
@@ -331,7 +331,10 @@ mod tests {
         let mut out = [0.0; 3];
         let f = |[a, b]: [f64; 2]| bb::spectral_radiance_wavelength(a, b);
         let failure = run([&l, &t], &mut out, false, |_| true, f);
-        assert_eq!(failure, Some((1, Error::NonPositive(1))));
+        assert_eq!(
+            failure,
+            Some((1, Error::NonPositive(relicore::arg!(1, temperature_k))))
+        );
         let failure = run([&l, &t], &mut out, true, |_| true, f);
         assert_eq!(failure, None);
         assert!(out[1].is_nan());

@@ -24,7 +24,8 @@ def spectral_radiance_wavelength(wavelength_m: Any, temperature_k: Any, *, nan_o
 
     Returns W m⁻² sr⁻¹ m⁻¹, ≥ 0 (0 only where the true value is below the smallest subnormal).
 
-    Errors: `NonFinite(i)` for NaN or ±∞, `NonPositive(i)` for ≤ 0, i the argument position.
+    Errors: `NonFinite(i)` for NaN or ±∞, `NonPositive(i)` for ≤ 0, i the position of the
+    argument the error names.
 
     Accuracy: ≤ 4 ulp (`f64`, normal results) against mpmath; see the module documentation.
     """
@@ -677,7 +678,8 @@ def calibrated_temperature_with_uncertainty(frequency_hz: Any, reading_hot: Any,
     Returns a `TemperatureUncertainty` with `inputs` = 5 and the coefficients in the order
     (reading_hot, temperature_hot, reading_cold, temperature_cold, reading), in K per reading
     unit or K/K. Errors: those of `two_load_calibration` and `calibrated_temperature`
-    (`OutOfDomain(5)` for a reading no blackbody gives); `NonFinite(i)`, `Negative(i)` for
+    (`OutOfDomain(5)` for a reading no blackbody gives, `DegenerateCalibration(1)` for a gain
+    that underflows to 0); `NonFinite(i)`, `Negative(i)` for
     i = 6…10; `OutOfDomain(5)` when J′(T) is not a positive normal number.
 
     Accuracy: temperature as `calibrated_temperature`; coefficients within 1e-12 relative

@@ -89,8 +89,13 @@ class Universe(UniverseFunctions, _native.UniverseBase):
     w0, wa : dark-energy equation of state w(a) = w0 + wa (1 - a).
     helium_mass_fraction : primordial helium mass fraction, 0 <= Y_p < 1 (used by decoupling).
 
-    Raises RelicoreError naming the offending parameter and its value (status -14), or saying
-    the model has no big bang (status -15). Frozen; compares and hashes by its parameters;
+    Raises RelicoreError naming the offending parameter and its value (status -14): a value out
+    of its range above, or one that makes E(z) overflow somewhere on the way back to a = 1e-30
+    (w0 when the dark-energy density overflows, an equation of state far from physical ones:
+    w0, or the early-time w0 + wa, above about 3.8; omega_matter when E(z)^2 overflows
+    otherwise; h0_km_s_mpc so far from physical values that c/H0, 1/H0 or the critical density
+    is not a finite positive number; cmb_temperature_k or n_eff when the radiation density
+    overflows), or saying the model has no big bang (status -15). Frozen; compares and hashes by its parameters;
     pickles. Read-only properties give every parameter, ``parameters`` (a dict of them) and
     the constants ``hubble_distance_mpc``, ``hubble_time_gyr``, ``omega_radiation``,
     ``omega_dark_energy`` and ``matter_radiation_equality_redshift``.
