@@ -1822,7 +1822,9 @@ int32_t relicore_temperature_from_band_radiance_wavelength(double lower_m,
  *
  * Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
  * Accuracy: round trip with `spectral_radiance_wavelength`
- * within 1e-14 relative (`f64`) against mpmath.
+ * within 1e-14 relative (`f64`) against mpmath for a normal radiance, 2hc²/λ⁵ or its ratio
+ * to the radiance below the normal range included (`tests/blackbody_edges.rs`); for a
+ * radiance below the normal range within 5e-13.
  * Reference: Planck's law solved for T (closed form).
  *
  * Arguments of the C function:
@@ -1853,7 +1855,9 @@ int32_t relicore_brightness_temperature_wavelength(double wavelength_m,
  *
  * Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
  * Accuracy: round trip with `spectral_radiance_wavelength`
- * within 1e-14 relative (`f64`) against mpmath.
+ * within 1e-14 relative (`f64`) against mpmath for a normal radiance, 2hc²/λ⁵ or its ratio
+ * to the radiance below the normal range included (`tests/blackbody_edges.rs`); for a
+ * radiance below the normal range within 5e-13.
  * Reference: Planck's law solved for T (closed form).
  *
  * Arguments of the C function:
@@ -1907,8 +1911,10 @@ int32_t relicore_brightness_temperature_wavelength_array(double wavelength_m,
  * * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
  *
  * Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
- * Accuracy: round trip within 1e-14 relative (`f64`) against mpmath; where 2hν³/c² is below
- * the normal range (ν below about 1e-95 Hz in `f64`) within 5e-13 (`tests/blackbody_edges.rs`).
+ * Accuracy: round trip within 1e-14 relative (`f64`) against mpmath for a normal radiance,
+ * 2hν³/c² (ν below about 1e-86 Hz in `f64`) or its ratio to the radiance below the normal
+ * range included; for a radiance below the normal range within 5e-13
+ * (`tests/blackbody_edges.rs`).
  *
  * Arguments of the C function:
  * * `frequency_hz`: frequency in Hz, > 0.
@@ -1936,8 +1942,10 @@ int32_t relicore_brightness_temperature_frequency(double frequency_hz,
  * * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
  *
  * Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
- * Accuracy: round trip within 1e-14 relative (`f64`) against mpmath; where 2hν³/c² is below
- * the normal range (ν below about 1e-95 Hz in `f64`) within 5e-13 (`tests/blackbody_edges.rs`).
+ * Accuracy: round trip within 1e-14 relative (`f64`) against mpmath for a normal radiance,
+ * 2hν³/c² (ν below about 1e-86 Hz in `f64`) or its ratio to the radiance below the normal
+ * range included; for a radiance below the normal range within 5e-13
+ * (`tests/blackbody_edges.rs`).
  *
  * Arguments of the C function:
  * * `frequency_hz`: frequency in Hz, > 0.
