@@ -93,7 +93,7 @@ fn planck_law_with_an_underflowing_prefactor_or_x() {
         (
             3.068_183_443_135_621_4e-91,
             0.01,
-            2.892_241_254_396_669_9e-223,
+            2.892_241_254_396_67e-223,
         ),
         (
             1.038_885_361_494_186_7e-13,
@@ -133,7 +133,7 @@ fn brightness_temperature_with_a_subnormal_quotient() {
         spectral_radiance_wavelength,
     };
     for (l, b, want) in [
-        (1.04e59, 7e-253, 9.892_303_128_939_691e-3),
+        (1.04e59, 7e-253, 9.892_303_128_939_692e-3),
         (1.0, 1.1e292, 1.328_797_198_701_361_6e306),
     ] {
         let got = brightness_temperature_wavelength(l, b).unwrap_or(f64::NAN);
@@ -186,7 +186,7 @@ fn band_radiance_in_the_rayleigh_jeans_underflow() {
     };
     for (lo, t, want) in [
         (1.09e99, 3.79e6, 8.075_556_178_476_659e-306),
-        (1.09e99, 1e20, 2.130_753_609_096_743_8e-292),
+        (1.09e99, 1e20, 2.130_753_609_096_744e-292),
         (1e100, 1e250, 2.759_387_715_634_946_3e-65),
     ] {
         let got = band_radiance_wavelength(lo, f64::INFINITY, t).unwrap_or(f64::NAN);
