@@ -152,3 +152,18 @@ for nu, radiance in ((3.0681834431356214e-91, 2.9e-223), (1e-13, 3e234)):
     show(f"T_b(nu={nu!r}, L={radiance!r})", t_nu(nu, radiance))
 for lo, t in ((1.09e99, 3.79e6), (1.09e99, 1e20), (1e100, 1e250)):
     show(f"band [{lo!r}, inf) at {t!r}", band_lambda(lo, t))
+
+
+def band_lambda2(lo, up, t):
+    """Band radiance of [lo, up] in W m^-2 sr^-1 (x_b = x(lo) > x_a = x(up))."""
+    lo, up, t = mpf(lo), mpf(up), mpf(t)
+    xb = H_SI * C / (lo * K_SI * t)
+    xa = H_SI * C / (up * K_SI * t)
+    k4 = 2 * K_SI**4 / (H_SI**3 * C**2)
+    inner = quad(lambda s: s**3 * xb / expm1(xb * s), [xa / xb, 1])
+    return k4 * t**4 * xb**3 * inner
+
+
+# 7. a band whose K4 T^4 overflows (T above about 1.7e79 K) while its radiance is normal
+for lo, up, t in ((0.997473462943497, 1.7369343996094755e98, 1.7369343990923917e98), (1e-3, 1.0, 1e90)):
+    show(f"band [{lo!r}, {up!r}] at {t!r}", band_lambda2(lo, up, t))

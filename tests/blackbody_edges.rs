@@ -90,11 +90,7 @@ fn planck_law_with_an_underflowing_prefactor_or_x() {
     use relicore::blackbody::{spectral_radiance_frequency, spectral_radiance_wavelength};
     let ulp4 = 4.0 * f64::EPSILON;
     for (nu, t, want) in [
-        (
-            3.068_183_443_135_621_4e-91,
-            0.01,
-            2.892_241_254_396_67e-223,
-        ),
+        (3.068_183_443_135_621_4e-91, 0.01, 2.892_241_254_396_67e-223),
         (
             1.038_885_361_494_186_7e-13,
             1e300,
@@ -202,5 +198,37 @@ fn band_radiance_in_the_rayleigh_jeans_underflow() {
                 "[{lo:e}, inf] at {t:e}: back {back:e}"
             );
         }
+    }
+}
+
+/// Band radiance where K4 T⁴ overflows (T above about 1.7e79 K) while the radiance is normal
+/// (fuzz finding): the band [1 m, 1.7e98 m] at T = 1.7e98 K was computed in the Rayleigh-Jeans
+/// path above and refused below it, so its inverse met an infinite radiance between and
+/// returned 1.2e77 K. Expected: K4 T⁴ ∫ t³/(eᵗ−1) dt by mpmath quad (`fuzz/regression_values.py`,
+/// section 7), within the documented 1e-14, and the inverse's round trip within 1e-14.
+#[test]
+fn band_radiance_where_the_t4_prefactor_overflows() {
+    use relicore::blackbody::{
+        band_radiance_wavelength, temperature_from_band_radiance_wavelength,
+    };
+    for (lo, up, t, want) in [
+        (
+            0.997_473_462_943_497,
+            1.736_934_399_609_475_5e98,
+            1.736_934_399_092_391_7e98,
+            4.829_387_920_639_826e83,
+        ),
+        (1e-3, 1.0, 1e90, 2.759_387_712_875_558_6e84),
+    ] {
+        let got = band_radiance_wavelength(lo, up, t).unwrap_or(f64::NAN);
+        assert!(
+            rel(got, want) <= 1e-14,
+            "[{lo:e}, {up:e}] at {t:e}: {got:e}, want {want:e}"
+        );
+        let back = temperature_from_band_radiance_wavelength(lo, up, got).unwrap_or(f64::NAN);
+        assert!(
+            rel(back, t) <= 1e-14,
+            "[{lo:e}, {up:e}] at {t:e}: back {back:e}"
+        );
     }
 }

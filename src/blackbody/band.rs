@@ -269,6 +269,30 @@ fn rayleigh_jeans_band<T: Real>(
     Some(scale_by_pow2(prefactor * integral, e))
 }
 
+/// k·Tⁿ·v for n = 3 or 4 where k·Tⁿ overflows (T above about 1.7e79 K for K4 T⁴, 1.7e98 K for
+/// K3 T³, in `f64`) while the product may be finite: k f_Tⁿ v · 2^(n m_T) with T = f_T 2^m_T,
+/// the power of two applied once at the end (a fuzzing finding: the band radiance of
+/// [1 m, 1.7e98 m] at T = 1.7e98 K, 4.8e83 W m⁻² sr⁻¹, was refused as out of domain below the
+/// Rayleigh-Jeans threshold and computed above it, so its inverse met an infinite radiance
+/// between and returned 1.2e77 K).
+fn overflowing_prefactor_times<T: Real>(k: f64, n: i32, t: T, v: T) -> T {
+    let Some((ft, mt)) = significand_exponent(t) else {
+        return T::nan();
+    };
+    let f2 = ft * ft;
+    let pk = if n == 4 {
+        T::c(k) * (f2 * f2)
+    } else {
+        T::c(k) * (f2 * ft)
+    };
+    let w = pk * v;
+    if w < T::zero() {
+        -scale_by_pow2(-w, n * mt)
+    } else {
+        scale_by_pow2(w, n * mt)
+    }
+}
+
 /// Checks a wavelength or frequency band: lower finite ≥ 0, upper > lower (+∞ allowed).
 pub(crate) fn check_band<T: Real>(lower: T, upper: T) -> Result<(T, T)> {
     let lower = non_negative(lower, 0)?;
@@ -335,7 +359,12 @@ fn band_radiance_wavelength_unchecked<T: Real>(lo: T, up: T, t: T) -> T {
         return v;
     }
     let t2 = t * t;
-    (T::c(K4) * (t2 * t2)) * planck_band_integral(3, a, b)
+    let k4t4 = T::c(K4) * (t2 * t2);
+    let integral = planck_band_integral(3, a, b);
+    if !(k4t4 <= T::max_value()) {
+        return overflowing_prefactor_times(K4, 4, t, integral);
+    }
+    k4t4 * integral
 }
 
 /// Band photon radiance between two wavelengths, ∫_{λ₁}^{λ₂} N_λ(λ, T) dλ.
@@ -356,7 +385,12 @@ pub fn band_photon_radiance_wavelength<T: Real>(
     if let Some(v) = rayleigh_jeans_band(2, lo, up, t, b.0, false) {
         return finite_result(v, 2);
     }
-    finite_result((T::c(K3) * (t * t * t)) * planck_band_integral(2, a, b), 2)
+    let k3t3 = T::c(K3) * (t * t * t);
+    let integral = planck_band_integral(2, a, b);
+    if !(k3t3 <= T::max_value()) {
+        return finite_result(overflowing_prefactor_times(K3, 3, t, integral), 2);
+    }
+    finite_result(k3t3 * integral, 2)
 }
 
 /// Band radiance between two frequencies, L = ∫_{ν₁}^{ν₂} B_ν(ν, T) dν.
@@ -383,7 +417,12 @@ pub fn band_radiance_frequency<T: Real>(lower_hz: T, upper_hz: T, temperature_k:
         return finite_result(v, 2);
     }
     let t2 = t * t;
-    finite_result((T::c(K4) * (t2 * t2)) * planck_band_integral(3, a, b), 2)
+    let k4t4 = T::c(K4) * (t2 * t2);
+    let integral = planck_band_integral(3, a, b);
+    if !(k4t4 <= T::max_value()) {
+        return finite_result(overflowing_prefactor_times(K4, 4, t, integral), 2);
+    }
+    finite_result(k4t4 * integral, 2)
 }
 
 /// Temperature of the blackbody whose band radiance between two wavelengths equals the given
@@ -435,8 +474,16 @@ pub(crate) fn band_radiance_and_derivative_wavelength_unchecked<T: Real>(
     }
     let t2 = t * t;
     let k4t4 = T::c(K4) * (t2 * t2);
-    let v = k4t4 * planck_band_integral(3, a, b);
+    let integral = planck_band_integral(3, a, b);
     let edge = edge_term(3, a.0) - edge_term(3, b.0);
+    if !(k4t4 <= T::max_value()) {
+        // dL/dT = K T³ (4I + edge)
+        return (
+            overflowing_prefactor_times(K4, 4, t, integral),
+            overflowing_prefactor_times(K4, 3, t, T::c(4.0) * integral + edge),
+        );
+    }
+    let v = k4t4 * integral;
     let dv = (T::c(4.0) * v + k4t4 * edge) / t;
     (v, dv)
 }
