@@ -10,7 +10,12 @@ mpmath at 40 digits from the definitions, independently of the library:
   integrand scaled to 1 at t = 1), with
   a^4 E^2 = Omega_r + Omega_m a + Omega_de a^(1 - 3 (w0 + wa)) exp(-3 wa (1 - a)) (flat; the
   Friedmann equation with w0-wa dark energy, Chevallier & Polarski 2001, Linder 2003);
-* closed forms where they exist (named at each value).
+* closed forms where they exist (named at each value);
+* Planck's law with the exact SI 2019 h, c, k: B_lambda = 2hc^2/lambda^5 / expm1(hc/(lambda k T)),
+  B_nu = 2h nu^3/c^2 / expm1(h nu/(k T)); brightness temperatures
+  T = (hc/(lambda k)) / log1p(2hc^2/(lambda^5 L)) and (h nu/k) / log1p(2h nu^3/(c^2 L)) (Planck's
+  law solved for T); band radiances as K4 T^4 int_0^x t^3/expm1(t) dt, K4 = 2k^4/(h^3 c^2),
+  x = hc/(lambda k T) (mpmath.quad), for the exact binary values of the arguments.
 
 Run: .venv/bin/python fuzz/regression_values.py (prints the values the test file quotes).
 """
@@ -100,3 +105,65 @@ om = mpf(1e-200)
 ol = 1 - om
 for z in ("0", "1e3"):
     show(f"Omega_m=1e-200 age({z})", hubble_time_gyr(67.36) * 2 / (3 * sqrt(ol)) * mp.asinh(sqrt(ol / om) * (1 + mpf(z)) ** mpf(-1.5)))
+
+
+# 6. Planck's law and its closed-form inverse where 2h nu^3/c^2, 2hc^2/lambda^5, x or a/L are
+#    below the normal range (blackbody fuzz findings; tests/blackbody_edges.rs)
+H_SI, K_SI = H, KB
+
+
+def b_nu(nu, t):
+    nu, t = mpf(nu), mpf(t)
+    return 2 * H_SI * nu**3 / C**2 / expm1(H_SI * nu / (K_SI * t))
+
+
+def b_lambda(lam, t):
+    lam, t = mpf(lam), mpf(t)
+    return 2 * H_SI * C**2 / lam**5 / expm1(H_SI * C / (lam * K_SI * t))
+
+
+def t_nu(nu, radiance):
+    nu, radiance = mpf(nu), mpf(radiance)
+    return (H_SI * nu / K_SI) / mp.log1p(2 * H_SI * nu**3 / (C**2 * radiance))
+
+
+def t_lambda(lam, radiance):
+    lam, radiance = mpf(lam), mpf(radiance)
+    return (H_SI * C / (lam * K_SI)) / mp.log1p(2 * H_SI * C**2 / (lam**5 * radiance))
+
+
+def band_lambda(lo, t):
+    """Band radiance of [lo, inf) in W m^-2 sr^-1."""
+    lo, t = mpf(lo), mpf(t)
+    x = H_SI * C / (lo * K_SI * t)
+    k4 = 2 * K_SI**4 / (H_SI**3 * C**2)
+    # scaled: t = x s, the integral x^3 int_0^1 s^3 x/expm1(x s) ds (integrand near s^2 for tiny x)
+    inner = quad(lambda s: s**3 * x / expm1(x * s) if s > 0 else mpf(0), [0, 1])
+    return k4 * t**4 * x**3 * inner
+
+
+for nu, t in ((3.0681834431356214e-91, 0.01), (1.0388853614941867e-13, 1e300)):
+    show(f"B_nu({nu!r}, {t!r})", b_nu(nu, t))
+for lam, t in ((1.04e59, 0.01), (1e62, 1.0), (1e10, 1e300)):
+    show(f"B_lambda({lam!r}, {t!r})", b_lambda(lam, t))
+for lam, radiance in ((1.04e59, 7e-253), (1.0, 1.1e292)):
+    show(f"T_b(lambda={lam!r}, L={radiance!r})", t_lambda(lam, radiance))
+for nu, radiance in ((3.0681834431356214e-91, 2.9e-223), (1e-13, 3e234)):
+    show(f"T_b(nu={nu!r}, L={radiance!r})", t_nu(nu, radiance))
+for lo, t in ((1.09e99, 3.79e6), (1.09e99, 1e20), (1e100, 1e250)):
+    show(f"band [{lo!r}, inf) at {t!r}", band_lambda(lo, t))
+
+
+def band_lambda2(lo, up, t):
+    """Band radiance of [lo, up] in W m^-2 sr^-1 (x_b = x(lo) > x_a = x(up))."""
+    lo, up, t = mpf(lo), mpf(up), mpf(t)
+    xb = H_SI * C / (lo * K_SI * t)
+    xa = H_SI * C / (up * K_SI * t)
+    k4 = 2 * K_SI**4 / (H_SI**3 * C**2)
+    inner = quad(lambda s: s**3 * xb / expm1(xb * s), [xa / xb, 1])
+    return k4 * t**4 * xb**3 * inner
+
+
+# 7. a band whose K4 T^4 overflows (T above about 1.7e79 K) while its radiance is normal
+for lo, up, t in ((0.997473462943497, 1.7369343996094755e98, 1.7369343990923917e98), (1e-3, 1.0, 1e90)):
+    show(f"band [{lo!r}, {up!r}] at {t!r}", band_lambda2(lo, up, t))

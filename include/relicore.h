@@ -1824,7 +1824,9 @@ int32_t relicore_temperature_from_band_radiance_wavelength(double lower_m,
  *
  * Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
  * Accuracy: round trip with `spectral_radiance_wavelength`
- * within 1e-14 relative (`f64`) against mpmath.
+ * within 1e-14 relative (`f64`) against mpmath for a normal radiance, 2hc²/λ⁵ or its ratio
+ * to the radiance below the normal range included (`tests/blackbody_edges.rs`); for a
+ * radiance below the normal range within 5e-13.
  * Reference: Planck's law solved for T (closed form).
  *
  * Arguments of the C function:
@@ -1855,7 +1857,9 @@ int32_t relicore_brightness_temperature_wavelength(double wavelength_m,
  *
  * Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
  * Accuracy: round trip with `spectral_radiance_wavelength`
- * within 1e-14 relative (`f64`) against mpmath.
+ * within 1e-14 relative (`f64`) against mpmath for a normal radiance, 2hc²/λ⁵ or its ratio
+ * to the radiance below the normal range included (`tests/blackbody_edges.rs`); for a
+ * radiance below the normal range within 5e-13.
  * Reference: Planck's law solved for T (closed form).
  *
  * Arguments of the C function:
@@ -1909,8 +1913,10 @@ int32_t relicore_brightness_temperature_wavelength_array(double wavelength_m,
  * * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
  *
  * Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
- * Accuracy: round trip within 1e-14 relative (`f64`) against mpmath; where 2hν³/c² is below
- * the normal range (ν below about 1e-95 Hz in `f64`) within 5e-13 (`tests/blackbody_edges.rs`).
+ * Accuracy: round trip within 1e-14 relative (`f64`) against mpmath for a normal radiance,
+ * 2hν³/c² (ν below about 1e-86 Hz in `f64`) or its ratio to the radiance below the normal
+ * range included; for a radiance below the normal range within 5e-13
+ * (`tests/blackbody_edges.rs`).
  *
  * Arguments of the C function:
  * * `frequency_hz`: frequency in Hz, > 0.
@@ -1938,8 +1944,10 @@ int32_t relicore_brightness_temperature_frequency(double frequency_hz,
  * * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
  *
  * Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
- * Accuracy: round trip within 1e-14 relative (`f64`) against mpmath; where 2hν³/c² is below
- * the normal range (ν below about 1e-95 Hz in `f64`) within 5e-13 (`tests/blackbody_edges.rs`).
+ * Accuracy: round trip within 1e-14 relative (`f64`) against mpmath for a normal radiance,
+ * 2hν³/c² (ν below about 1e-86 Hz in `f64`) or its ratio to the radiance below the normal
+ * range included; for a radiance below the normal range within 5e-13
+ * (`tests/blackbody_edges.rs`).
  *
  * Arguments of the C function:
  * * `frequency_hz`: frequency in Hz, > 0.
@@ -4557,8 +4565,13 @@ int32_t relicore_universe_parameters_default(double h0_km_s_mpc,
  * `RELICORE_ERROR_NULL_POINTER` when `params` or `out` is NULL;
  * `RELICORE_ERROR_INVALID_PARAMETER` for a non-finite parameter, H0 ≤ 0, Ω_m < 0, Ω_b < 0 or
  * Ω_b > Ω_m, T0 < 0, N_eff < 0, a negative neutrino mass, a positive mass with T0 = 0,
- * massive neutrinos denser today than Ω_m, Y_p outside [0, 1) (which parameter:
- * `relicore_universe_check_parameters`); `RELICORE_ERROR_NO_BIG_BANG` when E(z)² ≤ 0
+ * massive neutrinos denser today than Ω_m, Y_p outside [0, 1), and for values that make a
+ * derived quantity or E(z) overflow: H0 so far from physical values that c/H0, 1/H0 or the
+ * critical density is not a positive finite number, T0 or N_eff so large that the radiation
+ * density overflows, w0 (with wa) when the dark-energy density overflows somewhere on the grid
+ * below (w0, or the early-time w0 + wa, above about 3.8 to 4.8 in double precision), Ω_m when
+ * E(z)² overflows otherwise (which parameter: `relicore_universe_check_parameters`);
+ * `RELICORE_ERROR_NO_BIG_BANG` when E(z)² ≤ 0
  * somewhere between today and a → 0 (checked on 4097 points of a logarithmic grid in a from
  * 1e-30 to 1 and on every node of the distance table); `RELICORE_ERROR_NO_CONVERGENCE` if a
  * quadrature of the table fails (seen only for parameters far outside physical ones, such as
@@ -6259,6 +6272,8 @@ int32_t relicore_drag_redshift_fit_array(const double *omega_baryon_h2,
  *
  * * `z`: redshift, finite, 0 ≤ z ≤ the highest redshift of the table.
  *
+ * Returns x_e, 0 < x_e ≤ 1 + 2f_He (f_He = n_He/n_H: hydrogen and helium fully ionised, the
+ * model's bound; the interpolant between nodes is held to it).
  * Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` above the table. Accuracy:
  * within 1e-5 relative from z = 1600 to 50 against scipy `solve_ivp` on the same
  * equations; cubic Hermite interpolation in ln(1+z) between nodes.

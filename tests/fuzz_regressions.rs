@@ -6,6 +6,7 @@
 
 use relicore::blackbody as bb;
 use relicore::cosmology::{Universe, UniverseParameters};
+use relicore::decoupling::{HistoryOptions, ThermalHistory};
 use relicore::{Error, arg};
 
 /// The inversions to temperature (band radiance, response-weighted radiance) solved on
@@ -358,4 +359,97 @@ fn comoving_distance_inversion_near_the_particle_horizon() {
     let below = f64::from_bits(horizon.to_bits() - 1);
     let z = u.redshift_at_comoving_distance_mpc(below).unwrap();
     assert!(rel(u.comoving_distance_mpc(z).unwrap(), below) <= 1e-12);
+}
+
+/// The largest x_e of `h` at redshifts uniform in ln(1+z) over [z0, z1] (n + 1 of them) and at
+/// `also`, over the model's bound 1 + 2f_He (f_He = n_He/n_H; here Y_p rounds f_He to 0, so the
+/// bound is 1).
+fn largest_ionized_fraction<T: relicore::Real>(
+    h: &ThermalHistory<T>,
+    z0: f64,
+    z1: f64,
+    n: u32,
+    also: T,
+) -> (f64, f64) {
+    let (u0, u1) = (z0.ln_1p(), z1.ln_1p());
+    let mut worst = (f64::NEG_INFINITY, 0.0);
+    let zs = (0..=n).map(|i| {
+        T::c(
+            (u0 + (u1 - u0) * f64::from(i) / f64::from(n))
+                .exp_m1()
+                .min(z1),
+        )
+    });
+    for z in zs.chain([also]) {
+        let x = h.ionized_fraction(z).unwrap().to_f64_exact();
+        if x > worst.0 {
+            worst = (x, z.to_f64_exact());
+        }
+    }
+    worst
+}
+
+/// x_e above its bound: the model's x_e never exceeds 1 + 2f_He (x_p ≤ 1: at x_p = 1 the Peebles
+/// rate is negative; helium adds at most 2f_He; module doc of `relicore::decoupling`), but the
+/// table's cubic interpolant overshot it between nodes where the node values bend sharply and
+/// carry the stepper's per-step error (RTOL relative to x_p ≈ 1, which resolves 1 − x_p only
+/// coarsely): x_e(1153.87) = 1 + 3.8e-7 with Y_p = 5e-324 (f_He = 0), Ω_m = 8.3e9, w0 = −1.5e112
+/// (found by the `thermal_history` target). The interpolated x_e is now held to the bound.
+#[test]
+fn thermal_history_ionized_fraction_stays_within_its_bound() {
+    let p = UniverseParameters {
+        h0_km_s_mpc: 20.708_935_634_892_136,
+        omega_matter: 8_321_499_136.0,
+        omega_baryon: 34_822_033.139_908_96,
+        omega_curvature: -0.992_858_045_784_277_7,
+        cmb_temperature_k: 10.0,
+        n_eff: 10.0,
+        neutrino_masses_ev: [1.0, 1.0, 0.000_103_619_652_180_437_24],
+        w0: -1.503_067_252_980_010_5e112,
+        wa: 1.865_135_440_219_27e-309,
+        helium_mass_fraction: 5e-324,
+    };
+    let u = Universe::new(p).unwrap();
+    let options = HistoryOptions {
+        reionization_redshift: Some(0.0),
+        ..HistoryOptions::default()
+    };
+    let h = Box::new(ThermalHistory::new(&u, options).unwrap());
+    let (x, z) = largest_ionized_fraction(&h, 1100.0, 1200.0, 4000, 1_153.870_396_649_114_6);
+    assert!(x <= 1.0, "x_e({z}) = 1 + {:e}", x - 1.0);
+    // and over the whole table
+    let (x, z) = largest_ionized_fraction(&h, 0.0, 1e4, 20_000, 1e4);
+    assert!(x <= 1.0, "x_e({z}) = 1 + {:e}", x - 1.0);
+}
+
+/// The same in `f32`, where the per-step tolerance (1.7e-4 relative to x_p ≈ 1) leaves 1 − x_p
+/// unresolved until hydrogen recombines: x_e(444.3) = 1.0021 with Y_p = 0, Ω_b = Ω_m = 3.16,
+/// Ω_k = −1, T0 = 10 K, N_eff = 10, w0 = 0.10, wa = −0.56 (found by the `thermal_history`
+/// target). Held to the bound 1 now (the `f32` history of such a model stays coarse, as its
+/// documentation says).
+#[test]
+fn f32_thermal_history_ionized_fraction_stays_within_its_bound() {
+    let p = UniverseParameters::<f32> {
+        h0_km_s_mpc: 190.408_87,
+        omega_matter: 3.162_277_7,
+        omega_baryon: 3.162_277_7,
+        omega_curvature: -1.0,
+        cmb_temperature_k: 10.0,
+        n_eff: 10.0,
+        neutrino_masses_ev: [1.0, 0.0001, 0.000_101_800_89],
+        w0: 0.101_352_99,
+        wa: -0.561_181_7,
+        helium_mass_fraction: 0.0,
+    };
+    let u = Universe::new(p).unwrap();
+    let options = HistoryOptions {
+        reionization_redshift: Some(0.0),
+        highest_redshift: 3_399.812_3,
+        ..HistoryOptions::default()
+    };
+    let h = Box::new(ThermalHistory::new(&u, options).unwrap());
+    let (x, z) = largest_ionized_fraction(&h, 400.0, 500.0, 4000, 444.335_17);
+    assert!(x <= 1.0, "x_e({z}) = 1 + {:e}", x - 1.0);
+    let (x, z) = largest_ionized_fraction(&h, 0.0, 3399.0, 20_000, 3_399.812_3);
+    assert!(x <= 1.0, "x_e({z}) = 1 + {:e}", x - 1.0);
 }

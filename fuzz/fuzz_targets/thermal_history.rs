@@ -88,16 +88,7 @@ fn run<T: Float>(input: &mut Input<'_>) {
     for i in 0..=n {
         let z = T::c((u_top * f64::from(i) / f64::from(n)).exp_m1()).min(options.highest_redshift);
         let x = ok("x_e", z, h.ionized_fraction(z));
-        let upper = if T::MANTISSA_DIGITS == 53 {
-            x_max * (1.0 + 8.0 * T::epsilon().to_f64_exact())
-        } else {
-            f64::INFINITY
-        };
-        // known finding, open (decoupling, for the lead; remove when fixed): in `f32` the
-        // ionised fraction overshoots its bound by up to 0.2 % near the end of recombination in
-        // some models that `f32` construction refused before the dark-energy term was made one
-        // exponential (found: x_e(444.3) = 1.0021 with Y_p = 0, Ω_b = Ω_m = 3.16, Ω_k = −1,
-        // T0 = 10 K, N_eff = 10, w0 = 0.10, wa = −0.56); `f64` stays within the bound there
+        let upper = x_max * (1.0 + 8.0 * T::epsilon().to_f64_exact());
         if let Some(x) = x {
             let x = x.to_f64_exact();
             assert!(

@@ -13,7 +13,10 @@
 //! of two nearly equal integrals would cancel, are integrated directly with the shared
 //! Gauss-Kronrod quadrature instead.
 
-use super::kernel::{K3, K4, PI4_OVER_15, TWO_ZETA3, invert_increasing, x_frequency, x_wavelength};
+use super::kernel::{
+    K3, K4, PI4_OVER_15, TWO_ZETA3, invert_increasing, scale_by_pow2, significand_exponent,
+    x_frequency, x_wavelength,
+};
 use crate::arg;
 use crate::check::{finite_result, non_negative, positive};
 use crate::math::quadrature::integrate;
@@ -192,6 +195,105 @@ fn edge_term<T: Real>(p: u32, x: T) -> T {
     super::kernel::planck_quotient(xp * x, x, T::zero())
 }
 
+/// Below this largest x of a band (2^-330), the band lies in the Rayleigh-Jeans limit and the
+/// band integral, about x³/3 (radiance) or x²/2 (photons), comes near or below the normal
+/// range: [`rayleigh_jeans_band`] takes over.
+const RAYLEIGH_JEANS_BAND: f64 = 4.571_949_565_129_1e-100;
+
+/// K T^(p+1) ∫ t^p/(eᵗ−1) dt over a band whose largest x = `x_big` (as the caller formed it)
+/// is below [`RAYLEIGH_JEANS_BAND`] or NaN (`None` elsewhere): there t/(eᵗ−1) = 1 − t/2 + … is 1 to
+/// within 2^-331, so the integral is (x_b^p − x_a^p)/p, Rayleigh-Jeans (2ckT/3 (λ₁⁻³ − λ₂⁻³)
+/// for the radiance per wavelength). Formed as K4 T⁴ ∫ it lost its bits, or was 0, where x³
+/// is near or below the smallest normal number while the radiance is normal (a fuzzing
+/// finding: 6 % off at [1.09e99 m, ∞], T = 3.8e6 K, and Ok(0) at T = 1e20 K, where the radiance
+/// is 2.1e-292). Here every factor is a normal significand times a power of two, exactly:
+/// T = f_T 2^m_T and each edge e = f 2^m, its x formed to double length from f and f_T as for
+/// normal arguments, both x scaled by the power of two of the largest, the difference of the
+/// edges to double length (x_b − x_a, then x_b^p − x_a^p = (x_b − x_a)(x_b² + x_a x_b + x_a²)
+/// or (x_b − x_a)(x_b + x_a): no cancellation), and the power of two applied once at the end.
+/// `big` and `small` are the band edges with the largest and smallest x (`small` may be 0 at a
+/// frequency or +∞ at a wavelength: x = 0 there); `frequency` chooses x = (h/k)ν/T over
+/// c₂/(λT); p = 3 (radiance, K4 T⁴) or 2 (photon radiance, K3 T³).
+fn rayleigh_jeans_band<T: Real>(
+    p: u32,
+    big: T,
+    small: T,
+    t: T,
+    x_big: T,
+    frequency: bool,
+) -> Option<T> {
+    // NaN: λT left the normal range in the caller's x = c₂/(λT) (checked below)
+    if !(x_big < T::c(RAYLEIGH_JEANS_BAND) || x_big.is_nan()) {
+        return None;
+    }
+    let (ft, mt) = significand_exponent(t)?;
+    // an edge as its x = (xh + xl)·2^e
+    let edge = |v: T| -> Option<((T, T), i32)> {
+        let (f, m) = significand_exponent(v)?;
+        if frequency {
+            Some((x_frequency(f, ft), m - mt))
+        } else {
+            Some((x_wavelength(f, ft), -(m + mt)))
+        }
+    };
+    let (b, eb) = edge(big)?;
+    // the largest x itself, from its exact power of two (the caller's x may be NaN where λT
+    // left the normal range, by overflow or underflow)
+    let (_, mb) = significand_exponent(b.0)?;
+    if mb + eb >= -330 {
+        return None;
+    }
+    let a = match edge(small) {
+        Some(((h, l), e)) if e - eb >= T::MIN_NORMAL_EXPONENT => {
+            let s = T::pow2i(e - eb);
+            (h * s, l * s)
+        }
+        // x = 0 (an open end), or x_a below 2^-1022 of x_b: x_a^p is nothing beside x_b^p
+        _ => (T::zero(), T::zero()),
+    };
+    let d = (b.0 - a.0) + (b.1 - a.1);
+    let (xb, xa) = (b.0 + b.1, a.0 + a.1);
+    let t2 = ft * ft;
+    let (integral, prefactor, e) = if p == 3 {
+        (
+            d * (xb * xb + xa * xb + xa * xa) / T::c(3.0),
+            T::c(K4) * (t2 * t2),
+            3 * eb + 4 * mt,
+        )
+    } else {
+        (
+            d * (xb + xa) / T::c(2.0),
+            T::c(K3) * (t2 * ft),
+            2 * eb + 3 * mt,
+        )
+    };
+    Some(scale_by_pow2(prefactor * integral, e))
+}
+
+/// k·Tⁿ·v for n = 3 or 4 where k·Tⁿ overflows (T above about 1.7e79 K for K4 T⁴, 1.7e98 K for
+/// K3 T³, in `f64`) while the product may be finite: k f_Tⁿ v · 2^(n m_T) with T = f_T 2^m_T,
+/// the power of two applied once at the end (a fuzzing finding: the band radiance of
+/// [1 m, 1.7e98 m] at T = 1.7e98 K, 4.8e83 W m⁻² sr⁻¹, was refused as out of domain below the
+/// Rayleigh-Jeans threshold and computed above it, so its inverse met an infinite radiance
+/// between and returned 1.2e77 K).
+fn overflowing_prefactor_times<T: Real>(k: f64, n: i32, t: T, v: T) -> T {
+    let Some((ft, mt)) = significand_exponent(t) else {
+        return T::nan();
+    };
+    let f2 = ft * ft;
+    let pk = if n == 4 {
+        T::c(k) * (f2 * f2)
+    } else {
+        T::c(k) * (f2 * ft)
+    };
+    let w = pk * v;
+    if w < T::zero() {
+        -scale_by_pow2(-w, n * mt)
+    } else {
+        scale_by_pow2(w, n * mt)
+    }
+}
+
 /// The edges of a wavelength band as the errors name them.
 pub(crate) const WAVELENGTH_BAND: [Arg; 2] = [arg!(0, lower_m), arg!(1, upper_m)];
 
@@ -265,8 +367,16 @@ pub fn band_radiance_wavelength<T: Real>(lower_m: T, upper_m: T, temperature_k: 
 
 fn band_radiance_wavelength_unchecked<T: Real>(lo: T, up: T, t: T) -> T {
     let (a, b) = x_edges_wavelength(lo, up, t);
+    if let Some(v) = rayleigh_jeans_band(3, lo, up, t, b.0, false) {
+        return v;
+    }
     let t2 = t * t;
-    (T::c(K4) * (t2 * t2)) * planck_band_integral(3, a, b)
+    let k4t4 = T::c(K4) * (t2 * t2);
+    let integral = planck_band_integral(3, a, b);
+    if !(k4t4 <= T::max_value()) {
+        return overflowing_prefactor_times(K4, 4, t, integral);
+    }
+    k4t4 * integral
 }
 
 /// Band photon radiance between two wavelengths, ∫_{λ₁}^{λ₂} N_λ(λ, T) dλ.
@@ -284,10 +394,18 @@ pub fn band_photon_radiance_wavelength<T: Real>(
     let (lo, up) = check_band(lower_m, upper_m, WAVELENGTH_BAND)?;
     let t = positive(temperature_k, arg!(2, temperature_k))?;
     let (a, b) = x_edges_wavelength(lo, up, t);
-    finite_result(
-        (T::c(K3) * (t * t * t)) * planck_band_integral(2, a, b),
-        arg!(2, temperature_k),
-    )
+    if let Some(v) = rayleigh_jeans_band(2, lo, up, t, b.0, false) {
+        return finite_result(v, arg!(2, temperature_k));
+    }
+    let k3t3 = T::c(K3) * (t * t * t);
+    let integral = planck_band_integral(2, a, b);
+    if !(k3t3 <= T::max_value()) {
+        return finite_result(
+            overflowing_prefactor_times(K3, 3, t, integral),
+            arg!(2, temperature_k),
+        );
+    }
+    finite_result(k3t3 * integral, arg!(2, temperature_k))
 }
 
 /// Band radiance between two frequencies, L = ∫_{ν₁}^{ν₂} B_ν(ν, T) dν.
@@ -310,11 +428,19 @@ pub fn band_radiance_frequency<T: Real>(lower_hz: T, upper_hz: T, temperature_k:
     } else {
         x_frequency(up, t)
     };
+    if let Some(v) = rayleigh_jeans_band(3, up, lo, t, b.0, true) {
+        return finite_result(v, arg!(2, temperature_k));
+    }
     let t2 = t * t;
-    finite_result(
-        (T::c(K4) * (t2 * t2)) * planck_band_integral(3, a, b),
-        arg!(2, temperature_k),
-    )
+    let k4t4 = T::c(K4) * (t2 * t2);
+    let integral = planck_band_integral(3, a, b);
+    if !(k4t4 <= T::max_value()) {
+        return finite_result(
+            overflowing_prefactor_times(K4, 4, t, integral),
+            arg!(2, temperature_k),
+        );
+    }
+    finite_result(k4t4 * integral, arg!(2, temperature_k))
 }
 
 /// Temperature of the blackbody whose band radiance between two wavelengths equals the given
@@ -363,10 +489,22 @@ pub(crate) fn band_radiance_and_derivative_wavelength_unchecked<T: Real>(
     t: T,
 ) -> (T, T) {
     let (a, b) = x_edges_wavelength(lo, up, t);
+    if let Some(v) = rayleigh_jeans_band(3, lo, up, t, b.0, false) {
+        // L ∝ T in the Rayleigh-Jeans limit
+        return (v, v / t);
+    }
     let t2 = t * t;
     let k4t4 = T::c(K4) * (t2 * t2);
-    let v = k4t4 * planck_band_integral(3, a, b);
+    let integral = planck_band_integral(3, a, b);
     let edge = edge_term(3, a.0) - edge_term(3, b.0);
+    if !(k4t4 <= T::max_value()) {
+        // dL/dT = K T³ (4I + edge)
+        return (
+            overflowing_prefactor_times(K4, 4, t, integral),
+            overflowing_prefactor_times(K4, 3, t, T::c(4.0) * integral + edge),
+        );
+    }
+    let v = k4t4 * integral;
     let dv = (T::c(4.0) * v + k4t4 * edge) / t;
     (v, dv)
 }

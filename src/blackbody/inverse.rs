@@ -7,7 +7,10 @@
 //! without the emissivity, calibration and procedure that the applicable standards, local codes
 //! and licensed practice require.
 
-use super::kernel::{ln1p_quotient, ln1p_quotient_fast, two_h_nu3_over_c2, x_wavelength};
+use super::kernel::{
+    brightness_temperature_small_quotient, ln1p_quotient, ln1p_quotient_fast, two_h_nu3_over_c2,
+    x_wavelength,
+};
 use crate::arg;
 use crate::check::{finite_result, positive};
 use crate::constants as k;
@@ -26,7 +29,9 @@ const RJ_CONST_LO: f64 = 1.920_485_280_622_186_2e-13;
 ///
 /// Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
 /// Accuracy: round trip with [`spectral_radiance_wavelength`](super::spectral_radiance_wavelength)
-/// within 1e-14 relative (`f64`) against mpmath.
+/// within 1e-14 relative (`f64`) against mpmath for a normal radiance, 2hc²/λ⁵ or its ratio
+/// to the radiance below the normal range included (`tests/blackbody_edges.rs`); for a
+/// radiance below the normal range within 5e-13.
 /// Reference: Planck's law solved for T (closed form).
 pub fn brightness_temperature_wavelength<T: Real>(
     wavelength_m: T,
@@ -51,8 +56,33 @@ pub(crate) fn brightness_temperature_wavelength_unchecked<T: Real>(l: T, b: T) -
 #[inline(always)]
 pub(crate) fn brightness_temperature_wavelength_parts<T: Real>(l: T, b: T) -> (T, T, T) {
     let (c2_over_l, a) = brightness_constants_wavelength(l);
-    let ln_a = || T::c(k::FIRST_RADIATION_RADIANCE).ln() - T::c(5.0) * l.ln();
-    (c2_over_l / ln1p_quotient(a, ln_a, b), c2_over_l, a)
+    let t = match ln1p_quotient_fast(a, b) {
+        (v, true) => c2_over_l / v,
+        _ => brightness_temperature_outside(l, b, a, c2_over_l, false, || {
+            T::c(k::FIRST_RADIATION_RADIANCE).ln() - T::c(5.0) * l.ln()
+        }),
+    };
+    (t, c2_over_l, a)
+}
+
+/// θ/ln(1 + a/L) outside the common case of [`ln1p_quotient`] (θ = c₂/λ or hν/k, a = 2hc²/λ⁵ or
+/// 2hν³/c²): where a/L < 1 and a or a/L is below the normal range, from exact powers of two
+/// ([`brightness_temperature_small_quotient`]); elsewhere θ/[`ln1p_quotient`].
+#[cold]
+#[inline(never)]
+fn brightness_temperature_outside<T: Real>(
+    x: T,
+    b: T,
+    a: T,
+    theta: T,
+    frequency: bool,
+    ln_a: impl Fn() -> T,
+) -> T {
+    let a_is_normal = a >= T::min_positive_value() && a <= T::max_value();
+    match brightness_temperature_small_quotient(x, b, a_is_normal, frequency) {
+        Some(t) => t,
+        None => theta / ln1p_quotient(a, ln_a, b),
+    }
 }
 
 /// The two constants of the brightness temperature at one wavelength: c₂/λ (rounded from
@@ -85,8 +115,10 @@ pub(crate) fn brightness_temperature_wavelength_fast<T: Real>(
 /// * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
 ///
 /// Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
-/// Accuracy: round trip within 1e-14 relative (`f64`) against mpmath; where 2hν³/c² is below
-/// the normal range (ν below about 1e-95 Hz in `f64`) within 5e-13 (`tests/blackbody_edges.rs`).
+/// Accuracy: round trip within 1e-14 relative (`f64`) against mpmath for a normal radiance,
+/// 2hν³/c² (ν below about 1e-86 Hz in `f64`) or its ratio to the radiance below the normal
+/// range included; for a radiance below the normal range within 5e-13
+/// (`tests/blackbody_edges.rs`).
 pub fn brightness_temperature_frequency<T: Real>(
     frequency_hz: T,
     spectral_radiance: T,
@@ -100,10 +132,12 @@ pub fn brightness_temperature_frequency<T: Real>(
     };
     let (hh, hl) = T::c2(k::PLANCK_OVER_BOLTZMANN, k::PLANCK_OVER_BOLTZMANN_LO);
     let (th, tl) = dd::mul_dd_d(hh, hl, nu);
-    finite_result(
-        (th + tl) / ln1p_quotient(a, ln_a, b),
-        arg!(1, spectral_radiance),
-    )
+    let theta = th + tl;
+    let t = match ln1p_quotient_fast(a, b) {
+        (v, true) => theta / v,
+        _ => brightness_temperature_outside(nu, b, a, theta, true, ln_a),
+    };
+    finite_result(t, arg!(1, spectral_radiance))
 }
 
 /// Rayleigh-Jeans temperature: T_RJ = c² L / (2kν²), the temperature the long-wavelength limit

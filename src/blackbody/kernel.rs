@@ -244,6 +244,58 @@ pub(crate) fn two_h_nu3_over_c2<T: Real>(nu: T) -> T {
     (a * a) * (nu * T::c(TWO_H_OVER_C2_SCALED))
 }
 
+/// 2hν³/c² for ν = f·2^m (f in [√½, √2)) as (r, e), 2hν³/c² = r·2^e with r a normal number:
+/// the operations of [`two_h_nu3_over_c2`] on f, so r·2^e is its value before any underflow.
+#[inline(always)]
+pub(crate) fn two_h_nu3_over_c2_parts<T: Real>(f: T, m: i32) -> (T, i32) {
+    ((f * f) * (f * T::c(TWO_H_OVER_C2_SCALED)), 3 * m - 110)
+}
+
+/// The Planck function per frequency, (2hν³/c²)/(eˣ − 1) with x = hν/kT = xh + xl as the
+/// caller formed it, where 2hν³/c² or x is below the normal range (ν below about 1e-86 Hz, or
+/// ν/T below about 5e-298 Hz/K, in `f64`): the number lost its bits to the underflow (2.3e-3
+/// relative at ν = 3.07e-91 Hz, T = 0.01 K, and 9e-3 at ν = 1.04e-13 Hz, T = 1e300 K, where
+/// B_ν is normal: fuzzing findings), so the quotient is formed from normal significands and
+/// scaled by the power of two afterwards, once. The prefactor is
+/// [`two_h_nu3_over_c2_parts`]; with x normal the operations are those of a normal
+/// prefactor, so is the accuracy; with x below the normal range eˣ − 1 = x to far better than
+/// the rounding unit (the next term is x/2 ≤ 2^-1023 of it), x = (h/k)(f_ν/f_T)·2^(m_ν − m_T)
+/// for ν = f_ν 2^m_ν and T = f_T 2^m_T, formed to double length as for normal arguments.
+#[cold]
+#[inline(never)]
+pub(crate) fn planck_frequency_scaled<T: Real>(nu: T, t: T, xh: T, xl: T) -> T {
+    let (Some((f, m)), Some((ft, mt))) = (significand_exponent(nu), significand_exponent(t)) else {
+        return planck_quotient(two_h_nu3_over_c2(nu), xh, xl);
+    };
+    let (r, e) = two_h_nu3_over_c2_parts(f, m);
+    if xh >= T::min_positive_value() {
+        return scale_by_pow2(planck_quotient(r, xh, xl), e);
+    }
+    let (qh, ql) = x_frequency_pair(f, ft);
+    scale_by_pow2(r / (qh + ql), e - (m - mt))
+}
+
+/// The Planck function per wavelength, (2hc²/λ⁵)/(eˣ − 1) with x = c₂/(λT) = xh + xl as the
+/// caller formed it, where λ⁵ overflows (λ above about 2.5e61 m in `f64`) or x is below the
+/// normal range (λT above about 6.5e305 m K): the quotient came out as 0, or with the bits x
+/// lost, where B_λ is a normal number. As [`planck_frequency_scaled`]: λ = f·2^m, the prefactor
+/// 2hc²/f⁵ (normal), the quotient, then the power of two 2^(−5m), once; with x below the
+/// normal range eˣ − 1 = x = (c₂/(f f_T))·2^(−m − m_T), T = f_T 2^m_T, to double length.
+#[cold]
+#[inline(never)]
+pub(crate) fn planck_wavelength_scaled<T: Real>(l: T, t: T, xh: T, xl: T) -> T {
+    let num = T::c(k::FIRST_RADIATION_RADIANCE);
+    let (Some((f, m)), Some((ft, mt))) = (significand_exponent(l), significand_exponent(t)) else {
+        return planck_ratio(num, pow5(l), xh, xl);
+    };
+    let p = num / pow5(f);
+    if xh >= T::min_positive_value() {
+        return scale_by_pow2(planck_quotient(p, xh, xl), -5 * m);
+    }
+    let (qh, ql) = x_wavelength_pair(f, ft);
+    scale_by_pow2(p / (qh + ql), mt - 4 * m)
+}
+
 /// Solves value(T) = target for T > 0 where value is increasing in T and `f` returns
 /// (value, d value/dT). Works on ln(value/target), so Newton's step is well scaled over the
 /// many decades a radiance spans; the bracket is grown by factors of 2 from `guess` and the root
@@ -312,6 +364,114 @@ fn ln1p_quotient_outside<T: Real>(a: T, ln_a: impl Fn() -> T, b: T) -> T {
         d + (-d).exp().ln_1p()
     } else {
         d.exp().ln_1p()
+    }
+}
+
+/// The brightness temperature θ/ln(1 + a/L) (θ = c₂/λ, a = 2hc²/λ⁵ at a wavelength;
+/// θ = hν/k, a = 2hν³/c² at a frequency `x`, L > 0 the radiance) where a/L < 1 and a or a/L
+/// lies below the normal range; `None` elsewhere, where the caller's forms hold (`a_is_normal`:
+/// whether the caller's rounded a is a normal number).
+///
+/// There a rounded to the type has lost bits (or is 0), and ln(1 + e^(ln a − ln L)), the form
+/// that needs no normal a, carries the absolute error of the logarithms, about |ln a|·ε,
+/// into a result of size a/L: 1.4e-13 relative at λ = 1.04e59 m, T = 0.01 K, and 3.6e-14 at
+/// λ = 1 m, T = 1.38e306 K, where a is normal and a/L = 1e-308 is not (fuzzing findings).
+/// Here every quantity is a normal significand times a power of two, exactly: x = f·2^m and
+/// L = g·2^n (a subnormal argument first scaled up exactly), a = r_a·2^e_a and θ = r_θ·2^e_θ
+/// with r_a, r_θ computed from f as the caller computes them from x (so with the same
+/// roundings), a/L = (r_a/g)·2^(e_a − n). A normal a/L is formed exactly from that and
+/// [`log::ln_1p`] taken of it; below the normal range ln(1 + a/L) = a/L to far better than
+/// the rounding unit (the next term, (a/L)²/2, is 1e-308 of it), and the power of two is kept
+/// apart. T = (r_θ/w)·2^(e_θ − e_w) with one rounding of the scaling at most (only for a
+/// subnormal T). About eight roundings in all: within 1e-15 relative of the exact inverse.
+#[cold]
+#[inline(never)]
+pub(crate) fn brightness_temperature_small_quotient<T: Real>(
+    x: T,
+    l: T,
+    a_is_normal: bool,
+    frequency: bool,
+) -> Option<T> {
+    let split = significand_exponent::<T>;
+    let (f, m) = split(x)?;
+    let (g, n) = split(l)?;
+    let (ra, ea, rt, et) = if frequency {
+        // a = (2h/c²)·2^110 f³ · 2^(3m − 110), θ = (h/k) f · 2^m
+        let (hh, hl) = T::c2(k::PLANCK_OVER_BOLTZMANN, k::PLANCK_OVER_BOLTZMANN_LO);
+        let (th, tl) = dd::mul_dd_d(hh, hl, f);
+        let (ra, ea) = two_h_nu3_over_c2_parts(f, m);
+        (ra, ea, th + tl, m)
+    } else {
+        // a = (2hc²/f⁵)·2^(−5m), θ = (c₂/f)·2^(−m)
+        let (ch, cl) = T::c2(k::SECOND_RADIATION, k::SECOND_RADIATION_LO);
+        let (qh, ql) = dd::div_dd_dd(ch, cl, f, T::zero());
+        (
+            T::c(k::FIRST_RADIATION_RADIANCE) / pow5(f),
+            -5 * m,
+            qh + ql,
+            -m,
+        )
+    };
+    // a/L = fq·2^e
+    let (fq, e) = split(ra / g)?;
+    let e = e + ea - n;
+    if e > 0 || (e == 0 && fq >= T::one()) {
+        return None;
+    }
+    let q_is_normal = e > T::MIN_NORMAL_EXPONENT || (e == T::MIN_NORMAL_EXPONENT && fq >= T::one());
+    if a_is_normal && q_is_normal {
+        return None;
+    }
+    // ln(1 + a/L) = w·2^ew
+    let (w, ew) = if q_is_normal {
+        (log::ln_1p(fq * T::pow2i(e)), 0)
+    } else {
+        (fq, e)
+    };
+    let (ft, mt) = split(rt / w)?;
+    Some(times_pow2(ft, mt + et - ew))
+}
+
+/// A positive finite v as (f, m), v = f·2^m exactly with f in [√½, √2) (subnormal v
+/// included); `None` for v ≤ 0, ∞ or NaN.
+pub(crate) fn significand_exponent<T: Real>(v: T) -> Option<(T, i32)> {
+    if !(v > T::zero() && v <= T::max_value()) {
+        return None;
+    }
+    let p = T::MANTISSA_DIGITS as i32;
+    let (v, shift) = if v < T::min_positive_value() {
+        (v * T::pow2i(p), -p)
+    } else {
+        (v, 0)
+    };
+    let (f, _, m) = v.split_sqrt2();
+    Some((f, m + shift))
+}
+
+/// v·2^e for a positive finite v, rounded once (only where the result is subnormal); v itself
+/// where v is not positive and finite.
+pub(crate) fn scale_by_pow2<T: Real>(v: T, e: i32) -> T {
+    match significand_exponent(v) {
+        Some((f, m)) => times_pow2(f, m.saturating_add(e)),
+        None => v,
+    }
+}
+
+/// f·2^e for f in [√½, √2), rounded once (only where the result is subnormal), +∞ beyond the
+/// largest number, 0 far below the smallest.
+fn times_pow2<T: Real>(f: T, e: i32) -> T {
+    let (lo, hi) = (T::MIN_NORMAL_EXPONENT, T::MAX_EXPONENT);
+    if e > hi + 1 {
+        T::infinity()
+    } else if e == hi + 1 {
+        (f * T::c(2.0)) * T::pow2i(hi)
+    } else if e >= lo {
+        f * T::pow2i(e)
+    } else if e >= 2 * lo {
+        // exact into the normal range, then the one rounding into the subnormal range
+        (f * T::pow2i(lo)) * T::pow2i(e - lo)
+    } else {
+        T::zero()
     }
 }
 

@@ -12,10 +12,11 @@
 //! returned as the correctly scaled subnormal or 0, never as garbage.
 
 use super::kernel::{
-    TWO_C, TWO_OVER_C2, inverse_temperature, one_minus_exp_neg, planck_quotient,
-    planck_quotient_fast, planck_ratio, planck_ratio_fast, pow5, two_h_nu3_over_c2, x_frequency,
-    x_frequency_pair, x_frequency_pair_with_inverse, x_wavelength, x_wavelength_pair,
-    x_wavenumber_pair, x_wavenumber_pair_with_inverse,
+    TWO_C, TWO_OVER_C2, inverse_temperature, one_minus_exp_neg, planck_frequency_scaled,
+    planck_quotient, planck_quotient_fast, planck_ratio, planck_ratio_fast,
+    planck_wavelength_scaled, pow5, two_h_nu3_over_c2, x_frequency, x_frequency_pair,
+    x_frequency_pair_with_inverse, x_wavelength, x_wavelength_pair, x_wavenumber_pair,
+    x_wavenumber_pair_with_inverse,
 };
 use crate::arg;
 use crate::array::blockwise;
@@ -47,7 +48,11 @@ pub fn spectral_radiance_wavelength<T: Real>(wavelength_m: T, temperature_k: T) 
 #[inline(always)]
 pub(crate) fn spectral_radiance_wavelength_unchecked<T: Real>(l: T, t: T) -> T {
     let (xh, xl) = x_wavelength_pair(l, t);
-    planck_ratio(T::c(k::FIRST_RADIATION_RADIANCE), pow5(l), xh, xl)
+    let l5 = pow5(l);
+    if l5 > T::max_value() || xh < T::min_positive_value() {
+        return planck_wavelength_scaled(l, t, xh, xl);
+    }
+    planck_ratio(T::c(k::FIRST_RADIATION_RADIANCE), l5, xh, xl)
 }
 
 /// [`spectral_radiance_wavelength`] over many wavelengths at one temperature:
@@ -80,7 +85,9 @@ pub fn spectral_radiance_wavelength_array<T: Real>(
         |t| {
             Some(move |l| {
                 let (xh, xl) = x_wavelength_pair(l, t);
-                planck_ratio_fast(num, pow5(l), xh, xl)
+                let (b, inside) = planck_ratio_fast(num, pow5(l), xh, xl);
+                // an x below the normal range takes the scalar path
+                (b, inside & (xh >= T::min_positive_value()))
             })
         },
         spectral_radiance_wavelength,
@@ -150,7 +157,11 @@ pub fn spectral_radiance_frequency<T: Real>(frequency_hz: T, temperature_k: T) -
 #[inline(always)]
 pub(crate) fn spectral_radiance_frequency_unchecked<T: Real>(nu: T, t: T) -> T {
     let (xh, xl) = x_frequency_pair(nu, t);
-    planck_quotient(two_h_nu3_over_c2(nu), xh, xl)
+    let p = two_h_nu3_over_c2(nu);
+    if p < T::min_positive_value() || xh < T::min_positive_value() {
+        return planck_frequency_scaled(nu, t, xh, xl);
+    }
+    planck_quotient(p, xh, xl)
 }
 
 /// Planck spectral radiance per unit wavenumber, B_ṽ = 2hc²ṽ³ / (e^(hcṽ/kT) − 1).
@@ -199,7 +210,11 @@ pub fn spectral_radiance_frequency_array<T: Real>(
             inverse_temperature(t).map(|inv| {
                 move |nu| {
                     let (xh, xl) = x_frequency_pair_with_inverse(nu, t, inv);
-                    planck_quotient_fast(two_h_nu3_over_c2(nu), xh, xl)
+                    let p = two_h_nu3_over_c2(nu);
+                    let (b, inside) = planck_quotient_fast(p, xh, xl);
+                    // a prefactor or an x below the normal range takes the scalar path
+                    let tiny = T::min_positive_value();
+                    (b, inside & (p >= tiny) & (xh >= tiny))
                 }
             })
         },

@@ -1415,7 +1415,9 @@ pub unsafe extern "C" fn relicore_temperature_from_band_radiance_wavelength(
 ///
 /// Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
 /// Accuracy: round trip with `spectral_radiance_wavelength`
-/// within 1e-14 relative (`f64`) against mpmath.
+/// within 1e-14 relative (`f64`) against mpmath for a normal radiance, 2hc²/λ⁵ or its ratio
+/// to the radiance below the normal range included (`tests/blackbody_edges.rs`); for a
+/// radiance below the normal range within 5e-13.
 /// Reference: Planck's law solved for T (closed form).
 ///
 /// Arguments of the C function:
@@ -1454,7 +1456,9 @@ pub unsafe extern "C" fn relicore_brightness_temperature_wavelength(
 ///
 /// Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
 /// Accuracy: round trip with `spectral_radiance_wavelength`
-/// within 1e-14 relative (`f64`) against mpmath.
+/// within 1e-14 relative (`f64`) against mpmath for a normal radiance, 2hc²/λ⁵ or its ratio
+/// to the radiance below the normal range included (`tests/blackbody_edges.rs`); for a
+/// radiance below the normal range within 5e-13.
 /// Reference: Planck's law solved for T (closed form).
 ///
 /// Arguments of the C function:
@@ -1524,8 +1528,10 @@ pub unsafe extern "C" fn relicore_brightness_temperature_wavelength_array(
 /// * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
 ///
 /// Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
-/// Accuracy: round trip within 1e-14 relative (`f64`) against mpmath; where 2hν³/c² is below
-/// the normal range (ν below about 1e-95 Hz in `f64`) within 5e-13 (`tests/blackbody_edges.rs`).
+/// Accuracy: round trip within 1e-14 relative (`f64`) against mpmath for a normal radiance,
+/// 2hν³/c² (ν below about 1e-86 Hz in `f64`) or its ratio to the radiance below the normal
+/// range included; for a radiance below the normal range within 5e-13
+/// (`tests/blackbody_edges.rs`).
 ///
 /// Arguments of the C function:
 /// * `frequency_hz`: frequency in Hz, > 0.
@@ -1561,8 +1567,10 @@ pub unsafe extern "C" fn relicore_brightness_temperature_frequency(
 /// * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
 ///
 /// Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
-/// Accuracy: round trip within 1e-14 relative (`f64`) against mpmath; where 2hν³/c² is below
-/// the normal range (ν below about 1e-95 Hz in `f64`) within 5e-13 (`tests/blackbody_edges.rs`).
+/// Accuracy: round trip within 1e-14 relative (`f64`) against mpmath for a normal radiance,
+/// 2hν³/c² (ν below about 1e-86 Hz in `f64`) or its ratio to the radiance below the normal
+/// range included; for a radiance below the normal range within 5e-13
+/// (`tests/blackbody_edges.rs`).
 ///
 /// Arguments of the C function:
 /// * `frequency_hz`: frequency in Hz, > 0.

@@ -319,7 +319,9 @@ def brightness_temperature_wavelength(wavelength_m: Any, spectral_radiance: Any,
 
     Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
     Accuracy: round trip with `spectral_radiance_wavelength`
-    within 1e-14 relative (`f64`) against mpmath.
+    within 1e-14 relative (`f64`) against mpmath for a normal radiance, 2hc²/λ⁵ or its ratio
+    to the radiance below the normal range included (`tests/blackbody_edges.rs`); for a
+    radiance below the normal range within 5e-13.
     Reference: Planck's law solved for T (closed form).
     """
     return _F["brightness_temperature_wavelength"].apply(None, (wavelength_m, spectral_radiance, ), nan_on_error, out)
@@ -332,8 +334,10 @@ def brightness_temperature_frequency(frequency_hz: Any, spectral_radiance: Any, 
     * `spectral_radiance`: L in W m⁻² sr⁻¹ Hz⁻¹, finite and > 0.
 
     Returns K. Errors: `NonFinite(i)`, `NonPositive(i)`.
-    Accuracy: round trip within 1e-14 relative (`f64`) against mpmath; where 2hν³/c² is below
-    the normal range (ν below about 1e-95 Hz in `f64`) within 5e-13 (`tests/blackbody_edges.rs`).
+    Accuracy: round trip within 1e-14 relative (`f64`) against mpmath for a normal radiance,
+    2hν³/c² (ν below about 1e-86 Hz in `f64`) or its ratio to the radiance below the normal
+    range included; for a radiance below the normal range within 5e-13
+    (`tests/blackbody_edges.rs`).
     """
     return _F["brightness_temperature_frequency"].apply(None, (frequency_hz, spectral_radiance, ), nan_on_error, out)
 

@@ -80,6 +80,8 @@ class ThermalHistoryFunctions:
 
         * `z`: redshift, finite, 0 ≤ z ≤ the highest redshift of the table.
 
+        Returns x_e, 0 < x_e ≤ 1 + 2f_He (f_He = n_He/n_H: hydrogen and helium fully ionised, the
+        model's bound; the interpolant between nodes is held to it).
         Errors: `NonFinite(0)`, `Negative(0)`, `OutOfDomain(0)` above the table. Accuracy:
         within 1e-5 relative from z = 1600 to 50 against scipy `solve_ivp` on the same
         equations; cubic Hermite interpolation in ln(1+z) between nodes.
