@@ -4,8 +4,11 @@
 //! relicore itself (24 perturbed universes, built once outside the timed loop, and 24 value
 //! arrays). Before timing, the finite differences' error against the dual gradient is printed
 //! (the dual gradient is checked against mpmath to 1e-12 in `tests/dual_cosmology.rs`).
+//! Also one call of each blackbody gradient (dual numbers with 2 or 3 partials) beside its plain
+//! function, and the seeding of a universe's parameters.
 
 use criterion::{Criterion, criterion_group, criterion_main};
+use relicore::blackbody as bb;
 use relicore::cosmology::{GRADIENT_LEN, GradientUniverse, Universe, UniverseParameters};
 use std::hint::black_box;
 
@@ -136,6 +139,49 @@ fn bench(c: &mut Criterion) {
         })
     });
     grp.finish();
+    let mut bg = c.benchmark_group("gradient_blackbody");
+    bg.bench_function("spectral_radiance_wavelength", |b| {
+        b.iter(|| bb::spectral_radiance_wavelength(black_box(10e-6), black_box(300.0)))
+    });
+    bg.bench_function("spectral_radiance_wavelength_gradient", |b| {
+        b.iter(|| bb::spectral_radiance_wavelength_gradient(black_box(10e-6), black_box(300.0)))
+    });
+    bg.bench_function("spectral_radiance_frequency_gradient", |b| {
+        b.iter(|| bb::spectral_radiance_frequency_gradient(black_box(3e13), black_box(300.0)))
+    });
+    bg.bench_function("brightness_temperature_wavelength_gradient", |b| {
+        b.iter(|| {
+            bb::brightness_temperature_wavelength_gradient(black_box(10e-6), black_box(9.9e6))
+        })
+    });
+    bg.bench_function("brightness_temperature_frequency_gradient", |b| {
+        b.iter(|| bb::brightness_temperature_frequency_gradient(black_box(3e13), black_box(3e-12)))
+    });
+    bg.bench_function("band_radiance_wavelength_gradient", |b| {
+        b.iter(|| {
+            bb::band_radiance_wavelength_gradient(
+                black_box(8e-6),
+                black_box(14e-6),
+                black_box(300.0),
+            )
+        })
+    });
+    bg.bench_function("band_radiance_frequency_gradient", |b| {
+        b.iter(|| {
+            bb::band_radiance_frequency_gradient(black_box(2e13), black_box(4e13), black_box(300.0))
+        })
+    });
+    bg.bench_function("temperature_from_band_radiance_wavelength_gradient", |b| {
+        b.iter(|| {
+            bb::temperature_from_band_radiance_wavelength_gradient(
+                black_box(8e-6),
+                black_box(14e-6),
+                black_box(50.0),
+            )
+        })
+    });
+    bg.bench_function("seeded", |b| b.iter(|| black_box(p).seeded()));
+    bg.finish();
 }
 
 criterion_group!(benches, bench);

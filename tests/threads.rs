@@ -644,6 +644,67 @@ fn thermometry_frames_from_many_threads_equal_serial() {
     compare_threads("thermometry frames", &thermometry_frame_calls());
 }
 
+/// A value with its partials as one comparable outcome (a digest of every bit).
+fn gradient_outcome<const N: usize>(r: Result<(f64, [f64; N])>) -> Outcome {
+    match r {
+        Err(e) => Outcome::Failed(e),
+        Ok((v, d)) => Outcome::Value(
+            d.iter()
+                .fold(v.to_bits(), |h, x| h.rotate_left(7) ^ x.to_bits()),
+        ),
+    }
+}
+
+/// The gradient functions (dual numbers) and the seeding of a universe's parameters from many
+/// threads: every outcome equals the serial one bit for bit.
+#[test]
+fn gradients_from_many_threads_equal_serial() {
+    let mut calls: Vec<Box<dyn Fn() -> Outcome + Send + Sync>> = Vec::new();
+    for &x in &ARGS {
+        for &y in &ARGS {
+            calls.push(Box::new(move || {
+                gradient_outcome(bb::spectral_radiance_wavelength_gradient(x, y))
+            }));
+            calls.push(Box::new(move || {
+                gradient_outcome(bb::spectral_radiance_frequency_gradient(x, y))
+            }));
+            calls.push(Box::new(move || {
+                gradient_outcome(bb::brightness_temperature_wavelength_gradient(x, y))
+            }));
+            calls.push(Box::new(move || {
+                gradient_outcome(bb::brightness_temperature_frequency_gradient(x, y))
+            }));
+            calls.push(Box::new(move || {
+                gradient_outcome(bb::band_radiance_wavelength_gradient(x, x * 2.0, y))
+            }));
+            calls.push(Box::new(move || {
+                gradient_outcome(bb::band_radiance_frequency_gradient(x, x * 2.0, y))
+            }));
+            calls.push(Box::new(move || {
+                gradient_outcome(bb::temperature_from_band_radiance_wavelength_gradient(
+                    x,
+                    x * 2.0,
+                    y,
+                ))
+            }));
+        }
+    }
+    for &h0 in &[40.0, 67.4, 100.0] {
+        calls.push(Box::new(move || {
+            let s = UniverseParameters::<f64>::new(h0, 0.3).seeded();
+            Outcome::Value(
+                s.h0_km_s_mpc
+                    .partials()
+                    .iter()
+                    .fold(s.h0_km_s_mpc.value().to_bits(), |h, x| {
+                        h.rotate_left(7) ^ x.to_bits()
+                    }),
+            )
+        }));
+    }
+    compare_threads("gradients", &calls);
+}
+
 /// The array forms of the growth topic from several threads sharing one growth and one
 /// spectrum: every thread's output equals the serial output bit for bit (the scalar functions
 /// are reached from threads by tests/gen_regular.rs).

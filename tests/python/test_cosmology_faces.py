@@ -33,6 +33,11 @@ def core_methods() -> dict[str, list[str]]:
     (the BAO distances of the growth topic live in src/cosmology/bao.rs)."""
     out = {}
     for path in sorted((ROOT / "src" / "cosmology").glob("*.rs")):
+        # gradient.rs: the exact derivatives' first stage, Rust only until their gradient forms
+        # exist in the faces (tests/coverage_guard.py holds them to vectors, benches, property
+        # and threads tests)
+        if path.name == "gradient.rs":
+            continue
         for m in re.finditer(r"^\s*pub fn (\w+)\s*\(\s*&self\s*,?([^)]*)\)", path.read_text(), flags=re.M):
             # the array forms (`<name>_array`) are the array path of `<name>` in Python
             # (tests/python/test_hypothesis_arrays.py), not methods of their own

@@ -32,6 +32,11 @@ def core_functions() -> dict[str, list[str]]:
     """name -> parameter names of every `pub fn` in src/blackbody/."""
     out = {}
     for path in sorted((ROOT / "src" / "blackbody").glob("*.rs")):
+        # gradient.rs: the exact derivatives' first stage, Rust only until their gradient forms
+        # exist in the faces (tests/coverage_guard.py holds them to vectors, benches, property
+        # and threads tests)
+        if path.name == "gradient.rs":
+            continue
         text = path.read_text()
         for m in re.finditer(r"^pub fn (\w+)\s*(?:<[^>]*>)?\s*\(([^)]*)\)", text, flags=re.M):
             params = re.findall(r"(\w+)\s*:", m.group(2))
