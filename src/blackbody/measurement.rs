@@ -1034,28 +1034,7 @@ fn check_lengths<T: Real>(
     outs: &mut [&mut [T]],
     out_args: &[Arg],
 ) -> ArrayResult {
-    let mut bad = None;
-    for &(s, arg) in params {
-        if s.len() != 1 && s.len() != n {
-            bad = Some(ElementError {
-                index: n.min(s.len()),
-                error: Error::LengthMismatch(arg),
-            });
-            break;
-        }
-    }
-    if bad.is_none() {
-        for (o, &arg) in outs.iter().zip(out_args) {
-            if o.len() != n {
-                bad = Some(ElementError {
-                    index: n.min(o.len()),
-                    error: Error::LengthMismatch(arg),
-                });
-                break;
-            }
-        }
-    }
-    match bad {
+    match check_params(n, params).or_else(|| check_outs(n, outs, out_args)) {
         None => Ok(()),
         Some(e) => {
             for o in outs.iter_mut() {
@@ -1064,6 +1043,29 @@ fn check_lengths<T: Real>(
             Err(e)
         }
     }
+}
+
+/// The parameter slices' lengths: `Some` error naming the first that holds neither 1 nor `n`
+/// values.
+fn check_params<T>(n: usize, params: &[(&[T], Arg)]) -> Option<ElementError> {
+    params
+        .iter()
+        .find(|(s, _)| s.len() != 1 && s.len() != n)
+        .map(|&(s, arg)| ElementError {
+            index: n.min(s.len()),
+            error: Error::LengthMismatch(arg),
+        })
+}
+
+/// The output slices' lengths: `Some` error naming (from `args`) the first not of length `n`.
+fn check_outs<T>(n: usize, outs: &[&mut [T]], args: &[Arg]) -> Option<ElementError> {
+    outs.iter()
+        .zip(args)
+        .find(|(o, _)| o.len() != n)
+        .map(|(o, &arg)| ElementError {
+            index: n.min(o.len()),
+            error: Error::LengthMismatch(arg),
+        })
 }
 
 /// The scene of element i, reused from the previous element when its four parameters are the
@@ -1151,15 +1153,7 @@ trait FrameSink<T, const O: usize> {
 
 impl<T: Real, const O: usize> FrameSink<T, O> for [&mut [T]; O] {
     fn check(&mut self, n: usize, a: &SceneArgs) -> ArrayResult {
-        let bad = self
-            .iter()
-            .zip(a.outs_with_uncertainty)
-            .find(|(o, _)| o.len() != n)
-            .map(|(o, arg)| ElementError {
-                index: n.min(o.len()),
-                error: Error::LengthMismatch(arg),
-            });
-        match bad {
+        match check_outs(n, self, &a.outs_with_uncertainty) {
             None => Ok(()),
             Some(e) => {
                 self.fail_all();
@@ -1416,18 +1410,6 @@ fn object_array<T: Real, Q: Quantity<T>>(
         }
     }
     first.map_or(Ok(()), Err)
-}
-
-/// The parameter slices' lengths: `Some` error naming the first that holds neither 1 nor `n`
-/// values.
-fn check_params<T>(n: usize, params: &[(&[T], Arg)]) -> Option<ElementError> {
-    params
-        .iter()
-        .find(|(s, _)| s.len() != 1 && s.len() != n)
-        .map(|&(s, arg)| ElementError {
-            index: n.min(s.len()),
-            error: Error::LengthMismatch(arg),
-        })
 }
 
 /// The frame loop of the `_with_uncertainty` forms: `shape(T, u_c or its square, c)` gives
